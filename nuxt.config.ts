@@ -1,0 +1,17 @@
+// Nuxt configuration: the app sits at the repository root (no app/ folder).
+export default defineNuxtConfig({
+  compatibilityDate: '2026-11-01',
+  srcDir: '.',
+  dir: { app: '.' },
+  modules: ['@pinia/nuxt', '@nuxtjs/tailwindcss', '@vueuse/nuxt', 'nuxt-auth-utils'],
+  css: ['@fontsource/source-serif-4/400.css', '@fontsource/source-serif-4/600.css', 'katex/dist/katex.min.css', '~/assets/main.css'],
+  devtools: { enabled: false },
+  telemetry: false,
+  nitro: {
+    moduleSideEffects: ['nerdamer/'],
+  },
+  vite: {
+    optimizeDeps: { include: ['katex', 'vuedraggable', 'nerdamer'] },
+  },
+  typescript: { strict: true },
+})
