@@ -1,0 +1,16 @@
+import type { Knex } from 'knex'
+import * as m001 from './20261202_001_accounts_groups'
+import * as m002 from './20261202_002_theories_bases'
+
+// A static list: knex's folder loader cannot read .ts inside vitest or the Nitro bundle.
+// Append new migrations here, named YYYYMMDD_NNN_what.ts, never rename an applied one.
+const migrations: Record<string, Knex.Migration> = {
+  '20261202_001_accounts_groups': m001,
+  '20261202_002_theories_bases': m002,
+}
+
+export const migrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(migrations),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => migrations[name]!,
+}

@@ -1,0 +1,13 @@
+import { defineApiHandler, fail } from '../../utils/http/apiHandler'
+import { readJson } from '../../utils/http/readJson'
+import { SignInSchema } from '../../../shared/schemas/account'
+import { findUserByEmail, publicUser } from '../../utils/db/users'
+
+export default defineApiHandler(async (event) => {
+  const body = await readJson(event, SignInSchema)
+  const user = await findUserByEmail(body.email)
+  // Same message for unknown e-mail and wrong password: no account discovery.
+  if (!user || !(await verifyPassword(user.password_hash, body.password))) fail(401, 'E-mail or password is wrong')
+  await setUserSession(event, { user: publicUser(user) })
+  return { user: publicUser(user) }
+})

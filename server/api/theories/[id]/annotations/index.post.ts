@@ -1,0 +1,23 @@
+import { defineApiHandler, fail, created } from '../../../../utils/http/apiHandler'
+import { readJson, intParam } from '../../../../utils/http/readJson'
+import { requireGroupRole } from '../../../../utils/auth/currentUser'
+import { theoryOr404 } from '../../../../utils/db/theories'
+import { useDb } from '../../../../utils/db/connection'
+import { AnnotationCreateSchema } from '../../../../../shared/schemas/theoryRequests'
+
+// Commenters and above leave notes on a theory or on one of its operators.
+export default defineApiHandler(async (event) => {
+  const theory = await theoryOr404(intParam(event, 'id'))
+  const { user } = await requireGroupRole(event, theory.group_id, 'commenter')
+  const body = await readJson(event, AnnotationCreateSchema)
+  if (body.operatorId) {
+    const op = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id')
+      .where({ 'o.id': body.operatorId, 'b.theory_id': theory.id }).first('o.id')
+    if (!op) fail(404, `operatorId: no operator ${body.operatorId} in this theory`)
+  }
+  const [row] = await useDb()('annotations')
+    .insert({ theory_id: theory.id, operator_id: body.operatorId ?? null, author_id: user.id, body: body.body })
+    .returning(['id', 'body', 'operator_id as operatorId', 'created_at as createdAt'])
+  created(event)
+  return { annotation: { ...row, authorId: user.id, authorName: user.displayName } }
+})

@@ -1,0 +1,16 @@
+import { seedDemo } from '../../seeds/demo'
+import { useDb } from '../utils/db/connection'
+import { demoState } from '../utils/demoState'
+
+// With SCALEWRIGHT_DEMO=1 (set by `npm start`), an empty database receives the demo group.
+// Seeding runs here because passwords are hashed with nuxt-auth-utils' own scrypt helper.
+export default defineNitroPlugin(() => {
+  if (process.env.SCALEWRIGHT_DEMO !== '1') return
+  demoState.status = 'seeding'
+  seedDemo(useDb(), (password) => hashPassword(password))
+    .then(() => { demoState.status = 'ready' })
+    .catch((error) => {
+      demoState.status = 'failed'
+      console.error('[demo] seeding failed', error)
+    })
+})

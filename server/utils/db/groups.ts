@@ -1,0 +1,45 @@
+import type { Knex } from 'knex'
+import { useDb } from './connection'
+import { fail } from '../http/apiHandler'
+import type { GroupRole } from '../../../shared/types/roles'
+
+export interface GroupRow { id: number, slug: string, name: string, description: string, created_at: Date }
+
+export async function groupBySlugOr404(slug: string): Promise<GroupRow> {
+  const row = await useDb()('groups').where({ slug: String(slug).toLowerCase() }).first()
+  if (!row) fail(404, `No group with short name "${slug}"`)
+  return row
+}
+
+export function groupsOfUser(userId: number) {
+  return useDb()('groups as g')
+    .join('memberships as m', 'm.group_id', 'g.id')
+    .where('m.user_id', userId)
+    .orderBy('g.name')
+    .select('g.id', 'g.slug', 'g.name', 'g.description', 'm.role')
+}
+
+export async function createGroupWithOwner(input: { slug: string, name: string, description?: string }, ownerId: number): Promise<GroupRow> {
+  return useDb().transaction(async (trx) => {
+    const clash = await trx('groups').where({ slug: input.slug }).first('id')
+    if (clash) fail(409, `The short name "${input.slug}" is taken`)
+    const [group] = await trx('groups').insert({ slug: input.slug, name: input.name, description: input.description ?? '' }).returning('*')
+    await trx('memberships').insert({ group_id: group.id, user_id: ownerId, role: 'owner' })
+    return group
+  })
+}
+
+export function membersOf(groupId: number) {
+  return useDb()('memberships as m')
+    .join('users as u', 'u.id', 'm.user_id')
+    .where('m.group_id', groupId)
+    .orderBy('u.display_name')
+    .select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
+}
+
+/** Refuse a change that would leave the group without an owner. */
+export async function assertOwnerRemains(trx: Knex.Transaction, groupId: number, userId: number, newRole: GroupRole | null) {
+  if (newRole === 'owner') return
+  const owners = await trx('memberships').where({ group_id: groupId, role: 'owner' }).forUpdate().select('user_id')
+  if (owners.length === 1 && owners[0].user_id === userId) fail(409, 'A group needs at least one owner; make someone else owner first')
+}

@@ -1,0 +1,27 @@
+import { z } from 'zod'
+
+// Account forms, validated identically in the browser and on the server.
+export const EmailSchema = z.string({ error: 'email: required' }).trim().toLowerCase()
+  .max(254, { error: 'E-mail address is too long (254 characters at most)' })
+  .pipe(z.email({ error: 'Enter a valid e-mail address' }))
+export const PasswordSchema = z.string({ error: 'Password is required' })
+  .min(10, { error: 'Password must have at least 10 characters' })
+  .max(200, { error: 'Password must have at most 200 characters' })
+
+export const SignUpSchema = z.object({
+  email: EmailSchema,
+  password: PasswordSchema,
+  displayName: z.string({ error: 'Name is required' }).trim().min(1, { error: 'Name is required' }).max(80, { error: 'Name must have at most 80 characters' }),
+  invitation: z.string().max(100).optional(),
+}).strict()
+
+export const SignInSchema = z.object({
+  email: EmailSchema,
+  password: z.string({ error: 'Password is required' }).min(1, { error: 'Password is required' }).max(200),
+}).strict()
+
+export const ResetRequestSchema = z.object({ email: EmailSchema }).strict()
+export const ResetSchema = z.object({
+  token: z.string({ error: 'Reset token is required' }).min(20, { error: 'Reset token is malformed' }).max(100),
+  password: PasswordSchema,
+}).strict()

@@ -1,0 +1,25 @@
+import knexFactory, { type Knex } from 'knex'
+import { inject } from 'vitest'
+
+let db: Knex | undefined
+export function testDb(): Knex {
+  db ??= knexFactory({ client: 'pg', connection: inject('databaseUrl'), pool: { min: 0, max: 4 } })
+  return db
+}
+
+export const ALL_TABLES = ['users', 'password_resets', 'groups', 'memberships', 'invitations', 'outbox', 'theories', 'runs', 'bases', 'operators', 'annotations', 'annotation_revisions', 'tags', 'share_links']
+
+/** Row counts of every table, to prove that a rejected request wrote nothing. */
+export async function rowCounts(): Promise<Record<string, number>> {
+  const out: Record<string, number> = {}
+  for (const t of ALL_TABLES) {
+    const [row] = await testDb()(t).count<{ count: string }[]>('* as count')
+    out[t] = Number(row!.count)
+  }
+  return out
+}
+
+/** Make a signed-up account a site admin (there is no route that lets a member do this). */
+export async function makeAdmin(userId: number) {
+  await testDb()('users').where({ id: userId }).update({ site_role: 'admin' })
+}

@@ -1,0 +1,54 @@
+import { spawn, type ChildProcess } from 'node:child_process'
+import { randomBytes } from 'node:crypto'
+import { existsSync } from 'node:fs'
+import { resolve } from 'node:path'
+import type { TestProject } from 'vitest/node'
+import knexFactory from 'knex'
+// @ts-expect-error plain ESM helper without types
+import { recreateLocalDatabase, localUrl } from '../../scripts/lib/postgres.mjs'
+import { migrationSource } from '../../migrations/index'
+
+// One real server per test project, on its own fresh database (api and e2e never share rows).
+const PORTS: Record<string, number> = { api: 3101, e2e: 3102 }
+const root = resolve(import.meta.dirname, '..', '..')
+
+declare module 'vitest' {
+  export interface ProvidedContext { baseUrl: string, databaseUrl: string }
+}
+
+async function waitHealthy(url: string, server: ChildProcess) {
+  const until = Date.now() + 60_000
+  while (Date.now() < until) {
+    if (server.exitCode !== null) throw new Error(`test server exited with ${server.exitCode}`)
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) return
+    } catch { /* not yet listening */ }
+    await new Promise((r) => setTimeout(r, 200))
+  }
+  throw new Error('test server did not become healthy within 60 s')
+}
+
+export default async function setup(project: TestProject) {
+  if (!existsSync(resolve(root, '.output/server/index.mjs'))) throw new Error('No built app: run `npm test` (it builds first) or `npx nuxt build`')
+  const name = project.name
+  const database = `scalewright_test_${name}`
+  let databaseUrl = process.env.DATABASE_URL ? `${process.env.DATABASE_URL.replace(/\/[^/]*$/, '')}/${database}` : localUrl(database)
+  if (!process.env.DATABASE_URL) await recreateLocalDatabase(database)
+  const db = knexFactory({ client: 'pg', connection: databaseUrl })
+  await db.migrate.latest({ migrationSource })
+  await db.destroy()
+  const port = PORTS[name] ?? 3199
+  const baseUrl = `http://127.0.0.1:${port}`
+  const server = spawn(process.execPath, ['.output/server/index.mjs'], {
+    cwd: root,
+    env: { ...process.env, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(port), NUXT_PUBLIC_APP_URL: baseUrl,
+      NUXT_SESSION_PASSWORD: randomBytes(32).toString('hex'), SCALEWRIGHT_DEMO: '0', SMTP_URL: '', NODE_ENV: 'production' },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  })
+  await waitHealthy(baseUrl, server)
+  project.provide('baseUrl', baseUrl)
+  project.provide('databaseUrl', databaseUrl)
+  return async () => {
+    server.kill('SIGTERM')
+  }
+}
