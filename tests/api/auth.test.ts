@@ -1,0 +1,88 @@
+import { describe, it, expect } from 'vitest'
+import { ApiClient, uniqueEmail, TEST_PASSWORD, signedUpClient, messageOf } from '../support/client'
+import { rowCounts, makeAdmin, testDb } from '../support/db'
+
+describe('accounts', () => {
+  it('signs up, reads itself, signs out and in again', async () => {
+    const client = new ApiClient()
+    const email = uniqueEmail('alice')
+    const up = await client.post('/api/auth/signup', { email: email.toUpperCase(), password: TEST_PASSWORD, displayName: 'Alice' })
+    expect(up.status).toBe(201)
+    expect(up.body.user).toMatchObject({ email, displayName: 'Alice', siteRole: 'member' })
+    expect((await client.get('/api/auth/me')).body.user.email).toBe(email)
+    expect((await client.post('/api/auth/signout')).status).toBe(200)
+    const me = await client.get('/api/auth/me')
+    expect(me.status).toBe(401)
+    expect(messageOf(me)).toBe('Sign in to continue')
+    expect((await client.post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    expect((await client.get('/api/auth/me')).status).toBe(200)
+  })
+
+  it('stores a scrypt hash, never the password', async () => {
+    const { email } = await signedUpClient('hash')
+    const row = await testDb()('users').where({ email }).first()
+    expect(row.password_hash).not.toContain(TEST_PASSWORD)
+    expect(row.password_hash).toMatch(/^\$scrypt\$/)
+  })
+
+  it('refuses a second account on the same address and writes nothing', async () => {
+    const { email } = await signedUpClient('dup')
+    const before = await rowCounts()
+    const again = await new ApiClient().post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Dup' })
+    expect(again.status).toBe(409)
+    expect(messageOf(again)).toMatch(/already exists/)
+    expect(await rowCounts()).toEqual(before)
+  })
+
+  it('gives one message for a wrong password and an unknown address', async () => {
+    const { email } = await signedUpClient('wrong')
+    const a = await new ApiClient().post('/api/auth/signin', { email, password: 'not the password' })
+    const b = await new ApiClient().post('/api/auth/signin', { email: uniqueEmail('ghost'), password: 'whatever' })
+    expect([a.status, b.status]).toEqual([401, 401])
+    expect(messageOf(a)).toBe('E-mail or password is wrong')
+    expect(messageOf(b)).toBe(messageOf(a))
+  })
+})
+
+describe('password reset through the e-mailed one-time token', () => {
+  it('mails a link, sets the new password once, and the token cannot be reused', async () => {
+    const { email } = await signedUpClient('forgetful')
+    const admin = await signedUpClient('mailadmin')
+    await makeAdmin(admin.id)
+    const ask = await new ApiClient().post('/api/auth/reset-request', { email })
+    expect(ask.status).toBe(200)
+    const box = await admin.client.get(`/api/admin/outbox?to=${encodeURIComponent(email)}`)
+    expect(box.status).toBe(200)
+    expect(box.body.messages).toHaveLength(1)
+    const token = /\/reset\/([A-Za-z0-9_-]{40,})/.exec(box.body.messages[0].text)![1]!
+    const raw = await testDb()('outbox').where({ to_address: email }).first()
+    expect(raw.raw).toContain('Subject: Reset your Scalewright password') // built by nodemailer
+
+    const newPassword = 'a brand new password'
+    expect((await new ApiClient().post('/api/auth/reset', { token, password: newPassword })).status).toBe(200)
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(401)
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: newPassword })).status).toBe(200)
+    const reuse = await new ApiClient().post('/api/auth/reset', { token, password: 'yet another password' })
+    expect(reuse.status).toBe(400)
+    expect(messageOf(reuse)).toMatch(/invalid, used or expired/)
+  })
+
+  it('answers the same for an unknown address and sends nothing', async () => {
+    const before = await rowCounts()
+    const res = await new ApiClient().post('/api/auth/reset-request', { email: uniqueEmail('nobody') })
+    expect(res.status).toBe(200)
+    expect(res.body.message).toMatch(/If an account exists/)
+    expect(await rowCounts()).toEqual(before)
+  })
+
+  it('refuses an expired token', async () => {
+    const { email } = await signedUpClient('late')
+    await new ApiClient().post('/api/auth/reset-request', { email })
+    const admin = await signedUpClient('mailadmin2')
+    await makeAdmin(admin.id)
+    const box = await admin.client.get(`/api/admin/outbox?to=${encodeURIComponent(email)}`)
+    const token = /\/reset\/([A-Za-z0-9_-]{40,})/.exec(box.body.messages[0].text)![1]!
+    await testDb()('password_resets').update({ expires_at: new Date(Date.now() - 1000) })
+    expect((await new ApiClient().post('/api/auth/reset', { token, password: 'another long password' })).status).toBe(400)
+  })
+})
