@@ -3,7 +3,7 @@
 import { ensureLocalPostgres, localUrl } from './lib/postgres.mjs'
 import { buildIfStale } from './lib/build.mjs'
 import { sessionSecret } from './lib/secret.mjs'
-import { runMigrations, startServer, waitForHealth } from './lib/run.mjs'
+import { runMigrations, startServer, startWorker, waitForHealth } from './lib/run.mjs'
 import { DEMO_ADMIN, DEMO_MEMBERS, DEMO_PASSWORD } from '../seeds/demoPeople.ts'
 
 const host = process.env.HOST || '127.0.0.1'
@@ -22,8 +22,11 @@ const env = {
 runMigrations(env)
 buildIfStale()
 const server = startServer(env)
-for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal))
-server.on('exit', (code) => process.exit(code ?? 0))
+// One queue worker beside the server; run `npm run worker` elsewhere for more capacity.
+const worker = startWorker(env)
+for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => { server.kill(signal); worker.kill(signal) })
+server.on('exit', (code) => { worker.kill('SIGTERM'); process.exit(code ?? 0) })
+worker.on('exit', (code) => { if (code) console.error(`[start] the worker exited with ${code}; runs wait until one is started (npm run worker)`) })
 await waitForHealth(env.NUXT_PUBLIC_APP_URL, { demo: env.SCALEWRIGHT_DEMO === '1' })
 console.log(`\nScalewright is running at ${env.NUXT_PUBLIC_APP_URL}`)
 console.log(`Demo accounts (password "${DEMO_PASSWORD}"): ${[DEMO_ADMIN, ...DEMO_MEMBERS].map((u) => u.email).join(', ')}\n`)

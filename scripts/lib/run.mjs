@@ -34,3 +34,8 @@ export async function waitForHealth(baseUrl, { demo = false, timeoutMs = 60_000 
   }
   throw new Error(`server at ${baseUrl} not healthy within ${timeoutMs / 1000}s (${last})`)
 }
+
+/** A queue worker process (`npm run worker`) beside the server. */
+export function startWorker(env) {
+  return spawn(process.execPath, ['--import', 'tsx', 'scripts/worker.ts'], { cwd: root, env, stdio: ['ignore', 'inherit', 'inherit'] })
+}

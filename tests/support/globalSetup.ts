@@ -46,9 +46,13 @@ export default async function setup(project: TestProject) {
     stdio: ['ignore', 'ignore', 'inherit'],
   })
   await waitHealthy(baseUrl, server)
+  const worker = spawn(process.execPath, ['--import', 'tsx', 'scripts/worker.ts'], {
+    cwd: root, env: { ...process.env, DATABASE_URL: databaseUrl }, stdio: ['ignore', 'ignore', 'inherit'],
+  })
   project.provide('baseUrl', baseUrl)
   project.provide('databaseUrl', databaseUrl)
   return async () => {
     server.kill('SIGTERM')
+    worker.kill('SIGTERM')
   }
 }

@@ -1,6 +1,7 @@
 import type { GroupRole } from '../../shared/types/roles'
 import { addMember, SMALL_THEORY, type World, type Actor } from './fixtures'
 import { signedUpClient } from './client'
+import { testDb } from './db'
 
 export type Access =
   | { kind: 'public', why: string }
@@ -80,7 +81,16 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     access: { kind: 'group', min: 'commenter' },
     prepare: async (w, actor) => ({ path: `/api/annotations/${await noteBy(w, canWrite(w, actor))}` }),
   },
+  'POST /api/count': { access: { kind: 'signedIn' }, requiresBody: true, prepare: async () => ({ path: '/api/count', body: { theory: SMALL_THEORY, maxDim: 6 } }) },
+  'POST /api/theories/[id]/runs': { access: { kind: 'group', min: 'editor' }, requiresBody: true, prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/runs`, body: { kind: 'count', maxDim: 5 } }) },
+  // A queued run that no worker will take (inserted without a queue job), so that it is still cancellable.
+  'POST /api/runs/[id]/cancel': { access: { kind: 'group', min: 'editor' }, prepare: async (w) => ({ path: `/api/runs/${await idleRun(w)}/cancel` }) },
   'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, requiresBody: true, prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
+}
+
+async function idleRun(w: World): Promise<number> {
+  const [row] = await testDb()('runs').insert({ theory_id: w.theoryId, kind: 'count', params: JSON.stringify({ maxDim: 5, theory: SMALL_THEORY, theoryVersion: 1 }) }).returning('id')
+  return row.id
 }
 
 // A note written by the actor when they may write notes, else by the commenter: so that a

@@ -1,0 +1,68 @@
+/**
+ * Explicit operator basis from the command line.
+ *   node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]
+ * Prints only JSON: {"theory","note","byDimension":[{"dimension","operators" (real
+ * parameters),"tallyOk","classes":[{"key","conjugateKey","rank","hilbert","tallyOk",
+ * "message"?,"operators":[{"text","latex","hermitian","realParameters","flavorComponents",…}]}]}]}.
+ * With flavors (--nf > 1 or "flavors" in the theory) a class lists one operator per
+ * (structure, Young symmetry) pair with its number of flavor components.
+ * Exit code 1 with a message on stderr for bad input.
+ */
+import { readFileSync } from 'node:fs'
+import { parseTheory } from '../shared/schemas/theory'
+import { buildBasis, type ClassReport } from '../server/engine/basis/index'
+
+function usage(msg: string): never {
+  process.stderr.write(`basis: ${msg}\nusage: node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]\n`)
+  process.exit(1)
+}
+
+function intArg(args: string[], name: string): number | undefined {
+  const i = args.indexOf(name)
+  if (i < 0) return undefined
+  const v = args[i + 1]
+  if (v === undefined || !/^\d+$/.test(v)) usage(`${name} needs a positive integer, got ${v ?? 'nothing'}`)
+  return Number(v)
+}
+
+function classJson(c: ClassReport) {
+  const base = { key: c.key, conjugateKey: c.conjugateKey, selfConjugate: c.selfConjugate, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, ...(c.message ? { message: c.message } : {}) }
+  if (c.flavor) {
+    return {
+      ...base, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,
+      operators: c.flavor.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: c.selfConjugate, young: o.young, flavorComponents: o.flavorComponents })),
+    }
+  }
+  return {
+    ...base, realParameters: c.realParameters,
+    operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: o.hermitian, realParameters: o.realParameters, flavorComponents: o.flavorComponents, fields: o.fields, derivatives: o.derivatives })),
+  }
+}
+
+function main(): void {
+  const args = process.argv.slice(2)
+  const file = args.find((a, i) => !a.startsWith('--') && (i === 0 || !args[i - 1]!.startsWith('--')))
+  if (!file) usage('missing THEORY.json')
+  const maxDim = intArg(args, '--max-dim')
+  if (maxDim === undefined) usage('missing --max-dim')
+  let text: string
+  try {
+    text = readFileSync(file, 'utf8')
+  } catch (e) {
+    usage(`cannot read ${file}: ${(e as Error).message}`)
+  }
+  try {
+    const theory = parseTheory(text)
+    const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf') })
+    const out = {
+      theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
+      byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, classes: d.classes.map(classJson) })),
+    }
+    process.stdout.write(`${JSON.stringify(out, null, 2)}\n`)
+  } catch (e) {
+    process.stderr.write(`basis: ${(e as Error).message}\n`)
+    process.exit(1)
+  }
+}
+
+main()

@@ -1,0 +1,63 @@
+/**
+ * Command line: count the independent operators of a theory, per mass dimension and class.
+ *   npm run --silent count -- THEORY.json --max-dim N [--min-dim M] [--nf K]
+ * THEORY.json may also be a preset id (e.g. `smeft`). Prints only JSON on stdout:
+ *   {"theory": "…", "byDimension": [{"dimension": d, "operators": n, "classes": {"<key>": n}}]}
+ * --nf K overrides the flavor number of every field that declares "flavors".
+ * Errors: message on stderr, exit code 2, nothing on stdout.
+ */
+import { existsSync, readFileSync } from 'node:fs'
+import { findPreset } from '../shared/presets/index'
+import { parseTheory, type Theory } from '../shared/schemas/theory'
+import { countOperators } from '../server/engine/counting/countOperators'
+
+class UsageError extends Error {}
+
+const USAGE = 'usage: count THEORY.json|PRESET --max-dim N [--min-dim M] [--nf K]'
+
+function parseArgs(argv: string[]): { source: string; maxDim: number; minDim?: number; nf?: number } {
+  let source: string | undefined
+  const opts: Record<string, number> = {}
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i]!
+    if (a === '--max-dim' || a === '--min-dim' || a === '--nf') {
+      const v = argv[++i]
+      if (v === undefined || !/^\d+$/.test(v)) throw new UsageError(`${a} needs a positive integer, got ${v ?? 'nothing'}\n${USAGE}`)
+      opts[a] = Number(v)
+    } else if (a.startsWith('--')) {
+      throw new UsageError(`unknown option ${a}\n${USAGE}`)
+    } else if (source === undefined) {
+      source = a
+    } else {
+      throw new UsageError(`more than one theory given: ${source} and ${a}\n${USAGE}`)
+    }
+  }
+  if (source === undefined) throw new UsageError(`no theory file given\n${USAGE}`)
+  if (opts['--max-dim'] === undefined) throw new UsageError(`--max-dim is required\n${USAGE}`)
+  return { source, maxDim: opts['--max-dim'], minDim: opts['--min-dim'], nf: opts['--nf'] }
+}
+
+function loadTheory(source: string): Theory {
+  if (existsSync(source)) return parseTheory(readFileSync(source, 'utf8'))
+  const preset = findPreset(source)
+  if (preset) return parseTheory(preset.theory)
+  throw new UsageError(`no such theory file or preset: ${source}`)
+}
+
+function main(): void {
+  try {
+    const args = parseArgs(process.argv.slice(2))
+    const theory = loadTheory(args.source)
+    const result = countOperators(theory, { maxDim: args.maxDim, minDim: args.minDim, nf: args.nf })
+    const plain = {
+      theory: result.theory,
+      byDimension: result.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, classes: d.classes })),
+    }
+    process.stdout.write(`${JSON.stringify(plain)}\n`)
+  } catch (e) {
+    process.stderr.write(`count: ${(e as Error).message}\n`)
+    process.exitCode = 2
+  }
+}
+
+main()

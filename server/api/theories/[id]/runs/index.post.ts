@@ -1,0 +1,22 @@
+import { defineApiHandler, created } from '../../../../utils/http/apiHandler'
+import { readJson, intParam } from '../../../../utils/http/readJson'
+import { requireGroupRole } from '../../../../utils/auth/currentUser'
+import { theoryOr404 } from '../../../../utils/db/theories'
+import { publicRun } from '../../../../utils/db/runs'
+import { useDb } from '../../../../utils/db/connection'
+import { useQueue, RUN_QUEUE } from '../../../../utils/jobs/queue'
+import { RunCreateSchema } from '../../../../../shared/schemas/runRequests'
+
+// Editors start a background run; the theory file is frozen into the run's parameters.
+export default defineApiHandler(async (event) => {
+  const theory = await theoryOr404(intParam(event, 'id'))
+  const { user } = await requireGroupRole(event, theory.group_id, 'editor')
+  const body = await readJson(event, RunCreateSchema)
+  const params = { maxDim: body.maxDim, nf: body.nf, theory: theory.definition, theoryVersion: theory.version }
+  const [run] = await useDb()('runs').insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id }).returning('*')
+  const boss = await useQueue()
+  const jobId = await boss.send(RUN_QUEUE, { runId: run.id })
+  await useDb()('runs').where({ id: run.id }).update({ job_id: jobId })
+  created(event)
+  return { run: publicRun(run) }
+})

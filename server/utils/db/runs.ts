@@ -1,0 +1,34 @@
+import { useDb } from './connection'
+import { fail } from '../http/apiHandler'
+import { useQueue, RUN_QUEUE } from '../jobs/queue'
+
+export async function runOr404(id: number) {
+  const row = await useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id').where('r.id', id).first('r.*', 't.group_id')
+  if (!row) fail(404, `No run with id ${id}`)
+  return row
+}
+
+export function publicRun(row: Record<string, any>) {
+  return {
+    id: row.id, theoryId: row.theory_id, kind: row.kind, status: row.status, progress: row.progress,
+    currentLabel: row.current_label, maxDim: row.params?.maxDim, nf: row.params?.nf ?? null,
+    summary: row.summary, error: row.error, cancelRequested: row.cancel_requested,
+    createdAt: row.created_at, startedAt: row.started_at, finishedAt: row.finished_at,
+  }
+}
+
+/**
+ * A run still marked queued/running whose queue job has failed (its worker died and the
+ * retry failed too) is shown as failed, never left spinning.
+ */
+export async function reconcileWithQueue(row: Record<string, any>) {
+  if (!['queued', 'running'].includes(row.status) || !row.job_id) return row
+  const boss = await useQueue()
+  const job = await boss.getJobById(RUN_QUEUE, row.job_id, { includeArchive: true })
+  if (job && ['failed', 'cancelled'].includes(job.state)) {
+    const message = 'the worker stopped before the run finished (retried once); start it again'
+    await useDb()('runs').where({ id: row.id }).whereIn('status', ['queued', 'running']).update({ status: 'failed', error: message, finished_at: useDb().fn.now() })
+    return { ...row, status: 'failed', error: message }
+  }
+  return row
+}

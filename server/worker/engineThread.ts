@@ -1,0 +1,28 @@
+// Worker-thread entry: runs one engine task off the main thread. The cancel flag is a shared
+// Int32Array, because the engine's loops are synchronous and would never see a message event.
+import { parentPort, workerData } from 'node:worker_threads'
+import { countOperators } from '../engine/counting/countOperators'
+import { buildBasis } from '../engine/basis/buildBasis'
+import { parseTheory } from '../../shared/schemas/theory'
+import type { EngineTask } from './engineTask'
+
+const { task, cancelFlag } = workerData as { task: EngineTask, cancelFlag: Int32Array }
+const signal = { get aborted() { return Atomics.load(cancelFlag, 0) === 1 } }
+let lastPost = 0
+function onProgress(fraction: number, label: string) {
+  const now = Date.now()
+  if (now - lastPost < 150 && fraction < 1) return
+  lastPost = now
+  parentPort!.postMessage({ type: 'progress', fraction, label })
+}
+
+try {
+  const theory = parseTheory(task.theory)
+  const result = task.kind === 'count'
+    ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
+    : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
+  parentPort!.postMessage({ type: 'done', result })
+} catch (error) {
+  const e = error as Error
+  parentPort!.postMessage({ type: 'error', name: e.name, message: e.message })
+}

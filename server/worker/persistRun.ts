@@ -1,0 +1,41 @@
+import type { Knex } from 'knex'
+import type { CountResult } from '../engine/counting/countOperators'
+import type { BasisReport } from '../engine/basis/buildBasis'
+
+/** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
+export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
+  await db.transaction(async (trx) => {
+    if (run.kind === 'basis') await writeBasis(trx, run, result as BasisReport)
+    const summary = run.kind === 'count' ? result : basisSummary(result as BasisReport)
+    await trx('runs').where({ id: run.id }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
+  })
+}
+
+export interface RunParams { maxDim: number, nf?: number, theory: unknown, theoryVersion: number }
+
+function basisSummary(report: BasisReport) {
+  return {
+    theory: report.theory,
+    note: report.note,
+    nf: report.nf,
+    byDimension: report.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, classes: d.classes.length })),
+  }
+}
+
+async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport) {
+  const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({
+    dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
+    tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.realParameters, flavor: c.flavor ?? null,
+  })))
+  const [basis] = await trx('bases').insert({
+    theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion,
+    counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes),
+  }).returning('id')
+  const rows = report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op, i) => ({
+    basis_id: basis.id, order: d.dimension - 4, class_key: c.key, column: 'kept', position: i,
+    structure: JSON.stringify(op), latex: op.latex, latex_dirac: null, hermitian: op.hermitian, real_parameters: op.realParameters,
+  }))))
+  for (let i = 0; i < rows.length; i += 500) await trx('operators').insert(rows.slice(i, i + 500))
+}
+
+export type { CountResult }

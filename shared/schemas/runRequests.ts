@@ -1,0 +1,19 @@
+import { z } from 'zod'
+import { TheorySchema } from './theory'
+
+// Size limits live here, so one request cannot ask the server for unbounded work.
+export const MAX_RUN_DIMENSION = { count: 16, basis: 8 } as const
+
+export const RunCreateSchema = z.object({
+  kind: z.enum(['count', 'basis'], { error: 'kind must be "count" or "basis"' }),
+  maxDim: z.number({ error: 'maxDim: a whole number of mass dimension is required' }).int({ error: 'maxDim must be a whole number' })
+    .min(5, { error: 'maxDim must be at least 5' }).max(16, { error: 'maxDim must be at most 16' }),
+  nf: z.number({ error: 'nf must be a number' }).int({ error: 'nf must be a whole number' }).min(1, { error: 'nf must be at least 1' }).max(6, { error: 'nf must be at most 6' }).optional(),
+}).strict().refine((r) => r.maxDim <= MAX_RUN_DIMENSION[r.kind], { error: 'maxDim: an explicit basis run goes up to dimension 8', path: ['maxDim'] })
+
+export const QuickCountSchema = z.object({
+  theory: TheorySchema,
+  maxDim: z.number({ error: 'maxDim: a whole number is required' }).int().min(5, { error: 'maxDim must be at least 5' })
+    .max(8, { error: 'maxDim: quick counts go up to dimension 8; start a run for more' }),
+  nf: z.number().int().min(1, { error: 'nf must be at least 1' }).max(6, { error: 'nf must be at most 6' }).optional(),
+}).strict()

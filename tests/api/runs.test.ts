@@ -1,0 +1,79 @@
+import { describe, it, expect, beforeAll } from 'vitest'
+import { buildWorld, type World } from '../support/fixtures'
+import { testDb } from '../support/db'
+import { messageOf } from '../support/client'
+import { findPreset } from '../../shared/presets/index'
+
+let world: World
+beforeAll(async () => { world = await buildWorld() })
+
+async function waitFor(runId: number, until: (run: any) => boolean, timeoutMs = 60_000) {
+  const seen: any[] = []
+  const end = Date.now() + timeoutMs
+  while (Date.now() < end) {
+    const res = await world.byRole.viewer.client.get(`/api/runs/${runId}`)
+    expect(res.status).toBe(200)
+    seen.push(res.body.run)
+    if (until(res.body.run)) return { run: res.body.run, seen }
+    await new Promise((r) => setTimeout(r, 150))
+  }
+  throw new Error(`run ${runId} did not reach the state in time; last: ${JSON.stringify(seen.at(-1))}`)
+}
+
+async function smeftTheoryId(): Promise<number> {
+  const def = { ...findPreset('smeft')!.theory, name: `SMEFT ${Date.now()}` }
+  const res = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition: def })
+  expect(res.status).toBe(201)
+  return res.body.theory.id
+}
+
+describe('background runs through the PostgreSQL queue', () => {
+  it('a count run finishes with the Hilbert-series totals and progress reaches 1', async () => {
+    const theoryId = await smeftTheoryId()
+    const start = await world.byRole.editor.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 8, nf: 1 })
+    expect(start.status).toBe(201)
+    const { run } = await waitFor(start.body.run.id, (r) => r.status === 'done' || r.status === 'failed')
+    expect(run.error).toBeNull()
+    expect(run.status).toBe('done')
+    expect(run.progress).toBe(1)
+    // Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016: one flavor 2, 84, 30, 993 at dimensions 5–8.
+    expect(run.summary.byDimension.map((d: any) => d.operators)).toEqual([2, 84, 30, 993])
+  })
+
+  it('a run can be cancelled while it runs, and writes no basis', async () => {
+    const theoryId = await smeftTheoryId()
+    const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 16, nf: 3 })
+    const id = start.body.run.id
+    await waitFor(id, (r) => r.status === 'running')
+    const cancel = await world.byRole.editor.client.post(`/api/runs/${id}/cancel`)
+    expect(cancel.status).toBe(200)
+    const { run } = await waitFor(id, (r) => !['queued', 'running'].includes(r.status), 30_000)
+    expect(run.status).toBe('cancelled')
+    expect(await testDb()('bases').where({ run_id: id }).count('* as n')).toEqual([{ n: '0' }])
+    const again = await world.owner.client.post(`/api/runs/${id}/cancel`)
+    expect(again.status).toBe(409)
+    expect(messageOf(again)).toBe('This run is already cancelled')
+  })
+
+  it('an engine input error fails the run with its message', async () => {
+    const theoryId = await smeftTheoryId()
+    await testDb()('theories').where({ id: theoryId }).update({ definition: JSON.stringify({ name: 'broken', frame: 'relativistic', groups: [], fields: [{ name: 'x', lorentz: 'Q' }] }) })
+    const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 6 })
+    const { run } = await waitFor(start.body.run.id, (r) => ['done', 'failed'].includes(r.status))
+    expect(run.status).toBe('failed')
+    expect(run.error).toMatch(/^parseTheory: /)
+  })
+})
+
+describe('quick counts', () => {
+  it('answers small counts at once (photons only: three operators at dimension 8, Euler and Heisenberg, Z. Phys. 98 (1936) 714)', async () => {
+    const res = await world.stranger.client.post('/api/count', { theory: findPreset('photons')!.theory, maxDim: 8 })
+    expect(res.status).toBe(200)
+    expect(res.body.byDimension.find((d: any) => d.dimension === 8).operators).toBe(3)
+  })
+  it('refuses what belongs in a run, with a reason', async () => {
+    const res = await world.stranger.client.post('/api/count', { theory: findPreset('photons')!.theory, maxDim: 12 })
+    expect(res.status).toBe(400)
+    expect(messageOf(res)).toMatch(/start a run/)
+  })
+})
