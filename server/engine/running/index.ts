@@ -1,0 +1,10 @@
+/** Running and decoupling of gauge couplings (QCD α_s to four loops, QED at one loop). */
+export * from './zetaRational'
+export * from './qcdBeta'
+export * from './qcdDecoupling'
+export * from './odeStepper'
+export * from './runAlphaS'
+export * from './qedFermions'
+export * from './runAlphaQED'
+export * from './alphaQedAtZ'
+export * from './caution'

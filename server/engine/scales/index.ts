@@ -1,0 +1,10 @@
+/** Scales of a theory: units, the scale ladder, and threshold data for towers. */
+export * from './units'
+export * from './decimal'
+export * from './ladderSchema'
+export * from './scaleLadder'
+export * from './thresholdShifts'
+export * from './generatedClasses'
+export * from './integrateOut'
+export * as codata2018 from './codata2018'
+export * as pdg2024 from './pdg2024'

@@ -1,0 +1,77 @@
+/**
+ * One step of a tower: remove heavy fields from a theory at a threshold scale and report the
+ * threshold tags and the kinds of operators the heavy fields can generate.
+ */
+import { EngineInputError } from '../errors'
+import type { Theory, TheoryField } from '../../../shared/schemas/theory'
+import { generatedClassHints, type GeneratedClassHint } from './generatedClasses'
+import { fieldBetaContribution, thresholdShifts } from './thresholdShifts'
+import { toString as ratText } from '../exact/rational'
+import { toMeV } from './units'
+
+export interface ThresholdScale { name?: string, value: number, unit: string }
+/** betaShift: the field's exact contribution to the one-loop b of the group (see fieldBetaContribution). */
+export interface ThresholdTag { group: string, field: string, text: string, betaShift: string }
+export interface IntegrateOutResult {
+  child: Theory
+  thresholdScale: { name?: string, value: number, unit: string, valueMeV: number }
+  thresholdTags: ThresholdTag[]
+  generatedClasses: GeneratedClassHint[]
+}
+
+function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[] {
+  if (names.length === 0) throw new EngineInputError('integrateOut', 'no field names given')
+  const byName = new Map(theory.fields.map(f => [f.name, f]))
+  return names.map((n) => {
+    const f = byName.get(n)
+    if (!f) throw new EngineInputError('integrateOut', `theory "${theory.name}" has no field "${n}"`)
+    if (f.lorentz === 'F') throw new EngineInputError('integrateOut', `field "${n}" is a gauge field strength; only matter fields can be integrated out`)
+    return f
+  })
+}
+
+function childTheory(theory: Theory, removed: Set<string>, scaleText: string): Theory {
+  const dropBlock = (k: string) => removed.has(k.replace(/\*$/, ''))
+  const rules = theory.countingRules?.map(r => (r.weights
+    ? { ...r, weights: Object.fromEntries(Object.entries(r.weights).filter(([k]) => !dropBlock(k))) }
+    : r))
+  const name = `${theory.name} below ${scaleText}`.slice(0, 80)
+  const note = `Obtained from "${theory.name}" by integrating out ${[...removed].join(', ')} at ${scaleText}.`
+  return {
+    ...theory,
+    name,
+    description: theory.description ? `${theory.description}\n${note}`.slice(0, 2000) : note,
+    fields: theory.fields.filter(f => !removed.has(f.name)),
+    ...(rules ? { countingRules: rules } : {}),
+  }
+}
+
+/**
+ * The child theory below a threshold, with threshold tags and generated-operator hints.
+ * @example integrateOut(qedWithMuon, ['mu'], { value: 105.6583755, unit: 'MeV' }).thresholdTags
+ *   // [{ group: 'QED', field: 'mu', text: 'coefficient shifts when mu is integrated out', betaShift: '2/3' }]
+ * Method: remove the fields; tag every gauge group under which a removed field is charged.
+ * Reference: S. Weinberg, Phys. Lett. B 91 (1980) 51 (effective gauge theories at thresholds).
+ */
+export function integrateOut(theory: Theory, fieldNames: readonly string[], thresholdScale: ThresholdScale): IntegrateOutResult {
+  if (theory.frame !== 'relativistic') {
+    throw new EngineInputError('integrateOut', `theory "${theory.name}" has frame "${theory.frame}"; integrating out is supported for relativistic theories`)
+  }
+  const removed = removedFieldsOf(theory, fieldNames)
+  const valueMeV = toMeV(thresholdScale.value, thresholdScale.unit)
+  const names = new Set(removed.map(f => f.name))
+  if (names.size !== removed.length) throw new EngineInputError('integrateOut', `field names repeat: ${fieldNames.join(', ')}`)
+  const scaleText = `${thresholdScale.name ? `${thresholdScale.name} = ` : ''}${thresholdScale.value} ${thresholdScale.unit}`
+  const byName = new Map(removed.map(f => [f.name, f]))
+  const groupOf = new Map(theory.groups.map(g => [g.name, g]))
+  const thresholdTags = thresholdShifts(removed, theory.groups).flatMap(s => s.fields.map(field => ({
+    group: s.group, field, text: `coefficient shifts when ${field} is integrated out`,
+    betaShift: ratText(fieldBetaContribution(byName.get(field)!, groupOf.get(s.group)!, theory.groups)),
+  })))
+  return {
+    child: childTheory(theory, names, scaleText),
+    thresholdScale: { ...thresholdScale, valueMeV },
+    thresholdTags,
+    generatedClasses: removed.flatMap(f => generatedClassHints(f, theory.groups)),
+  }
+}

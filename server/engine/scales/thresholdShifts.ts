@@ -1,0 +1,91 @@
+/**
+ * Threshold shifts of gauge kinetic terms: which gauge groups see their −(1/4g²) F² coefficient
+ * change at one loop when given fields are integrated out (plain data for threshold tags).
+ */
+import { EngineInputError } from '../errors'
+import { add, mul, parseRational, rat, ZERO, toString as ratText, type Rational } from '../exact/rational'
+import { suDimension } from '../group/weights'
+import { suIndex } from '../group/irrep'
+import type { TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
+
+export interface ThresholdShift {
+  group: string
+  type: 'SU' | 'U1'
+  /** Removed fields charged (non-singlet) under the group, in input order. */
+  fields: string[]
+  /**
+   * Exact contribution Δb of the removed fields to b in μ dg/dμ = b g³/(16π²) (for U(1): charges
+   * as written, no GUT normalisation); below the threshold b drops by Δb.
+   */
+  betaShift: string
+}
+
+/** 2/3 per Weyl fermion, 1/3 per complex scalar, 1/6 per real scalar (Machacek & Vaughn 1983). */
+function spinWeight(f: TheoryField): Rational {
+  if (f.lorentz === 'L' || f.lorentz === 'R') return rat(2, 3)
+  return f.real ? rat(1, 6) : rat(1, 3)
+}
+
+/** Number of components of the field under every group except g (SU dimensions; U(1), Z_n add none). */
+function multiplicity(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGroup[]): Rational {
+  let m = rat(f.flavors ?? 1)
+  for (const h of groups) {
+    const labels = f.reps?.[h.name]
+    if (h.name !== g.name && h.type === 'SU' && labels) m = mul(m, rat(suDimension(h.n!, labels)))
+  }
+  return m
+}
+
+/**
+ * Contribution of one matter field to the one-loop gauge β coefficient b of group g.
+ * @example fieldBetaContribution(top partner TL (SU3c [1,0]), SU3c, groups) // 1/3 (a Dirac quark gives 2/3)
+ * Method: b = −(11/3) C2(G) + (2/3) Σ_Weyl T(R) + (1/3) Σ_complex scalars T(R) (+1/6 for real scalars),
+ *   T(R) the Dynkin index (T(fund) = 1/2) or Q² for U(1), times the multiplicity under the other groups.
+ * Reference: M. E. Machacek, M. T. Vaughn, Nucl. Phys. B 222 (1983) 83; D. R. T. Jones, Nucl. Phys. B 75 (1974) 531.
+ */
+export function fieldBetaContribution(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGroup[]): Rational {
+  let t: Rational = ZERO
+  if (g.type === 'SU' && f.reps?.[g.name]) t = suIndex(g.n!, f.reps[g.name]!)
+  if (g.type === 'U1' && f.charges?.[g.name] !== undefined) {
+    const q = parseRational(String(f.charges[g.name]))
+    t = mul(q, q)
+  }
+  return mul(mul(spinWeight(f), t), multiplicity(f, g, groups))
+}
+
+/** True when the field transforms non-trivially under the group g (SU: non-zero Dynkin labels; U(1): non-zero charge; Z_n: false). @example isChargedUnder(H, SU2L) // true */
+export function isChargedUnder(field: TheoryField, g: TheoryGroup): boolean {
+  if (g.type === 'SU') return (field.reps?.[g.name] ?? []).some(a => a !== 0)
+  if (g.type === 'U1') {
+    const q = field.charges?.[g.name]
+    return q !== undefined && parseRational(String(q)).num !== 0n
+  }
+  return false
+}
+
+/**
+ * The gauge groups whose kinetic-term coefficient shifts at one loop when `removedFields`
+ * are integrated out: every SU(n) or U(1) gauge group under which a removed field is
+ * non-singlet (Z_n and global groups have no kinetic term).
+ * @example thresholdShifts([{ name: 'T', lorentz: 'L', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } }], smGroups)
+ *   // [{ group: 'SU3c', type: 'SU', fields: ['T'], betaShift: '1/3' }, { group: 'Y', type: 'U1', fields: ['T'], betaShift: '8/9' }]
+ * Method: a heavy loop contributes to the gauge two-point function iff the field carries the
+ *   gauge charge (Dynkin index or charge squared non-zero); Δb from fieldBetaContribution.
+ * Reference: S. Weinberg, Phys. Lett. B 91 (1980) 51; L. J. Hall, Nucl. Phys. B 178 (1981) 75.
+ */
+export function thresholdShifts(removedFields: readonly TheoryField[], groups: readonly TheoryGroup[]): ThresholdShift[] {
+  for (const f of removedFields) {
+    if (f.lorentz === 'F') {
+      throw new EngineInputError('thresholdShifts', `field "${f.name}" is a gauge field strength; only matter fields can be integrated out`)
+    }
+  }
+  const out: ThresholdShift[] = []
+  for (const g of groups) {
+    if (!g.gauge || g.type === 'Z') continue
+    const charged = removedFields.filter(f => isChargedUnder(f, g))
+    if (charged.length === 0) continue
+    const shift = charged.reduce((s, f) => add(s, fieldBetaContribution(f, g, groups)), ZERO)
+    out.push({ group: g.name, type: g.type, fields: charged.map(f => f.name), betaShift: ratText(shift) })
+  }
+  return out
+}

@@ -1,0 +1,59 @@
+/**
+ * Units of physical scales and their conversion to MeV (natural units, ħ = c = 1).
+ * Energies convert by powers of ten; a length L converts to the energy ħc/L with
+ * ħc = 197.3269804 MeV fm (CODATA 2018).
+ */
+import { EngineInputError } from '../errors'
+import { HBAR_C_MEV_FM } from './codata2018'
+
+export const ENERGY_UNITS = ['eV', 'keV', 'MeV', 'GeV', 'TeV'] as const
+export const LENGTH_UNITS = ['fm', 'pm', 'nm', 'm'] as const
+export const SCALE_UNITS = [...ENERGY_UNITS, ...LENGTH_UNITS] as const
+export type EnergyUnit = (typeof ENERGY_UNITS)[number]
+export type LengthUnit = (typeof LENGTH_UNITS)[number]
+export type ScaleUnit = (typeof SCALE_UNITS)[number]
+
+/** Power of ten: 1 unit = 10^p MeV (energies) or 10^p fm (lengths). */
+export const UNIT_POWER_OF_TEN: Record<ScaleUnit, number> = {
+  eV: -6, keV: -3, MeV: 0, GeV: 3, TeV: 6, fm: 0, pm: 3, nm: 6, m: 15,
+}
+
+export function isLengthUnit(unit: string): unit is LengthUnit {
+  return (LENGTH_UNITS as readonly string[]).includes(unit)
+}
+
+export function assertScaleUnit(fn: string, unit: string): asserts unit is ScaleUnit {
+  if (!(SCALE_UNITS as readonly string[]).includes(unit)) {
+    throw new EngineInputError(fn, `unknown unit "${unit}" (use one of ${SCALE_UNITS.join(', ')})`)
+  }
+}
+
+/**
+ * The energy in MeV of a scale given in an energy unit, or the energy equivalent ħc/L of a length.
+ * @example toMeV(1, 'fm') // 197.3269804
+ * Method: powers of ten; lengths through ħc (CODATA 2018).
+ * Reference: CODATA 2018 (ħc = 197.3269804 MeV fm).
+ */
+export function toMeV(value: number, unit: string): number {
+  assertScaleUnit('toMeV', unit)
+  if (!Number.isFinite(value) || value <= 0) {
+    throw new EngineInputError('toMeV', `a scale must be a positive finite number, got ${value} ${unit}`)
+  }
+  const scaled = value * 10 ** UNIT_POWER_OF_TEN[unit]
+  return isLengthUnit(unit) ? HBAR_C_MEV_FM / scaled : scaled
+}
+
+/**
+ * A scale in MeV expressed in the requested unit (inverse of toMeV).
+ * @example fromMeV(1.3605693e-5, 'eV') // 13.605693
+ * Method: inverse powers of ten; lengths as ħc/E.
+ * Reference: CODATA 2018 (ħc).
+ */
+export function fromMeV(valueMeV: number, unit: string): number {
+  assertScaleUnit('fromMeV', unit)
+  if (!Number.isFinite(valueMeV) || valueMeV <= 0) {
+    throw new EngineInputError('fromMeV', `a scale must be a positive finite number, got ${valueMeV} MeV`)
+  }
+  const p = 10 ** UNIT_POWER_OF_TEN[unit]
+  return isLengthUnit(unit) ? HBAR_C_MEV_FM / valueMeV / p : valueMeV / p
+}
