@@ -9,7 +9,9 @@ import { recreateLocalDatabase, localUrl } from '../../scripts/lib/postgres.mjs'
 import { migrationSource } from '../../migrations/index'
 
 // One real server per test project, on its own fresh database (api and e2e never share rows).
-const PORTS: Record<string, number> = { api: 3101, e2e: 3102 }
+// SCALEWRIGHT_TEST_PORT moves them, so two checkouts can test side by side.
+const BASE_PORT = Number(process.env.SCALEWRIGHT_TEST_PORT || 3101)
+const PORTS: Record<string, number> = { api: BASE_PORT, e2e: BASE_PORT + 1 }
 const root = resolve(import.meta.dirname, '..', '..')
 
 declare module 'vitest' {
