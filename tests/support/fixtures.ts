@@ -50,3 +50,19 @@ export async function addMember(world: World, role: GroupRole): Promise<Actor> {
   if (r.status !== 201) throw new Error(`adding member failed ${JSON.stringify(r.body)}`)
   return actor
 }
+
+/** A stored basis for the world's theory (rows written directly: a fixture, not a computation). */
+export async function addBasis(world: World) {
+  const { testDb } = await import('./db')
+  const db = testDb()
+  const classes = [{ dimension: 6, key: 'phi^3 phi*^3', rank: 1, hilbert: 1, tallyOk: true }, { dimension: 6, key: 'D^2 phi^2 phi*^2', rank: 2, hilbert: 2, tallyOk: true }]
+  const [basis] = await db('bases').insert({ theory_id: world.theoryId, theory_version: 1, max_order: 2, classes: JSON.stringify(classes) }).returning('id')
+  const ops = [
+    { class_key: 'phi^3 phi*^3', column: 'kept', position: 0, text: 'phi^3 phi*^3', latex: '|\\phi|^6' },
+    { class_key: 'D^2 phi^2 phi*^2', column: 'kept', position: 1, text: 'A', latex: 'O_A' },
+    { class_key: 'D^2 phi^2 phi*^2', column: 'kept', position: 2, text: 'B', latex: 'O_B' },
+    { class_key: 'D^2 phi^2 phi*^2', column: 'set_aside', position: 0, text: 'C', latex: 'O_C' },
+  ]
+  const rows = await db('operators').insert(ops.map((o) => ({ ...o, basis_id: basis.id, order: 2, structure: '{}', hermitian: true, real_parameters: 1 }))).returning(['id', 'text'])
+  return { basisId: basis.id as number, operatorIds: Object.fromEntries(rows.map((r) => [r.text, r.id])) as Record<string, number> }
+}

@@ -1,6 +1,8 @@
 import type { GroupRole } from '../../shared/types/roles'
-import { addMember, SMALL_THEORY, type World, type Actor } from './fixtures'
+import { createHash, randomBytes } from 'node:crypto'
+import { addMember, addBasis, SMALL_THEORY, type World, type Actor } from './fixtures'
 import { signedUpClient } from './client'
+import { IMPORT_MAX_BYTES } from '../../shared/schemas/importChoice'
 import { testDb } from './db'
 
 export type Access =
@@ -14,8 +16,10 @@ export interface RouteCase {
   access: Access
   /** A fresh, valid request for `actor` (a new target each time, so success can be checked). */
   prepare: (w: World, actor: Actor) => Promise<Prepared>
-  /** Body has required fields: `{}` must be rejected. */
-  requiresBody?: boolean
+  /** The request has a JSON body: 'required' fields (so `{}` is rejected) or only 'optional' ones. */
+  body?: 'required' | 'optional'
+  /** A body limit other than the default 512 KiB. */
+  maxBodyBytes?: number
 }
 
 let n = 0
@@ -36,20 +40,20 @@ async function noteBy(w: World, author: Actor) {
  * route file exists without an entry here, so no route escapes the exhaustive checks.
  */
 export const ROUTE_CASES: Record<string, RouteCase> = {
-  'POST /api/auth/signup': { access: { kind: 'public', why: 'creating an account' }, prepare: async () => ({ path: '/api/auth/signup', body: { email: `new-${fresh()}@example.test`, password: 'long enough password', displayName: 'New' } }), requiresBody: true },
-  'POST /api/auth/signin': { access: { kind: 'public', why: 'signing in' }, prepare: async () => ({ path: '/api/auth/signin', body: { email: 'nobody@example.test', password: 'x' } }), requiresBody: true },
+  'POST /api/auth/signup': { access: { kind: 'public', why: 'creating an account' }, prepare: async () => ({ path: '/api/auth/signup', body: { email: `new-${fresh()}@example.test`, password: 'long enough password', displayName: 'New' } }), body: 'required' },
+  'POST /api/auth/signin': { access: { kind: 'public', why: 'signing in' }, prepare: async () => ({ path: '/api/auth/signin', body: { email: 'nobody@example.test', password: 'x' } }), body: 'required' },
   'POST /api/auth/signout': { access: { kind: 'public', why: 'clears only the caller\'s own cookie' }, prepare: async () => ({ path: '/api/auth/signout' }) },
-  'POST /api/auth/reset-request': { access: { kind: 'public', why: 'forgotten passwords' }, prepare: async () => ({ path: '/api/auth/reset-request', body: { email: 'nobody@example.test' } }), requiresBody: true },
-  'POST /api/auth/reset': { access: { kind: 'public', why: 'guarded by the e-mailed token' }, prepare: async () => ({ path: '/api/auth/reset', body: { token: 'x'.repeat(43), password: 'long enough password' } }), requiresBody: true },
-  'POST /api/groups': { access: { kind: 'signedIn' }, prepare: async () => ({ path: '/api/groups', body: { slug: `g-${fresh()}`, name: 'A group' } }), requiresBody: true },
+  'POST /api/auth/reset-request': { access: { kind: 'public', why: 'forgotten passwords' }, prepare: async () => ({ path: '/api/auth/reset-request', body: { email: 'nobody@example.test' } }), body: 'required' },
+  'POST /api/auth/reset': { access: { kind: 'public', why: 'guarded by the e-mailed token' }, prepare: async () => ({ path: '/api/auth/reset', body: { token: 'x'.repeat(43), password: 'long enough password' } }), body: 'required' },
+  'POST /api/groups': { access: { kind: 'signedIn' }, prepare: async () => ({ path: '/api/groups', body: { slug: `g-${fresh()}`, name: 'A group' } }), body: 'required' },
   'POST /api/groups/[slug]/members': {
     access: { kind: 'group', min: 'owner' },
-    requiresBody: true,
+    body: 'required',
     prepare: async (w) => ({ path: `/api/groups/${w.slug}/members`, body: { email: (await addMemberLater()).email, role: 'viewer' } }),
   },
   'PATCH /api/groups/[slug]/members/[userId]': {
     access: { kind: 'group', min: 'owner' },
-    requiresBody: true,
+    body: 'required',
     prepare: async (w) => ({ path: `/api/groups/${w.slug}/members/${(await addMember(w, 'viewer')).id}`, body: { role: 'commenter' } }),
   },
   'DELETE /api/groups/[slug]/members/[userId]': {
@@ -58,34 +62,91 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   'POST /api/groups/[slug]/theories': {
     access: { kind: 'group', min: 'editor' },
-    requiresBody: true,
+    body: 'required',
     prepare: async (w) => ({ path: `/api/groups/${w.slug}/theories`, body: { definition: { ...SMALL_THEORY, name: `T${fresh()}` } } }),
   },
   'PATCH /api/theories/[id]': {
     access: { kind: 'group', min: 'editor' },
-    requiresBody: true,
+    body: 'required',
     prepare: async (w) => {
       const t = await newTheory(w)
       return { path: `/api/theories/${t.id}`, body: { definition: { ...SMALL_THEORY, name: `T${fresh()}` }, version: t.version } }
     },
   },
   'DELETE /api/theories/[id]': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/theories/${(await newTheory(w)).id}` }) },
-  'POST /api/theories/[id]/annotations': { access: { kind: 'group', min: 'commenter' }, requiresBody: true, prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/annotations`, body: { body: 'looks right' } }) },
+  'POST /api/theories/[id]/annotations': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/annotations`, body: { body: 'looks right' } }) },
   // Notes: the author edits/deletes their own; the role floor is commenter (checked here with own notes).
   'PATCH /api/annotations/[id]': {
     access: { kind: 'group', min: 'commenter' },
-    requiresBody: true,
+    body: 'required',
     prepare: async (w, actor) => ({ path: `/api/annotations/${await noteBy(w, canWrite(w, actor))}`, body: { body: 'edited' } }),
   },
   'DELETE /api/annotations/[id]': {
     access: { kind: 'group', min: 'commenter' },
     prepare: async (w, actor) => ({ path: `/api/annotations/${await noteBy(w, canWrite(w, actor))}` }),
   },
-  'POST /api/count': { access: { kind: 'signedIn' }, requiresBody: true, prepare: async () => ({ path: '/api/count', body: { theory: SMALL_THEORY, maxDim: 6 } }) },
-  'POST /api/theories/[id]/runs': { access: { kind: 'group', min: 'editor' }, requiresBody: true, prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/runs`, body: { kind: 'count', maxDim: 5 } }) },
+  'POST /api/count': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/count', body: { theory: SMALL_THEORY, maxDim: 6 } }) },
+  'POST /api/theories/[id]/runs': { access: { kind: 'group', min: 'editor' }, body: 'required', prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/runs`, body: { kind: 'count', maxDim: 5 } }) },
   // A queued run that no worker will take (inserted without a queue job), so that it is still cancellable.
   'POST /api/runs/[id]/cancel': { access: { kind: 'group', min: 'editor' }, prepare: async (w) => ({ path: `/api/runs/${await idleRun(w)}/cancel` }) },
-  'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, requiresBody: true, prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
+  'POST /api/operators/[id]/move': {
+    access: { kind: 'group', min: 'editor' },
+    body: 'required',
+    prepare: async (w) => {
+      const op = await testDb()('operators').where({ id: (await basisOf(w)).operatorIds.B }).first('id', 'version')
+      return { path: `/api/operators/${op.id}/move`, body: { column: 'set_aside', position: 0, version: op.version } }
+    },
+  },
+  'POST /api/operators/[id]/tags': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/operators/${(await basisOf(w)).operatorIds.A}/tags`, body: { kind: 'custom', label: `tag ${fresh()}` } }) },
+  'DELETE /api/tags/[id]': {
+    access: { kind: 'group', min: 'commenter' },
+    prepare: async (w) => {
+      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.A, kind: 'custom', label: `t${fresh()}` }).returning('id')
+      return { path: `/api/tags/${tag.id}` }
+    },
+  },
+  'POST /api/bases/[id]/import': {
+    access: { kind: 'group', min: 'editor' },
+    maxBodyBytes: IMPORT_MAX_BYTES,
+    body: 'required',
+    prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/import`, body: { format: 'scalewright-basis', formatVersion: 1, orders: [{ order: 2, classes: [{ key: 'D^2 phi^2 phi*^2', operators: [{ text: 'A', column: 'kept' }] }] }] } }),
+  },
+  'POST /api/theories/[id]/share-links': { access: { kind: 'group', min: 'owner' }, body: 'optional', prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/share-links`, body: { expiresInDays: 7 } }) },
+  'DELETE /api/share-links/[id]': {
+    access: { kind: 'group', min: 'owner' },
+    prepare: async (w) => {
+      const [link] = await testDb()('share_links').insert({ theory_id: w.theoryId, token_hash: createHash('sha256').update(fresh()).digest('hex') }).returning('id')
+      return { path: `/api/share-links/${link.id}` }
+    },
+  },
+  'POST /api/groups/[slug]/invitations': { access: { kind: 'group', min: 'owner' }, body: 'required', prepare: async (w) => ({ path: `/api/groups/${w.slug}/invitations`, body: { email: `invitee-${fresh()}@example.test`, role: 'viewer' } }) },
+  'DELETE /api/invitations/[id]': {
+    access: { kind: 'group', min: 'owner' },
+    prepare: async (w) => ({ path: `/api/invitations/${(await invitation(w.groupId, `x-${fresh()}@example.test`)).id}` }),
+  },
+  // Accepting joins the group the invitation names: a throwaway group, so the world's stranger stays a stranger.
+  'POST /api/invitations/accept': {
+    access: { kind: 'signedIn' },
+    body: 'required',
+    prepare: async (_w, actor) => {
+      const [g] = await testDb()('groups').insert({ slug: `inv-${fresh()}`, name: 'Invitation target' }).returning('id')
+      return { path: '/api/invitations/accept', body: { token: (await invitation(g.id, actor.email)).token } }
+    },
+  },
+  'POST /api/invitations/lookup': { access: { kind: 'public', why: 'reads what an invitation offers; the token is the secret' }, body: 'required', prepare: async (w) => ({ path: '/api/invitations/lookup', body: { token: (await invitation(w.groupId, `y-${fresh()}@example.test`)).token } }) },
+  'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, body: 'required', prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
+}
+
+const bases = new WeakMap<World, ReturnType<typeof addBasis>>()
+function basisOf(w: World) {
+  if (!bases.has(w)) bases.set(w, addBasis(w))
+  return bases.get(w)!
+}
+
+async function invitation(groupId: number, email: string) {
+  const token = randomBytes(32).toString('base64url')
+  const [row] = await testDb()('invitations').insert({ group_id: groupId, email, role: 'viewer', token_hash: createHash('sha256').update(token).digest('hex'), expires_at: new Date(Date.now() + 86_400_000) }).returning('id')
+  return { id: row.id as number, token }
 }
 
 async function idleRun(w: World): Promise<number> {

@@ -12,7 +12,7 @@ export default defineApiHandler(async (event) => {
   const passwordHash = await hashPassword(body.password)
   const user = await useDb().transaction(async (trx) => {
     const row = await createUser({ email: body.email, displayName: body.displayName, passwordHash }, trx)
-    if (body.invitation) await acceptInvitation(trx, body.invitation, row.id)
+    if (body.invitation) await acceptInvitation(trx, body.invitation, row.id, row.email)
     return row
   })
   await setUserSession(event, { user: publicUser(user) })

@@ -1,0 +1,48 @@
+import type { BoardExport } from './boardExport'
+
+function escapeText(s: string): string {
+  return s.replace(/\\/g, '\\textbackslash{}').replace(/([&%$#_{}])/g, '\\$1').replace(/~/g, '\\textasciitilde{}').replace(/\^/g, '\\textasciicircum{}')
+}
+
+/** "D^2 H^2 H*^2" → "D^2 H^2 H^{*2}" in math mode. */
+export function classKeyLatex(key: string): string {
+  return key.split(' ').map((part) => {
+    const m = /^([A-Za-z][A-Za-z0-9]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
+    if (!m) return escapeText(part)
+    const [, name, chiral, star, power] = m
+    const sub = chiral ? `_{${chiral.slice(1)}}` : ''
+    const sup = [star ? '*' : '', power ?? ''].join('')
+    return `${name!.length > 1 ? `\\mathrm{${name}}` : name}${sub}${sup ? `^{${sup}}` : ''}`
+  }).join('\\,')
+}
+
+/**
+ * The kept basis per order as LaTeX tables ready for a paper, with a short legend of the
+ * conventions (two-component notation, counting, what "independent" assumes).
+ * @example toLatex(exportOfPhotons) // contains "\begin{tabular}"
+ */
+export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): string {
+  const out: string[] = [
+    `% Scalewright basis export: ${data.theory.name} (${data.exportedAt})`,
+    `% Legend: operators in two-component notation with spinor brackets; derivatives act on the`,
+    `% field they follow. Independence holds ${data.note || 'modulo equations of motion and integration by parts'}.`,
+    `% Counting rule: ${data.countingRule}; order n = mass dimension - 4 under the mass-ratio rule.`,
+    `% "real par." counts real Wilson-coefficient parameters for one flavor (2 for a non-Hermitian operator and its conjugate).`,
+    '',
+  ]
+  for (const order of data.orders) {
+    const kept = order.classes.flatMap((c) => c.operators.filter((o) => o.column === 'kept').map((o) => ({ c, o })))
+    if (!kept.length) continue
+    out.push('\\begin{table}[ht]', '\\centering', '\\begin{tabular}{llcl}', '\\hline',
+      'class & operator & real par. & tags \\\\', '\\hline')
+    for (const { c, o } of kept) {
+      const tags = o.tags.map((t) => escapeText(t.label ? `${t.kind}: ${t.label}` : t.kind)).join(', ')
+      const body = opts.dirac && o.latexDirac ? o.latexDirac : o.latex
+      out.push(`$${classKeyLatex(c.key)}$ & $${body}$ & ${o.realParameters} & ${tags} \\\\`)
+    }
+    out.push('\\hline', '\\end{tabular}',
+      `\\caption{${escapeText(data.theory.name)}: kept operators of order ${order.order} (mass dimension ${order.dimension}).}`,
+      '\\end{table}', '')
+  }
+  return out.join('\n')
+}

@@ -1,0 +1,45 @@
+import { useDb } from './connection'
+import { fail } from '../http/apiHandler'
+
+export async function basisOr404(id: number) {
+  const row = await useDb()('bases as b').join('theories as t', 't.id', 'b.theory_id')
+    .where('b.id', id).first('b.*', 't.group_id', 't.name as theory_name', 't.definition as theory_definition')
+  if (!row) fail(404, `No basis with id ${id}`)
+  return row
+}
+
+export async function operatorOr404(id: number) {
+  const row = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id').join('theories as t', 't.id', 'b.theory_id')
+    .where('o.id', id).first('o.*', 't.group_id', 'b.theory_id')
+  if (!row) fail(404, `No operator with id ${id}`)
+  return row
+}
+
+/** Everything the board shows: classes, operators (both columns), tags and notes. */
+export async function boardData(basisId: number) {
+  const db = useDb()
+  const basis = await basisOr404(basisId)
+  const operators = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'class_key', 'column', 'position'])
+    .select('id', 'order', 'class_key as classKey', 'column', 'position', 'latex', 'latex_dirac as latexDirac', 'hermitian',
+      'real_parameters as realParameters', 'text', 'structure', 'version')
+  const ids = operators.map((o) => o.id)
+  const tags = ids.length ? await db('tags').whereIn('operator_id', ids).select('id', 'operator_id as operatorId', 'kind', 'label') : []
+  const notes = await db('annotations as a').leftJoin('users as u', 'u.id', 'a.author_id').where('a.theory_id', basis.theory_id)
+    .orderBy('a.created_at').select('a.id', 'a.operator_id as operatorId', 'a.body', 'a.created_at as createdAt', 'a.updated_at as updatedAt', 'a.author_id as authorId', 'u.display_name as authorName')
+  const thresholdTags = await db('threshold_tags').where({ theory_id: basis.theory_id }).select('id', 'term', 'field', 'text', 'details')
+  return {
+    basis: {
+      id: basis.id, theoryId: basis.theory_id, theoryName: basis.theory_name, theoryVersion: basis.theory_version,
+      countingRule: basis.counting_rule, maxOrder: basis.max_order, classes: basis.classes, note: basis.note, createdAt: basis.created_at,
+    },
+    operators: operators.map(({ structure, ...o }) => ({ ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1 })),
+    tags,
+    notes,
+    thresholdTags,
+    groupId: basis.group_id as number,
+  }
+}
+
+export function latestBasisOf(theoryId: number) {
+  return useDb()('bases').where({ theory_id: theoryId }).orderBy('id', 'desc').first('id')
+}

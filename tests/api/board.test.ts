@@ -1,0 +1,90 @@
+import { describe, it, expect, beforeAll } from 'vitest'
+import { buildWorld, addBasis, type World } from '../support/fixtures'
+import { messageOf } from '../support/client'
+import { testDb } from '../support/db'
+
+let world: World
+let basis: Awaited<ReturnType<typeof addBasis>>
+beforeAll(async () => {
+  world = await buildWorld()
+  basis = await addBasis(world)
+})
+
+async function version(id: number) {
+  return (await testDb()('operators').where({ id }).first('version')).version as number
+}
+
+describe('the basis board API', () => {
+  it('reads a basis with both columns for every member', async () => {
+    const res = await world.byRole.viewer.client.get(`/api/bases/${basis.basisId}`)
+    expect(res.status).toBe(200)
+    expect(res.body.operators.filter((o: any) => o.column === 'kept')).toHaveLength(3)
+    expect(res.body.operators.filter((o: any) => o.column === 'set_aside')).toHaveLength(1)
+  })
+
+  it('moves an operator, and reports a collaborator\'s move of the same operator instead of losing it', async () => {
+    const id = basis.operatorIds.B!
+    const v = await version(id)
+    const first = await world.byRole.editor.client.post(`/api/operators/${id}/move`, { column: 'set_aside', position: 0, version: v })
+    expect(first.status).toBe(200)
+    expect(first.body.operator).toMatchObject({ column: 'set_aside', position: 0, version: v + 1 })
+    expect(first.body.coverage).toMatchObject({ classKey: 'D^2 phi^2 phi*^2', required: 2 })
+    const stale = await world.owner.client.post(`/api/operators/${id}/move`, { column: 'kept', position: 0, version: v })
+    expect(stale.status).toBe(409)
+    expect(messageOf(stale)).toMatch(/moved this operator meanwhile/)
+    // A move of a different operator by the other collaborator merges.
+    const other = basis.operatorIds.A!
+    const merged = await world.owner.client.post(`/api/operators/${other}/move`, { column: 'set_aside', position: 5, version: await version(other) })
+    expect(merged.status).toBe(200)
+    const positions = await testDb()('operators').where({ basis_id: basis.basisId, column: 'set_aside' }).orderBy('position').select('id', 'position')
+    expect(positions.map((p) => p.position)).toEqual(positions.map((_, i) => i))
+  })
+
+  it('tags and filters: threshold tags name the field, duplicates are refused', async () => {
+    const id = basis.operatorIds.A!
+    const noLabel = await world.byRole.commenter.client.post(`/api/operators/${id}/tags`, { kind: 'threshold' })
+    expect(noLabel.status).toBe(400)
+    expect(messageOf(noLabel)).toMatch(/label: name the heavy field/)
+    const tag = await world.byRole.commenter.client.post(`/api/operators/${id}/tags`, { kind: 'threshold', label: 'coefficient shifts when T is integrated out' })
+    expect(tag.status).toBe(201)
+    const dup = await world.byRole.commenter.client.post(`/api/operators/${id}/tags`, { kind: 'threshold', label: 'coefficient shifts when T is integrated out' })
+    expect(dup.status).toBe(409)
+  })
+
+  it('notes keep their edit history', async () => {
+    const note = await world.byRole.commenter.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'first', operatorId: basis.operatorIds.A })
+    expect(note.status).toBe(201)
+    await world.byRole.commenter.client.patch(`/api/annotations/${note.body.annotation.id}`, { body: 'second' })
+    const hist = await world.byRole.viewer.client.get(`/api/annotations/${note.body.annotation.id}/revisions`)
+    expect(hist.body.revisions.map((r: any) => r.body)).toEqual(['first'])
+  })
+
+  it('exports LaTeX, CSV and JSON, and a JSON export imports back', async () => {
+    const client = world.byRole.viewer.client
+    const tex = await client.get(`/api/bases/${basis.basisId}/export?format=latex`)
+    expect(tex.status).toBe(200)
+    expect(String(tex.body)).toContain('kept operators of order 2')
+    const csv = await client.get(`/api/bases/${basis.basisId}/export?format=csv`)
+    expect(String(csv.body).split('\r\n')[0]).toMatch(/^order,dimension,class,column/)
+    const json = await client.get(`/api/bases/${basis.basisId}/export?format=json`)
+    expect(json.body.format).toBe('scalewright-basis')
+    expect((await client.get(`/api/bases/${basis.basisId}/export?format=pdf`)).status).toBe(400)
+
+    const snapshot = json.body
+    // Move everything to kept, then import the snapshot back: the columns return.
+    for (const op of await testDb()('operators').where({ basis_id: basis.basisId, column: 'set_aside' })) {
+      await testDb()('operators').where({ id: op.id }).update({ column: 'kept' })
+    }
+    const imp = await world.byRole.editor.client.post(`/api/bases/${basis.basisId}/import`, snapshot)
+    expect(imp.status, JSON.stringify(imp.body)).toBe(200)
+    const after = await testDb()('operators').where({ basis_id: basis.basisId }).select('text', 'column')
+    const expected = snapshot.orders.flatMap((o: any) => o.classes.flatMap((c: any) => c.operators.map((op: any) => ({ text: op.text, column: op.column }))))
+    expect(after.sort((a, b) => a.text.localeCompare(b.text))).toEqual(expected.sort((a: any, b: any) => a.text.localeCompare(b.text)))
+
+    const bad = structuredClone(snapshot)
+    bad.orders[0].classes[0].operators[0].text = 'no such operator'
+    const refused = await world.byRole.editor.client.post(`/api/bases/${basis.basisId}/import`, bad)
+    expect(refused.status).toBe(422)
+    expect(messageOf(refused)).toMatch(/not in this basis/)
+  })
+})
