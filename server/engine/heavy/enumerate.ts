@@ -1,0 +1,267 @@
+/**
+ * Heavy-particle (non-relativistic) frame: enumeration of the bilinear operators ψ† … ψ order
+ * by order in 1/m, modulo the heavy field's EOM and integration by parts, and the leading
+ * four-fermion sector ψ†ψ χ†χ when the antiparticle field is present.
+ *
+ * What "modulo EOM" removes: every operator with D_t acting on ψ (X·D_t ψ) or, after
+ * integration by parts, on ψ† — the leading-order field equation is iD_tψ = 0. Such
+ * operators are traded by the field redefinition ψ → ψ + (X/m^k)ψ for operators of higher
+ * order in 1/m, so the basis at each order is unchanged by the choice. Time derivatives that
+ * survive act between the ψ's only through ℰ = [D_t, D] (E) or ∂_t of a field strength. The
+ * gauge field's own EOM (Maxwell) is NOT used; see ConventionalOperator.gaugeEomNote.
+ */
+import { EngineCancelledError, EngineInputError } from '../errors'
+import type { CancelFlag } from '../finite'
+import type { Rational } from '../exact/rational'
+import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
+import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, type CoefficientRelation } from './conventional'
+import { comboLatex, structureBlocks } from './display'
+import { orderSpace } from './orderSpace'
+import { QuotientSpace } from './quotient'
+import { expandCombo, type Combo } from './structure'
+
+export interface HeavyOperator {
+  id: string
+  order: number
+  sector: 'leading' | 'bilinear' | 'fourFermion'
+  latex: string
+  /** Building-block counts of each term (for counting rules; the order is the lowest term). */
+  terms: Array<Record<string, number>>
+  combo?: Combo
+  antiHermitian?: boolean
+  coefficient?: string
+  relations: CoefficientRelation[]
+  gaugeEomNote?: string
+  source?: string
+}
+
+export interface HeavyOrder {
+  order: number
+  count: number
+  basis: HeavyOperator[]
+  /** The published operators of this order and whether they span exactly the same space. */
+  conventional: HeavyOperator[]
+  conventionalSpansBasis: boolean | null
+  candidates: number
+  relationRank: number
+  /** With an antiparticle field: the χ-bilinears, coefficients fixed by charge conjugation. */
+  antiparticle: HeavyOperator[]
+}
+
+export interface HeavyEnumeration {
+  particle: string
+  antiparticle?: string
+  charged: boolean
+  /** Colour dimension: 1 for an abelian gauge field, N for SU(N). */
+  colorN: number
+  leading: HeavyOperator
+  orders: HeavyOrder[]
+  fourFermion: HeavyOperator[]
+  eomNote: string
+  chargeConjugationNote?: string
+}
+
+export interface HeavyInput {
+  heavy: HeavyFrame
+  groups?: ReadonlyArray<{ name: string; type: string; n?: number; gauge?: boolean }>
+}
+
+export interface HeavyOptions {
+  onProgress?: (fraction: number, label: string) => void
+  signal?: CancelFlag
+}
+
+const EOM_NOTE =
+  'Removed by the heavy-field EOM iD_tψ = 0: every operator with D_t acting on ψ or (by parts) on ψ†; ' +
+  'their effect is moved to higher orders by a field redefinition. Antisymmetric [D_i, D_j] is written as B ' +
+  'and [D_t, D_i] as E. The gauge field\'s own EOM is not used.'
+
+/** Whether the heavy field couples to the gauge field, and its colour dimension (1 = abelian). */
+function gaugeInfo(input: HeavyInput): { charged: boolean; colorN: number } {
+  const { heavy, groups } = input
+  const g = groups?.find((x) => x.name === heavy.gaugeGroup)
+  if (groups && !g) throw new EngineInputError('enumerateHeavy', `gauge group "${heavy.gaugeGroup}" is not among the theory's groups`)
+  if (g && g.type === 'SU') return nonAbelianInfo(heavy, g.n ?? 0)
+  if (g && g.type !== 'U1') {
+    throw new EngineInputError('enumerateHeavy', `gauge group "${heavy.gaugeGroup}" has type ${g.type}; only U1 or SU(N) gauge groups are supported`)
+  }
+  const q = heavy.particle.charges?.[heavy.gaugeGroup]
+  return { charged: q !== undefined && !/^-?0+(\/\d+)?$/.test(String(q)), colorN: 1 }
+}
+
+function nonAbelianInfo(heavy: HeavyFrame, n: number): { charged: boolean; colorN: number } {
+  const labels = heavy.particle.reps?.[heavy.gaugeGroup]
+  if (!labels || labels.every((x) => x === 0)) return { charged: false, colorN: 1 }
+  const fund = labels.length === n - 1 && labels.reduce((a, b) => a + b, 0) === 1 && (labels[0] === 1 || labels[n - 2] === 1)
+  if (!fund) {
+    throw new EngineInputError('enumerateHeavy', `the heavy particle must be a fundamental or antifundamental of SU(${n}), got [${labels.join(',')}]`)
+  }
+  if (heavy.maxOrder > 3) {
+    throw new EngineInputError('enumerateHeavy', `non-abelian heavy-frame enumeration is limited to maxOrder 3, got ${heavy.maxOrder}`)
+  }
+  return { charged: true, colorN: n }
+}
+
+function termsOf(c: Combo, field: string): Array<Record<string, number>> {
+  const seen = new Map<string, Record<string, number>>()
+  for (const t of c) {
+    const b = structureBlocks(t.s, field)
+    seen.set(JSON.stringify(Object.entries(b).sort()), b)
+  }
+  return [...seen.values()]
+}
+
+/** The charge-conjugate χ-bilinear of a ψ-bilinear: ψ → χ, charge reversed (E, B → −E, −B). */
+function conjugateOperator(op: HeavyOperator, field: string, anti: string): HeavyOperator {
+  const swap = (t: Record<string, number>) => {
+    const out: Record<string, number> = {}
+    for (const [k, v] of Object.entries(t)) out[k === field ? anti : k === `${field}*` ? `${anti}*` : k] = v
+    return out
+  }
+  const nF = (op.terms[0]!.E ?? 0) + (op.terms[0]!.B ?? 0)
+  return {
+    ...op,
+    id: `${op.id}.C`,
+    latex: op.latex.split(`\\${field}`).join(`\\${anti}`),
+    terms: op.terms.map(swap),
+    relations: [{
+      coefficient: `c(${op.id}.C)`,
+      relation: `c(${op.id}.C) = c(${op.id})` + (nF % 2 === 0 ? '' : ' (E, B carry χ\'s charge −g: a sign −1 relative to ψ\'s E, B)'),
+      source: 'charge conjugation (common practice)',
+    }],
+  }
+}
+
+/** Published operators of one order, with the rank check against the enumerated space. */
+export function verifyConventional(order: number, signal?: CancelFlag): {
+  spans: boolean
+  rank: number
+  dimension: number
+  rewrites: Array<{ id: string; coefficients: Rational[] }>
+  /** For each enumerated basis operator, the published operators it involves. */
+  inverse: Array<{ basis: string; conventional: string[] }>
+} {
+  const os = orderSpace(order, true, signal)
+  const conv = CONVENTIONAL_OPERATORS.filter((c) => c.order === order)
+  const els = conv.map((c) => expandCombo(c.combo))
+  const convSpace = new QuotientSpace(els, os.space.relations, { signal })
+  const rank = convSpace.dimension
+  const rewrites = conv.map((c, i) => ({ id: c.id, coefficients: os.space.rewrite(els[i]!) }))
+  const spans = rank === os.space.dimension && rank === conv.length
+  const inverse = spans
+    ? os.space.basis.map((b, i) => {
+        const co = convSpace.rewrite(os.candidates[b]!.element)
+        return { basis: `m${order}.${i + 1}`, conventional: conv.filter((_, j) => co[convSpace.basis.indexOf(j)]!.num !== 0n).map((c) => c.id) }
+      })
+    : []
+  return { spans, rank, dimension: os.space.dimension, rewrites, inverse }
+}
+
+/** Attach the gauge-field EOM note to basis operators that involve Darwin or {D^i,(∇×B)^i}. */
+function annotateGaugeEom(basis: HeavyOperator[], inverse: Array<{ basis: string; conventional: string[] }>): void {
+  for (const op of basis) {
+    const inv = inverse.find((x) => x.basis === op.id)
+    const noted = CONVENTIONAL_OPERATORS.filter((c) => c.gaugeEomNote && inv?.conventional.includes(c.id))
+    if (noted.length > 0) op.gaugeEomNote = `involves ${noted.map((c) => c.id).join(', ')}: ${noted.map((c) => c.gaugeEomNote).join('; ')}`
+  }
+}
+
+function fourFermionSector(particle: string, anti: string, colorN: number): HeavyOperator[] {
+  const base = { [particle]: 1, [`${particle}*`]: 1, [anti]: 1, [`${anti}*`]: 1 }
+  const src = 'Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125 (annihilation form ψ†χ χ†ψ, ψ†σχ·χ†σψ, related by Fierz identities)'
+  const p = `\\${particle}`
+  const a = `\\${anti}`
+  const channels = colorN === 1 ? [''] : ['', 'T^a']
+  const out: HeavyOperator[] = []
+  for (const t of channels) {
+    out.push({ id: `ff.${out.length + 1}`, order: 2, sector: 'fourFermion', latex: `(${p}^\\dagger ${t} ${p})(${a}^\\dagger ${t} ${a})/m^2`, terms: [base], relations: [], source: src })
+    out.push({
+      id: `ff.${out.length + 1}`, order: 2, sector: 'fourFermion',
+      latex: `(${p}^\\dagger \\bm{\\sigma} ${t} ${p})\\cdot(${a}^\\dagger \\bm{\\sigma} ${t} ${a})/m^2`,
+      terms: [{ ...base, sigma: 2 }], relations: [], source: src,
+    })
+  }
+  return out
+}
+
+/**
+ * Enumerate the heavy-frame operator basis order by order up to heavy.maxOrder (≤ 4).
+ * @example enumerateHeavy({ heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2 } })
+ *   .orders.map((o) => o.count) // [2, 2]  (D², σ·B; Darwin, spin–orbit)
+ * Method: rotation-scalar, parity-even candidates completed to Hermitian T-even operators;
+ * independence modulo EOM + IBP from their gauge-field symbols (0, 1, 2 insertions) over two
+ * primes; greedy basis. Reference: Caswell, Lepage, Phys. Lett. B 167 (1986) 437;
+ * Manohar, Phys. Rev. D 56 (1997) 230.
+ */
+export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): HeavyEnumeration {
+  const { heavy } = input
+  const { charged, colorN } = gaugeInfo(input)
+  const field = heavy.particle.name
+  const orders: HeavyOrder[] = []
+  for (let n = 1; n <= heavy.maxOrder; n++) {
+    if (opts.signal?.aborted) throw new EngineCancelledError('heavy enumeration')
+    opts.onProgress?.((n - 1) / heavy.maxOrder, `order 1/m^${n}`)
+    const os = orderSpace(n, charged, opts.signal, colorN)
+    const basis = os.space.basis.map((b, i): HeavyOperator => {
+      const c = os.candidates[b]!
+      return {
+        id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field),
+        terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
+      }
+    })
+    const convData = charged && colorN === 1 ? CONVENTIONAL_OPERATORS.filter((c) => c.order === n) : []
+    const conventional = convData.map((c): HeavyOperator => ({
+      id: c.id, order: n, sector: 'bilinear', latex: c.latex, terms: termsOf(c.combo, field), combo: c.combo,
+      coefficient: c.coefficient, relations: c.relations, gaugeEomNote: c.gaugeEomNote, source: c.source,
+    }))
+    const check = convData.length > 0 ? verifyConventional(n, opts.signal) : null
+    if (check) annotateGaugeEom(basis, check.inverse)
+    const spans = check ? check.spans : null
+    orders.push({
+      order: n, count: basis.length, basis, conventional, conventionalSpansBasis: spans,
+      candidates: os.candidates.length, relationRank: os.space.relationRank,
+      antiparticle: heavy.antiparticle ? basis.map((b) => conjugateOperator(b, field, heavy.antiparticle!.name)) : [],
+    })
+  }
+  opts.onProgress?.(1, 'done')
+  const anti = heavy.antiparticle?.name
+  return {
+    particle: field,
+    antiparticle: anti,
+    charged,
+    colorN,
+    leading: { ...LEADING_OPERATOR, sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
+    orders,
+    fourFermion: anti && heavy.maxOrder >= 2 ? fourFermionSector(field, anti, colorN) : [],
+    eomNote: EOM_NOTE,
+    chargeConjugationNote: anti
+      ? `Charge conjugation fixes the ${anti}-bilinears: the same operators with ψ → χ and E, B → −E, −B carry the same coefficients, so they add no free coefficient.`
+      : undefined,
+  }
+}
+
+/**
+ * Enumerate for a whole theory file: requires "frame": "heavy" and a "heavy" key.
+ * @example enumerateHeavyTheory(parseTheory(vexoniumPreset)).orders.map((o) => o.count) // [2, 2, 7]
+ * Method/reference: as enumerateHeavy.
+ */
+export function enumerateHeavyTheory(
+  theory: { frame: string; groups: HeavyInput['groups']; heavy?: HeavyFrame },
+  opts: HeavyOptions = {},
+): HeavyEnumeration {
+  if (theory.frame !== 'heavy') throw new EngineInputError('enumerateHeavyTheory', `the theory has frame "${theory.frame}"; the heavy-particle engine needs frame "heavy"`)
+  if (!theory.heavy) throw new EngineInputError('enumerateHeavyTheory', 'frame "heavy" needs a "heavy" key (particle, gaugeGroup, maxOrder)')
+  return enumerateHeavy({ heavy: theory.heavy, groups: theory.groups }, opts)
+}
+
+/**
+ * Rewrite any bilinear operator of one order (given as a combination of structures) as an
+ * exact combination of the enumerated basis, modulo EOM and IBP.
+ * @example rewriteHeavy(combo([[1,'D_i T D_i']]), 2) // Darwin-type: coefficients on the 1/m² basis
+ * Method: solve over two primes, CRT and rational reconstruction. Reference: Wang, SYMSAC 1981.
+ */
+export function rewriteHeavy(target: Combo, order: number, charged = true, signal?: CancelFlag, colorN = 1): Array<{ id: string; coef: Rational }> {
+  const os = orderSpace(order, charged, signal, colorN)
+  const coefs = os.space.rewrite(expandCombo(target))
+  return coefs.map((coef, i) => ({ id: `m${order}.${i + 1}`, coef }))
+}

@@ -1,0 +1,42 @@
+import { z } from 'zod'
+
+/**
+ * Heavy-particle (non-relativistic) frame of a theory ("frame": "heavy").
+ * A heavy fermion is described by a two-component Pauli field (particle.name, default "psi"),
+ * optionally with its antiparticle field (antiparticle.name, e.g. "chi"), coupled to the gauge
+ * field of `gaugeGroup` (a group of the theory; abelian U(1) supported by the engine).
+ * Building blocks: psi, psi†, D_t, spatial D, E, B and the Pauli matrices sigma.
+ * maxOrder: highest power of 1/m enumerated in the bilinear sector (1..4).
+ */
+const NameSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,15}$/, {
+  message: 'a name is a letter followed by up to 15 letters, digits or "_"',
+})
+
+export const HeavyParticleSchema = z.object({
+  name: NameSchema,
+  reps: z.record(NameSchema, z.array(z.number().int().min(0).max(8)).max(7)).optional(),
+  charges: z
+    .record(NameSchema, z.union([z.string().regex(/^-?(0|[1-9]\d{0,8})(\/[1-9]\d{0,8})?$/), z.number().int()]))
+    .optional(),
+  description: z.string().max(200).optional(),
+})
+
+export const HeavyFrameSchema = z
+  .object({
+    particle: HeavyParticleSchema,
+    antiparticle: z.object({ name: NameSchema }).optional(),
+    gaugeGroup: NameSchema,
+    maxOrder: z.number().int().min(1).max(4),
+  })
+  .superRefine((h, ctx) => {
+    if (h.antiparticle && h.antiparticle.name === h.particle.name) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['antiparticle', 'name'],
+        message: `heavy frame: the antiparticle field needs its own name, but both are "${h.particle.name}"`,
+      })
+    }
+  })
+
+export type HeavyFrame = z.infer<typeof HeavyFrameSchema>
+export type HeavyParticle = z.infer<typeof HeavyParticleSchema>
