@@ -56,7 +56,7 @@ function main(): void {
     const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf') })
     const out = {
       theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
-      byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, classes: d.classes.map(classJson) })),
+      byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })),
     }
     process.stdout.write(`${JSON.stringify(out, null, 2)}\n`)
   } catch (e) {

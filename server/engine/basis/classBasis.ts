@@ -1,0 +1,201 @@
+/**
+ * The independent operators of one class: candidates evaluated as symmetrised contact
+ * amplitudes at random on-shell points over two primes, exact elimination for the rank,
+ * greedy choice of kept operators under the user's priorities. Results hold modulo
+ * equations of motion and integration by parts; terms proportional to the equations of
+ * motion move into other classes.
+ */
+import { EngineConsistencyError } from '../errors'
+import { PrimeField, workingPrimes } from '../finite/primeField'
+import { rref } from '../finite/matrix'
+import type { Theory } from '../../../shared/schemas/theory'
+import { parseClassKey, conjugateClass, type OperatorClass } from './classKey'
+import { theoryParticles, type Particle } from './particles'
+import { classCandidates, type Candidate } from './candidates'
+import { pairRows, samplePoints, type SamplePoint } from './evaluation'
+import { identicalLegPermutations, type LegPermutation } from './symmetry'
+import { formatLorentz, parseOperatorText, type ParsedTerm } from './inputSyntax'
+import type { SuStructure } from './gaugeStructures'
+import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
+import type { LorentzStructure } from './lorentzStructures'
+
+export const BASIS_NOTE = 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes'
+
+export interface Priorities {
+  /** Particle labels (e.g. "H", "H*") on which derivatives are preferred. */
+  derivativesOn?: string[]
+  /** Operators (input syntax, per class key) to keep first when independent. */
+  keep?: Record<string, string[]>
+  /** Prefer Hermitian combinations where the class is self-conjugate (default true). */
+  preferHermitian?: boolean
+}
+
+export interface ClassOptions {
+  priorities?: Priorities
+  signal?: { aborted: boolean }
+  /** Extra random rows beyond the number of columns (default 12). */
+  margin?: number
+}
+
+/** One column of the selection: a candidate, or an operator the user asked to keep. */
+export interface Column {
+  text: string
+  source: 'candidate' | 'kept' | 'hermitian'
+  terms: { coeff: number[]; lorentz: LorentzStructure; gauge: SuStructure[] }[]
+  candidate?: Candidate
+  /** For 'hermitian' columns: +1 for O + h.c., −1 for O − h.c. */
+  conjSign?: 1 | -1
+  /** For 'hermitian' columns: the partner combination vanishes, so O itself is Hermitian (up to a phase). */
+  selfHermitian?: boolean
+}
+
+export interface PrimeData {
+  F: PrimeField
+  points: SamplePoint[]
+  /** Values of the chosen (pivot) columns at every point: rows × rank. */
+  keptRows: number[][]
+}
+
+export interface ClassBasis {
+  key: string
+  class: OperatorClass
+  conjugateKey: string
+  selfConjugate: boolean
+  dimension: number
+  candidates: number
+  rank: number
+  /** Column texts of the kept operators, in selection order. */
+  kept: Column[]
+  gaugeStructures: SuStructure[][]
+  perms: LegPermutation[]
+  primes: PrimeData[]
+  note: string
+}
+
+function hashSeed(s: string): number {
+  let h = 2166136261
+  for (let i = 0; i < s.length; i++) h = Math.imul(h ^ s.charCodeAt(i), 16777619) >>> 0
+  return h
+}
+
+function derivativeScore(c: Candidate, legs: Particle[], preferred: Set<string>): number {
+  return c.lorentz.derivs.reduce((s, d, i) => s + (preferred.has(legs[i]!.label) ? 0 : d), 0)
+}
+
+function buildColumns(cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
+  const pref = new Set(pr?.derivativesOn ?? [])
+  const keptTexts = pr?.keep?.[cls.key] ?? []
+  const primes = workingPrimes(2).map((p) => new PrimeField(p))
+  const kept: Column[] = keptTexts.map((text) => {
+    const parsed = parseOperatorText(cls, text, gauge.length)
+    return { text, source: 'kept', terms: parsed.map((t) => termOf(t, gauge, primes)) }
+  })
+  const order = cands.map((c, i) => ({ c, i, s: derivativeScore(c, cls.legs, pref) }))
+  order.sort((a, b) => a.s - b.s || a.i - b.i)
+  const nG = gauge.length
+  const cols: Column[] = order.map(({ c, i }) => ({
+    text: formatLorentz(c.lorentz, nG > 1 ? i % nG : null),
+    source: 'candidate' as const,
+    terms: [{ coeff: [1, 1], lorentz: c.lorentz, gauge: c.gauge }],
+    candidate: c,
+  }))
+  return [...kept, ...cols]
+}
+
+/**
+ * In a self-conjugate class, replace every candidate O by O + h.c. and O − h.c. (each
+ * Hermitian up to a phase); the span is unchanged, so the greedy choice returns Hermitian
+ * operators. Conjugates are built structurally (conjugation.ts).
+ */
+function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
+  const pi = conjugateLegMap(cls)
+  const cacheL = new Map<string, LorentzStructure>()
+  const cacheG = new Map<string, SuStructure[]>()
+  const share = <T>(cache: Map<string, T>, x: T): T => {
+    const k = JSON.stringify(x)
+    if (!cache.has(k)) cache.set(k, x)
+    return cache.get(k)!
+  }
+  for (const c of cols) for (const t of c.terms) { t.lorentz = share(cacheL, t.lorentz); t.gauge = share(cacheG, t.gauge) }
+  return cols.flatMap((c) => {
+    if (c.source !== 'candidate') return [c]
+    const t = c.terms[0]!
+    const bar = { lorentz: share(cacheL, conjugateLorentz(t.lorentz, pi)), gauge: share(cacheG, t.gauge.map((s) => conjugateSu(s, pi))) }
+    return ([1, -1] as const).map((sg) => ({
+      text: `(${c.text}) ${sg === 1 ? '+' : '-'} h.c.`, source: 'hermitian' as const, candidate: c.candidate, conjSign: sg,
+      terms: [t, { ...bar, coeff: sg === 1 ? [1, 1] : workingPrimes(2).map((p) => p - 1) }],
+    }))
+  })
+}
+
+function termOf(t: ParsedTerm, gauge: SuStructure[][], primes: PrimeField[]): Column['terms'][number] {
+  return { coeff: primes.map((F) => F.fromRational(t.coeff)), lorentz: t.lorentz, gauge: gauge[t.gaugeIndex]! }
+}
+
+/**
+ * The basis of one class given by key, e.g. classBasis(smeft, "H^3 H*^3").
+ * @example classBasis(realScalar, "phi^6").rank // 1
+ * Method: amplitude–operator correspondence with numerical rank over F_p (Shadmi & Weiss,
+ * JHEP 02 (2019) 165; Durieux, Kitahara, Shadmi & Weiss, JHEP 10 (2020) 175);
+ * two primes must agree (else EngineConsistencyError).
+ */
+export function classBasis(theory: Theory, classKey: string | OperatorClass, opts: ClassOptions = {}): ClassBasis {
+  const particles = theoryParticles(theory)
+  const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
+  const { candidates, gauge } = classCandidates(theory, cls)
+  const perms = identicalLegPermutations(cls.legs)
+  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(cls, candidates, gauge, opts.priorities)
+  const selfConjugate = conjugateClass(particles, cls).key === cls.key
+  const columns = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
+  // The Hermitian columns span the same space as `base`, so base.length rows bound the rank.
+  const nRows = base.length + (opts.margin ?? 12)
+  const results = workingPrimes(2).map((p, pi) => {
+    const F = new PrimeField(p)
+    const points = samplePoints(F, theory, cls, nRows, hashSeed(`${cls.key}#${pi}`))
+    const matrix = columnMatrix(F, pi, columns, points, perms, opts.signal)
+    const e = rref(F, matrix, opts.signal)
+    const keptRows = matrix.map((row) => e.pivots.map((c) => row[c]!))
+    const zero = columns.map((_, j) => matrix.every((row) => row[j] === 0))
+    return { F, points, pivots: e.pivots, keptRows, zero }
+  })
+  const [a, b] = results as [typeof results[0], typeof results[0]]
+  if (a.pivots.join(',') !== b.pivots.join(',')) {
+    throw new EngineConsistencyError('classBasis', `class ${cls.key}: ranks/pivots differ between primes ${a.F.p} (${a.pivots.length}) and ${b.F.p} (${b.pivots.length})`)
+  }
+  const conj = conjugateClass(particles, cls)
+  const kept = a.pivots.map((c) => markSelfHermitian(columns, c, a.zero))
+  return {
+    key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: conj.key === cls.key,
+    dimension: cls.dim2 / 2, candidates: candidates.length, rank: a.pivots.length,
+    kept, gaugeStructures: gauge, perms,
+    primes: results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) })), note: BASIS_NOTE,
+  }
+}
+
+/** A chosen O ± h.c. whose partner O ∓ h.c. vanishes equals 2·O: keep O itself. */
+function markSelfHermitian(columns: Column[], j: number, zero: boolean[]): Column {
+  const c = columns[j]!
+  if (c.source !== 'hermitian') return c
+  const partner = c.conjSign === 1 ? j + 1 : j - 1
+  if (zero[partner] !== true) return { ...c, selfHermitian: false }
+  return { ...c, selfHermitian: true, terms: [c.terms[0]!], text: c.text.replace(/^\((.*)\) [+-] h\.c\.$/, '$1') }
+}
+
+function halveSelfHermitian(F: PrimeField, rows: number[][], kept: Column[]): number[][] {
+  const half = F.inv(2)
+  return rows.map((row) => row.map((v, i) => (kept[i]!.selfHermitian ? F.mul(v, half) : v)))
+}
+
+function columnMatrix(F: PrimeField, pi: number, columns: Column[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {
+  const pairIndex = new Map<LorentzStructure, Map<SuStructure[], number>>()
+  const pairs: { lorentz: LorentzStructure; gauge: SuStructure[] }[] = []
+  const refs = columns.map((c) => c.terms.map((t) => {
+    let inner = pairIndex.get(t.lorentz)
+    if (!inner) pairIndex.set(t.lorentz, (inner = new Map()))
+    let k = inner.get(t.gauge)
+    if (k === undefined) { k = pairs.length; inner.set(t.gauge, k); pairs.push({ lorentz: t.lorentz, gauge: t.gauge }) }
+    return { k, coeff: t.coeff[pi]! }
+  }))
+  const table = pairRows(F, pairs, points, perms, signal)
+  return table.map((row) => refs.map((terms) => terms.reduce((s, { k, coeff }) => F.add(s, F.mul(coeff, row[k]!)), 0)))
+}

@@ -1,0 +1,64 @@
+/**
+ * Structured description of kept operators: fields, derivatives, spinor and gauge
+ * contractions, the input-syntax text and two-component LaTeX.
+ */
+import type { ClassBasis, Column } from './classBasis'
+import { operatorLatex } from './latex'
+import { hermiticityOf } from './hermiticity'
+
+export interface BasisOperator {
+  /** Input-syntax text (see inputSyntax.ts), e.g. "<12>^2[34]^2". */
+  text: string
+  latex: string
+  source: 'candidate' | 'kept' | 'hermitian'
+  fields: string[]
+  /** Derivatives per leg (legs in class-key order). */
+  derivatives: number[]
+  angle: [number, number][]
+  square: [number, number][]
+  /** δ and ε contractions per SU(N) group, as slot lists. */
+  gauge: { group: string; deltas: [number, number][]; eps: number[][] }[]
+  /** Hermitian up to a phase (self-conjugate classes); false when the conjugate lies in the conjugate class. */
+  hermitian: boolean
+  /** Real parameters carried by this operator for one flavor (1 Hermitian, 2 otherwise). */
+  realParameters: number
+  /** Flavor components (filled by the flavor decomposition; 1 for one flavor). */
+  flavorComponents: number
+  /**
+   * CP of a Hermitian operator of a self-conjugate class without fermions ("even"/"odd"),
+   * with the convention ⟨ij⟩* = [ji], δ and ε real; null where not determined (fermions,
+   * non-Hermitian operators: those give one CP-even and one CP-odd real parameter).
+   */
+  cp: 'even' | 'odd' | null
+}
+
+/**
+ * Describe every kept operator of a class basis.
+ * @example describeOperators(classBasis(phi, "phi^6"))[0].latex // "phi\\,phi\\,…"
+ */
+export function describeOperators(b: ClassBasis): BasisOperator[] {
+  const herm = hermiticityOf(b)
+  const bosonic = b.class.legs.every((p) => !p.fermion)
+  return b.kept.map((col: Column, i) => {
+    const t = col.terms[0]!
+    const herm1 = col.source === 'hermitian'
+    const single = col.terms.length === 1 || herm1
+    const base = single ? operatorLatex(b.class.legs, t.lorentz, t.gauge) : col.text
+    const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
+    const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
+    return {
+      text: col.text,
+      latex: base + hc,
+      cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
+      source: col.source,
+      fields: b.class.legs.map((p) => p.label),
+      derivatives: single ? t.lorentz.derivs : [],
+      angle: single ? t.lorentz.angle : [],
+      square: single ? t.lorentz.square : [],
+      gauge: single ? t.gauge.map((s) => ({ group: s.group, deltas: s.deltas, eps: s.eps })) : [],
+      hermitian: herm[i]!,
+      realParameters: herm[i]! ? 1 : 2,
+      flavorComponents: 1,
+    }
+  })
+}

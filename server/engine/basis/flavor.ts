@@ -1,0 +1,108 @@
+/**
+ * Flavor decomposition of a class. Operators with open flavor indices on m identical
+ * fields are (V' ⊗ (C^{N_f})^{⊗m})^{S_m}, V' the space of unsymmetrised contact amplitudes
+ * with the Fermi sign; by Schur–Weyl duality their number is Σ_λ m_λ · dim_{GL(N_f)}(λ),
+ * with m_λ = rank of the Young symmetrizer Y_λ on V' (one product over blocks of identical
+ * fields). Each (structure, λ) pair kept is one explicit operator whose flavor tensor has the
+ * Young symmetry λ; it has dim_{GL(N_f)}(λ) independent flavor components.
+ */
+import { EngineConsistencyError } from '../errors'
+import { PrimeField, workingPrimes } from '../finite/primeField'
+import { rref } from '../finite/matrix'
+import { partitionsOf } from '../group/symmetricGroup'
+import type { Theory } from '../../../shared/schemas/theory'
+import type { ClassBasis } from './classBasis'
+import { classCandidates } from './candidates'
+import { amplitudeRows, samplePoints } from './evaluation'
+import { composeBlocks, glDimension, standardTableaux, youngSymmetrizer } from './young'
+import type { LegPermutation } from './symmetry'
+import { formatLorentz } from './inputSyntax'
+import { operatorLatex } from './latex'
+
+export interface FlavorOperator {
+  text: string
+  latex: string
+  /** Young diagram per block of identical fields (blocks in class order). */
+  young: number[][]
+  flavorComponents: number
+}
+
+export interface FlavorSummary {
+  nf: number
+  /** Flavor number per block of identical fields, with the block's particle label. */
+  blocks: { label: string; size: number; flavors: number }[]
+  /** Complex count of this class with flavors. */
+  count: number
+  hilbert: number
+  realParameters: number
+  tallyOk: boolean
+  message?: string
+  decomposition: { young: number[][]; multiplicity: number; componentsEach: number }[]
+  operators: FlavorOperator[]
+}
+
+function blocksOf(b: ClassBasis, nf: number | undefined): { legs: number[]; label: string; flavors: number; fermion: boolean }[] {
+  const out: { legs: number[]; label: string; flavors: number; fermion: boolean }[] = []
+  b.class.legs.forEach((p, i) => {
+    const last = out[out.length - 1]
+    if (last && last.label === p.label) last.legs.push(i)
+    else out.push({ legs: [i], label: p.label, flavors: p.flavored ? nf ?? p.flavors : 1, fermion: p.fermion })
+  })
+  return out
+}
+
+function product<T>(lists: T[][]): T[][] {
+  return lists.reduce<T[][]>((acc, l) => acc.flatMap((a) => l.map((x) => [...a, x])), [[]])
+}
+
+/**
+ * Decompose a class into flavor symmetries and count its operators for N_f flavors.
+ * @example flavorDecomposition(t, classBasis(t, "L^2 H^2"), 3, 6).count // 6 (Weinberg: symmetric in flavor)
+ * Method: Young symmetrizers on the amplitude space (Fulton & Harris §4.1), GL(N) dimensions
+ * by the hook-content formula; tally against the Hilbert series with N_f flavors
+ * (Henning, Lu, Melia & Murayama, JHEP 08 (2017) 016).
+ */
+export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undefined, hilbert: number, signal?: { aborted: boolean }): FlavorSummary {
+  const blocks = blocksOf(b, nf)
+  const n = b.class.legs.length
+  const { lorentz, gauge, candidates } = classCandidates(t, b.class)
+  const nG = gauge.length
+  const primes = workingPrimes(2).map((p) => new PrimeField(p))
+  const points = primes.map((F, pi) => samplePoints(F, t, b.class, candidates.length + 12, 7919 + pi))
+  const shapes = product(blocks.map((bl) => partitionsOf(bl.legs.length)))
+  const decomposition: FlavorSummary['decomposition'] = []
+  const operators: FlavorOperator[] = []
+  let dimV = 0
+  for (const young of shapes) {
+    const ys = young.map((lam, i) => youngSymmetrizer(lam, blocks[i]!.legs, n, blocks[i]!.fermion))
+    const terms: LegPermutation[] = ys.reduce((acc, y) => composeBlocks(acc, y), [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }])
+    const piv = primes.map((F, pi) => rref(F, amplitudeRows(F, lorentz, gauge, points[pi]!, terms, signal), signal).pivots)
+    if (piv[0]!.join() !== piv[1]!.join()) throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}, Young ${JSON.stringify(young)}: primes disagree (${piv[0]!.length} vs ${piv[1]!.length})`)
+    const mult = piv[0]!.length
+    dimV += mult * young.reduce((s, lam) => s * standardTableaux(lam), 1)
+    const each = young.reduce((s, lam, i) => s * glDimension(lam, blocks[i]!.flavors), 1)
+    if (mult === 0 || each === 0) continue
+    decomposition.push({ young, multiplicity: mult, componentsEach: each })
+    for (const c of piv[0]!) {
+      const cand = candidates[c]!
+      operators.push({
+        text: formatLorentz(cand.lorentz, nG > 1 ? c % nG : null),
+        latex: operatorLatex(b.class.legs, cand.lorentz, cand.gauge),
+        young, flavorComponents: each,
+      })
+    }
+  }
+  const full = primes.map((F, pi) => rref(F, amplitudeRows(F, lorentz, gauge, points[pi]!, [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }], signal), signal).rank)
+  if (full[0] !== dimV || full[1] !== dimV) {
+    throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}: Σ m_λ f^λ = ${dimV} differs from the unsymmetrised rank ${full.join('/')}`)
+  }
+  const count = decomposition.reduce((s, d) => s + d.multiplicity * d.componentsEach, 0)
+  const ok = count === hilbert
+  return {
+    nf: nf ?? Math.max(...blocks.map((bl) => bl.flavors)),
+    blocks: blocks.map((bl) => ({ label: bl.label, size: bl.legs.length, flavors: bl.flavors })),
+    count, hilbert, realParameters: b.selfConjugate ? count : 2 * count, tallyOk: ok,
+    ...(ok ? {} : { message: `class ${b.key}: flavor count ${count} differs from Hilbert-series count ${hilbert}` }),
+    decomposition, operators,
+  }
+}

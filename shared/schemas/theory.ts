@@ -1,0 +1,197 @@
+import { z } from 'zod'
+import { CountingRuleSchema } from './countingRules'
+import { HeavyFrameSchema } from './heavyFrame'
+import { EngineInputError } from '../../server/engine/errors'
+import { suReality } from '../../server/engine/group/irrep'
+import { suDimension } from '../../server/engine/group/weights'
+
+/**
+ * Theory file of Scalewright (JSON, uploaded by users and built by the editor).
+ * Keys are part of the portable file format: extend, never rename.
+ *
+ * - groups: SU(n) (2 <= n <= 8), U1, or Z (Z_n, 2 <= n <= 64); `gauge` false = global symmetry.
+ * - fields: lorentz "S" scalar (complex unless real), "L" left-handed Weyl fermion (1/2,0),
+ *   "R" right-handed Weyl fermion (0,1/2), "F" field strength of the gauge group `gaugeOf`
+ *   (both chiral halves, real, adjoint; a singlet of every other group).
+ *   reps: Dynkin labels per SU(n) group (absent = singlet); charges: rational strings per U1
+ *   ("1/6"), integers mod n per Z group (absent = 0); flavors: 1..6 (default 1).
+ *   Complex fields bring their conjugates.
+ */
+export const NAME_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,15}$/
+export const MAX_FIELDS = 40
+export const MAX_GROUPS = 8
+export const MAX_FLAVORS = 6
+export const MAX_REP_DIMENSION = 1000
+
+const NameSchema = z.string().regex(NAME_PATTERN, {
+  message: 'a name is a letter followed by up to 15 letters, digits or "_"',
+})
+const ChargeSchema = z.union([
+  z.string().regex(/^\s*-?\d{1,9}(\s*\/\s*\d{1,9})?\s*$/, { message: 'a charge is a rational written "p/q" or an integer, e.g. "1/6"' }),
+  z.number().int().min(-1e9).max(1e9),
+])
+
+export const GroupSchema = z.object({
+  name: NameSchema,
+  type: z.enum(['SU', 'U1', 'Z']),
+  n: z.number().int().optional(),
+  gauge: z.boolean(),
+  description: z.string().max(200).optional(),
+})
+
+export const FieldSchema = z.object({
+  name: NameSchema,
+  lorentz: z.enum(['S', 'L', 'R', 'F']),
+  reps: z.record(NameSchema, z.array(z.number().int().min(0).max(12)).max(7)).optional(),
+  charges: z.record(NameSchema, ChargeSchema).optional(),
+  real: z.boolean().optional(),
+  flavors: z.number().int().min(1).max(MAX_FLAVORS).optional(),
+  gaugeOf: NameSchema.optional(),
+  description: z.string().max(200).optional(),
+})
+
+export const TheorySchema = z
+  .object({
+    name: z.string().min(1).max(80),
+    description: z.string().max(2000).optional(),
+    frame: z.enum(['relativistic', 'heavy']),
+    maxOrder: z.number().int().min(0).max(40).optional(),
+    groups: z.array(GroupSchema).max(MAX_GROUPS),
+    fields: z.array(FieldSchema).max(MAX_FIELDS),
+    countingRules: z.array(CountingRuleSchema).optional(),
+    heavy: HeavyFrameSchema.optional(),
+  })
+  .superRefine((t, ctx) => checkTheory(t, (path, message) => ctx.addIssue({ code: 'custom', path, message })))
+
+export type Theory = z.infer<typeof TheorySchema>
+export type TheoryGroup = z.infer<typeof GroupSchema>
+export type TheoryField = z.infer<typeof FieldSchema>
+
+type Report = (path: (string | number)[], message: string) => void
+
+function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: unknown }, report: Report): void {
+  if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'the "heavy" key needs "frame": "heavy"')
+  const groups = new Map<string, TheoryGroup>()
+  t.groups.forEach((g, i) => {
+    const at = `groups[${i}] "${g.name}"`
+    if (groups.has(g.name)) report(['groups', i, 'name'], `${at}: duplicate group name`)
+    groups.set(g.name, g)
+    if (g.type === 'SU' && (g.n === undefined || g.n < 2 || g.n > 8)) report(['groups', i, 'n'], `${at}: SU(n) needs n from 2 to 8, but n = ${g.n}`)
+    if (g.type === 'Z' && (g.n === undefined || g.n < 2 || g.n > 64)) report(['groups', i, 'n'], `${at}: Z_n needs n from 2 to 64, but n = ${g.n}`)
+    if (g.type === 'U1' && g.n !== undefined) report(['groups', i, 'n'], `${at}: a U1 group takes no n, but n = ${g.n}`)
+  })
+  const names = new Set<string>()
+  const strengths = new Set<string>()
+  t.fields.forEach((f, i) => {
+    const at = `fields[${i}] "${f.name}"`
+    const bad = (key: string | number, message: string, ...more: (string | number)[]) => report(['fields', i, key, ...more], `${at}: ${message}`)
+    if (names.has(f.name)) bad('name', 'duplicate field name')
+    if (f.name === 'D') bad('name', 'the name "D" is reserved for the covariant derivative')
+    names.add(f.name)
+    checkReps(f, groups, bad)
+    checkCharges(f, groups, bad)
+    if (f.lorentz === 'F') checkStrength(f, groups, strengths, bad)
+    else if (f.gaugeOf !== undefined) bad('gaugeOf', `only a field strength (lorentz "F") has gaugeOf, but lorentz = ${f.lorentz}`)
+    if (f.real && f.lorentz !== 'S') bad('real', `only a scalar can be declared real, but lorentz = ${f.lorentz}`)
+    if (f.real && f.lorentz === 'S') checkRealScalar(f, groups, bad)
+  })
+}
+
+type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void
+
+function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
+  for (const [gname, labels] of Object.entries(f.reps ?? {})) {
+    const g = groups.get(gname)
+    if (!g) { bad('reps', `unknown group ${gname}`, gname); continue }
+    if (g.type !== 'SU') { bad('reps', `${gname} is ${g.type}: reps are Dynkin labels of SU groups only (use charges)`, gname); continue }
+    if (labels.length !== (g.n ?? 0) - 1) bad('reps', `${gname} = SU(${g.n}) needs ${(g.n ?? 0) - 1} Dynkin labels, but got [${labels.join(',')}]`, gname)
+    else if (validSU(g.n) && suDimension(g.n!, labels) > MAX_REP_DIMENSION) {
+      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but ${gname} = [${labels.join(',')}] has dimension ${suDimension(g.n!, labels)}`, gname)
+    }
+    if (f.lorentz === 'F' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from gaugeOf, but reps.${gname} = [${labels.join(',')}]`, gname)
+  }
+}
+
+function checkCharges(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
+  for (const [gname, q] of Object.entries(f.charges ?? {})) {
+    const g = groups.get(gname)
+    if (!g) { bad('charges', `unknown group ${gname}`, gname); continue }
+    if (g.type === 'SU') { bad('charges', `${gname} is SU(${g.n}): give Dynkin labels in reps, not a charge`, gname); continue }
+    if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z${g.n} charge is an integer mod ${g.n}, but ${gname} = ${q}`, gname)
+    if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `zero denominator in ${gname} = ${q}`, gname)
+    if (f.lorentz === 'F' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge, but ${gname} = ${q}`, gname)
+  }
+}
+
+function checkStrength(f: TheoryField, groups: Map<string, TheoryGroup>, strengths: Set<string>, bad: Bad): void {
+  const g = f.gaugeOf === undefined ? undefined : groups.get(f.gaugeOf)
+  if (f.gaugeOf === undefined) bad('gaugeOf', 'a field strength (lorentz "F") needs gaugeOf, the name of its gauge group')
+  else if (!g) bad('gaugeOf', `unknown group ${f.gaugeOf}`)
+  else if (!g.gauge) bad('gaugeOf', `${f.gaugeOf} is a global symmetry (gauge false) and has no field strength`)
+  else if (g.type === 'Z') bad('gaugeOf', `${f.gaugeOf} is a discrete group Z${g.n} and has no field strength`)
+  else if (strengths.has(f.gaugeOf)) bad('gaugeOf', `${f.gaugeOf} already has a field strength`)
+  if (f.gaugeOf !== undefined) strengths.add(f.gaugeOf)
+  if (f.flavors !== undefined && f.flavors !== 1) bad('flavors', `a field strength has one flavor, but flavors = ${f.flavors}`)
+}
+
+function checkRealScalar(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
+  for (const [gname, q] of Object.entries(f.charges ?? {})) {
+    const g = groups.get(gname)
+    if (g?.type === 'U1' && !isZeroCharge(q)) bad('charges', `a real scalar must have zero U(1) charges, but ${gname} = ${String(q).trim()}`, gname)
+    if (g?.type === 'Z' && g.n !== undefined && /^\s*-?\d+\s*$/.test(String(q)) && (2 * Number(q)) % g.n !== 0) {
+      bad('charges', `a real scalar needs a self-conjugate Z${g.n} charge (2q = 0 mod ${g.n}), but ${gname} = ${q}`, gname)
+    }
+  }
+  for (const [gname, labels] of Object.entries(f.reps ?? {})) {
+    const g = groups.get(gname)
+    if (g?.type !== 'SU' || !validSU(g.n) || labels.length !== (g.n ?? 0) - 1) continue
+    const reality = suReality(g.n ?? 0, labels)
+    if (reality !== 'real') bad('reps', `a real scalar must sit in a real representation, but ${gname} = [${labels.join(',')}] is ${reality}`, gname)
+  }
+}
+
+function validSU(n: number | undefined): boolean {
+  return n !== undefined && Number.isInteger(n) && n >= 2 && n <= 8
+}
+
+function isZeroCharge(q: string | number): boolean {
+  return /^\s*-?0+(\s*\/\s*\d+)?\s*$/.test(String(q))
+}
+
+/** Readable one-line-per-problem text of a zod error, naming the field and key at fault. */
+export function formatTheoryIssues(input: unknown, issues: readonly { path: PropertyKey[]; message: string; code?: string }[]): string {
+  return issues
+    .map((iss) => {
+      if (iss.code === 'custom') return iss.message
+      const path = iss.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '')
+      const fieldName = fieldNameAt(input, iss.path)
+      return `${path || 'theory'}${fieldName}: ${iss.message}`
+    })
+    .join('\n')
+}
+
+function fieldNameAt(input: unknown, path: PropertyKey[]): string {
+  if (path[0] !== 'fields' || typeof path[1] !== 'number') return ''
+  const fields = (input as { fields?: unknown[] } | null)?.fields
+  const name = (fields?.[path[1]] as { name?: unknown } | undefined)?.name
+  return typeof name === 'string' ? ` ("${name}")` : ''
+}
+
+/**
+ * Parse and validate a theory file (a JSON string or an already parsed object).
+ * Throws EngineInputError whose message lists every problem, one per line, e.g.
+ * `parseTheory: fields[2] "phi": a real scalar must have zero U(1) charges, but Y = 1/3`.
+ */
+export function parseTheory(json: unknown): Theory {
+  let input = json
+  if (typeof json === 'string') {
+    try {
+      input = JSON.parse(json)
+    } catch (e) {
+      throw new EngineInputError('parseTheory', `theory file is not valid JSON: ${(e as Error).message}`)
+    }
+  }
+  const result = TheorySchema.safeParse(input)
+  if (!result.success) throw new EngineInputError('parseTheory', formatTheoryIssues(input, result.error.issues))
+  return result.data
+}

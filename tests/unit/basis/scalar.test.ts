@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest'
+import { buildBasis, classBasis, rewriteOperator, BASIS_NOTE } from '../../../server/engine/basis/index'
+import { rat } from '../../../server/engine/exact/rational'
+
+const phi = { name: 'real scalar', frame: 'relativistic' as const, groups: [], fields: [{ name: 'phi', lorentz: 'S' as const, real: true }] }
+
+describe('one real scalar', () => {
+  it('dimension 6: only φ^6 survives (common practice); the tally matches the Hilbert series', () => {
+    const r = buildBasis(phi, { maxDim: 6 })
+    const d6 = r.byDimension.find((d) => d.dimension === 6)!
+    expect(d6.classes.map((c) => c.key)).toEqual(['phi^6'])
+    expect(d6.operators).toBe(1)
+    expect(d6.tallyOk).toBe(true)
+    expect(r.note).toBe(BASIS_NOTE)
+    expect(BASIS_NOTE).toContain('modulo equations of motion and integration by parts')
+    expect(d6.classes[0]!.operators[0]!.hermitian).toBe(true)
+  })
+  it('φ² ∂φ·∂φ = −(1/3) φ³ □φ + total derivative vanishes modulo EOM (common practice): rank 0 and rewrite to 0', () => {
+    const b = classBasis(phi, 'D^2 phi^4')
+    expect(b.rank).toBe(0)
+    expect(b.candidates).toBe(6)
+    // φ²(∂φ·∂φ): contact amplitude ∝ Σ_{i<j} s_ij = (Σ p)² = 0
+    const r = rewriteOperator(b, 's12 + s13 + s14 + s23 + s24 + s34')
+    expect(r.vanishes).toBe(true)
+    expect(r.text).toBe('0')
+    expect(rewriteOperator(b, 's12').vanishes).toBe(true)
+  })
+  it('D^4 φ^4 has one operator (s²+t²+u²) and D^6 φ^4 one (stu) (common practice); rewrites are exact', () => {
+    const b4 = classBasis(phi, 'D^4 phi^4')
+    expect(b4.rank).toBe(1)
+    // symmetrised s12² equals, with s+t+u = 0, one third of s²+t²+u² — i.e. a fixed rational multiple
+    const a = rewriteOperator(b4, 's12^2').coefficients[0]!.coefficient
+    const c = rewriteOperator(b4, 's12^2 + s13^2 + s14^2').coefficients[0]!.coefficient
+    expect(c).toEqual(rat(a.num * 3n, a.den)) // s13² and s14² symmetrise to the same as s12²
+    const st = rewriteOperator(b4, 's12 s13').coefficients[0]!.coefficient
+    expect(st).toEqual(rat(-a.num, 2n * a.den)) // st = ((s+t)² − s² − t²)/2 = (u² − s² − t²)/2 → −½ after symmetrisation
+    expect(classBasis(phi, 'D^6 phi^4').rank).toBe(1)
+    expect(classBasis(phi, 'D^2 phi^6').rank).toBe(0)
+  })
+  it('bad operator text is rejected with the fragment named', () => {
+    const b = classBasis(phi, 'D^2 phi^4')
+    expect(() => rewriteOperator(b, '<12>')).toThrow('gives leg 1 (phi) 1 angle and 0 square spinors')
+    expect(() => rewriteOperator(b, 's15')).toThrow('bad legs in "s15" (class has 4 legs)')
+    expect(() => rewriteOperator(b, 's12 s34')).toThrow('has 4 derivatives but class D^2 phi^4 has 2')
+    expect(() => rewriteOperator(b, 's12 ?')).toThrow('cannot read "?"')
+    expect(() => classBasis(phi, 'psi^4')).toThrow('unknown particle "psi" in class key "psi^4"')
+    expect(() => classBasis(phi, 'phi^2')).toThrow('a class needs at least 3 fields, got "phi^2"')
+  })
+  it('input errors for the theory: frame and unsupported representations', () => {
+    expect(() => classBasis({ ...phi, frame: 'heavy' as const }, 'phi^6')).toThrow('needs frame "relativistic", got "heavy"')
+    const bad = { name: 'x', frame: 'relativistic' as const, groups: [{ name: 'SU3', type: 'SU' as const, n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'S' as const, reps: { SU3: [2, 0] } }] }
+    expect(() => classBasis(bad, 'S6^3')).toThrow('field S6: representation [2,0] of SU3 = SU(3) is not supported')
+    expect(() => buildBasis(phi, { maxDim: 13 })).toThrow('maxDim must be an integer from 5 to 12, got 13')
+  })
+  it('is cancellable', () => {
+    expect(() => buildBasis(phi, { maxDim: 6, signal: { aborted: true } })).toThrow('cancelled')
+  })
+})

@@ -1,0 +1,104 @@
+import { readdirSync, readFileSync } from 'node:fs'
+import { join } from 'node:path'
+import { describe, expect, it } from 'vitest'
+import { PRESETS } from '../../../shared/presets/index'
+import { parseTheory, TheorySchema } from '../../../shared/schemas/theory'
+import { EngineInputError } from '../../../server/engine/errors'
+
+const base = () => ({
+  name: 'example',
+  frame: 'relativistic' as const,
+  groups: [
+    { name: 'SU3c', type: 'SU', n: 3, gauge: true },
+    { name: 'SU2L', type: 'SU', n: 2, gauge: true },
+    { name: 'Y', type: 'U1', gauge: true },
+    { name: 'Bno', type: 'U1', gauge: false },
+    { name: 'P2', type: 'Z', n: 2, gauge: false },
+  ],
+  fields: [
+    { name: 'Q', lorentz: 'L', reps: { SU3c: [1, 0], SU2L: [1] }, charges: { Y: '1/6' }, flavors: 3 },
+    { name: 'H', lorentz: 'S', reps: { SU2L: [1] }, charges: { Y: '1/2' } },
+    { name: 'phi', lorentz: 'S', real: true } as Record<string, unknown>,
+    { name: 'G', lorentz: 'F', gaugeOf: 'SU3c' },
+  ] as Record<string, unknown>[],
+})
+
+const errorOf = (input: unknown): string => {
+  try {
+    parseTheory(input)
+  } catch (e) {
+    expect(e).toBeInstanceOf(EngineInputError)
+    return (e as Error).message
+  }
+  throw new Error('expected a validation error')
+}
+
+describe('theory schema', () => {
+  it('accepts the example theory of the file format (with maxOrder, description, countingRules)', () => {
+    const t = parseTheory({ ...base(), maxOrder: 8, description: 'test', countingRules: [{ name: 'EFT', kind: 'massRatio' }] })
+    expect(t.fields.map((f) => f.name)).toEqual(['Q', 'H', 'phi', 'G'])
+    expect(parseTheory(JSON.stringify(base())).groups).toHaveLength(5)
+  })
+
+  it('every shipped preset is valid and listed with a title and description', () => {
+    const dir = join(__dirname, '../../../shared/presets')
+    const files = readdirSync(dir).filter((f) => f.endsWith('.json'))
+    expect(files.length).toBeGreaterThanOrEqual(6)
+    for (const f of files) expect(TheorySchema.safeParse(JSON.parse(readFileSync(join(dir, f), 'utf8'))).success).toBe(true)
+    for (const p of PRESETS) {
+      expect(p.title.length).toBeGreaterThan(0)
+      expect(p.description.length).toBeGreaterThan(0)
+      expect(() => parseTheory(p.theory)).not.toThrow()
+    }
+    expect(PRESETS.map((p) => p.id).slice(0, 6)).toEqual(['smeft', 'real-scalar', 'photons', 'qed', 'scalar-qed', 'qcd-like'])
+    expect(files.length).toBe(PRESETS.length) // every preset file is listed
+  })
+
+  it('names the field and key at fault', () => {
+    const t = base()
+    t.fields[2] = { name: 'phi', lorentz: 'S', real: true, charges: { Y: '1/3' } }
+    expect(errorOf(t)).toBe('parseTheory: fields[2] "phi": a real scalar must have zero U(1) charges, but Y = 1/3')
+    t.fields[2] = { name: 'phi', lorentz: 'S', real: true, reps: { SU2L: [1] } }
+    // the doublet of SU(2) is pseudoreal (Slansky, Phys. Rep. 79 (1981) 1, Table 11)
+    expect(errorOf(t)).toBe('parseTheory: fields[2] "phi": a real scalar must sit in a real representation, but SU2L = [1] is pseudoreal')
+    t.fields[2] = { name: 'phi', lorentz: 'S', real: true, reps: { SU3c: [1, 0] } }
+    expect(errorOf(t)).toContain('SU3c = [1,0] is complex')
+  })
+
+  it('rejects bad references and shapes', () => {
+    const cases: [(t: ReturnType<typeof base>) => void, string][] = [
+      [(t) => (t.fields[0]!.reps = { SU5: [1, 0, 0, 0] }), 'fields[0] "Q": unknown group SU5'],
+      [(t) => (t.fields[0]!.reps = { SU3c: [1] }), 'fields[0] "Q": SU3c = SU(3) needs 2 Dynkin labels, but got [1]'],
+      [(t) => (t.fields[0]!.charges = { P2: '1/2' }), 'fields[0] "Q": a Z2 charge is an integer mod 2, but P2 = 1/2'],
+      [(t) => (t.fields[0]!.charges = { SU2L: '1' }), 'fields[0] "Q": SU2L is SU(2): give Dynkin labels in reps, not a charge'],
+      [(t) => (t.fields[3]!.gaugeOf = 'Bno'), 'fields[3] "G": Bno is a global symmetry (gauge false) and has no field strength'],
+      [(t) => delete t.fields[3]!.gaugeOf, 'fields[3] "G": a field strength (lorentz "F") needs gaugeOf'],
+      [(t) => (t.fields[1]!.gaugeOf = 'Y'), 'fields[1] "H": only a field strength (lorentz "F") has gaugeOf, but lorentz = S'],
+      [(t) => (t.fields[1]!.name = 'Q'), 'fields[1] "Q": duplicate field name'],
+      [(t) => (t.fields[0]!.real = true), 'fields[0] "Q": only a scalar can be declared real, but lorentz = L'],
+      [(t) => (t.groups[0]!.n = 9), 'groups[0] "SU3c": SU(n) needs n from 2 to 8, but n = 9'],
+      [(t) => t.fields.push({ name: 'G2', lorentz: 'F', gaugeOf: 'SU3c' }), 'fields[4] "G2": SU3c already has a field strength'],
+    ]
+    for (const [edit, message] of cases) {
+      const t = base()
+      edit(t)
+      expect(errorOf(t)).toContain(message)
+    }
+  })
+
+  it('enforces the size limits (n of SU(N) 2..8, 40 fields, 8 groups, flavors 1..6, name pattern)', () => {
+    const t = base()
+    t.fields[0]!.flavors = 7
+    expect(errorOf(t)).toContain('fields[0].flavors ("Q"): Too big')
+    const many = base()
+    many.fields = Array.from({ length: 41 }, (_, i) => ({ name: `s${i}`, lorentz: 'S' }))
+    expect(errorOf(many)).toMatch(/^parseTheory: fields: Too big/)
+    const groups = base()
+    groups.groups = Array.from({ length: 9 }, (_, i) => ({ name: `U${i}`, type: 'U1', gauge: true }))
+    expect(errorOf(groups)).toMatch(/groups: Too big/)
+    const name = base()
+    name.fields[1]!.name = '2H'
+    expect(errorOf(name)).toContain('fields[1].name ("2H"): a name is a letter followed by up to 15 letters, digits or "_"')
+    expect(errorOf('{ not json')).toMatch(/^parseTheory: theory file is not valid JSON/)
+  })
+})
