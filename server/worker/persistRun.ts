@@ -5,8 +5,8 @@ import type { BasisReport } from '../engine/basis/buildBasis'
 /** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
 export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
   await db.transaction(async (trx) => {
-    if (run.kind === 'basis') await writeBasis(trx, run, result as BasisReport)
-    const summary = run.kind === 'count' ? result : basisSummary(result as BasisReport)
+    const basisId = run.kind === 'basis' ? await writeBasis(trx, run, result as BasisReport) : null
+    const summary = run.kind === 'count' ? result : { ...basisSummary(result as BasisReport), basisId }
     await trx('runs').where({ id: run.id }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
   })
 }
@@ -22,7 +22,7 @@ function basisSummary(report: BasisReport) {
   }
 }
 
-async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport) {
+async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport): Promise<number> {
   const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({
     dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
     tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.realParameters, flavor: c.flavor ?? null,
@@ -36,6 +36,7 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
     structure: JSON.stringify(op), latex: op.latex, latex_dirac: null, hermitian: op.hermitian, real_parameters: op.realParameters,
   }))))
   for (let i = 0; i < rows.length; i += 500) await trx('operators').insert(rows.slice(i, i + 500))
+  return basis.id
 }
 
 export type { CountResult }

@@ -1,20 +1,12 @@
 import type { BoardExport } from './boardExport'
+import { classKeyTex } from '../../../shared/utils/classKeyTex'
 
 function escapeText(s: string): string {
   return s.replace(/\\/g, '\\textbackslash{}').replace(/([&%$#_{}])/g, '\\$1').replace(/~/g, '\\textasciitilde{}').replace(/\^/g, '\\textasciicircum{}')
 }
 
-/** "D^2 H^2 H*^2" → "D^2 H^2 H^{*2}" in math mode. */
-export function classKeyLatex(key: string): string {
-  return key.split(' ').map((part) => {
-    const m = /^([A-Za-z][A-Za-z0-9]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
-    if (!m) return escapeText(part)
-    const [, name, chiral, star, power] = m
-    const sub = chiral ? `_{${chiral.slice(1)}}` : ''
-    const sup = [star ? '*' : '', power ?? ''].join('')
-    return `${name!.length > 1 ? `\\mathrm{${name}}` : name}${sub}${sup ? `^{${sup}}` : ''}`
-  }).join('\\,')
-}
+/** Class keys as math, e.g. "D^2 H^2 H*^2" → "D^{2}\\,H^{2}\\,H^{*2}". */
+export const classKeyLatex = classKeyTex
 
 /**
  * The kept basis per order as LaTeX tables ready for a paper, with a short legend of the

@@ -37,3 +37,13 @@ export async function rewriteOntoKept(basisId: number, classKey: string, operato
     .map(({ c, op }) => ({ operatorId: op.id, latex: op.latex, coefficient: ratString(c) }))
   return { vanishes: terms.length === 0, terms }
 }
+
+/** Coverage of every class of a basis, keyed by class key. */
+export async function coverageOfClasses(basisId: number, classes: { key: string, rank: number }[]) {
+  const out: Record<string, { rank: number, required: number, complete: boolean }> = {}
+  for (const c of classes) {
+    const { rank, required, complete } = await classCoverage(basisId, c.key, c.rank)
+    out[c.key] = { rank, required, complete }
+  }
+  return out
+}

@@ -1,0 +1,95 @@
+// The basis on the board: operators in kept / set-aside columns per order, coverage per
+// class, tags and notes. Moves are optimistic: the list changes at once, the server confirms
+// (new version, coverage, rewrite) or the board reloads and says why.
+export interface BoardOperator {
+  id: number, order: number, classKey: string, column: 'kept' | 'set_aside', position: number, latex: string
+  latexDirac: string | null, hermitian: boolean, realParameters: number, text: string, version: number, flavorComponents: number
+}
+export interface BoardClass { dimension: number, key: string, rank: number, hilbert: number, tallyOk: boolean, message?: string | null, realParameters?: number }
+export interface Rewrite { vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
+export interface BoardTag { id: number, operatorId: number, kind: string, label: string }
+export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null }
+
+export const useBasesStore = defineStore('bases', () => {
+  const basis = ref<any>(null)
+  const role = ref<string>('viewer')
+  const columns = ref<Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }>>({})
+  const coverage = ref<Record<string, { rank: number, required: number, complete: boolean }>>({})
+  const tags = ref<BoardTag[]>([])
+  const notes = ref<BoardNote[]>([])
+  const rewrites = ref<Record<number, Rewrite | null>>({})
+  const message = ref('')
+  const notation = ref<'two' | 'four'>('two')
+  const filter = reactive({ tag: '', text: '' })
+  const readonly = computed(() => !['editor', 'owner'].includes(role.value))
+
+  function setData(data: any) {
+    basis.value = data.basis
+    role.value = data.role
+    coverage.value = data.coverage ?? {}
+    tags.value = data.tags
+    notes.value = data.notes
+    const cols: Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }> = {}
+    for (const c of data.basis.classes as BoardClass[]) cols[c.dimension - 4] ??= { kept: [], set_aside: [] }
+    for (const op of data.operators as BoardOperator[]) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
+    columns.value = cols
+  }
+  async function load(id: number) {
+    setData(await useRequestFetch()(`/api/bases/${id}`))
+  }
+
+  /** Called after vuedraggable already placed `op` at `index` of `column` (optimistic). */
+  async function confirmMove(op: BoardOperator, column: 'kept' | 'set_aside', index: number) {
+    message.value = ''
+    try {
+      const res: any = await $fetch(`/api/operators/${op.id}/move`, { method: 'POST', body: { column, position: index, version: op.version } })
+      Object.assign(op, { column, version: res.operator.version })
+      coverage.value[op.classKey] = res.coverage
+      rewrites.value[op.id] = res.rewrite
+    } catch (e) {
+      message.value = apiMessage(e)
+      await load(basis.value.id)
+    }
+  }
+  /** Keyboard alternative to dragging: move to the end of the other column. */
+  async function toggleColumn(op: BoardOperator) {
+    const col = columns.value[op.order]!
+    const from = col[op.column]
+    const to = op.column === 'kept' ? 'set_aside' : 'kept'
+    from.splice(from.indexOf(op), 1)
+    col[to].push(op)
+    await confirmMove(op, to, col[to].length - 1)
+  }
+  async function loadRewrite(op: BoardOperator) {
+    rewrites.value[op.id] = (await $fetch(`/api/operators/${op.id}/rewrite`)).rewrite as Rewrite | null
+  }
+  async function addTag(opId: number, kind: string, label?: string) {
+    const { tag } = await $fetch(`/api/operators/${opId}/tags`, { method: 'POST', body: label ? { kind, label } : { kind } })
+    tags.value.push(tag as BoardTag)
+  }
+  async function removeTag(id: number) {
+    await $fetch(`/api/tags/${id}`, { method: 'DELETE' })
+    tags.value = tags.value.filter((t) => t.id !== id)
+  }
+  async function addNote(opId: number, body: string) {
+    const { annotation } = await $fetch(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', body: { operatorId: opId, body } })
+    notes.value.push(annotation as unknown as BoardNote)
+  }
+  async function editNote(id: number, body: string) {
+    await $fetch(`/api/annotations/${id}`, { method: 'PATCH', body: { body } })
+    const n = notes.value.find((x) => x.id === id)
+    if (n) n.body = body
+  }
+
+  function matches(op: BoardOperator): boolean {
+    if (filter.tag && !tags.value.some((t) => t.operatorId === op.id && (t.kind === filter.tag || t.label === filter.tag))) return false
+    if (filter.text) {
+      const q = filter.text.toLowerCase()
+      const hay = [op.classKey, op.text, op.latex, ...notes.value.filter((n) => n.operatorId === op.id).map((n) => n.body)].join(' ').toLowerCase()
+      if (!hay.includes(q)) return false
+    }
+    return true
+  }
+  const filtering = computed(() => !!(filter.tag || filter.text))
+  return { basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
+})
