@@ -3,7 +3,7 @@
  *   node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]
  * Prints only JSON: {"theory","note","byDimension":[{"dimension","operators" (real
  * parameters),"tallyOk","classes":[{"key","conjugateKey","rank","hilbert","tallyOk",
- * "message"?,"operators":[{"text","latex","hermitian","realParameters","flavorComponents",…}]}]}]}.
+ * "message"?,"operators":[{"text","latex","latex4","cp","hermitian","realParameters","flavorComponents",…}]}]}]}.
  * With flavors (--nf > 1 or "flavors" in the theory) a class lists one operator per
  * (structure, Young symmetry) pair with its number of flavor components.
  * Exit code 1 with a message on stderr for bad input.
@@ -30,12 +30,12 @@ function classJson(c: ClassReport) {
   if (c.flavor) {
     return {
       ...base, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,
-      operators: c.flavor.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: c.selfConjugate, young: o.young, flavorComponents: o.flavorComponents })),
+      operators: c.flavor.operators.map((o) => ({ text: o.text, latex: o.latex, latex4: o.latex4, hermitian: c.selfConjugate, young: o.young, flavorComponents: o.flavorComponents })),
     }
   }
   return {
     ...base, realParameters: c.realParameters,
-    operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: o.hermitian, realParameters: o.realParameters, flavorComponents: o.flavorComponents, fields: o.fields, derivatives: o.derivatives })),
+    operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, latex4: o.latex4, cp: o.cp, hermitian: o.hermitian, realParameters: o.realParameters, flavorComponents: o.flavorComponents, fields: o.fields, derivatives: o.derivatives })),
   }
 }
 

@@ -33,7 +33,7 @@ export interface Priorities {
 export interface ClassOptions {
   priorities?: Priorities
   signal?: { aborted: boolean }
-  /** Extra random rows beyond the number of columns (default 12). */
+  /** Extra random rows beyond the number of candidate columns (default 12 + 25 %). */
   margin?: number
 }
 
@@ -148,7 +148,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
   const columns = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
   // The Hermitian columns span the same space as `base`, so base.length rows bound the rank.
-  const nRows = base.length + (opts.margin ?? 12)
+  const nRows = base.length + (opts.margin ?? 12 + Math.ceil(base.length / 4))
   const results = workingPrimes(2).map((p, pi) => {
     const F = new PrimeField(p)
     const points = samplePoints(F, theory, cls, nRows, hashSeed(`${cls.key}#${pi}`))

@@ -5,11 +5,15 @@
 import type { ClassBasis, Column } from './classBasis'
 import { operatorLatex } from './latex'
 import { hermiticityOf } from './hermiticity'
+import { parseOperatorText } from './inputSyntax'
+import { fourComponentLatex } from './fourComponent'
 
 export interface BasisOperator {
   /** Input-syntax text (see inputSyntax.ts), e.g. "<12>^2[34]^2". */
   text: string
   latex: string
+  /** Four-component form with Dirac bilinears (proportional, real factor), or null. */
+  latex4: string | null
   source: 'candidate' | 'kept' | 'hermitian'
   fields: string[]
   /** Derivatives per leg (legs in class-key order). */
@@ -32,6 +36,25 @@ export interface BasisOperator {
   cp: 'even' | 'odd' | null
 }
 
+function fourOf(b: ClassBasis, col: Column, hc: string): string | null {
+  if (col.source === 'kept') return null
+  const t = col.terms[0]!
+  const f = fourComponentLatex(b.class.legs, t.lorentz, t.gauge)
+  return f === null ? null : f + hc
+}
+
+/** LaTeX of a user-kept operator: Σ (rational) · term, terms as in operatorLatex. */
+function keptLatex(b: ClassBasis, text: string): string {
+  const terms = parseOperatorText(b.class, text, b.gaugeStructures.length)
+  return terms.map((t, i) => {
+    const neg = t.coeff.num < 0n
+    const mag = neg ? -t.coeff.num : t.coeff.num
+    const c = t.coeff.den === 1n ? (mag === 1n ? '' : `${mag}\\,`) : `\\tfrac{${mag}}{${t.coeff.den}}\\,`
+    const sign = neg ? '-' : i === 0 ? '' : '+'
+    return `${sign}${c}${operatorLatex(b.class.legs, t.lorentz, b.gaugeStructures[t.gaugeIndex]!)}`
+  }).join(' ')
+}
+
 /**
  * Describe every kept operator of a class basis.
  * @example describeOperators(classBasis(phi, "phi^6"))[0].latex // "phi\\,phi\\,…"
@@ -43,12 +66,13 @@ export function describeOperators(b: ClassBasis): BasisOperator[] {
     const t = col.terms[0]!
     const herm1 = col.source === 'hermitian'
     const single = col.terms.length === 1 || herm1
-    const base = single ? operatorLatex(b.class.legs, t.lorentz, t.gauge) : col.text
+    const base = col.source === 'kept' ? keptLatex(b, col.text) : operatorLatex(b.class.legs, t.lorentz, t.gauge)
     const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
     const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
     return {
       text: col.text,
       latex: base + hc,
+      latex4: fourOf(b, col, hc),
       cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
       source: col.source,
       fields: b.class.legs.map((p) => p.label),

@@ -18,10 +18,13 @@ import { composeBlocks, glDimension, standardTableaux, youngSymmetrizer } from '
 import type { LegPermutation } from './symmetry'
 import { formatLorentz } from './inputSyntax'
 import { operatorLatex } from './latex'
+import { fourComponentLatex } from './fourComponent'
 
 export interface FlavorOperator {
   text: string
   latex: string
+  /** Four-component form (see fourComponent.ts) or null. */
+  latex4: string | null
   /** Young diagram per block of identical fields (blocks in class order). */
   young: number[][]
   flavorComponents: number
@@ -68,7 +71,7 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
   const { lorentz, gauge, candidates } = classCandidates(t, b.class)
   const nG = gauge.length
   const primes = workingPrimes(2).map((p) => new PrimeField(p))
-  const points = primes.map((F, pi) => samplePoints(F, t, b.class, candidates.length + 12, 7919 + pi))
+  const points = primes.map((F, pi) => samplePoints(F, t, b.class, candidates.length + 12 + Math.ceil(candidates.length / 4), 7919 + pi))
   const shapes = product(blocks.map((bl) => partitionsOf(bl.legs.length)))
   const decomposition: FlavorSummary['decomposition'] = []
   const operators: FlavorOperator[] = []
@@ -88,6 +91,7 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
       operators.push({
         text: formatLorentz(cand.lorentz, nG > 1 ? c % nG : null),
         latex: operatorLatex(b.class.legs, cand.lorentz, cand.gauge),
+        latex4: fourComponentLatex(b.class.legs, cand.lorentz, cand.gauge),
         young, flavorComponents: each,
       })
     }

@@ -3,7 +3,7 @@
  * undotted index contracted between legs i and j, every square bracket [ij] a dotted one;
  * a derivative on leg i is D_{αα̇} carrying one of each. SU(N) indices: δ contractions share
  * a letter, ε tensors are written explicitly. Conjugate fields carry a dagger.
- * Four-component (Dirac-bilinear) forms are not produced yet.
+ * Four-component (Dirac-bilinear) forms: see fourComponent.ts.
  */
 import type { Particle } from './particles'
 import type { LorentzStructure } from './lorentzStructures'
@@ -12,11 +12,11 @@ import type { SuStructure } from './gaugeStructures'
 const UNDOTTED = ['\\alpha', '\\beta', '\\gamma', '\\delta', '\\epsilon', '\\zeta', '\\eta', '\\theta', '\\iota', '\\kappa', '\\lambda', '\\mu', '\\nu', '\\xi', '\\rho', '\\sigma']
 const GROUP_LETTERS = [['i', 'j', 'k', 'l', 'm', 'n', 'p', 'q', 'r', 's', 't', 'v'], ['I', 'J', 'K', 'L', 'M', 'N', 'P', 'R', 'S', 'T', 'U', 'V'], ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h', 'o', 'u', 'w', 'x']]
 
-function letter(list: string[], i: number): string {
+export function letter(list: string[], i: number): string {
   return i < list.length ? list[i]! : `${list[i % list.length]!}_{${Math.floor(i / list.length)}}`
 }
 
-function fieldSymbol(p: Particle): string {
+export function fieldSymbol(p: Particle): string {
   const base = p.lorentz === 'F' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
   return p.conj && p.lorentz !== 'F' ? `{${base}^{\\dagger}}` : base
 }
@@ -31,8 +31,25 @@ export function operatorLatex(legs: Particle[], l: LorentzStructure, gauge: SuSt
   const up: string[][] = legs.map(() => [])
   l.angle.forEach(([i, j], a) => { const x = letter(UNDOTTED, a); up[i]!.push(x); low[j]!.push(x) })
   l.square.forEach(([i, j], a) => { const x = `\\dot${letter(UNDOTTED, a)}`; low[i]!.push(x); up[j]!.push(x) })
-  const gUp: string[][] = legs.map(() => [])
-  const gLow: string[][] = legs.map(() => [])
+  const { gUp, gLow, epsText } = gaugeIndexLetters(legs.length, gauge)
+  const factors = legs.map((p, i) => {
+    const k = l.derivs[i]!
+    const d = k === 0 ? '' : k === 1 ? 'D' : `D^{${k}}`
+    const sup = [...gUp[i]!, ...up[i]!].join('')
+    const sub = [...gLow[i]!, ...low[i]!].join('')
+    const core = d ? `(${d}${fieldSymbol(p)})` : fieldSymbol(p)
+    return `${core}${sup ? `^{${sup}}` : ''}${sub ? `_{${sub}}` : ''}`
+  })
+  return [...epsText, ...factors].join('\\,')
+}
+
+/**
+ * Gauge index letters per leg (upper, lower) and the ε tensors, for SU(N) contractions.
+ * @example gaugeIndexLetters(2, [δ(fund leg 0, anti leg 1)]) // gUp [["i"],[]], gLow [[],["i"]]
+ */
+export function gaugeIndexLetters(nLegs: number, gauge: SuStructure[]): { gUp: string[][]; gLow: string[][]; epsText: string[] } {
+  const gUp: string[][] = Array.from({ length: nLegs }, () => [])
+  const gLow: string[][] = Array.from({ length: nLegs }, () => [])
   const epsText: string[] = []
   gauge.forEach((s, gi) => {
     const letters = GROUP_LETTERS[gi % GROUP_LETTERS.length]!
@@ -46,13 +63,5 @@ export function operatorLatex(legs: Particle[], l: LorentzStructure, gauge: SuSt
     }
     s.slots.forEach((sl, si) => (sl.upper ? gUp : gLow)[sl.leg]!.push(slotLetter.get(si)!))
   })
-  const factors = legs.map((p, i) => {
-    const k = l.derivs[i]!
-    const d = k === 0 ? '' : k === 1 ? 'D' : `D^{${k}}`
-    const sup = [...gUp[i]!, ...up[i]!].join('')
-    const sub = [...gLow[i]!, ...low[i]!].join('')
-    const core = d ? `(${d}${fieldSymbol(p)})` : fieldSymbol(p)
-    return `${core}${sup ? `^{${sup}}` : ''}${sub ? `_{${sub}}` : ''}`
-  })
-  return [...epsText, ...factors].join('\\,')
+  return { gUp, gLow, epsText }
 }

@@ -70,7 +70,7 @@ export function evaluateSuChains(F: PrimeField, s: SuStructure, waves: SuWave[])
       // tr(X_last … X_first): propagate each basis vector.
       val = 0
       for (let i = 0; i < s.n; i++) {
-        let v = Array.from({ length: s.n }, (_, j) => (j === i ? 1 : 0))
+        let v: number[] = Array.from({ length: s.n }, (_, j) => (j === i ? 1 : 0))
         for (const m of st.mids) v = matVec(F, waves[m] as number[][], v)
         val = F.add(val, v[i]!)
       }

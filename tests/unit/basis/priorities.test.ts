@@ -4,6 +4,8 @@ import { classBasis, rewriteOperator } from '../../../server/engine/basis/index'
 import smeftJson from './fixtures/smeft.json'
 import type { Theory } from '../../../shared/schemas/theory'
 import { rat } from '../../../server/engine/exact/rational'
+import { describeOperators } from '../../../server/engine/basis/describe'
+import katex from 'katex'
 
 const smeft = smeftJson as Theory
 const KEY = 'D^2 H^2 H*^2' // two operators, Q_H□ and Q_HD (Grzadkowski et al., JHEP 10 (2010) 085)
@@ -26,6 +28,10 @@ describe('choosing the basis under user priorities', () => {
     const b = classBasis(smeft, KEY, { priorities: { keep: { [KEY]: keep } } })
     expect(b.kept.map((k) => k.text)).toEqual(keep)
     expect(b.kept.map((k) => k.source)).toEqual(['kept', 'kept'])
+    const ops = describeOperators(b)
+    expect(ops[1]!.latex).toContain(' +')
+    for (const o of ops) expect(() => katex.renderToString(o.latex, { throwOnError: true })).not.toThrow()
+    expect(describeOperators(classBasis(smeft, KEY, { priorities: { keep: { [KEY]: ['-1/2 <14>[14]{g:1}'] } } }))[0]!.latex).toMatch(/^-\\tfrac\{1\}\{2\}/)
     const r = rewriteOperator(b, '<14>[14]{g:1}')
     expect(r.coefficients.map((c) => c.coefficient)).toEqual([rat(1), rat(0)])
     // A dependent kept operator is skipped by the greedy choice.

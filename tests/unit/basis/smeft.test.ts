@@ -76,6 +76,25 @@ describe('SMEFT one flavor (Grzadkowski, Iskrzynski, Misiak, Rosiek, JHEP 10 (20
   })
 })
 
+describe('four-component forms (Dirac bilinears as in Grzadkowski et al., Tables 2–3)', () => {
+  const op = (key: string) => d6.classes.find((c) => c.key === key)!.operators
+  it('every dimension-6 operator with fermions gets a four-component form that KaTeX renders', () => {
+    const withFermions = d6.classes.filter((c) => shape(c).psi > 0).flatMap((c) => c.operators)
+    expect(withFermions).toHaveLength(48) // 3 + 8 + 8 + 25 + 4 structures with fermions
+    for (const o of withFermions) {
+      expect(o.latex4).not.toBeNull()
+      expect(() => katex.renderToString(o.latex4!, { throwOnError: true })).not.toThrow()
+    }
+    for (const o of op('H^3 H*^3')) expect(o.latex4).toBeNull() // no fermions
+  })
+  it('vector currents (Q_ee, Q_Hl(1)), dipole tensors (Q_eB) and scalar bilinears (Q_eH)', () => {
+    expect(op('e^2 e*^2')[0]!.latex4).toBe('({\\bar{e}}\\gamma^{\\mu}{e})\\,({\\bar{e}}\\gamma_{\\mu}{e})')
+    expect(op('D L L* H H*').map((o) => o.latex4!.slice(0, 40))).toEqual(Array(2).fill('({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{i})\\,(D_{\\mu}H)').map((s, i) => (i === 0 ? s : '({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{j})\\,(D_{\\mu}H)')).map((s) => s.slice(0, 40)))
+    expect(op('B_L L e* H*')[0]!.latex4).toBe('({\\bar{e}}\\sigma^{\\mu\\nu}{L}^{i})\\,{B}_{\\mu\\nu}\\,{H^{\\dagger}}_{i}')
+    expect(op('L* e H^2 H*')[0]!.latex4).toBe('({\\bar{L}}_{i}{e})\\,H^{i}\\,H^{j}\\,{H^{\\dagger}}_{j}')
+  })
+})
+
 describe('Hermiticity and CP (Grzadkowski et al., JHEP 10 (2010) 085, Tables 2–3)', () => {
   const sum = (f: (c: ClassReport) => boolean, k: 'cpEven' | 'cpOdd') => d6.classes.filter(f).reduce((s, c) => s + (c[k] ?? NaN), 0)
   it('bosonic classes: X^3 and X^2H^2 split into CP-even (X, XX) and CP-odd (X̃) operators; H^6, H^4D^2 are CP-even', () => {
