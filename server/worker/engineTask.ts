@@ -13,7 +13,9 @@ function threadEntry(): URL {
   return pathToFileURL(resolve(process.env.SCALEWRIGHT_ROOT || process.cwd(), 'server/worker/engineThreadBoot.mjs'))
 }
 
-export interface EngineTask { kind: 'count' | 'basis', theory: unknown, maxDim: number, nf?: number }
+export type EngineTask =
+  | { kind: 'count' | 'basis', theory: unknown, maxDim: number, nf?: number }
+  | { kind: 'fingerprint', theory: unknown, classKey: string, text: string }
 export interface TaskHandle<T> { result: Promise<T>, cancel: () => void }
 
 /**

@@ -3,6 +3,7 @@
 import { parentPort, workerData } from 'node:worker_threads'
 import { countOperators } from '../engine/counting/countOperators'
 import { buildBasis } from '../engine/basis/buildBasis'
+import { typedFingerprint } from '../engine/board/typedOperator'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
 
@@ -18,9 +19,11 @@ function onProgress(fraction: number, label: string) {
 
 try {
   const theory = parseTheory(task.theory)
-  const result = task.kind === 'count'
-    ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
-    : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
+  const result = task.kind === 'fingerprint'
+    ? typedFingerprint(theory, task.classKey, task.text)
+    : task.kind === 'count'
+      ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
+      : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
   const e = error as Error

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex'
 import type { CountResult } from '../engine/counting/countOperators'
 import type { BasisReport } from '../engine/basis/buildBasis'
+import type { BasisOperator } from '../engine/basis/describe'
 
 /** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
 export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
@@ -29,12 +30,24 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
   })))
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion,
-    counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes),
+    counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes), note: report.note,
   }).returning('id')
-  const rows = report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op, i) => ({
-    basis_id: basis.id, order: d.dimension - 4, class_key: c.key, column: 'kept', position: i,
-    structure: JSON.stringify(op), latex: op.latex, latex_dirac: null, hermitian: op.hermitian, real_parameters: op.realParameters,
-  }))))
+  // Positions run per order and column, in class order: kept operators, then the alternatives.
+  const next = { kept: new Map<number, number>(), set_aside: new Map<number, number>() }
+  const row = (order: number, classKey: string, column: 'kept' | 'set_aside', op: BasisOperator) => {
+    const position = next[column].get(order) ?? 0
+    next[column].set(order, position + 1)
+    const { fingerprint, ...structure } = op
+    return {
+      basis_id: basis.id, order, class_key: classKey, column, position, text: op.text.slice(0, 400),
+      structure: JSON.stringify(structure), fingerprint: fingerprint ? JSON.stringify(fingerprint) : null,
+      latex: op.latex, latex_dirac: op.latex4 ?? null, hermitian: op.hermitian, real_parameters: op.realParameters,
+    }
+  }
+  const rows = report.byDimension.flatMap((d) => d.classes.flatMap((c) => [
+    ...c.operators.map((op) => row(d.dimension - 4, c.key, 'kept', op)),
+    ...(c.alternatives ?? []).map((op) => row(d.dimension - 4, c.key, 'set_aside', op)),
+  ]))
   for (let i = 0; i < rows.length; i += 500) await trx('operators').insert(rows.slice(i, i + 500))
   return basis.id
 }

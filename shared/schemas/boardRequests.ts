@@ -29,3 +29,8 @@ export const TagCreateSchema = z.object({
 export function thresholdText(field: string): string {
   return `coefficient shifts when ${field} is integrated out`
 }
+
+export const TypedRewriteSchema = z.object({
+  classKey: z.string({ error: 'classKey: the class of the operator is required' }).min(1, { error: 'classKey: the class of the operator is required' }).max(200),
+  text: z.string({ error: 'text: the operator is required' }).trim().min(1, { error: 'text: the operator is empty' }).max(2000, { error: 'text: at most 2000 characters' }),
+}).strict()

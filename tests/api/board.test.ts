@@ -19,29 +19,58 @@ describe('the basis board API', () => {
     const res = await world.byRole.viewer.client.get(`/api/bases/${basis.basisId}`)
     expect(res.status).toBe(200)
     expect(res.body.operators.filter((o: any) => o.column === 'kept')).toHaveLength(3)
-    expect(res.body.operators.filter((o: any) => o.column === 'set_aside')).toHaveLength(1)
+    expect(res.body.operators.filter((o: any) => o.column === 'set_aside').length).toBeGreaterThan(0)
+    expect(res.body.coverage['D^2 phi^2 phi*^2']).toEqual({ rank: 1, required: 1, complete: true })
   })
 
   it('moves an operator, and reports a collaborator\'s move of the same operator instead of losing it', async () => {
-    const id = basis.operatorIds.B!
+    const id = basis.operatorIds.sextic
     const v = await version(id)
     const first = await world.byRole.editor.client.post(`/api/operators/${id}/move`, { column: 'set_aside', position: 0, version: v })
     expect(first.status).toBe(200)
     expect(first.body.operator).toMatchObject({ column: 'set_aside', position: 0, version: v + 1 })
-    expect(first.body.coverage).toMatchObject({ classKey: 'D^2 phi^2 phi*^2', required: 2 })
+    expect(first.body.coverage).toEqual({ classKey: 'phi^3 phi*^3', rank: 0, required: 1, complete: false })
+    expect(first.body.rewrite).toBeNull() // independent of what stays kept
     const stale = await world.owner.client.post(`/api/operators/${id}/move`, { column: 'kept', position: 0, version: v })
     expect(stale.status).toBe(409)
     expect(messageOf(stale)).toMatch(/moved this operator meanwhile/)
     // A move of a different operator by the other collaborator merges.
-    const other = basis.operatorIds.A!
+    const other = basis.operatorIds.photon
     const merged = await world.owner.client.post(`/api/operators/${other}/move`, { column: 'set_aside', position: 5, version: await version(other) })
     expect(merged.status).toBe(200)
     const positions = await testDb()('operators').where({ basis_id: basis.basisId, column: 'set_aside' }).orderBy('position').select('id', 'position')
     expect(positions.map((p) => p.position)).toEqual(positions.map((_, i) => i))
   })
 
+  it('refuses a redundant keep, and rewrites a set-aside operator onto the kept ones exactly', async () => {
+    const { derivative, alternative } = basis.operatorIds
+    const redundant = await world.byRole.editor.client.post(`/api/operators/${alternative}/move`, { column: 'kept', position: 0, version: await version(alternative) })
+    expect(redundant.status).toBe(409)
+    expect(messageOf(redundant)).toMatch(/would make the kept set redundant/)
+    const rw = await world.byRole.viewer.client.get(`/api/operators/${alternative}/rewrite`)
+    expect(rw.body.rewrite.terms).toHaveLength(1)
+    expect(rw.body.rewrite.terms[0].operatorId).toBe(derivative)
+    expect(rw.body.rewrite.terms[0].coefficient).toMatch(/^-?\d+(\/\d+)?$/)
+    // Swap: set the kept one aside (coverage drops), keep the alternative (coverage returns).
+    const out = await world.byRole.editor.client.post(`/api/operators/${derivative}/move`, { column: 'set_aside', position: 0, version: await version(derivative) })
+    expect(out.body.coverage.complete).toBe(false)
+    const back = await world.byRole.editor.client.post(`/api/operators/${alternative}/move`, { column: 'kept', position: 0, version: await version(alternative) })
+    expect(back.status).toBe(200)
+    expect(back.body.coverage).toMatchObject({ rank: 1, required: 1, complete: true })
+    const swapped = await world.byRole.viewer.client.get(`/api/operators/${derivative}/rewrite`)
+    expect(swapped.body.rewrite.terms[0].operatorId).toBe(alternative)
+  })
+
+  it('rewrites a typed operator; a total derivative in the class is a combination of the kept one (common practice)', async () => {
+    const res = await world.byRole.viewer.client.post(`/api/bases/${basis.basisId}/rewrite`, { classKey: 'phi^3 phi*^3', text: '2' })
+    expect(res.status, JSON.stringify(res.body)).toBe(200)
+    const bad = await world.byRole.viewer.client.post(`/api/bases/${basis.basisId}/rewrite`, { classKey: 'phi^3 phi*^3', text: '<12' })
+    expect(bad.status).toBe(422)
+    expect(messageOf(bad)).toMatch(/parse|syntax|bracket|unexpected|expected/i)
+  })
+
   it('tags and filters: threshold tags name the field, duplicates are refused', async () => {
-    const id = basis.operatorIds.A!
+    const id = basis.operatorIds.photon
     const noLabel = await world.byRole.commenter.client.post(`/api/operators/${id}/tags`, { kind: 'threshold' })
     expect(noLabel.status).toBe(400)
     expect(messageOf(noLabel)).toMatch(/label: name the heavy field/)
@@ -52,7 +81,7 @@ describe('the basis board API', () => {
   })
 
   it('notes keep their edit history', async () => {
-    const note = await world.byRole.commenter.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'first', operatorId: basis.operatorIds.A })
+    const note = await world.byRole.commenter.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'first', operatorId: basis.operatorIds.photon })
     expect(note.status).toBe(201)
     await world.byRole.commenter.client.patch(`/api/annotations/${note.body.annotation.id}`, { body: 'second' })
     const hist = await world.byRole.viewer.client.get(`/api/annotations/${note.body.annotation.id}/revisions`)

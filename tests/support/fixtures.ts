@@ -51,18 +51,31 @@ export async function addMember(world: World, role: GroupRole): Promise<Actor> {
   return actor
 }
 
-/** A stored basis for the world's theory (rows written directly: a fixture, not a computation). */
+/**
+ * A stored basis for the world's theory, computed by the real engine in this process and
+ * written by the worker's own persistence code (fingerprints included). Operators by role:
+ * `derivative` (kept, D^2 phi^2 phi*^2), `sextic` (kept, phi^3 phi*^3), `photon` (kept,
+ * phi phi* A_L^2) and `alternative` (set aside, a redundant D^2 phi^2 phi*^2 candidate).
+ */
 export async function addBasis(world: World) {
   const { testDb } = await import('./db')
+  const { buildBasis } = await import('../../server/engine/basis/buildBasis')
+  const { persistRunResult } = await import('../../server/worker/persistRun')
   const db = testDb()
-  const classes = [{ dimension: 6, key: 'phi^3 phi*^3', rank: 1, hilbert: 1, tallyOk: true }, { dimension: 6, key: 'D^2 phi^2 phi*^2', rank: 2, hilbert: 2, tallyOk: true }]
-  const [basis] = await db('bases').insert({ theory_id: world.theoryId, theory_version: 1, max_order: 2, classes: JSON.stringify(classes) }).returning('id')
-  const ops = [
-    { class_key: 'phi^3 phi*^3', column: 'kept', position: 0, text: 'phi^3 phi*^3', latex: '|\\phi|^6' },
-    { class_key: 'D^2 phi^2 phi*^2', column: 'kept', position: 1, text: 'A', latex: 'O_A' },
-    { class_key: 'D^2 phi^2 phi*^2', column: 'kept', position: 2, text: 'B', latex: 'O_B' },
-    { class_key: 'D^2 phi^2 phi*^2', column: 'set_aside', position: 0, text: 'C', latex: 'O_C' },
-  ]
-  const rows = await db('operators').insert(ops.map((o) => ({ ...o, basis_id: basis.id, order: 2, structure: '{}', hermitian: true, real_parameters: 1 }))).returning(['id', 'text'])
-  return { basisId: basis.id as number, operatorIds: Object.fromEntries(rows.map((r) => [r.text, r.id])) as Record<string, number> }
+  const params = { maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1 }
+  const [run] = await db('runs').insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params), status: 'running' }).returning('*')
+  const report = buildBasis(SMALL_THEORY as never, { maxDim: 6, minDim: 6 })
+  await persistRunResult(db, { ...run, params }, report)
+  const basis = await db('bases').where({ run_id: run.id }).first('id')
+  const ops = await db('operators').where({ basis_id: basis.id }).orderBy('id').select('id', 'class_key', 'column')
+  const pick = (key: string, column: string) => ops.find((o) => o.class_key === key && o.column === column)!.id as number
+  return {
+    basisId: basis.id as number,
+    operatorIds: {
+      derivative: pick('D^2 phi^2 phi*^2', 'kept'),
+      sextic: pick('phi^3 phi*^3', 'kept'),
+      photon: pick('phi phi* A_L^2', 'kept'),
+      alternative: pick('D^2 phi^2 phi*^2', 'set_aside'),
+    },
+  }
 }

@@ -93,15 +93,16 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     access: { kind: 'group', min: 'editor' },
     body: 'required',
     prepare: async (w) => {
-      const op = await testDb()('operators').where({ id: (await basisOf(w)).operatorIds.B }).first('id', 'version')
+      const op = await testDb()('operators').where({ id: (await basisOf(w)).operatorIds.sextic }).first('id', 'version')
       return { path: `/api/operators/${op.id}/move`, body: { column: 'set_aside', position: 0, version: op.version } }
     },
   },
-  'POST /api/operators/[id]/tags': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/operators/${(await basisOf(w)).operatorIds.A}/tags`, body: { kind: 'custom', label: `tag ${fresh()}` } }) },
+  'POST /api/bases/[id]/rewrite': { access: { kind: 'group', min: 'viewer' }, body: 'required', prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/rewrite`, body: { classKey: 'D^2 phi^2 phi*^2', text: '<13>[13]' } }) },
+  'POST /api/operators/[id]/tags': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/operators/${(await basisOf(w)).operatorIds.photon}/tags`, body: { kind: 'custom', label: `tag ${fresh()}` } }) },
   'DELETE /api/tags/[id]': {
     access: { kind: 'group', min: 'commenter' },
     prepare: async (w) => {
-      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.A, kind: 'custom', label: `t${fresh()}` }).returning('id')
+      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.photon, kind: 'custom', label: `t${fresh()}` }).returning('id')
       return { path: `/api/tags/${tag.id}` }
     },
   },
@@ -109,7 +110,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     access: { kind: 'group', min: 'editor' },
     maxBodyBytes: IMPORT_MAX_BYTES,
     body: 'required',
-    prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/import`, body: { format: 'scalewright-basis', formatVersion: 1, orders: [{ order: 2, classes: [{ key: 'D^2 phi^2 phi*^2', operators: [{ text: 'A', column: 'kept' }] }] }] } }),
+    prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/import`, body: { format: 'scalewright-basis', formatVersion: 1, orders: [{ order: 2, classes: [{ key: 'phi phi* A_L^2', operators: [{ text: '<34>^2', column: 'kept' }] }] }] } }),
   },
   'POST /api/theories/[id]/share-links': { access: { kind: 'group', min: 'owner' }, body: 'optional', prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/share-links`, body: { expiresInDays: 7 } }) },
   'DELETE /api/share-links/[id]': {

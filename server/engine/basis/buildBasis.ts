@@ -10,7 +10,7 @@ import { countOperators } from '../counting/countOperators'
 import { classBasis, BASIS_NOTE, type ClassBasis, type Priorities } from './classBasis'
 import { theoryParticles } from './particles'
 import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
-import { describeOperators, type BasisOperator } from './describe'
+import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { flavorDecomposition, type FlavorSummary } from './flavor'
 
 export interface BuildOptions {
@@ -34,7 +34,10 @@ export interface ClassReport {
   tallyOk: boolean
   message?: string
   candidates: number
+  /** Kept operators, each with its fingerprint (values at the class's sample points, two primes). */
   operators: BasisOperator[]
+  /** A few redundant candidates with fingerprints: set-aside material with exact rewrites. */
+  alternatives?: BasisOperator[]
   /**
    * CP-even / CP-odd real parameters (one flavor): a non-Hermitian operator gives one of
    * each (O + h.c. and i(O − h.c.)); Hermitian ones are counted from their CP; null when
@@ -144,7 +147,9 @@ function cpCounts(b: ClassBasis, ops: BasisOperator[]): { cpEven: number | null;
 }
 
 function classReport(b: ClassBasis, hilbert: number, hilbertConjugate: number): ClassReport {
-  const ops = describeOperators(b)
+  const primes = b.primes.map((pd) => pd.F.p)
+  const ops = describeOperators(b).map((op, i) => ({ ...op, fingerprint: { primes, values: b.primes.map((pd) => pd.keptRows.map((row) => row[i]!)) } }))
+  const alternatives = b.alternatives.map(({ column, rows }) => ({ ...describeAlternative(b, column), fingerprint: { primes, values: rows } }))
   const ok = b.rank === hilbert && b.rank === hilbertConjugate
   return {
     key: b.key, conjugateKey: b.conjugateKey, selfConjugate: b.selfConjugate, rank: b.rank,
@@ -153,6 +158,7 @@ function classReport(b: ClassBasis, hilbert: number, hilbertConjugate: number): 
     ...(ok ? {} : { message: `class ${b.key}: amplitude rank ${b.rank} differs from Hilbert-series count ${hilbert} (conjugate class ${b.conjugateKey}: ${hilbertConjugate})` }),
     candidates: b.candidates,
     operators: ops,
+    alternatives,
     ...cpCounts(b, ops),
   }
 }

@@ -69,8 +69,16 @@ export interface ClassBasis {
   gaugeStructures: SuStructure[][]
   perms: LegPermutation[]
   primes: PrimeData[]
+  /**
+   * A few redundant candidates (non-pivot columns) with their values at the sample points
+   * (rows[primeIndex][point]); the board offers them as set-aside operators with rewrites.
+   */
+  alternatives: { column: Column; rows: number[][] }[]
   note: string
 }
+
+/** How many redundant candidates per class are kept as alternatives for the board. */
+export const MAX_ALTERNATIVES = 4
 
 function hashSeed(s: string): number {
   let h = 2166136261
@@ -156,7 +164,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
     const e = rref(F, matrix, opts.signal)
     const keptRows = matrix.map((row) => e.pivots.map((c) => row[c]!))
     const zero = columns.map((_, j) => matrix.every((row) => row[j] === 0))
-    return { F, points, pivots: e.pivots, keptRows, zero }
+    return { F, points, pivots: e.pivots, keptRows, zero, matrix }
   })
   const [a, b] = results as [typeof results[0], typeof results[0]]
   if (a.pivots.join(',') !== b.pivots.join(',')) {
@@ -168,8 +176,24 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
     key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: conj.key === cls.key,
     dimension: cls.dim2 / 2, candidates: candidates.length, rank: a.pivots.length,
     kept, gaugeStructures: gauge, perms,
-    primes: results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) })), note: BASIS_NOTE,
+    primes: results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) })),
+    alternatives: alternativesOf(columns, results, a.pivots, a.zero),
+    note: BASIS_NOTE,
   }
+}
+
+/** The first redundant, non-vanishing candidates (one sign of each O ± h.c. pair). */
+function alternativesOf(columns: Column[], results: { matrix: number[][] }[], pivots: number[], zero: boolean[]) {
+  const pivotSet = new Set(pivots)
+  const seen = new Set<unknown>()
+  const out: { column: Column; rows: number[][] }[] = []
+  for (let j = 0; j < columns.length && out.length < MAX_ALTERNATIVES; j++) {
+    const col = columns[j]!
+    if (pivotSet.has(j) || zero[j] || col.source === 'kept' || seen.has(col.candidate)) continue
+    seen.add(col.candidate)
+    out.push({ column: col, rows: results.map((r) => r.matrix.map((row) => row[j]!)) })
+  }
+  return out
 }
 
 /** A chosen O ± h.c. whose partner O ∓ h.c. vanishes equals 2·O: keep O itself. */

@@ -34,6 +34,8 @@ export interface BasisOperator {
    * non-Hermitian operators: those give one CP-even and one CP-odd real parameter).
    */
   cp: 'even' | 'odd' | null
+  /** Values of the symmetrised amplitude at the class's sample points, per prime (board math). */
+  fingerprint?: { primes: number[]; values: number[][] }
 }
 
 function fourOf(b: ClassBasis, col: Column, hc: string): string | null {
@@ -61,28 +63,38 @@ function keptLatex(b: ClassBasis, text: string): string {
  */
 export function describeOperators(b: ClassBasis): BasisOperator[] {
   const herm = hermiticityOf(b)
+  return b.kept.map((col: Column, i) => describeColumn(b, col, herm[i]!))
+}
+
+/**
+ * Describe a redundant candidate offered as an alternative (set aside on the board): an
+ * O ± h.c. column of a self-conjugate class is Hermitian up to a phase, any other is not.
+ */
+export function describeAlternative(b: ClassBasis, col: Column): BasisOperator {
+  return describeColumn(b, col, b.selfConjugate && col.source === 'hermitian')
+}
+
+function describeColumn(b: ClassBasis, col: Column, hermitian: boolean): BasisOperator {
   const bosonic = b.class.legs.every((p) => !p.fermion)
-  return b.kept.map((col: Column, i) => {
-    const t = col.terms[0]!
-    const herm1 = col.source === 'hermitian'
-    const single = col.terms.length === 1 || herm1
-    const base = col.source === 'kept' ? keptLatex(b, col.text) : operatorLatex(b.class.legs, t.lorentz, t.gauge)
-    const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
-    const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
-    return {
-      text: col.text,
-      latex: base + hc,
-      latex4: fourOf(b, col, hc),
-      cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
-      source: col.source,
-      fields: b.class.legs.map((p) => p.label),
-      derivatives: single ? t.lorentz.derivs : [],
-      angle: single ? t.lorentz.angle : [],
-      square: single ? t.lorentz.square : [],
-      gauge: single ? t.gauge.map((s) => ({ group: s.group, deltas: s.deltas, eps: s.eps })) : [],
-      hermitian: herm[i]!,
-      realParameters: herm[i]! ? 1 : 2,
-      flavorComponents: 1,
-    }
-  })
+  const t = col.terms[0]!
+  const herm1 = col.source === 'hermitian'
+  const single = col.terms.length === 1 || herm1
+  const base = col.source === 'kept' ? keptLatex(b, col.text) : operatorLatex(b.class.legs, t.lorentz, t.gauge)
+  const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
+  const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
+  return {
+    text: col.text,
+    latex: base + hc,
+    latex4: fourOf(b, col, hc),
+    cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
+    source: col.source,
+    fields: b.class.legs.map((p) => p.label),
+    derivatives: single ? t.lorentz.derivs : [],
+    angle: single ? t.lorentz.angle : [],
+    square: single ? t.lorentz.square : [],
+    gauge: single ? t.gauge.map((s) => ({ group: s.group, deltas: s.deltas, eps: s.eps })) : [],
+    hermitian,
+    realParameters: hermitian ? 1 : 2,
+    flavorComponents: 1,
+  }
 }

@@ -1,0 +1,27 @@
+/**
+ * The fingerprint of an operator a user types (in the input syntax of basis/inputSyntax.ts)
+ * at the same sample points as the stored operators of its class, so that the board can
+ * rewrite it onto whatever the group currently keeps.
+ */
+import type { Theory } from '../../../shared/schemas/theory'
+import { classBasis } from '../basis/classBasis'
+import { parseOperatorText } from '../basis/inputSyntax'
+import { combinationValues } from '../basis/evaluation'
+import type { Fingerprint } from './fingerprints'
+
+/**
+ * @example typedFingerprint(photons, "F_L^2 F_R^2", "<12>^2[34]^2").values.length // 2 primes
+ * Method: the class's sample points are fixed by its key (seeded), so recomputing the class
+ * basis reproduces them; the typed amplitude is symmetrised over identical legs like every
+ * candidate (amplitude–operator correspondence; Shadmi & Weiss, JHEP 02 (2019) 165).
+ */
+export function typedFingerprint(theory: Theory, classKey: string, text: string): Fingerprint {
+  const b = classBasis(theory, classKey)
+  const terms = parseOperatorText(b.class, text, b.gaugeStructures.length)
+  return {
+    primes: b.primes.map((pd) => pd.F.p),
+    values: b.primes.map((pd) => combinationValues(pd.F, terms.map((t) => ({
+      lorentz: t.lorentz, gauge: b.gaugeStructures[t.gaugeIndex]!, coeff: pd.F.fromRational(t.coeff),
+    })), pd.points, b.perms)),
+  }
+}
