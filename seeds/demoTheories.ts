@@ -1,4 +1,6 @@
-// Theory files of the demo study (invented). Presets shipped with the app are added as well.
+// Theory files of the demo study (invented), plus two shipped presets the group works with.
+import { findPreset } from '../shared/presets/index'
+
 export const DEMO_THEORIES = [
   {
     name: 'Hidden photon with tarnion',
@@ -22,4 +24,14 @@ export const DEMO_THEORIES = [
       { name: 'A', lorentz: 'F', gaugeOf: 'Uh' },
     ],
   },
+  { ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium in the heavy-particle frame' },
+  { ...findPreset('smeft')!.theory, name: 'SMEFT (reference)' },
 ]
+
+/** Runs the demo starts on first boot, so the board has results to show. */
+export const DEMO_RUNS = [
+  { theory: 'Hidden photon with tarnion', kind: 'basis', maxDim: 8 },
+  { theory: 'Hidden photons below the tarnion', kind: 'basis', maxDim: 8 },
+  { theory: 'Vexonium in the heavy-particle frame', kind: 'basis', maxDim: 5 },
+  { theory: 'SMEFT (reference)', kind: 'basis', maxDim: 6, nf: 1 },
+] as const

@@ -4,8 +4,21 @@
 export interface BoardOperator {
   id: number, order: number, classKey: string, column: 'kept' | 'set_aside', position: number, latex: string
   latexDirac: string | null, hermitian: boolean, realParameters: number, text: string, version: number, flavorComponents: number
+  details?: {
+    antiHermitian: boolean
+    cp: 'even' | 'odd' | null
+    relations: { coefficient: string, relation: string, source: string }[]
+    publishedRewrite: { id: string, coefficient: string }[] | null
+    gaugeEomNote: string | null
+    source: string | null
+  }
 }
-export interface BoardClass { dimension: number, key: string, rank: number, hilbert: number, tallyOk: boolean, message?: string | null, realParameters?: number }
+/** Heavy-frame classes have an order in 1/m and no mass dimension, no Hilbert series (null). */
+export interface BoardClass { order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null, realParameters?: number }
+
+export function classOrder(c: Pick<BoardClass, 'order' | 'dimension'>): number {
+  return c.order ?? (c.dimension as number) - 4
+}
 export interface Rewrite { vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
 export interface BoardTag { id: number, operatorId: number, kind: string, label: string }
 export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null }
@@ -22,6 +35,24 @@ export const useBasesStore = defineStore('bases', () => {
   const notation = ref<'two' | 'four'>('two')
   const filter = reactive({ tag: '', text: '' })
   const readonly = computed(() => !['editor', 'owner'].includes(role.value))
+  // Counting-rule view: the orders of every operator under another rule of the theory.
+  const rules = ref<{ name: string, kind: string }[]>([])
+  const ruleName = ref('')
+  const ruleOrders = ref<Record<number, string>>({})
+  const ordersBase = ref('')
+  async function loadRules(base: string) {
+    ordersBase.value = base
+    rules.value = (await $fetch<{ rules: { name: string, kind: string }[] }>(base)).rules
+  }
+  async function selectRule(name: string) {
+    ruleName.value = name
+    ruleOrders.value = name ? (await $fetch<{ orders: Record<number, string> }>(ordersBase.value, { query: { rule: name } })).orders : {}
+  }
+  /** The order under the selected rule when it differs from the stored one, else null. */
+  function changedOrder(op: BoardOperator): string | null {
+    const o = ruleOrders.value[op.id]
+    return o !== undefined && o !== String(op.order) ? o : null
+  }
 
   function setData(data: any) {
     basis.value = data.basis
@@ -30,7 +61,7 @@ export const useBasesStore = defineStore('bases', () => {
     tags.value = data.tags
     notes.value = data.notes
     const cols: Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }> = {}
-    for (const c of data.basis.classes as BoardClass[]) cols[c.dimension - 4] ??= { kept: [], set_aside: [] }
+    for (const c of data.basis.classes as BoardClass[]) cols[classOrder(c)] ??= { kept: [], set_aside: [] }
     for (const op of data.operators as BoardOperator[]) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
     columns.value = cols
   }
@@ -91,5 +122,5 @@ export const useBasesStore = defineStore('bases', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
+  return { rules, ruleName, ruleOrders, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
 })

@@ -4,6 +4,7 @@ import { parentPort, workerData } from 'node:worker_threads'
 import { countOperators } from '../engine/counting/countOperators'
 import { buildBasis } from '../engine/basis/buildBasis'
 import { typedFingerprint } from '../engine/board/typedOperator'
+import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
 
@@ -23,7 +24,9 @@ try {
     ? typedFingerprint(theory, task.classKey, task.text)
     : task.kind === 'count'
       ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
-      : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
+      : theory.frame === 'heavy'
+        ? enumerateHeavyTheory(theory, { onProgress, signal })
+        : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
   const e = error as Error

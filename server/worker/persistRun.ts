@@ -2,16 +2,31 @@ import type { Knex } from 'knex'
 import type { CountResult } from '../engine/counting/countOperators'
 import type { BasisReport } from '../engine/basis/buildBasis'
 import type { BasisOperator } from '../engine/basis/describe'
+import type { HeavyEnumeration } from '../engine/heavy/enumerate'
+import { writeHeavyBasis } from './heavyBasis'
 
 /** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
 export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
   await db.transaction(async (trx) => {
-    const basisId = run.kind === 'basis' ? await writeBasis(trx, run, result as BasisReport) : null
-    const summary = run.kind === 'count' ? result : { ...basisSummary(result as BasisReport), basisId }
-    await trx('runs').where({ id: run.id }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
+    if (run.kind === 'count') {
+      await finish(trx, run.id, result)
+    } else if (isHeavy(result)) {
+      const basisId = await writeHeavyBasis(trx, run, result)
+      await finish(trx, run.id, { heavy: true, basisId, note: result.eomNote, byOrder: result.orders.map((o) => ({ order: o.order, operators: o.count, matchesPublished: o.conventionalSpansBasis })) })
+    } else {
+      const basisId = await writeBasis(trx, run, result as BasisReport)
+      await finish(trx, run.id, { ...basisSummary(result as BasisReport), basisId })
+    }
   })
 }
 
+function isHeavy(result: unknown): result is HeavyEnumeration {
+  return typeof result === 'object' && result !== null && 'eomNote' in result && 'orders' in result
+}
+
+async function finish(trx: Knex.Transaction, runId: number, summary: unknown) {
+  await trx('runs').where({ id: runId }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
+}
 export interface RunParams { maxDim: number, nf?: number, theory: unknown, theoryVersion: number }
 
 function basisSummary(report: BasisReport) {
@@ -25,7 +40,7 @@ function basisSummary(report: BasisReport) {
 
 async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport): Promise<number> {
   const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({
-    dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
+    order: d.dimension - 4, dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
     tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.realParameters, flavor: c.flavor ?? null,
   })))
   const [basis] = await trx('bases').insert({

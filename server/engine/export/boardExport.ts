@@ -11,8 +11,8 @@ export interface ExportOperator {
   tags: { kind: string, label: string }[]
   notes: { author: string, body: string, createdAt: string }[]
 }
-export interface ExportClass { key: string, rank: number, hilbert: number, tallyOk: boolean, operators: ExportOperator[] }
-export interface ExportOrder { order: number, dimension: number, classes: ExportClass[] }
+export interface ExportClass { key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, operators: ExportOperator[] }
+export interface ExportOrder { order: number, dimension: number | null, classes: ExportClass[] }
 export interface BoardExport {
   format: 'scalewright-basis'
   formatVersion: 1
@@ -26,15 +26,15 @@ export interface BoardExport {
 /** Group flat operator rows into orders and classes (orders ascending, classes in stored order). */
 export function assembleExport(input: {
   theory: { name: string, definition: unknown }, countingRule: string, note: string, exportedAt: string,
-  classes: { dimension: number, key: string, rank: number, hilbert: number, tallyOk: boolean }[],
+  classes: { order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null }[],
   operators: (Omit<ExportOperator, 'tags' | 'notes'> & { order: number, classKey: string })[],
   tags: { operatorId: number, kind: string, label: string }[],
   notes: { operatorId: number | null, authorName: string | null, body: string, createdAt: string | Date }[],
 }): BoardExport {
   const orders = new Map<number, ExportOrder>()
   for (const c of input.classes) {
-    const order = c.dimension - 4
-    if (!orders.has(order)) orders.set(order, { order, dimension: c.dimension, classes: [] })
+    const order = c.order ?? c.dimension! - 4
+    if (!orders.has(order)) orders.set(order, { order, dimension: c.dimension ?? null, classes: [] })
     orders.get(order)!.classes.push({ key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, operators: [] })
   }
   for (const op of input.operators) {

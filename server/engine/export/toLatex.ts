@@ -18,7 +18,7 @@ export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): stri
     `% Scalewright basis export: ${data.theory.name} (${data.exportedAt})`,
     `% Legend: operators in two-component notation with spinor brackets; derivatives act on the`,
     `% field they follow. Independence holds ${data.note || 'modulo equations of motion and integration by parts'}.`,
-    `% Counting rule: ${data.countingRule}; order n = mass dimension - 4 under the mass-ratio rule.`,
+    `% Counting rule: ${data.countingRule}; ${data.countingRule === '1/m' ? 'order n = power of 1/m in the heavy-particle frame' : 'order n = mass dimension - 4 under the mass-ratio rule'}.`,
     `% "real par." counts real Wilson-coefficient parameters for one flavor (2 for a non-Hermitian operator and its conjugate).`,
     '',
   ]
@@ -33,7 +33,7 @@ export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): stri
       out.push(`$${classKeyLatex(c.key)}$ & $${body}$ & ${o.realParameters} & ${tags} \\\\`)
     }
     out.push('\\hline', '\\end{tabular}',
-      `\\caption{${escapeText(data.theory.name)}: kept operators of order ${order.order} (mass dimension ${order.dimension}).}`,
+      `\\caption{${escapeText(data.theory.name)}: kept operators of order ${order.order}${order.dimension === null ? '' : ` (mass dimension ${order.dimension})`}.}`,
       '\\end{table}', '')
   }
   return out.join('\n')

@@ -32,7 +32,10 @@ export async function boardData(basisId: number) {
       id: basis.id, theoryId: basis.theory_id, theoryName: basis.theory_name, theoryVersion: basis.theory_version,
       countingRule: basis.counting_rule, maxOrder: basis.max_order, classes: basis.classes, note: basis.note, createdAt: basis.created_at,
     },
-    operators: operators.map(({ structure, ...o }) => ({ ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1 })),
+    operators: operators.map(({ structure, ...o }) => ({
+      ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1,
+      details: { antiHermitian: !!structure?.antiHermitian, cp: structure?.cp ?? null, relations: structure?.relations ?? [], publishedRewrite: structure?.publishedRewrite ?? null, gaugeEomNote: structure?.gaugeEomNote ?? null, source: structure?.source ?? null },
+    })),
     tags,
     notes,
     thresholdTags,
@@ -42,4 +45,11 @@ export async function boardData(basisId: number) {
 
 export function latestBasisOf(theoryId: number) {
   return useDb()('bases').where({ theory_id: theoryId }).orderBy('id', 'desc').first('id')
+}
+
+/** The frozen theory file a basis was computed from (the theory may have been edited since). */
+export async function theoryOfBasis(basisId: number): Promise<Record<string, any>> {
+  const row = await useDb()('bases as b').leftJoin('runs as r', 'r.id', 'b.run_id').join('theories as t', 't.id', 'b.theory_id')
+    .where('b.id', basisId).first('r.params', 't.definition')
+  return row?.params?.theory ?? row?.definition
 }

@@ -1,0 +1,62 @@
+/**
+ * Orders of the board's operators under any counting rule of the theory, so the board can
+ * switch rules and show which operators change order. Relativistic operators are read from
+ * their class key; heavy-frame operators carry their building-block terms.
+ */
+import { EngineInputError } from '../errors'
+import { resolveRule, type RuleContext } from '../rules/defaultWeights'
+import { orderOfOperator, formatOrder } from '../rules/orderOf'
+import { blocksFromClassKey } from '../rules/classKeyBlocks'
+import type { CountingRule } from '../../../shared/schemas/countingRules'
+
+export interface RuleTheory {
+  frame?: string
+  fields?: ReadonlyArray<{ name: string, lorentz: 'S' | 'L' | 'R' | 'F' }>
+  heavy?: { particle: { name: string }, antiparticle?: { name: string } }
+  countingRules?: CountingRule[]
+}
+
+/** The mass-ratio rule every theory has, named as the board shows it. */
+export const DEFAULT_RULE: CountingRule = { name: 'mass ratio (E/M)', kind: 'massRatio' }
+
+/** The rules a theory offers: its own, with the mass-ratio rule first when it has none of that kind. */
+export function rulesOf(theory: RuleTheory): CountingRule[] {
+  const own = theory.countingRules ?? []
+  return own.some((r) => r.kind === 'massRatio') ? own : [DEFAULT_RULE, ...own]
+}
+
+function contextOf(theory: RuleTheory): RuleContext {
+  if (theory.frame === 'heavy') {
+    if (!theory.heavy) throw new EngineInputError('ruleOrders', 'a heavy-frame theory needs its "heavy" key')
+    return { frame: 'heavy', particle: theory.heavy.particle.name, antiparticle: theory.heavy.antiparticle?.name }
+  }
+  return { frame: 'relativistic', fields: theory.fields ?? [] }
+}
+
+/**
+ * Exact order (as "p/q" text) of every operator under the named rule.
+ * @example ruleOrders(smeft, 'mass ratio (E/M)', [{ id: 1, classKey: 'H^3 H*^3' }]) // { 1: '2' }
+ */
+export function ruleOrders(theory: RuleTheory, ruleName: string, operators: { id: number, classKey: string, terms?: Record<string, number>[] }[]): Record<number, string> {
+  const rule = rulesOf(theory).find((r) => r.name === ruleName)
+  if (!rule) throw new EngineInputError('ruleOrders', `the theory has no counting rule named "${ruleName}"`)
+  const ctx = contextOf(theory)
+  const resolved = resolveRule(rule, ctx)
+  const out: Record<number, string> = {}
+  for (const op of operators) {
+    const terms = op.terms?.length ? op.terms : [classBlocks(op.classKey)]
+    out[op.id] = formatOrder(orderOfOperator({ id: String(op.id), terms }, resolved, ctx))
+  }
+  return out
+}
+
+/** Block counts of a relativistic class key; a field strength's chiral halves count as the field. */
+function classBlocks(key: string): Record<string, number> {
+  const blocks = blocksFromClassKey(key)
+  const out: Record<string, number> = {}
+  for (const [b, n] of Object.entries(blocks)) {
+    const name = b.replace(/_[LR]$/, '')
+    out[name] = (out[name] ?? 0) + n
+  }
+  return out
+}

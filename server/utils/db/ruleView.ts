@@ -1,0 +1,13 @@
+import { useDb } from './connection'
+import { theoryOfBasis } from './bases'
+import { ruleOrders, rulesOf, type RuleTheory } from '../../engine/board/ruleOrders'
+
+/** The counting rules a basis can be viewed under, and (when a rule is named) every operator's order under it. */
+export async function ordersUnderRule(basisId: number, ruleName: string | undefined) {
+  const theory = (await theoryOfBasis(basisId)) as RuleTheory
+  const rules = rulesOf(theory).map((r) => ({ name: r.name, kind: r.kind, parameter: r.parameter ?? null }))
+  if (!ruleName) return { rules, rule: null, orders: {} }
+  const ops = await useDb()('operators').where({ basis_id: basisId }).select('id', 'class_key', 'structure')
+  const orders = ruleOrders(theory, ruleName, ops.map((o) => ({ id: o.id, classKey: o.class_key, terms: o.structure?.terms })))
+  return { rules, rule: ruleName, orders }
+}

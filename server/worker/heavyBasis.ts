@@ -1,0 +1,56 @@
+import type { Knex } from 'knex'
+import type { HeavyEnumeration, HeavyOperator } from '../engine/heavy/enumerate'
+import { rewriteHeavy } from '../engine/heavy/enumerate'
+import { toString as ratString, isZero } from '../engine/exact/rational'
+import type { RunParams } from './persistRun'
+
+/**
+ * Store a heavy-frame enumeration as a basis: per order in 1/m, the ψ†…ψ bilinears kept,
+ * the published operators of that order set aside with their rewrite onto the enumerated
+ * basis and their coefficient relations, the χ copies and the leading four-fermion sector.
+ */
+export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, e: HeavyEnumeration): Promise<number> {
+  const p = e.particle
+  const a = e.antiparticle
+  const classes: Record<string, unknown>[] = []
+  const rows: Record<string, unknown>[] = []
+  const next = new Map<string, number>()
+  const add = (order: number, key: string, column: 'kept' | 'set_aside', op: HeavyOperator, extra: Record<string, unknown> = {}) => {
+    const slot = `${order}|${column}`
+    const position = next.get(slot) ?? 0
+    next.set(slot, position + 1)
+    rows.push({
+      order, class_key: key, column, position, text: op.id, latex: op.latex, latex_dirac: null,
+      // An anti-Hermitian operator as written is i × a Hermitian one: one real coefficient.
+      hermitian: true, real_parameters: 1,
+      structure: JSON.stringify({ antiHermitian: !!op.antiHermitian, terms: op.terms, relations: op.relations, gaugeEomNote: op.gaugeEomNote ?? null, source: op.source ?? null, coefficient: op.coefficient ?? null, ...extra }),
+    })
+  }
+  for (const o of e.orders) {
+    const key = `${p}* ${p} (1/m^${o.order})`
+    const spans = o.conventionalSpansBasis
+    classes.push({ order: o.order, dimension: null, key, rank: o.count, hilbert: null, tallyOk: null, message: spans === null ? null : spans ? 'the published operators of this order span exactly this space' : 'the published operators of this order do NOT span this space' })
+    for (const op of o.basis) add(o.order, key, 'kept', op)
+    for (const op of o.conventional) {
+      const coefs = op.combo ? rewriteHeavy(op.combo, o.order, e.charged, undefined, e.colorN) : []
+      add(o.order, key, 'set_aside', op, { publishedRewrite: coefs.filter((c) => !isZero(c.coef)).map((c) => ({ id: c.id, coefficient: ratString(c.coef) })) })
+    }
+    if (a && o.antiparticle.length) {
+      const ckey = `${a}* ${a} (1/m^${o.order})`
+      classes.push({ order: o.order, dimension: null, key: ckey, rank: o.antiparticle.length, hilbert: null, tallyOk: null, message: e.chargeConjugationNote ?? 'coefficients fixed by charge conjugation' })
+      for (const op of o.antiparticle) add(o.order, ckey, 'kept', op)
+    }
+  }
+  if (a && e.fourFermion.length) {
+    const order = Math.min(...e.fourFermion.map((op) => op.order))
+    const key = `${p}* ${p} ${a}* ${a} (1/m^${order})`
+    classes.push({ order, dimension: null, key, rank: e.fourFermion.length, hilbert: null, tallyOk: null, message: 'leading four-fermion operators (written in, not enumerated)' })
+    for (const op of e.fourFermion) add(order, key, 'kept', op)
+  }
+  const [basis] = await trx('bases').insert({
+    theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',
+    max_order: Math.max(0, ...e.orders.map((o) => o.order)), classes: JSON.stringify(classes), note: e.eomNote,
+  }).returning('id')
+  if (rows.length) await trx('operators').insert(rows.map((r) => ({ ...r, basis_id: basis.id })))
+  return basis.id
+}
