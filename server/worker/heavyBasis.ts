@@ -50,6 +50,7 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',
     max_order: Math.max(0, ...e.orders.map((o) => o.order)), classes: JSON.stringify(classes), note: e.eomNote,
+    coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   if (rows.length) await trx('operators').insert(rows.map((r) => ({ ...r, basis_id: basis.id })))
   return basis.id

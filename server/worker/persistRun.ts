@@ -46,6 +46,8 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion,
     counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes), note: report.note,
+    // As computed, the kept operators of each class are independent and complete.
+    coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   // Positions run per order and column, in class order: kept operators, then the alternatives.
   const next = { kept: new Map<number, number>(), set_aside: new Map<number, number>() }

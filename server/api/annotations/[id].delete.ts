@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../utils/auth/currentUser'
 import { annotationOr404 } from '../../utils/db/annotations'
 import { useDb } from '../../utils/db/connection'
 import { roleAtLeast } from '../../../shared/types/roles'
+import { touchBasesOfTheory } from '../../utils/db/boardCache'
 
 // The author (still at least commenter) or an owner deletes a note.
 export default defineApiHandler(async (event) => {
@@ -11,5 +12,6 @@ export default defineApiHandler(async (event) => {
   const { user, role } = await requireGroupRole(event, note.group_id, 'commenter')
   if (note.author_id !== user.id && !roleAtLeast(role, 'owner')) fail(403, 'Only the author or an owner may delete this note')
   await useDb()('annotations').where({ id: note.id }).delete()
+  await touchBasesOfTheory(note.theory_id)
   return { deleted: note.id }
 })

@@ -5,6 +5,7 @@ import { annotationOr404 } from '../../utils/db/annotations'
 import { useDb } from '../../utils/db/connection'
 import { AnnotationUpdateSchema } from '../../../shared/schemas/theoryRequests'
 import { roleAtLeast } from '../../../shared/types/roles'
+import { touchBasesOfTheory } from '../../utils/db/boardCache'
 
 // The author (still at least commenter) or an editor edits a note; the old text goes to history.
 export default defineApiHandler(async (event) => {
@@ -16,5 +17,6 @@ export default defineApiHandler(async (event) => {
     await trx('annotation_revisions').insert({ annotation_id: note.id, body: note.body, edited_by: user.id })
     await trx('annotations').where({ id: note.id }).update({ body, updated_at: trx.fn.now() })
   })
+  await touchBasesOfTheory(note.theory_id)
   return { annotation: { id: note.id, body } }
 })

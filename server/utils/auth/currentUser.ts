@@ -11,10 +11,19 @@ export interface CurrentUser { id: number, email: string, displayName: string, s
  * or a changed site role takes effect at once (the sealed cookie only carries the id).
  */
 export async function requireUser(event: H3Event): Promise<CurrentUser> {
+  const id = await sessionUserId(event)
+  const row = await useDb()('users').where({ id }).first('id', 'email', 'display_name', 'site_role')
+  return toUser(event, row)
+}
+
+async function sessionUserId(event: H3Event): Promise<number> {
   const session = await getUserSession(event)
   const id = (session.user as { id?: number } | undefined)?.id
   if (!id) fail(401, 'Sign in to continue')
-  const row = await useDb()('users').where({ id }).first('id', 'email', 'display_name', 'site_role')
+  return id
+}
+
+async function toUser(event: H3Event, row: Record<string, any> | undefined): Promise<CurrentUser> {
   if (!row) {
     await clearUserSession(event)
     fail(401, 'Your account no longer exists; sign in again')
@@ -28,15 +37,16 @@ export async function requireAdmin(event: H3Event): Promise<CurrentUser> {
   return user
 }
 
-export async function groupRoleOf(userId: number, groupId: number): Promise<GroupRole | null> {
-  const row = await useDb()('memberships').where({ user_id: userId, group_id: groupId }).first('role')
-  return row?.role ?? null
-}
-
-/** Signed in and at least `needed` in the group, else 401/403 with a message saying why. */
+/**
+ * Signed in and at least `needed` in the group, else 401/403 with a message saying why.
+ * One query reads the account and its membership (this runs on every group route).
+ */
 export async function requireGroupRole(event: H3Event, groupId: number, needed: GroupRole) {
-  const user = await requireUser(event)
-  const role = await groupRoleOf(user.id, groupId)
+  const id = await sessionUserId(event)
+  const row = await useDb()('users as u').leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOnVal('m.group_id', groupId))
+    .where('u.id', id).first('u.id', 'u.email', 'u.display_name', 'u.site_role', 'm.role')
+  const user = await toUser(event, row)
+  const role = (row.role ?? null) as GroupRole | null
   if (!role) fail(403, 'You are not a member of this group')
   if (!roleAtLeast(role, needed)) fail(403, `This needs the ${needed} role in the group; you are ${role}`)
   return { user, role: role! }

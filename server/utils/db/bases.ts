@@ -19,9 +19,13 @@ export async function operatorOr404(id: number) {
 export async function boardData(basisId: number) {
   const db = useDb()
   const basis = await basisOr404(basisId)
-  const operators = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'class_key', 'column', 'position'])
+  // Only the parts of `structure` the board shows (it also holds spinor and gauge index data).
+  const operators = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'column', 'position'])
     .select('id', 'order', 'class_key as classKey', 'column', 'position', 'latex', 'latex_dirac as latexDirac', 'hermitian',
-      'real_parameters as realParameters', 'text', 'structure', 'version')
+      'real_parameters as realParameters', 'text', 'version',
+      db.raw(`jsonb_build_object('fields', structure->'fields', 'flavorComponents', structure->'flavorComponents', 'cp', structure->'cp',
+        'relations', structure->'relations', 'publishedRewrite', structure->'publishedRewrite', 'gaugeEomNote', structure->'gaugeEomNote',
+        'source', structure->'source', 'antiHermitian', structure->'antiHermitian') as structure`))
   const ids = operators.map((o) => o.id)
   const tags = ids.length ? await db('tags').whereIn('operator_id', ids).select('id', 'operator_id as operatorId', 'kind', 'label') : []
   const notes = await db('annotations as a').leftJoin('users as u', 'u.id', 'a.author_id').where('a.theory_id', basis.theory_id)

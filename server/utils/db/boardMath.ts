@@ -38,12 +38,29 @@ export async function rewriteOntoKept(basisId: number, classKey: string, operato
   return { vanishes: terms.length === 0, terms }
 }
 
-/** Coverage of every class of a basis, keyed by class key. */
-export async function coverageOfClasses(basisId: number, classes: { key: string, rank: number }[]) {
-  const out: Record<string, { rank: number, required: number, complete: boolean }> = {}
+export type CoverageMap = Record<string, { rank: number, required: number, complete: boolean }>
+
+/** Coverage of every class of a basis, keyed by class key: stored, or computed and stored. */
+export async function coverageOfClasses(basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
+  const row = await useDb()('bases').where({ id: basisId }).first('coverage')
+  const stored = (row?.coverage ?? {}) as CoverageMap
+  if (classes.every((c) => stored[c.key])) return stored
+  return recomputeCoverage(basisId, classes)
+}
+
+/** Recompute and store coverage of the given classes (all of them after an import). */
+export async function recomputeCoverage(basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
+  const out: CoverageMap = {}
   for (const c of classes) {
     const { rank, required, complete } = await classCoverage(basisId, c.key, c.rank)
     out[c.key] = { rank, required, complete }
   }
+  await storeCoverage(basisId, out)
   return out
+}
+
+/** Merge class coverages into the stored map (one class after a move). */
+export async function storeCoverage(basisId: number, part: CoverageMap) {
+  // Bumps the version too: a board cached between the move and this update must not survive it.
+  await useDb()('bases').where({ id: basisId }).update({ coverage: useDb().raw('coverage || ?::jsonb', [JSON.stringify(part)]), version: useDb().raw('version + 1') })
 }

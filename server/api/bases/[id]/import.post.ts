@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { basisOr404 } from '../../../utils/db/bases'
 import { useDb } from '../../../utils/db/connection'
 import { ImportChoiceSchema, IMPORT_MAX_BYTES } from '../../../../shared/schemas/importChoice'
+import { recomputeCoverage } from '../../../utils/db/boardMath'
 
 // Editors apply a kept/set-aside choice from a JSON export. Operators are matched by class and
 // text; one unmatched entry refuses the whole import (nothing is changed).
@@ -29,5 +30,8 @@ export default defineApiHandler(async (event) => {
     }
     await trx('bases').where({ id: basis.id }).increment('version', 1)
     return { matched: wanted.length, changed }
+  }).then(async (result) => {
+    await recomputeCoverage(basis.id, basis.classes as { key: string, rank: number }[])
+    return result
   })
 })

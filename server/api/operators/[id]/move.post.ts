@@ -3,7 +3,7 @@ import { readJson, intParam } from '../../../utils/http/readJson'
 import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { operatorOr404 } from '../../../utils/db/bases'
 import { moveOperator } from '../../../utils/db/moves'
-import { classCoverage, rewriteOntoKept } from '../../../utils/db/boardMath'
+import { classCoverage, rewriteOntoKept, storeCoverage } from '../../../utils/db/boardMath'
 import { MoveSchema } from '../../../../shared/schemas/boardRequests'
 import { basisOr404 } from '../../../utils/db/bases'
 
@@ -21,9 +21,11 @@ export default defineApiHandler(async (event) => {
   const moved = await moveOperator(op, body, user.id)
   const basis = await basisOr404(op.basis_id)
   const required = (basis.classes as { key: string, rank: number }[]).find((c) => c.key === op.class_key)?.rank ?? 0
+  const coverage = await classCoverage(op.basis_id, op.class_key, required)
+  await storeCoverage(op.basis_id, { [op.class_key]: { rank: coverage.rank, required: coverage.required, complete: coverage.complete } })
   return {
     operator: moved,
-    coverage: await classCoverage(op.basis_id, op.class_key, required),
+    coverage,
     rewrite: body.column === 'set_aside' ? await rewriteOntoKept(op.basis_id, op.class_key, op.id) : null,
   }
 })

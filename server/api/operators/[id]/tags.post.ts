@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { operatorOr404 } from '../../../utils/db/bases'
 import { useDb } from '../../../utils/db/connection'
 import { TagCreateSchema } from '../../../../shared/schemas/boardRequests'
+import { touchBasesOfOperator } from '../../../utils/db/boardCache'
 
 // Commenters and above tag operators (threshold, tree, loop, CP-odd, B-violating, custom).
 export default defineApiHandler(async (event) => {
@@ -13,6 +14,7 @@ export default defineApiHandler(async (event) => {
   const [tag] = await useDb()('tags').insert({ operator_id: op.id, kind: body.kind, label: body.label ?? '', created_by: user.id })
     .onConflict(['operator_id', 'kind', 'label']).ignore().returning(['id', 'operator_id as operatorId', 'kind', 'label'])
   if (!tag) fail(409, 'This operator already carries that tag')
+  await touchBasesOfOperator(op.id)
   created(event)
   return { tag }
 })

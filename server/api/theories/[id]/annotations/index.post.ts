@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../../utils/db/theories'
 import { useDb } from '../../../../utils/db/connection'
 import { AnnotationCreateSchema } from '../../../../../shared/schemas/theoryRequests'
+import { touchBasesOfTheory } from '../../../../utils/db/boardCache'
 
 // Commenters and above leave notes on a theory or on one of its operators.
 export default defineApiHandler(async (event) => {
@@ -18,6 +19,7 @@ export default defineApiHandler(async (event) => {
   const [row] = await useDb()('annotations')
     .insert({ theory_id: theory.id, operator_id: body.operatorId ?? null, author_id: user.id, body: body.body })
     .returning(['id', 'body', 'operator_id as operatorId', 'created_at as createdAt'])
+  await touchBasesOfTheory(theory.id)
   created(event)
   return { annotation: { ...row, authorId: user.id, authorName: user.displayName } }
 })
