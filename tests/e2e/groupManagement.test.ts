@@ -1,7 +1,7 @@
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest'
 import type { Browser, Page } from 'playwright-core'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
-import { uniqueEmail } from '../support/client'
+import { uniqueEmail, signedUpClient } from '../support/client'
 import { testDb } from '../support/db'
 
 let browser: Browser
@@ -91,5 +91,38 @@ describe('group management in a real browser', () => {
     await guest.getByRole('button', { name: 'Leave', exact: true }).click()
     await guest.waitForURL('**/groups')
     await expect.poll(() => guest.getByRole('link', { name: 'Management Group' }).count()).toBe(0)
+  })
+
+  it('a signed-in account joins with one click when the address matches, and is told when it does not', async () => {
+    const owner = await signedUpClient('owner-api')
+    const slug = `gj-${Date.now().toString(36)}`
+    expect((await owner.client.post('/api/groups', { slug, name: 'Joining Group' })).status).toBe(201)
+    const email = uniqueEmail('joiner-e2e')
+    expect((await owner.client.post(`/api/groups/${slug}/invitations`, { email, role: 'commenter' })).status).toBe(201)
+    const token = await invitationToken(email)
+
+    const other = await newPage(browser, inject('baseUrl'))
+    await other.goto('/signup')
+    await hydrated(other)
+    await signUp(other, 'Someone Else', uniqueEmail('other-e2e'))
+    await other.goto(`/join/${token}`)
+    await hydrated(other)
+    await expect.poll(() => other.locator('main').innerText()).toContain(`but this invitation is for ${email}`)
+    expect(await other.getByRole('button', { name: 'Join' }).count()).toBe(0)
+
+    const page = await newPage(browser, inject('baseUrl'))
+    await page.goto('/signup')
+    await hydrated(page)
+    await signUp(page, 'Joiner', email)
+    await page.goto(`/join/${token}`)
+    await hydrated(page)
+    await page.getByRole('button', { name: 'Join' }).click()
+    await page.waitForURL(`**/groups/${slug}`)
+    await expect.poll(() => page.locator('main').innerText()).toContain('Your role: commenter')
+    expect(await page.getByRole('link', { name: 'New theory' }).count()).toBe(0) // commenters declare no theory
+
+    await page.goto(`/join/${token}`) // used once: the link is spent
+    await hydrated(page)
+    await expect.poll(() => page.locator('main').innerText()).toContain('This invitation is invalid, used or expired')
   })
 })
