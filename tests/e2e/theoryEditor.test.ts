@@ -39,6 +39,9 @@ async function messageNextTo(page: Page, label: string) {
 describe('the theory editor in a real browser', () => {
   it('builds SMEFT from the preset, warns about anomalies live, validates, saves, downloads and uploads', async () => {
     const page = await newPage(browser, inject('baseUrl'))
+    const problems: string[] = []
+    page.on('pageerror', (e) => problems.push(e.message))
+    page.on('console', (m) => { if (m.type() === 'error' && !/status of 409/.test(m.text())) problems.push(m.text()) })
     const slug = await signUpAndFoundGroup(page, 'Editor Tester')
     await page.getByRole('link', { name: 'New theory' }).click()
     await page.waitForURL(`**/groups/${slug}/new-theory`)
@@ -80,7 +83,6 @@ describe('the theory editor in a real browser', () => {
     expect(saved.theory.version).toBe(1)
     expect(saved.theory.definition).toEqual(smeft) // the preset, rebuilt field by field
 
-    page.on('pageerror', (e) => console.log('[pageerror]', e.message))
     await page.reload()
     await hydrated(page)
     await expect.poll(() => byTest(page, 'save-state').innerText().catch(() => ''), { timeout: 15_000 }).toBe('Saved as version 1.')
@@ -114,5 +116,30 @@ describe('the theory editor in a real browser', () => {
     await page.locator('#theory-description').fill('my change again')
     await page.getByRole('button', { name: 'Save theory' }).click()
     await expect.poll(() => byTest(page, 'save-state').innerText()).toBe('Saved as version 3.')
+
+    // Symmetries and counting rules: a wrong number of Dynkin labels, a renamed group (the roster
+    // follows it), a new counting rule with a bad weight, each message next to its input.
+    await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1')
+    await expect.poll(() => messageNextTo(page, 'Dynkin labels of Q under SU3c')).toBe('SU3c = SU(3) needs 2 Dynkin labels, but got [1]')
+    await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1,0')
+    await page.getByLabel('Name of Y', { exact: true }).fill('Hyper')
+    expect(await page.getByLabel('Charge of H under Hyper', { exact: true }).inputValue()).toBe('1/2')
+    await page.getByRole('button', { name: 'Add a counting rule' }).click()
+    await page.locator('#rule-0-name').fill('momentum')
+    await page.locator('#rule-0-kind').selectOption('momentumRatio')
+    await page.getByRole('button', { name: 'Add a weight' }).click()
+    await page.getByLabel('Building block 1 of momentum', { exact: true }).fill('D')
+    await page.getByLabel('Weight of D in momentum', { exact: true }).fill('1/0')
+    await expect.poll(() => messageNextTo(page, 'Weight of D in momentum')).toBe('a weight must be an exact rational written "p/q" or an integer, e.g. "3/2"')
+    await page.getByLabel('Weight of D in momentum', { exact: true }).fill('1')
+    await page.getByRole('button', { name: 'Save theory' }).click()
+    await expect.poll(() => byTest(page, 'save-state').innerText()).toBe('Saved as version 4.')
+    const last = (await (await page.request.get(`/api/theories/${id}`)).json()).theory.definition
+    expect(last.countingRules).toEqual([{ name: 'momentum', kind: 'momentumRatio', weights: { D: '1' } }])
+    expect(last.groups[2]).toEqual({ name: 'Hyper', type: 'U1', gauge: true })
+    expect(last.fields.find((f: { name: string }) => f.name === 'B').gaugeOf).toBe('Hyper')
+    expect(last.fields.find((f: { name: string }) => f.name === 'Q').charges).toEqual({ Hyper: '1/6' })
+    await screenshot(page, 'theory-editor-saved')
+    expect(problems, 'no script errors or hydration mismatches in the browser').toEqual([])
   })
 })
