@@ -140,6 +140,14 @@ describe('the theory editor in a real browser', () => {
     expect(last.fields.find((f: { name: string }) => f.name === 'B').gaugeOf).toBe('Hyper')
     expect(last.fields.find((f: { name: string }) => f.name === 'Q').charges).toEqual({ Hyper: '1/6' })
     await screenshot(page, 'theory-editor-saved')
+    // Leaving with unsaved changes asks first; declining keeps the editor and the change.
+    await page.locator('#theory-description').fill('unsaved words')
+    const dialogs: string[] = []
+    page.once('dialog', (d) => { dialogs.push(d.message()); void d.dismiss() })
+    await page.getByRole('link', { name: '← SMEFT' }).click()
+    await expect.poll(() => dialogs).toEqual(['Leave the editor? Your unsaved changes will be lost.'])
+    expect(page.url()).toMatch(/\/theories\/\d+\/edit$/)
+    expect(await page.locator('#theory-description').inputValue()).toBe('unsaved words')
     expect(problems, 'no script errors or hydration mismatches in the browser').toEqual([])
   })
 })
