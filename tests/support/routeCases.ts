@@ -86,6 +86,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     prepare: async (w, actor) => ({ path: `/api/annotations/${await noteBy(w, canWrite(w, actor))}` }),
   },
   'POST /api/count': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/count', body: { theory: SMALL_THEORY, maxDim: 6 } }) },
+  'POST /api/theory-check': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/theory-check', body: { theory: SMALL_THEORY } }) },
   'POST /api/theories/[id]/runs': { access: { kind: 'group', min: 'editor' }, body: 'required', prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/runs`, body: { kind: 'count', maxDim: 5 } }) },
   // A queued run that no worker will take (inserted without a queue job), so that it is still cancellable.
   'POST /api/runs/[id]/cancel': { access: { kind: 'group', min: 'editor' }, prepare: async (w) => ({ path: `/api/runs/${await idleRun(w)}/cancel` }) },

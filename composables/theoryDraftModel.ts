@@ -1,0 +1,210 @@
+// The editor's form model of a theory file, and the exact conversions both ways.
+// Pure TypeScript (no Vue): the draft keeps every input as the text the user typed, so that a
+// half-typed value is never lost, and converts to the theory file that TheorySchema validates.
+// Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
+import type { Theory } from '../shared/schemas/theory'
+
+export type GroupKind = 'SU' | 'U1' | 'Z'
+export type Lorentz = 'S' | 'L' | 'R' | 'F'
+export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
+
+export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
+export interface DraftField {
+  uid: string
+  name: string
+  lorentz: Lorentz
+  real: boolean
+  /** uid of a group of the draft, or "?NAME" for a group name the file names but does not declare. */
+  gaugeOf: string
+  flavors: string
+  /** Dynkin labels per group uid, typed as "1,0" (empty = singlet). */
+  reps: Record<string, string>
+  /** Charge per group uid, typed as "1/6" (empty = 0). */
+  charges: Record<string, string>
+  /** reps/charges keyed by names that are not groups of the draft (kept so validation names them). */
+  strayReps: Record<string, unknown>
+  strayCharges: Record<string, unknown>
+  description?: string
+}
+export interface DraftWeight { uid: string, block: string, value: string }
+export interface DraftRule {
+  uid: string, name: string, kind: CountingKind, weights: DraftWeight[], offset: string
+  parameter?: unknown, description?: string
+}
+export interface TheoryDraft {
+  name: string
+  description: string
+  frame: 'relativistic' | 'heavy'
+  maxOrder: string
+  groups: DraftGroup[]
+  fields: DraftField[]
+  countingRules: DraftRule[]
+  /** True when the file had a countingRules key (kept even when empty). */
+  hasRules: boolean
+  /** The heavy-frame block, carried through unchanged (edited as a file, not in the form). */
+  heavy?: unknown
+}
+
+/** A problem found while reading the typed text, at the theory-file path of its input. */
+export interface DraftIssue { path: (string | number)[], message: string }
+
+let counter = 0
+export function newUid(prefix = 'u'): string {
+  counter += 1
+  return `${prefix}${counter}`
+}
+
+export function emptyDraft(): TheoryDraft {
+  return { name: '', description: '', frame: 'relativistic', maxOrder: '', groups: [], fields: [], countingRules: [], hasRules: false }
+}
+
+export function newGroup(): DraftGroup {
+  return { uid: newUid('g'), name: '', type: 'U1', n: '', gauge: true }
+}
+
+export function newField(): DraftField {
+  return { uid: newUid('f'), name: '', lorentz: 'S', real: false, gaugeOf: '', flavors: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+}
+
+export function newRule(): DraftRule {
+  return { uid: newUid('r'), name: '', kind: 'massRatio', weights: [], offset: '' }
+}
+
+const text = (v: unknown) => (v === undefined || v === null ? '' : String(v))
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v)
+const list = (v: unknown): unknown[] => (Array.isArray(v) ? v : [])
+
+/**
+ * The draft of a theory file (a parsed JSON object, valid or not: unknown keys are dropped,
+ * missing ones left empty). Throws when the input is not an object.
+ */
+export function theoryToDraft(input: unknown): TheoryDraft {
+  if (!isRecord(input)) throw new Error('a theory file is a JSON object with "name", "frame", "groups" and "fields"')
+  const groups: DraftGroup[] = list(input.groups).map((g) => {
+    const r = isRecord(g) ? g : {}
+    const type = (['SU', 'U1', 'Z'].includes(String(r.type)) ? r.type : 'U1') as GroupKind
+    return { uid: newUid('g'), name: text(r.name), type, n: text(r.n), gauge: r.gauge !== false, ...(r.description !== undefined ? { description: text(r.description) } : {}) }
+  })
+  const byName = new Map(groups.map((g) => [g.name, g.uid]))
+  const fields = list(input.fields).map((f) => fieldToDraft(isRecord(f) ? f : {}, byName))
+  const rules = list(input.countingRules).map((r) => ruleToDraft(isRecord(r) ? r : {}))
+  const frame = input.frame === 'heavy' ? 'heavy' : 'relativistic'
+  return {
+    name: text(input.name), description: text(input.description), frame, maxOrder: text(input.maxOrder),
+    groups, fields, countingRules: rules, hasRules: Array.isArray(input.countingRules),
+    ...(input.heavy !== undefined ? { heavy: input.heavy } : {}),
+  }
+}
+
+function fieldToDraft(f: Record<string, unknown>, byName: Map<string, string>): DraftField {
+  const out = newField()
+  out.name = text(f.name)
+  out.lorentz = (['S', 'L', 'R', 'F'].includes(String(f.lorentz)) ? f.lorentz : 'S') as Lorentz
+  out.real = f.real === true
+  out.flavors = text(f.flavors)
+  if (f.gaugeOf !== undefined) out.gaugeOf = byName.get(text(f.gaugeOf)) ?? `?${text(f.gaugeOf)}`
+  for (const [g, labels] of Object.entries(isRecord(f.reps) ? f.reps : {})) {
+    const uid = byName.get(g)
+    if (uid && Array.isArray(labels)) out.reps[uid] = labels.join(',')
+    else out.strayReps[g] = labels
+  }
+  for (const [g, q] of Object.entries(isRecord(f.charges) ? f.charges : {})) {
+    const uid = byName.get(g)
+    if (uid && (typeof q === 'string' || typeof q === 'number')) out.charges[uid] = String(q)
+    else out.strayCharges[g] = q
+  }
+  if (f.description !== undefined) out.description = text(f.description)
+  return out
+}
+
+function ruleToDraft(r: Record<string, unknown>): DraftRule {
+  const kinds = ['massRatio', 'velocity', 'momentumRatio', 'custom']
+  const weights = Object.entries(isRecord(r.weights) ? r.weights : {}).map(([block, value]) => ({ uid: newUid('w'), block, value: text(value) }))
+  return {
+    uid: newUid('r'), name: text(r.name), kind: (kinds.includes(String(r.kind)) ? r.kind : 'massRatio') as CountingKind,
+    weights, offset: text(r.offset),
+    ...(r.parameter !== undefined ? { parameter: r.parameter } : {}),
+    ...(r.description !== undefined ? { description: text(r.description) } : {}),
+  }
+}
+
+/**
+ * The theory file of a draft (to be validated by TheorySchema), with the problems found while
+ * reading typed numbers (those values are left out of the file and reported at their path).
+ */
+export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>, issues: DraftIssue[] } {
+  const issues: DraftIssue[] = []
+  const names = new Map(d.groups.map((g) => [g.uid, g.name]))
+  const theory: Record<string, unknown> = { name: d.name.trim() }
+  if (d.description.trim()) theory.description = d.description
+  theory.frame = d.frame
+  const maxOrder = readInt(d.maxOrder, ['maxOrder'], issues, 'the maximum order is a whole number, e.g. 8')
+  if (maxOrder !== undefined) theory.maxOrder = maxOrder
+  theory.groups = d.groups.map((g, i) => {
+    const out: Record<string, unknown> = { name: g.name.trim(), type: g.type }
+    const n = readInt(g.n, ['groups', i, 'n'], issues, `${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n, a whole number`)
+    if (g.type !== 'U1' && n !== undefined) out.n = n
+    if (g.type !== 'U1' && n === undefined && !g.n.trim()) issues.push({ path: ['groups', i, 'n'], message: `${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n` })
+    out.gauge = g.gauge
+    if (g.description !== undefined) out.description = g.description
+    return out
+  })
+  theory.fields = d.fields.map((f, i) => fieldToTheory(f, i, d.groups, names, issues))
+  if (d.hasRules || d.countingRules.length) theory.countingRules = d.countingRules.map(ruleToTheory)
+  if (d.heavy !== undefined) theory.heavy = d.heavy
+  return { theory, issues }
+}
+
+function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Map<string, string>, issues: DraftIssue[]) {
+  const out: Record<string, unknown> = { name: f.name.trim(), lorentz: f.lorentz }
+  const reps: Record<string, unknown> = { ...f.strayReps }
+  const charges: Record<string, unknown> = { ...f.strayCharges }
+  for (const g of groups) {
+    const rep = (f.reps[g.uid] ?? '').trim()
+    const q = (f.charges[g.uid] ?? '').trim()
+    if (g.type === 'SU' && rep) {
+      const labels = rep.split(/[\s,]+/).filter(Boolean)
+      if (labels.every((a) => /^\d{1,2}$/.test(a))) reps[g.name] = labels.map(Number)
+      else issues.push({ path: ['fields', i, 'reps', g.name], message: `Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "${rep}"` })
+    }
+    if (g.type !== 'SU' && q) charges[g.name] = q
+  }
+  if (Object.keys(reps).length) out.reps = reps
+  if (Object.keys(charges).length) out.charges = charges
+  if (f.lorentz === 'S' && f.real) out.real = true
+  const flavors = readInt(f.flavors, ['fields', i, 'flavors'], issues, 'flavors is a whole number from 1 to 6')
+  if (flavors !== undefined) out.flavors = flavors
+  if (f.lorentz === 'F' || f.gaugeOf) {
+    const g = f.gaugeOf.startsWith('?') ? f.gaugeOf.slice(1) : names.get(f.gaugeOf)
+    if (g !== undefined && f.lorentz === 'F') out.gaugeOf = g
+  }
+  if (f.description !== undefined) out.description = f.description
+  return out
+}
+
+function ruleToTheory(r: DraftRule): Record<string, unknown> {
+  const out: Record<string, unknown> = { name: r.name.trim(), kind: r.kind }
+  if (r.weights.length) out.weights = Object.fromEntries(r.weights.map((w) => [w.block.trim(), w.value.trim()]))
+  if (r.offset.trim()) out.offset = r.offset.trim()
+  if (r.parameter !== undefined) out.parameter = r.parameter
+  if (r.description !== undefined) out.description = r.description
+  return out
+}
+
+function readInt(raw: string, path: (string | number)[], issues: DraftIssue[], message: string): number | undefined {
+  const t = raw.trim()
+  if (!t) return undefined
+  if (/^-?\d{1,6}$/.test(t)) return Number(t)
+  issues.push({ path, message: `${message}, but got "${t}"` })
+  return undefined
+}
+
+/** Where an issue is shown: its path cut to the depth of one input ("fields.4.charges.Y"). */
+export function issueKey(path: readonly PropertyKey[]): string {
+  const depth = path[0] === 'fields' && (path[2] === 'reps' || path[2] === 'charges') ? 4
+    : path[0] === 'countingRules' && path[2] === 'weights' ? 4
+      : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' ? 3 : 1
+  return path.slice(0, depth).map(String).join('.')
+}
+
+export type { Theory }

@@ -1,0 +1,107 @@
+import { computed, ref, watch, onBeforeUnmount, type Ref } from 'vue'
+import { TheorySchema, formatTheoryIssues, type Theory } from '#shared/schemas/theory'
+import type { TheoryCheckReply } from '#shared/schemas/theoryCheck'
+import {
+  type TheoryDraft, type DraftGroup, type DraftField, type DraftRule,
+  emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newUid,
+} from './theoryDraftModel'
+import { apiMessage } from './useValidatedForm'
+
+/** Strip the `fields[3] "e": ` prefix of a schema message when it is shown next to its input. */
+function inlineMessage(message: string): string {
+  return message.replace(/^(fields|groups)\[\d+\] "[^"]*": /, '')
+}
+
+function move<T>(rows: T[], i: number, delta: number) {
+  const j = i + delta
+  if (j < 0 || j >= rows.length) return
+  const [row] = rows.splice(i, 1)
+  rows.splice(j, 0, row!)
+}
+
+/**
+ * Editor state of one theory: the draft, its validation by the same TheorySchema as the server
+ * (messages keyed by input, see issueKey), the row operations and the dirty flag.
+ */
+export function useTheoryDraft(initial?: unknown) {
+  const draft = ref<TheoryDraft>(initial === undefined ? emptyDraft() : theoryToDraft(initial)) as Ref<TheoryDraft>
+  const baseline = ref('')
+
+  const checked = computed(() => {
+    const { theory, issues: local } = draftToTheory(draft.value)
+    const parsed = TheorySchema.safeParse(theory)
+    const schemaIssues = parsed.success ? [] : parsed.error.issues
+    const errors: Record<string, string> = {}
+    for (const iss of [...local, ...schemaIssues]) errors[issueKey(iss.path)] ??= inlineMessage(iss.message)
+    const lines = [...local.map((i) => `${i.path.join('.')}: ${i.message}`)]
+    if (schemaIssues.length) lines.push(...formatTheoryIssues(theory, schemaIssues).split('\n'))
+    const valid = parsed.success && local.length === 0
+    return { theory, valid, errors, lines, definition: valid ? (parsed.data as Theory) : null }
+  })
+
+  const json = computed(() => JSON.stringify(checked.value.theory))
+  const dirty = computed(() => json.value !== baseline.value)
+
+  /** Replace the draft by a theory file (a parsed object); marks it clean when `clean`. */
+  function load(theory: unknown, clean = true) {
+    draft.value = theoryToDraft(theory)
+    if (clean) markClean()
+  }
+  function markClean() {
+    baseline.value = JSON.stringify(draftToTheory(draft.value).theory)
+  }
+  if (initial !== undefined) markClean()
+
+  const error = (...path: (string | number)[]) => checked.value.errors[path.map(String).join('.')]
+
+  const ops = {
+    addGroup: () => draft.value.groups.push(newGroup()),
+    removeGroup: (i: number) => draft.value.groups.splice(i, 1),
+    moveGroup: (i: number, delta: number) => move<DraftGroup>(draft.value.groups, i, delta),
+    addField: () => draft.value.fields.push(newField()),
+    removeField: (i: number) => draft.value.fields.splice(i, 1),
+    moveField: (i: number, delta: number) => move<DraftField>(draft.value.fields, i, delta),
+    addRule: () => draft.value.countingRules.push(newRule()),
+    removeRule: (i: number) => draft.value.countingRules.splice(i, 1),
+    moveRule: (i: number, delta: number) => move<DraftRule>(draft.value.countingRules, i, delta),
+    addWeight: (r: number) => draft.value.countingRules[r]!.weights.push({ uid: newUid('w'), block: '', value: '' }),
+    removeWeight: (r: number, w: number) => draft.value.countingRules[r]!.weights.splice(w, 1),
+  }
+
+  return { draft, checked, dirty, load, markClean, error, ...ops }
+}
+
+/**
+ * The gauge-anomaly check of the server (POST /api/theory-check), called `delayMs` after the
+ * last change of a valid definition; older answers are dropped when a newer request is out.
+ */
+export function useAnomalyCheck(definition: Ref<Theory | null>, delayMs = 500) {
+  const reply = ref<TheoryCheckReply | null>(null)
+  const pending = ref(false)
+  const failure = ref('')
+  let timer: ReturnType<typeof setTimeout> | undefined
+  let sequence = 0
+
+  async function run(theory: Theory) {
+    const mine = ++sequence
+    try {
+      const r = await $fetch<TheoryCheckReply>('/api/theory-check', { method: 'POST', body: { theory } })
+      if (mine === sequence) { reply.value = r; failure.value = '' }
+    } catch (e) {
+      if (mine === sequence) { reply.value = null; failure.value = apiMessage(e) }
+    } finally {
+      if (mine === sequence) pending.value = false
+    }
+  }
+
+  watch(() => JSON.stringify(definition.value), () => {
+    clearTimeout(timer)
+    const theory = definition.value
+    if (!theory) { sequence++; pending.value = false; reply.value = null; return }
+    pending.value = true
+    timer = setTimeout(() => run(theory), delayMs)
+  }, { immediate: true })
+  onBeforeUnmount(() => clearTimeout(timer))
+
+  return { reply, pending, failure }
+}

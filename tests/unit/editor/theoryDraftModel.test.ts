@@ -1,0 +1,87 @@
+import { describe, it, expect } from 'vitest'
+import { theoryToDraft, draftToTheory, issueKey, newField } from '../../../composables/theoryDraftModel'
+import { TheorySchema } from '../../../shared/schemas/theory'
+import { PRESETS } from '../../../shared/presets/index'
+import { checkAnomalies } from '../../../server/engine/theory/anomalies'
+
+// The editor's form model must give back exactly the theory file it was loaded from, so that
+// downloading an unchanged theory returns the saved file (common practice: lossless round trip).
+describe('theory draft round trip', () => {
+  for (const preset of PRESETS) {
+    it(`preset ${preset.id}: file → draft → file is the same file`, () => {
+      const { theory, issues } = draftToTheory(theoryToDraft(preset.theory))
+      expect(issues).toEqual([])
+      expect(theory).toEqual(JSON.parse(JSON.stringify(preset.theory)))
+      expect(TheorySchema.safeParse(theory).success).toBe(true)
+    })
+  }
+
+  it('renaming a group keeps the labels and charges of the roster on it', () => {
+    const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
+    d.groups[2]!.name = 'Hyper'
+    const { theory } = draftToTheory(d)
+    const fields = theory.fields as Array<{ name: string, charges?: Record<string, string>, gaugeOf?: string }>
+    expect(fields.find((f) => f.name === 'Q')!.charges).toEqual({ Hyper: '1/6' })
+    expect(fields.find((f) => f.name === 'B')!.gaugeOf).toBe('Hyper')
+  })
+
+  it('removing a group drops its column from every field', () => {
+    const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
+    d.groups.splice(0, 1) // SU3c
+    const { theory } = draftToTheory(d)
+    const q = (theory.fields as Array<{ name: string, reps?: Record<string, number[]> }>).find((f) => f.name === 'Q')!
+    expect(q.reps).toEqual({ SU2L: [1] })
+  })
+})
+
+describe('typed text that is not a number', () => {
+  it('bad Dynkin labels and flavors are reported at their input and left out of the file', () => {
+    const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
+    d.fields[0]!.reps[d.groups[0]!.uid] = '1,x'
+    d.fields[1]!.flavors = 'three'
+    d.maxOrder = '8.5'
+    const { theory, issues } = draftToTheory(d)
+    expect(issues.map((i) => issueKey(i.path))).toEqual(['maxOrder', 'fields.0.reps.SU3c', 'fields.1.flavors'])
+    expect(issues[1]!.message).toBe('Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "1,x"')
+    expect(issues[2]!.message).toBe('flavors is a whole number from 1 to 6, but got "three"')
+    expect((theory.fields as Array<{ reps?: unknown }>)[0]!.reps).toEqual({ SU2L: [1] })
+  })
+
+  it('a bad charge reaches the schema, whose message is keyed to that input', () => {
+    const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
+    d.fields[5]!.charges[d.groups[2]!.uid] = '1/2x'
+    const r = TheorySchema.safeParse(draftToTheory(d).theory)
+    expect(r.success).toBe(false)
+    expect(r.error!.issues.map((i) => issueKey(i.path))).toEqual(['fields.5.charges.Y'])
+    expect(r.error!.issues[0]!.message).toBe('a charge is a rational written "p/q" or an integer, e.g. "1/6"')
+  })
+
+  it('a field strength without a gauge group is named by the schema', () => {
+    const d = theoryToDraft({ name: 'x', frame: 'relativistic', groups: [], fields: [] })
+    const f = newField()
+    f.name = 'A'
+    f.lorentz = 'F'
+    d.fields.push(f)
+    const r = TheorySchema.safeParse(draftToTheory(d).theory)
+    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['fields.0.gaugeOf', 'fields[0] "A": a field strength (lorentz "F") needs gaugeOf, the name of its gauge group']])
+  })
+
+  it('a file that is not an object is refused with a message', () => {
+    expect(() => theoryToDraft([1, 2])).toThrow('a theory file is a JSON object')
+  })
+})
+
+describe('what the editor sends to the anomaly check', () => {
+  // Hypercharge anomalies of one SM generation cancel: Bouchiat, Iliopoulos, Meyer,
+  // Phys. Lett. B 38 (1972) 519. Without e (Y = -1, three flavors) the Y^3 and
+  // gravity^2 Y sums are 3·(-(+1)^3) = -3 and 3·(-(+1)) = -3 (left-handed conjugate of e has Y = +1).
+  it('the SMEFT roster from the editor cancels; without e it fails Y^3 and gravity^2 Y by -3', () => {
+    const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
+    expect(checkAnomalies(TheorySchema.parse(draftToTheory(d).theory))).toEqual([])
+    d.fields.splice(4, 1)
+    expect(checkAnomalies(TheorySchema.parse(draftToTheory(d).theory))).toEqual([
+      { name: 'Y^3', sum: '-3', ok: false },
+      { name: 'gravity^2 Y', sum: '-3', ok: false },
+    ])
+  })
+})
