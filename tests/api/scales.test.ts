@@ -55,6 +55,22 @@ describe('scale ladder: save, read, version conflict', () => {
     expect(c.orders.map((o: any) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[0, '1', false], [1, '1/100', false], [2, '1/10000', true], [3, '1/1000000', true]])
   })
 
+  it('derived scales: the Rydberg energy ½ m_e α² is 13.605693122994 eV (CODATA 2018)', async () => {
+    const id = await newTheory({ ...DEMO_LIKE, name: 'Hydrogen ladder' })
+    const hydrogen = {
+      scales: [{ name: 'me', value: '0.51099895000', unit: 'MeV' }],
+      parameters: [{ name: 'alpha', numerator: '1', denominator: '137.035999084' }],
+      derived: [{ name: 'Ry', from: 'me', factor: '1/2', powers: { alpha: 2 }, unit: 'eV' }],
+      orders: [0, 1, 2],
+    }
+    const res = await put('editor', id, { ladder: hydrogen, version: 0 })
+    expect(res.status, JSON.stringify(res.body)).toBe(200)
+    const ry = res.body.computed.derived[0]
+    expect(Math.abs(ry.value / 13.605693122994 - 1)).toBeLessThan(1e-9) // CODATA 2018 inputs are consistent to ~1e-10
+    expect(ry.unit).toBe('eV')
+    expect(ry.exactMeV).toMatch(/^\d+\/\d+$/) // exact, since every input was printed text
+  })
+
   it('a stale version is refused with 409 naming the newer version, and nothing changes', async () => {
     const id = await newTheory({ ...DEMO_LIKE, name: 'Ladder conflict' })
     expect((await put('editor', id, { ladder: LADDER, version: 0 })).status).toBe(200)

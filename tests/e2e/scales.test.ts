@@ -30,13 +30,19 @@ async function canvasDrawn(page: Page, index = 0): Promise<boolean> {
   })
 }
 
-async function signIn(page: Page) {
-  await page.goto('/signin')
-  await hydrated(page)
-  await page.getByLabel('E-mail').fill(email)
-  await page.getByLabel('Password').fill(TEST_PASSWORD)
-  await page.getByRole('button', { name: 'Sign in' }).click()
-  await page.waitForURL('**/groups')
+let signedIn: Page | undefined
+/** A page of one signed-in browser context (signed in once, shared by the tests). */
+async function signedInPage(): Promise<Page> {
+  if (!signedIn) {
+    signedIn = await newPage(browser, inject('baseUrl'))
+    await signedIn.goto('/signin')
+    await hydrated(signedIn)
+    await signedIn.getByLabel('E-mail').fill(email)
+    await signedIn.getByLabel('Password').fill(TEST_PASSWORD)
+    await signedIn.getByRole('button', { name: 'Sign in' }).click()
+    await signedIn.waitForURL('**/groups', { waitUntil: 'domcontentloaded', timeout: 60_000 })
+  }
+  return signedIn.context().newPage()
 }
 
 beforeAll(async () => {
@@ -54,26 +60,30 @@ afterAll(async () => { await browser?.close() })
 
 describe('scales in a real browser', () => {
   it('edits a scale ladder, saves it and draws the size-per-order chart', async () => {
-    const page = await newPage(browser, inject('baseUrl'))
-    await signIn(page)
+    const page = await signedInPage()
     await page.goto(`/theories/${theoryId}/scales`)
     await hydrated(page)
     await page.getByLabel('Scale 2 value').fill('10')
     await page.getByLabel('Precision target').fill('1e-7')
     await page.getByLabel('Orders to estimate (comma-separated)').fill('0, 1, 2, 3, 4')
+    await page.getByRole('button', { name: 'Add derived scale' }).click()
+    await page.getByLabel('Derived scale 1 name').fill('Mhalf')
+    await page.getByLabel('Derived scale 1 base scale').fill('M')
+    await page.getByLabel('Derived scale 1 factor').fill('1/2')
+    await page.getByLabel('Derived scale 1 unit').selectOption('GeV')
     await page.getByRole('button', { name: 'Save ladder' }).click()
     await expect.poll(() => page.getByText('Saved as version 1.').count()).toBe(1)
     // ε = 1 GeV / 10 TeV = 1/10000: order 2 is 1e-8, below the 1e-7 target (common practice, ε^n estimates).
     await expect.poll(() => page.locator('[data-test="orders-table"] tr.text-warn').count()).toBe(3)
     await expect.poll(() => canvasDrawn(page), { timeout: 10_000 }).toBe(true)
+    await expect.poll(() => page.getByRole('cell', { name: '5000 GeV' }).count()).toBe(1) // M/2 = 5 TeV, shown in GeV
     await screenshot(page, 'scale-ladder')
     await page.getByRole('button', { name: 'Set aside orders below 1e-7' }).click()
     await expect.poll(() => page.getByText('Set aside 3 operators of order 2.').count()).toBe(1)
   })
 
   it('integrates the Dirac fermion out and lands on the child theory with its threshold tag', async () => {
-    const page = await newPage(browser, inject('baseUrl'))
-    await signIn(page)
+    const page = await signedInPage()
     await page.goto(`/theories/${theoryId}/integrate-out`)
     await hydrated(page)
     await page.locator('input[name="field-eL"]').check()
@@ -92,8 +102,7 @@ describe('scales in a real browser', () => {
   })
 
   it('plots α_s and α against the scale with the caution shown', async () => {
-    const page = await newPage(browser, inject('baseUrl'))
-    await signIn(page)
+    const page = await signedInPage()
     await page.goto(`/theories/${theoryId}/couplings`)
     await hydrated(page)
     await expect.poll(() => page.locator('[data-test="alphas-result"]').count(), { timeout: 15_000 }).toBe(1)
