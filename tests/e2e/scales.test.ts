@@ -61,8 +61,10 @@ afterAll(async () => { await browser?.close() })
 describe('scales in a real browser', () => {
   it('edits a scale ladder, saves it and draws the size-per-order chart', async () => {
     const page = await signedInPage()
-    await page.goto(`/theories/${theoryId}/scales`)
+    await page.goto(`/theories/${theoryId}`)
     await hydrated(page)
+    await page.getByRole('navigation', { name: 'Theory pages' }).getByRole('link', { name: 'Scale ladder' }).click()
+    await page.waitForURL(`**/theories/${theoryId}/scales`)
     await page.getByLabel('Scale 2 value').fill('10')
     await page.getByLabel('Precision target').fill('1e-7')
     await page.getByLabel('Orders to estimate (comma-separated)').fill('0, 1, 2, 3, 4')
