@@ -4,6 +4,7 @@ import * as m002 from './20261202_002_theories_bases'
 import * as m003 from './20261202_003_run_jobs'
 import * as m004 from './20261202_004_board'
 import * as m005 from './20261202_005_coverage'
+import * as m006 from './20261202_006_scales'
 
 // A static list: knex's folder loader cannot read .ts inside vitest or the Nitro bundle.
 // Append new migrations here, named YYYYMMDD_NNN_what.ts, never rename an applied one.
@@ -13,6 +14,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202_003_run_jobs': m003,
   '20261202_004_board': m004,
   '20261202_005_coverage': m005,
+  '20261202_006_scales': m006,
 }
 
 export const migrationSource: Knex.MigrationSource<string> = {

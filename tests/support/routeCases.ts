@@ -136,8 +136,36 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     },
   },
   'POST /api/invitations/lookup': { access: { kind: 'public', why: 'reads what an invitation offers; the token is the secret' }, body: 'required', prepare: async (w) => ({ path: '/api/invitations/lookup', body: { token: (await invitation(w.groupId, `y-${fresh()}@example.test`)).token } }) },
+  // Scales and towers: a fresh theory each time, so a new ladder (version 0) or a child name never clashes.
+  'PUT /api/theories/[id]/scales': {
+    access: { kind: 'group', min: 'editor' },
+    body: 'required',
+    prepare: async (w) => ({ path: `/api/theories/${(await newTheory(w)).id}/scales`, body: { ladder: SMALL_LADDER, version: 0 } }),
+  },
+  'POST /api/bases/[id]/set-aside-below': {
+    access: { kind: 'group', min: 'editor' },
+    body: 'required',
+    prepare: async (w) => {
+      await testDb()('scale_ladders').insert({ theory_id: w.theoryId, ladder: JSON.stringify(SMALL_LADDER) }).onConflict('theory_id').ignore()
+      return { path: `/api/bases/${(await addBasis(w)).basisId}/set-aside-below`, body: { target: 1e-3 } }
+    },
+  },
+  'POST /api/theories/[id]/integrate-out': {
+    access: { kind: 'group', min: 'editor' },
+    body: 'required',
+    prepare: async (w) => ({ path: `/api/theories/${(await newTheory(w)).id}/integrate-out`, body: { fields: ['phi'], scale: { name: 'M', value: 1, unit: 'TeV' } } }),
+  },
+  'POST /api/running/qcd': {
+    access: { kind: 'signedIn' },
+    body: 'required',
+    prepare: async () => ({ path: '/api/running/qcd', body: { alphaS: 0.118, muFrom: 91.188, muTo: 10, loops: 2, thresholds: [{ name: 'b', mass: 4.183, kind: 'msbar' }] } }),
+  },
+  'POST /api/running/qed': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/running/qed', body: { muTo: 91.188, quarks: false, deltaAlphaHad5: 0.02766 } }) },
   'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, body: 'required', prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
 }
+
+/** A ladder with ε = E/M = 10 GeV / 1 TeV = 1/100: order 2 (the operators of addBasis) is estimated at 1e-4. */
+export const SMALL_LADDER = { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], precisionTarget: 1e-3, orders: [0, 1, 2, 3] }
 
 const bases = new WeakMap<World, ReturnType<typeof addBasis>>()
 function basisOf(w: World) {

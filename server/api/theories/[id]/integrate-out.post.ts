@@ -1,0 +1,24 @@
+import { defineApiHandler, created } from '../../../utils/http/apiHandler'
+import { intParam, readJson } from '../../../utils/http/readJson'
+import { requireGroupRole } from '../../../utils/auth/currentUser'
+import { theoryOr404, publicTheory } from '../../../utils/db/theories'
+import { createChildTheory } from '../../../utils/db/towers'
+import { integrateOut } from '../../../engine/scales/integrateOut'
+import { IntegrateOutSchema } from '../../../../shared/schemas/scaleRequests'
+import { TheorySchema, type Theory } from '../../../../shared/schemas/theory'
+import { describeZodError } from '../../../../shared/schemas/describeZodError'
+import { EngineInputError } from '../../../engine/errors'
+
+// Editors integrate heavy fields out at a threshold scale: the child theory joins the group,
+// linked to its parent, with the threshold tags of the gauge kinetic terms the fields shift.
+export default defineApiHandler(async (event) => {
+  const body = await readJson(event, IntegrateOutSchema)
+  const parent = await theoryOr404(intParam(event, 'id'))
+  const { user } = await requireGroupRole(event, parent.group_id, 'editor')
+  const step = integrateOut(TheorySchema.parse(parent.definition) as Theory, body.fields, body.scale)
+  const check = TheorySchema.safeParse(step.child)
+  if (!check.success) throw new EngineInputError('integrateOut', `the theory left below the threshold is not valid: ${describeZodError(check.error)}`)
+  const { child, tags } = await createChildTheory(parent, step, body.fields, user.id)
+  created(event)
+  return { theory: publicTheory(child), thresholdTags: tags, generatedClasses: step.generatedClasses, thresholdScale: step.thresholdScale }
+})

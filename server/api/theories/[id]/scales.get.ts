@@ -1,0 +1,24 @@
+import { defineApiHandler } from '../../../utils/http/apiHandler'
+import { intParam } from '../../../utils/http/readJson'
+import { requireGroupRole } from '../../../utils/auth/currentUser'
+import { theoryOr404 } from '../../../utils/db/theories'
+import { ladderOf } from '../../../utils/db/scaleLadders'
+import { computeLadder } from '../../../utils/scales/ladderEstimates'
+import { EngineError } from '../../../engine/errors'
+import { SCALE_UNITS } from '../../../engine/scales/units'
+
+// Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet).
+export default defineApiHandler(async (event) => {
+  const theory = await theoryOr404(intParam(event, 'id'))
+  const { role } = await requireGroupRole(event, theory.group_id, 'viewer')
+  const stored = await ladderOf(theory.id)
+  let computed = null
+  let problem = ''
+  try {
+    computed = stored ? computeLadder(stored.ladder) : null
+  } catch (e) {
+    if (!(e instanceof EngineError)) throw e
+    problem = e.message
+  }
+  return { theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
+})
