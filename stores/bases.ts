@@ -76,7 +76,11 @@ export const useBasesStore = defineStore('bases', () => {
       const res: any = await $fetch(`/api/operators/${op.id}/move`, { method: 'POST', body: { column, position: index, version: op.version } })
       Object.assign(op, { column, version: res.operator.version })
       coverage.value[op.classKey] = res.coverage
-      rewrites.value[op.id] = res.rewrite
+      // Rewrites of this class referred to the old kept set: drop them (reloaded on demand).
+      for (const list of Object.values(columns.value)) {
+        for (const o of [...list.kept, ...list.set_aside]) if (o.classKey === op.classKey) delete rewrites.value[o.id]
+      }
+      if (column === 'set_aside') rewrites.value[op.id] = res.rewrite
     } catch (e) {
       message.value = apiMessage(e)
       await load(basis.value.id)

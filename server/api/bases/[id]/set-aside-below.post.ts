@@ -6,6 +6,7 @@ import { ladderOf } from '../../../utils/db/scaleLadders'
 import { ordersOfBasis, setAsideOrders } from '../../../utils/db/setAsideBelow'
 import { ordersBelowTarget } from '../../../utils/scales/ladderEstimates'
 import { SetAsideBelowSchema } from '../../../../shared/schemas/scaleRequests'
+import { recomputeCoverage } from '../../../utils/db/boardMath'
 
 // Editors set aside, in one transaction, every kept operator of the orders whose estimated
 // size (from the theory's scale ladder) lies below the precision target; answers the count.
@@ -17,6 +18,11 @@ export default defineApiHandler(async (event) => {
   if (!stored) fail(409, 'This theory has no scale ladder yet: save one on its scale-ladder page, then set orders aside')
   const estimates = ordersBelowTarget(stored!.ladder, await ordersOfBasis(basis.id), target)
   const below = estimates.filter((o) => o.belowTarget).map((o) => o.order)
-  const { count, basisVersion } = await setAsideOrders(basis.id, below, user.id)
+  const { count } = await setAsideOrders(basis.id, below, user.id)
+  // Coverage of the affected classes changed: recompute (this also bumps the basis version).
+  const classes = (basis.classes as { key: string, rank: number, order?: number, dimension: number | null }[])
+    .filter((c) => below.includes(c.order ?? (c.dimension as number) - 4))
+  await recomputeCoverage(basis.id, classes)
+  const basisVersion = (await basisOr404(basis.id)).version as number
   return { count, orders: below, estimates, target, basisVersion }
 })
