@@ -14,7 +14,7 @@ export const useRunsStore = defineStore('runs', () => {
     theoryId.value = id
     runs.value = (await useRequestFetch()(`/api/theories/${id}/runs`)).runs as Run[]
   }
-  async function start(body: { kind: 'count' | 'basis', maxDim: number, nf?: number }) {
+  async function start(body: { kind: 'count' | 'basis', maxDim: number, nf?: number, priorities?: Record<string, unknown> }) {
     const { run } = await $fetch(`/api/theories/${theoryId.value}/runs`, { method: 'POST', body })
     runs.value = [run as Run, ...runs.value]
     return run as Run

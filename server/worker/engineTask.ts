@@ -2,6 +2,7 @@ import { Worker } from 'node:worker_threads'
 import { resolve } from 'node:path'
 import { pathToFileURL } from 'node:url'
 import { EngineCancelledError, EngineError } from '../engine/errors'
+import type { Priorities } from '../engine/basis/classBasis'
 
 /**
  * The thread runs the engine from its TypeScript source through tsx: beside the source when we
@@ -14,8 +15,8 @@ function threadEntry(): URL {
 }
 
 export type EngineTask =
-  | { kind: 'count' | 'basis', theory: unknown, maxDim: number, nf?: number }
-  | { kind: 'fingerprint', theory: unknown, classKey: string, text: string }
+  | { kind: 'count' | 'basis', theory: unknown, maxDim: number, nf?: number, priorities?: Priorities }
+  | { kind: 'fingerprint', theory: unknown, classKey: string, text: string, priorities?: Priorities }
 export interface TaskHandle<T> { result: Promise<T>, cancel: () => void }
 
 /**

@@ -21,12 +21,12 @@ function onProgress(fraction: number, label: string) {
 try {
   const theory = parseTheory(task.theory)
   const result = task.kind === 'fingerprint'
-    ? typedFingerprint(theory, task.classKey, task.text)
+    ? typedFingerprint(theory, task.classKey, task.text, task.priorities)
     : task.kind === 'count'
       ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
       : theory.frame === 'heavy'
         ? enumerateHeavyTheory(theory, { onProgress, signal })
-        : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, onProgress, signal })
+        : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, priorities: task.priorities, onProgress, signal })
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
   const e = error as Error

@@ -4,6 +4,7 @@ import type { BasisReport } from '../engine/basis/buildBasis'
 import type { BasisOperator } from '../engine/basis/describe'
 import type { HeavyEnumeration } from '../engine/heavy/enumerate'
 import { writeHeavyBasis } from './heavyBasis'
+import type { Priorities } from '../engine/basis/classBasis'
 
 /** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
 export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
@@ -27,7 +28,7 @@ function isHeavy(result: unknown): result is HeavyEnumeration {
 async function finish(trx: Knex.Transaction, runId: number, summary: unknown) {
   await trx('runs').where({ id: runId }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
 }
-export interface RunParams { maxDim: number, nf?: number, theory: unknown, theoryVersion: number }
+export interface RunParams { maxDim: number, nf?: number, theory: unknown, theoryVersion: number, priorities?: Priorities }
 
 function basisSummary(report: BasisReport) {
   return {

@@ -4,11 +4,19 @@ import { TheorySchema } from './theory'
 // Size limits live here, so one request cannot ask the server for unbounded work.
 export const MAX_RUN_DIMENSION = { count: 16, basis: 8 } as const
 
+// How the greedy choice of kept operators is steered (explicit-basis runs).
+export const RunPrioritiesSchema = z.object({
+  derivativesOn: z.array(z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,15}\*?$/, { error: 'priorities.derivativesOn: field names such as "H" or "H*"' })).max(40).optional(),
+  preferHermitian: z.boolean({ error: 'priorities.preferHermitian must be true or false' }).optional(),
+  keepFromBasis: z.number({ error: 'priorities.keepFromBasis: a basis id' }).int().positive().optional(),
+}, { error: 'priorities must be an object' }).strict()
+
 export const RunCreateSchema = z.object({
   kind: z.enum(['count', 'basis'], { error: 'kind must be "count" or "basis"' }),
   maxDim: z.number({ error: 'maxDim: a whole number of mass dimension is required' }).int({ error: 'maxDim must be a whole number' })
     .min(5, { error: 'maxDim must be at least 5' }).max(16, { error: 'maxDim must be at most 16' }),
   nf: z.number({ error: 'nf must be a number' }).int({ error: 'nf must be a whole number' }).min(1, { error: 'nf must be at least 1' }).max(6, { error: 'nf must be at most 6' }).optional(),
+  priorities: RunPrioritiesSchema.optional(),
 }).strict().refine((r) => r.maxDim <= MAX_RUN_DIMENSION[r.kind], { error: 'maxDim: an explicit basis run goes up to dimension 8', path: ['maxDim'] })
 
 export const QuickCountSchema = z.object({

@@ -11,6 +11,8 @@ export const SMALL_THEORY = {
 
 export interface Actor { client: ApiClient, id: number, email: string }
 export interface World {
+  /** The editor's client (runs and edits). */
+  editorClient: () => ApiClient
   slug: string
   groupId: number
   owner: Actor
@@ -40,7 +42,7 @@ export async function buildWorld(): Promise<World> {
   await makeAdmin(admin.id)
   const t = await owner.client.post(`/api/groups/${slug}/theories`, { definition: { ...SMALL_THEORY, name: `T-${slug}` } })
   if (t.status !== 201) throw new Error(`theory create failed ${JSON.stringify(t.body)}`)
-  return { slug, groupId: g.body.group.id, owner, byRole, stranger, admin, anonymous: new ApiClient(), theoryId: t.body.theory.id }
+  return { editorClient: () => byRole.editor.client, slug, groupId: g.body.group.id, owner, byRole, stranger, admin, anonymous: new ApiClient(), theoryId: t.body.theory.id }
 }
 
 /** Add a fresh account to the group with a role (a target for member routes). */

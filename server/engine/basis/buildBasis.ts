@@ -45,6 +45,18 @@ export interface ClassReport {
    */
   cpEven: number | null
   cpOdd: number | null
+  /**
+   * P-even / P-odd real parameters (conventions in parity.ts). P(C) = C: from the parity
+   * eigenvalues of the kept operators; P(C) = C̄: rank of each; P(C) another class: the class
+   * of the pair whose orbit key sorts first counts the combinations O + P(O) as P-even, its
+   * image O − P(O) as P-odd (so pEven + pOdd = realParameters in every class). Null where P
+   * is undefined (parityReason says why) and for self-mapped classes with several flavors.
+   */
+  pEven: number | null
+  pOdd: number | null
+  /** Key of the parity image class P(C), null where P is undefined. */
+  parityImageKey: string | null
+  parityReason?: string
   flavor?: FlavorSummary
 }
 
@@ -103,6 +115,7 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
     const report = classReport(b, hOf(b.key, counts), hOf(b.conjugateKey, counts))
     if (flavored && b.class.legs.some((p) => p.flavored)) {
       report.flavor = flavorDecomposition(theory, b, nf, hOf(b.key, countsNf), opts.signal)
+      flavorParity(b, report, report.flavor)
       const hc = hOf(b.conjugateKey, countsNf)
       if (!report.flavor.tallyOk || hc !== report.flavor.count) {
         report.tallyOk = false
@@ -136,7 +149,7 @@ function twoFieldMismatch(key: string, hilbert: number): ClassReport {
   return {
     key, conjugateKey: key, selfConjugate: false, rank: 0, hilbert, hilbertConjugate: hilbert, realParameters: 0, tallyOk: false,
     message: `class ${key}: fewer than three fields has no contact amplitude (rank 0) but the Hilbert-series count is ${hilbert}`,
-    candidates: 0, operators: [], cpEven: 0, cpOdd: 0,
+    candidates: 0, operators: [], cpEven: 0, cpOdd: 0, pEven: 0, pOdd: 0, parityImageKey: null,
   }
 }
 
@@ -160,5 +173,21 @@ function classReport(b: ClassBasis, hilbert: number, hilbertConjugate: number): 
     operators: ops,
     alternatives,
     ...cpCounts(b, ops),
+    pEven: b.parity.pEven, pOdd: b.parity.pOdd, parityImageKey: b.parity.imageKey,
+    ...(b.parity.reason ? { parityReason: b.parity.reason } : {}),
+  }
+}
+
+/**
+ * Parity counts with several flavors: classes paired with another class (or with the
+ * conjugate class) carry the flavored real parameters split as for one flavor; classes
+ * mapped to themselves are not computed (parity acts on the flavor indices too).
+ */
+function flavorParity(b: ClassBasis, report: ClassReport, flavor: FlavorSummary): void {
+  const real = flavor.realParameters
+  if (b.parity.kind === 'conjugate') Object.assign(report, { pEven: real / 2, pOdd: real / 2 })
+  else if (b.parity.kind === 'pair') Object.assign(report, b.parity.credit === 'even' ? { pEven: real, pOdd: 0 } : { pEven: 0, pOdd: real })
+  else if (b.parity.kind === 'self') {
+    Object.assign(report, { pEven: null, pOdd: null, parityReason: `class ${b.key}: parity counts with several flavors are not computed for a class mapped to itself` })
   }
 }

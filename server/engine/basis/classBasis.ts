@@ -18,6 +18,7 @@ import { formatLorentz, parseOperatorText, type ParsedTerm } from './inputSyntax
 import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
+import { classParity, type ClassParity } from './parity'
 
 export const BASIS_NOTE = 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes'
 
@@ -74,6 +75,8 @@ export interface ClassBasis {
    * (rows[primeIndex][point]); the board offers them as set-aside operators with rewrites.
    */
   alternatives: { column: Column; rows: number[][] }[]
+  /** Parity of the class and of each kept operator (conventions in parity.ts). */
+  parity: ClassParity
   note: string
 }
 
@@ -172,12 +175,14 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   }
   const conj = conjugateClass(particles, cls)
   const kept = a.pivots.map((c) => markSelfHermitian(columns, c, a.zero))
+  const primes = results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) }))
+  const self = conj.key === cls.key
   return {
-    key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: conj.key === cls.key,
+    key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: self,
     dimension: cls.dim2 / 2, candidates: candidates.length, rank: a.pivots.length,
-    kept, gaugeStructures: gauge, perms,
-    primes: results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) })),
+    kept, gaugeStructures: gauge, perms, primes,
     alternatives: alternativesOf(columns, results, a.pivots, a.zero),
+    parity: classParity(particles, { cls, selfConjugate: self, rank: a.pivots.length, kept, primes, perms }),
     note: BASIS_NOTE,
   }
 }

@@ -34,6 +34,14 @@ export interface BasisOperator {
    * non-Hermitian operators: those give one CP-even and one CP-odd real parameter).
    */
   cp: 'even' | 'odd' | null
+  /**
+   * Parity eigenvalue where the class is mapped to itself by P and the operator is a P
+   * eigenvector (conventions in parity.ts: ⟨ij⟩ ↔ [π(i)π(j)], legs to parity partners,
+   * Fermi sign of π, P² = 1 on every field); null where P is undefined (chiral fermions),
+   * maps the class to another class (operators paired across classes, counted per class
+   * as pEven/pOdd), or for set-aside alternatives.
+   */
+  parity: 'even' | 'odd' | null
   /** Values of the symmetrised amplitude at the class's sample points, per prime (board math). */
   fingerprint?: { primes: number[]; values: number[][] }
 }
@@ -63,7 +71,7 @@ function keptLatex(b: ClassBasis, text: string): string {
  */
 export function describeOperators(b: ClassBasis): BasisOperator[] {
   const herm = hermiticityOf(b)
-  return b.kept.map((col: Column, i) => describeColumn(b, col, herm[i]!))
+  return b.kept.map((col: Column, i) => ({ ...describeColumn(b, col, herm[i]!), parity: b.parity.operators[i] ?? null }))
 }
 
 /**
@@ -87,6 +95,7 @@ function describeColumn(b: ClassBasis, col: Column, hermitian: boolean): BasisOp
     latex: base + hc,
     latex4: fourOf(b, col, hc),
     cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
+    parity: null,
     source: col.source,
     fields: b.class.legs.map((p) => p.label),
     derivatives: single ? t.lorentz.derivs : [],

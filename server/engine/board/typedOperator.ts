@@ -4,7 +4,7 @@
  * rewrite it onto whatever the group currently keeps.
  */
 import type { Theory } from '../../../shared/schemas/theory'
-import { classBasis } from '../basis/classBasis'
+import { classBasis, type Priorities } from '../basis/classBasis'
 import { parseOperatorText } from '../basis/inputSyntax'
 import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
@@ -15,8 +15,9 @@ import type { Fingerprint } from './fingerprints'
  * basis reproduces them; the typed amplitude is symmetrised over identical legs like every
  * candidate (amplitude–operator correspondence; Shadmi & Weiss, JHEP 02 (2019) 165).
  */
-export function typedFingerprint(theory: Theory, classKey: string, text: string): Fingerprint {
-  const b = classBasis(theory, classKey)
+/** `priorities` must be the run's own: they fix how many sample points the class uses. */
+export function typedFingerprint(theory: Theory, classKey: string, text: string, priorities?: Priorities): Fingerprint {
+  const b = classBasis(theory, classKey, { priorities })
   const terms = parseOperatorText(b.class, text, b.gaugeStructures.length)
   return {
     primes: b.primes.map((pd) => pd.F.p),

@@ -22,7 +22,7 @@ export default defineApiHandler(async (event) => {
   // The run's frozen theory file fixed the sample points; the theory may have been edited since.
   const run = basis.run_id ? await useDb()('runs').where({ id: basis.run_id }).first('params') : null
   const theory = run?.params?.theory ?? basis.theory_definition
-  const handle = startEngineTask<Fingerprint>({ kind: 'fingerprint', theory, classKey: body.classKey, text: body.text }, () => {})
+  const handle = startEngineTask<Fingerprint>({ kind: 'fingerprint', theory, classKey: body.classKey, text: body.text, priorities: run?.params?.priorities }, () => {})
   const timer = setTimeout(() => handle.cancel(), LIMIT_MS)
   try {
     const target = await handle.result

@@ -1,0 +1,165 @@
+/**
+ * Parity of the kept operators of a class.
+ *
+ * Convention: in spinor-helicity variables P swaps λ ↔ λ̃ and sends every leg to its
+ * parity partner (parityPartners.ts). On a bracket monomial of a class C mapped to itself,
+ * with the leg involution π:
+ *   ⟨ij⟩ ↦ [π(i)π(j)],  [ij] ↦ ⟨π(i)π(j)⟩  (orientation kept: [ji] = −[ij]),
+ * derivatives move with their leg, SU(N) slots of leg i ↦ the same slots of leg π(i), and
+ * the monomial is multiplied by the sign of π restricted to the fermionic legs (reordering
+ * the fields of the image into canonical leg order). Intrinsic phases cancel in a class
+ * mapped to itself because P² = 1 on every field (η = 1 for a Dirac pair; for classes that
+ * violate the fermion number of a Dirac pair, η = ±i would flip the answer). Per-bracket
+ * phases (⟨ij⟩ ↦ ±[ij]) cancel too: such a class has as many angle as square brackets.
+ *
+ * Classes: P(C) = C gives an involution M on the kept operators; each kept operator that is
+ * an eigenvector of M gets 'even' (+1) or 'odd' (−1), and the class counts P-even / P-odd
+ * real parameters as f·(r ± tr M)/2 (f = 1 for self-conjugate classes, 2 otherwise).
+ * P(C) = C̄ ≠ C: operators are paired with the conjugates of their images, rank even and
+ * rank odd real parameters (O + P(O)† and i(O − P(O)†) combinations), operators null.
+ * P(C) ∉ {C, C̄}: the pair of classes carries 2·realParameters; the class whose orbit
+ * key (min of key and conjugate key) sorts first is credited with the P-even combinations
+ * O + P(O), its image with the P-odd ones O − P(O); operators null.
+ */
+import { EngineConsistencyError } from '../errors'
+import type { PrimeField } from '../finite/primeField'
+import { solve } from '../finite/matrix'
+import type { Particle } from './particles'
+import { conjugateClass, type OperatorClass } from './classKey'
+import type { LorentzStructure } from './lorentzStructures'
+import type { SuStructure } from './gaugeStructures'
+import { combinationValues, type SamplePoint } from './evaluation'
+import type { LegPermutation } from './symmetry'
+import { parityImage, parityLegMap } from './parityPartners'
+
+export type ParityValue = 'even' | 'odd' | null
+
+export interface ClassParity {
+  /** Key of the image class P(C); null where P is not defined. */
+  imageKey: string | null
+  /** Why P is undefined (null image), e.g. a chiral fermion without partner. */
+  reason?: string
+  /** How P acts: on the class itself, onto the conjugate class, onto another class. */
+  kind: 'self' | 'conjugate' | 'pair' | 'undefined'
+  /** Parity of each kept operator (null unless kind 'self' and an eigenvector). */
+  operators: ParityValue[]
+  /** P-even / P-odd real parameters for one flavor (null where P is undefined). */
+  pEven: number | null
+  pOdd: number | null
+  /** For kind 'pair': whether this class carries the P-even or the P-odd combinations. */
+  credit?: 'even' | 'odd'
+}
+
+/** A term of a kept column: lorentz × gauge with a coefficient per prime. */
+export interface ParityTerm { coeff: number[]; lorentz: LorentzStructure; gauge: SuStructure[] }
+
+function permSign(xs: number[]): number {
+  let s = 1
+  for (let i = 0; i < xs.length; i++) for (let j = i + 1; j < xs.length; j++) if (xs[i]! > xs[j]!) s = -s
+  return s
+}
+
+/**
+ * Parity image of one bracket monomial: the mapped structure (pairs ordered i < j) and
+ * the sign of the image (bracket orientations times the Fermi sign of π).
+ * @example parityLorentz({derivs:[0,0,0,0],angle:[[0,3]],square:[[1,2]]}, [2,3,0,1], [true,true,true,true])
+ *   // { lorentz: {angle:[[0,3]], square:[[1,2]]}, sign: 1 } (⟨14⟩[23] ↦ [32]⟨41⟩)
+ */
+export function parityLorentz(l: LorentzStructure, pi: number[], fermion: boolean[]): { lorentz: LorentzStructure; sign: number } {
+  let sign = permSign(pi.filter((_, i) => fermion[i]).map((j) => pi.filter((_, i) => fermion[i]).slice().sort((a, b) => a - b).indexOf(j)))
+  const map = ([i, j]: [number, number]): [number, number] => {
+    const a = pi[i]!
+    const b = pi[j]!
+    if (a > b) sign = -sign
+    return a < b ? [a, b] : [b, a]
+  }
+  const derivs = l.derivs.slice()
+  l.derivs.forEach((d, i) => { derivs[pi[i]!] = d })
+  return { lorentz: { derivs, angle: l.square.map(map), square: l.angle.map(map) }, sign }
+}
+
+/**
+ * Parity image of an SU(N) contraction: each slot of leg i ↦ the slot of the same kind
+ * (upper/lower) of leg π(i); ε blocks keep their order.
+ * @example paritySu(δ(e1^i, e2_i), [2,3,0,1]) // δ(e3^i, e4_i)
+ */
+export function paritySu(s: SuStructure, pi: number[]): SuStructure {
+  const mapSlot = (si: number): number => {
+    const sl = s.slots[si]!
+    const j = s.slots.findIndex((x) => x.leg === pi[sl.leg] && x.upper === sl.upper)
+    if (j < 0) throw new EngineConsistencyError('paritySu', `no parity slot for leg ${sl.leg} in ${s.group}`)
+    return j
+  }
+  return { ...s, deltas: s.deltas.map(([u, l]) => [mapSlot(u), mapSlot(l)] as [number, number]), eps: s.eps.map((b) => b.map(mapSlot)) }
+}
+
+/** Values at the points of the parity image of a combination of terms (prime index pi). */
+function imageValues(F: PrimeField, pIdx: number, terms: ParityTerm[], pi: number[], fermion: boolean[], points: SamplePoint[], perms: LegPermutation[]): number[] {
+  const img = terms.map((t) => {
+    const { lorentz, sign } = parityLorentz(t.lorentz, pi, fermion)
+    return { lorentz, gauge: t.gauge.map((s) => paritySu(s, pi)), coeff: F.mul(t.coeff[pIdx]!, F.from(sign)) }
+  })
+  return combinationValues(F, img, points, perms)
+}
+
+export interface ParityInput {
+  cls: OperatorClass
+  selfConjugate: boolean
+  rank: number
+  kept: { terms: ParityTerm[] }[]
+  primes: { F: PrimeField; points: SamplePoint[]; keptRows: number[][] }[]
+  perms: LegPermutation[]
+}
+
+/**
+ * Parity of a class basis (conventions in the file header).
+ * @example classParity(photonParticles, basis of "F_L^2 F_R^2") // { kind: 'self', operators: ['even'], pEven: 1, pOdd: 0 }
+ * Method: structural image of each kept operator, expressed in the kept basis at the
+ * sample points over two primes; the trace of the involution counts the eigenvalues.
+ * Reference: Elvang & Huang, Scattering Amplitudes (CUP 2015), §2 (λ ↔ λ̃ under parity).
+ */
+export function classParity(particles: Particle[], b: ParityInput): ClassParity {
+  const { image, reason } = parityImage(particles, b.cls)
+  const n = b.rank
+  const none: ParityValue[] = b.kept.map(() => null)
+  if (image === null) return { imageKey: null, reason, kind: 'undefined', operators: none, pEven: null, pOdd: null }
+  const real = b.selfConjugate ? n : 2 * n
+  const conj = conjugateClass(particles, b.cls)
+  if (image.key === conj.key && image.key !== b.cls.key) return { imageKey: image.key, kind: 'conjugate', operators: none, pEven: n, pOdd: n }
+  if (image.key !== b.cls.key) {
+    const orbit = (c: OperatorClass): string => [c.key, conjugateClass(particles, c).key].sort()[0]!
+    const first = orbit(b.cls) < orbit(image)
+    return { imageKey: image.key, kind: 'pair', operators: none, pEven: first ? real : 0, pOdd: first ? 0 : real, credit: first ? 'even' : 'odd' }
+  }
+  const pi = parityLegMap(particles, b.cls)
+  const fermion = b.cls.legs.map((p) => p.fermion)
+  const mats = b.primes.map((pd, pIdx) => b.kept.map((col) => {
+    const vals = imageValues(pd.F, pIdx, col.terms, pi, fermion, pd.points, b.perms)
+    try { return solve(pd.F, pd.keptRows, vals) } catch {
+      throw new EngineConsistencyError('classParity', `class ${b.cls.key}: the parity image of a kept operator is not in the span of the class`)
+    }
+  }))
+  const traces = mats.map((cols, k) => involutionTrace(b.primes[k]!.F, cols, b.cls.key))
+  if (traces[0] !== traces[1]) throw new EngineConsistencyError('classParity', `class ${b.cls.key}: parity traces differ between primes (${traces.join(', ')})`)
+  const f = b.selfConjugate ? 1 : 2
+  const operators = mats[0]!.map((col, i): ParityValue => {
+    const F = b.primes[0]!.F
+    if (col.some((x, j) => j !== i && x !== 0)) return null
+    return col[i] === 1 ? 'even' : col[i] === F.neg(1) ? 'odd' : null
+  })
+  return { imageKey: image.key, kind: 'self', operators, pEven: (f * (n + traces[0]!)) / 2, pOdd: (f * (n - traces[0]!)) / 2 }
+}
+
+/** Trace of M (columns = images of kept operators) as an integer, after checking M² = 1. */
+function involutionTrace(F: PrimeField, cols: number[][], key: string): number {
+  const n = cols.length
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) {
+      let s = 0
+      for (let k = 0; k < n; k++) s = F.add(s, F.mul(cols[k]![j]!, cols[i]![k]!))
+      if (s !== (i === j ? 1 : 0)) throw new EngineConsistencyError('classParity', `class ${key}: the parity map squares to ${s} ≠ ${i === j ? 1 : 0} at (${j}, ${i})`)
+    }
+  }
+  const t = cols.reduce((s, c, i) => F.add(s, c[i]!), 0)
+  return t <= n ? t : t - F.p
+}

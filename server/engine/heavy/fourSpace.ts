@@ -1,0 +1,148 @@
+/**
+ * The space of heavy four-fermion contact operators at one order in 1/m, modulo IBP and the
+ * heavy-field EOM (both automatic in the contact vertex, see fourVertex.ts), restricted to
+ * Hermitian, rotation-scalar, parity-even, time-reversal-even (and by default C-even)
+ * operators. Independence is decided by evaluating the contact vertex at random points over
+ * two primes that must agree on the greedy basis.
+ */
+import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
+import { PrimeField, SeededRandom, workingPrimes, rref, type CancelFlag } from '../finite'
+import { daggerFourCombo, fourCandidates, sigmaCount, type Colour, type FourCombo } from './fourStructure'
+import { conjugatePoint, evalFourCombo, pointTables, randomFourPoint, type FourPoint, type PointTables } from './fourVertex'
+
+export interface FourCandidate {
+  combo: FourCombo
+  /** Anti-Hermitian as written: the physical (Hermitian) operator is i times it. */
+  antiHermitian: boolean
+}
+
+export interface FourSpaceOptions {
+  /** SU(N) colour dimension; 1 for an abelian gauge group (singlet colour structure only). */
+  colorN?: number
+  /** Impose charge conjugation (default true). */
+  chargeConjugation?: boolean
+  /** Impose time reversal (default true); without it every Hermitian operator counts. */
+  timeReversal?: boolean
+  /** Evaluate with the incoming and outgoing pairs at rest (total momentum zero). */
+  restFrame?: boolean
+  seed?: number
+  /** Points drawn beyond those needed (for faithfulness checks). */
+  extraPoints?: number
+  signal?: CancelFlag
+}
+
+/**
+ * Hermitian, Θ-definite completions of every structure with nDeriv derivatives.
+ * Time reversal (ψ → iσ₂ψ, antiunitary; Peskin & Schroeder §3.6) leaves ∂ and real
+ * coefficients' structures even, flips each σ and conjugates coefficients; so with n σ's the
+ * T-even Hermitian operator is O + O† (n even) or i(O − O†) (n odd).
+ * @example symmetricFourCandidates(0, ['singlet']).length // 4
+ */
+export function symmetricFourCandidates(nDeriv: number, colours: readonly Colour[], timeReversal = true): FourCandidate[] {
+  const out: FourCandidate[] = []
+  for (const s of fourCandidates(nDeriv, colours)) {
+    const base: FourCombo = [{ coef: 1, s }]
+    const dag = daggerFourCombo(base)
+    const even = sigmaCount(s) % 2 === 0
+    for (const anti of [false, true]) {
+      if (timeReversal && anti === even) continue
+      out.push({ combo: [...base, ...dag.map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))], antiHermitian: anti })
+    }
+  }
+  return out
+}
+
+interface PrimeData {
+  F: PrimeField
+  points: FourPoint[]
+  tables: PointTables[]
+  conj: Array<{ pt: FourPoint; tables: PointTables }>
+  rows: number[][]
+}
+
+/** Span of the candidates' contact vertices, exact over two primes. */
+export class FourSpace {
+  readonly basis: number[]
+  private readonly data: PrimeData[]
+
+  constructor(readonly candidates: readonly FourCandidate[], readonly opts: FourSpaceOptions = {}) {
+    this.data = workingPrimes(2).map((p, i) => this.sample(new PrimeField(p), new SeededRandom((opts.seed ?? 20261202) + 104729 * i)))
+    const piv = this.data.map((d) => rref(d.F, d.rows, opts.signal).pivots)
+    if (piv[0]!.join(',') !== piv[1]!.join(',')) throw new EngineConsistencyError('FourSpace', `primes disagree on pivots: ${piv[0]} vs ${piv[1]}`)
+    this.basis = piv[0]!
+  }
+
+  get dimension(): number {
+    return this.basis.length
+  }
+
+  /** Vertex row of a combination at point j (C-symmetrised when `symmetric`). */
+  private value(d: PrimeData, c: FourCombo, j: number, symmetric: boolean): number {
+    const v = evalFourCombo(d.F, c, d.points[j]!, d.tables[j]!)
+    if (!symmetric || this.opts.chargeConjugation === false) return v
+    return d.F.add(v, evalFourCombo(d.F, c, d.conj[j]!.pt, d.conj[j]!.tables))
+  }
+
+  private sample(F: PrimeField, rng: SeededRandom): PrimeData {
+    const d: PrimeData = { F, points: [], tables: [], conj: [], rows: [] }
+    let want = 8
+    for (;;) {
+      while (d.points.length < want) {
+        if (this.opts.signal?.aborted) throw new EngineCancelledError('four-fermion enumeration')
+        const pt = randomFourPoint(F, rng, this.opts.colorN ?? 1, this.opts.restFrame)
+        const cp = conjugatePoint(F, pt)
+        d.points.push(pt); d.tables.push(pointTables(F, pt)); d.conj.push({ pt: cp, tables: pointTables(F, cp) })
+        const j = d.points.length - 1
+        d.rows.push(this.candidates.map((c) => this.value(d, c.combo, j, true)))
+      }
+      const r = rref(F, d.rows, this.opts.signal).rank
+      if (r <= d.points.length - 3) {
+        if (this.opts.extraPoints && want < d.points.length + this.opts.extraPoints) { want = d.points.length + this.opts.extraPoints; continue }
+        return d
+      }
+      want *= 2
+    }
+  }
+
+  /**
+   * Rank of the given operators (evaluated as written, not symmetrised), optionally together
+   * with the enumerated basis; both primes must agree.
+   */
+  rankOf(combos: readonly FourCombo[], withBasis = false): number {
+    const ranks = this.data.map((d) => {
+      const rows = d.points.map((_, j) => [
+        ...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []),
+        ...combos.map((c) => this.value(d, c, j, false)),
+      ])
+      return rows[0]!.length === 0 ? 0 : rref(d.F, rows, this.opts.signal).rank
+    })
+    if (ranks[0] !== ranks[1]) throw new EngineConsistencyError('FourSpace.rankOf', `primes disagree: ${ranks[0]} vs ${ranks[1]}`)
+    return ranks[0]!
+  }
+
+  /** True when every given operator lies in the span of the enumerated basis. */
+  contains(combos: readonly FourCombo[]): boolean {
+    return this.rankOf(combos, true) === this.dimension
+  }
+}
+
+const cache = new Map<string, FourSpace>()
+
+/**
+ * The four-fermion space at order 1/m² (no derivative) or 1/m⁴ (two derivatives).
+ * @example fourFermionSpace(2, { colorN: 3 }).dimension // 4 (singlet and octet ¹S₀, ³S₁)
+ * Method: random-point evaluation of the contact vertex over two primes (Schwartz–Zippel),
+ * greedy basis in candidate order. Reference: Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125.
+ */
+export function fourFermionSpace(order: number, opts: FourSpaceOptions = {}): FourSpace {
+  if (order !== 2 && order !== 4) throw new EngineInputError('fourFermionSpace', `four-fermion contact operators are enumerated at orders 2 and 4 in 1/m, got ${order}`)
+  const n = opts.colorN ?? 1
+  if (!Number.isInteger(n) || n < 1 || n > 8) throw new EngineInputError('fourFermionSpace', `colour dimension must be an integer 1..8, got ${n}`)
+  const key = JSON.stringify([order, n, opts.chargeConjugation ?? true, opts.timeReversal ?? true, !!opts.restFrame, opts.seed ?? 0, opts.extraPoints ?? 0])
+  const hit = cache.get(key)
+  if (hit) return hit
+  const colours: Colour[] = n === 1 ? ['singlet'] : ['singlet', 'octet']
+  const space = new FourSpace(symmetricFourCandidates(order - 2, colours, opts.timeReversal ?? true), opts)
+  cache.set(key, space)
+  return space
+}
