@@ -11,7 +11,8 @@ export interface LegPermutation {
   sign: number
 }
 
-function perms(xs: number[]): number[][] {
+/** All orderings of `xs` (n! of them; callers keep n small). */
+export function perms(xs: number[]): number[][] {
   if (xs.length <= 1) return [xs.slice()]
   const out: number[][] = []
   xs.forEach((x, i) => {

@@ -2,17 +2,7 @@
  * Young symmetrizers of products of symmetric groups acting on identical legs, and
  * dimensions of GL(N) irreps, for the flavor decomposition of operators.
  */
-import type { LegPermutation } from './symmetry'
-
-/** Permutations of `items` (all orderings). */
-function perms(xs: number[]): number[][] {
-  if (xs.length <= 1) return [xs.slice()]
-  const out: number[][] = []
-  xs.forEach((x, i) => {
-    for (const r of perms([...xs.slice(0, i), ...xs.slice(i + 1)])) out.push([x, ...r])
-  })
-  return out
-}
+import { perms, type LegPermutation } from './symmetry'
 
 function parity(p: number[], base: number[]): number {
   const idx = p.map((x) => base.indexOf(x))

@@ -62,12 +62,16 @@ export function decomposeCharacter(n: number, ch: Character): Map<string, number
   for (const [key, m] of ch) {
     const r = reflectToDominant(checkedWeight('decomposeCharacter', n, key), null)
     if (!r) continue
-    const k = r.dynkin.join(',')
-    const v = (out.get(k) ?? 0) + r.sign * m
-    if (v === 0) out.delete(k)
-    else out.set(k, v)
+    addSigned(out, r.dynkin.join(','), r.sign * m)
   }
   return out
+}
+
+/** Add `delta` to the multiplicity of `key`, dropping entries that cancel to zero. */
+export function addSigned(out: Map<string, number>, key: string, delta: number) {
+  const v = (out.get(key) ?? 0) + delta
+  if (v === 0) out.delete(key)
+  else out.set(key, v)
 }
 
 /** Per-n caches (index n) of the singlet sign of each weight key. */

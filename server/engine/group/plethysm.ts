@@ -104,7 +104,7 @@ function adamsProduct(n: number, ch: Character, mu: readonly number[], cache: Ma
  * @example plethysm(3, [1, 0], [2, 1]) // Map { "1,1" => 1 } (the mixed-symmetry part of 3⊗3⊗3 is 8)
  * Method: cycle index of S_k, each cycle-type product decomposed on the fly by Brauer's formula
  * (schurFunctorIrreps), so no large weight system is ever listed.
- * Reference: Macdonald, Symmetric Functions, I.8; Fulton & Harris, Lecture 6.
+ * Reference: Macdonald, Symmetric Functions, I.8; Fulton & Harris, Representation Theory (1991), §6.
  */
 export function plethysm(n: number, a: Dynkin, partition: number[], opts: PlethysmOptions = {}): Map<string, number> {
   checkDynkin('plethysm', n, a)

@@ -3,7 +3,7 @@
  */
 import { EngineInputError } from '../errors'
 import type { Dynkin } from './types'
-import { reflectToDominant } from './decompose'
+import { addSigned, reflectToDominant } from './decompose'
 import { checkDynkin } from './labels'
 import { plethysm, type PlethysmOptions } from './plethysm'
 import { suDimension, suWeights } from './weights'
@@ -26,10 +26,7 @@ export function tensorProduct(n: number, a: Dynkin, b: Dynkin): Map<string, numb
     const mu = key.split(',').map(Number)
     const r = reflectToDominant(mu, big)
     if (!r) continue
-    const k = r.dynkin.join(',')
-    const v = (out.get(k) ?? 0) + r.sign * m
-    if (v === 0) out.delete(k)
-    else out.set(k, v)
+    addSigned(out, r.dynkin.join(','), r.sign * m)
   }
   return out
 }
