@@ -9,9 +9,12 @@ export default defineNuxtConfig({
   telemetry: false,
   nitro: {
     moduleSideEffects: ['nerdamer/'],
+    // The engine uses bigint literals (exact arithmetic); Node 20 runs ES2022.
+    esbuild: { options: { target: 'es2022' } },
   },
   vite: {
     optimizeDeps: { include: ['katex', 'vuedraggable', 'nerdamer'] },
+    build: { target: 'es2022' },
   },
   typescript: { strict: true },
 })
