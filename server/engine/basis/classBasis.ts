@@ -19,6 +19,8 @@ import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
 import { classParity, type ClassParity } from './parity'
+import { parityImage, parityLegMap } from './parityPartners'
+import { parityColumns, reduceParityColumn, scaleRows } from './parityColumns'
 
 export const BASIS_NOTE = 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes'
 
@@ -29,6 +31,8 @@ export interface Priorities {
   keep?: Record<string, string[]>
   /** Prefer Hermitian combinations where the class is self-conjugate (default true). */
   preferHermitian?: boolean
+  /** Prefer P-even / P-odd combinations where parity maps the class to itself (default true). */
+  preferParity?: boolean
 }
 
 export interface ClassOptions {
@@ -48,6 +52,14 @@ export interface Column {
   conjSign?: 1 | -1
   /** For 'hermitian' columns: the partner combination vanishes, so O itself is Hermitian (up to a phase). */
   selfHermitian?: boolean
+  /** P-eigen columns (classes mapped to themselves by parity): +1 for c + P(c), −1 for c − P(c). */
+  paritySign?: 1 | -1
+  /** Text of c for a column c ± P(c). */
+  parityBase?: string
+  /** The chosen c ± P(c) equals 2c: c itself has definite parity. */
+  selfParity?: boolean
+  /** Parity eigenvalue known by construction (P(c ± P(c)) = ±(c ± P(c)), P² = 1). */
+  parityEigen?: 1 | -1
 }
 
 export interface PrimeData {
@@ -157,7 +169,9 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const perms = identicalLegPermutations(cls.legs)
   const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(cls, candidates, gauge, opts.priorities)
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
-  const columns = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
+  const hermCols = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
+  const selfParity = opts.priorities?.preferParity !== false && parityImage(particles, cls).image?.key === cls.key
+  const columns = selfParity ? parityColumns(hermCols, parityLegMap(particles, cls), gauge.length <= 1) : hermCols
   // The Hermitian columns span the same space as `base`, so base.length rows bound the rank.
   const nRows = base.length + (opts.margin ?? 12 + Math.ceil(base.length / 4))
   const results = workingPrimes(2).map((p, pi) => {
@@ -174,8 +188,9 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
     throw new EngineConsistencyError('classBasis', `class ${cls.key}: ranks/pivots differ between primes ${a.F.p} (${a.pivots.length}) and ${b.F.p} (${b.pivots.length})`)
   }
   const conj = conjugateClass(particles, cls)
-  const kept = a.pivots.map((c) => markSelfHermitian(columns, c, a.zero))
-  const primes = results.map(({ F, points, keptRows }) => ({ F, points, keptRows: halveSelfHermitian(F, keptRows, kept) }))
+  const reduced = a.pivots.map((c) => (columns[c]!.paritySign ? reduceParityColumn(columns, c, a.zero) : markSelfHermitian(columns, c, a.zero)))
+  const kept = reduced.map((r) => r.column)
+  const primes = results.map(({ F, points, keptRows }) => ({ F, points, keptRows: scaleRows(F, keptRows, reduced.map((r) => r.halvings)) }))
   const self = conj.key === cls.key
   return {
     key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: self,
@@ -202,17 +217,12 @@ function alternativesOf(columns: Column[], results: { matrix: number[][] }[], pi
 }
 
 /** A chosen O ± h.c. whose partner O ∓ h.c. vanishes equals 2·O: keep O itself. */
-function markSelfHermitian(columns: Column[], j: number, zero: boolean[]): Column {
+function markSelfHermitian(columns: Column[], j: number, zero: boolean[]): { column: Column; halvings: number } {
   const c = columns[j]!
-  if (c.source !== 'hermitian') return c
+  if (c.source !== 'hermitian') return { column: c, halvings: 0 }
   const partner = c.conjSign === 1 ? j + 1 : j - 1
-  if (zero[partner] !== true) return { ...c, selfHermitian: false }
-  return { ...c, selfHermitian: true, terms: [c.terms[0]!], text: c.text.replace(/^\((.*)\) [+-] h\.c\.$/, '$1') }
-}
-
-function halveSelfHermitian(F: PrimeField, rows: number[][], kept: Column[]): number[][] {
-  const half = F.inv(2)
-  return rows.map((row) => row.map((v, i) => (kept[i]!.selfHermitian ? F.mul(v, half) : v)))
+  if (zero[partner] !== true) return { column: { ...c, selfHermitian: false }, halvings: 0 }
+  return { column: { ...c, selfHermitian: true, terms: [c.terms[0]!], text: c.text.replace(/^\((.*)\) [+-] h\.c\.$/, '$1') }, halvings: 1 }
 }
 
 function columnMatrix(F: PrimeField, pi: number, columns: Column[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {

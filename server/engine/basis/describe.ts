@@ -37,7 +37,7 @@ export interface BasisOperator {
   /**
    * Parity eigenvalue where the class is mapped to itself by P and the operator is a P
    * eigenvector (conventions in parity.ts: ⟨ij⟩ ↔ [π(i)π(j)], legs to parity partners,
-   * Fermi sign of π, P² = 1 on every field); null where P is undefined (chiral fermions),
+   * η = 1 for a Dirac pair, P² = 1 on every field); null where P is undefined (chiral fermions),
    * maps the class to another class (operators paired across classes, counted per class
    * as pEven/pOdd), or for set-aside alternatives.
    */
@@ -90,10 +90,11 @@ function describeColumn(b: ClassBasis, col: Column, hermitian: boolean): BasisOp
   const base = col.source === 'kept' ? keptLatex(b, col.text) : operatorLatex(b.class.legs, t.lorentz, t.gauge)
   const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
   const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
+  const pSign = col.paritySign === undefined ? '' : col.paritySign === 1 ? ' + \\mathcal{P}' : ' - \\mathcal{P}'
   return {
     text: col.text,
-    latex: base + hc,
-    latex4: fourOf(b, col, hc),
+    latex: pSign ? `\\big(${base + hc}\\big)${pSign}` : base + hc,
+    latex4: pSign ? null : fourOf(b, col, hc),
     cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
     parity: null,
     source: col.source,

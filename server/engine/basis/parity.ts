@@ -5,16 +5,19 @@
  * parity partner (parityPartners.ts). On a bracket monomial of a class C mapped to itself,
  * with the leg involution π:
  *   ⟨ij⟩ ↦ [π(i)π(j)],  [ij] ↦ ⟨π(i)π(j)⟩  (orientation kept: [ji] = −[ij]),
- * derivatives move with their leg, SU(N) slots of leg i ↦ the same slots of leg π(i), and
- * the monomial is multiplied by the sign of π restricted to the fermionic legs (reordering
- * the fields of the image into canonical leg order). Intrinsic phases cancel in a class
- * mapped to itself because P² = 1 on every field (η = 1 for a Dirac pair; for classes that
- * violate the fermion number of a Dirac pair, η = ±i would flip the answer). Per-bracket
- * phases (⟨ij⟩ ↦ ±[ij]) cancel too: such a class has as many angle as square brackets.
+ * derivatives move with their leg, SU(N) slots of leg i ↦ the same slots of leg π(i); no
+ * other factor. This is the action of ψ_D → η γ⁰ ψ_D with η = 1 on a Dirac pair (ψ_L, ψ_R)
+ * and P² = 1 on every field: intrinsic phases cancel in a class mapped to itself as soon as
+ * it conserves the fermion number of each Dirac pair; in a class that violates it by an odd
+ * number of ψ_L ψ_R pairs, the Majorana-compatible choice η = ±i would flip every eigenvalue
+ * (e.g. ψᵀCγ^μγ₅ψ ∂_μa b is P-even for η = 1: a polar vector). Per-bracket phases
+ * (⟨ij⟩ ↦ ±[ij]) cancel: a class mapped to itself has as many angle as square brackets.
  *
  * Classes: P(C) = C gives an involution M on the kept operators; each kept operator that is
  * an eigenvector of M gets 'even' (+1) or 'odd' (−1), and the class counts P-even / P-odd
  * real parameters as f·(r ± tr M)/2 (f = 1 for self-conjugate classes, 2 otherwise).
+ * Kept columns c ± P(c) (parityColumns.ts) are eigenvectors by construction; the others
+ * (user-kept, or preferParity false) are imaged and solved for at the sample points.
  * P(C) = C̄ ≠ C: operators are paired with the conjugates of their images, rank even and
  * rank odd real parameters (O + P(O)† and i(O − P(O)†) combinations), operators null.
  * P(C) ∉ {C, C̄}: the pair of classes carries 2·realParameters; the class whose orbit
@@ -53,20 +56,14 @@ export interface ClassParity {
 /** A term of a kept column: lorentz × gauge with a coefficient per prime. */
 export interface ParityTerm { coeff: number[]; lorentz: LorentzStructure; gauge: SuStructure[] }
 
-function permSign(xs: number[]): number {
-  let s = 1
-  for (let i = 0; i < xs.length; i++) for (let j = i + 1; j < xs.length; j++) if (xs[i]! > xs[j]!) s = -s
-  return s
-}
-
 /**
  * Parity image of one bracket monomial: the mapped structure (pairs ordered i < j) and
- * the sign of the image (bracket orientations times the Fermi sign of π).
- * @example parityLorentz({derivs:[0,0,0,0],angle:[[0,3]],square:[[1,2]]}, [2,3,0,1], [true,true,true,true])
- *   // { lorentz: {angle:[[0,3]], square:[[1,2]]}, sign: 1 } (⟨14⟩[23] ↦ [32]⟨41⟩)
+ * the sign from the bracket orientations.
+ * @example parityLorentz({derivs:[0,0,0,0],angle:[[0,3]],square:[[1,2]]}, [2,3,0,1])
+ *   // { lorentz: {angle:[[0,3]], square:[[1,2]]}, sign: 1 } (⟨14⟩[23] ↦ [32]⟨41⟩ = ⟨14⟩[23])
  */
-export function parityLorentz(l: LorentzStructure, pi: number[], fermion: boolean[]): { lorentz: LorentzStructure; sign: number } {
-  let sign = permSign(pi.filter((_, i) => fermion[i]).map((j) => pi.filter((_, i) => fermion[i]).slice().sort((a, b) => a - b).indexOf(j)))
+export function parityLorentz(l: LorentzStructure, pi: number[]): { lorentz: LorentzStructure; sign: number } {
+  let sign = 1
   const map = ([i, j]: [number, number]): [number, number] => {
     const a = pi[i]!
     const b = pi[j]!
@@ -94,9 +91,9 @@ export function paritySu(s: SuStructure, pi: number[]): SuStructure {
 }
 
 /** Values at the points of the parity image of a combination of terms (prime index pi). */
-function imageValues(F: PrimeField, pIdx: number, terms: ParityTerm[], pi: number[], fermion: boolean[], points: SamplePoint[], perms: LegPermutation[]): number[] {
+function imageValues(F: PrimeField, pIdx: number, terms: ParityTerm[], pi: number[], points: SamplePoint[], perms: LegPermutation[]): number[] {
   const img = terms.map((t) => {
-    const { lorentz, sign } = parityLorentz(t.lorentz, pi, fermion)
+    const { lorentz, sign } = parityLorentz(t.lorentz, pi)
     return { lorentz, gauge: t.gauge.map((s) => paritySu(s, pi)), coeff: F.mul(t.coeff[pIdx]!, F.from(sign)) }
   })
   return combinationValues(F, img, points, perms)
@@ -106,7 +103,8 @@ export interface ParityInput {
   cls: OperatorClass
   selfConjugate: boolean
   rank: number
-  kept: { terms: ParityTerm[] }[]
+  /** Kept columns; parityEigen when the eigenvalue is known by construction (parityColumns.ts). */
+  kept: { terms: ParityTerm[]; parityEigen?: 1 | -1 }[]
   primes: { F: PrimeField; points: SamplePoint[]; keptRows: number[][] }[]
   perms: LegPermutation[]
 }
@@ -132,9 +130,9 @@ export function classParity(particles: Particle[], b: ParityInput): ClassParity 
     return { imageKey: image.key, kind: 'pair', operators: none, pEven: first ? real : 0, pOdd: first ? 0 : real, credit: first ? 'even' : 'odd' }
   }
   const pi = parityLegMap(particles, b.cls)
-  const fermion = b.cls.legs.map((p) => p.fermion)
-  const mats = b.primes.map((pd, pIdx) => b.kept.map((col) => {
-    const vals = imageValues(pd.F, pIdx, col.terms, pi, fermion, pd.points, b.perms)
+  const mats = b.primes.map((pd, pIdx) => b.kept.map((col, i) => {
+    if (col.parityEigen) return b.kept.map((_, j) => (j !== i ? 0 : col.parityEigen === 1 ? 1 : pd.F.neg(1)))
+    const vals = imageValues(pd.F, pIdx, col.terms, pi, pd.points, b.perms)
     try { return solve(pd.F, pd.keptRows, vals) } catch {
       throw new EngineConsistencyError('classParity', `class ${b.cls.key}: the parity image of a kept operator is not in the span of the class`)
     }
