@@ -6,6 +6,7 @@ export interface BoardOperator {
   latexDirac: string | null, hermitian: boolean, realParameters: number, text: string, version: number, flavorComponents: number
   details?: {
     antiHermitian: boolean
+    parity: 'even' | 'odd' | null
     cp: 'even' | 'odd' | null
     relations: { coefficient: string, relation: string, source: string }[]
     publishedRewrite: { id: string, coefficient: string }[] | null
@@ -14,7 +15,10 @@ export interface BoardOperator {
   }
 }
 /** Heavy-frame classes have an order in 1/m and no mass dimension, no Hilbert series (null). */
-export interface BoardClass { order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null, realParameters?: number }
+export interface BoardClass {
+  order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null
+  realParameters?: number, cpEven?: number | null, cpOdd?: number | null, pEven?: number | null, pOdd?: number | null, parityReason?: string | null
+}
 
 export function classOrder(c: Pick<BoardClass, 'order' | 'dimension'>): number {
   return c.order ?? (c.dimension as number) - 4
@@ -34,6 +38,8 @@ export const useBasesStore = defineStore('bases', () => {
   const message = ref('')
   const notation = ref<'two' | 'four'>('two')
   const filter = reactive({ tag: '', text: '' })
+  // Imposing P or CP (one at a time) keeps only the even real parameters of each class.
+  const impose = ref<'' | 'p' | 'cp'>('')
   const readonly = computed(() => !['editor', 'owner'].includes(role.value))
   // Counting-rule view: the orders of every operator under another rule of the theory.
   const rules = ref<{ name: string, kind: string }[]>([])
@@ -126,5 +132,5 @@ export const useBasesStore = defineStore('bases', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { rules, ruleName, ruleOrders, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
+  return { impose, rules, ruleName, ruleOrders, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
 })

@@ -42,7 +42,12 @@ function basisSummary(report: BasisReport) {
 async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport): Promise<number> {
   const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({
     order: d.dimension - 4, dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
-    tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.realParameters, flavor: c.flavor ?? null,
+    tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.flavor?.realParameters ?? c.realParameters, flavor: c.flavor ?? null,
+    // Discrete symmetries in real parameters (null where undefined), so the board can impose them.
+    // With several flavors P and CP also act on flavor indices: not counted here.
+    ...(c.flavor
+      ? { cpEven: null, cpOdd: null, pEven: null, pOdd: null, parityReason: 'with several flavors, P and CP also act on flavor indices (not counted)' }
+      : { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: c.pEven ?? null, pOdd: c.pOdd ?? null, parityReason: c.parityReason ?? null }),
   })))
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion,

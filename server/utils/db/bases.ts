@@ -23,7 +23,7 @@ export async function boardData(basisId: number) {
   const operators = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'column', 'position'])
     .select('id', 'order', 'class_key as classKey', 'column', 'position', 'latex', 'latex_dirac as latexDirac', 'hermitian',
       'real_parameters as realParameters', 'text', 'version',
-      db.raw(`jsonb_build_object('fields', structure->'fields', 'flavorComponents', structure->'flavorComponents', 'cp', structure->'cp',
+      db.raw(`jsonb_build_object('fields', structure->'fields', 'flavorComponents', structure->'flavorComponents', 'cp', structure->'cp', 'parity', structure->'parity',
         'relations', structure->'relations', 'publishedRewrite', structure->'publishedRewrite', 'gaugeEomNote', structure->'gaugeEomNote',
         'source', structure->'source', 'antiHermitian', structure->'antiHermitian') as structure`))
   const ids = operators.map((o) => o.id)
@@ -38,7 +38,7 @@ export async function boardData(basisId: number) {
     },
     operators: operators.map(({ structure, ...o }) => ({
       ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1,
-      details: { antiHermitian: !!structure?.antiHermitian, cp: structure?.cp ?? null, relations: structure?.relations ?? [], publishedRewrite: structure?.publishedRewrite ?? null, gaugeEomNote: structure?.gaugeEomNote ?? null, source: structure?.source ?? null },
+      details: { antiHermitian: !!structure?.antiHermitian, cp: structure?.cp ?? null, parity: structure?.parity ?? null, relations: structure?.relations ?? [], publishedRewrite: structure?.publishedRewrite ?? null, gaugeEomNote: structure?.gaugeEomNote ?? null, source: structure?.source ?? null },
     })),
     tags,
     notes,
