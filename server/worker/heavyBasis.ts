@@ -41,11 +41,18 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
       for (const op of o.antiparticle) add(o.order, ckey, 'kept', op)
     }
   }
-  if (a && e.fourFermion.length) {
-    const order = Math.min(...e.fourFermion.map((op) => op.order))
-    const key = `${p}* ${p} ${a}* ${a} (1/m^${order})`
-    classes.push({ order, dimension: null, key, rank: e.fourFermion.length, hilbert: null, tallyOk: null, message: 'leading four-fermion operators (written in, not enumerated)' })
-    for (const op of e.fourFermion) add(order, key, 'kept', op)
+  // The particle–antiparticle four-fermion sector, enumerated order by order; the published
+  // (BBL) forms are set aside with a note on whether they span the space.
+  for (const f of a ? e.fourFermionOrders ?? [] : []) {
+    const key = `${p}* ${p} ${a}* ${a} (1/m^${f.order})`
+    const spans = f.conventionalSpansBasis
+      ? 'the published operators span exactly this space'
+      : f.conventionalSpansRestFrame
+        ? `the published operators span the ${f.restFrameCount} operators that survive with the pair at rest, not the ${f.count - f.restFrameCount} that depend on its total momentum`
+        : 'the published operators do not span this space'
+    classes.push({ order: f.order, dimension: null, key, rank: f.count, hilbert: null, tallyOk: null, message: `${spans}; ${e.fourFermionNote ?? ''}`.slice(0, 600) })
+    for (const op of f.basis) add(f.order, key, 'kept', op)
+    for (const op of f.conventional) add(f.order, key, 'set_aside', op)
   }
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',

@@ -1,7 +1,8 @@
 /**
  * Heavy-particle (non-relativistic) frame: enumeration of the bilinear operators ψ† … ψ order
- * by order in 1/m, modulo the heavy field's EOM and integration by parts, and the leading
- * four-fermion sector ψ†ψ χ†χ when the antiparticle field is present.
+ * by order in 1/m, modulo the heavy field's EOM and integration by parts, and — when the
+ * antiparticle field is present — the enumerated four-fermion contact sector ψ†ψ χ†χ at 1/m²
+ * and 1/m⁴ (fourFermion.ts).
  *
  * What "modulo EOM" removes: every operator with D_t acting on ψ (X·D_t ψ) or, after
  * integration by parts, on ψ† — the leading-order field equation is iD_tψ = 0. Such
@@ -19,6 +20,8 @@ import { comboLatex, structureBlocks } from './display'
 import { orderSpace } from './orderSpace'
 import { QuotientSpace } from './quotient'
 import { expandCombo, type Combo } from './structure'
+import { enumerateFourFermion, FOUR_FERMION_NOTE, type FourFermionOrder } from './fourFermion'
+import type { FourCombo } from './fourStructure'
 
 export interface HeavyOperator {
   id: string
@@ -28,6 +31,8 @@ export interface HeavyOperator {
   /** Building-block counts of each term (for counting rules; the order is the lowest term). */
   terms: Array<Record<string, number>>
   combo?: Combo
+  /** Four-fermion operators: the combination of contact structures (see fourStructure.ts). */
+  fourCombo?: FourCombo
   antiHermitian?: boolean
   coefficient?: string
   relations: CoefficientRelation[]
@@ -56,7 +61,11 @@ export interface HeavyEnumeration {
   colorN: number
   leading: HeavyOperator
   orders: HeavyOrder[]
+  /** Enumerated four-fermion basis, all orders (1/m², and 1/m⁴ when maxOrder = 4). */
   fourFermion: HeavyOperator[]
+  /** Per order: counts (also in the rest frame and without C) and the published operators checked. */
+  fourFermionOrders: FourFermionOrder[]
+  fourFermionNote?: string
   eomNote: string
   chargeConjugationNote?: string
 }
@@ -166,32 +175,15 @@ function annotateGaugeEom(basis: HeavyOperator[], inverse: Array<{ basis: string
   }
 }
 
-function fourFermionSector(particle: string, anti: string, colorN: number): HeavyOperator[] {
-  const base = { [particle]: 1, [`${particle}*`]: 1, [anti]: 1, [`${anti}*`]: 1 }
-  const src = 'Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125 (annihilation form ψ†χ χ†ψ, ψ†σχ·χ†σψ, related by Fierz identities)'
-  const p = `\\${particle}`
-  const a = `\\${anti}`
-  const channels = colorN === 1 ? [''] : ['', 'T^a']
-  const out: HeavyOperator[] = []
-  for (const t of channels) {
-    out.push({ id: `ff.${out.length + 1}`, order: 2, sector: 'fourFermion', latex: `(${p}^\\dagger ${t} ${p})(${a}^\\dagger ${t} ${a})/m^2`, terms: [base], relations: [], source: src })
-    out.push({
-      id: `ff.${out.length + 1}`, order: 2, sector: 'fourFermion',
-      latex: `(${p}^\\dagger \\bm{\\sigma} ${t} ${p})\\cdot(${a}^\\dagger \\bm{\\sigma} ${t} ${a})/m^2`,
-      terms: [{ ...base, sigma: 2 }], relations: [], source: src,
-    })
-  }
-  return out
-}
-
 /**
  * Enumerate the heavy-frame operator basis order by order up to heavy.maxOrder (≤ 4).
  * @example enumerateHeavy({ heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2 } })
  *   .orders.map((o) => o.count) // [2, 2]  (D², σ·B; Darwin, spin–orbit)
  * Method: rotation-scalar, parity-even candidates completed to Hermitian T-even operators;
  * independence modulo EOM + IBP from their gauge-field symbols (0, 1, 2 insertions) over two
- * primes; greedy basis. Reference: Caswell, Lepage, Phys. Lett. B 167 (1986) 437;
- * Manohar, Phys. Rev. D 56 (1997) 230.
+ * primes; greedy basis. Four-fermion operators (with an antiparticle): rank of the contact
+ * vertex, see enumerateFourFermion. Reference: Caswell, Lepage, Phys. Lett. B 167 (1986) 437;
+ * Manohar, Phys. Rev. D 56 (1997) 230; Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125.
  */
 export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): HeavyEnumeration {
   const { heavy } = input
@@ -223,8 +215,13 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
       antiparticle: heavy.antiparticle ? basis.map((b) => conjugateOperator(b, field, heavy.antiparticle!.name)) : [],
     })
   }
-  opts.onProgress?.(1, 'done')
   const anti = heavy.antiparticle?.name
+  const ffOrders = anti ? [2, 4].filter((n) => n <= heavy.maxOrder) : []
+  const fourFermionOrders = ffOrders.map((n) => {
+    opts.onProgress?.(heavy.maxOrder / (heavy.maxOrder + 1), `four-fermion 1/m^${n}`)
+    return enumerateFourFermion(n, colorN, field, anti!, opts.signal)
+  })
+  opts.onProgress?.(1, 'done')
   return {
     particle: field,
     antiparticle: anti,
@@ -232,7 +229,9 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     colorN,
     leading: { ...LEADING_OPERATOR, sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
     orders,
-    fourFermion: anti && heavy.maxOrder >= 2 ? fourFermionSector(field, anti, colorN) : [],
+    fourFermion: fourFermionOrders.flatMap((o) => o.basis),
+    fourFermionOrders,
+    fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
     eomNote: EOM_NOTE,
     chargeConjugationNote: anti
       ? `Charge conjugation fixes the ${anti}-bilinears: the same operators with ψ → χ and E, B → −E, −B carry the same coefficients, so they add no free coefficient.`

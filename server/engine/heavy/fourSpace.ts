@@ -7,8 +7,8 @@
  */
 import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
 import { PrimeField, SeededRandom, workingPrimes, rref, type CancelFlag } from '../finite'
-import { daggerFourCombo, fourCandidates, sigmaCount, type Colour, type FourCombo } from './fourStructure'
-import { conjugatePoint, evalFourCombo, pointTables, randomFourPoint, type FourPoint, type PointTables } from './fourVertex'
+import { conjugateFourCombo, daggerFourCombo, fourCandidates, sigmaCount, simplifyFour, type Colour, type FourCombo } from './fourStructure'
+import { evalFourCombo, pointTables, randomFourPoint, type FourPoint, type PointTables } from './fourVertex'
 
 export interface FourCandidate {
   combo: FourCombo
@@ -32,31 +32,48 @@ export interface FourSpaceOptions {
 }
 
 /**
- * Hermitian, Θ-definite completions of every structure with nDeriv derivatives.
- * Time reversal (ψ → iσ₂ψ, antiunitary; Peskin & Schroeder §3.6) leaves ∂ and real
- * coefficients' structures even, flips each σ and conjugates coefficients; so with n σ's the
- * T-even Hermitian operator is O + O† (n even) or i(O − O†) (n odd).
+ * Hermitian, T-even (and optionally C-even) completions of every structure with nDeriv
+ * derivatives, merged and de-duplicated. Time reversal (ψ → iσ₂ψ, antiunitary; Peskin &
+ * Schroeder §3.6) keeps ∂, flips each σ and conjugates coefficients; so with n σ's the
+ * T-even Hermitian operator is O + O† (n even) or i(O − O†) (n odd). C-even: X + C(X).
  * @example symmetricFourCandidates(0, ['singlet']).length // 4
  */
-export function symmetricFourCandidates(nDeriv: number, colours: readonly Colour[], timeReversal = true): FourCandidate[] {
+export function symmetricFourCandidates(
+  nDeriv: number, colours: readonly Colour[], sym: { timeReversal?: boolean; chargeConjugation?: boolean } = {},
+): FourCandidate[] {
   const out: FourCandidate[] = []
+  const seen = new Set<string>()
   for (const s of fourCandidates(nDeriv, colours)) {
     const base: FourCombo = [{ coef: 1, s }]
     const dag = daggerFourCombo(base)
     const even = sigmaCount(s) % 2 === 0
     for (const anti of [false, true]) {
-      if (timeReversal && anti === even) continue
-      out.push({ combo: [...base, ...dag.map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))], antiHermitian: anti })
+      if (sym.timeReversal !== false && anti === even) continue
+      let c = simplifyFour([...base, ...dag.map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))])
+      if (sym.chargeConjugation !== false) c = simplifyFour([...c, ...conjugateFourCombo(c)])
+      if (c.length === 0) continue
+      const g = c.reduce((a, t) => gcd(a, t.coef), 0) * Math.sign(c[0]!.coef)
+      c = c.map((t) => ({ coef: t.coef / g, s: t.s }))
+      const key = JSON.stringify(c)
+      if (seen.has(key)) continue
+      seen.add(key)
+      out.push({ combo: c, antiHermitian: anti })
     }
   }
   return out
+}
+
+function gcd(a: number, b: number): number {
+  let x = Math.abs(a)
+  let y = Math.abs(b)
+  while (y) [x, y] = [y, x % y]
+  return x
 }
 
 interface PrimeData {
   F: PrimeField
   points: FourPoint[]
   tables: PointTables[]
-  conj: Array<{ pt: FourPoint; tables: PointTables }>
   rows: number[][]
 }
 
@@ -76,28 +93,26 @@ export class FourSpace {
     return this.basis.length
   }
 
-  /** Vertex row of a combination at point j (C-symmetrised when `symmetric`). */
-  private value(d: PrimeData, c: FourCombo, j: number, symmetric: boolean): number {
-    const v = evalFourCombo(d.F, c, d.points[j]!, d.tables[j]!)
-    if (!symmetric || this.opts.chargeConjugation === false) return v
-    return d.F.add(v, evalFourCombo(d.F, c, d.conj[j]!.pt, d.conj[j]!.tables))
+  /** Vertex of a combination at point j. */
+  private value(d: PrimeData, c: FourCombo, j: number): number {
+    return evalFourCombo(d.F, c, d.points[j]!, d.tables[j]!)
   }
 
   private sample(F: PrimeField, rng: SeededRandom): PrimeData {
-    const d: PrimeData = { F, points: [], tables: [], conj: [], rows: [] }
+    const d: PrimeData = { F, points: [], tables: [], rows: [] }
     let want = 8
+    let extraDone = false
     for (;;) {
       while (d.points.length < want) {
         if (this.opts.signal?.aborted) throw new EngineCancelledError('four-fermion enumeration')
         const pt = randomFourPoint(F, rng, this.opts.colorN ?? 1, this.opts.restFrame)
-        const cp = conjugatePoint(F, pt)
-        d.points.push(pt); d.tables.push(pointTables(F, pt)); d.conj.push({ pt: cp, tables: pointTables(F, cp) })
+        d.points.push(pt); d.tables.push(pointTables(F, pt))
         const j = d.points.length - 1
-        d.rows.push(this.candidates.map((c) => this.value(d, c.combo, j, true)))
+        d.rows.push(this.candidates.map((c) => this.value(d, c.combo, j)))
       }
       const r = rref(F, d.rows, this.opts.signal).rank
       if (r <= d.points.length - 3) {
-        if (this.opts.extraPoints && want < d.points.length + this.opts.extraPoints) { want = d.points.length + this.opts.extraPoints; continue }
+        if (!extraDone && this.opts.extraPoints) { extraDone = true; want = d.points.length + this.opts.extraPoints; continue }
         return d
       }
       want *= 2
@@ -105,14 +120,14 @@ export class FourSpace {
   }
 
   /**
-   * Rank of the given operators (evaluated as written, not symmetrised), optionally together
+   * Rank of the given operators (evaluated as written), optionally together
    * with the enumerated basis; both primes must agree.
    */
   rankOf(combos: readonly FourCombo[], withBasis = false): number {
     const ranks = this.data.map((d) => {
       const rows = d.points.map((_, j) => [
         ...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []),
-        ...combos.map((c) => this.value(d, c, j, false)),
+        ...combos.map((c) => this.value(d, c, j)),
       ])
       return rows[0]!.length === 0 ? 0 : rref(d.F, rows, this.opts.signal).rank
     })
@@ -142,7 +157,7 @@ export function fourFermionSpace(order: number, opts: FourSpaceOptions = {}): Fo
   const hit = cache.get(key)
   if (hit) return hit
   const colours: Colour[] = n === 1 ? ['singlet'] : ['singlet', 'octet']
-  const space = new FourSpace(symmetricFourCandidates(order - 2, colours, opts.timeReversal ?? true), opts)
+  const space = new FourSpace(symmetricFourCandidates(order - 2, colours, opts), opts)
   cache.set(key, space)
   return space
 }

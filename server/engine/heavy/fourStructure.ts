@@ -110,7 +110,7 @@ export function parseFour(text: string): FourStructure {
   const slots: FourSlot[] = []
   const labels: string[] = []
   let epsLabels: string[] | undefined
-  for (const tok of text.trim().split(/\s+/)) {
+  for (const tok of text.trim().split(/\s+/).filter(Boolean)) {
     if (tok === 'ex') { ordering = 'exchanged'; continue }
     if (tok === 'oct') { colour = 'octet'; continue }
     const m = /^(s1|s2|d[0-3]|eps)_([a-z]+)$/.exec(tok)
@@ -215,4 +215,22 @@ export function expandArrows(text: string): Array<[number, string]> {
     out = out.flatMap(([c, t]): Array<[number, string[]]> => [[c, [...t, `${plus}_${m[2]}`]], [-c, [...t, `${minus}_${m[2]}`]]])
   }
   return out.map(([c, t]) => [c, t.join(' ')])
+}
+
+/**
+ * Charge conjugate of a structure: C maps leg L to leg 3 − L (ψ ↔ χ†, ψ† ↔ χ), each Pauli
+ * matrix to −σ (σ₂σ_kσ₂ = −σ_kᵀ), and in the direct ordering moves σ between the ψ- and
+ * χ-bilinears; the colour structures 1⊗1 and T^A⊗T^A are invariant.
+ * @example conjugateFour(parseFour('d1_i d1_i')).slots // ∂∂ on leg 2 (χ†)
+ * Method: Ψ → iγ²Ψ* on the Dirac field Ψ = (ψ, χ) (Peskin & Schroeder §3.6).
+ */
+export function conjugateFourCombo(c: FourCombo): FourCombo {
+  return c.map(({ coef, s }) => {
+    const slots: FourSlot[] = s.slots.map((x) => {
+      if (x.kind === 'd') return { kind: 'd', leg: 3 - x.leg }
+      if (s.ordering === 'exchanged') return x
+      return { kind: x.kind === 's1' ? 's2' : 's1' }
+    })
+    return { coef: sigmaCount(s) % 2 === 0 ? coef : -coef, s: { ...s, slots } }
+  })
 }
