@@ -48,7 +48,7 @@ export const useBasesStore = defineStore('bases', () => {
   const ordersBase = ref('')
   async function loadRules(base: string) {
     ordersBase.value = base
-    rules.value = (await $fetch<{ rules: { name: string, kind: string }[] }>(base)).rules
+    rules.value = (await useRequestFetch()<{ rules: { name: string, kind: string }[] }>(base)).rules
   }
   async function selectRule(name: string) {
     ruleName.value = name
@@ -132,5 +132,5 @@ export const useBasesStore = defineStore('bases', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { impose, rules, ruleName, ruleOrders, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
+  return { impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
 })

@@ -31,5 +31,5 @@ export const useRunsStore = defineStore('runs', () => {
     const i = runs.value.findIndex((x) => x.id === id)
     if (i >= 0) runs.value[i] = run as Run
   }
-  return { runs, active, load, start, refreshActive, cancel }
+  return { runs, theoryId, active, load, start, refreshActive, cancel }
 })
