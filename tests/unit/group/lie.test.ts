@@ -12,15 +12,8 @@ import {
   alternatingPower, plethysm, suDimension, suWeights, symmetricPower, tensorProduct,
 } from '../../../server/engine/group/index'
 
-interface LieCase {
-  op: 'tensor' | 'sym_tensor' | 'alt_tensor' | 'plethysm' | 'dim' | 'dom_char'
-  n: number
-  a: number[]
-  b?: number[]
-  k?: number
-  partition?: number[]
-  result: Record<string, number>
-}
+// The fixture's shape, from its generator (a type-only import: the script does not run).
+import type { LieCase } from '../../fixtures/lie/generate'
 
 const here = dirname(fileURLToPath(import.meta.url))
 const doc = JSON.parse(readFileSync(join(here, '../../fixtures/lie/lie-cases.json'), 'utf8')) as {
