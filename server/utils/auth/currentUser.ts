@@ -51,3 +51,26 @@ export async function requireGroupRole(event: H3Event, groupId: number, needed: 
   if (!roleAtLeast(role, needed)) fail(403, `This needs the ${needed} role in the group; you are ${role}`)
   return { user, role: role! }
 }
+
+/**
+ * A basis or theory row together with the caller's role in the group that owns it, read in
+ * one query (the hot read paths: the board and the theory page). Falls back to the two-step
+ * checks to tell a missing row (404) from a missing account (401).
+ */
+export async function requireRoleOn(event: H3Event, kind: 'bases' | 'theories', id: number, needed: GroupRole) {
+  const userId = await sessionUserId(event)
+  const db = useDb()
+  const q = kind === 'bases'
+    ? db('bases as x').join('theories as t', 't.id', 'x.theory_id').select('x.*', 't.group_id')
+    : db('theories as x').select('x.*')
+  const row = await q.crossJoin(db.raw('users as u'))
+    .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOn('m.group_id', kind === 'bases' ? 't.group_id' : 'x.group_id'))
+    .where('x.id', id).andWhere('u.id', userId)
+    .first('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'm.role as u_role')
+  if (!row) return null // caller falls back to the explicit checks for the right message
+  const user: CurrentUser = { id: userId, email: row.u_email, displayName: row.u_name, siteRole: row.u_site_role }
+  const role = (row.u_role ?? null) as GroupRole | null
+  if (!role) fail(403, 'You are not a member of this group')
+  if (!roleAtLeast(role, needed)) fail(403, `This needs the ${needed} role in the group; you are ${role}`)
+  return { row, user, role: role! }
+}

@@ -1,22 +1,28 @@
 import { setResponseHeader } from 'h3'
 import { defineApiHandler } from '../../../utils/http/apiHandler'
 import { intParam } from '../../../utils/http/readJson'
-import { requireGroupRole } from '../../../utils/auth/currentUser'
+import { requireGroupRole, requireRoleOn } from '../../../utils/auth/currentUser'
 import { basisOr404, boardData } from '../../../utils/db/bases'
 import { coverageOfClasses } from '../../../utils/db/boardMath'
 import { cachedBoard, storeBoard } from '../../../utils/db/boardCache'
 
 // The board's data, served from a per-version cache (see boardCache.ts); the role is per reader.
+// The basis, the account and the membership come in one query on this hot path.
 export default defineApiHandler(async (event) => {
   const id = intParam(event, 'id')
-  const basis = await basisOr404(id)
-  const { role } = await requireGroupRole(event, basis.group_id, 'viewer')
-  let json = cachedBoard(id, basis.version)
-  if (!json) {
+  let access = await requireRoleOn(event, 'bases', id, 'viewer')
+  if (!access) {
+    const basis = await basisOr404(id) // 404 when the basis is missing …
+    const { user, role } = await requireGroupRole(event, basis.group_id, 'viewer') // … else 401/403
+    access = { row: basis, user, role }
+  }
+  const version = access.row.version as number
+  let bytes = cachedBoard(id, version, access.role)
+  if (!bytes) {
     const { groupId: _g, ...data } = await boardData(id)
-    json = JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as { key: string, rank: number }[]) })
-    storeBoard(id, basis.version, json)
+    storeBoard(id, version, JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as { key: string, rank: number }[]) }))
+    bytes = cachedBoard(id, version, access.role)!
   }
   setResponseHeader(event, 'content-type', 'application/json; charset=utf-8')
-  return `{"role":${JSON.stringify(role)},${json.slice(1)}`
+  return bytes
 })
