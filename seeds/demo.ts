@@ -1,6 +1,7 @@
 import type { Knex } from 'knex'
 import { DEMO_ADMIN, DEMO_GROUP, DEMO_MEMBERS, DEMO_PASSWORD } from './demoPeople'
-import { DEMO_THEORIES, DEMO_RUNS } from './demoTheories'
+import { DEMO_THEORIES, DEMO_RUNS, DEMO_LADDER } from './demoTheories'
+import { LadderDocumentSchema } from '../shared/schemas/scaleRequests'
 import { parseTheory } from '../shared/schemas/theory'
 
 /**
@@ -23,6 +24,9 @@ export async function seedDemo(db: Knex, hash: (password: string) => Promise<str
       parseTheory(definition) // the demo must itself be a valid theory file
       await trx('theories').insert({ group_id: group.id, name: definition.name, definition: JSON.stringify(definition), created_by: owner.id })
     }
+    LadderDocumentSchema.parse(DEMO_LADDER.ladder) // the demo ladder must itself be valid
+    const ladderTheory = await trx('theories').where({ group_id: group.id, name: DEMO_LADDER.theory }).first('id')
+    await trx('scale_ladders').insert({ theory_id: ladderTheory.id, ladder: JSON.stringify(DEMO_LADDER.ladder), updated_by: owner.id })
   })
   if (enqueue) await enqueueDemoRuns(db, enqueue)
   return true

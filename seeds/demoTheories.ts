@@ -35,3 +35,19 @@ export const DEMO_RUNS = [
   { theory: 'Vexonium in the heavy-particle frame', kind: 'basis', maxDim: 5 },
   { theory: 'SMEFT (reference)', kind: 'basis', maxDim: 6, nf: 1 },
 ] as const
+
+/**
+ * The demo study's scale ladder (invented numbers): a 40 GeV tarnion probed at 2 GeV, so the
+ * expansion parameter E/M_T = 1/20; orders below a 10^-4 precision target may be set aside.
+ */
+export const DEMO_LADDER = {
+  theory: 'Hidden photon with tarnion',
+  ladder: {
+    scales: [{ name: 'M_T', value: '40', unit: 'GeV' }, { name: 'E', value: '2', unit: 'GeV' }, { name: 'R', value: '0.5', unit: 'fm' }],
+    parameters: [{ name: 'eps', numerator: 'E', denominator: 'M_T' }],
+    precisionTarget: 1e-4,
+    countingParameter: 'eps',
+    orders: [0, 1, 2, 3, 4],
+  },
+}
+
