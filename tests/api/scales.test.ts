@@ -1,5 +1,5 @@
 import { describe, it, expect, beforeAll } from 'vitest'
-import { buildWorld, addBasis, type World } from '../support/fixtures'
+import { buildWorld, addBasis, type World, DIRAC_AND_SCALAR } from '../support/fixtures'
 import { rowCounts, testDb } from '../support/db'
 import { messageOf } from '../support/client'
 
@@ -13,15 +13,7 @@ const LADDER = {
   precisionTarget: 1e-3,
   orders: [0, 1, 2, 3],
 }
-/** The demo-like theory: U(1) gauge, a charged Dirac fermion as two Weyl fields, a real scalar. */
-const DEMO_LIKE = {
-  name: 'Heavy electron and a scalar', frame: 'relativistic',
-  groups: [{ name: 'QED', type: 'U1', gauge: true }],
-  fields: [
-    { name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } },
-    { name: 'S', lorentz: 'S', real: true }, { name: 'A', lorentz: 'F', gaugeOf: 'QED' },
-  ],
-}
+const DEMO_LIKE = DIRAC_AND_SCALAR
 
 async function newTheory(definition: object) {
   const r = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition })

@@ -2,7 +2,7 @@ import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest'
 import type { Browser, Page } from 'playwright-core'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { signedUpClient, TEST_PASSWORD } from '../support/client'
-import { addBasis, type World } from '../support/fixtures'
+import { addBasis, type World, DIRAC_AND_SCALAR } from '../support/fixtures'
 
 // Scale ladder, tower and couplings pages in Debian's Chromium: edit a ladder and see its
 // chart drawn, integrate a field out and land on the child with its threshold tag.
@@ -10,14 +10,7 @@ let browser: Browser
 let theoryId: number
 let email: string
 
-const DEMO_LIKE = {
-  name: 'Heavy electron and a scalar', frame: 'relativistic',
-  groups: [{ name: 'QED', type: 'U1', gauge: true }],
-  fields: [
-    { name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } },
-    { name: 'S', lorentz: 'S', real: true }, { name: 'A', lorentz: 'F', gaugeOf: 'QED' },
-  ],
-}
+const DEMO_LIKE = DIRAC_AND_SCALAR
 
 /** True when the chart canvas has drawn pixels (not a blank canvas). */
 async function canvasDrawn(page: Page, index = 0): Promise<boolean> {

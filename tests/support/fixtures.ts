@@ -9,6 +9,16 @@ export const SMALL_THEORY = {
   fields: [{ name: 'phi', lorentz: 'S', charges: { U: '1' } }, { name: 'A', lorentz: 'F', gaugeOf: 'U' }],
 }
 
+/** U(1) gauge theory with a charged Dirac fermion (two Weyl fields) and a real scalar: integrate-out cases. */
+export const DIRAC_AND_SCALAR = {
+  name: 'Heavy electron and a scalar', frame: 'relativistic',
+  groups: [{ name: 'QED', type: 'U1', gauge: true }],
+  fields: [
+    { name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } },
+    { name: 'S', lorentz: 'S', real: true }, { name: 'A', lorentz: 'F', gaugeOf: 'QED' },
+  ],
+}
+
 export interface Actor { client: ApiClient, id: number, email: string }
 export interface World {
   /** The editor's client (runs and edits). */
