@@ -1,3 +1,4 @@
+import { endSession } from '../../utils/auth/sessions'
 import { defineApiHandler, fail } from '../../utils/http/apiHandler'
 import { readJson } from '../../utils/http/readJson'
 import { ResetSchema } from '../../../shared/schemas/account'
@@ -12,8 +13,9 @@ export default defineApiHandler(async (event) => {
     const reset = await trx('password_resets').where({ token_hash: hashToken(body.token) }).forUpdate().first()
     if (!reset || reset.used_at || new Date(reset.expires_at) < new Date()) fail(400, 'This reset link is invalid, used or expired; ask for a new one')
     await trx('password_resets').where({ id: reset.id }).update({ used_at: trx.fn.now() })
-    await trx('users').where({ id: reset.user_id }).update({ password_hash: passwordHash })
+    // Every session signed in before now stops working (a thief's included).
+    await trx('users').where({ id: reset.user_id }).update({ password_hash: passwordHash, sessions_valid_from: new Date() })
   })
-  await clearUserSession(event)
+  await endSession(event)
   return { message: 'Password changed; sign in with the new one.' }
 })

@@ -1,3 +1,4 @@
+import { startSession } from '../../utils/auth/sessions'
 import { defineApiHandler, fail } from '../../utils/http/apiHandler'
 import { readJson } from '../../utils/http/readJson'
 import { SignInSchema } from '../../../shared/schemas/account'
@@ -8,6 +9,6 @@ export default defineApiHandler(async (event) => {
   const user = await findUserByEmail(body.email)
   // Same message for unknown e-mail and wrong password: no account discovery.
   if (!user || !(await verifyPassword(user.password_hash, body.password))) fail(401, 'E-mail or password is wrong')
-  await setUserSession(event, { user: publicUser(user) })
+  await startSession(event, publicUser(user))
   return { user: publicUser(user) }
 })

@@ -1,6 +1,7 @@
 import { defineApiHandler } from '../../utils/http/apiHandler'
+import { endSession } from '../../utils/auth/sessions'
 
 export default defineApiHandler(async (event) => {
-  await clearUserSession(event)
+  await endSession(event)
   return { signedOut: true }
 })

@@ -1,3 +1,4 @@
+import { startSession } from '../../utils/auth/sessions'
 import { defineApiHandler, fail, created } from '../../utils/http/apiHandler'
 import { readJson } from '../../utils/http/readJson'
 import { SignUpSchema } from '../../../shared/schemas/account'
@@ -15,7 +16,7 @@ export default defineApiHandler(async (event) => {
     if (body.invitation) await acceptInvitation(trx, body.invitation, row.id, row.email)
     return row
   })
-  await setUserSession(event, { user: publicUser(user) })
+  await startSession(event, publicUser(user))
   created(event)
   return { user: publicUser(user) }
 })
