@@ -1,4 +1,6 @@
 import { describe, it, expect, beforeAll } from 'vitest'
+import { get as httpGet } from 'node:http'
+import { gunzipSync } from 'node:zlib'
 import { buildWorld, addBasis, type World } from '../support/fixtures'
 import { messageOf } from '../support/client'
 import { testDb } from '../support/db'
@@ -116,4 +118,40 @@ describe('the basis board API', () => {
     expect(refused.status).toBe(422)
     expect(messageOf(refused)).toMatch(/not in this basis/)
   })
+
+  it('sends the board gzip-compressed to clients that accept it, and the same JSON plainly otherwise', async () => {
+    const path = `/api/bases/${basis.basisId}`
+    const cookie = world.byRole.viewer.client.cookie
+    const plain = await rawGet(path, { cookie, 'accept-encoding': 'identity' })
+    expect(plain.headers['content-encoding']).toBeUndefined()
+    const board = JSON.parse(plain.body.toString('utf8'))
+    expect(board.role).toBe('viewer')
+    for (const header of ['gzip', 'br, gzip;q=0.5', 'gzip, deflate, br, zstd', '*']) {
+      const zipped = await rawGet(path, { cookie, 'accept-encoding': header })
+      expect(zipped.headers['content-encoding'], header).toBe('gzip')
+      expect(zipped.headers.vary).toMatch(/accept-encoding/i)
+      expect(zipped.body.length).toBeLessThan(plain.body.length)
+      expect(JSON.parse(gunzipSync(zipped.body).toString('utf8'))).toEqual(board)
+    }
+    for (const header of ['gzip;q=0', 'br', 'deflate, *;q=0']) {
+      expect((await rawGet(path, { cookie, 'accept-encoding': header })).headers['content-encoding'], header).toBeUndefined()
+    }
+    // Each role gets its own bytes: the owner's copy says owner.
+    const owner = await rawGet(path, { cookie: world.owner.client.cookie, 'accept-encoding': 'gzip' })
+    expect(JSON.parse(gunzipSync(owner.body).toString('utf8')).role).toBe('owner')
+  })
 })
+
+/** A GET through node:http, which (unlike fetch) leaves the body as the server encoded it. */
+function rawGet(path: string, headers: Record<string, string>): Promise<{ headers: Record<string, string | string[] | undefined>, body: Buffer }> {
+  return new Promise((resolve, reject) => {
+    const req = httpGet(`${world.owner.client.baseUrl}${path}`, { headers }, (res) => {
+      const chunks: Buffer[] = []
+      res.on('data', (c: Buffer) => chunks.push(c))
+      res.on('end', () => resolve({ headers: res.headers, body: Buffer.concat(chunks) }))
+      res.on('error', reject)
+    })
+    req.on('error', reject)
+  })
+}
+

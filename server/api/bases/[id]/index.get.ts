@@ -5,8 +5,10 @@ import { requireGroupRole, requireRoleOn } from '../../../utils/auth/currentUser
 import { basisOr404, boardData } from '../../../utils/db/bases'
 import { coverageOfClasses } from '../../../utils/db/boardMath'
 import { cachedBoard, storeBoard } from '../../../utils/db/boardCache'
+import { acceptsGzip } from '../../../utils/http/acceptsGzip'
 
-// The board's data, served from a per-version cache (see boardCache.ts); the role is per reader.
+// The board's data, served from a per-version cache (see boardCache.ts), gzip-compressed for
+// clients that accept it (browsers do); the role is per reader.
 // The basis, the account and the membership come in one query on this hot path.
 export default defineApiHandler(async (event) => {
   const id = intParam(event, 'id')
@@ -24,5 +26,8 @@ export default defineApiHandler(async (event) => {
     bytes = cachedBoard(id, version, access.role)!
   }
   setResponseHeader(event, 'content-type', 'application/json; charset=utf-8')
-  return bytes
+  setResponseHeader(event, 'vary', 'accept-encoding')
+  if (!acceptsGzip(event)) return bytes.plain
+  setResponseHeader(event, 'content-encoding', 'gzip')
+  return bytes.gzip
 })
