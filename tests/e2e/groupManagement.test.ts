@@ -80,7 +80,7 @@ describe('group management in a real browser', () => {
     await owner.getByRole('button', { name: 'Send invitation' }).click()
     await owner.getByRole('button', { name: `Withdraw the invitation to ${other}` }).click()
     await expect.poll(() => owner.getByText(`Invitation to ${other} withdrawn.`).count()).toBe(1)
-    expect(await owner.locator('[data-test="invitations"]').innerText()).not.toContain(other)
+    await expect.poll(() => owner.locator('[data-test="invitations"]').innerText()).not.toContain(other)
     await screenshot(owner, 'group-management')
 
     // The invitee (now a viewer) leaves the group.
