@@ -19,7 +19,7 @@ export default defineNuxtConfig({
   typescript: { strict: true },
   runtimeConfig: {
     // Sessions end 30 days after sign-in; only the cookie carries them (no header variant),
-    // which is what server/utils/auth/sessionUserId.ts keys its unseal cache on.
+    // which is what server/utils/auth/sessions.ts keys its unseal cache on.
     // The password comes from NUXT_SESSION_PASSWORD at run time.
     session: { password: '', maxAge: 30 * 24 * 3600, sessionHeader: false },
   },

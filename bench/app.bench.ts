@@ -10,9 +10,7 @@ import { randomBytes } from 'node:crypto'
 import { resolve } from 'node:path'
 import autocannon from 'autocannon'
 import knexFactory from 'knex'
-// @ts-expect-error plain ESM helper without types
 import { recreateLocalDatabase, localUrl } from '../scripts/lib/postgres.mjs'
-// @ts-expect-error plain ESM helper without types
 import { buildIfStale } from '../scripts/lib/build.mjs'
 import { migrationSource } from '../migrations/index'
 import { buildBasis } from '../server/engine/basis/buildBasis'
@@ -64,9 +62,10 @@ async function latency(url: string, headers: Record<string, string>) {
   // Warm-up, not counted: JIT compilation, the database pool's connections, the board cache.
   await autocannon({ url, connections: 50, duration: 3, headers })
   const times: number[] = []
-  const run = autocannon({ url, connections: 50, duration: 8, headers })
-  run.on('response', (_client: unknown, _status: number, _bytes: number, ms: number) => times.push(ms))
-  const result = await run
+  const result = await new Promise<autocannon.Result>((resolve, reject) => {
+    const run = autocannon({ url, connections: 50, duration: 8, headers }, (error, res) => error ? reject(error) : resolve(res))
+    run.on('response', (_client, _status, _bytes, ms) => times.push(ms))
+  })
   times.sort((a, b) => a - b)
   const ms = (q: number) => Math.round(quantile(times, q) * 10) / 10
   return { p50_ms: ms(0.5), p95_ms: ms(0.95), p99_ms: ms(0.99), requests_per_s: Math.round(result.requests.average), responses: times.length, non2xx: result.non2xx }

@@ -105,16 +105,16 @@ export const useBasesStore = defineStore('bases', () => {
     rewrites.value[op.id] = (await $fetch(`/api/operators/${op.id}/rewrite`)).rewrite as Rewrite | null
   }
   async function addTag(opId: number, kind: string, label?: string) {
-    const { tag } = await $fetch(`/api/operators/${opId}/tags`, { method: 'POST', body: label ? { kind, label } : { kind } })
-    tags.value.push(tag as BoardTag)
+    const { tag } = await $fetch<{ tag: BoardTag }>(`/api/operators/${opId}/tags`, { method: 'POST', body: label ? { kind, label } : { kind } })
+    tags.value.push(tag)
   }
   async function removeTag(id: number) {
     await $fetch(`/api/tags/${id}`, { method: 'DELETE' })
     tags.value = tags.value.filter((t) => t.id !== id)
   }
   async function addNote(opId: number, body: string) {
-    const { annotation } = await $fetch(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', body: { operatorId: opId, body } })
-    notes.value.push(annotation as unknown as BoardNote)
+    const { annotation } = await $fetch<{ annotation: BoardNote }>(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', body: { operatorId: opId, body } })
+    notes.value.push(annotation)
   }
   async function editNote(id: number, body: string) {
     await $fetch(`/api/annotations/${id}`, { method: 'PATCH', body: { body } })

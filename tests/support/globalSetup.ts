@@ -4,7 +4,6 @@ import { existsSync } from 'node:fs'
 import { resolve } from 'node:path'
 import type { TestProject } from 'vitest/node'
 import knexFactory from 'knex'
-// @ts-expect-error plain ESM helper without types
 import { recreateLocalDatabase, localUrl } from '../../scripts/lib/postgres.mjs'
 import { migrationSource } from '../../migrations/index'
 
