@@ -60,7 +60,7 @@ const BROWSER = { 'accept-encoding': 'gzip, deflate, br, zstd' }
 
 async function latency(url: string, headers: Record<string, string>) {
   // Warm-up, not counted: JIT compilation, the database pool's connections, the board cache.
-  await autocannon({ url, connections: 50, duration: 3, headers })
+  await autocannon({ url, connections: 50, duration: 5, headers })
   const times: number[] = []
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
     const run = autocannon({ url, connections: 50, duration: 8, headers }, (error, res) => error ? reject(error) : resolve(res))
