@@ -3,13 +3,17 @@
 // half-typed value is never lost, and converts to the theory file that TheorySchema validates.
 // Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
 import type { Theory } from '../shared/schemas/theory'
+import { type DraftLabels, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
+import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
+
+export type { DraftHeavy }
 
 export type GroupKind = 'SU' | 'U1' | 'Z'
 export type Lorentz = 'S' | 'L' | 'R' | 'F'
 export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
 
 export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
-export interface DraftField {
+export interface DraftField extends DraftLabels {
   uid: string
   name: string
   lorentz: Lorentz
@@ -17,13 +21,6 @@ export interface DraftField {
   /** uid of a group of the draft, or "?NAME" for a group name the file names but does not declare. */
   gaugeOf: string
   flavors: string
-  /** Dynkin labels per group uid, typed as "1,0" (empty = singlet). */
-  reps: Record<string, string>
-  /** Charge per group uid, typed as "1/6" (empty = 0). */
-  charges: Record<string, string>
-  /** reps/charges keyed by names that are not groups of the draft (kept so validation names them). */
-  strayReps: Record<string, unknown>
-  strayCharges: Record<string, unknown>
   description?: string
 }
 export interface DraftWeight { uid: string, block: string, value: string }
@@ -41,8 +38,8 @@ export interface TheoryDraft {
   countingRules: DraftRule[]
   /** True when the file had a countingRules key (kept even when empty). */
   hasRules: boolean
-  /** The heavy-frame block, carried through unchanged (edited as a file, not in the form). */
-  heavy?: unknown
+  /** The heavy-particle block; written to the file only while the frame is "heavy". */
+  heavy?: DraftHeavy
 }
 
 /** A problem found while reading the typed text, at the theory-file path of its input. */
@@ -71,7 +68,6 @@ export function newRule(): DraftRule {
 }
 
 const text = (v: unknown) => (v === undefined || v === null ? '' : String(v))
-const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v)
 const list = (v: unknown): unknown[] => (Array.isArray(v) ? v : [])
 
 /**
@@ -92,7 +88,7 @@ export function theoryToDraft(input: unknown): TheoryDraft {
   return {
     name: text(input.name), description: text(input.description), frame, maxOrder: text(input.maxOrder),
     groups, fields, countingRules: rules, hasRules: Array.isArray(input.countingRules),
-    ...(input.heavy !== undefined ? { heavy: input.heavy } : {}),
+    ...(input.heavy !== undefined ? { heavy: heavyToDraft(input.heavy, byName) } : {}),
   }
 }
 
@@ -103,16 +99,7 @@ function fieldToDraft(f: Record<string, unknown>, byName: Map<string, string>): 
   out.real = f.real === true
   out.flavors = text(f.flavors)
   if (f.gaugeOf !== undefined) out.gaugeOf = byName.get(text(f.gaugeOf)) ?? `?${text(f.gaugeOf)}`
-  for (const [g, labels] of Object.entries(isRecord(f.reps) ? f.reps : {})) {
-    const uid = byName.get(g)
-    if (uid && Array.isArray(labels)) out.reps[uid] = labels.join(',')
-    else out.strayReps[g] = labels
-  }
-  for (const [g, q] of Object.entries(isRecord(f.charges) ? f.charges : {})) {
-    const uid = byName.get(g)
-    if (uid && (typeof q === 'string' || typeof q === 'number')) out.charges[uid] = String(q)
-    else out.strayCharges[g] = q
-  }
+  Object.assign(out, labelsToDraft(f.reps, f.charges, byName))
   if (f.description !== undefined) out.description = text(f.description)
   return out
 }
@@ -151,26 +138,13 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
   })
   theory.fields = d.fields.map((f, i) => fieldToTheory(f, i, d.groups, names, issues))
   if (d.hasRules || d.countingRules.length) theory.countingRules = d.countingRules.map(ruleToTheory)
-  if (d.heavy !== undefined) theory.heavy = d.heavy
+  if (d.heavy !== undefined && d.frame === 'heavy') theory.heavy = heavyToTheory(d.heavy, d.groups, issues)
   return { theory, issues }
 }
 
 function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Map<string, string>, issues: DraftIssue[]) {
   const out: Record<string, unknown> = { name: f.name.trim(), lorentz: f.lorentz }
-  const reps: Record<string, unknown> = { ...f.strayReps }
-  const charges: Record<string, unknown> = { ...f.strayCharges }
-  for (const g of groups) {
-    const rep = (f.reps[g.uid] ?? '').trim()
-    const q = (f.charges[g.uid] ?? '').trim()
-    if (g.type === 'SU' && rep) {
-      const labels = rep.split(/[\s,]+/).filter(Boolean)
-      if (labels.every((a) => /^\d{1,2}$/.test(a))) reps[g.name] = labels.map(Number)
-      else issues.push({ path: ['fields', i, 'reps', g.name], message: `Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "${rep}"` })
-    }
-    if (g.type !== 'SU' && q) charges[g.name] = q
-  }
-  if (Object.keys(reps).length) out.reps = reps
-  if (Object.keys(charges).length) out.charges = charges
+  labelsToTheory(f, groups, out, ['fields', i], issues)
   if (f.lorentz === 'S' && f.real) out.real = true
   const flavors = readInt(f.flavors, ['fields', i, 'flavors'], issues, 'flavors is a whole number from 1 to 6')
   if (flavors !== undefined) out.flavors = flavors
@@ -201,6 +175,11 @@ function readInt(raw: string, path: (string | number)[], issues: DraftIssue[], m
 
 /** Where an issue is shown: its path cut to the depth of one input ("fields.4.charges.Y"). */
 export function issueKey(path: readonly PropertyKey[]): string {
+  if (path[0] === 'heavy') {
+    const depth = path[1] === 'particle' && (path[2] === 'reps' || path[2] === 'charges') ? 4
+      : path[1] === 'particle' || path[1] === 'antiparticle' ? 3 : 2
+    return path.slice(0, depth).map(String).join('.')
+  }
   const depth = path[0] === 'fields' && (path[2] === 'reps' || path[2] === 'charges') ? 4
     : path[0] === 'countingRules' && path[2] === 'weights' ? 4
       : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' ? 3 : 1

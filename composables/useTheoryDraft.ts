@@ -5,6 +5,7 @@ import {
   type TheoryDraft, type DraftGroup, type DraftField, type DraftRule,
   emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newUid,
 } from './theoryDraftModel'
+import { newHeavy } from './theoryDraft/heavyBlock'
 import { apiMessage } from './useValidatedForm'
 
 /** Strip the `fields[3] "e": ` prefix of a schema message when it is shown next to its input. */
@@ -66,6 +67,8 @@ export function useTheoryDraft(initial?: unknown) {
     moveRule: (i: number, delta: number) => move<DraftRule>(draft.value.countingRules, i, delta),
     addWeight: (r: number) => draft.value.countingRules[r]!.weights.push({ uid: newUid('w'), block: '', value: '' }),
     removeWeight: (r: number, w: number) => draft.value.countingRules[r]!.weights.splice(w, 1),
+    addHeavy: () => { draft.value.heavy = newHeavy(draft.value.groups) },
+    removeHeavy: () => { delete draft.value.heavy },
   }
 
   return { draft, checked, dirty, load, markClean, error, ...ops }

@@ -1,6 +1,6 @@
 import { z } from 'zod'
 import { CountingRuleSchema } from './countingRules'
-import { HeavyFrameSchema } from './heavyFrame'
+import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { EngineInputError } from '../../server/engine/errors'
 import { suReality } from '../../server/engine/group/irrep'
 import { suDimension } from '../../server/engine/group/weights'
@@ -69,7 +69,7 @@ export type TheoryField = z.infer<typeof FieldSchema>
 
 type Report = (path: (string | number)[], message: string) => void
 
-function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: unknown }, report: Report): void {
+function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame }, report: Report): void {
   if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'the "heavy" key needs "frame": "heavy"')
   const groups = new Map<string, TheoryGroup>()
   t.groups.forEach((g, i) => {
@@ -95,6 +95,25 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
     if (f.real && f.lorentz !== 'S') bad('real', `only a scalar can be declared real, but lorentz = ${f.lorentz}`)
     if (f.real && f.lorentz === 'S') checkRealScalar(f, groups, bad)
   })
+  if (t.heavy) checkHeavy(t.heavy, groups, names, report)
+}
+
+/** The heavy block names declared groups, couples to a continuous gauge group, and its fields are new names. */
+function checkHeavy(h: HeavyFrame, groups: Map<string, TheoryGroup>, fieldNames: Set<string>, report: Report): void {
+  const g = groups.get(h.gaugeGroup)
+  if (!g) report(['heavy', 'gaugeGroup'], `heavy particle: unknown group ${h.gaugeGroup}`)
+  else if (!g.gauge) report(['heavy', 'gaugeGroup'], `heavy particle: ${h.gaugeGroup} is a global symmetry (gauge false); it needs a gauge group`)
+  else if (g.type === 'Z') report(['heavy', 'gaugeGroup'], `heavy particle: ${h.gaugeGroup} is a discrete group Z${g.n}; it needs a U1 or SU(n) gauge group`)
+  // Reps and charges follow the roster's rules (a Pauli field is a fermion: not a field strength).
+  const particle: TheoryField = { name: h.particle.name, lorentz: 'L', reps: h.particle.reps, charges: h.particle.charges }
+  const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], `heavy particle "${h.particle.name}": ${message}`)
+  checkReps(particle, groups, bad)
+  checkCharges(particle, groups, bad)
+  for (const [key, name] of [['particle', h.particle.name], ['antiparticle', h.antiparticle?.name]] as const) {
+    if (name === undefined) continue
+    if (fieldNames.has(name)) report(['heavy', key, 'name'], `heavy ${key} "${name}": a field of the roster already has this name`)
+    if (name === 'D') report(['heavy', key, 'name'], `heavy ${key}: the name "D" is reserved for the covariant derivative`)
+  }
 }
 
 type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void

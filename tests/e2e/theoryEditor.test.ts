@@ -150,4 +150,43 @@ describe('the theory editor in a real browser', () => {
     expect(await page.locator('#theory-description').inputValue()).toBe('unsaved words')
     expect(problems, 'no script errors or hydration mismatches in the browser').toEqual([])
   })
+
+  it('edits the heavy particle of a heavy-frame theory in the form', async () => {
+    const page = await newPage(browser, inject('baseUrl'))
+    const problems: string[] = []
+    page.on('pageerror', (e) => problems.push(e.message))
+    const slug = await signUpAndFoundGroup(page, 'Heavy Tester')
+    await page.goto(`/groups/${slug}/new-theory`)
+    await hydrated(page)
+    await page.locator('#preset').selectOption('heavy-vexonium')
+    await page.getByRole('button', { name: 'Use preset' }).click()
+    await expect.poll(() => page.getByLabel('Particle field', { exact: true }).inputValue()).toBe('psi')
+    expect(await page.getByLabel('Antiparticle field', { exact: true }).inputValue()).toBe('chi')
+    expect(await page.locator('#heavy-gauge option:checked').innerText()).toBe('Xd')
+    expect(await page.getByLabel('Xd charge', { exact: true }).inputValue()).toBe('1')
+
+    // A name the roster already uses is refused next to the input.
+    await page.getByLabel('Particle field', { exact: true }).fill('Ad')
+    await expect.poll(() => messageNextTo(page, 'Particle field')).toBe('heavy particle "Ad": a field of the roster already has this name')
+    await page.getByLabel('Particle field', { exact: true }).fill('vex')
+    await page.getByLabel('Antiparticle field', { exact: true }).fill('')
+    await page.getByLabel('Highest power of 1/m', { exact: true }).selectOption('2')
+    await page.getByLabel('Xd charge', { exact: true }).fill('2')
+    await screenshot(page, 'theory-editor-heavy')
+    await page.getByRole('button', { name: 'Create theory' }).click()
+    await page.waitForURL(/\/theories\/\d+\/edit$/)
+    const id = Number(/\/theories\/(\d+)\/edit/.exec(page.url())![1])
+    const saved = (await (await page.request.get(`/api/theories/${id}`)).json()).theory.definition
+    expect(saved.heavy).toEqual({ particle: { name: 'vex', charges: { Xd: '2' }, description: 'vexon, two-component Pauli field' }, gaugeGroup: 'Xd', maxOrder: 2 })
+
+    // Removing the block and declaring it again starts from "psi" on the gauge group.
+    await hydrated(page)
+    await page.getByRole('button', { name: 'Remove the heavy particle' }).click()
+    await page.getByRole('button', { name: 'Declare the heavy particle' }).click()
+    await page.getByRole('button', { name: 'Save theory' }).click()
+    await expect.poll(() => byTest(page, 'save-state').innerText()).toBe('Saved as version 2.')
+    const again = (await (await page.request.get(`/api/theories/${id}`)).json()).theory.definition
+    expect(again.heavy).toEqual({ particle: { name: 'psi' }, gaugeGroup: 'Xd', maxOrder: 2 })
+    expect(problems).toEqual([])
+  })
 })

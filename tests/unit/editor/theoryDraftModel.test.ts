@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { theoryToDraft, draftToTheory, issueKey, newField } from '../../../composables/theoryDraftModel'
+import { newHeavy } from '../../../composables/theoryDraft/heavyBlock'
 import { TheorySchema } from '../../../shared/schemas/theory'
 import { PRESETS } from '../../../shared/presets/index'
 import { checkAnomalies } from '../../../server/engine/theory/anomalies'
@@ -83,5 +84,50 @@ describe('what the editor sends to the anomaly check', () => {
       { name: 'Y^3', sum: '-3', ok: false },
       { name: 'gravity^2 Y', sum: '-3', ok: false },
     ])
+  })
+})
+
+describe('the heavy particle in the form', () => {
+  const vexonium = () => theoryToDraft(PRESETS.find((p) => p.id === 'heavy-vexonium')!.theory)
+
+  it('renaming the gauge group keeps the coupling and the charge on it', () => {
+    const d = vexonium()
+    d.groups[0]!.name = 'Dark'
+    const { theory, issues } = draftToTheory(d)
+    expect(issues).toEqual([])
+    expect(theory.heavy).toMatchObject({ gaugeGroup: 'Dark', particle: { name: 'psi', charges: { Dark: '1' } } })
+    expect(TheorySchema.safeParse(theory).success).toBe(true)
+  })
+
+  it('an empty antiparticle leaves it out; a relativistic frame leaves the block out', () => {
+    const d = vexonium()
+    d.heavy!.antiparticle = ' '
+    expect(draftToTheory(d).theory.heavy).not.toHaveProperty('antiparticle')
+    d.frame = 'relativistic'
+    expect(draftToTheory(d).theory).not.toHaveProperty('heavy')
+    d.frame = 'heavy' // switching back restores what was typed
+    expect(draftToTheory(d).theory.heavy).toMatchObject({ particle: { name: 'psi' }, maxOrder: 3 })
+  })
+
+  it('a new block couples "psi" to the first gauge group; typing errors are keyed to their inputs', () => {
+    const d = theoryToDraft({ name: 'h', frame: 'heavy', groups: [{ name: 'G', type: 'U1', gauge: false }, { name: 'C', type: 'SU', n: 3, gauge: true }], fields: [] })
+    d.heavy = newHeavy(d.groups)
+    expect(draftToTheory(d).theory.heavy).toEqual({ particle: { name: 'psi' }, gaugeGroup: 'C', maxOrder: 2 })
+    d.heavy.reps[d.groups[1]!.uid] = '1,x'
+    d.heavy.maxOrder = ''
+    d.heavy.gaugeGroup = ''
+    const { issues } = draftToTheory(d)
+    expect(issues.map((i) => [issueKey(i.path), i.message])).toEqual([
+      ['heavy.particle.reps.C', 'Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "1,x"'],
+      ['heavy.gaugeGroup', 'choose the gauge group the heavy particle couples to'],
+      ['heavy.maxOrder', 'choose the highest power of 1/m (1 to 4)'],
+    ])
+  })
+
+  it('a schema problem of the block is keyed to its input', () => {
+    const d = vexonium()
+    d.heavy!.particle = 'Ad' // the dark photon's name
+    const r = TheorySchema.safeParse(draftToTheory(d).theory)
+    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['heavy.particle.name', 'heavy particle "Ad": a field of the roster already has this name']])
   })
 })

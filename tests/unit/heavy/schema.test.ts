@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { HeavyFrameSchema } from '../../../shared/schemas/heavyFrame'
+import { TheorySchema } from '../../../shared/schemas/theory'
 
 describe('HeavyFrameSchema (common practice: schema validation)', () => {
   it('accepts a particle, optional antiparticle, gauge group and maxOrder', () => {
@@ -16,5 +17,37 @@ describe('HeavyFrameSchema (common practice: schema validation)', () => {
     const bad = HeavyFrameSchema.safeParse({ particle: { name: '1psi' }, gaugeGroup: 'X', maxOrder: 2 })
     expect(bad.success).toBe(false)
     expect(bad.error!.issues[0]!.message).toContain('a name is a letter')
+  })
+})
+
+describe('a theory\'s heavy block against its groups and roster (common practice: schema validation)', () => {
+  const theory = (heavy: Record<string, unknown>) => ({
+    name: 'heavy test', frame: 'heavy',
+    groups: [{ name: 'X', type: 'U1', gauge: true }, { name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'Bno', type: 'U1', gauge: false }, { name: 'P', type: 'Z', n: 2, gauge: true }],
+    fields: [{ name: 'A', lorentz: 'F', gaugeOf: 'X' }],
+    heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2, ...heavy },
+  })
+  const issues = (heavy: Record<string, unknown>) => {
+    const r = TheorySchema.safeParse(theory(heavy))
+    return r.success ? [] : r.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }))
+  }
+
+  it('accepts a heavy particle coupled to a U1 or an SU(n) gauge group', () => {
+    expect(issues({})).toEqual([])
+    expect(issues({ particle: { name: 'psi', reps: { C: [1, 0] } }, gaugeGroup: 'C' })).toEqual([])
+  })
+  it('names the gauge group when it is missing, global or discrete', () => {
+    expect(issues({ gaugeGroup: 'Y' })).toEqual([{ path: 'heavy.gaugeGroup', message: 'heavy particle: unknown group Y' }])
+    expect(issues({ gaugeGroup: 'Bno' })).toEqual([{ path: 'heavy.gaugeGroup', message: 'heavy particle: Bno is a global symmetry (gauge false); it needs a gauge group' }])
+    expect(issues({ gaugeGroup: 'P' })[0]!.message).toBe('heavy particle: P is a discrete group Z2; it needs a U1 or SU(n) gauge group')
+  })
+  it('checks the particle\'s labels and charges like a roster field\'s', () => {
+    expect(issues({ particle: { name: 'psi', charges: { Y: '1' } } })).toEqual([{ path: 'heavy.particle.charges.Y', message: 'heavy particle "psi": unknown group Y' }])
+    expect(issues({ particle: { name: 'psi', reps: { C: [1] } } })[0]).toEqual({ path: 'heavy.particle.reps.C', message: 'heavy particle "psi": C = SU(3) needs 2 Dynkin labels, but got [1]' })
+    expect(issues({ particle: { name: 'psi', charges: { C: '1' } } })[0]!.path).toBe('heavy.particle.charges.C')
+  })
+  it('refuses a Pauli field named like a roster field or like D', () => {
+    expect(issues({ particle: { name: 'A' } })).toEqual([{ path: 'heavy.particle.name', message: 'heavy particle "A": a field of the roster already has this name' }])
+    expect(issues({ antiparticle: { name: 'D' } })).toEqual([{ path: 'heavy.antiparticle.name', message: 'heavy antiparticle: the name "D" is reserved for the covariant derivative' }])
   })
 })
