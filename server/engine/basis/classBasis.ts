@@ -14,7 +14,8 @@ import { theoryParticles, type Particle } from './particles'
 import { classCandidates, type Candidate } from './candidates'
 import { pairRows, samplePoints, type SamplePoint } from './evaluation'
 import { identicalLegPermutations, type LegPermutation } from './symmetry'
-import { formatLorentz, parseOperatorText, type ParsedTerm } from './inputSyntax'
+import { formatLorentz } from './inputSyntax'
+import { writtenTerms } from './writtenOperator'
 import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
@@ -105,13 +106,14 @@ function derivativeScore(c: Candidate, legs: Particle[], preferred: Set<string>)
   return c.lorentz.derivs.reduce((s, d, i) => s + (preferred.has(legs[i]!.label) ? 0 : d), 0)
 }
 
-function buildColumns(cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
+function buildColumns(particles: Particle[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
   const pref = new Set(pr?.derivativesOn ?? [])
   const keptTexts = pr?.keep?.[cls.key] ?? []
   const primes = workingPrimes(2).map((p) => new PrimeField(p))
   const kept: Column[] = keptTexts.map((text) => {
-    const parsed = parseOperatorText(cls, text, gauge.length)
-    return { text, source: 'kept', terms: parsed.map((t) => termOf(t, gauge, primes)) }
+    // A kept text may be a Hermitian or parity combination as an earlier basis wrote it.
+    const terms = writtenTerms(particles, cls, text, gauge)
+    return { text, source: 'kept', terms: terms.map((t) => ({ coeff: primes.map((F) => F.fromRational(t.coeff)), lorentz: t.lorentz, gauge: t.gauge })) }
   })
   const order = cands.map((c, i) => ({ c, i, s: derivativeScore(c, cls.legs, pref) }))
   order.sort((a, b) => a.s - b.s || a.i - b.i)
@@ -151,10 +153,6 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
   })
 }
 
-function termOf(t: ParsedTerm, gauge: SuStructure[][], primes: PrimeField[]): Column['terms'][number] {
-  return { coeff: primes.map((F) => F.fromRational(t.coeff)), lorentz: t.lorentz, gauge: gauge[t.gaugeIndex]! }
-}
-
 /**
  * The basis of one class given by key, e.g. classBasis(smeft, "H^3 H*^3").
  * @example classBasis(realScalar, "phi^6").rank // 1
@@ -167,7 +165,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
   const { candidates, gauge } = classCandidates(theory, cls)
   const perms = identicalLegPermutations(cls.legs)
-  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(cls, candidates, gauge, opts.priorities)
+  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(particles, cls, candidates, gauge, opts.priorities)
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
   const hermCols = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
   const selfParity = opts.priorities?.preferParity !== false && parityImage(particles, cls).image?.key === cls.key

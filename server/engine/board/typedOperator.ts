@@ -5,7 +5,8 @@
  */
 import type { Theory } from '../../../shared/schemas/theory'
 import { classBasis, type Priorities } from '../basis/classBasis'
-import { parseOperatorText } from '../basis/inputSyntax'
+import { writtenTerms } from '../basis/writtenOperator'
+import { theoryParticles } from '../basis/particles'
 import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
 
@@ -18,11 +19,12 @@ import type { Fingerprint } from './fingerprints'
 /** `priorities` must be the run's own: they fix how many sample points the class uses. */
 export function typedFingerprint(theory: Theory, classKey: string, text: string, priorities?: Priorities): Fingerprint {
   const b = classBasis(theory, classKey, { priorities })
-  const terms = parseOperatorText(b.class, text, b.gaugeStructures.length)
+  // Input syntax, or a Hermitian / parity combination as the board writes it.
+  const terms = writtenTerms(theoryParticles(theory), b.class, text, b.gaugeStructures)
   return {
     primes: b.primes.map((pd) => pd.F.p),
     values: b.primes.map((pd) => combinationValues(pd.F, terms.map((t) => ({
-      lorentz: t.lorentz, gauge: b.gaugeStructures[t.gaugeIndex]!, coeff: pd.F.fromRational(t.coeff),
+      lorentz: t.lorentz, gauge: t.gauge, coeff: pd.F.fromRational(t.coeff),
     })), pd.points, b.perms)),
   }
 }

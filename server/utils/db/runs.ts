@@ -35,8 +35,7 @@ export async function reconcileWithQueue(row: Record<string, any>) {
 
 /**
  * The engine's priorities for a run. "Keep what basis N keeps" becomes, per class, the texts of
- * that basis's kept operators (those written as "X ± h.c." have no input-syntax form and are
- * left to the greedy choice).
+ * that basis's kept operators, Hermitian and parity combinations included (writtenOperator.ts).
  */
 export async function runPriorities(theoryId: number, p: { derivativesOn?: string[], preferHermitian?: boolean, keepFromBasis?: number } | undefined) {
   if (!p) return undefined
@@ -44,7 +43,7 @@ export async function runPriorities(theoryId: number, p: { derivativesOn?: strin
   if (!keepFromBasis) return rest
   const basis = await useDb()('bases').where({ id: keepFromBasis, theory_id: theoryId }).first('id')
   if (!basis) fail(404, `priorities.keepFromBasis: no basis ${keepFromBasis} of this theory`)
-  const rows = await useDb()('operators').where({ basis_id: keepFromBasis, column: 'kept' }).whereNot('text', 'like', '%h.c.%').orderBy('position').select('class_key', 'text')
+  const rows = await useDb()('operators').where({ basis_id: keepFromBasis, column: 'kept' }).orderBy('position').select('class_key', 'text')
   const keep: Record<string, string[]> = {}
   for (const r of rows) (keep[r.class_key] ??= []).push(r.text)
   return { ...rest, keep }
