@@ -86,3 +86,41 @@ describe('password reset through the e-mailed one-time token', () => {
     expect((await new ApiClient().post('/api/auth/reset', { token, password: 'another long password' })).status).toBe(400)
   })
 })
+
+describe('throttling of password guessing and reset mails', () => {
+  it('after 10 failed sign-ins an address is refused for 15 minutes, even with the right password', async () => {
+    const { email } = await signedUpClient('guessed')
+    const other = await signedUpClient('bystander')
+    for (let i = 0; i < 10; i++) {
+      expect((await new ApiClient().post('/api/auth/signin', { email, password: `guess number ${i}` })).status).toBe(401)
+    }
+    const refused = await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })
+    expect(refused.status).toBe(429)
+    expect(messageOf(refused)).toBe('Too many failed sign-ins for this address; try again in 15 minutes, or reset the password')
+    // Another address from the same client is not affected.
+    expect((await new ApiClient().post('/api/auth/signin', { email: other.email, password: TEST_PASSWORD })).status).toBe(200)
+    // Once the failures are older than the window, the right password works and clears them.
+    await testDb()('sign_in_failures').where('key', 'like', `${email}|%`).update({ created_at: new Date(Date.now() - 16 * 60_000) })
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    expect(await testDb()('sign_in_failures').where('key', 'like', `${email}|%`).count('id as n').first()).toEqual({ n: '0' })
+  })
+
+  it('a successful sign-in clears the count of failures', async () => {
+    const { email } = await signedUpClient('forgetful2')
+    for (let i = 0; i < 9; i++) await new ApiClient().post('/api/auth/signin', { email, password: `typo ${i}` })
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    for (let i = 0; i < 9; i++) expect((await new ApiClient().post('/api/auth/signin', { email, password: `typo again ${i}` })).status).toBe(401)
+  })
+
+  it('sends at most 3 reset mails per account and hour, with the same answer every time', async () => {
+    const { email } = await signedUpClient('flooded')
+    const answers = new Set<string>()
+    for (let i = 0; i < 5; i++) {
+      const res = await new ApiClient().post('/api/auth/reset-request', { email })
+      expect(res.status).toBe(200)
+      answers.add(res.body.message)
+    }
+    expect([...answers]).toEqual(['If an account exists for that address, a reset link is on its way.'])
+    expect(await testDb()('outbox').where({ to_address: email }).count('id as n').first()).toEqual({ n: '3' })
+  })
+})

@@ -5,14 +5,21 @@ import { findUserByEmail } from '../../utils/db/users'
 import { useDb } from '../../utils/db/connection'
 import { newToken } from '../../utils/tokens'
 import { sendMail, appUrl } from '../../utils/mail'
+import { RESET_MAILS_PER_HOUR } from '../../utils/auth/throttle'
 
 const RESET_MINUTES = 60
 
-// Always the same answer, whether or not the address has an account (no account discovery).
+async function resetMailsLastHour(userId: number): Promise<number> {
+  const [{ count }] = await useDb()('password_resets').where({ user_id: userId }).andWhere('created_at', '>', new Date(Date.now() - 3_600_000)).count<{ count: string }[]>('id as count')
+  return Number(count)
+}
+
+// Always the same answer, whether or not the address has an account (no account discovery)
+// and whether or not this hour's mails for it are used up (no inbox flooding).
 export default defineApiHandler(async (event) => {
   const { email } = await readJson(event, ResetRequestSchema)
   const user = await findUserByEmail(email)
-  if (user) {
+  if (user && await resetMailsLastHour(user.id) < RESET_MAILS_PER_HOUR) {
     const { token, hash } = newToken()
     await useDb()('password_resets').insert({ user_id: user.id, token_hash: hash, expires_at: new Date(Date.now() + RESET_MINUTES * 60_000) })
     await sendMail({
