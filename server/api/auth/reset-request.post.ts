@@ -10,8 +10,8 @@ import { RESET_MAILS_PER_HOUR } from '../../utils/auth/throttle'
 const RESET_MINUTES = 60
 
 async function resetMailsLastHour(userId: number): Promise<number> {
-  const [{ count }] = await useDb()('password_resets').where({ user_id: userId }).andWhere('created_at', '>', new Date(Date.now() - 3_600_000)).count<{ count: string }[]>('id as count')
-  return Number(count)
+  const rows = await useDb()('password_resets').where({ user_id: userId }).andWhere('created_at', '>', new Date(Date.now() - 3_600_000)).count<{ count: string }[]>('id as count')
+  return Number(rows[0]!.count)
 }
 
 // Always the same answer, whether or not the address has an account (no account discovery)
