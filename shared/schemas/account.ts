@@ -25,3 +25,8 @@ export const ResetSchema = z.object({
   token: z.string({ error: 'Reset token is required' }).min(20, { error: 'Reset token is malformed' }).max(100),
   password: PasswordSchema,
 }).strict()
+
+export const ChangePasswordSchema = z.object({
+  current: z.string({ error: 'The current password is required' }).min(1, { error: 'The current password is required' }).max(200),
+  password: PasswordSchema,
+}).strict()

@@ -73,3 +73,40 @@ describe('session cookies', () => {
     for (const path of reads()) expect((await fresh.get(path)).status, path).toBe(200)
   })
 })
+
+describe('changing the password and ending other sessions, while signed in', () => {
+  it('a password change keeps this browser signed in and ends every other session', async () => {
+    const here = await signedUpClient('changer')
+    const elsewhere = new ApiClient()
+    expect((await elsewhere.post('/api/auth/signin', { email: here.email, password: TEST_PASSWORD })).status).toBe(200)
+    const wrong = await here.client.post('/api/auth/password', { current: 'not my password', password: 'a new long password' })
+    expect(wrong.status).toBe(401)
+    expect(messageOf(wrong)).toBe('The current password is wrong')
+    expect((await elsewhere.get('/api/auth/me')).status).toBe(200) // nothing changed
+
+    const done = await here.client.post('/api/auth/password', { current: TEST_PASSWORD, password: 'a new long password' })
+    expect(done.status, JSON.stringify(done.body)).toBe(200)
+    expect((await here.client.get('/api/auth/me')).status).toBe(200)
+    const out = await elsewhere.get('/api/auth/me')
+    expect(out.status).toBe(401)
+    expect(messageOf(out)).toBe('The password was changed since you signed in; sign in again')
+    expect((await new ApiClient().post('/api/auth/signin', { email: here.email, password: TEST_PASSWORD })).status).toBe(401)
+    expect((await new ApiClient().post('/api/auth/signin', { email: here.email, password: 'a new long password' })).status).toBe(200)
+  })
+
+  it('a wrong current password counts as a failed sign-in (no guessing through this form)', async () => {
+    const { client, email } = await signedUpClient('guesser')
+    for (let i = 0; i < 10; i++) expect((await client.post('/api/auth/password', { current: `guess ${i}`, password: 'a new long password' })).status).toBe(401)
+    expect((await client.post('/api/auth/password', { current: TEST_PASSWORD, password: 'a new long password' })).status).toBe(429)
+    expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(429)
+  })
+
+  it('ending the other sessions keeps this one', async () => {
+    const here = await signedUpClient('careful')
+    const laptop = new ApiClient()
+    await laptop.post('/api/auth/signin', { email: here.email, password: TEST_PASSWORD })
+    expect((await here.client.post('/api/auth/end-other-sessions')).status).toBe(200)
+    expect((await here.client.get('/api/auth/me')).status).toBe(200)
+    expect((await laptop.get('/api/auth/me')).status).toBe(401)
+  })
+})

@@ -1,7 +1,7 @@
 import type { GroupRole } from '../../shared/types/roles'
 import { createHash, randomBytes } from 'node:crypto'
 import { addMember, addBasis, SMALL_THEORY, type World, type Actor } from './fixtures'
-import { signedUpClient } from './client'
+import { signedUpClient, TEST_PASSWORD } from './client'
 import { IMPORT_MAX_BYTES } from '../../shared/schemas/importChoice'
 import { testDb } from './db'
 
@@ -44,6 +44,9 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   'POST /api/auth/signin': { access: { kind: 'public', why: 'signing in' }, prepare: async () => ({ path: '/api/auth/signin', body: { email: 'nobody@example.test', password: 'x' } }), body: 'required' },
   'POST /api/auth/signout': { access: { kind: 'public', why: 'clears only the caller\'s own cookie' }, prepare: async () => ({ path: '/api/auth/signout' }) },
   'POST /api/auth/reset-request': { access: { kind: 'public', why: 'forgotten passwords' }, prepare: async () => ({ path: '/api/auth/reset-request', body: { email: 'nobody@example.test' } }), body: 'required' },
+  // The password stays the same, so the actor signs in as before; the caller keeps a fresh cookie.
+  'POST /api/auth/password': { access: { kind: 'signedIn' }, prepare: async () => ({ path: '/api/auth/password', body: { current: TEST_PASSWORD, password: TEST_PASSWORD } }), body: 'required' },
+  'POST /api/auth/end-other-sessions': { access: { kind: 'signedIn' }, prepare: async () => ({ path: '/api/auth/end-other-sessions' }) },
   'POST /api/auth/reset': { access: { kind: 'public', why: 'guarded by the e-mailed token' }, prepare: async () => ({ path: '/api/auth/reset', body: { token: 'x'.repeat(43), password: 'long enough password' } }), body: 'required' },
   'POST /api/groups': { access: { kind: 'signedIn' }, prepare: async () => ({ path: '/api/groups', body: { slug: `g-${fresh()}`, name: 'A group' } }), body: 'required' },
   'POST /api/groups/[slug]/members': {
