@@ -25,7 +25,7 @@ async function toUser(event: H3Event, session: SessionFacts, row: Record<string,
   }
   if (row.sessions_valid_from && session.signedInAt < new Date(row.sessions_valid_from).getTime()) {
     await endSession(event)
-    fail(401, 'The password was changed since you signed in; sign in again')
+    fail(401, 'This session has ended (the password was changed, or all other sessions were signed out); sign in again')
   }
   return { id: session.userId, email: row.email, displayName: row.display_name, siteRole: row.site_role }
 }
