@@ -111,6 +111,7 @@ export default async function bench() {
     return {
       'GET basis board data (SMEFT dim 6, 50 clients)': await latency(`${base}/api/bases/${basisId}`, { cookie, ...BROWSER }),
       'GET theory (50 clients)': await latency(`${base}/api/theories/${theoryId}`, { cookie, ...BROWSER }),
+      'GET group with members and theories (50 clients)': await latency(`${base}/api/groups/bench-group`, { cookie, ...BROWSER }),
       // A client that takes no compression gets the ~70 KB plain JSON (not a target; for scale).
       'GET basis board data uncompressed (50 clients)': await latency(`${base}/api/bases/${basisId}`, { cookie }),
       // Measured after the load above has drained (a quiet server, as a user meets it).

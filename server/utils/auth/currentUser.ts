@@ -1,4 +1,5 @@
 import type { H3Event } from 'h3'
+import type { Knex } from 'knex'
 import { useDb } from '../db/connection'
 import { fail } from '../http/apiHandler'
 import { sessionFacts, endSession, type SessionFacts } from './sessions'
@@ -55,23 +56,36 @@ export async function requireGroupRole(event: H3Event, groupId: number, needed: 
 }
 
 /**
- * A basis or theory row together with the caller's role in the group that owns it, read in
- * one query (the hot read paths: the board and the theory page). Returns null when the row
- * or the account is missing; the caller then falls back to the two-step checks, which tell a
- * missing row (404) from a missing account (401).
+ * Join the caller (account and membership of the group in `groupColumn`) onto a hot-path
+ * query, as the u_* columns that requireRoleWith reads.
  */
-export async function requireRoleOn(event: H3Event, kind: 'bases' | 'theories', id: number, needed: GroupRole) {
-  const session = await sessionFacts(event)
+export function withCaller(q: Knex.QueryBuilder, userId: number, groupColumn: string): Knex.QueryBuilder {
   const db = useDb()
-  const q = kind === 'bases'
-    // The board needs only the version (its cache key); classes/coverage are large JSON.
-    ? db('bases as x').join('theories as t', 't.id', 'x.theory_id').select('x.id', 'x.version', 't.group_id')
-    : db('theories as x').select('x.*')
-  const row = await q.crossJoin(db.raw('users as u'))
-    .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOn('m.group_id', kind === 'bases' ? 't.group_id' : 'x.group_id'))
-    .where('x.id', id).andWhere('u.id', session.userId)
-    .first('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'u.sessions_valid_from as u_valid_from', 'm.role as u_role')
+  return q.crossJoin(db.raw('users as u'))
+    .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOn('m.group_id', groupColumn))
+    .andWhere('u.id', userId)
+    .select('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'u.sessions_valid_from as u_valid_from', 'm.role as u_role')
+}
+
+/**
+ * A row read together with the caller's account and role in one query (the hot read paths:
+ * board, theory and group pages); `query(userId)` is built with withCaller. Returns null when
+ * the row or the account is missing; the caller then falls back to the two-step checks, which
+ * tell a missing row (404) from a missing account (401).
+ */
+export async function requireRoleWith(event: H3Event, needed: GroupRole, query: (userId: number) => Knex.QueryBuilder) {
+  const session = await sessionFacts(event)
+  const row = await query(session.userId).first()
   if (!row) return null
   const user = await toUser(event, session, { email: row.u_email, display_name: row.u_name, site_role: row.u_site_role, sessions_valid_from: row.u_valid_from })
   return { row, user, role: checkRole((row.u_role ?? null) as GroupRole | null, needed) }
+}
+
+/** A basis or theory row with the caller's role in the group that owns it (see requireRoleWith). */
+export function requireRoleOn(event: H3Event, kind: 'bases' | 'theories', id: number, needed: GroupRole) {
+  const db = useDb()
+  return requireRoleWith(event, needed, (userId) => kind === 'bases'
+    // The board needs only the version (its cache key); classes/coverage are large JSON.
+    ? withCaller(db('bases as x').join('theories as t', 't.id', 'x.theory_id').select('x.id', 'x.version', 't.group_id').where('x.id', id), userId, 't.group_id')
+    : withCaller(db('theories as x').select('x.*').where('x.id', id), userId, 'x.group_id'))
 }

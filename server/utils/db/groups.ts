@@ -43,3 +43,19 @@ export async function assertOwnerRemains(trx: Knex.Transaction, groupId: number,
   const owners = await trx('memberships').where({ group_id: groupId, role: 'owner' }).forUpdate().select('user_id')
   if (owners.length === 1 && owners[0].user_id === userId) fail(409, 'A group needs at least one owner; make someone else owner first')
 }
+
+/**
+ * The group page in one query (a hot read): the group with its members and theories as JSON,
+ * in the order and shape of membersOf and theoriesOfGroup. Join the caller with withCaller.
+ */
+export function groupPageQuery(slug: string) {
+  const db = useDb()
+  return db('groups as g').where('g.slug', String(slug).toLowerCase()).select(
+    'g.id', 'g.slug', 'g.name', 'g.description',
+    db.raw(`(select coalesce(json_agg(json_build_object('id', mu.id, 'email', mu.email, 'displayName', mu.display_name, 'role', mm.role) order by mu.display_name), '[]'::json)
+      from memberships mm join users mu on mu.id = mm.user_id where mm.group_id = g.id) as members`),
+    db.raw(`(select coalesce(json_agg(json_build_object('id', t.id, 'name', t.name, 'version', t.version, 'parentId', t.parent_id,
+        'updatedAt', to_char(t.updated_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) order by t.name), '[]'::json)
+      from theories t where t.group_id = g.id) as theories`),
+  )
+}
