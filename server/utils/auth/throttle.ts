@@ -30,7 +30,9 @@ export async function refuseThrottledSignIn(event: H3Event, email: string) {
 export async function recordFailedSignIn(event: H3Event, email: string) {
   const key = signInKey(event, email)
   await useDb()('sign_in_failures').insert({ key })
-  await useDb()('sign_in_failures').where({ key }).andWhere('created_at', '<', windowStart()).delete() // expired ones
+  // Expired failures of every key go too: the table never holds more than one window's worth,
+  // even when someone tries many addresses.
+  await useDb()('sign_in_failures').where('created_at', '<', windowStart()).delete()
 }
 
 export async function clearFailedSignIns(event: H3Event, email: string) {
