@@ -3,7 +3,7 @@
 // half-typed value is never lost, and converts to the theory file that TheorySchema validates.
 // Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
 import type { Theory } from '../shared/schemas/theory'
-import { type DraftLabels, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
+import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
 import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
 
 export type { DraftHeavy }
@@ -67,7 +67,6 @@ export function newRule(): DraftRule {
   return { uid: newUid('r'), name: '', kind: 'massRatio', weights: [], offset: '' }
 }
 
-const text = (v: unknown) => (v === undefined || v === null ? '' : String(v))
 const list = (v: unknown): unknown[] => (Array.isArray(v) ? v : [])
 
 /**

@@ -1,7 +1,7 @@
 // The heavy-particle block of a theory file ("frame": "heavy") as editor text, and back.
 // (Outside composables/' top level, so Nuxt does not auto-import it.)
 import type { DraftGroup, DraftIssue } from '../theoryDraftModel'
-import { type DraftLabels, emptyLabels, isRecord, labelsToDraft, labelsToTheory } from './labels'
+import { type DraftLabels, asText, emptyLabels, isRecord, labelsToDraft, labelsToTheory } from './labels'
 
 export interface DraftHeavy extends DraftLabels {
   particle: string
@@ -13,8 +13,6 @@ export interface DraftHeavy extends DraftLabels {
   maxOrder: string
   description?: string
 }
-
-const asText = (v: unknown) => (v === undefined || v === null ? '' : String(v))
 
 /** A fresh heavy block: "psi" coupled to the first gauge group, to second order in 1/m. */
 export function newHeavy(groups: DraftGroup[]): DraftHeavy {

@@ -13,6 +13,8 @@ export interface DraftLabels {
 }
 
 export const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v)
+/** A typed value as form text (missing → empty). */
+export const asText = (v: unknown) => (v === undefined || v === null ? '' : String(v))
 
 export function emptyLabels(): DraftLabels {
   return { reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
