@@ -1,16 +1,14 @@
 /**
  * Coverage and rewrites on the basis board from operator fingerprints: each operator's
  * symmetrised contact amplitude evaluated at the class's fixed random on-shell sample points,
- * over two primes. With the points fixed per class, linear relations between operators —
- * modulo equations of motion and integration by parts — are linear relations between their
- * fingerprints, so coverage is a rank and a rewrite is a linear solve, exact mod each prime,
- * lifted to rationals by reconstruction and accepted only when both primes agree.
+ * over the working primes. With the points fixed per class, linear relations between
+ * operators — modulo equations of motion and integration by parts — are linear relations
+ * between their fingerprints, so coverage is a rank and a rewrite is a linear solve, exact mod
+ * each prime, lifted to rationals from all primes together (finite/solveOverQ.ts).
  */
-import { EngineConsistencyError, EngineInputError } from '../errors'
-import { PrimeField } from '../finite/primeField'
-import { rref } from '../finite/matrix'
-import { reconstructRational, crt } from '../finite/rationalReconstruction'
-import { equals, toString as ratString, type Rational } from '../exact/rational'
+import { EngineInputError } from '../errors'
+import { PrimeSet } from '../finite/primeSet'
+import type { Rational } from '../exact/rational'
 
 export interface Fingerprint {
   /** The primes, in the same order for every operator of a class. */
@@ -22,28 +20,26 @@ export interface Fingerprint {
 function checkAligned(fn: string, prints: Fingerprint[]) {
   const ref = prints[0]
   for (const fp of prints) {
-    if (!ref || fp.primes.join() !== ref.primes.join() || fp.values.some((row, i) => row.length !== ref.values[i]!.length)) {
+    if (!ref || fp.primes.join() !== ref.primes.join() || fp.values.length !== fp.primes.length || fp.values.some((row, i) => row.length !== ref.values[i]!.length)) {
       throw new EngineInputError(fn, 'fingerprints of one class must share primes and sample points')
     }
   }
 }
 
-/** Matrix with sample points as rows and the given operators as columns, for prime index i. */
-function columns(prints: Fingerprint[], i: number): number[][] {
-  const n = prints[0]!.values[i]!.length
-  return Array.from({ length: n }, (_, k) => prints.map((fp) => fp.values[i]![k]!))
+/** Matrix with the sample points as rows and the given operators as columns, for prime index i. */
+function columns(prints: Fingerprint[], i: number, points: number): number[][] {
+  return Array.from({ length: points }, (_, k) => prints.map((fp) => fp.values[i]![k]!))
 }
 
 /**
- * Rank of a set of operators (the board's coverage numerator), checked on both primes.
+ * Rank of a set of operators (the board's coverage numerator); the primes must agree.
  * @example coverageRank([a, b, a+b]) // 2
  */
 export function coverageRank(prints: Fingerprint[]): number {
   if (!prints.length) return 0
   checkAligned('coverageRank', prints)
-  const ranks = prints[0]!.primes.map((p, i) => rref(new PrimeField(p), columns(prints, i)).rank)
-  if (new Set(ranks).size !== 1) throw new EngineConsistencyError('coverageRank', `the primes disagree on the rank (${ranks.join(' vs ')})`)
-  return ranks[0]!
+  const set = new PrimeSet(prints[0]!.primes)
+  return set.rank(prints[0]!.values.map((row, i) => columns(prints, i, row.length)), { fn: 'coverageRank' })
 }
 
 export interface Combination {
@@ -53,36 +49,22 @@ export interface Combination {
 
 /**
  * Write `target` as an exact rational combination of `basis` operators, or return null when
- * it is not in their span (it is independent of them). Both primes must give the same rationals.
+ * it is not in their span (it is independent of them). The coefficients are lifted from all
+ * primes together and checked against each; a coefficient beyond their reach (see
+ * finite/rationalLift.ts) is refused with EngineInputError rather than guessed.
  * @example expressIn([a, b], 2a − b/3) // { coefficients: [2, −1/3] }
  */
 export function expressIn(basis: Fingerprint[], target: Fingerprint): Combination | null {
   checkAligned('expressIn', [...basis, target])
-  const perPrime: bigint[][] = []
-  for (const [i, p] of target.primes.entries()) {
-    const F = new PrimeField(p)
-    const m = columns([...basis, target], i)
-    const e = rref(F, m)
-    if (e.pivots.includes(basis.length)) {
-      if (i > 0 && perPrime.length) throw new EngineConsistencyError('expressIn', 'the primes disagree on whether the operator is redundant')
-      return null
-    }
-    const x = new Array<bigint>(basis.length).fill(0n)
-    e.pivots.forEach((col, row) => { x[col] = BigInt(e.rows[row]![basis.length]!) })
-    perPrime.push(x)
-  }
-  return { coefficients: liftToRationals(target.primes, perPrime) }
+  const set = new PrimeSet(target.primes)
+  const systems = target.values.map((b, i) => ({ a: columns(basis, i, b.length), b }))
+  const out = set.solve(systems, { fn: 'expressIn' })
+  if (out.status === 'outside-span') return null
+  if (out.status === 'not-liftable') throw tooLarge(set, out.index)
+  return { coefficients: out.coefficients }
 }
 
-function liftToRationals(primes: number[], perPrime: bigint[][]): Rational[] {
-  return perPrime[0]!.map((_, j) => {
-    const single = primes.map((p, i) => reconstructRational(perPrime[i]![j]!, BigInt(p)))
-    if (single.every((q) => equals(q, single[0]!))) return single[0]!
-    const { residue, modulus } = crt(perPrime.map((x) => x[j]!), primes.map(BigInt))
-    try {
-      return reconstructRational(residue, modulus)
-    } catch {
-      throw new EngineConsistencyError('expressIn', `no rational agrees with both primes for coefficient ${j} (${single.map(ratString).join(' vs ')})`)
-    }
-  })
+function tooLarge(set: PrimeSet, index: number): EngineInputError {
+  const { each, product } = set.reach
+  return new EngineInputError('expressIn', `the coefficient of kept operator ${index + 1} is not a rational with numerator and denominator up to ${each} and product up to ${product}, the most that the stored fingerprints (${set.size} primes) determine; such a rewrite cannot be given exactly`)
 }

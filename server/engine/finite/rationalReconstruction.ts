@@ -5,12 +5,15 @@
 import { EngineInputError } from '../errors'
 import { rat, type Rational } from '../exact/rational'
 
+/** ⌊√n⌋ by Newton's iteration on bigints (exact for any size, so any number of primes). */
 function isqrt(n: bigint): bigint {
   if (n < 2n) return n
-  let x = BigInt(Math.floor(Math.sqrt(Number(n))))
-  while (x * x > n) x--
-  while ((x + 1n) * (x + 1n) <= n) x++
-  return x
+  let x = 1n << BigInt(Math.ceil(n.toString(2).length / 2))
+  for (;;) {
+    const y = (x + n / x) >> 1n
+    if (y >= x) return x
+    x = y
+  }
 }
 
 /**
@@ -22,7 +25,23 @@ function isqrt(n: bigint): bigint {
  * Computer Algebra, §5.10.
  */
 export function reconstructRational(a: bigint, m: bigint): Rational {
-  const bound = isqrt(m / 2n)
+  const q = reconstructRationalOrNull(a, m)
+  if (!q) throw new EngineInputError('reconstructRational', `no rational with bound ${wangBound(m)} has image ${a} mod ${m}`)
+  return q
+}
+
+/** The bound ⌊√(m/2)⌋ on |n| and d in Wang's reconstruction. @example wangBound(101n) // 7n */
+export function wangBound(m: bigint): bigint {
+  return isqrt(m / 2n)
+}
+
+/**
+ * As reconstructRational, but null when no fraction within the bound has image a mod m.
+ * @example reconstructRationalOrNull(3n, 7n) // null
+ * Method/reference: as reconstructRational.
+ */
+export function reconstructRationalOrNull(a: bigint, m: bigint): Rational | null {
+  const bound = wangBound(m)
   let [r0, r1] = [m, ((a % m) + m) % m]
   let [t0, t1] = [0n, 1n]
   while (r1 > bound) {
@@ -30,9 +49,7 @@ export function reconstructRational(a: bigint, m: bigint): Rational {
     ;[r0, r1] = [r1, r0 - q * r1]
     ;[t0, t1] = [t1, t0 - q * t1]
   }
-  if (t1 === 0n || (t1 < 0n ? -t1 : t1) > bound) {
-    throw new EngineInputError('reconstructRational', `no rational with bound ${bound} has image ${a} mod ${m}`)
-  }
+  if (t1 === 0n || (t1 < 0n ? -t1 : t1) > bound) return null
   return rat(r1, t1)
 }
 
