@@ -1,13 +1,12 @@
 /**
  * The independent operators of one class: candidates evaluated as symmetrised contact
- * amplitudes at random on-shell points over two primes, exact elimination for the rank,
+ * amplitudes at random on-shell points over the working primes, exact elimination for the rank,
  * greedy choice of kept operators under the user's priorities. Results hold modulo
  * equations of motion and integration by parts; terms proportional to the equations of
  * motion move into other classes.
  */
-import { EngineConsistencyError } from '../errors'
-import { PrimeField, workingPrimes } from '../finite/primeField'
-import { rref } from '../finite/matrix'
+import type { PrimeField } from '../finite/primeField'
+import { PrimeSet } from '../finite/primeSet'
 import type { Theory } from '../../../shared/schemas/theory'
 import { parseClassKey, conjugateClass, type OperatorClass } from './classKey'
 import { theoryParticles, type Particle } from './particles'
@@ -109,11 +108,11 @@ function derivativeScore(c: Candidate, legs: Particle[], preferred: Set<string>)
 function buildColumns(particles: Particle[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
   const pref = new Set(pr?.derivativesOn ?? [])
   const keptTexts = pr?.keep?.[cls.key] ?? []
-  const primes = workingPrimes(2).map((p) => new PrimeField(p))
+  const primes = PrimeSet.working()
   const kept: Column[] = keptTexts.map((text) => {
     // A kept text may be a Hermitian or parity combination as an earlier basis wrote it.
     const terms = writtenTerms(particles, cls, text, gauge)
-    return { text, source: 'kept', terms: terms.map((t) => ({ coeff: primes.map((F) => F.fromRational(t.coeff)), lorentz: t.lorentz, gauge: t.gauge })) }
+    return { text, source: 'kept', terms: terms.map((t) => ({ coeff: primes.image(t.coeff), lorentz: t.lorentz, gauge: t.gauge })) }
   })
   const order = cands.map((c, i) => ({ c, i, s: derivativeScore(c, cls.legs, pref) }))
   order.sort((a, b) => a.s - b.s || a.i - b.i)
@@ -121,7 +120,7 @@ function buildColumns(particles: Particle[], cls: OperatorClass, cands: Candidat
   const cols: Column[] = order.map(({ c, i }) => ({
     text: formatLorentz(c.lorentz, nG > 1 ? i % nG : null),
     source: 'candidate' as const,
-    terms: [{ coeff: [1, 1], lorentz: c.lorentz, gauge: c.gauge }],
+    terms: [{ coeff: primes.image(1), lorentz: c.lorentz, gauge: c.gauge }],
     candidate: c,
   }))
   return [...kept, ...cols]
@@ -148,7 +147,7 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
     const bar = { lorentz: share(cacheL, conjugateLorentz(t.lorentz, pi)), gauge: share(cacheG, t.gauge.map((s) => conjugateSu(s, pi))) }
     return ([1, -1] as const).map((sg) => ({
       text: `(${c.text}) ${sg === 1 ? '+' : '-'} h.c.`, source: 'hermitian' as const, candidate: c.candidate, conjSign: sg,
-      terms: [t, { ...bar, coeff: sg === 1 ? [1, 1] : workingPrimes(2).map((p) => p - 1) }],
+      terms: [t, { ...bar, coeff: PrimeSet.working().image(sg) }],
     }))
   })
 }
@@ -158,7 +157,7 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
  * @example classBasis(realScalar, "phi^6").rank // 1
  * Method: amplitude–operator correspondence with numerical rank over F_p (Shadmi & Weiss,
  * JHEP 02 (2019) 165; Durieux, Kitahara, Shadmi & Weiss, JHEP 10 (2020) 175);
- * two primes must agree (else EngineConsistencyError).
+ * the working primes must agree on the pivots (else EngineConsistencyError; finite/agreement.ts).
  */
 export function classBasis(theory: Theory, classKey: string | OperatorClass, opts: ClassOptions = {}): ClassBasis {
   const particles = theoryParticles(theory)
@@ -172,30 +171,28 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const columns = selfParity ? parityColumns(hermCols, parityLegMap(particles, cls), gauge.length <= 1) : hermCols
   // The Hermitian columns span the same space as `base`, so base.length rows bound the rank.
   const nRows = base.length + (opts.margin ?? 12 + Math.ceil(base.length / 4))
-  const results = workingPrimes(2).map((p, pi) => {
-    const F = new PrimeField(p)
+  const set = PrimeSet.working()
+  const samples = set.fields.map((F, pi) => {
     const points = samplePoints(F, theory, cls, nRows, hashSeed(`${cls.key}#${pi}`))
-    const matrix = columnMatrix(F, pi, columns, points, perms, opts.signal)
-    const e = rref(F, matrix, opts.signal)
-    const keptRows = matrix.map((row) => e.pivots.map((c) => row[c]!))
-    const zero = columns.map((_, j) => matrix.every((row) => row[j] === 0))
-    return { F, points, pivots: e.pivots, keptRows, zero, matrix }
+    return { F, points, matrix: columnMatrix(F, pi, columns, points, perms, opts.signal) }
   })
-  const [a, b] = results as [typeof results[0], typeof results[0]]
-  if (a.pivots.join(',') !== b.pivots.join(',')) {
-    throw new EngineConsistencyError('classBasis', `class ${cls.key}: ranks/pivots differ between primes ${a.F.p} (${a.pivots.length}) and ${b.F.p} (${b.pivots.length})`)
-  }
+  const ctx = { fn: 'classBasis', about: `class ${cls.key}` }
+  const { pivots } = set.echelon(samples.map((s) => s.matrix), ctx, opts.signal)
+  const zeros = samples.map(({ matrix }) => columns.map((_, j) => matrix.every((row) => row[j] === 0)))
+  set.agree(zeros.map((z) => z.map(Number).join('')), ctx, 'vanishing columns')
+  const results = samples.map((s) => ({ ...s, keptRows: s.matrix.map((row) => pivots.map((c) => row[c]!)) }))
+  const zero = zeros[0]!
   const conj = conjugateClass(particles, cls)
-  const reduced = a.pivots.map((c) => (columns[c]!.paritySign ? reduceParityColumn(columns, c, a.zero) : markSelfHermitian(columns, c, a.zero)))
+  const reduced = pivots.map((c) => (columns[c]!.paritySign ? reduceParityColumn(columns, c, zero) : markSelfHermitian(columns, c, zero)))
   const kept = reduced.map((r) => r.column)
   const primes = results.map(({ F, points, keptRows }) => ({ F, points, keptRows: scaleRows(F, keptRows, reduced.map((r) => r.halvings)) }))
   const self = conj.key === cls.key
   return {
     key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: self,
-    dimension: cls.dim2 / 2, candidates: candidates.length, rank: a.pivots.length,
+    dimension: cls.dim2 / 2, candidates: candidates.length, rank: pivots.length,
     kept, gaugeStructures: gauge, perms, primes,
-    alternatives: alternativesOf(columns, results, a.pivots, a.zero),
-    parity: classParity(particles, { cls, selfConjugate: self, rank: a.pivots.length, kept, primes, perms }),
+    alternatives: alternativesOf(columns, results, pivots, zero),
+    parity: classParity(particles, { cls, selfConjugate: self, rank: pivots.length, kept, primes, perms }),
     note: BASIS_NOTE,
   }
 }

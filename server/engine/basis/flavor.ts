@@ -7,8 +7,7 @@
  * Young symmetry λ; it has dim_{GL(N_f)}(λ) independent flavor components.
  */
 import { EngineConsistencyError } from '../errors'
-import { PrimeField, workingPrimes } from '../finite/primeField'
-import { rref } from '../finite/matrix'
+import { PrimeSet } from '../finite/primeSet'
 import { partitionsOf } from '../group/symmetricGroup'
 import type { Theory } from '../../../shared/schemas/theory'
 import type { ClassBasis } from './classBasis'
@@ -70,8 +69,8 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
   const n = b.class.legs.length
   const { lorentz, gauge, candidates } = classCandidates(t, b.class)
   const nG = gauge.length
-  const primes = workingPrimes(2).map((p) => new PrimeField(p))
-  const points = primes.map((F, pi) => samplePoints(F, t, b.class, candidates.length + 12 + Math.ceil(candidates.length / 4), 7919 + pi))
+  const set = PrimeSet.working()
+  const points = set.fields.map((F, pi) => samplePoints(F, t, b.class, candidates.length + 12 + Math.ceil(candidates.length / 4), 7919 + pi))
   const shapes = product(blocks.map((bl) => partitionsOf(bl.legs.length)))
   const decomposition: FlavorSummary['decomposition'] = []
   const operators: FlavorOperator[] = []
@@ -79,14 +78,14 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
   for (const young of shapes) {
     const ys = young.map((lam, i) => youngSymmetrizer(lam, blocks[i]!.legs, n, blocks[i]!.fermion))
     const terms: LegPermutation[] = ys.reduce((acc, y) => composeBlocks(acc, y), [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }])
-    const piv = primes.map((F, pi) => rref(F, amplitudeRows(F, lorentz, gauge, points[pi]!, terms, signal), signal).pivots)
-    if (piv[0]!.join() !== piv[1]!.join()) throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}, Young ${JSON.stringify(young)}: primes disagree (${piv[0]!.length} vs ${piv[1]!.length})`)
-    const mult = piv[0]!.length
+    const rows = set.fields.map((F, pi) => amplitudeRows(F, lorentz, gauge, points[pi]!, terms, signal))
+    const { pivots } = set.echelon(rows, { fn: 'flavorDecomposition', about: `class ${b.key}, Young ${JSON.stringify(young)}` }, signal)
+    const mult = pivots.length
     dimV += mult * young.reduce((s, lam) => s * standardTableaux(lam), 1)
     const each = young.reduce((s, lam, i) => s * glDimension(lam, blocks[i]!.flavors), 1)
     if (mult === 0 || each === 0) continue
     decomposition.push({ young, multiplicity: mult, componentsEach: each })
-    for (const c of piv[0]!) {
+    for (const c of pivots) {
       const cand = candidates[c]!
       operators.push({
         text: formatLorentz(cand.lorentz, nG > 1 ? c % nG : null),
@@ -96,9 +95,10 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
       })
     }
   }
-  const full = primes.map((F, pi) => rref(F, amplitudeRows(F, lorentz, gauge, points[pi]!, [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }], signal), signal).rank)
-  if (full[0] !== dimV || full[1] !== dimV) {
-    throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}: Σ m_λ f^λ = ${dimV} differs from the unsymmetrised rank ${full.join('/')}`)
+  const identity = [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }]
+  const full = set.rank(set.fields.map((F, pi) => amplitudeRows(F, lorentz, gauge, points[pi]!, identity, signal)), { fn: 'flavorDecomposition', about: `class ${b.key}` }, signal)
+  if (full !== dimV) {
+    throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}: Σ m_λ f^λ = ${dimV} differs from the unsymmetrised rank ${full}`)
   }
   const count = decomposition.reduce((s, d) => s + d.multiplicity * d.componentsEach, 0)
   const ok = count === hilbert

@@ -27,6 +27,7 @@
 import { EngineConsistencyError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import { solve } from '../finite/matrix'
+import { agreedValue } from '../finite/agreement'
 import type { Particle } from './particles'
 import { conjugateClass, type OperatorClass } from './classKey'
 import type { LorentzStructure } from './lorentzStructures'
@@ -138,14 +139,14 @@ export function classParity(particles: Particle[], b: ParityInput): ClassParity 
     }
   }))
   const traces = mats.map((cols, k) => involutionTrace(b.primes[k]!.F, cols, b.cls.key))
-  if (traces[0] !== traces[1]) throw new EngineConsistencyError('classParity', `class ${b.cls.key}: parity traces differ between primes (${traces.join(', ')})`)
+  const trace = agreedValue(b.primes.map((pd) => pd.F), traces, { fn: 'classParity', about: `class ${b.cls.key}` }, 'parity trace')
   const f = b.selfConjugate ? 1 : 2
   const operators = mats[0]!.map((col, i): ParityValue => {
     const F = b.primes[0]!.F
     if (col.some((x, j) => j !== i && x !== 0)) return null
     return col[i] === 1 ? 'even' : col[i] === F.neg(1) ? 'odd' : null
   })
-  return { imageKey: image.key, kind: 'self', operators, pEven: (f * (n + traces[0]!)) / 2, pOdd: (f * (n - traces[0]!)) / 2 }
+  return { imageKey: image.key, kind: 'self', operators, pEven: (f * (n + trace)) / 2, pOdd: (f * (n - trace)) / 2 }
 }
 
 /** Trace of M (columns = images of kept operators) as an integer, after checking M² = 1. */

@@ -6,7 +6,7 @@
  * combination stays Hermitian. Image terms follow parity.ts (signed brackets).
  */
 import type { PrimeField } from '../finite/primeField'
-import { workingPrimes } from '../finite/primeField'
+import { PrimeSet } from '../finite/primeSet'
 import type { Column } from './classBasis'
 import { parityLorentz, paritySu } from './parity'
 import { formatLorentz } from './inputSyntax'
@@ -21,7 +21,7 @@ import { formatLorentz } from './inputSyntax'
  * Method: projection onto the ±1 eigenspaces of the involution P (common practice).
  */
 export function parityColumns(cols: Column[], pi: number[], oneGauge: boolean): Column[] {
-  const ps = workingPrimes(2)
+  const primes = PrimeSet.working()
   // Share structure objects (the evaluation de-duplicates by identity, see pairRows).
   const shared = new Map<string, unknown>()
   const share = <T>(x: T): T => {
@@ -39,13 +39,13 @@ export function parityColumns(cols: Column[], pi: number[], oneGauge: boolean): 
     }
     if (!gaugeImages.has(t.gauge)) gaugeImages.set(t.gauge, share(t.gauge.map((s) => paritySu(s, pi))))
     const { lorentz, sign } = images.get(t.lorentz)!
-    return { lorentz, gauge: gaugeImages.get(t.gauge)!, coeff: t.coeff.map((c, i) => (sign === 1 ? c : (ps[i]! - c) % ps[i]!)) }
+    return { lorentz, gauge: gaugeImages.get(t.gauge)!, coeff: sign === 1 ? t.coeff : primes.negated(t.coeff) }
   }
   return cols.flatMap((c) => {
     if (c.source === 'kept' || (c.source === 'candidate' && !(oneGauge && c.terms.length === 1))) return [c]
     const img = c.terms.map(image)
     return ([1, -1] as const).map((sg) => {
-      const terms = [...c.terms, ...img.map((t) => (sg === 1 ? t : { ...t, coeff: t.coeff.map((x, i) => (ps[i]! - x) % ps[i]!) }))]
+      const terms = [...c.terms, ...img.map((t) => (sg === 1 ? t : { ...t, coeff: primes.negated(t.coeff) }))]
       const text = c.source === 'hermitian' ? `(${c.text}) ${sg === 1 ? '+' : '-'} P` : explicitText(terms)
       return { ...c, text, paritySign: sg, parityEigen: sg, parityBase: c.text, terms }
     })

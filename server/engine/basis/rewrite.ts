@@ -3,9 +3,9 @@
  * modulo equations of motion and integration by parts.
  */
 import { EngineConsistencyError, EngineInputError } from '../errors'
-import { solve } from '../finite/matrix'
-import { reconstructRational, crt } from '../finite/rationalReconstruction'
-import { equals as ratEquals, isZero, toString as ratString, type Rational } from '../exact/rational'
+import { solveOverQ } from '../finite/solveOverQ'
+import { liftReach } from '../finite/rationalLift'
+import { isZero, toString as ratString, type Rational } from '../exact/rational'
 import type { ClassBasis } from './classBasis'
 import { combinationValues, type SamplePoint } from './evaluation'
 import { parseOperatorText } from './inputSyntax'
@@ -46,25 +46,22 @@ function targetValues(b: ClassBasis, pi: number, target: string | AmplitudeTarge
 /**
  * Coefficients x with target = Σ x_i kept_i, exact over Q.
  * @example rewriteOperator(photonBasis, "<13>^2[24]^2") // one coefficient, e.g. 1 or −1
- * Method: solve mod two primes, rational reconstruction (Wang 1981) of each, require
- * agreement; if the single-prime reconstructions disagree, reconstruct from the CRT image
- * and check it against both primes.
+ * Method: solve mod each prime, lift every coefficient from all primes together by CRT and
+ * rational reconstruction (Wang 1981), checked against each prime (finite/solveOverQ.ts).
  */
 export function rewriteOperator(b: ClassBasis, target: string | AmplitudeTarget): RewriteResult {
-  const sols = b.primes.map((pd, pi) => {
-    const t = targetValues(b, pi, target)
-    if (b.rank === 0) {
-      if (t.some((v) => v !== 0)) throw new EngineConsistencyError('rewriteOperator', `class ${b.key} has rank 0 but the target does not vanish`)
-      return []
-    }
-    try {
-      return solve(pd.F, pd.keptRows, t)
-    } catch (e) {
-      if (e instanceof EngineInputError) throw new EngineInputError('rewriteOperator', `operator "${labelOf(target)}" is not in the span of class ${b.key}`)
-      throw e
-    }
-  })
-  const coeffs = sols[0]!.map((_, i) => reconstructPair(b, sols.map((s) => s[i]!)))
+  const values = b.primes.map((_, pi) => targetValues(b, pi, target))
+  if (b.rank === 0 && values.some((t) => t.some((v) => v !== 0))) {
+    throw new EngineConsistencyError('rewriteOperator', `class ${b.key} has rank 0 but the target does not vanish`)
+  }
+  const systems = b.primes.map((pd, pi) => ({ a: pd.keptRows, b: values[pi]! }))
+  const out = solveOverQ(b.primes.map((pd) => pd.F), systems, { fn: 'rewriteOperator', about: `class ${b.key}` })
+  if (out.status === 'outside-span') throw new EngineInputError('rewriteOperator', `operator "${labelOf(target)}" is not in the span of class ${b.key}`)
+  if (out.status === 'not-liftable') {
+    const { each, product } = liftReach(b.primes.map((pd) => pd.F.p))
+    throw new EngineInputError('rewriteOperator', `class ${b.key}: a coefficient is not a small rational (numerator and denominator up to ${each}, product up to ${product}, for ${b.primes.length} primes); an amplitude with a factor i or huge coefficients cannot be reconstructed`)
+  }
+  const coeffs = out.coefficients
   return {
     coefficients: coeffs.map((c, i) => ({ operator: b.kept[i]!.text, coefficient: c })),
     vanishes: coeffs.every(isZero),
@@ -75,23 +72,4 @@ export function rewriteOperator(b: ClassBasis, target: string | AmplitudeTarget)
 
 function labelOf(t: string | AmplitudeTarget): string {
   return typeof t === 'string' ? t : t.label ?? 'custom amplitude'
-}
-
-function reconstructPair(b: ClassBasis, residues: number[]): Rational {
-  const ps = b.primes.map((pd) => BigInt(pd.F.p))
-  try {
-    const qs = residues.map((r, i) => reconstructRational(BigInt(r), ps[i]!))
-    if (qs.every((q) => ratEquals(q, qs[0]!))) return qs[0]!
-  } catch { /* fall through to CRT */ }
-  const { residue, modulus } = crt(residues.map(BigInt), ps)
-  let q: Rational
-  try {
-    q = reconstructRational(residue, modulus)
-  } catch {
-    throw new EngineInputError('rewriteOperator', `class ${b.key}: a coefficient is not a small rational (residues ${residues.join(', ')} mod ${ps.join(', ')}); an amplitude with a factor i or huge coefficients cannot be reconstructed`)
-  }
-  b.primes.forEach((pd, i) => {
-    if (pd.F.fromRational(q) !== residues[i]) throw new EngineConsistencyError('rewriteOperator', `reconstructed ${ratString(q)} does not match mod ${pd.F.p}`)
-  })
-  return q
 }

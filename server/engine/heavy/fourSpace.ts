@@ -3,10 +3,10 @@
  * heavy-field EOM (both automatic in the contact vertex, see fourVertex.ts), restricted to
  * Hermitian, rotation-scalar, parity-even, time-reversal-even (and by default C-even)
  * operators. Independence is decided by evaluating the contact vertex at random points over
- * two primes that must agree on the greedy basis.
+ * the working primes, which must agree on the greedy basis (finite/agreement.ts).
  */
-import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
-import { PrimeField, SeededRandom, workingPrimes, rref, type CancelFlag } from '../finite'
+import { EngineCancelledError, EngineInputError } from '../errors'
+import { PrimeSet, SeededRandom, rref, type CancelFlag, type PrimeField } from '../finite'
 import { conjugateFourCombo, daggerFourCombo, fourCandidates, sigmaCount, simplifyFour, type Colour, type FourCombo } from './fourStructure'
 import { evalFourCombo, pointTables, randomFourPoint, type FourPoint, type PointTables } from './fourVertex'
 
@@ -77,16 +77,15 @@ interface PrimeData {
   rows: number[][]
 }
 
-/** Span of the candidates' contact vertices, exact over two primes. */
+/** Span of the candidates' contact vertices, exact over the working primes. */
 export class FourSpace {
   readonly basis: number[]
   private readonly data: PrimeData[]
+  private readonly set = PrimeSet.working()
 
   constructor(readonly candidates: readonly FourCandidate[], readonly opts: FourSpaceOptions = {}) {
-    this.data = workingPrimes(2).map((p, i) => this.sample(new PrimeField(p), new SeededRandom((opts.seed ?? 20261202) + 104729 * i)))
-    const piv = this.data.map((d) => rref(d.F, d.rows, opts.signal).pivots)
-    if (piv[0]!.join(',') !== piv[1]!.join(',')) throw new EngineConsistencyError('FourSpace', `primes disagree on pivots: ${piv[0]} vs ${piv[1]}`)
-    this.basis = piv[0]!
+    this.data = this.set.fields.map((F, i) => this.sample(F, new SeededRandom((opts.seed ?? 20261202) + 104729 * i)))
+    this.basis = this.set.echelon(this.data.map((d) => d.rows), { fn: 'FourSpace' }, opts.signal).pivots
   }
 
   get dimension(): number {
@@ -121,18 +120,14 @@ export class FourSpace {
 
   /**
    * Rank of the given operators (evaluated as written), optionally together
-   * with the enumerated basis; both primes must agree.
+   * with the enumerated basis; the primes must agree.
    */
   rankOf(combos: readonly FourCombo[], withBasis = false): number {
-    const ranks = this.data.map((d) => {
-      const rows = d.points.map((_, j) => [
-        ...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []),
-        ...combos.map((c) => this.value(d, c, j)),
-      ])
-      return rows[0]!.length === 0 ? 0 : rref(d.F, rows, this.opts.signal).rank
-    })
-    if (ranks[0] !== ranks[1]) throw new EngineConsistencyError('FourSpace.rankOf', `primes disagree: ${ranks[0]} vs ${ranks[1]}`)
-    return ranks[0]!
+    const matrices = this.data.map((d) => d.points.map((_, j) => [
+      ...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []),
+      ...combos.map((c) => this.value(d, c, j)),
+    ]))
+    return this.set.rank(matrices, { fn: 'FourSpace.rankOf' }, this.opts.signal)
   }
 
   /** True when every given operator lies in the span of the enumerated basis. */

@@ -1,11 +1,11 @@
 /**
  * Exact linear algebra of operators modulo a relation subspace (heavy-field equation of
  * motion; integration by parts is built into the representation): rank, greedy basis and
- * rewrites, each computed over two primes that must agree, rewrites lifted to Q by CRT and
- * rational reconstruction.
+ * rewrites, each computed over the working primes, which must agree; rewrites are lifted to Q
+ * from all primes together (finite/solveOverQ.ts).
  */
-import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
-import { PrimeField, SeededRandom, workingPrimes, rref, solve, crt, reconstructRational, type CancelFlag } from '../finite'
+import { EngineCancelledError, EngineInputError } from '../errors'
+import { PrimeSet, SeededRandom, rref, type CancelFlag, type PrimeField } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { Element } from './algebra'
 import { evaluationRows, randomPoint, type KinematicPoint } from './symbol'
@@ -53,13 +53,13 @@ export class QuotientSpace {
   readonly basis: number[]
   private readonly data: PrimeData[]
   private readonly nRel: number
+  private readonly set = PrimeSet.working()
 
   constructor(readonly candidates: readonly Element[], readonly relations: readonly Element[], opts: QuotientOptions = {}) {
     const sectors = opts.sectors ?? [0, 1, 2]
     const cols = [...relations, ...candidates]
     this.nRel = relations.length
-    this.data = workingPrimes(2).map((p, i) => {
-      const F = new PrimeField(p)
+    this.data = this.set.fields.map((F, i) => {
       const rng = new SeededRandom((opts.seed ?? 20261202) + 7919 * i)
       let points: KinematicPoint[] = []
       let rows: number[][] = []
@@ -70,10 +70,7 @@ export class QuotientSpace {
       }
       return { F, points, rows }
     })
-    const results = this.data.map((d) => (d.rows.length === 0 ? { pivots: [] as number[] } : rref(d.F, d.rows, opts.signal)))
-    const keys = results.map((r) => r.pivots.join(','))
-    if (keys[0] !== keys[1]) throw new EngineConsistencyError('QuotientSpace', `primes disagree on pivots: ${keys[0]} vs ${keys[1]}`)
-    const piv = results[0]!.pivots
+    const piv = this.set.echelon(this.data.map((d) => d.rows), { fn: 'QuotientSpace' }, opts.signal).pivots
     this.relationRank = piv.filter((c) => c < this.nRel).length
     this.basis = piv.filter((c) => c >= this.nRel).map((c) => c - this.nRel)
   }
@@ -88,30 +85,29 @@ export class QuotientSpace {
    * Throws EngineInputError when the target is not in span(candidates) + span(relations).
    */
   rewrite(target: Element): Rational[] {
-    const residues = this.data.map((d) => {
-      const rhs = evaluationRows(d.F, [target], d.points).map((r) => r[0]!)
-      const a = d.rows.map((r) => [...r.slice(0, this.nRel), ...this.basis.map((b) => r[this.nRel + b]!)])
-      let x: number[]
-      try {
-        x = solve(d.F, a, rhs)
-      } catch {
-        throw new EngineInputError('QuotientSpace.rewrite', 'the operator is not in the span of the enumerated operators modulo EOM and IBP')
-      }
-      return x.slice(this.nRel)
-    })
-    return residues[0]!.map((_, i) => {
-      const { residue, modulus } = crt([BigInt(residues[0]![i]!), BigInt(residues[1]![i]!)], [BigInt(this.data[0]!.F.p), BigInt(this.data[1]!.F.p)])
-      return reconstructRational(residue, modulus)
-    })
+    const systems = this.data.map((d) => ({
+      a: d.rows.map((r) => [...r.slice(0, this.nRel), ...this.basis.map((b) => r[this.nRel + b]!)]),
+      b: evaluationRows(d.F, [target], d.points).map((r) => r[0]!),
+    }))
+    const lift = this.basis.map((_, i) => this.nRel + i)
+    const out = this.set.solve(systems, { fn: 'QuotientSpace.rewrite' }, { lift })
+    if (out.status === 'outside-span') throw new EngineInputError('QuotientSpace.rewrite', 'the operator is not in the span of the enumerated operators modulo EOM and IBP')
+    if (out.status === 'not-liftable') {
+      const { each, product } = this.set.reach
+      throw new EngineInputError('QuotientSpace.rewrite', `the coefficient of basis operator ${out.index + 1} is not a rational with numerator and denominator up to ${each} and product up to ${product}; it cannot be given exactly`)
+    }
+    return out.coefficients
   }
 
   /** True when the element is zero modulo the relations. */
   isNull(target: Element): boolean {
-    const d = this.data[0]!
-    const t = evaluationRows(d.F, [target], d.points).map((r) => r[0]!)
-    const rel = d.rows.map((r, i) => [...r.slice(0, this.nRel), t[i]!])
-    const withT = rref(d.F, rel).rank
-    const without = this.nRel === 0 ? 0 : rref(d.F, rel.map((r) => r.slice(0, -1))).rank
+    const ctx = { fn: 'QuotientSpace.isNull' }
+    const rel = this.data.map((d) => {
+      const t = evaluationRows(d.F, [target], d.points).map((r) => r[0]!)
+      return d.rows.map((r, i) => [...r.slice(0, this.nRel), t[i]!])
+    })
+    const withT = this.set.rank(rel, ctx)
+    const without = this.nRel === 0 ? 0 : this.set.rank(rel.map((m) => m.map((r) => r.slice(0, -1))), ctx)
     return withT === without
   }
 }
