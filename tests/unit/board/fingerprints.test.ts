@@ -44,6 +44,16 @@ describe('coverage and rewrites from fingerprints', () => {
     expect(r!.coefficients.map(ratString)).toEqual(['2', '-1/3', '7/45'])
   })
 
+  it('recovers 7001/3, 1/9000 and 123457, beyond one prime\'s bound 5792 but within both primes\' reach (reported bug)', () => {
+    const target = combo([{ v: a, num: 7001, den: 3 }, { v: b, num: 1, den: 9000 }, { v: c, num: 123457, den: 1 }])
+    expect(expressIn([A, B, C], target)!.coefficients.map(ratString)).toEqual(['7001/3', '1/9000', '123457'])
+  })
+
+  it('refuses a coefficient beyond both primes\' reach instead of guessing', () => {
+    const target = combo([{ v: a, num: 1, den: 1 }, { v: b, num: 2 ** 26 + 15, den: 1 }])
+    expect(() => expressIn([A, B], target)).toThrow('expressIn: the coefficient of kept operator 2 is not a rational with numerator and denominator up to 47453092 and product up to 82595384')
+  })
+
   it('says an independent operator is not a combination', () => {
     expect(expressIn([A, B], C)).toBeNull()
   })
