@@ -3,7 +3,7 @@
 import { parentPort, workerData } from 'node:worker_threads'
 import { countOperators } from '../engine/counting/countOperators'
 import { buildBasis } from '../engine/basis/buildBasis'
-import { typedFingerprint } from '../engine/board/typedOperator'
+import { typedFingerprints } from '../engine/board/typedOperator'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
@@ -21,7 +21,7 @@ function onProgress(fraction: number, label: string) {
 try {
   const theory = parseTheory(task.theory)
   const result = task.kind === 'fingerprint'
-    ? typedFingerprint(theory, task.classKey, task.text, task.priorities)
+    ? typedFingerprints(theory, task.classKey, task.texts, task.priorities)
     : task.kind === 'count'
       ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
       : theory.frame === 'heavy'

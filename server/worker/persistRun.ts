@@ -5,6 +5,7 @@ import type { BasisOperator } from '../engine/basis/describe'
 import type { HeavyEnumeration } from '../engine/heavy/enumerate'
 import { writeHeavyBasis } from './heavyBasis'
 import type { Priorities } from '../engine/basis/classBasis'
+import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
 
 /** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
 export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
@@ -50,7 +51,7 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
       : { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: c.pEven ?? null, pOdd: c.pOdd ?? null, parityReason: c.parityReason ?? null }),
   })))
   const [basis] = await trx('bases').insert({
-    theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion,
+    theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, fingerprint_version: FINGERPRINT_VERSION,
     counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes), note: report.note,
     // As computed, the kept operators of each class are independent and complete.
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),

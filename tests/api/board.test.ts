@@ -4,6 +4,7 @@ import { gunzipSync } from 'node:zlib'
 import { buildWorld, addBasis, type World } from '../support/fixtures'
 import { messageOf } from '../support/client'
 import { testDb } from '../support/db'
+import { FINGERPRINT_VERSION } from '../../server/engine/board/fingerprintVersion'
 
 let world: World
 let basis: Awaited<ReturnType<typeof addBasis>>
@@ -69,6 +70,30 @@ describe('the basis board API', () => {
     const bad = await world.byRole.viewer.client.post(`/api/bases/${basis.basisId}/rewrite`, { classKey: 'phi^3 phi*^3', text: '<12' })
     expect(bad.status).toBe(422)
     expect(messageOf(bad)).toMatch(/parse|syntax|bracket|unexpected|expected/i)
+  })
+
+  it('rewrites typed operators with coefficients beyond one prime\'s reach (7001/3, 1/9000, 123457), on new and old bases alike', async () => {
+    const fresh = await addBasis(world)
+    const bases = () => testDb()('bases').where({ id: fresh.basisId })
+    expect((await bases().first('fingerprint_version')).fingerprint_version).toBe(FINGERPRINT_VERSION)
+    const ask = async (classKey: string, text: string) => {
+      const res = await world.byRole.viewer.client.post(`/api/bases/${fresh.basisId}/rewrite`, { classKey, text })
+      expect(res.status, JSON.stringify(res.body)).toBe(200)
+      return res.body.rewrite.terms.map((t: { operatorId: number, coefficient: string }) => [t.operatorId, t.coefficient])
+    }
+    const { derivative, photon } = fresh.operatorIds
+    const all = async () => [await ask('D^2 phi^2 phi*^2', '7001/3 <12>[12]'), await ask('D^2 phi^2 phi*^2', '-1/9000 <12>[12]'), await ask('phi phi* A_L^2', '123457 <34>^2')]
+    const expected = [[[derivative, '7001/3']], [[derivative, '-1/9000']], [[photon, '123457']]]
+    expect(await all()).toEqual(expected)
+    // A basis stored before versions were recorded (null) is read as version 1 and rewrites the same.
+    await bases().update({ fingerprint_version: null })
+    expect(await all()).toEqual(expected)
+    // From sampling code the current one does not reproduce: the stored kept fingerprints are
+    // not used (spoiled here to prove it), the kept operators are fingerprinted from their texts.
+    await bases().update({ fingerprint_version: FINGERPRINT_VERSION + 1000 })
+    const spoiled = { primes: [67108837, 67108777], values: [new Array(20).fill(1), new Array(20).fill(1)] }
+    await testDb()('operators').whereIn('id', [derivative, photon]).update({ fingerprint: JSON.stringify(spoiled) })
+    expect(await all()).toEqual(expected)
   })
 
   it('tags and filters: threshold tags name the field, duplicates are refused', async () => {

@@ -11,20 +11,30 @@ import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
 
 /**
- * @example typedFingerprint(photons, "F_L^2 F_R^2", "<12>^2[34]^2").values.length // 2 primes
+ * The fingerprints of several operators of one class (typed ones, or kept operators by their
+ * stored texts), computing the class's sample points once.
+ * @example typedFingerprints(photons, "F_L^2 F_R^2", ["<12>^2[34]^2", "2 <12>^2[34]^2"]).length // 2
  * Method: the class's sample points are fixed by its key (seeded), so recomputing the class
  * basis reproduces them; the typed amplitude is symmetrised over identical legs like every
  * candidate (amplitude–operator correspondence; Shadmi & Weiss, JHEP 02 (2019) 165).
+ * `priorities` must be the run's own: they fix how many sample points the class uses.
  */
-/** `priorities` must be the run's own: they fix how many sample points the class uses. */
-export function typedFingerprint(theory: Theory, classKey: string, text: string, priorities?: Priorities): Fingerprint {
+export function typedFingerprints(theory: Theory, classKey: string, texts: readonly string[], priorities?: Priorities): Fingerprint[] {
   const b = classBasis(theory, classKey, { priorities })
-  // Input syntax, or a Hermitian / parity combination as the board writes it.
-  const terms = writtenTerms(theoryParticles(theory), b.class, text, b.gaugeStructures)
-  return {
-    primes: b.primes.map((pd) => pd.F.p),
-    values: b.primes.map((pd) => combinationValues(pd.F, terms.map((t) => ({
-      lorentz: t.lorentz, gauge: t.gauge, coeff: pd.F.fromRational(t.coeff),
-    })), pd.points, b.perms)),
-  }
+  const particles = theoryParticles(theory)
+  return texts.map((text) => {
+    // Input syntax, or a Hermitian / parity combination as the board writes it.
+    const terms = writtenTerms(particles, b.class, text, b.gaugeStructures)
+    return {
+      primes: b.primes.map((pd) => pd.F.p),
+      values: b.primes.map((pd) => combinationValues(pd.F, terms.map((t) => ({
+        lorentz: t.lorentz, gauge: t.gauge, coeff: pd.F.fromRational(t.coeff),
+      })), pd.points, b.perms)),
+    }
+  })
+}
+
+/** One typed operator's fingerprint (see typedFingerprints). @example typedFingerprint(photons, "F_L^2 F_R^2", "<12>^2[34]^2").values.length // 2 primes */
+export function typedFingerprint(theory: Theory, classKey: string, text: string, priorities?: Priorities): Fingerprint {
+  return typedFingerprints(theory, classKey, [text], priorities)[0]!
 }
