@@ -2,10 +2,10 @@
  * Exact linear algebra of operators modulo a relation subspace (heavy-field equation of
  * motion; integration by parts is built into the representation): rank, greedy basis and
  * rewrites, each computed over the working primes, which must agree; rewrites are lifted to Q
- * from all primes together (finite/solveOverQ.ts).
+ * from all primes together (finite/solveOverQ.ts), with one more prime when two do not reach.
  */
 import { EngineCancelledError, EngineInputError } from '../errors'
-import { PrimeSet, SeededRandom, rref, type CancelFlag, type PrimeField } from '../finite'
+import { PrimeSet, SeededRandom, rref, type CancelFlag, type PrimeField, type SolveOutcome } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { Element } from './algebra'
 import { evaluationRows, randomPoint, type KinematicPoint } from './symbol'
@@ -44,6 +44,22 @@ function samplePoints(F: PrimeField, rng: SeededRandom, cols: readonly Element[]
   }
 }
 
+/** Evaluation data of working prime number `index` (its own seeded points, sector by sector). */
+function primeData(F: PrimeField, index: number, cols: readonly Element[], opts: QuotientOptions): PrimeData {
+  const rng = new SeededRandom((opts.seed ?? 20261202) + 7919 * index)
+  let points: KinematicPoint[] = []
+  let rows: number[][] = []
+  for (const n of opts.sectors ?? [0, 1, 2]) {
+    const s = samplePoints(F, rng, cols, n, opts.colorN ?? 1, opts.signal)
+    points = points.concat(s.pts)
+    rows = rows.concat(s.rows)
+  }
+  return { F, points, rows }
+}
+
+/** Most primes a rewrite widens to before it refuses a coefficient. */
+const MAX_REWRITE_PRIMES = 3
+
 /**
  * The space span(candidates) / span(relations), computed exactly.
  * `basis` lists candidate indices chosen greedily in the given order.
@@ -51,25 +67,15 @@ function samplePoints(F: PrimeField, rng: SeededRandom, cols: readonly Element[]
 export class QuotientSpace {
   readonly relationRank: number
   readonly basis: number[]
-  private readonly data: PrimeData[]
+  private data: PrimeData[]
+  private set = PrimeSet.working()
+  private readonly cols: readonly Element[]
   private readonly nRel: number
-  private readonly set = PrimeSet.working()
 
-  constructor(readonly candidates: readonly Element[], readonly relations: readonly Element[], opts: QuotientOptions = {}) {
-    const sectors = opts.sectors ?? [0, 1, 2]
-    const cols = [...relations, ...candidates]
+  constructor(readonly candidates: readonly Element[], readonly relations: readonly Element[], private readonly opts: QuotientOptions = {}) {
+    this.cols = [...relations, ...candidates]
     this.nRel = relations.length
-    this.data = this.set.fields.map((F, i) => {
-      const rng = new SeededRandom((opts.seed ?? 20261202) + 7919 * i)
-      let points: KinematicPoint[] = []
-      let rows: number[][] = []
-      for (const n of sectors) {
-        const s = samplePoints(F, rng, cols, n, opts.colorN ?? 1, opts.signal)
-        points = points.concat(s.pts)
-        rows = rows.concat(s.rows)
-      }
-      return { F, points, rows }
-    })
+    this.data = this.set.fields.map((F, i) => primeData(F, i, this.cols, opts))
     const piv = this.set.echelon(this.data.map((d) => d.rows), { fn: 'QuotientSpace' }, opts.signal).pivots
     this.relationRank = piv.filter((c) => c < this.nRel).length
     this.basis = piv.filter((c) => c >= this.nRel).map((c) => c - this.nRel)
@@ -85,18 +91,40 @@ export class QuotientSpace {
    * Throws EngineInputError when the target is not in span(candidates) + span(relations).
    */
   rewrite(target: Element): Rational[] {
-    const systems = this.data.map((d) => ({
-      a: d.rows.map((r) => [...r.slice(0, this.nRel), ...this.basis.map((b) => r[this.nRel + b]!)]),
-      b: evaluationRows(d.F, [target], d.points).map((r) => r[0]!),
-    }))
-    const lift = this.basis.map((_, i) => this.nRel + i)
-    const out = this.set.solve(systems, { fn: 'QuotientSpace.rewrite' }, { lift })
+    let out = this.solve(target)
+    // Two primes did not reach a coefficient: add the next working prime (rare, and cheap
+    // next to the enumeration), checked against the others like them.
+    while (out.status === 'not-liftable' && this.set.size < MAX_REWRITE_PRIMES) {
+      this.addPrime()
+      out = this.solve(target)
+    }
     if (out.status === 'outside-span') throw new EngineInputError('QuotientSpace.rewrite', 'the operator is not in the span of the enumerated operators modulo EOM and IBP')
     if (out.status === 'not-liftable') {
       const { each, product } = this.set.reach
       throw new EngineInputError('QuotientSpace.rewrite', `the coefficient of basis operator ${out.index + 1} is not a rational with numerator and denominator up to ${each} and product up to ${product}; it cannot be given exactly`)
     }
     return out.coefficients
+  }
+
+  private solve(target: Element): SolveOutcome {
+    const systems = this.data.map((d) => ({
+      a: d.rows.map((r) => [...r.slice(0, this.nRel), ...this.basis.map((b) => r[this.nRel + b]!)]),
+      b: evaluationRows(d.F, [target], d.points).map((r) => r[0]!),
+    }))
+    const lift = this.basis.map((_, i) => this.nRel + i)
+    return this.set.solve(systems, { fn: 'QuotientSpace.rewrite' }, { lift })
+  }
+
+  /**
+   * Widen to the next working prime; its pivots must agree with the others'. Not cancellable:
+   * the space may be shared (orderSpace's memo) beyond the run whose flag it was built with.
+   */
+  private addPrime(): void {
+    const set = PrimeSet.working(this.set.size + 1)
+    const data = [...this.data, primeData(set.fields[set.size - 1]!, set.size - 1, this.cols, { ...this.opts, signal: undefined })]
+    set.echelon(data.map((d) => d.rows), { fn: 'QuotientSpace' })
+    this.set = set
+    this.data = data
   }
 
   /** True when the element is zero modulo the relations. */
