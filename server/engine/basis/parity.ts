@@ -138,15 +138,20 @@ export function classParity(particles: Particle[], b: ParityInput): ClassParity 
       throw new EngineConsistencyError('classParity', `class ${b.cls.key}: the parity image of a kept operator is not in the span of the class`)
     }
   }))
-  const traces = mats.map((cols, k) => involutionTrace(b.primes[k]!.F, cols, b.cls.key))
-  const trace = agreedValue(b.primes.map((pd) => pd.F), traces, { fn: 'classParity', about: `class ${b.cls.key}` }, 'parity trace')
+  const fields = b.primes.map((pd) => pd.F)
+  const ctx = { fn: 'classParity', about: `class ${b.cls.key}` }
+  const trace = agreedValue(fields, mats.map((cols, k) => involutionTrace(fields[k]!, cols, b.cls.key)), ctx, 'parity trace')
   const f = b.selfConjugate ? 1 : 2
-  const operators = mats[0]!.map((col, i): ParityValue => {
-    const F = b.primes[0]!.F
-    if (col.some((x, j) => j !== i && x !== 0)) return null
-    return col[i] === 1 ? 'even' : col[i] === F.neg(1) ? 'odd' : null
-  })
+  const labels = mats.map((cols, k) => cols.map((col, i) => operatorParity(fields[k]!, col, i)))
+  agreedValue(fields, labels.map((l) => l.join()), ctx, 'parity of each kept operator')
+  const operators = labels[0]!
   return { imageKey: image.key, kind: 'self', operators, pEven: (f * (n + trace)) / 2, pOdd: (f * (n - trace)) / 2 }
+}
+
+/** Parity of kept operator i from its image (column col of M): definite only when P maps it to ±itself. */
+function operatorParity(F: PrimeField, col: number[], i: number): ParityValue {
+  if (col.some((x, j) => j !== i && x !== 0)) return null
+  return col[i] === 1 ? 'even' : col[i] === F.neg(1) ? 'odd' : null
 }
 
 /** Trace of M (columns = images of kept operators) as an integer, after checking M² = 1. */
