@@ -1,7 +1,5 @@
 import type { Knex } from 'knex'
 import type { HeavyEnumeration, HeavyOperator } from '../engine/heavy/enumerate'
-import { rewriteHeavy } from '../engine/heavy/enumerate'
-import { toString as ratString, isZero } from '../engine/exact/rational'
 import type { RunParams } from './persistRun'
 
 /**
@@ -15,15 +13,15 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
   const classes: Record<string, unknown>[] = []
   const rows: Record<string, unknown>[] = []
   const next = new Map<string, number>()
-  const add = (order: number, key: string, column: 'kept' | 'set_aside', op: HeavyOperator, extra: Record<string, unknown> = {}) => {
+  const add = (order: number, key: string, column: 'kept' | 'set_aside', op: HeavyOperator, extra: Record<string, unknown> = {}, realParameters = 1) => {
     const slot = `${order}|${column}`
     const position = next.get(slot) ?? 0
     next.set(slot, position + 1)
     rows.push({
       order, class_key: key, column, position, text: op.id, latex: op.latex, latex_dirac: null,
       // An anti-Hermitian operator as written is i × a Hermitian one: one real coefficient.
-      hermitian: true, real_parameters: 1,
-      structure: JSON.stringify({ antiHermitian: !!op.antiHermitian, terms: op.terms, relations: op.relations, gaugeEomNote: op.gaugeEomNote ?? null, source: op.source ?? null, coefficient: op.coefficient ?? null, ...extra }),
+      hermitian: true, real_parameters: realParameters,
+      structure: JSON.stringify({ antiHermitian: !!op.antiHermitian, terms: op.terms, relations: op.relations, gaugeEomNote: op.gaugeEomNote ?? null, source: op.source ?? null, coefficient: op.coefficient ?? null, fixedBy: op.fixedBy ?? null, ...extra }),
     })
   }
   for (const o of e.orders) {
@@ -31,14 +29,12 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
     const spans = o.conventionalSpansBasis
     classes.push({ order: o.order, dimension: null, key, rank: o.count, hilbert: null, tallyOk: null, message: spans === null ? null : spans ? 'the published operators of this order span exactly this space' : 'the published operators of this order do NOT span this space' })
     for (const op of o.basis) add(o.order, key, 'kept', op)
-    for (const op of o.conventional) {
-      const coefs = op.combo ? rewriteHeavy(op.combo, o.order, e.charged, undefined, e.colorN) : []
-      add(o.order, key, 'set_aside', op, { publishedRewrite: coefs.filter((c) => !isZero(c.coef)).map((c) => ({ id: c.id, coefficient: ratString(c.coef) })) })
-    }
+    for (const op of o.conventional) add(o.order, key, 'set_aside', op, { publishedRewrite: op.rewrite ?? [] })
     if (a && o.antiparticle.length) {
+      // χ's bilinears repeat ψ's with fixed coefficients: cards for the record, no free parameter.
       const ckey = `${a}* ${a} (1/m^${o.order})`
-      classes.push({ order: o.order, dimension: null, key: ckey, rank: o.antiparticle.length, hilbert: null, tallyOk: null, message: e.chargeConjugationNote ?? 'coefficients fixed by charge conjugation' })
-      for (const op of o.antiparticle) add(o.order, ckey, 'kept', op)
+      classes.push({ order: o.order, dimension: null, key: ckey, rank: o.antiparticle.length, realParameters: 0, hilbert: null, tallyOk: null, message: 'coefficients fixed by charge conjugation: no free coefficient (see the antiparticle convention)' })
+      for (const op of o.antiparticle) add(o.order, ckey, 'kept', op, {}, 0)
     }
   }
   // The particle–antiparticle four-fermion sector, enumerated order by order; the published
@@ -56,7 +52,7 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
   }
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',
-    max_order: Math.max(0, ...e.orders.map((o) => o.order)), classes: JSON.stringify(classes), note: e.eomNote,
+    max_order: Math.max(0, ...e.orders.map((o) => o.order)), classes: JSON.stringify(classes), note: [e.eomNote, e.antiparticleNote].filter(Boolean).join('\n'),
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   if (rows.length) await trx('operators').insert(rows.map((r) => ({ ...r, basis_id: basis.id })))

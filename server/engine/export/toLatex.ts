@@ -16,8 +16,11 @@ export const classKeyLatex = classKeyTex
 export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): string {
   const out: string[] = [
     `% Scalewright basis export: ${data.theory.name} (${data.exportedAt})`,
-    `% Legend: operators in two-component notation with spinor brackets; derivatives act on the`,
-    `% field they follow. Independence holds ${data.note || 'modulo equations of motion and integration by parts'}.`,
+    ...(data.countingRule === '1/m'
+      ? ['% Legend: heavy-frame operators in two-component Pauli notation; derivatives act to their right.',
+        ...(data.note || '').split('\n').filter(Boolean).map((line) => `% Conventions: ${line}`)]
+      : ['% Legend: operators in two-component notation with spinor brackets; derivatives act on the',
+        `% field they follow. Independence holds ${data.note || 'modulo equations of motion and integration by parts'}.`]),
     `% Counting rule: ${data.countingRule}; ${data.countingRule === '1/m' ? 'order n = power of 1/m in the heavy-particle frame' : 'order n = mass dimension - 4 under the mass-ratio rule'}.`,
     `% "real par." counts real Wilson-coefficient parameters for one flavor (2 for a non-Hermitian operator and its conjugate).`,
     '',

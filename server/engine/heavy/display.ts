@@ -5,6 +5,9 @@
  * anti-Hermitian in the real algebra is multiplied by i to give a Hermitian operator.
  */
 import type { Combo, Structure } from './structure'
+import { EngineConsistencyError } from '../errors'
+import { isZero, mul, neg, rat, toString, type Rational } from '../exact/rational'
+import { fieldTex } from './fieldTex'
 
 const LABELS = 'ijklmnpqr'
 
@@ -43,6 +46,46 @@ export function physicalPhase(s: Structure): number {
   return (((nE - nB + (s.spin ? 1 : 0)) % 4) + 4) % 4
 }
 
+/** A number r·i^k (k = 0..3): the phase bookkeeping between the real algebra and printed forms. */
+export interface Phased {
+  r: Rational
+  k: number
+}
+
+/** Product of phased numbers. */
+export function phasedMul(a: Phased, b: Phased): Phased {
+  const k = (a.k + b.k) % 4
+  return { r: mul(a.r, b.r), k }
+}
+
+/** The real number a phased number stands for; throws when it is imaginary (a phase bug). */
+export function phasedReal(a: Phased): Rational {
+  if (isZero(a.r) || a.k % 2 === 0) return a.k === 2 ? neg(a.r) : a.r
+  throw new EngineConsistencyError('phasedReal', `expected a real factor, got an imaginary one (${toString(a.r)}·i)`)
+}
+
+interface Display { sign: number; imaginary: boolean; g: number; lead: number }
+
+function displayOf(c: Combo, antiHermitian: boolean): Display {
+  const g = c.reduce((acc, t) => gcd(acc, t.coef), 0)
+  const e = (physicalPhase(c[0]!.s) + (antiHermitian ? 1 : 0)) % 4
+  const lead = Math.sign(c[0]!.coef)
+  return { sign: (e === 2 || e === 3 ? -1 : 1) * lead, imaginary: e % 2 === 1, g, lead }
+}
+
+/**
+ * The factor f with (real-algebra combination) = f · (operator as comboLatex prints it),
+ * couplings absorbed: the printed body is the combination divided by gcd·lead and by
+ * i^physicalPhase, times the printed sign and i.
+ * @example realPerDisplayed(combo([[1, 'D_i D_i']]), false) // { r: 1, k: 0 }
+ */
+export function realPerDisplayed(c: Combo, antiHermitian: boolean): Phased {
+  const d = displayOf(c, antiHermitian)
+  // real = i^pp · g · lead · body and displayed = sign · i^imag · body
+  const k = (((physicalPhase(c[0]!.s) - (d.imaginary ? 1 : 0)) % 4) + 4) % 4
+  return { r: rat(d.g * d.lead * d.sign), k }
+}
+
 /**
  * LaTeX of a Hermitian operator ψ† (…) ψ from a combination of uniform letter content.
  * `antiHermitian` marks a combination that is anti-Hermitian in the real algebra.
@@ -50,20 +93,17 @@ export function physicalPhase(s: Structure): number {
  */
 export function comboLatex(c: Combo, antiHermitian: boolean, field: string): string {
   if (c.length === 0) return '0'
-  const g = c.reduce((acc, t) => gcd(acc, t.coef), 0)
-  const e = (physicalPhase(c[0]!.s) + (antiHermitian ? 1 : 0)) % 4
-  const lead = Math.sign(c[0]!.coef)
-  const sign = (e === 2 || e === 3 ? -1 : 1) * lead
+  const d = displayOf(c, antiHermitian)
   const body = c
     .map((t, i) => {
-      const k = (t.coef * lead) / g
+      const k = (t.coef * d.lead) / d.g
       const mag = Math.abs(k) === 1 ? '' : `${Math.abs(k)}\\,`
       const op = i === 0 ? (k < 0 ? '-' : '') : k < 0 ? ' - ' : ' + '
       return `${op}${mag}${structureLatex(t.s)}`
     })
     .join('')
-  const pre = `${sign < 0 ? '-' : ''}${e % 2 === 1 ? 'i' : ''}`
-  const f = field === 'psi' ? '\\psi' : field === 'chi' ? '\\chi' : field
+  const pre = `${d.sign < 0 ? '-' : ''}${d.imaginary ? 'i' : ''}`
+  const f = fieldTex(field)
   const wrap = c.length > 1 || pre.endsWith('i')
   return `${f}^\\dagger\\, ${pre}${wrap ? `\\left(${body}\\right)` : body}\\, ${f}`
 }

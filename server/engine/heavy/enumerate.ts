@@ -15,11 +15,12 @@ import { EngineCancelledError, EngineInputError } from '../errors'
 import type { CancelFlag } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
-import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, type CoefficientRelation } from './conventional'
+import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedLatex, type CoefficientRelation } from './conventional'
 import { comboLatex, structureBlocks } from './display'
 import { orderSpace } from './orderSpace'
-import { QuotientSpace } from './quotient'
 import { expandCombo, type Combo } from './structure'
+import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
+import { publishedOperators } from './published'
 import { enumerateFourFermion, FOUR_FERMION_NOTE, type FourFermionOrder } from './fourFermion'
 import type { FourCombo } from './fourStructure'
 
@@ -38,6 +39,13 @@ export interface HeavyOperator {
   relations: CoefficientRelation[]
   gaugeEomNote?: string
   source?: string
+  /** Published forms: the printed operator on the enumerated basis as displayed. */
+  rewrite?: Array<{ id: string; coefficient: string }>
+  /** χ copies: the ψ-operator whose coefficient fixes this one, and the factor. */
+  fixedBy?: { id: string; factor: number }
+  /** Parity and time-reversal signs (absent = even). */
+  parityOdd?: boolean
+  timeOdd?: boolean
 }
 
 export interface HeavyOrder {
@@ -49,7 +57,7 @@ export interface HeavyOrder {
   conventionalSpansBasis: boolean | null
   candidates: number
   relationRank: number
-  /** With an antiparticle field: the χ-bilinears, coefficients fixed by charge conjugation. */
+  /** With an antiparticle field: the χ-bilinears, coefficients fixed by charge conjugation (or CPT). */
   antiparticle: HeavyOperator[]
 }
 
@@ -67,7 +75,8 @@ export interface HeavyEnumeration {
   fourFermionOrders: FourFermionOrder[]
   fourFermionNote?: string
   eomNote: string
-  chargeConjugationNote?: string
+  /** The antiparticle convention (stated on the board and in exports), when χ is present. */
+  antiparticleNote?: string
 }
 
 export interface HeavyInput {
@@ -120,61 +129,6 @@ function termsOf(c: Combo, field: string): Array<Record<string, number>> {
   return [...seen.values()]
 }
 
-/** The charge-conjugate χ-bilinear of a ψ-bilinear: ψ → χ, charge reversed (E, B → −E, −B). */
-function conjugateOperator(op: HeavyOperator, field: string, anti: string): HeavyOperator {
-  const swap = (t: Record<string, number>) => {
-    const out: Record<string, number> = {}
-    for (const [k, v] of Object.entries(t)) out[k === field ? anti : k === `${field}*` ? `${anti}*` : k] = v
-    return out
-  }
-  const nF = (op.terms[0]!.E ?? 0) + (op.terms[0]!.B ?? 0)
-  return {
-    ...op,
-    id: `${op.id}.C`,
-    latex: op.latex.split(`\\${field}`).join(`\\${anti}`),
-    terms: op.terms.map(swap),
-    relations: [{
-      coefficient: `c(${op.id}.C)`,
-      relation: `c(${op.id}.C) = c(${op.id})` + (nF % 2 === 0 ? '' : ' (E, B carry χ\'s charge −g: a sign −1 relative to ψ\'s E, B)'),
-      source: 'charge conjugation (common practice)',
-    }],
-  }
-}
-
-/** Published operators of one order, with the rank check against the enumerated space. */
-export function verifyConventional(order: number, signal?: CancelFlag): {
-  spans: boolean
-  rank: number
-  dimension: number
-  rewrites: Array<{ id: string; coefficients: Rational[] }>
-  /** For each enumerated basis operator, the published operators it involves. */
-  inverse: Array<{ basis: string; conventional: string[] }>
-} {
-  const os = orderSpace(order, true, signal)
-  const conv = CONVENTIONAL_OPERATORS.filter((c) => c.order === order)
-  const els = conv.map((c) => expandCombo(c.combo))
-  const convSpace = new QuotientSpace(els, os.space.relations, { signal })
-  const rank = convSpace.dimension
-  const rewrites = conv.map((c, i) => ({ id: c.id, coefficients: os.space.rewrite(els[i]!) }))
-  const spans = rank === os.space.dimension && rank === conv.length
-  const inverse = spans
-    ? os.space.basis.map((b, i) => {
-        const co = convSpace.rewrite(os.candidates[b]!.element)
-        return { basis: `m${order}.${i + 1}`, conventional: conv.filter((_, j) => co[convSpace.basis.indexOf(j)]!.num !== 0n).map((c) => c.id) }
-      })
-    : []
-  return { spans, rank, dimension: os.space.dimension, rewrites, inverse }
-}
-
-/** Attach the gauge-field EOM note to basis operators that involve Darwin or {D^i,(∇×B)^i}. */
-function annotateGaugeEom(basis: HeavyOperator[], inverse: Array<{ basis: string; conventional: string[] }>): void {
-  for (const op of basis) {
-    const inv = inverse.find((x) => x.basis === op.id)
-    const noted = CONVENTIONAL_OPERATORS.filter((c) => c.gaugeEomNote && inv?.conventional.includes(c.id))
-    if (noted.length > 0) op.gaugeEomNote = `involves ${noted.map((c) => c.id).join(', ')}: ${noted.map((c) => c.gaugeEomNote).join('; ')}`
-  }
-}
-
 /**
  * Enumerate the heavy-frame operator basis order by order up to heavy.maxOrder (≤ 4).
  * @example enumerateHeavy({ heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2 } })
@@ -201,18 +155,13 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
         terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
       }
     })
-    const convData = charged && colorN === 1 ? CONVENTIONAL_OPERATORS.filter((c) => c.order === n) : []
-    const conventional = convData.map((c): HeavyOperator => ({
-      id: c.id, order: n, sector: 'bilinear', latex: c.latex, terms: termsOf(c.combo, field), combo: c.combo,
-      coefficient: c.coefficient, relations: c.relations, gaugeEomNote: c.gaugeEomNote, source: c.source,
-    }))
-    const check = convData.length > 0 ? verifyConventional(n, opts.signal) : null
-    if (check) annotateGaugeEom(basis, check.inverse)
-    const spans = check ? check.spans : null
+    const published = charged && colorN === 1
+      ? publishedOperators(n, field, basis, CONVENTIONAL_OPERATORS, colorN, opts.signal)
+      : { cards: [], spans: null }
     orders.push({
-      order: n, count: basis.length, basis, conventional, conventionalSpansBasis: spans,
+      order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans,
       candidates: os.candidates.length, relationRank: os.space.relationRank,
-      antiparticle: heavy.antiparticle ? basis.map((b) => conjugateOperator(b, field, heavy.antiparticle!.name)) : [],
+      antiparticle: heavy.antiparticle ? basis.map((b) => antiparticleCopy(b, field, heavy.antiparticle!.name)) : [],
     })
   }
   const anti = heavy.antiparticle?.name
@@ -227,15 +176,13 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     antiparticle: anti,
     charged,
     colorN,
-    leading: { ...LEADING_OPERATOR, sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
+    leading: { ...LEADING_OPERATOR, latex: printedLatex(LEADING_OPERATOR.latex, field), sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
     orders,
     fourFermion: fourFermionOrders.flatMap((o) => o.basis),
     fourFermionOrders,
     fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
     eomNote: EOM_NOTE,
-    chargeConjugationNote: anti
-      ? `Charge conjugation fixes the ${anti}-bilinears: the same operators with ψ → χ and E, B → −E, −B carry the same coefficients, so they add no free coefficient.`
-      : undefined,
+    antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
   }
 }
 

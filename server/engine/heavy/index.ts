@@ -1,6 +1,9 @@
 /** Heavy-particle (non-relativistic) frame: operator enumeration, rewrites, published basis. */
-export { enumerateHeavy, enumerateHeavyTheory, rewriteHeavy, verifyConventional, type HeavyEnumeration, type HeavyOperator, type HeavyOrder, type HeavyInput, type HeavyOptions } from './enumerate'
-export { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, type ConventionalOperator, type CoefficientRelation } from './conventional'
+export { enumerateHeavy, enumerateHeavyTheory, rewriteHeavy, type HeavyEnumeration, type HeavyOperator, type HeavyOrder, type HeavyInput, type HeavyOptions } from './enumerate'
+export { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedPerReal, printedLatex, type ConventionalOperator, type CoefficientRelation } from './conventional'
+export { verifyConventional, printedRewrite, publishedOperators } from './published'
+export { antiparticleCopy, antiparticleFactor, ANTIPARTICLE_CONVENTION } from './antiparticle'
+export { fieldTex } from './fieldTex'
 export { combo, parseStructure, expandCombo, type Combo, type Structure } from './structure'
 export { orderSpace } from './orderSpace'
 export { enumerateFourFermion, FOUR_FERMION_NOTE, type FourFermionOrder } from './fourFermion'

@@ -52,7 +52,7 @@ describe('heavy fermion coupled to an abelian gauge field: bilinears ψ†…ψ 
     const rel = (id: string) => byOrder(CONVENTIONAL_OPERATORS.find((c) => c.id === id)!.order).conventional.find((c) => c.id === id)!.relations.map((r) => r.relation)
     expect(rel('kinetic')).toEqual(['c_k = 1'])
     expect(rel('spinOrbit')).toEqual(['c_S = 2 c_F − 1'])
-    expect(rel('W2')).toEqual(['c_{W2} = c_{W1} − 1'])
+    expect(rel('W2')).toEqual(['c_{W2} = c_{W1} − 1']) // with W2 printed as −c_{W2} D^iσ·BD^i/4m³ (thomasBmt.test.ts)
     expect(rel('pp')).toEqual(["c_{p'p} = c_F − 1"])
     expect(rel('fermi')).toEqual([])
   })
@@ -80,7 +80,7 @@ describe('neutral heavy fermion and the antiparticle sector', () => {
     const r = enumerateHeavy({ ...qedLike, heavy: { ...qedLike.heavy, antiparticle: { name: 'chi' }, maxOrder: 2 } })
     expect(r.fourFermion).toHaveLength(2)
     expect(r.fourFermion.every((o) => o.order === 2)).toBe(true)
-    expect(r.chargeConjugationNote).toContain('chi')
+    expect(r.antiparticleNote).toContain('Bodwin, Braaten, Lepage convention')
   })
 })
 
@@ -107,13 +107,14 @@ describe('bad input and cancellation', () => {
 })
 
 describe('charge conjugation with both ψ and χ', () => {
-  it('lists one χ-bilinear per ψ-bilinear, coefficient fixed equal (common practice: C invariance of the relativistic theory)', () => {
+  it('lists one χ-bilinear per ψ-bilinear, coefficient fixed by charge conjugation: (−1)^n at 1/m^n (common practice: C invariance of the relativistic theory; derived in antiparticle.test.ts)', () => {
     const r = enumerateHeavy({ ...qedLike, heavy: { ...qedLike.heavy, antiparticle: { name: 'chi' }, maxOrder: 2 } })
     for (const o of r.orders) {
       expect(o.antiparticle).toHaveLength(o.count)
       expect(o.antiparticle.every((a) => a.latex.includes('\\chi') && !a.latex.includes('\\psi'))).toBe(true)
       expect(o.antiparticle.every((a) => a.terms[0]!.chi === 1 && a.terms[0]!['chi*'] === 1)).toBe(true)
     }
-    expect(r.orders[0]!.antiparticle[0]!.relations[0]!.relation).toMatch(/^c\(m1\.1\.C\) = c\(m1\.1\)/)
+    expect(r.orders[0]!.antiparticle[0]!.relations[0]!.relation).toBe('c(m1.1.C) = −c(m1.1)')
+    expect(r.orders[1]!.antiparticle[0]!.relations[0]!.relation).toBe('c(m2.1.C) = c(m2.1)')
   })
 })
