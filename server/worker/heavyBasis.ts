@@ -50,9 +50,14 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
     for (const op of f.basis) add(f.order, key, 'kept', op)
     for (const op of f.conventional) add(f.order, key, 'set_aside', op)
   }
+  // Heavy–light contact operators, class by class (light content and order).
+  for (const c of e.heavyLight ?? []) {
+    classes.push({ order: c.order, dimension: null, key: c.key, rank: c.count, realParameters: c.realParameters, hilbert: null, tallyOk: null, message: (e.heavyLightNote ?? '').slice(0, 600) })
+    for (const op of c.basis) add(c.order, c.key, 'kept', op, {}, c.realParameters / c.count)
+  }
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',
-    max_order: Math.max(0, ...e.orders.map((o) => o.order)), classes: JSON.stringify(classes), note: [e.eomNote, e.antiparticleNote].filter(Boolean).join('\n'),
+    max_order: Math.max(0, ...e.orders.map((o) => o.order), ...(e.heavyLight ?? []).map((c) => c.order)), classes: JSON.stringify(classes), note: [e.eomNote, e.antiparticleNote].filter(Boolean).join('\n'),
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   if (rows.length) await trx('operators').insert(rows.map((r) => ({ ...r, basis_id: basis.id })))

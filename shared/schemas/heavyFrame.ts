@@ -4,9 +4,11 @@ import { z } from 'zod'
  * Heavy-particle (non-relativistic) frame of a theory ("frame": "heavy").
  * A heavy fermion is described by a two-component Pauli field (particle.name, default "psi"),
  * optionally with its antiparticle field (antiparticle.name, e.g. "chi"), coupled to the gauge
- * field of `gaugeGroup` (a group of the theory; abelian U(1) supported by the engine).
+ * field of `gaugeGroup` and to every other gauge group under which it carries a charge or a
+ * non-singlet representation (e.g. SU(3) × U(1) for a heavy quark in QCD and QED).
  * Building blocks: psi, psi†, D_t, spatial D, E, B and the Pauli matrices sigma.
- * maxOrder: highest power of 1/m enumerated in the bilinear sector (1..4).
+ * maxOrder: highest power of 1/m enumerated (1..4).
+ * imposeParity / imposeTimeReversal (default true): impose P and T on the operators.
  */
 const NameSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,15}$/, {
   message: 'a name is a letter followed by up to 15 letters, digits or "_"',
@@ -27,6 +29,8 @@ export const HeavyFrameSchema = z
     antiparticle: z.object({ name: NameSchema }).optional(),
     gaugeGroup: NameSchema,
     maxOrder: z.number().int().min(1).max(4),
+    imposeParity: z.boolean({ error: 'heavy.imposeParity must be true or false' }).optional(),
+    imposeTimeReversal: z.boolean({ error: 'heavy.imposeTimeReversal must be true or false' }).optional(),
   })
   .superRefine((h, ctx) => {
     if (h.antiparticle && h.antiparticle.name === h.particle.name) {

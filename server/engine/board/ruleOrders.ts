@@ -7,11 +7,13 @@ import { EngineInputError } from '../errors'
 import { resolveRule, type RuleContext } from '../rules/defaultWeights'
 import { orderOfOperator, formatOrder } from '../rules/orderOf'
 import { blocksFromClassKey } from '../rules/classKeyBlocks'
+import { lightFields } from '../heavy/lightFields'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
 
 export interface RuleTheory {
   frame?: string
-  fields?: ReadonlyArray<{ name: string, lorentz: 'S' | 'L' | 'R' | 'F' }>
+  fields?: ReadonlyArray<{ name: string, lorentz: 'S' | 'L' | 'R' | 'F', reps?: Record<string, number[]>, charges?: Record<string, string | number>, real?: boolean, flavors?: number }>
+  groups?: ReadonlyArray<{ name: string, type: string, n?: number, gauge?: boolean }>
   heavy?: { particle: { name: string }, antiparticle?: { name: string } }
   countingRules?: CountingRule[]
 }
@@ -28,7 +30,8 @@ export function rulesOf(theory: RuleTheory): CountingRule[] {
 function contextOf(theory: RuleTheory): RuleContext {
   if (theory.frame === 'heavy') {
     if (!theory.heavy) throw new EngineInputError('ruleOrders', 'a heavy-frame theory needs its "heavy" key')
-    return { frame: 'heavy', particle: theory.heavy.particle.name, antiparticle: theory.heavy.antiparticle?.name }
+    const light = lightFields(theory.fields ?? [], theory.groups ?? []).fields.map((f) => ({ name: f.name, dim: f.kind === 'dirac' ? '3/2' : '1' }))
+    return { frame: 'heavy', particle: theory.heavy.particle.name, antiparticle: theory.heavy.antiparticle?.name, light }
   }
   return { frame: 'relativistic', fields: theory.fields ?? [] }
 }

@@ -23,17 +23,22 @@ import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
 import { publishedOperators } from './published'
 import { enumerateFourFermion, FOUR_FERMION_NOTE, type FourFermionOrder } from './fourFermion'
 import type { FourCombo } from './fourStructure'
+import type { LightCombo } from './lightStructure'
+import { enumerateHeavyLight, HEAVY_LIGHT_NOTE, type HeavyLightClass } from './heavyLight'
+import { lorentzKind, type TheoryFieldLike } from './lightFields'
 
 export interface HeavyOperator {
   id: string
   order: number
-  sector: 'leading' | 'bilinear' | 'fourFermion'
+  sector: 'leading' | 'bilinear' | 'fourFermion' | 'heavyLight' | 'heavyHeavy'
   latex: string
   /** Building-block counts of each term (for counting rules; the order is the lowest term). */
   terms: Array<Record<string, number>>
   combo?: Combo
   /** Four-fermion operators: the combination of contact structures (see fourStructure.ts). */
   fourCombo?: FourCombo
+  /** Heavy–light operators: the combination of contact structures (see lightStructure.ts). */
+  lightCombo?: LightCombo
   antiHermitian?: boolean
   coefficient?: string
   relations: CoefficientRelation[]
@@ -74,6 +79,9 @@ export interface HeavyEnumeration {
   /** Per order: counts (also in the rest frame and without C) and the published operators checked. */
   fourFermionOrders: FourFermionOrder[]
   fourFermionNote?: string
+  /** Heavy–light contact operators per order and light content. */
+  heavyLight: HeavyLightClass[]
+  heavyLightNote?: string
   eomNote: string
   /** The antiparticle convention (stated on the board and in exports), when χ is present. */
   antiparticleNote?: string
@@ -82,6 +90,8 @@ export interface HeavyEnumeration {
 export interface HeavyInput {
   heavy: HeavyFrame
   groups?: ReadonlyArray<{ name: string; type: string; n?: number; gauge?: boolean }>
+  /** The theory's roster: its light scalars and fermions couple through heavy–light operators. */
+  fields?: readonly TheoryFieldLike[]
 }
 
 export interface HeavyOptions {
@@ -181,9 +191,26 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     fourFermion: fourFermionOrders.flatMap((o) => o.basis),
     fourFermionOrders,
     fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
+    ...heavyLightPart(input, opts.signal),
     eomNote: EOM_NOTE,
     antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
   }
+}
+
+/** The heavy–light sector of a theory with light scalars or fermions (empty without them). */
+function heavyLightPart(input: HeavyInput, signal?: CancelFlag): { heavyLight: HeavyLightClass[]; heavyLightNote?: string } {
+  const { heavy } = input
+  const light = (input.fields ?? []).filter((f) => lorentzKind(f) !== 'strength')
+  if (light.length === 0) return { heavyLight: [] }
+  const r = enumerateHeavyLight({
+    particle: heavy.particle.name, heavy: { reps: heavy.particle.reps ?? {}, charges: heavy.particle.charges ?? {} },
+    fields: light, groups: input.groups ?? [], maxOrder: heavy.maxOrder,
+    parity: heavy.imposeParity !== false, timeReversal: heavy.imposeTimeReversal !== false,
+  }, signal)
+  const left = r.unpaired.length
+    ? ` Left out: ${r.unpaired.join(', ')} (a Weyl fermion without a partner of opposite chirality and the same charges).`
+    : ''
+  return { heavyLight: r.classes, heavyLightNote: `${HEAVY_LIGHT_NOTE}${heavy.antiparticle ? ' Operators of the antiparticle field with light fields follow from CPT and are not listed.' : ''}${left}` }
 }
 
 /**
@@ -192,12 +219,12 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
  * Method/reference: as enumerateHeavy.
  */
 export function enumerateHeavyTheory(
-  theory: { frame: string; groups: HeavyInput['groups']; heavy?: HeavyFrame },
+  theory: { frame: string; groups: HeavyInput['groups']; fields?: HeavyInput['fields']; heavy?: HeavyFrame },
   opts: HeavyOptions = {},
 ): HeavyEnumeration {
   if (theory.frame !== 'heavy') throw new EngineInputError('enumerateHeavyTheory', `the theory has frame "${theory.frame}"; the heavy-particle engine needs frame "heavy"`)
   if (!theory.heavy) throw new EngineInputError('enumerateHeavyTheory', 'frame "heavy" needs a "heavy" key (particle, gaugeGroup, maxOrder)')
-  return enumerateHeavy({ heavy: theory.heavy, groups: theory.groups }, opts)
+  return enumerateHeavy({ heavy: theory.heavy, groups: theory.groups, fields: theory.fields }, opts)
 }
 
 /**

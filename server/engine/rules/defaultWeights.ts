@@ -9,7 +9,7 @@ import type { CountingRule } from '../../../shared/schemas/countingRules'
 /** The context a rule is applied in: a relativistic field list or a heavy-particle frame. */
 export type RuleContext =
   | { frame: 'relativistic'; fields: ReadonlyArray<{ name: string; lorentz: 'S' | 'L' | 'R' | 'F' }> }
-  | { frame: 'heavy'; particle: string; antiparticle?: string }
+  | { frame: 'heavy'; particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }
 
 /** A rule with every weight resolved to an exact rational. */
 export interface ResolvedRule {
@@ -39,7 +39,7 @@ export const HEAVY_MASS_WEIGHTS: Readonly<Record<string, string>> = {
   psi: '3/2', D: '1', D_t: '1', E: '2', B: '2', sigma: '0',
 }
 
-function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle?: string }): Map<string, Rational> {
+function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }): Map<string, Rational> {
   const table = rule.kind === 'velocity' ? HEAVY_VELOCITY_WEIGHTS : rule.kind === 'massRatio' ? HEAVY_MASS_WEIGHTS : {}
   const out = new Map<string, Rational>()
   for (const [k, v] of Object.entries(table)) {
@@ -49,6 +49,8 @@ function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle
       }
     } else out.set(k, parseRational(v))
   }
+  // Light fields of heavy–light operators: their mass dimension under the 1/m rule.
+  if (rule.kind === 'massRatio') for (const f of ctx.light ?? []) { out.set(f.name, parseRational(f.dim)); out.set(`${f.name}*`, parseRational(f.dim)) }
   return out
 }
 
