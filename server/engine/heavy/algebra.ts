@@ -10,9 +10,12 @@
  * (all derivatives moved off ψ'†), so X itself is the object we manipulate.
  *
  * An Element maps a key "<spin>:<word>" to an integer coefficient; spin 0 is the unit and
- * 1..3 are s_1..s_3; a word is a string of digits 0 (D_t) and 1..3 (D_x, D_y, D_z), the
- * leftmost letter acting last. A word "t<digits>" (non-abelian only) stands for the colour
- * trace of the function that <digits> produces acting on a constant, times the unit matrix.
+ * 1..3 are s_1..s_3; a word is a string of letters, the leftmost acting last: digits 0 (D_t)
+ * and 1..3 (D_x, D_y, D_z); a field-strength letter of an abelian factor g (ℰ_i, ℬ_i of that
+ * factor alone, multiplying: see fieldLetter); and a bracketed atom "(w)" — the colour trace
+ * of the function that w produces acting on a constant, times the unit matrix (non-abelian).
+ * With several gauge factors D contains every coupled connection, so [D_t, D_i] is the sum of
+ * their field strengths (charges absorbed into each connection).
  */
 import { EngineInputError } from '../errors'
 
@@ -65,13 +68,38 @@ export function multiply(a: Element, b: Element): Element {
     const sa = Number(ka[0])
     const wa = ka.slice(2)
     for (const [kb, cb] of b) {
-      const wb = kb.slice(2)
-      if ((wa.startsWith('t') && wb !== '') || (wb.startsWith('t') && wa !== '')) {
-        throw new EngineInputError('multiply', `a colour trace can only multiply spin matrices, got "${wa}" · "${wb}"`)
-      }
       const { spin, sign } = spinProduct(sa, Number(kb[0]))
       addTerm(out, termKey(spin, wa + kb.slice(2)), sign * ca * cb)
     }
+  }
+  return out
+}
+
+/**
+ * The word letter of a field-strength component of abelian factor g: ℰ_i (which = 'E') or
+ * ℬ_i ('B'), i = 1..3; characters from "A" upward, six per factor.
+ * @example fieldLetter(0, 'B', 3) // "F"
+ */
+export function fieldLetter(g: number, which: 'E' | 'B', i: number): string {
+  return String.fromCharCode(65 + 6 * g + (which === 'E' ? 0 : 3) + i - 1)
+}
+
+/** Decode a field-strength letter: its factor, E or B, and component. */
+export function decodeFieldLetter(ch: string): { g: number; which: 'E' | 'B'; i: number } {
+  const c = ch.charCodeAt(0) - 65
+  const r = c % 6
+  return { g: Math.floor(c / 6), which: r < 3 ? 'E' : 'B', i: (r % 3) + 1 }
+}
+
+/** The atoms of a word: single letters, or "(…)" trace atoms. */
+export function wordAtoms(word: string): string[] {
+  const out: string[] = []
+  for (let i = 0; i < word.length; i++) {
+    if (word[i] !== '(') { out.push(word[i]!); continue }
+    const j = word.indexOf(')', i)
+    if (j < 0) throw new EngineInputError('wordAtoms', `unclosed trace in the word "${word}"`)
+    out.push(word.slice(i, j + 1))
+    i = j
   }
   return out
 }
@@ -94,15 +122,20 @@ export function letterElement(letter: 'D' | 'T' | 'E' | 'B' | 's', index: number
   }
 }
 
-/** Colour trace of every term: "s:w" → "s:tw" (the words must be untraced and non-empty). */
+/** Colour trace of every term: "s:w" → "s:(w)" (the words must be non-empty and trace-free). */
 export function traceElement(a: Element): Element {
   const out: Element = new Map()
   for (const [k, c] of a) {
     const { spin, word } = splitKey(k)
-    if (word === '' || word.startsWith('t')) throw new EngineInputError('traceElement', `cannot trace the word "${word}"`)
-    addTerm(out, termKey(spin, `t${word}`), c)
+    if (word === '' || word.includes('(')) throw new EngineInputError('traceElement', `cannot trace the word "${word}"`)
+    addTerm(out, termKey(spin, `(${word})`), c)
   }
   return out
+}
+
+/** The abelian field-strength letter of factor g as an element. */
+export function fieldElement(g: number, which: 'E' | 'B', i: number): Element {
+  return new Map([[termKey(0, fieldLetter(g, which, i)), 1]])
 }
 
 /** True when no term survives. */

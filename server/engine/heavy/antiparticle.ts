@@ -12,7 +12,17 @@
  * CPT instead and picks up the operator's P and T signs.
  */
 import type { HeavyOperator } from './enumerate'
-import { comboLatex } from './display'
+import { fieldTex } from './fieldTex'
+
+/** The same printed bilinear between the antiparticle's fields: f^†\, … \, f → a^†\, … \, a. */
+function renamedLatex(latex: string, field: string, anti: string): string {
+  const f = fieldTex(field)
+  const a = fieldTex(anti)
+  const head = `${f}^\\dagger`
+  const tail = `\\, ${f}`
+  if (!latex.startsWith(head) || !latex.endsWith(tail)) return latex
+  return `${a}^\\dagger${latex.slice(head.length, latex.length - tail.length)}\\, ${a}`
+}
 
 export const ANTIPARTICLE_CONVENTION =
   'Antiparticle field χ: the lower two components of the Dirac field (Bodwin, Braaten, Lepage convention): χ creates the ' +
@@ -41,7 +51,7 @@ export function antiparticleCopy(op: HeavyOperator, field: string, anti: string)
   return {
     ...op,
     id: `${op.id}.C`,
-    latex: op.combo ? comboLatex(op.combo, !!op.antiHermitian, anti) : op.latex,
+    latex: renamedLatex(op.latex, field, anti),
     terms: op.terms.map((t) => renameTerms(t, field, anti)),
     fixedBy: { id: op.id, factor },
     relations: [{

@@ -4,15 +4,15 @@
  * Dictionary from the real algebra: ℰ = igE, ℬ = −igB, s = iσ; a combination that is
  * anti-Hermitian in the real algebra is multiplied by i to give a Hermitian operator.
  */
-import type { Combo, Structure } from './structure'
+import { factorOf, fieldKind, type Combo, type Structure } from './structure'
 import { EngineConsistencyError } from '../errors'
 import { isZero, mul, neg, rat, toString, type Rational } from '../exact/rational'
 import { fieldTex } from './fieldTex'
 
 const LABELS = 'ijklmnpqr'
 
-/** LaTeX of one structure with indices named i, j, k, … */
-export function structureLatex(s: Structure): string {
+/** LaTeX of one structure with indices named i, j, k, …; `names` label each gauge factor's E and B. */
+export function structureLatex(s: Structure, names?: readonly string[]): string {
   const n = (s.spin ? 1 : 0) + s.letters.filter((l) => l !== 'T').length
   const label = new Array<string>(n).fill('?')
   let next = 0
@@ -24,11 +24,15 @@ export function structureLatex(s: Structure): string {
   if (s.spin) parts.push(`\\sigma^{${label[slot++]}}`)
   const letters: string[] = []
   for (const l of s.letters) {
+    const kind = fieldKind(l)
     if (l === 'T') letters.push('D_t')
-    else letters.push(`${l}^{${label[slot++]}}`)
+    else if (kind && names) letters.push(`${kind}_{\\mathrm{${names[factorOf(l)]}}}^{${label[slot++]}}`)
+    else letters.push(`${kind ?? l}^{${label[slot++]}}`)
   }
-  if (s.traced) parts.push(`\\mathrm{tr}\\left(${letters.join(' ')}\\right)`)
-  else parts.push(...letters)
+  if (s.trace) {
+    const [a, b] = s.trace
+    parts.push(...letters.slice(0, a), `\\mathrm{tr}\\left(${letters.slice(a, b).join(' ')}\\right)`, ...letters.slice(b))
+  } else parts.push(...letters)
   return parts.join(' ')
 }
 
@@ -41,8 +45,8 @@ function gcd(a: number, b: number): number {
 
 /** Power of i relating a real-algebra structure to its physical letters. */
 export function physicalPhase(s: Structure): number {
-  const nE = s.letters.filter((l) => l === 'E').length
-  const nB = s.letters.filter((l) => l === 'B').length
+  const nE = s.letters.filter((l) => fieldKind(l) === 'E').length
+  const nB = s.letters.filter((l) => fieldKind(l) === 'B').length
   return (((nE - nB + (s.spin ? 1 : 0)) % 4) + 4) % 4
 }
 
@@ -91,7 +95,7 @@ export function realPerDisplayed(c: Combo, antiHermitian: boolean): Phased {
  * `antiHermitian` marks a combination that is anti-Hermitian in the real algebra.
  * @example comboLatex([{coef:1,s:kinetic}], false, 'psi') // "\psi^\dagger D^{i} D^{i} \psi"
  */
-export function comboLatex(c: Combo, antiHermitian: boolean, field: string): string {
+export function comboLatex(c: Combo, antiHermitian: boolean, field: string, names?: readonly string[]): string {
   if (c.length === 0) return '0'
   const d = displayOf(c, antiHermitian)
   const body = c
@@ -99,7 +103,7 @@ export function comboLatex(c: Combo, antiHermitian: boolean, field: string): str
       const k = (t.coef * d.lead) / d.g
       const mag = Math.abs(k) === 1 ? '' : `${Math.abs(k)}\\,`
       const op = i === 0 ? (k < 0 ? '-' : '') : k < 0 ? ' - ' : ' + '
-      return `${op}${mag}${structureLatex(t.s)}`
+      return `${op}${mag}${structureLatex(t.s, names)}`
     })
     .join('')
   const pre = `${d.sign < 0 ? '-' : ''}${d.imaginary ? 'i' : ''}`
@@ -112,7 +116,7 @@ export function comboLatex(c: Combo, antiHermitian: boolean, field: string): str
 export function structureBlocks(s: Structure, field: string): Record<string, number> {
   const b: Record<string, number> = { [field]: 1, [`${field}*`]: 1 }
   const bump = (k: string): void => { b[k] = (b[k] ?? 0) + 1 }
-  for (const l of s.letters) bump(l === 'T' ? 'D_t' : l)
+  for (const l of s.letters) bump(l === 'T' ? 'D_t' : fieldKind(l) ?? l)
   if (s.spin) bump('sigma')
   return b
 }

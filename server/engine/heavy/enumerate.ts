@@ -17,7 +17,8 @@ import type { Rational } from '../exact/rational'
 import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
 import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedLatex, type CoefficientRelation } from './conventional'
 import { comboLatex, structureBlocks } from './display'
-import { orderSpace } from './orderSpace'
+import { orderSpace, orderSpaceFor, type SpaceConfig } from './orderSpace'
+import { heavyGaugeSetup } from './gaugeSetup'
 import { expandCombo, type Combo } from './structure'
 import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
 import { publishedOperators } from './published'
@@ -72,6 +73,10 @@ export interface HeavyEnumeration {
   charged: boolean
   /** Colour dimension: 1 for an abelian gauge field, N for SU(N). */
   colorN: number
+  /** The gauge factors whose field strengths appear, in the order of the letters' factor index. */
+  gaugeGroups: Array<{ name: string; kind: 'su' | 'u1'; coupled: boolean }>
+  /** Which discrete symmetries were imposed on the operators. */
+  symmetries: { parity: boolean; timeReversal: boolean }
   leading: HeavyOperator
   orders: HeavyOrder[]
   /** Enumerated four-fermion basis, all orders (1/m², and 1/m⁴ when maxOrder = 4). */
@@ -104,32 +109,6 @@ const EOM_NOTE =
   'their effect is moved to higher orders by a field redefinition. Antisymmetric [D_i, D_j] is written as B ' +
   'and [D_t, D_i] as E. The gauge field\'s own EOM is not used.'
 
-/** Whether the heavy field couples to the gauge field, and its colour dimension (1 = abelian). */
-function gaugeInfo(input: HeavyInput): { charged: boolean; colorN: number } {
-  const { heavy, groups } = input
-  const g = groups?.find((x) => x.name === heavy.gaugeGroup)
-  if (groups && !g) throw new EngineInputError('enumerateHeavy', `gauge group "${heavy.gaugeGroup}" is not among the theory's groups`)
-  if (g && g.type === 'SU') return nonAbelianInfo(heavy, g.n ?? 0)
-  if (g && g.type !== 'U1') {
-    throw new EngineInputError('enumerateHeavy', `gauge group "${heavy.gaugeGroup}" has type ${g.type}; only U1 or SU(N) gauge groups are supported`)
-  }
-  const q = heavy.particle.charges?.[heavy.gaugeGroup]
-  return { charged: q !== undefined && !/^-?0+(\/\d+)?$/.test(String(q)), colorN: 1 }
-}
-
-function nonAbelianInfo(heavy: HeavyFrame, n: number): { charged: boolean; colorN: number } {
-  const labels = heavy.particle.reps?.[heavy.gaugeGroup]
-  if (!labels || labels.every((x) => x === 0)) return { charged: false, colorN: 1 }
-  const fund = labels.length === n - 1 && labels.reduce((a, b) => a + b, 0) === 1 && (labels[0] === 1 || labels[n - 2] === 1)
-  if (!fund) {
-    throw new EngineInputError('enumerateHeavy', `the heavy particle must be a fundamental or antifundamental of SU(${n}), got [${labels.join(',')}]`)
-  }
-  if (heavy.maxOrder > 3) {
-    throw new EngineInputError('enumerateHeavy', `non-abelian heavy-frame enumeration is limited to maxOrder 3, got ${heavy.maxOrder}`)
-  }
-  return { charged: true, colorN: n }
-}
-
 function termsOf(c: Combo, field: string): Array<Record<string, number>> {
   const seen = new Map<string, Record<string, number>>()
   for (const t of c) {
@@ -151,21 +130,26 @@ function termsOf(c: Combo, field: string): Array<Record<string, number>> {
  */
 export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): HeavyEnumeration {
   const { heavy } = input
-  const { charged, colorN } = gaugeInfo(input)
+  const gauge = heavyGaugeSetup(heavy, input.groups, input.fields)
+  const { charged, colorN } = gauge
+  const config: SpaceConfig = { setup: gauge.setup, parity: heavy.imposeParity !== false, timeReversal: heavy.imposeTimeReversal !== false }
+  const single = gauge.setup.factors.length === 1 && config.parity && config.timeReversal
   const field = heavy.particle.name
   const orders: HeavyOrder[] = []
   for (let n = 1; n <= heavy.maxOrder; n++) {
     if (opts.signal?.aborted) throw new EngineCancelledError('heavy enumeration')
     opts.onProgress?.((n - 1) / heavy.maxOrder, `order 1/m^${n}`)
-    const os = orderSpace(n, charged, opts.signal, colorN)
+    const os = orderSpaceFor(n, config, opts.signal)
+    const names = gauge.setup.factors.length > 1 ? gauge.names : undefined
     const basis = os.space.basis.map((b, i): HeavyOperator => {
       const c = os.candidates[b]!
       return {
-        id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field),
+        id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field, names),
         terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
+        ...(c.parityOdd ? { parityOdd: true } : {}), ...(c.timeOdd ? { timeOdd: true } : {}),
       }
     })
-    const published = charged && colorN === 1
+    const published = charged && single && colorN === 1
       ? publishedOperators(n, field, basis, CONVENTIONAL_OPERATORS, colorN, opts.signal)
       : { cards: [], spans: null }
     orders.push({
@@ -178,7 +162,7 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
   const ffOrders = anti ? [2, 4].filter((n) => n <= heavy.maxOrder) : []
   const fourFermionOrders = ffOrders.map((n) => {
     opts.onProgress?.(heavy.maxOrder / (heavy.maxOrder + 1), `four-fermion 1/m^${n}`)
-    return enumerateFourFermion(n, colorN, field, anti!, opts.signal)
+    return enumerateFourFermion(n, colorN, field, anti!, opts.signal, config.timeReversal)
   })
   opts.onProgress?.(1, 'done')
   return {
@@ -186,13 +170,15 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     antiparticle: anti,
     charged,
     colorN,
+    gaugeGroups: gauge.names.map((name, i) => ({ name, kind: gauge.setup.factors[i]!.kind, coupled: gauge.setup.factors[i]!.coupled })),
+    symmetries: { parity: config.parity, timeReversal: config.timeReversal },
     leading: { ...LEADING_OPERATOR, latex: printedLatex(LEADING_OPERATOR.latex, field), sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
     orders,
     fourFermion: fourFermionOrders.flatMap((o) => o.basis),
     fourFermionOrders,
     fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
     ...heavyLightPart(input, opts.signal),
-    eomNote: EOM_NOTE,
+    eomNote: EOM_NOTE + (gauge.unseen.length ? ` Field strengths of ${gauge.unseen.join(', ')} (non-abelian groups the heavy particle does not feel) would enter through colour traces of their own and are not included.` : ''),
     antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
   }
 }

@@ -59,13 +59,13 @@ function toOperator(order: number, i: number, combo: HeavyOperator['fourCombo'] 
  * vertex at random points over two primes; greedy basis. Reference: Bodwin, Braaten, Lepage,
  * Phys. Rev. D 51 (1995) 1125.
  */
-export function enumerateFourFermion(order: number, colorN: number, particle: string, anti: string, signal?: CancelFlag): FourFermionOrder {
+export function enumerateFourFermion(order: number, colorN: number, particle: string, anti: string, signal?: CancelFlag, timeReversal = true): FourFermionOrder {
   if (order !== 2 && order !== 4) throw new EngineInputError('enumerateFourFermion', `order must be 2 or 4 (parity-even contact operators), got ${order}`)
   if (signal?.aborted) throw new EngineCancelledError('four-fermion enumeration')
-  const space = fourFermionSpace(order, { colorN, signal })
-  const rest = fourFermionSpace(order, { colorN, restFrame: true, signal })
-  const noC = fourFermionSpace(order, { colorN, chargeConjugation: false, signal })
-  const restNoC = fourFermionSpace(order, { colorN, chargeConjugation: false, restFrame: true, signal })
+  const space = fourFermionSpace(order, { colorN, timeReversal, signal })
+  const rest = fourFermionSpace(order, { colorN, timeReversal, restFrame: true, signal })
+  const noC = fourFermionSpace(order, { colorN, timeReversal, chargeConjugation: false, signal })
+  const restNoC = fourFermionSpace(order, { colorN, timeReversal, chargeConjugation: false, restFrame: true, signal })
   const basis = space.basis.map((b, i) => toOperator(order, i, space.candidates[b]!.combo, space.candidates[b]!.antiHermitian, particle, anti))
   const conv = conventionalFour(order, colorN)
   const combos = conv.map((c) => c.combo)

@@ -8,7 +8,7 @@ import { EngineCancelledError, EngineInputError } from '../errors'
 import { PrimeSet, SeededRandom, rref, type CancelFlag, type PrimeField, type SolveOutcome } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { Element } from './algebra'
-import { evaluationRows, randomPoint, type KinematicPoint } from './symbol'
+import { evaluationRows, randomPoint, singleFactor, type GaugeSetup, type KinematicPoint } from './symbol'
 
 interface PrimeData {
   F: PrimeField
@@ -24,22 +24,40 @@ export interface QuotientOptions {
   signal?: CancelFlag
   /** Colour dimension of the gauge-field insertions (1 = abelian, N for SU(N) fundamental). */
   colorN?: number
+  /** Gauge factors (default: one factor, U(1) or SU(colorN)); each sector is sampled for every multiset of factors. */
+  setup?: GaugeSetup
 }
 
-/** Sample points per sector until the sector's rank leaves at least 3 points unused. */
-function samplePoints(F: PrimeField, rng: SeededRandom, cols: readonly Element[], n: number, colorN: number, signal?: CancelFlag): { pts: KinematicPoint[]; rows: number[][] } {
-  let pts: KinematicPoint[] = []
+/** Multisets of n factor indices out of f. */
+function factorTuples(n: number, f: number, from = 0): number[][] {
+  if (n === 0) return [[]]
+  const out: number[][] = []
+  for (let g = from; g < f; g++) for (const rest of factorTuples(n - 1, f, g)) out.push([g, ...rest])
+  return out
+}
+
+/**
+ * Sample points per sector until the last three points add nothing to the rank (each point
+ * gives 4·N² rows: spin components times colour entries), so the rank is that of the symbols.
+ */
+function samplePoints(F: PrimeField, rng: SeededRandom, cols: readonly Element[], factors: readonly number[], setup: GaugeSetup, signal?: CancelFlag): { pts: KinematicPoint[]; rows: number[][] } {
+  const pts: KinematicPoint[] = []
   let rows: number[][] = []
-  let want = 8
+  const perPoint: number[] = []
+  let want = 4
   for (;;) {
     if (signal?.aborted) throw new EngineCancelledError('heavy enumeration')
     while (pts.length < want) {
-      const p = randomPoint(F, rng, n, colorN)
+      const p = randomPoint(F, rng, factors, setup)
       pts.push(p)
-      rows = rows.concat(evaluationRows(F, cols, [p]))
+      const r = evaluationRows(F, cols, [p])
+      perPoint.push(r.length)
+      rows = rows.concat(r)
     }
-    const r = rows.length === 0 ? 0 : rref(F, rows, signal).rank
-    if (r <= pts.length - 3) return { pts, rows }
+    const last3 = perPoint.slice(-3).reduce((a, b) => a + b, 0)
+    const all = rows.length === 0 ? 0 : rref(F, rows, signal).rank
+    const fewer = rows.length - last3 === 0 ? 0 : rref(F, rows.slice(0, rows.length - last3), signal).rank
+    if (all === fewer) return { pts, rows }
     want *= 2
   }
 }
@@ -49,8 +67,9 @@ function primeData(F: PrimeField, index: number, cols: readonly Element[], opts:
   const rng = new SeededRandom((opts.seed ?? 20261202) + 7919 * index)
   let points: KinematicPoint[] = []
   let rows: number[][] = []
-  for (const n of opts.sectors ?? [0, 1, 2]) {
-    const s = samplePoints(F, rng, cols, n, opts.colorN ?? 1, opts.signal)
+  const setup = opts.setup ?? singleFactor(opts.colorN ?? 1)
+  for (const n of opts.sectors ?? [0, 1, 2]) for (const factors of factorTuples(n, setup.factors.length)) {
+    const s = samplePoints(F, rng, cols, factors, setup, opts.signal)
     points = points.concat(s.pts)
     rows = rows.concat(s.rows)
   }

@@ -7,17 +7,34 @@
  * letters in order.
  */
 import { EngineInputError } from '../errors'
-import { addScaled, letterElement, levi, multiply, termKey, traceElement, type Element } from './algebra'
+import { addScaled, fieldElement, letterElement, levi, multiply, termKey, traceElement, type Element } from './algebra'
+import type { GaugeSetup } from './symbol'
 
-export type Letter = 'D' | 'T' | 'E' | 'B'
+/** D, D_t, and field strengths E, B of gauge factor 0 ("E") or of factor g ("E1", "B2", …). */
+export type Letter = 'D' | 'T' | 'E' | 'B' | `E${number}` | `B${number}`
 
 export interface Structure {
   letters: Letter[]
   spin: boolean
-  /** The letters form a colour trace tr(…) (non-abelian gauge groups only). */
-  traced?: boolean
+  /** Letters [from, to) form a colour trace tr(…)·1 (non-abelian gauge factor only). */
+  trace?: [number, number]
   pairs: Array<[number, number]>
   eps?: [number, number, number]
+}
+
+/** E or B for a field-strength letter, null for D and D_t. */
+export function fieldKind(l: Letter): 'E' | 'B' | null {
+  return l[0] === 'E' ? 'E' : l[0] === 'B' ? 'B' : null
+}
+
+/** Gauge factor of a field-strength letter (0 for plain E, B). */
+export function factorOf(l: Letter): number {
+  return l.length > 1 ? Number(l.slice(1)) : 0
+}
+
+/** The field-strength letter of kind E/B for factor g. */
+export function fieldLetterOf(which: 'E' | 'B', g: number): Letter {
+  return (g === 0 ? which : `${which}${g}`) as Letter
 }
 
 /** A signed linear combination of structures (integer coefficients). */
@@ -38,7 +55,7 @@ function permSign(a: number[]): number {
 /** Canonical form (pairs sorted, ε slots ascending) and the sign picked up by sorting ε. */
 export function canonical(s: Structure): { sign: number; s: Structure } {
   const pairs = s.pairs.map(([a, b]) => (a < b ? [a, b] : [b, a]) as [number, number]).sort((x, y) => x[0] - y[0])
-  const base = { letters: s.letters, spin: s.spin, pairs, ...(s.traced ? { traced: true } : {}) }
+  const base = { letters: s.letters, spin: s.spin, pairs, ...(s.trace ? { trace: s.trace } : {}) }
   if (!s.eps) return { sign: 1, s: base }
   const sorted = [...s.eps].sort((x, y) => x - y) as [number, number, number]
   return { sign: permSign(s.eps), s: { ...base, eps: sorted } }
@@ -48,7 +65,7 @@ export function canonical(s: Structure): { sign: number; s: Structure } {
 export function structureKey(s: Structure): string {
   const c = canonical(s).s
   const p = c.pairs.map(([a, b]) => `${a}${b}`).join('.')
-  return `${c.traced ? 'tr' : ''}${c.spin ? 's' : ''}${c.letters.join('')}|${p}|${c.eps ? c.eps.join('') : ''}`
+  return `${c.trace ? `tr${c.trace.join('-')}` : ''}${c.spin ? 's' : ''}${c.letters.join(',')}|${p}|${c.eps ? c.eps.join('') : ''}`
 }
 
 /** The same structure with the letter order reversed (spin slot fixed). */
@@ -56,8 +73,9 @@ export function reverseStructure(s: Structure): Structure {
   const off = s.spin ? 1 : 0
   const n = slotCount(s) - off
   const map = (slot: number): number => (slot < off ? slot : off + (n - 1 - (slot - off)))
+  const L = s.letters.length
   return {
-    ...(s.traced ? { traced: true } : {}),
+    ...(s.trace ? { trace: [L - s.trace[1], L - s.trace[0]] as [number, number] } : {}),
     letters: [...s.letters].reverse(),
     spin: s.spin,
     pairs: s.pairs.map(([a, b]) => [map(a), map(b)] as [number, number]),
@@ -65,7 +83,9 @@ export function reverseStructure(s: Structure): Structure {
   }
 }
 
-const THETA: Record<Letter, number> = { D: -1, T: 1, E: 1, B: -1 }
+function theta(l: Letter): number {
+  return l === 'D' || fieldKind(l) === 'B' ? -1 : 1
+}
 
 /**
  * Θ = T∘† (time reversal after Hermitian conjugation), a linear anti-automorphism:
@@ -74,7 +94,7 @@ const THETA: Record<Letter, number> = { D: -1, T: 1, E: 1, B: -1 }
 export function thetaCombo(c: Combo): Combo {
   return c.map(({ coef, s }) => {
     let sign = s.spin ? -1 : 1
-    for (const l of s.letters) sign *= THETA[l]
+    for (const l of s.letters) sign *= theta(l)
     return { coef: coef * sign, s: reverseStructure(s) }
   })
 }
@@ -89,7 +109,7 @@ export function daggerCombo(c: Combo): Combo {
 
 /** Parity: D and E are odd, D_t, B and σ even. */
 export function isParityEven(s: Structure): boolean {
-  return s.letters.filter((l) => l === 'D' || l === 'E').length % 2 === 0
+  return s.letters.filter((l) => l === 'D' || fieldKind(l) === 'E').length % 2 === 0
 }
 
 /** Merge equal structures and drop zero coefficients. */
@@ -131,22 +151,46 @@ function assignments(s: Structure): Array<{ values: number[]; weight: number }> 
 }
 
 /**
+ * The element of one letter with a concrete index. With several gauge factors, [D_t, D_i] is
+ * the sum of all coupled field strengths; the factor that owns the commutator (the coupled
+ * SU(N), else the first coupled U(1)) is the commutator minus the other coupled abelian
+ * letters, and every other factor's E, B are direct letters (algebra.ts, fieldLetter).
+ */
+function letterOf(l: Letter, index: number, setup?: GaugeSetup): Element {
+  const which = fieldKind(l)
+  if (!which) return letterElement(l as 'D' | 'T', index)
+  const g = factorOf(l)
+  const factors = setup?.factors ?? [{ kind: 'u1', coupled: true }]
+  const su = factors.findIndex((f) => f.coupled && f.kind === 'su')
+  const commutator = su >= 0 ? su : factors.findIndex((f) => f.coupled)
+  if (g !== commutator) return fieldElement(g, which, index)
+  let el = letterElement(which, index)
+  factors.forEach((f, h) => { if (h !== g && f.coupled) el = addScaled(el, fieldElement(h, which, index), -1) })
+  return el
+}
+
+/**
  * Expand a structure into the word algebra (sum over index values).
  * @example expandStructure(parseStructure('D_i D_i').s) // D_1D_1 + D_2D_2 + D_3D_3
  * Method: explicit index sums. Reference: common practice.
  */
-export function expandStructure(s: Structure): Element {
+export function expandStructure(s: Structure, setup?: GaugeSetup): Element {
   const n = slotCount(s)
   const used = new Array<number>(n).fill(0)
   for (const [a, b] of s.pairs) { used[a]!++; used[b]!++ }
   if (s.eps) for (const a of s.eps) used[a]!++
   if (used.some((u) => u !== 1)) throw new EngineInputError('expandStructure', `every index slot must be contracted once, got ${used.join(',')}`)
+  const [t0, t1] = s.trace ?? [0, 0]
   let total: Element = new Map()
   for (const { values, weight } of assignments(s)) {
     let slot = s.spin ? 1 : 0
-    let el: Element = new Map([[termKey(0, ''), weight]])
-    for (const l of s.letters) el = multiply(el, letterElement(l, l === 'T' ? 0 : values[slot++]!))
-    if (s.traced) el = traceElement(el)
+    const parts: Element[] = [new Map([[termKey(0, ''), 1]]), new Map([[termKey(0, ''), 1]]), new Map([[termKey(0, ''), 1]])]
+    s.letters.forEach((l, i) => {
+      const part = i < t0 ? 0 : i < t1 ? 1 : 2
+      parts[part] = multiply(parts[part]!, letterOf(l, l === 'T' ? 0 : values[slot++]!, setup))
+    })
+    let el = s.trace ? multiply(multiply(parts[0]!, traceElement(parts[1]!)), parts[2]!) : multiply(parts[0]!, parts[2]!)
+    el = new Map([...el].map(([k, c]) => [k, c * weight]))
     if (s.spin) el = multiply(letterElement('s', values[0]!), el)
     total = addScaled(total, el)
   }
@@ -154,15 +198,16 @@ export function expandStructure(s: Structure): Element {
 }
 
 /** Expand a combination. */
-export function expandCombo(c: Combo): Element {
+export function expandCombo(c: Combo, setup?: GaugeSetup): Element {
   let total: Element = new Map()
-  for (const { coef, s } of c) total = addScaled(total, expandStructure(s), coef)
+  for (const { coef, s } of c) total = addScaled(total, expandStructure(s, setup), coef)
   return total
 }
 
 /**
- * Parse a structure written as space-separated tokens: D_i, T, E_i, B_i, s_i, eps_ijk
- * (each index label used exactly twice); a token "tr" puts the letters in a colour trace. Returns the ε-sorting sign and the structure.
+ * Parse a structure written as space-separated tokens: D_i, T, E_i, B_i (E1_i, B2_i for
+ * other gauge factors), s_i, eps_ijk (each index label used exactly twice); a token "tr" puts
+ * all letters in a colour trace, "tr[" … "]" only those between. Returns the ε-sorting sign and the structure.
  * @example parseStructure('s_k eps_kij D_i E_j') // spin-orbit-type σ·(D×E)
  */
 export function parseStructure(text: string): { sign: number; s: Structure } {
@@ -170,10 +215,13 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
   const slotLabels: string[] = []
   let spin = false
   let epsLabels: string[] | undefined
-  let traced = false
+  let trace: [number, number] | undefined
+  let open = -1
   for (const tok of text.trim().split(/\s+/)) {
-    if (tok === 'tr') { traced = true; continue }
-    const m = /^(D|T|E|B|s|eps)(?:_([a-z]+))?$/.exec(tok)
+    if (tok === 'tr') { trace = [0, -1]; continue }
+    if (tok === 'tr[') { open = letters.length; continue }
+    if (tok === ']') { trace = [open, letters.length]; continue }
+    const m = /^(D|T|E\d*|B\d*|s|eps)(?:_([a-z]+))?$/.exec(tok)
     if (!m) throw new EngineInputError('parseStructure', `unknown token "${tok}" in "${text}"`)
     const [, name, idx] = m
     if (name === 'eps') {
@@ -208,7 +256,8 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
       return slots[0]!
     }) as [number, number, number]
   }
-  const can = canonical({ letters, spin, pairs, eps, ...(traced ? { traced: true } : {}) })
+  if (trace && trace[1] < 0) trace = [0, letters.length]
+  const can = canonical({ letters, spin, pairs, eps, ...(trace ? { trace } : {}) })
   return { sign: can.sign, s: can.s }
 }
 

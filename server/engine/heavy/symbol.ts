@@ -8,10 +8,23 @@
  * faithful: in the normal form Σ c_α(F-jets) D^α the coefficients with k field strengths
  * first appear at n = k, and k ≤ 2 below dimension 6 (common practice: gauge-covariant jet
  * normal form; checked numerically in tests/unit/heavy/faithfulness.test.ts).
- * A colour-trace word "t<w>" is tr(w·1) times the unit matrix (w acting on a constant, ℓ = 0).
+ * A colour-trace atom "(w)" is tr(w·1) times the unit matrix (w acting on a constant, ℓ = 0).
+ * With several gauge factors each insertion belongs to one factor: a coupled factor's field
+ * enters D (a random traceless matrix for SU(N), the unit matrix for U(1), charges absorbed);
+ * an abelian factor's field-strength letters pick up that factor's insertions directly.
  */
 import type { PrimeField, SeededRandom } from '../finite'
-import { splitKey, type Element } from './algebra'
+import { decodeFieldLetter, levi, splitKey, wordAtoms, type Element } from './algebra'
+
+/** One gauge factor as the symbol sees it: SU(N) (the heavy field in the fundamental) or U(1). */
+export interface GaugeFactor { kind: 'su' | 'u1'; coupled: boolean }
+/** The gauge factors of a heavy-frame computation and the colour dimension N (1 without SU(N)). */
+export interface GaugeSetup { colorN: number; factors: GaugeFactor[] }
+
+/** One coupled factor: U(1) (colorN = 1) or SU(colorN). */
+export function singleFactor(colorN = 1): GaugeSetup {
+  return { colorN, factors: [{ kind: colorN > 1 ? 'su' : 'u1', coupled: true }] }
+}
 
 export interface KinematicPoint {
   /** ∂-eigenvalue of the heavy field (4 components: t, x, y, z). */
@@ -20,13 +33,13 @@ export interface KinematicPoint {
   k: number[][]
   /** Polarisations (connection components) of the insertions. */
   e: number[][]
-  /** Colour dimension N and the insertions' colour matrices (row-major N×N). */
+  /** Colour dimension N and, per insertion, its factor and its matrix in D (null when D does not see it). */
   colorN: number
-  mats: number[][]
+  factor: number[]
+  mats: Array<number[] | null>
 }
 
 function randomMatrix(F: PrimeField, rng: SeededRandom, N: number): number[] {
-  if (N === 1) return [1]
   const m = Array.from({ length: N * N }, () => rng.below(F.p))
   let tr = 0
   for (let i = 0; i < N - 1; i++) tr = F.add(tr, m[i * N + i]!)
@@ -34,12 +47,23 @@ function randomMatrix(F: PrimeField, rng: SeededRandom, N: number): number[] {
   return m
 }
 
-/** Draw a random point with n insertions and colour dimension N (1 = abelian). */
-export function randomPoint(F: PrimeField, rng: SeededRandom, n: number, colorN = 1): KinematicPoint {
+function unit(N: number): number[] {
+  const m = new Array<number>(N * N).fill(0)
+  for (let i = 0; i < N; i++) m[i * N + i] = 1
+  return m
+}
+
+/** Draw a random point with one insertion per entry of `factors` (a factor index each). */
+export function randomPoint(F: PrimeField, rng: SeededRandom, factors: readonly number[], setup: GaugeSetup = singleFactor()): KinematicPoint {
   const vec = (): number[] => [0, 1, 2, 3].map(() => rng.nonZero(F.p))
+  const N = setup.colorN
   return {
-    l: vec(), k: Array.from({ length: n }, vec), e: Array.from({ length: n }, vec),
-    colorN, mats: Array.from({ length: n }, () => randomMatrix(F, rng, colorN)),
+    l: vec(), k: factors.map(vec), e: factors.map(vec), colorN: N, factor: [...factors],
+    mats: factors.map((g) => {
+      const f = setup.factors[g]!
+      if (!f.coupled) return null
+      return f.kind === 'su' ? randomMatrix(F, rng, N) : unit(N)
+    }),
   }
 }
 
@@ -51,51 +75,114 @@ function matMulInto(F: PrimeField, out: number[], a: number[], b: number[], f: n
   }
 }
 
+function scaleInto(F: PrimeField, out: number[], v: number[], f: number): void {
+  for (let x = 0; x < v.length; x++) out[x] = F.add(out[x]!, F.mul(v[x]!, f))
+}
+
+/** Linearised field strength of insertion j: ℰ_i = κ_0ε_i − κ_iε_0, ℬ_i = ε_iab κ_a ε_b. */
+function strength(F: PrimeField, pt: KinematicPoint, j: number, which: 'E' | 'B', i: number): number {
+  const k = pt.k[j]!
+  const e = pt.e[j]!
+  if (which === 'E') return F.sub(F.mul(k[0]!, e[i]!), F.mul(k[i]!, e[0]!))
+  let s = 0
+  for (let a = 1; a <= 3; a++) for (let b = 1; b <= 3; b++) {
+    const c = levi(i, a, b)
+    if (c !== 0) s = c > 0 ? F.add(s, F.mul(k[a]!, e[b]!)) : F.sub(s, F.mul(k[a]!, e[b]!))
+  }
+  return s
+}
+
+type State = Array<number[] | null>
+
+/** A word compiled once: derivatives (μ), abelian field letters, trace atoms. */
+type Atom = { t: 0; mu: number } | { t: 1; g: number; which: 'E' | 'B'; i: number } | { t: 2; inner: Atom[] }
+const compiled = new Map<string, Atom[]>()
+
+function compile(word: string): Atom[] {
+  const hit = compiled.get(word)
+  if (hit) return hit
+  const atoms = wordAtoms(word).map((a): Atom => {
+    if (a.startsWith('(')) return { t: 2, inner: compile(a.slice(1, -1)) }
+    const c = a.charCodeAt(0)
+    if (c >= 48 && c <= 51) return { t: 0, mu: c - 48 }
+    const f = decodeFieldLetter(a)
+    return { t: 1, g: f.g, which: f.which, i: f.i }
+  })
+  if (compiled.size > 200_000) compiled.clear()
+  compiled.set(word, atoms)
+  return atoms
+}
+
+function applyAtom(F: PrimeField, atom: Atom, state: State, pt: KinematicPoint, l: number[]): State {
+  const n = pt.k.length
+  const N = pt.colorN
+  const full = (1 << n) - 1
+  const next: State = new Array(full + 1).fill(null)
+  const traced = atom.t === 2 ? traceTable(F, atom.inner, pt) : null
+  for (let S = 0; S <= full; S++) {
+    const v = state[S]
+    if (!v) continue
+    if (atom.t === 2) {
+      for (let T = 0; T <= full; T++) {
+        if ((T & S) !== 0 || traced![T] === 0) continue
+        scaleInto(F, (next[S | T] ??= new Array<number>(N * N).fill(0)), v, traced![T]!)
+      }
+    } else if (atom.t === 1) {
+      for (let j = 0; j < n; j++) {
+        if (S & (1 << j) || pt.factor[j] !== atom.g) continue
+        scaleInto(F, (next[S | (1 << j)] ??= new Array<number>(N * N).fill(0)), v, strength(F, pt, j, atom.which, atom.i))
+      }
+    } else {
+      const mu = atom.mu
+      let mom = l[mu]!
+      for (let j = 0; j < n; j++) if (S & (1 << j)) mom = F.add(mom, pt.k[j]![mu]!)
+      if (mom !== 0) scaleInto(F, (next[S] ??= new Array<number>(N * N).fill(0)), v, mom)
+      for (let j = 0; j < n; j++) {
+        const m = pt.mats[j]
+        if (S & (1 << j) || !m) continue
+        const out = (next[S | (1 << j)] ??= new Array<number>(N * N).fill(0))
+        if (N === 1) out[0] = F.add(out[0]!, F.mul(F.mul(m[0]!, v[0]!), pt.e[j]![mu]!))
+        else matMulInto(F, out, m, v, pt.e[j]![mu]!, N)
+      }
+    }
+  }
+  return next
+}
+
+/** tr of the inner word acting on a constant, per subset of insertions it absorbs. */
+function traceTable(F: PrimeField, inner: Atom[], pt: KinematicPoint): number[] {
+  const N = pt.colorN
+  const states = atomStates(F, inner, pt, [0, 0, 0, 0])
+  return states.map((m) => {
+    if (!m) return 0
+    let t = 0
+    for (let i = 0; i < N; i++) t = F.add(t, m[i * N + i]!)
+    return t
+  })
+}
+
+function atomStates(F: PrimeField, atoms: Atom[], pt: KinematicPoint, l: number[]): State {
+  const full = (1 << pt.k.length) - 1
+  let state: State = new Array(full + 1).fill(null)
+  state[0] = unit(pt.colorN)
+  for (let r = atoms.length - 1; r >= 0; r--) state = applyAtom(F, atoms[r]!, state, pt, l)
+  return state
+}
+
+function wordStates(F: PrimeField, word: string, pt: KinematicPoint, l: number[]): State {
+  return atomStates(F, compile(word), pt, l)
+}
+
 /**
  * Colour matrix (row-major) of the multilinear n-insertion symbol of one word at a point;
- * `l` overrides the heavy-field momentum (ℓ = 0 for colour-trace words).
- * @example wordValue(F, '1', {l:[0,5,0,0],k:[],e:[],colorN:1,mats:[]}) // [5] (D_x on e^{5x})
+ * `l` overrides the heavy-field momentum.
+ * @example wordValue(F, '1', {l:[0,5,0,0],k:[],e:[],colorN:1,factor:[],mats:[]}) // [5] (D_x on e^{5x})
  * Method: right-to-left dynamic programme over the set of insertions already placed.
  * Reference: Feynman rules of covariant derivatives (Peskin & Schroeder, §4.8, §16.1).
  */
 export function wordValue(F: PrimeField, word: string, pt: KinematicPoint, l = pt.l): number[] {
-  const n = pt.k.length
-  const N = pt.colorN
-  const full = (1 << n) - 1
-  const zero = (): number[] => new Array<number>(N * N).fill(0)
-  let state: Array<number[] | null> = new Array(full + 1).fill(null)
-  state[0] = zero()
-  for (let i = 0; i < N; i++) state[0]![i * N + i] = 1
-  for (let r = word.length - 1; r >= 0; r--) {
-    const mu = word.charCodeAt(r) - 48
-    const next: Array<number[] | null> = new Array(full + 1).fill(null)
-    for (let S = 0; S <= full; S++) {
-      const v = state[S]
-      if (!v) continue
-      let mom = l[mu]!
-      for (let j = 0; j < n; j++) if (S & (1 << j)) mom = F.add(mom, pt.k[j]![mu]!)
-      const d = (next[S] ??= zero())
-      for (let x = 0; x < d.length; x++) d[x] = F.add(d[x]!, F.mul(v[x]!, mom))
-      for (let j = 0; j < n; j++) {
-        if (S & (1 << j)) continue
-        const T = S | (1 << j)
-        matMulInto(F, (next[T] ??= zero()), pt.mats[j]!, v, pt.e[j]![mu]!, N)
-      }
-    }
-    state = next
-  }
-  return state[full] ?? zero()
-}
-
-function termValue(F: PrimeField, word: string, pt: KinematicPoint): number[] {
-  if (!word.startsWith('t')) return wordValue(F, word, pt)
-  const N = pt.colorN
-  const m = wordValue(F, word.slice(1), pt, [0, 0, 0, 0])
-  let tr = 0
-  for (let i = 0; i < N; i++) tr = F.add(tr, m[i * N + i]!)
-  const out = new Array<number>(N * N).fill(0)
-  for (let i = 0; i < N; i++) out[i * N + i] = tr
-  return out
+  const full = (1 << pt.k.length) - 1
+  return wordStates(F, word, pt, l)[full] ?? new Array<number>(pt.colorN * pt.colorN).fill(0)
 }
 
 /**
@@ -113,7 +200,7 @@ export function evaluationRows(F: PrimeField, elements: readonly Element[], poin
       for (const [key, c] of el) {
         const { spin, word } = splitKey(key)
         let w = cache.get(word)
-        if (w === undefined) { w = termValue(F, word, pt); cache.set(word, w) }
+        if (w === undefined) { w = wordValue(F, word, pt); cache.set(word, w) }
         const fc = F.from(c)
         for (let x = 0; x < N2; x++) {
           if (w[x] === 0) continue
