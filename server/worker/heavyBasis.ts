@@ -50,6 +50,12 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
     for (const op of f.basis) add(f.order, key, 'kept', op)
     for (const op of f.conventional) add(f.order, key, 'set_aside', op)
   }
+  // Two heavy particles of the same kind: (ψ†ψ)(ψ†ψ) contact operators.
+  for (const h of e.heavyHeavy ?? []) {
+    const key = `${p}* ${p} ${p}* ${p} (1/m^${h.order})`
+    classes.push({ order: h.order, dimension: null, key, rank: h.count, hilbert: null, tallyOk: null, message: `${h.restFrameCount} of them survive with the pair at rest; ${e.heavyHeavyNote}`.slice(0, 600) })
+    for (const op of h.basis) add(h.order, key, 'kept', op)
+  }
   // Heavy–light contact operators, class by class (light content and order).
   for (const c of e.heavyLight ?? []) {
     classes.push({ order: c.order, dimension: null, key: c.key, rank: c.count, realParameters: c.realParameters, hilbert: null, tallyOk: null, message: (e.heavyLightNote ?? '').slice(0, 600) })

@@ -19,6 +19,7 @@ import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedLatex, type Coefficien
 import { comboLatex, structureBlocks } from './display'
 import { orderSpace, orderSpaceFor, type SpaceConfig } from './orderSpace'
 import { heavyGaugeSetup } from './gaugeSetup'
+import { enumerateHeavyHeavy, HEAVY_HEAVY_NOTE, type HeavyHeavyOrder } from './heavyHeavy'
 import { expandCombo, type Combo } from './structure'
 import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
 import { publishedOperators } from './published'
@@ -84,6 +85,9 @@ export interface HeavyEnumeration {
   /** Per order: counts (also in the rest frame and without C) and the published operators checked. */
   fourFermionOrders: FourFermionOrder[]
   fourFermionNote?: string
+  /** Two-particle contact operators (ψ†ψ)(ψ†ψ) at 1/m² and 1/m⁴. */
+  heavyHeavy: HeavyHeavyOrder[]
+  heavyHeavyNote: string
   /** Heavy–light contact operators per order and light content. */
   heavyLight: HeavyLightClass[]
   heavyLightNote?: string
@@ -177,6 +181,8 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     fourFermion: fourFermionOrders.flatMap((o) => o.basis),
     fourFermionOrders,
     fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
+    heavyHeavy: [2, 4].filter((n) => n <= heavy.maxOrder).map((n) => enumerateHeavyHeavy(n, colorN, field, config.timeReversal, opts.signal)),
+    heavyHeavyNote: HEAVY_HEAVY_NOTE + (anti ? ' The antiparticle pair (χ†χ)(χ†χ) follows by charge conjugation and is not listed.' : ''),
     ...heavyLightPart(input, opts.signal),
     eomNote: EOM_NOTE + (gauge.unseen.length ? ` Field strengths of ${gauge.unseen.join(', ')} (non-abelian groups the heavy particle does not feel) would enter through colour traces of their own and are not included.` : ''),
     antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
