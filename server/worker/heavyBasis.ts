@@ -46,8 +46,9 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
       : f.conventionalSpansRestFrame
         ? `the published operators span the ${f.restFrameCount} operators that survive with the pair at rest, not the ${f.count - f.restFrameCount} that depend on its total momentum`
         : 'the published operators do not span this space'
-    classes.push({ order: f.order, dimension: null, key, rank: f.count, hilbert: null, tallyOk: null, message: `${spans}; ${e.fourFermionNote ?? ''}`.slice(0, 600) })
-    for (const op of f.basis) add(f.order, key, 'kept', op)
+    const withB = f.fieldStrength?.length ? `; plus ${f.fieldStrength.length} with one field strength B` : ''
+    classes.push({ order: f.order, dimension: null, key, rank: f.count + (f.fieldStrength?.length ?? 0), hilbert: null, tallyOk: null, message: `${spans}${withB}; ${e.fourFermionNote ?? ''}`.slice(0, 600) })
+    for (const op of [...f.basis, ...(f.fieldStrength ?? [])]) add(f.order, key, 'kept', op)
     for (const op of f.conventional) add(f.order, key, 'set_aside', op)
   }
   // Two heavy particles of the same kind: (ψ†ψ)(ψ†ψ) contact operators.

@@ -178,7 +178,7 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     symmetries: { parity: config.parity, timeReversal: config.timeReversal },
     leading: { ...LEADING_OPERATOR, latex: printedLatex(LEADING_OPERATOR.latex, field), sector: 'leading', terms: [{ [field]: 1, [`${field}*`]: 1, D_t: 1 }] },
     orders,
-    fourFermion: fourFermionOrders.flatMap((o) => o.basis),
+    fourFermion: fourFermionOrders.flatMap((o) => [...o.basis, ...o.fieldStrength]),
     fourFermionOrders,
     fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
     heavyHeavy: [2, 4].filter((n) => n <= heavy.maxOrder).map((n) => enumerateHeavyHeavy(n, colorN, field, config.timeReversal, opts.signal)),

@@ -9,6 +9,7 @@ import type { HeavyOperator } from './enumerate'
 import { conventionalFour } from './fourConventional'
 import { fourComboLatex, fourTerms } from './fourDisplay'
 import { fourFermionSpace } from './fourSpace'
+import { enumerateFourField } from './fourField'
 
 export interface FourFermionOrder {
   order: number
@@ -27,6 +28,8 @@ export interface FourFermionOrder {
   conventionalInBasis: boolean
   conventionalSpansRestFrame: boolean
   conventionalSpansBasis: boolean
+  /** At 1/m⁴: the operators with one field strength (B), enumerated separately (fourField.ts). */
+  fieldStrength: HeavyOperator[]
 }
 
 export const FOUR_FERMION_NOTE =
@@ -81,5 +84,6 @@ export function enumerateFourFermion(order: number, colorN: number, particle: st
     conventionalInBasis: space.contains(combos),
     conventionalSpansRestFrame: conventionalRank === rest.dimension && rest.contains(combos),
     conventionalSpansBasis: space.rankOf(combos) === space.dimension && space.contains(combos),
+    fieldStrength: order === 4 ? enumerateFourField(colorN, particle, anti, { timeReversal, signal }).basis : [],
   }
 }

@@ -111,9 +111,9 @@ describe('faithfulness of the random-point evaluation', () => {
 
 describe('four-fermion sector inside enumerateHeavy', () => {
   const u1 = { heavy: { particle: { name: 'psi', charges: { X: '1' } }, antiparticle: { name: 'chi' }, gaugeGroup: 'X', maxOrder: 4 }, groups: [{ name: 'X', type: 'U1' }] }
-  it('abelian, maxOrder 4: 2 operators at 1/m² and 12 at 1/m⁴, with a note on IBP and EOM (BBL for 1/m²; counts as above)', () => {
+  it('abelian, maxOrder 4: 2 operators at 1/m² and 12 + 1 (with B) at 1/m⁴, with a note on IBP and EOM (BBL for 1/m²; counts as above and in fourField.test.ts)', () => {
     const r = enumerateHeavy(u1)
-    expect(r.fourFermion.map((o) => o.order)).toEqual([2, 2, ...new Array(12).fill(4)])
+    expect(r.fourFermion.map((o) => o.order)).toEqual([2, 2, ...new Array(13).fill(4)])
     expect(r.fourFermionOrders.map((o) => o.count)).toEqual([2, 12])
     expect(r.fourFermion.every((o) => o.sector === 'fourFermion' && o.relations.length === 0 && o.terms[0]!.chi === 1)).toBe(true)
     expect(r.fourFermionNote).toContain('four leg momenta sum to zero')
