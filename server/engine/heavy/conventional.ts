@@ -116,6 +116,35 @@ export const CONVENTIONAL_OPERATORS: readonly ConventionalOperator[] = [
   }),
 ]
 
+/**
+ * The published operators of the heavy quark in the fundamental of SU(N) through 1/m³:
+ * the abelian list with E, B colour matrices (products such as B² = B^aB^bT^aT^b), plus the
+ * colour traces and the commutator terms that vanish for an abelian field (Manohar, Phys. Rev.
+ * D 56 (1997) 230, NRQCD part; the printed signs of c_A3, c_A4, c_B1, c_B2 from memory). The
+ * reparametrization relations are those of the abelian case.
+ */
+export const NONABELIAN_OPERATORS: readonly ConventionalOperator[] = [
+  ...CONVENTIONAL_OPERATORS,
+  entry({
+    id: 'A3', order: 3, coefficient: 'c_{A3}', latex: 'c_{A3}\\, {F}^\\dagger \\frac{\\mathrm{tr}(\\bm{B}^2 - \\bm{E}^2)}{8m^3} {F}', scale: '1/8',
+    combo: combo([[1, 'tr B_k B_k'], [-1, 'tr E_k E_k']]), source: `${MANOHAR} (from memory)`,
+  }),
+  entry({
+    id: 'A4', order: 3, coefficient: 'c_{A4}', sign: -1, latex: '-c_{A4}\\, {F}^\\dagger \\frac{\\mathrm{tr}\\,\\bm{E}^2}{16m^3} {F}', scale: '1/16',
+    combo: combo([[1, 'tr E_k E_k']]), source: `${MANOHAR} (from memory)`,
+  }),
+  entry({
+    id: 'B1', order: 3, coefficient: 'c_{B1}', imaginary: true, scale: '1/8',
+    latex: 'c_{B1}\\, {F}^\\dagger \\frac{i\\bm{\\sigma}\\cdot(\\bm{B}\\times\\bm{B} - \\bm{E}\\times\\bm{E})}{8m^3} {F}',
+    combo: combo([[1, 's_k eps_kij B_i B_j'], [-1, 's_k eps_kij E_i E_j']]), source: `${MANOHAR} (from memory)`,
+  }),
+  entry({
+    id: 'B2', order: 3, coefficient: 'c_{B2}', sign: -1, imaginary: true, scale: '1/8',
+    latex: '-c_{B2}\\, {F}^\\dagger \\frac{i\\bm{\\sigma}\\cdot(\\bm{E}\\times\\bm{E})}{8m^3} {F}',
+    combo: combo([[1, 's_k eps_kij E_i E_j']]), source: `${MANOHAR} (from memory)`,
+  }),
+]
+
 /** Leading-order operator ψ† iD_t ψ (defines the EOM; coefficient 1 by normalisation of ψ). */
 export const LEADING_OPERATOR = {
   id: 'leading', order: 0, coefficient: '1', latex: '{F}^\\dagger iD_t {F}',

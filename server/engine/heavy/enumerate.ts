@@ -15,7 +15,7 @@ import { EngineCancelledError, EngineInputError } from '../errors'
 import type { CancelFlag } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
-import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedLatex, type CoefficientRelation } from './conventional'
+import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, NONABELIAN_OPERATORS, printedLatex, type CoefficientRelation } from './conventional'
 import { comboLatex, structureBlocks } from './display'
 import { orderSpace, orderSpaceFor, type SpaceConfig } from './orderSpace'
 import { heavyGaugeSetup } from './gaugeSetup'
@@ -62,6 +62,8 @@ export interface HeavyOrder {
   /** The published operators of this order and whether they span exactly the same space. */
   conventional: HeavyOperator[]
   conventionalSpansBasis: boolean | null
+  /** How many of the published operators are redundant here (e.g. d-symbol terms for SU(2)). */
+  conventionalRedundant: number
   candidates: number
   relationRank: number
   /** With an antiparticle field: the χ-bilinears, coefficients fixed by charge conjugation (or CPT). */
@@ -153,11 +155,11 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
         ...(c.parityOdd ? { parityOdd: true } : {}), ...(c.timeOdd ? { timeOdd: true } : {}),
       }
     })
-    const published = charged && single && colorN === 1
-      ? publishedOperators(n, field, basis, CONVENTIONAL_OPERATORS, colorN, opts.signal)
-      : { cards: [], spans: null }
+    const published = charged && single
+      ? publishedOperators(n, field, basis, colorN > 1 ? NONABELIAN_OPERATORS : CONVENTIONAL_OPERATORS, colorN, opts.signal)
+      : { cards: [], spans: null, redundant: 0 }
     orders.push({
-      order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans,
+      order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans, conventionalRedundant: published.redundant,
       candidates: os.candidates.length, relationRank: os.space.relationRank,
       antiparticle: heavy.antiparticle ? basis.map((b) => antiparticleCopy(b, field, heavy.antiparticle!.name)) : [],
     })

@@ -1,6 +1,6 @@
 /** Heavy-particle (non-relativistic) frame: operator enumeration, rewrites, published basis. */
 export { enumerateHeavy, enumerateHeavyTheory, rewriteHeavy, type HeavyEnumeration, type HeavyOperator, type HeavyOrder, type HeavyInput, type HeavyOptions } from './enumerate'
-export { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, printedPerReal, printedLatex, type ConventionalOperator, type CoefficientRelation } from './conventional'
+export { CONVENTIONAL_OPERATORS, NONABELIAN_OPERATORS, LEADING_OPERATOR, printedPerReal, printedLatex, type ConventionalOperator, type CoefficientRelation } from './conventional'
 export { verifyConventional, printedRewrite, publishedOperators } from './published'
 export { antiparticleCopy, antiparticleFactor, ANTIPARTICLE_CONVENTION } from './antiparticle'
 export { fieldTex } from './fieldTex'

@@ -15,7 +15,10 @@ import { expandCombo } from './structure'
 import { structureBlocks } from './display'
 
 export interface ConventionalCheck {
+  /** The published operators span the enumerated space (they may be more than its dimension). */
   spans: boolean
+  /** They are also independent (exactly a basis). */
+  independent: boolean
   rank: number
   dimension: number
   /** Each published operator's real-algebra combination on the basis combinations. */
@@ -32,14 +35,15 @@ export function verifyConventional(order: number, signal?: CancelFlag, list: rea
   const convSpace = new QuotientSpace(els, os.space.relations, { signal, colorN })
   const rank = convSpace.dimension
   const rewrites = conv.map((c, i) => ({ id: c.id, coefficients: os.space.rewrite(els[i]!) }))
-  const spans = rank === os.space.dimension && rank === conv.length
-  const inverse = spans
+  const spans = rank === os.space.dimension
+  const independent = spans && rank === conv.length
+  const inverse = independent
     ? os.space.basis.map((b, i) => {
         const co = convSpace.rewrite(os.candidates[b]!.element)
         return { basis: `m${order}.${i + 1}`, conventional: conv.filter((_, j) => co[convSpace.basis.indexOf(j)]!.num !== 0n).map((c) => c.id) }
       })
     : []
-  return { spans, rank, dimension: os.space.dimension, rewrites, inverse }
+  return { spans, independent, rank, dimension: os.space.dimension, rewrites, inverse }
 }
 
 function termsOf(c: ConventionalOperator, field: string): Array<Record<string, number>> {
@@ -79,9 +83,9 @@ function annotateGaugeEom(basis: HeavyOperator[], inverse: ConventionalCheck['in
  * The published cards of one order and whether they span the enumerated basis (null when the
  * literature has no list for this case). Annotates the basis with gauge-EOM notes.
  */
-export function publishedOperators(order: number, field: string, basis: HeavyOperator[], list: readonly ConventionalOperator[], colorN: number, signal?: CancelFlag): { cards: HeavyOperator[]; spans: boolean | null } {
+export function publishedOperators(order: number, field: string, basis: HeavyOperator[], list: readonly ConventionalOperator[], colorN: number, signal?: CancelFlag): { cards: HeavyOperator[]; spans: boolean | null; redundant: number } {
   const data = list.filter((c) => c.order === order)
-  if (data.length === 0) return { cards: [], spans: null }
+  if (data.length === 0) return { cards: [], spans: null, redundant: 0 }
   const check = verifyConventional(order, signal, list, colorN)
   annotateGaugeEom(basis, check.inverse, list)
   const cards = data.map((c, i): HeavyOperator => ({
@@ -89,5 +93,5 @@ export function publishedOperators(order: number, field: string, basis: HeavyOpe
     coefficient: c.coefficient, relations: c.relations, gaugeEomNote: c.gaugeEomNote, source: c.source,
     rewrite: printedRewrite(c, check.rewrites[i]!.coefficients, basis),
   }))
-  return { cards, spans: check.spans }
+  return { cards, spans: check.spans, redundant: data.length - check.rank }
 }

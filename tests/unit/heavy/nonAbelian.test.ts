@@ -46,3 +46,21 @@ describe('heavy quark in the fundamental of SU(N) (NRQCD-type bilinears)', () =>
     expect(enumerateHeavy(su(3, [1, 0])).fourFermion).toHaveLength(4)
   })
 })
+
+describe('published forms and relations for SU(N) (Manohar, Phys. Rev. D 56 (1997) 230, NRQCD part)', () => {
+  const r3 = enumerateHeavy(su(3, [1, 0]))
+  it('SU(3): the published lists span exactly at 1/m, 1/m², 1/m³ (11 at 1/m³: the abelian nine with colour-matrix E, B, plus tr(B² − E²), tr E², σ·(B×B − E×E), σ·(E×E))', () => {
+    expect(r3.orders.map((o) => [o.conventional.length, o.conventionalSpansBasis, o.conventionalRedundant])).toEqual([[2, true, 0], [2, true, 0], [11, true, 0]])
+  })
+  it('the reparametrization relations are those of the abelian case (c_k = 1, c_S = 2c_F − 1, c_4 = 1, c_W2 = c_W1 − 1, c_p\'p = c_F − 1)', () => {
+    const rel = r3.orders.flatMap((o) => o.conventional).flatMap((c) => c.relations.map((x) => x.relation))
+    expect(rel).toEqual(['c_k = 1', 'c_S = 2 c_F − 1', 'c_4 = 1', 'c_{W2} = c_{W1} − 1', "c_{p'p} = c_F − 1"])
+  })
+  it('SU(2): the same list spans the 9 operators at 1/m³ with two redundant (common practice: d^{abc} = 0)', () => {
+    const r2 = enumerateHeavy(su(2, [1]))
+    expect([r2.orders[2]!.conventionalSpansBasis, r2.orders[2]!.conventionalRedundant]).toEqual([true, 2])
+  })
+  it('the χ copies of SU(N) operators follow the same (−1)^n rule (charge conjugation A → −Aᵀ keeps C = −† in the real algebra; antiparticle.ts)', () => {
+    for (const o of r3.orders) for (const a of o.antiparticle) expect(a.fixedBy!.factor).toBe((-1) ** o.order)
+  })
+})
