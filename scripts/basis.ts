@@ -1,6 +1,9 @@
 /**
  * Explicit operator basis from the command line.
  *   node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]
+ *   npm run --silent basis -- THEORY.json --max-order N   (order = dimension − 4; heavy frame: power of 1/m)
+ * With --max-order the result is {"theory","byOrder":[{"order","operators","classes":[…]}]}; a
+ * heavy-frame theory needs --max-order and lists each class's operators (text, LaTeX, real parameters).
  * Prints only JSON: {"theory","note","byDimension":[{"dimension","operators" (real
  * parameters),"tallyOk","classes":[{"key","conjugateKey","rank","hilbert","tallyOk",
  * "message"?,"operators":[{"text","latex","latex4","cp","hermitian","realParameters","flavorComponents",…}]}]}]}.
@@ -11,9 +14,10 @@
 import { readFileSync } from 'node:fs'
 import { parseTheory } from '../shared/schemas/theory'
 import { buildBasis, type ClassReport } from '../server/engine/basis/index'
+import { heavyOutput } from './heavyCli'
 
 function usage(msg: string): never {
-  process.stderr.write(`basis: ${msg}\nusage: node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]\n`)
+  process.stderr.write(`basis: ${msg}\nusage: node --import tsx scripts/basis.ts THEORY.json (--max-dim N [--min-dim M] | --max-order N) [--nf K]\n`)
   process.exit(1)
 }
 
@@ -43,8 +47,10 @@ function main(): void {
   const args = process.argv.slice(2)
   const file = args.find((a, i) => !a.startsWith('--') && (i === 0 || !args[i - 1]!.startsWith('--')))
   if (!file) usage('missing THEORY.json')
-  const maxDim = intArg(args, '--max-dim')
-  if (maxDim === undefined) usage('missing --max-dim')
+  const maxDimArg = intArg(args, '--max-dim')
+  const maxOrder = intArg(args, '--max-order')
+  if (maxDimArg === undefined && maxOrder === undefined) usage('missing --max-dim or --max-order')
+  if (maxDimArg !== undefined && maxOrder !== undefined) usage('give --max-dim or --max-order, not both')
   let text: string
   try {
     text = readFileSync(file, 'utf8')
@@ -53,10 +59,19 @@ function main(): void {
   }
   try {
     const theory = parseTheory(text)
+    if (theory.frame === 'heavy') {
+      if (maxOrder === undefined) usage('a heavy-frame theory is enumerated in orders of 1/m: use --max-order N (1 to 4)')
+      process.stdout.write(`${JSON.stringify(heavyOutput(theory, maxOrder, true), null, 2)}\n`)
+      return
+    }
+    const maxDim = maxDimArg ?? maxOrder! + 4
     const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf') })
+    const entry = (d: (typeof r.byDimension)[number]) => ({ operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })
     const out = {
       theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
-      byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })),
+      ...(maxOrder === undefined
+        ? { byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, ...entry(d) })) }
+        : { byOrder: r.byDimension.map((d) => ({ order: d.dimension - 4, dimension: d.dimension, ...entry(d) })) }),
     }
     process.stdout.write(`${JSON.stringify(out, null, 2)}\n`)
   } catch (e) {

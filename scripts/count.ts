@@ -1,8 +1,11 @@
 /**
  * Command line: count the independent operators of a theory, per mass dimension and class.
  *   npm run --silent count -- THEORY.json --max-dim N [--min-dim M] [--nf K]
+ *   npm run --silent count -- THEORY.json --max-order N    (order = dimension − 4; heavy frame: power of 1/m)
  * THEORY.json may also be a preset id (e.g. `smeft`). Prints only JSON on stdout:
  *   {"theory": "…", "byDimension": [{"dimension": d, "operators": n, "classes": {"<key>": n}}]}
+ *   with --max-order: {"theory", "byOrder": [{"order", "operators", "classes": [{"key", "count", …}]}]}
+ *   (a heavy-frame theory enumerates its operators, so its classes also give real parameters).
  * --nf K overrides the flavor number of every field that declares "flavors".
  * Errors: message on stderr, exit code 2, nothing on stdout.
  */
@@ -10,17 +13,18 @@ import { existsSync, readFileSync } from 'node:fs'
 import { findPreset } from '../shared/presets/index'
 import { parseTheory, type Theory } from '../shared/schemas/theory'
 import { countOperators } from '../server/engine/counting/countOperators'
+import { heavyOutput } from './heavyCli'
 
 class UsageError extends Error {}
 
-const USAGE = 'usage: count THEORY.json|PRESET --max-dim N [--min-dim M] [--nf K]'
+const USAGE = 'usage: count THEORY.json|PRESET (--max-dim N [--min-dim M] | --max-order N) [--nf K]'
 
-function parseArgs(argv: string[]): { source: string; maxDim: number; minDim?: number; nf?: number } {
+function parseArgs(argv: string[]): { source: string; maxDim?: number; maxOrder?: number; minDim?: number; nf?: number } {
   let source: string | undefined
   const opts: Record<string, number> = {}
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!
-    if (a === '--max-dim' || a === '--min-dim' || a === '--nf') {
+    if (a === '--max-dim' || a === '--min-dim' || a === '--nf' || a === '--max-order') {
       const v = argv[++i]
       if (v === undefined || !/^\d+$/.test(v)) throw new UsageError(`${a} needs a positive integer, got ${v ?? 'nothing'}\n${USAGE}`)
       opts[a] = Number(v)
@@ -33,8 +37,9 @@ function parseArgs(argv: string[]): { source: string; maxDim: number; minDim?: n
     }
   }
   if (source === undefined) throw new UsageError(`no theory file given\n${USAGE}`)
-  if (opts['--max-dim'] === undefined) throw new UsageError(`--max-dim is required\n${USAGE}`)
-  return { source, maxDim: opts['--max-dim'], minDim: opts['--min-dim'], nf: opts['--nf'] }
+  if (opts['--max-dim'] === undefined && opts['--max-order'] === undefined) throw new UsageError(`--max-dim or --max-order is required\n${USAGE}`)
+  if (opts['--max-dim'] !== undefined && opts['--max-order'] !== undefined) throw new UsageError(`give --max-dim or --max-order, not both\n${USAGE}`)
+  return { source, maxDim: opts['--max-dim'], maxOrder: opts['--max-order'], minDim: opts['--min-dim'], nf: opts['--nf'] }
 }
 
 function loadTheory(source: string): Theory {
@@ -48,11 +53,22 @@ function main(): void {
   try {
     const args = parseArgs(process.argv.slice(2))
     const theory = loadTheory(args.source)
-    const result = countOperators(theory, { maxDim: args.maxDim, minDim: args.minDim, nf: args.nf })
-    const plain = {
-      theory: result.theory,
-      byDimension: result.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, classes: d.classes })),
+    if (theory.frame === 'heavy') {
+      if (args.maxOrder === undefined) throw new UsageError('a heavy-frame theory is counted in orders of 1/m: use --max-order N (1 to 4)')
+      process.stdout.write(`${JSON.stringify(heavyOutput(theory, args.maxOrder, false))}\n`)
+      return
     }
+    const maxDim = args.maxDim ?? args.maxOrder! + 4
+    const result = countOperators(theory, { maxDim, minDim: args.minDim, nf: args.nf })
+    const plain = args.maxOrder === undefined
+      ? { theory: result.theory, byDimension: result.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, classes: d.classes })) }
+      : {
+          theory: result.theory,
+          byOrder: result.byDimension.map((d) => ({
+            order: d.dimension - 4, dimension: d.dimension, operators: d.operators,
+            classes: Object.entries(d.classes).map(([key, count]) => ({ key, count })),
+          })),
+        }
     process.stdout.write(`${JSON.stringify(plain)}\n`)
   } catch (e) {
     process.stderr.write(`count: ${(e as Error).message}\n`)

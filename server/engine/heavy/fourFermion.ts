@@ -36,8 +36,9 @@ export const FOUR_FERMION_NOTE =
   'Four-fermion contact operators, enumerated by the rank of their tree-level contact vertex (random two-component ' +
   'spinors, colour wave-functions and leg momenta over two primes). Integration by parts is automatic: the four leg ' +
   'momenta sum to zero. The heavy-field EOM is automatic: every leg is on shell with zero energy at leading order, so ' +
-  'D_t never appears. Spatial D acts as ∂ at this vertex, so operators differing by field strengths are identified ' +
-  '(the ψ†ψχ†χ·E/B sector at 1/m⁴ is not enumerated). χ creates the antiparticle and carries the colour of ψ ' +
+  'D_t never appears. Spatial D acts as ∂ at this vertex; the operators with one field strength at 1/m⁴ are enumerated ' +
+  'separately from their five-leg vertex (only B survives: E = [D_t, D] is removed by the EOM). χ creates the ' +
+  'antiparticle and carries the colour of ψ ' +
   '(Bodwin, Braaten, Lepage convention); orderings ψ†Γχ χ†Γψ (listed first) and ψ†Γψ χ†Γχ are related by Fierz ' +
   'identities, which the vertex accounts for.'
 

@@ -38,6 +38,50 @@ describe('count CLI', () => {
     expect(missing.stderr).toContain('no such theory file or preset: no-such-theory')
     const noDim = run('smeft')
     expect([noDim.status, noDim.stdout]).toEqual([2, ''])
-    expect(noDim.stderr).toContain('--max-dim is required')
+    expect(noDim.stderr).toContain('--max-dim or --max-order is required')
+  })
+
+  it('--max-order on a relativistic theory is the dimension minus 4: SMEFT order 2 = dimension 6 → 84 (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016)', () => {
+    const r = run('smeft', '--max-order', '2', '--nf', '1')
+    expect(r.status).toBe(0)
+    const out = JSON.parse(r.stdout)
+    expect(out.byOrder.map((o: { order: number, dimension: number, operators: number }) => [o.order, o.dimension, o.operators])).toEqual([[1, 5, 2], [2, 6, 84]])
+    expect(out.byOrder[1].classes).toContainEqual({ key: 'H^3 H*^3', count: 1 })
+  })
+
+  it('a heavy-frame theory counts in orders of 1/m: vexonium to 1/m³ gives 2, 2, 7 ψ-bilinears (Manohar, Phys. Rev. D 56 (1997) 230), χ copies with no free parameter, 2 four-fermion operators at 1/m² (Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125)', () => {
+    const r = run('heavy-vexonium', '--max-order', '3')
+    expect(r.status, r.stderr).toBe(0)
+    const out = JSON.parse(r.stdout)
+    expect(out.frame).toBe('heavy')
+    const cls = (order: number, key: string) => out.byOrder.find((o: { order: number }) => o.order === order).classes.find((c: { key: string }) => c.key === key)
+    expect([1, 2, 3].map((n) => cls(n, `psi* psi (1/m^${n})`).count)).toEqual([2, 2, 7])
+    expect(cls(2, 'chi* chi (1/m^2)')).toMatchObject({ count: 2, realParameters: 0 })
+    expect(cls(2, 'psi* psi chi* chi (1/m^2)').count).toBe(2)
+    expect(cls(1, 'psi* psi (1/m^1)').operators).toBeUndefined()
+  })
+
+  it('a heavy-frame theory refuses --max-dim and orders beyond 1/m⁴, with the reason', () => {
+    const dim = run('heavy-vexonium', '--max-dim', '6')
+    expect([dim.status, dim.stdout]).toEqual([2, ''])
+    expect(dim.stderr).toContain('a heavy-frame theory is counted in orders of 1/m: use --max-order N (1 to 4)')
+    const deep = run('heavy-vexonium', '--max-order', '5')
+    expect(deep.status).toBe(2)
+    expect(deep.stderr).toContain('--max-order for a heavy-frame theory is a power of 1/m from 1 to 4, got 5')
+  })
+})
+
+describe('basis CLI on a heavy-frame theory', () => {
+  const basis = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'scripts/basis.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
+  it('lists each operator with its text, LaTeX and real parameters, order by order (Caswell, Lepage, Phys. Lett. B 167 (1986) 437: D² and σ·B at 1/m)', () => {
+    const r = basis(join(root, 'shared/presets/heavy-vexonium.json'), '--max-order', '1')
+    expect(r.status, r.stderr).toBe(0)
+    const out = JSON.parse(r.stdout)
+    const order1 = out.byOrder.find((o: { order: number }) => o.order === 1)
+    const psi = order1.classes.find((c: { key: string }) => c.key === 'psi* psi (1/m^1)')
+    expect(psi.operators.map((o: { text: string }) => o.text)).toEqual(['ψ^† σ^i B^i ψ', 'ψ^† D^i D^i ψ'])
+    expect(psi.operators.every((o: { latex: string, realParameters: number }) => o.latex.startsWith('\\psi^\\dagger') && o.realParameters === 1)).toBe(true)
+    const chi = order1.classes.find((c: { key: string }) => c.key === 'chi* chi (1/m^1)')
+    expect(chi.operators.map((o: { realParameters: number, fixedBy: { factor: number } }) => [o.realParameters, o.fixedBy.factor])).toEqual([[0, -1], [0, -1]])
   })
 })
