@@ -1,7 +1,7 @@
 // Background runs of one theory: start, follow progress (polling), cancel.
 export interface Run {
   id: number, theoryId: number, kind: 'count' | 'basis', status: 'queued' | 'running' | 'done' | 'failed' | 'cancelled'
-  progress: number, currentLabel: string, maxDim: number, nf: number | null, summary: any, error: string | null
+  progress: number, currentLabel: string, maxDim: number | null, maxOrder: number | null, nf: number | null, summary: any, error: string | null
   createdAt: string, finishedAt: string | null
 }
 
@@ -14,7 +14,7 @@ export const useRunsStore = defineStore('runs', () => {
     theoryId.value = id
     runs.value = (await useRequestFetch()(`/api/theories/${id}/runs`)).runs as Run[]
   }
-  async function start(body: { kind: 'count' | 'basis', maxDim: number, nf?: number, priorities?: Record<string, unknown> }) {
+  async function start(body: { kind: 'count' | 'basis', maxDim?: number, maxOrder?: number, nf?: number, priorities?: Record<string, unknown> }) {
     const { run } = await $fetch(`/api/theories/${theoryId.value}/runs`, { method: 'POST', body })
     runs.value = [run as Run, ...runs.value]
     return run as Run

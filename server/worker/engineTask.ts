@@ -15,7 +15,7 @@ function threadEntry(): URL {
 }
 
 export type EngineTask =
-  | { kind: 'count' | 'basis', theory: unknown, maxDim: number, nf?: number, priorities?: Priorities }
+  | { kind: 'count' | 'basis', theory: unknown, maxDim?: number, maxOrder?: number, nf?: number, priorities?: Priorities }
   | { kind: 'fingerprint', theory: unknown, classKey: string, texts: string[], priorities?: Priorities }
 export interface TaskHandle<T> { result: Promise<T>, cancel: () => void }
 

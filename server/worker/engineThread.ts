@@ -5,6 +5,7 @@ import { countOperators } from '../engine/counting/countOperators'
 import { buildBasis } from '../engine/basis/buildBasis'
 import { typedFingerprints } from '../engine/board/typedOperator'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
+import { heavyReport } from '../engine/heavy/report'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
 
@@ -20,13 +21,14 @@ function onProgress(fraction: number, label: string) {
 
 try {
   const theory = parseTheory(task.theory)
+  const heavy = () => enumerateHeavyTheory({ ...theory, heavy: theory.heavy && { ...theory.heavy, maxOrder: task.kind !== 'fingerprint' ? task.maxOrder ?? theory.heavy.maxOrder : theory.heavy.maxOrder } }, { onProgress, signal })
   const result = task.kind === 'fingerprint'
     ? typedFingerprints(theory, task.classKey, task.texts, task.priorities)
-    : task.kind === 'count'
-      ? countOperators(theory, { maxDim: task.maxDim, nf: task.nf, flavorPolynomials: true, onProgress, signal })
-      : theory.frame === 'heavy'
-        ? enumerateHeavyTheory(theory, { onProgress, signal })
-        : buildBasis(theory, { maxDim: task.maxDim, nf: task.nf, priorities: task.priorities, onProgress, signal })
+    : theory.frame === 'heavy'
+      ? task.kind === 'count' ? { heavy: true, byOrder: heavyReport(heavy(), false) } : heavy()
+      : task.kind === 'count'
+        ? countOperators(theory, { maxDim: task.maxDim!, nf: task.nf, flavorPolynomials: true, onProgress, signal })
+        : buildBasis(theory, { maxDim: task.maxDim!, nf: task.nf, priorities: task.priorities, onProgress, signal })
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
   const e = error as Error

@@ -21,7 +21,7 @@ export async function executeRun(db: Knex, runId: number): Promise<void> {
   await db('runs').where({ id: runId }).update({ status: 'running', started_at: db.fn.now(), attempts: db.raw('attempts + 1'), progress: 0, current_label: 'starting' })
   const params = run.params as RunParams
   let pending: { fraction: number, label: string } | undefined
-  const handle = startEngineTask({ kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, nf: params.nf, priorities: params.priorities }, (fraction, label) => { pending = { fraction, label } })
+  const handle = startEngineTask({ kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, maxOrder: params.maxOrder, nf: params.nf, priorities: params.priorities }, (fraction, label) => { pending = { fraction, label } })
   const timer = setInterval(async () => {
     if (pending) {
       const p = pending

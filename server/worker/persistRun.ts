@@ -4,6 +4,7 @@ import type { BasisReport } from '../engine/basis/buildBasis'
 import type { BasisOperator } from '../engine/basis/describe'
 import type { HeavyEnumeration } from '../engine/heavy/enumerate'
 import { writeHeavyBasis } from './heavyBasis'
+import { heavyReport } from '../engine/heavy/report'
 import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
 
@@ -14,7 +15,7 @@ export async function persistRunResult(db: Knex, run: { id: number, theory_id: n
       await finish(trx, run.id, result)
     } else if (isHeavy(result)) {
       const basisId = await writeHeavyBasis(trx, run, result)
-      await finish(trx, run.id, { heavy: true, basisId, note: result.eomNote, byOrder: result.orders.map((o) => ({ order: o.order, operators: o.count, matchesPublished: o.conventionalSpansBasis })) })
+      await finish(trx, run.id, { heavy: true, basisId, note: result.eomNote, byOrder: heavyReport(result, false).map((o) => ({ order: o.order, operators: o.operators, realParameters: o.realParameters, matchesPublished: result.orders.find((x) => x.order === o.order)?.conventionalSpansBasis ?? null })) })
     } else {
       const basisId = await writeBasis(trx, run, result as BasisReport)
       await finish(trx, run.id, { ...basisSummary(result as BasisReport), basisId })
@@ -29,7 +30,7 @@ function isHeavy(result: unknown): result is HeavyEnumeration {
 async function finish(trx: Knex.Transaction, runId: number, summary: unknown) {
   await trx('runs').where({ id: runId }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
 }
-export interface RunParams { maxDim: number, nf?: number, theory: unknown, theoryVersion: number, priorities?: Priorities }
+export interface RunParams { maxDim?: number, maxOrder?: number, nf?: number, theory: unknown, theoryVersion: number, priorities?: Priorities }
 
 function basisSummary(report: BasisReport) {
   return {
@@ -52,7 +53,7 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
   })))
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, fingerprint_version: FINGERPRINT_VERSION,
-    counting_rule: 'massRatio', max_order: run.params.maxDim - 4, classes: JSON.stringify(classes), note: report.note,
+    counting_rule: 'massRatio', max_order: (run.params.maxDim ?? 4) - 4, classes: JSON.stringify(classes), note: report.note,
     // As computed, the kept operators of each class are independent and complete.
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')

@@ -1,6 +1,7 @@
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
 import { useQueue, RUN_QUEUE } from '../jobs/queue'
+import { MAX_HEAVY_ORDER, MAX_RUN_DIMENSION } from '../../../shared/schemas/runRequests'
 
 export async function runOr404(id: number) {
   const row = await useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id').where('r.id', id).first('r.*', 't.group_id')
@@ -11,7 +12,7 @@ export async function runOr404(id: number) {
 export function publicRun(row: Record<string, any>) {
   return {
     id: row.id, theoryId: row.theory_id, kind: row.kind, status: row.status, progress: row.progress,
-    currentLabel: row.current_label, maxDim: row.params?.maxDim, nf: row.params?.nf ?? null,
+    currentLabel: row.current_label, maxDim: row.params?.maxDim ?? null, maxOrder: row.params?.maxOrder ?? null, nf: row.params?.nf ?? null,
     summary: row.summary, error: row.error, cancelRequested: row.cancel_requested,
     createdAt: row.created_at, startedAt: row.started_at, finishedAt: row.finished_at,
   }
@@ -47,4 +48,20 @@ export async function runPriorities(theoryId: number, p: { derivativesOn?: strin
   const keep: Record<string, string[]> = {}
   for (const r of rows) (keep[r.class_key] ??= []).push(r.text)
   return { ...rest, keep }
+}
+
+/**
+ * How far a run goes: a heavy-frame theory in powers of 1/m (maxOrder, default its own
+ * heavy.maxOrder, at most 4); any other theory in mass dimension (maxDim, or maxOrder + 4).
+ */
+export function runReach(definition: unknown, body: { kind: 'count' | 'basis', maxDim?: number, maxOrder?: number }): { maxDim?: number, maxOrder?: number } {
+  const def = (definition ?? {}) as { frame?: string, heavy?: { maxOrder?: number } }
+  if (def.frame === 'heavy') {
+    const maxOrder = body.maxOrder ?? def.heavy?.maxOrder ?? 2
+    if (maxOrder > MAX_HEAVY_ORDER) fail(400, `maxOrder: a heavy-frame run goes up to 1/m^${MAX_HEAVY_ORDER}, got 1/m^${maxOrder}`)
+    return { maxOrder }
+  }
+  const maxDim = body.maxDim ?? body.maxOrder! + 4
+  if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `maxOrder: ${body.kind === 'basis' ? 'an explicit basis run goes up to order 4 (dimension 8)' : 'counts go up to order 12 (dimension 16)'}, got order ${maxDim - 4}`)
+  return { maxDim }
 }

@@ -2,7 +2,7 @@ import { defineApiHandler, created } from '../../../../utils/http/apiHandler'
 import { readJson, intParam } from '../../../../utils/http/readJson'
 import { requireGroupRole } from '../../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../../utils/db/theories'
-import { publicRun, runPriorities } from '../../../../utils/db/runs'
+import { publicRun, runPriorities, runReach } from '../../../../utils/db/runs'
 import { useDb } from '../../../../utils/db/connection'
 import { useQueue, RUN_QUEUE } from '../../../../utils/jobs/queue'
 import { RunCreateSchema } from '../../../../../shared/schemas/runRequests'
@@ -13,7 +13,7 @@ export default defineApiHandler(async (event) => {
   const { user } = await requireGroupRole(event, theory.group_id, 'editor')
   const body = await readJson(event, RunCreateSchema)
   const priorities = await runPriorities(theory.id, body.priorities)
-  const params = { maxDim: body.maxDim, nf: body.nf, priorities, theory: theory.definition, theoryVersion: theory.version }
+  const params = { ...runReach(theory.definition, body), nf: body.nf, priorities, theory: theory.definition, theoryVersion: theory.version }
   const [run] = await useDb()('runs').insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id }).returning('*')
   const boss = await useQueue()
   const jobId = await boss.send(RUN_QUEUE, { runId: run.id })
