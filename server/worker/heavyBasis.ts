@@ -28,7 +28,7 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
     const key = `${p}* ${p} (1/m^${o.order})`
     const spans = o.conventionalSpansBasis
     const redundant = o.conventionalRedundant ? ` (${o.conventionalRedundant} of them redundant here)` : ''
-    classes.push({ order: o.order, dimension: null, key, rank: o.count, hilbert: null, tallyOk: null, message: spans === null ? null : spans ? `the published operators of this order span this space${redundant || ' exactly'}` : 'the published operators of this order do NOT span this space' })
+    classes.push({ order: o.order, dimension: null, key, rank: o.count, hilbert: null, tallyOk: null, message: spans === null ? null : spans ? (redundant ? `the published operators of this order span this space${redundant}` : 'the published operators of this order span exactly this space') : 'the published operators of this order do NOT span this space' })
     for (const op of o.basis) add(o.order, key, 'kept', op)
     for (const op of o.conventional) add(o.order, key, 'set_aside', op, { publishedRewrite: op.rewrite ?? [] })
     if (a && o.antiparticle.length) {

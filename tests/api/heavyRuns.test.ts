@@ -5,19 +5,21 @@ import { findPreset } from '../../shared/presets/index'
 let world: World
 beforeAll(async () => { world = await buildWorld() })
 
-async function runToBasis(definition: unknown, body: Record<string, unknown>): Promise<number> {
+async function finishedRun(definition: unknown, body: Record<string, unknown>): Promise<any> {
   const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition })
   expect(t.status, JSON.stringify(t.body)).toBe(201)
   const start = await world.owner.client.post(`/api/theories/${t.body.theory.id}/runs`, body)
-  const end = Date.now() + 90_000
+  expect(start.status, JSON.stringify(start.body)).toBe(201)
+  const end = Date.now() + 150_000
   while (Date.now() < end) {
     const { body: r } = await world.owner.client.get(`/api/runs/${start.body.run.id}`)
-    if (r.run.status === 'done') return r.run.summary.basisId
+    if (r.run.status === 'done') return r.run
     if (r.run.status === 'failed') throw new Error(r.run.error)
     await new Promise((res) => setTimeout(res, 200))
   }
   throw new Error('run did not finish')
 }
+const runToBasis = async (definition: unknown, body: Record<string, unknown>): Promise<number> => (await finishedRun(definition, body)).summary.basisId
 
 describe('heavy-particle frame through the run pipeline', () => {
   it('stores the 1/m expansion with the published operators set aside, and the velocity rule moves the kinetic term to leading order', async () => {
@@ -47,5 +49,39 @@ describe('heavy-particle frame through the run pipeline', () => {
     const { body } = await world.byRole.viewer.client.get(`/api/bases/${basisId}`)
     const view = await world.byRole.viewer.client.get(`/api/bases/${basisId}/orders?rule=${encodeURIComponent('mass ratio (E/M)')}`)
     for (const op of body.operators) expect(view.body.orders[op.id]).toBe(String(op.order))
+  })
+
+  it('a heavy run to 1/m² (maxOrder): one antiparticle convention on the basis, χ classes with no free parameter, published cards in the theory\'s names with exact rewrites', async () => {
+    const theory = { ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium 1/m² test' }
+    const run = await finishedRun(theory, { kind: 'basis', maxOrder: 2 })
+    expect([run.maxOrder, run.maxDim]).toEqual([2, null])
+    expect(run.summary.byOrder.map((o: any) => o.order)).toEqual([0, 1, 2])
+    const { body } = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}`)
+    // Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125 convention, derived in tests/unit/heavy/antiparticle.test.ts.
+    expect(body.basis.note).toContain('Bodwin, Braaten, Lepage convention')
+    const chi = body.basis.classes.find((c: any) => c.key === 'chi* chi (1/m^1)')
+    expect([chi.rank, chi.realParameters]).toEqual([2, 0])
+    const chiOps = body.operators.filter((o: any) => o.classKey === 'chi* chi (1/m^1)')
+    expect(chiOps.map((o: any) => o.realParameters)).toEqual([0, 0])
+    expect(chiOps.every((o: any) => o.latex.startsWith('\\chi^\\dagger'))).toBe(true)
+    // Caswell, Lepage, Phys. Lett. B 167 (1986) 437: c_k D²/2m is ½ of the displayed D^iD^i.
+    const kinetic = body.operators.find((o: any) => o.text === 'kinetic')
+    expect(kinetic.latex).toContain('\\psi^\\dagger \\frac{\\bm{D}^2}{2m}')
+    expect(kinetic.details.publishedRewrite).toEqual([{ id: 'm1.2', coefficient: '1/2' }])
+  })
+
+  it('a heavy count run enumerates and reports by order; orders beyond 1/m⁴ are refused with the reason', async () => {
+    const theory = { ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium count test' }
+    const run = await finishedRun(theory, { kind: 'count', maxOrder: 1 })
+    // Caswell, Lepage 1986: D² and σ·B at 1/m, their χ copies fixed by C.
+    expect(run.summary.heavy).toBe(true)
+    expect(run.summary.byOrder.find((o: any) => o.order === 1)).toMatchObject({ operators: 4, realParameters: 2 })
+    const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition: { ...theory, name: 'Vexonium too deep' } })
+    const deep = await world.owner.client.post(`/api/theories/${t.body.theory.id}/runs`, { kind: 'basis', maxOrder: 5 })
+    expect(deep.status).toBe(400)
+    expect(JSON.stringify(deep.body)).toContain('a heavy-frame run goes up to 1/m^4')
+    const neither = await world.owner.client.post(`/api/theories/${t.body.theory.id}/runs`, { kind: 'basis' })
+    expect(neither.status).toBe(400)
+    expect(JSON.stringify(neither.body)).toContain('give maxDim (mass dimension) or maxOrder')
   })
 })
