@@ -11,13 +11,16 @@ export interface DraftHeavy extends DraftLabels {
   gaugeGroup: string
   /** Highest power of 1/m in the bilinear sector, typed (1 to 4). */
   maxOrder: string
+  /** Impose parity and time reversal on the operators (the file omits them when true). */
+  parity: boolean
+  timeReversal: boolean
   description?: string
 }
 
 /** A fresh heavy block: "psi" coupled to the first gauge group, to second order in 1/m. */
 export function newHeavy(groups: DraftGroup[]): DraftHeavy {
   const gauge = groups.find((g) => g.gauge && g.type !== 'Z')
-  return { particle: 'psi', antiparticle: '', gaugeGroup: gauge?.uid ?? '', maxOrder: '2', ...emptyLabels() }
+  return { particle: 'psi', antiparticle: '', gaugeGroup: gauge?.uid ?? '', maxOrder: '2', parity: true, timeReversal: true, ...emptyLabels() }
 }
 
 export function heavyToDraft(input: unknown, byName: Map<string, string>): DraftHeavy {
@@ -28,6 +31,8 @@ export function heavyToDraft(input: unknown, byName: Map<string, string>): Draft
     antiparticle: isRecord(h.antiparticle) ? asText(h.antiparticle.name) : '',
     gaugeGroup: h.gaugeGroup === undefined ? '' : byName.get(asText(h.gaugeGroup)) ?? `?${asText(h.gaugeGroup)}`,
     maxOrder: asText(h.maxOrder),
+    parity: h.imposeParity !== false,
+    timeReversal: h.imposeTimeReversal !== false,
     ...labelsToDraft(particle.reps, particle.charges, byName),
     ...(particle.description !== undefined ? { description: asText(particle.description) } : {}),
   }
@@ -45,5 +50,7 @@ export function heavyToTheory(h: DraftHeavy, groups: DraftGroup[], issues: Draft
   const order = h.maxOrder.trim()
   if (/^\d{1,2}$/.test(order)) out.maxOrder = Number(order)
   else issues.push({ path: ['heavy', 'maxOrder'], message: order ? `the highest power of 1/m is a whole number from 1 to 4, but got "${order}"` : 'choose the highest power of 1/m (1 to 4)' })
+  if (h.parity === false) out.imposeParity = false
+  if (h.timeReversal === false) out.imposeTimeReversal = false
   return out
 }

@@ -124,6 +124,15 @@ describe('the heavy particle in the form', () => {
     ])
   })
 
+  it('the P and T switches survive the form: written only when switched off (common practice: schema round trip)', () => {
+    const d = theoryToDraft({ ...PRESETS.find((p) => p.id === 'heavy-vexonium')!.theory, heavy: { particle: { name: 'psi', charges: { Xd: '1' } }, gaugeGroup: 'Xd', maxOrder: 2, imposeParity: false } })
+    expect([d.heavy!.parity, d.heavy!.timeReversal]).toEqual([false, true])
+    expect(draftToTheory(d).theory.heavy).toMatchObject({ imposeParity: false })
+    expect(draftToTheory(d).theory.heavy).not.toHaveProperty('imposeTimeReversal')
+    d.heavy!.parity = true
+    expect(draftToTheory(d).theory.heavy).not.toHaveProperty('imposeParity')
+  })
+
   it('a schema problem of the block is keyed to its input', () => {
     const d = vexonium()
     d.heavy!.particle = 'Ad' // the dark photon's name
