@@ -33,7 +33,7 @@ export interface FieldStructure {
 /** A term: coefficient, structure, and whether it is read at the charge-conjugate point. */
 export type FieldCombo = Array<{ coef: number; s: FieldStructure; conj: boolean }>
 
-interface FieldPoint { pt: FourPoint; b: number[]; m: number[] }
+export interface FieldPoint { pt: FourPoint; b: number[]; m: number[] }
 
 const LEGS = { direct: [[0, 1], [2, 3]], exchanged: [[0, 3], [2, 1]] } as const
 
@@ -46,7 +46,8 @@ function randomMatrix(F: PrimeField, rng: SeededRandom, N: number): number[] {
   return m
 }
 
-function sample(F: PrimeField, rng: SeededRandom, N: number): FieldPoint {
+/** A random point: the four legs (fourVertex.ts), a static B vector and its colour matrix. */
+export function sampleFieldPoint(F: PrimeField, rng: SeededRandom, N: number): FieldPoint {
   return { pt: randomFourPoint(F, rng, N), b: [1, 2, 3].map(() => rng.nonZero(F.p)), m: randomMatrix(F, rng, N) }
 }
 
@@ -89,7 +90,8 @@ function value(F: PrimeField, s: FieldStructure, x: FieldPoint): number {
   return F.mul(F.mul(total, colour(F, s, x)), sign)
 }
 
-function comboValue(F: PrimeField, c: FieldCombo, x: FieldPoint): number {
+/** Vertex of a combination at a point (terms marked conj are read at the charge-conjugate point). */
+export function fieldComboValue(F: PrimeField, c: FieldCombo, x: FieldPoint): number {
   let total = 0
   for (const t of c) total = F.add(total, F.mul(F.from(t.coef), value(F, t.s, t.conj ? conjugate(F, x) : x)))
   return total
@@ -108,7 +110,7 @@ export function fieldStructures(colorN: number): FieldStructure[] {
 }
 
 /** Hermitian conjugate: direct structures are Hermitian; exchanged ones swap their two bilinears' σ and chain. */
-function dagger(s: FieldStructure): FieldStructure {
+export function daggerField(s: FieldStructure): FieldStructure {
   if (s.ordering === 'direct') return s
   const swap = (k: Slot): Slot => (k === 's1' ? 's2' : k === 's2' ? 's1' : k)
   return { ...s, chain: s.chain === 1 ? 2 : 1, slots: s.slots.map(swap) }
@@ -124,7 +126,7 @@ export function fieldCandidates(colorN: number, timeReversal: boolean, chargeCon
     const tSign = (s.slots.length % 2 === 0 ? 1 : -1) // σ's and B, each T-odd
     for (const imaginary of [false, true]) {
       if (timeReversal && imaginary !== tSign < 0) continue
-      const herm: FieldCombo = [{ coef: 1, s, conj: false }, { coef: imaginary ? -1 : 1, s: dagger(s), conj: false }]
+      const herm: FieldCombo = [{ coef: 1, s, conj: false }, { coef: imaginary ? -1 : 1, s: daggerField(s), conj: false }]
       const combo = chargeConjugation ? [...herm, ...herm.map((t) => ({ ...t, conj: true }))] : herm
       out.push({ combo, imaginary })
     }
@@ -154,8 +156,8 @@ export function enumerateFourField(colorN: number, particle: string, anti: strin
   const cands = fieldCandidates(colorN, opts.timeReversal !== false, opts.chargeConjugation !== false)
   const { basis } = contactRank({
     size: cands.length,
-    sample: (F, rng) => sample(F, rng, colorN),
-    values: (F, x) => cands.map((c) => comboValue(F, c.combo, x)),
+    sample: (F, rng) => sampleFieldPoint(F, rng, colorN),
+    values: (F, x) => cands.map((c) => fieldComboValue(F, c.combo, x)),
   }, { signal: opts.signal, label: 'four-fermion operators with a field strength' })
   return {
     combos: basis.map((b) => cands[b]!.combo),
@@ -171,4 +173,3 @@ export function enumerateFourField(colorN: number, particle: string, anti: strin
   }
 }
 
-export const _test = { comboValue, sample, dagger }

@@ -1,16 +1,16 @@
 import { describe, expect, it } from 'vitest'
-import { enumerateFourField, _test, type FieldCombo, type FieldStructure } from '../../../server/engine/heavy/fourField'
+import { daggerField, enumerateFourField, fieldComboValue, sampleFieldPoint, type FieldCombo, type FieldStructure } from '../../../server/engine/heavy/fourField'
 import { contactRank } from '../../../server/engine/heavy/contactSpace'
 
 // (ψ†σ·Bχ)(χ†ψ): exchanged ordering, σ in the first bilinear, contracted with B.
 const m1: FieldStructure = { ordering: 'exchanged', chain: 1, slots: ['s1', 'b'], pairs: [[0, 1]] }
-const herm = (s: FieldStructure, sign = 1): FieldCombo => [{ coef: 1, s, conj: false }, { coef: sign, s: _test.dagger(s), conj: false }]
+const herm = (s: FieldStructure, sign = 1): FieldCombo => [{ coef: 1, s, conj: false }, { coef: sign, s: daggerField(s), conj: false }]
 // (ψ†σ·Bψ)(χ†χ) and (ψ†ψ)(χ†σ·Bχ)
 const dPsi: FieldStructure = { ordering: 'direct', chain: 1, slots: ['s1', 'b'], pairs: [[0, 1]] }
 const dChi: FieldStructure = { ordering: 'direct', chain: 1, slots: ['s2', 'b'], pairs: [[0, 1]] }
 
 function rank(combos: FieldCombo[]): number {
-  return contactRank({ size: combos.length, sample: (F, rng) => _test.sample(F, rng, 1), values: (F, x) => combos.map((c) => _test.comboValue(F, c, x)) }).basis.length
+  return contactRank({ size: combos.length, sample: (F, rng) => sampleFieldPoint(F, rng, 1), values: (F, x) => combos.map((c) => fieldComboValue(F, c, x)) }).basis.length
 }
 
 describe('four-fermion operators with a field strength at 1/m⁴', () => {
