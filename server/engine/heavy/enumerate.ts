@@ -18,7 +18,7 @@ import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
 import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, NONABELIAN_OPERATORS, printedLatex, type CoefficientRelation } from './conventional'
 import { comboLatex, structureBlocks } from './display'
 import { orderSpace, orderSpaceFor, type SpaceConfig } from './orderSpace'
-import { heavyGaugeSetup } from './gaugeSetup'
+import { heavyGaugeSetup, type HeavyGauge } from './gaugeSetup'
 import { enumerateHeavyHeavy, HEAVY_HEAVY_NOTE, type HeavyHeavyOrder } from './heavyHeavy'
 import { expandCombo, type Combo } from './structure'
 import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
@@ -128,10 +128,12 @@ function termsOf(c: Combo, field: string): Array<Record<string, number>> {
  * Enumerate the heavy-frame operator basis order by order up to heavy.maxOrder (≤ 4).
  * @example enumerateHeavy({ heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2 } })
  *   .orders.map((o) => o.count) // [2, 2]  (D², σ·B; Darwin, spin–orbit)
- * Method: rotation-scalar, parity-even candidates completed to Hermitian T-even operators;
+ * Method: rotation-scalar candidates (parity even unless P is switched off) completed to Hermitian,
+ * T-even (unless switched off) operators;
  * independence modulo EOM + IBP from their gauge-field symbols (0, 1, 2 insertions) over two
  * primes; greedy basis. Four-fermion operators (with an antiparticle): rank of the contact
- * vertex, see enumerateFourFermion. Reference: Caswell, Lepage, Phys. Lett. B 167 (1986) 437;
+ * vertex, see enumerateFourFermion; two-particle and heavy–light operators likewise (heavyHeavy.ts,
+ * heavyLight.ts). Reference: Caswell, Lepage, Phys. Lett. B 167 (1986) 437;
  * Manohar, Phys. Rev. D 56 (1997) 230; Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125.
  */
 export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): HeavyEnumeration {
@@ -139,30 +141,12 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
   const gauge = heavyGaugeSetup(heavy, input.groups, input.fields)
   const { charged, colorN } = gauge
   const config: SpaceConfig = { setup: gauge.setup, parity: heavy.imposeParity !== false, timeReversal: heavy.imposeTimeReversal !== false }
-  const single = gauge.setup.factors.length === 1 && config.parity && config.timeReversal
   const field = heavy.particle.name
   const orders: HeavyOrder[] = []
   for (let n = 1; n <= heavy.maxOrder; n++) {
     if (opts.signal?.aborted) throw new EngineCancelledError('heavy enumeration')
     opts.onProgress?.((n - 1) / heavy.maxOrder, `order 1/m^${n}`)
-    const os = orderSpaceFor(n, config, opts.signal)
-    const names = gauge.setup.factors.length > 1 ? gauge.names : undefined
-    const basis = os.space.basis.map((b, i): HeavyOperator => {
-      const c = os.candidates[b]!
-      return {
-        id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field, names),
-        terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
-        ...(c.parityOdd ? { parityOdd: true } : {}), ...(c.timeOdd ? { timeOdd: true } : {}),
-      }
-    })
-    const published = charged && single
-      ? publishedOperators(n, field, basis, colorN > 1 ? NONABELIAN_OPERATORS : CONVENTIONAL_OPERATORS, colorN, opts.signal)
-      : { cards: [], spans: null, redundant: 0 }
-    orders.push({
-      order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans, conventionalRedundant: published.redundant,
-      candidates: os.candidates.length, relationRank: os.space.relationRank,
-      antiparticle: heavy.antiparticle ? basis.map((b) => antiparticleCopy(b, field, heavy.antiparticle!.name)) : [],
-    })
+    orders.push(bilinearOrder(n, input, gauge, config, opts.signal))
   }
   const anti = heavy.antiparticle?.name
   const ffOrders = anti ? [2, 4].filter((n) => n <= heavy.maxOrder) : []
@@ -182,14 +166,41 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     orders,
     fourFermion: fourFermionOrders.flatMap((o) => [...o.basis, ...o.fieldStrength]),
     fourFermionOrders,
-    fourFermionNote: anti ? FOUR_FERMION_NOTE : undefined,
+    fourFermionNote: anti ? FOUR_FERMION_NOTE + (config.parity ? '' : PARITY_ODD_CONTACT) : undefined,
     heavyHeavy: [2, 4].filter((n) => n <= heavy.maxOrder).map((n) => enumerateHeavyHeavy(n, colorN, field, config.timeReversal, opts.signal)),
-    heavyHeavyNote: HEAVY_HEAVY_NOTE + (anti ? ' The antiparticle pair (χ†χ)(χ†χ) follows by charge conjugation and is not listed.' : ''),
+    heavyHeavyNote: HEAVY_HEAVY_NOTE + (anti ? ' The antiparticle pair (χ†χ)(χ†χ) follows by charge conjugation and is not listed.' : '') + (config.parity ? '' : PARITY_ODD_CONTACT),
     ...heavyLightPart(input, opts.signal),
     eomNote: EOM_NOTE + (gauge.unseen.length ? ` Field strengths of ${gauge.unseen.join(', ')} (non-abelian groups the heavy particle does not feel) would enter through colour traces of their own and are not included.` : ''),
     antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
   }
 }
+
+/** The ψ-bilinears of one order, the published cards where the literature has a list, and χ's copies. */
+function bilinearOrder(n: number, input: HeavyInput, gauge: HeavyGauge, config: SpaceConfig, signal?: CancelFlag): HeavyOrder {
+  const { heavy } = input
+  const field = heavy.particle.name
+  const os = orderSpaceFor(n, config, signal)
+  const names = gauge.setup.factors.length > 1 ? gauge.names : undefined
+  const basis = os.space.basis.map((b, i): HeavyOperator => {
+    const c = os.candidates[b]!
+    return {
+      id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field, names),
+      terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
+      ...(c.parityOdd ? { parityOdd: true } : {}), ...(c.timeOdd ? { timeOdd: true } : {}),
+    }
+  })
+  const single = gauge.setup.factors.length === 1 && config.parity && config.timeReversal
+  const published = gauge.charged && single
+    ? publishedOperators(n, field, basis, gauge.colorN > 1 ? NONABELIAN_OPERATORS : CONVENTIONAL_OPERATORS, gauge.colorN, signal)
+    : { cards: [], spans: null, redundant: 0 }
+  return {
+    order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans, conventionalRedundant: published.redundant,
+    candidates: os.candidates.length, relationRank: os.space.relationRank,
+    antiparticle: heavy.antiparticle ? basis.map((b) => antiparticleCopy(b, field, heavy.antiparticle!.name)) : [],
+  }
+}
+
+const PARITY_ODD_CONTACT = ' P is not imposed, but P-odd contact operators (an odd number of derivatives, 1/m³) are not enumerated here.'
 
 /** The heavy–light sector of a theory with light scalars or fermions (empty without them). */
 function heavyLightPart(input: HeavyInput, signal?: CancelFlag): { heavyLight: HeavyLightClass[]; heavyLightNote?: string } {

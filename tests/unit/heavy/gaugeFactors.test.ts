@@ -19,7 +19,7 @@ describe('several gauge groups at once', () => {
     expect(g.names).toEqual(['C', 'QED'])
     expect(g.setup.factors).toEqual([{ kind: 'su', coupled: true }, u1(true)])
   })
-  it('SU(3) × U(1): 3, 4, 19 operators at 1/m, 1/m², 1/m³ — each factor\'s σ·B, Darwin and spin–orbit, and at 1/m³ the 11 of SU(3), the 4 linear and 2 quadratic of U(1), and the mixed E_g·E_γ, B_g·B_γ (hand derivation from the single-factor lists of Manohar, Phys. Rev. D 56 (1997) 230)', () => {
+  it('SU(3) × U(1): 3, 4, 19 operators at 1/m, 1/m², 1/m³ — each factor\'s σ·B, Darwin and spin–orbit, and at 1/m³ the 11 of SU(3), the 4 linear and 2 quadratic of U(1), and the mixed E_g·E_γ, B_g·B_γ (hand derivation from the single-factor lists of Manohar, Phys. Rev. D 56 (1997) 230)', { timeout: 300_000 }, () => {
     expect(dims({ setup: { colorN: 3, factors: [{ kind: 'su', coupled: true }, u1(true)] }, parity: true, timeReversal: true }, [1, 2, 3])).toEqual([3, 4, 19])
   })
   it('U(1) × U(1): 3, 4, 15 (hand derivation: D⁴, four linear terms per field, E₁², E₂², E₁·E₂, B₁², B₂², B₁·B₂)', () => {
@@ -80,11 +80,11 @@ function fromWords(N: number): number {
 }
 
 describe('SU(N) to 1/m⁴ (compare Gunawardana and Paz, JHEP 07 (2017) 137; Kobach and Pal, Phys. Lett. B 772 (2017) 225)', () => {
-  it('SU(2) at 1/m⁴: 18 from the E/B building blocks and 18 from D/T words alone (common practice: ℰ = [D_t, D], ℬ = ½ε[D, D]; two generating sets of one quotient)', () => {
+  it('SU(2) at 1/m⁴: 18 from the E/B building blocks and 18 from D/T words alone (common practice: ℰ = [D_t, D], ℬ = ½ε[D, D]; two generating sets of one quotient)', { timeout: 300_000 }, () => {
     expect(orderSpaceFor(4, defaultConfig(2)).space.dimension).toBe(18)
     expect(fromWords(2)).toBe(18)
   })
-  it('SU(3) at 1/m⁴: 25 P- and T-even operators (the D/T-word check gives 25 too, run in the benchmarks); 12 for U(1) (Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017: c_X1 … c_X12, from memory)', () => {
+  it('SU(3) at 1/m⁴: 25 P- and T-even operators (the D/T-word check gives 25 too, run in the benchmarks); 12 for U(1) (Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017: c_X1 … c_X12, from memory)', { timeout: 300_000 }, () => {
     expect(orderSpaceFor(4, defaultConfig(3)).space.dimension).toBe(25)
     expect(orderSpaceFor(4, defaultConfig(1)).space.dimension).toBe(12)
   })
