@@ -5,12 +5,14 @@ import { resolve } from 'node:path'
 import type { TestProject } from 'vitest/node'
 import knexFactory from 'knex'
 import { recreateLocalDatabase, localUrl } from '../../scripts/lib/postgres.mjs'
+import { freePortFrom } from '../../scripts/lib/pgPlace.mjs'
 import { migrationSource } from '../../migrations/index'
 
 // One real server per test project, on its own fresh database (api and e2e never share rows).
-// SCALEWRIGHT_TEST_PORT moves them, so two checkouts can test side by side.
-const BASE_PORT = Number(process.env.SCALEWRIGHT_TEST_PORT || 3101)
-const PORTS: Record<string, number> = { api: BASE_PORT, e2e: BASE_PORT + 1 }
+// SCALEWRIGHT_TEST_PORT fixes their ports (api, api + 1); unset, each takes a free port, so
+// two checkouts can test side by side.
+const FIXED_PORT = Number(process.env.SCALEWRIGHT_TEST_PORT || 0)
+const OFFSETS: Record<string, number> = { api: 0, e2e: 1 }
 const root = resolve(import.meta.dirname, '..', '..')
 
 declare module 'vitest' {
@@ -33,12 +35,15 @@ export default async function setup(project: TestProject) {
   if (!existsSync(resolve(root, '.output/server/index.mjs'))) throw new Error('No built app: run `npm test` (it builds first) or `npx nuxt build`')
   const name = project.name
   const database = `scalewright_test_${name}`
-  let databaseUrl = process.env.DATABASE_URL ? `${process.env.DATABASE_URL.replace(/\/[^/]*$/, '')}/${database}` : localUrl(database)
-  if (!process.env.DATABASE_URL) await recreateLocalDatabase(database)
+  // Test rows are throwaway: these databases alone skip waiting for the disk at commit.
+  if (!process.env.DATABASE_URL) await recreateLocalDatabase(database, { throwaway: true })
+  const databaseUrl = process.env.DATABASE_URL ? `${process.env.DATABASE_URL.replace(/\/[^/]*$/, '')}/${database}` : localUrl(database)
   const db = knexFactory({ client: 'pg', connection: databaseUrl })
   await db.migrate.latest({ migrationSource })
   await db.destroy()
-  const port = PORTS[name] ?? 3199
+  const offset = OFFSETS[name] ?? 2
+  const from = 3101 + 50 * offset // api searches 3101–3150, e2e 3151–3200: never the same port
+  const port = FIXED_PORT ? FIXED_PORT + offset : await freePortFrom(from, 50, from)
   const baseUrl = `http://127.0.0.1:${port}`
   const server = spawn(process.execPath, ['.output/server/index.mjs'], {
     cwd: root,
