@@ -1,53 +1,50 @@
 import type { Knex } from 'knex'
 import { startEngineTask } from './engineTask'
 import { persistRunResult, type RunParams } from './persistRun'
-
-const CANCEL_POLL_MS = 400
-const PROGRESS_WRITE_MS = 250
+import { claimRun, heldRun, startLease, RunLostError } from './runLease'
+import { RUN_LEASE, type SendRun } from '../utils/jobs/orphans'
 
 /**
- * Carry out one run: mark it running, compute in a worker thread, stream progress into the
- * runs row, honour a cancel request, and write the result in one transaction. An engine input
- * error fails the run with its message (no retry); anything else is rethrown so that the
- * queue retries the job.
+ * Carry out one run: claim it (only while queued), compute in a worker thread, beat the
+ * heartbeat with the progress, honour a cancel request, and write the result in one
+ * transaction. An engine input error fails the run with its message; any other error retries
+ * it once (a fresh job), then fails it. Nothing is thrown: the queue never retries by itself.
  */
-export async function executeRun(db: Knex, runId: number): Promise<void> {
-  const run = await db('runs').where({ id: runId }).first()
-  if (!run || ['done', 'cancelled'].includes(run.status)) return
-  if (run.cancel_requested) {
-    await db('runs').where({ id: runId }).update({ status: 'cancelled', finished_at: db.fn.now() })
-    return
-  }
-  await db('runs').where({ id: runId }).update({ status: 'running', started_at: db.fn.now(), attempts: db.raw('attempts + 1'), progress: 0, current_label: 'starting' })
+export async function executeRun(db: Knex, runId: number, send: SendRun): Promise<void> {
+  const run = await claimRun(db, runId)
+  if (!run) return // done, cancelled, or held by another worker: a duplicate job
   const params = run.params as RunParams
   let pending: { fraction: number, label: string } | undefined
   const handle = startEngineTask({ kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, maxOrder: params.maxOrder, nf: params.nf, priorities: params.priorities }, (fraction, label) => { pending = { fraction, label } })
-  const timer = setInterval(async () => {
-    if (pending) {
-      const p = pending
-      pending = undefined
-      await db('runs').where({ id: runId, status: 'running' }).update({ progress: Math.min(0.99, p.fraction), current_label: p.label.slice(0, 200) }).catch(() => {})
-    }
-  }, PROGRESS_WRITE_MS)
-  const poll = setInterval(async () => {
-    const row = await db('runs').where({ id: runId }).first('cancel_requested').catch(() => null)
-    if (row?.cancel_requested) handle.cancel()
-  }, CANCEL_POLL_MS)
+  const lease = startLease(db, run, () => { const p = pending; pending = undefined; return p }, () => handle.cancel())
   try {
     const result = await handle.result
-    await persistRunResult(db, { ...run, params }, result)
+    await persistRunResult(db, { ...run, theory_id: run.theory_id, kind: run.kind, params }, result)
   } catch (error) {
-    const e = error as Error
-    if (e.name === 'EngineCancelledError') {
-      await db('runs').where({ id: runId }).update({ status: 'cancelled', current_label: 'cancelled', finished_at: db.fn.now() })
-    } else if (e.name === 'EngineInputError' || e.name === 'EngineConsistencyError') {
-      await db('runs').where({ id: runId }).update({ status: 'failed', error: e.message, finished_at: db.fn.now() })
-    } else {
-      await db('runs').where({ id: runId }).update({ status: 'failed', error: e.message || String(e), finished_at: db.fn.now() })
-      throw error
-    }
+    await recordEnd(db, run, lease.lost ? new RunLostError(run.id) : error as Error, send)
   } finally {
-    clearInterval(timer)
-    clearInterval(poll)
+    lease.stop()
+  }
+}
+
+async function recordEnd(db: Knex, run: { id: number, attempts: number }, e: Error, send: SendRun) {
+  try {
+    if (e.name === 'RunLostError') {
+      console.error(`[worker] ${e.message}`)
+    } else if (e.name === 'EngineCancelledError') {
+      await heldRun(db, run).update({ status: 'cancelled', current_label: 'cancelled', finished_at: db.fn.now() })
+    } else if (e.name === 'EngineInputError' || e.name === 'EngineConsistencyError') {
+      await heldRun(db, run).update({ status: 'failed', error: e.message, finished_at: db.fn.now() })
+    } else if (run.attempts < RUN_LEASE.maxAttempts) {
+      console.error(`[worker] run ${run.id} stopped by an unexpected error; queued again once:`, e)
+      const n = await heldRun(db, run).update({ status: 'queued', job_id: null, worker: null, progress: 0, current_label: 'retrying after an unexpected error' })
+      if (n) await db('runs').where({ id: run.id, status: 'queued' }).whereNull('job_id').update({ job_id: await send(run.id) })
+    } else {
+      console.error(`[worker] run ${run.id} failed on its retry:`, e)
+      await heldRun(db, run).update({ status: 'failed', error: `The run stopped on an unexpected error, also on its retry: ${e.message || String(e)}`, finished_at: db.fn.now() })
+    }
+  } catch (writeError) {
+    // The database is away: the heartbeat stops with us, and a sweep settles the run later.
+    console.error(`[worker] could not record the end of run ${run.id}:`, (writeError as Error).message)
   }
 }

@@ -7,10 +7,16 @@ import { writeHeavyBasis } from './heavyBasis'
 import { heavyReport } from '../engine/heavy/report'
 import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
+import { heldRun, RunLostError } from './runLease'
 
-/** Write a finished run in one transaction: nothing of it is visible unless all of it is. */
-export async function persistRunResult(db: Knex, run: { id: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
+/**
+ * Write a finished run in one transaction: nothing of it is visible unless all of it is. The
+ * run row is locked first and must still be this attempt's (see runLease.ts), so a worker
+ * whose run was taken from it writes nothing.
+ */
+export async function persistRunResult(db: Knex, run: { id: number, attempts: number, theory_id: number, kind: string, params: RunParams }, result: unknown) {
   await db.transaction(async (trx) => {
+    if (!await heldRun(trx, run).forUpdate().first('id')) throw new RunLostError(run.id)
     if (run.kind === 'count') {
       await finish(trx, run.id, result)
     } else if (isHeavy(result)) {

@@ -1,7 +1,8 @@
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
-import { useQueue, RUN_QUEUE } from '../jobs/queue'
 import { MAX_HEAVY_ORDER, MAX_RUN_DIMENSION } from '../../../shared/schemas/runRequests'
+import { sendRunJob } from '../jobs/queue'
+import { settleRuns } from '../jobs/orphans'
 
 export async function runOr404(id: number) {
   const row = await useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id').where('r.id', id).first('r.*', 't.group_id')
@@ -19,19 +20,14 @@ export function publicRun(row: Record<string, any>) {
 }
 
 /**
- * A run still marked queued/running whose queue job has failed (its worker died and the
- * retry failed too) is shown as failed, never left spinning.
+ * A queued or running run whose worker vanished is settled when read (retried once, failed with
+ * a message, or cancelled if that was asked for): see server/utils/jobs/orphans.ts.
  */
-export async function reconcileWithQueue(row: Record<string, any>) {
-  if (!['queued', 'running'].includes(row.status) || !row.job_id) return row
-  const boss = await useQueue()
-  const job = await boss.getJobById(RUN_QUEUE, row.job_id, { includeArchive: true })
-  if (job && ['failed', 'cancelled'].includes(job.state)) {
-    const message = 'the worker stopped before the run finished (retried once); start it again'
-    await useDb()('runs').where({ id: row.id }).whereIn('status', ['queued', 'running']).update({ status: 'failed', error: message, finished_at: useDb().fn.now() })
-    return { ...row, status: 'failed', error: message }
-  }
-  return row
+export async function settleIfOrphaned(row: Record<string, any>) {
+  if (!['queued', 'running'].includes(row.status)) return row
+  const settled = await settleRuns(useDb(), sendRunJob, row.id)
+  if (Object.values(settled).every((ids) => ids.length === 0)) return row
+  return runOr404(row.id)
 }
 
 /**
