@@ -2,6 +2,7 @@ import { defineEventHandler, createError, isError, setResponseStatus, type H3Eve
 import { ZodError } from 'zod'
 import { EngineError, EngineInputError } from '../../engine/errors'
 import { describeZodError } from '../../../shared/schemas/describeZodError'
+import { databaseUnavailableError } from './databaseUnavailable'
 
 /**
  * The one error mapper of the API: schema errors → 400, engine input errors → 422 with the
@@ -13,7 +14,7 @@ export function defineApiHandler<T>(handler: (event: H3Event<EventHandlerRequest
     try {
       return await handler(event)
     } catch (error) {
-      throw toHttpError(error)
+      throw databaseUnavailableError(event, error) ?? toHttpError(error)
     }
   })
 }
