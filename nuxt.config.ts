@@ -5,6 +5,7 @@ export default defineNuxtConfig({
   dir: { app: '.' },
   modules: ['@pinia/nuxt', '@nuxtjs/tailwindcss', '@vueuse/nuxt', 'nuxt-auth-utils'],
   css: ['@fontsource/source-serif-4/400.css', '@fontsource/source-serif-4/600.css', 'katex/dist/katex.min.css', '~/assets/main.css'],
+  app: { head: { link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }] } },
   devtools: { enabled: false },
   telemetry: false,
   nitro: {
