@@ -1,6 +1,6 @@
 // One local PostgreSQL cluster of this checkout (Debian's server binaries): created on first
 // use, started on its port, listening on 127.0.0.1 only, its socket inside its data folder.
-import { execFileSync, spawnSync } from 'node:child_process'
+import { execFile, execFileSync, spawnSync } from 'node:child_process'
 import { chmodSync, existsSync, mkdirSync, readdirSync } from 'node:fs'
 import { join } from 'node:path'
 import { dataDirFor, derivedPort, isRoot, portToStart, postmasterPid, runningPort } from './pgPlace.mjs'
@@ -44,12 +44,22 @@ function asServerUser(cmd, args, opts = {}) {
   return spawnSync(file, argv, { encoding: 'utf8', ...opts })
 }
 
+// The same, without blocking the event loop (a restart may take seconds: crash recovery).
+function asServerUserAsync(cmd, args) {
+  const [file, argv] = isRoot ? ['runuser', ['-u', 'postgres', '--', cmd, ...args]] : [cmd, args]
+  return new Promise((resolvePromise) => {
+    execFile(file, argv, { encoding: 'utf8' }, (error, stdout, stderr) => resolvePromise({ status: error ? (error.code ?? 1) : 0, stdout, stderr }))
+  })
+}
+
 export class LocalCluster {
   /** @param {string} name 'main' or 'faults'; @param {'durable'|'fast'} settings */
   constructor(name, settings = 'durable') {
     this.name = name
     this.settings = settings
     this.announced = false
+    /** @type {number | undefined} the port of the last start; a restart takes it again */
+    this.lastPort = undefined
   }
 
   get dataDir() { return (this._dataDir ??= dataDirFor(this.name)) }
@@ -98,7 +108,7 @@ export class LocalCluster {
     const port = this.lastPort ?? await portToStart(this.name)
     let r
     for (let attempt = 0; attempt < 5; attempt++) {
-      r = asServerUser(join(this.bin, 'pg_ctl'), ['-D', this.dataDir, '-l', this.logFile, '-o', `-p ${port}`, '-w', '-t', '60', 'start'])
+      r = await asServerUserAsync(join(this.bin, 'pg_ctl'), ['-D', this.dataDir, '-l', this.logFile, '-o', `-p ${port}`, '-w', '-t', '60', 'start'])
       if (r.status === 0 || this.isReady()) break
       await new Promise((res) => setTimeout(res, 1000))
     }

@@ -14,7 +14,7 @@ const MESSAGES = [/Connection terminated/i, /Knex: Timeout acquiring a connectio
 
 export const RETRY_AFTER_SECONDS = 5
 export const DATABASE_UNAVAILABLE_MESSAGE = 'The database is unavailable at the moment (it may be restarting); retrying. '
-  + 'This request was not carried out: try it again in a few seconds.'
+  + 'This request may not have been saved: check, and try again in a few seconds.'
 
 export function isDatabaseUnavailable(error: unknown): boolean {
   for (let e = error as { code?: unknown, message?: unknown, cause?: unknown, errors?: unknown } | undefined, depth = 0; e && depth < 4; e = e.cause as typeof e, depth++) {
