@@ -27,14 +27,32 @@ export function useQueue(): Promise<PgBoss> {
     const boss = new PgBoss({ connectionString: process.env.DATABASE_URL || DEFAULT_URL, max: 4 })
     boss.on('error', logQuietly)
     await boss.start()
-    await boss.createQueue(RUN_QUEUE, RUN_QUEUE_POLICY) // no-op when it exists
-    await boss.updateQueue(RUN_QUEUE, RUN_QUEUE_POLICY) // queues made before this policy
+    await setUpRunQueue(boss)
     return boss
   })().catch((error) => {
     starting = undefined // let the next call try again (the database may be back by then)
     throw error
   })
   return starting
+}
+
+/**
+ * Create the run queue (a no-op when it exists) and give it today's policy (queues made before
+ * it). On a fresh database the server and a worker do this at the same moment, and pg-boss's
+ * create can deadlock with itself: PostgreSQL aborts one side, which simply tries again.
+ */
+async function setUpRunQueue(boss: PgBoss) {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await boss.createQueue(RUN_QUEUE, RUN_QUEUE_POLICY)
+      await boss.updateQueue(RUN_QUEUE, RUN_QUEUE_POLICY)
+      return
+    } catch (error) {
+      const code = (error as { code?: string }).code
+      if (attempt >= 5 || (code !== '40P01' && code !== '23505')) throw error
+      await new Promise((r) => setTimeout(r, 100 * attempt))
+    }
+  }
 }
 
 /** Send the queue job that carries a run; returns the job id. */
