@@ -4,7 +4,7 @@
 // it, so the cluster then goes under /var/lib/scalewright/<checkout id>/.
 import { createHash } from 'node:crypto'
 import { spawnSync } from 'node:child_process'
-import { existsSync, mkdirSync, readFileSync, realpathSync, writeFileSync } from 'node:fs'
+import { chmodSync, existsSync, mkdirSync, readFileSync, realpathSync, writeFileSync } from 'node:fs'
 import { createServer } from 'node:net'
 import { join, resolve } from 'node:path'
 
@@ -35,7 +35,9 @@ export function dataDirFor(name) {
   const inCheckout = join(root, name === 'main' ? '.pgdata' : `.pgdata-${name}`)
   if (serverUserCanEnter(root)) return inCheckout
   const base = join(SHARED_BASE, checkoutId())
-  mkdirSync(base, { recursive: true, mode: 0o755 })
+  mkdirSync(base, { recursive: true })
+  // Traversable by the postgres user whatever the umask (the cluster folder itself is 0700).
+  for (const dir of [SHARED_BASE, base]) chmodSync(dir, 0o755)
   // Say whose folder this is, for whoever looks at /var/lib/scalewright later.
   const note = join(base, 'CHECKOUT')
   if (!existsSync(note)) writeFileSync(note, `${realpathSync(root)}\n`)
