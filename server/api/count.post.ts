@@ -1,5 +1,6 @@
-import { defineApiHandler, fail } from '../utils/http/apiHandler'
+import { defineApiHandler } from '../utils/http/apiHandler'
 import { readJson } from '../utils/http/readJson'
+import { engineResultWithin } from '../utils/http/engineWithin'
 import { requireUser } from '../utils/auth/currentUser'
 import { startEngineTask } from '../worker/engineTask'
 import { QuickCountSchema } from '../../shared/schemas/runRequests'
@@ -13,13 +14,5 @@ export default defineApiHandler(async (event) => {
   await requireUser(event)
   const body = await readJson(event, QuickCountSchema)
   const handle = startEngineTask<CountResult>({ kind: 'count', theory: body.theory, maxDim: body.maxDim, nf: body.nf }, () => {})
-  const timer = setTimeout(() => handle.cancel(), QUICK_LIMIT_MS)
-  try {
-    return await handle.result
-  } catch (error) {
-    if ((error as Error).name === 'EngineCancelledError') fail(422, `This count takes longer than ${QUICK_LIMIT_MS / 1000} s; start a background run instead`)
-    throw error
-  } finally {
-    clearTimeout(timer)
-  }
+  return engineResultWithin(handle, QUICK_LIMIT_MS, `This count takes longer than ${QUICK_LIMIT_MS / 1000} s; start a background run instead`)
 })

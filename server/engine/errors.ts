@@ -1,35 +1,42 @@
 /**
- * Typed errors of the Scalewright engine. Routes map EngineInputError to HTTP 422 with
- * its message; anything else is a bug (500). A message names the function at fault and
- * repeats the bad value, so that a user can see what to change.
+ * Typed errors of the Scalewright engine. The message of an input error is written for the
+ * physicist who caused it: what was wrong, in their terms, and how to fix it. Where it was
+ * raised (`where`, a function name) is kept apart for the server log and never shown.
+ *
+ * - EngineInputError: the request asks for something the engine cannot do → HTTP 422.
+ * - EngineConsistencyError: an internal check failed (a bug) → HTTP 500 with a logged reference.
+ * - EngineCancelledError: the owner cancelled, or a time limit stopped the work.
  */
 export class EngineError extends Error {
-  constructor(message: string) {
+  /** The function that raised the error, for logs only. */
+  readonly where: string
+  constructor(message: string, where = '') {
     super(message)
     this.name = 'EngineError'
+    this.where = where
   }
 }
 
 /** The input is well-formed JSON but asks for something the engine cannot do. */
 export class EngineInputError extends EngineError {
-  constructor(fn: string, message: string) {
-    super(`${fn}: ${message}`)
+  constructor(where: string, message: string) {
+    super(message, where)
     this.name = 'EngineInputError'
   }
 }
 
-/** A run was cancelled by its owner; partial results are discarded. */
+/** A run was cancelled by its owner (or stopped by a time limit); partial results are discarded. */
 export class EngineCancelledError extends EngineError {
   constructor(what = 'run') {
-    super(`${what} cancelled`)
+    super('The computation was cancelled before it finished.', what)
     this.name = 'EngineCancelledError'
   }
 }
 
-/** An internal consistency check failed (e.g. two primes disagree); never hidden. */
+/** An internal consistency check failed (e.g. two primes disagree); never hidden, never shown. */
 export class EngineConsistencyError extends EngineError {
-  constructor(fn: string, message: string) {
-    super(`${fn}: ${message}`)
+  constructor(where: string, message: string) {
+    super(message, where)
     this.name = 'EngineConsistencyError'
   }
 }

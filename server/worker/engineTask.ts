@@ -1,7 +1,8 @@
 import { Worker } from 'node:worker_threads'
 import { resolve } from 'node:path'
 import { pathToFileURL } from 'node:url'
-import { EngineCancelledError, EngineError } from '../engine/errors'
+import { EngineCancelledError } from '../engine/errors'
+import { fromThreadError } from './threadError'
 import type { Priorities } from '../engine/basis/classBasis'
 
 /**
@@ -32,14 +33,13 @@ export function startEngineTask<T>(task: EngineTask, onProgress: (fraction: numb
     worker.on('message', (msg) => {
       if (msg.type === 'progress') onProgress(msg.fraction, msg.label)
       else if (msg.type === 'done') resolve(msg.result as T)
-      else if (msg.type === 'error') {
-        reject(msg.name === 'EngineCancelledError' ? new EngineCancelledError() : Object.assign(new EngineError(msg.message), { name: msg.name }))
-      }
+      else if (msg.type === 'error') reject(fromThreadError(msg))
     })
+    // An error the thread could not post (it failed to load, ran out of memory, …) is unexpected.
     worker.on('error', reject)
     worker.on('exit', (code) => {
-      if (cancelled) reject(new EngineCancelledError())
-      else if (code !== 0) reject(new EngineError(`engine thread exited with code ${code}`))
+      if (cancelled) reject(new EngineCancelledError(task.kind))
+      else if (code !== 0) reject(new Error(`the engine thread stopped with exit code ${code}`))
     })
   }).finally(() => { void worker.terminate() })
   return {

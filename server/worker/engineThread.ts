@@ -8,6 +8,7 @@ import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
+import { toThreadError } from './threadError'
 
 const { task, cancelFlag } = workerData as { task: EngineTask, cancelFlag: Int32Array }
 const signal = { get aborted() { return Atomics.load(cancelFlag, 0) === 1 } }
@@ -31,6 +32,5 @@ try {
         : buildBasis(theory, { maxDim: task.maxDim!, nf: task.nf, priorities: task.priorities, onProgress, signal })
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
-  const e = error as Error
-  parentPort!.postMessage({ type: 'error', name: e.name, message: e.message })
+  parentPort!.postMessage(toThreadError(error))
 }

@@ -3,13 +3,14 @@ import { startEngineTask } from './engineTask'
 import { persistRunResult, type RunParams } from './persistRun'
 import { claimRun, heldRun, startLease, RunLostError } from './runLease'
 import { RUN_LEASE, type SendRun } from '../utils/jobs/orphans'
+import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../engine/errors'
+import { reportInternalError } from '../utils/internalError'
 
 /**
  * Carry out one run: claim it (only while queued), compute in a worker thread, beat the
  * heartbeat with the progress, honour a cancel request, and write the result in one
- * transaction. An engine input error fails the run with its message; any other error retries
- * it once (a fresh job), then fails it. Nothing is thrown: the queue never retries by itself.
- */
+ * transaction. How its end is recorded: see recordEnd. Nothing is thrown: the queue never
+ * retries by itself. */
 export async function executeRun(db: Knex, runId: number, send: SendRun): Promise<void> {
   const run = await claimRun(db, runId)
   if (!run) return // done, cancelled, or held by another worker: a duplicate job
@@ -21,27 +22,33 @@ export async function executeRun(db: Knex, runId: number, send: SendRun): Promis
     const result = await handle.result
     await persistRunResult(db, { ...run, theory_id: run.theory_id, kind: run.kind, params }, result)
   } catch (error) {
-    await recordEnd(db, run, lease.lost ? new RunLostError(run.id) : error as Error, send)
+    await recordEnd(db, run, lease.lost ? new RunLostError(run.id) : error, send)
   } finally {
     lease.stop()
   }
 }
 
-async function recordEnd(db: Knex, run: { id: number, attempts: number }, e: Error, send: SendRun) {
+/**
+ * How a run ends when its computation fails. An engine input error fails it with its message;
+ * a failed consistency check fails it with a logged reference (a bug: a retry gives the same
+ * answer). Anything else is logged under a reference and retried once (a fresh job), then the
+ * run fails with the reference of its retry. A run this worker lost is left to its new holder.
+ */
+async function recordEnd(db: Knex, run: { id: number, attempts: number }, error: unknown, send: SendRun) {
+  const fail = (text: string) => heldRun(db, run).update({ status: 'failed', error: text, finished_at: db.fn.now() })
   try {
-    if (e.name === 'RunLostError') {
-      console.error(`[worker] ${e.message}`)
-    } else if (e.name === 'EngineCancelledError') {
+    if (error instanceof RunLostError) {
+      console.error(`[worker] ${error.message}`)
+    } else if (error instanceof EngineCancelledError) {
       await heldRun(db, run).update({ status: 'cancelled', current_label: 'cancelled', finished_at: db.fn.now() })
-    } else if (e.name === 'EngineInputError' || e.name === 'EngineConsistencyError') {
-      await heldRun(db, run).update({ status: 'failed', error: e.message, finished_at: db.fn.now() })
-    } else if (run.attempts < RUN_LEASE.maxAttempts) {
-      console.error(`[worker] run ${run.id} stopped by an unexpected error; queued again once:`, e)
-      const n = await heldRun(db, run).update({ status: 'queued', job_id: null, worker: null, progress: 0, current_label: 'retrying after an unexpected error' })
-      if (n) await db('runs').where({ id: run.id, status: 'queued' }).whereNull('job_id').update({ job_id: await send(run.id) })
+    } else if (error instanceof EngineInputError) {
+      await fail(error.message)
+    } else if (error instanceof EngineConsistencyError || run.attempts >= RUN_LEASE.maxAttempts) {
+      await fail(reportInternalError(error, `run ${run.id} (attempt ${run.attempts})`).text)
     } else {
-      console.error(`[worker] run ${run.id} failed on its retry:`, e)
-      await heldRun(db, run).update({ status: 'failed', error: `The run stopped on an unexpected error, also on its retry: ${e.message || String(e)}`, finished_at: db.fn.now() })
+      const { ref } = reportInternalError(error, `run ${run.id} (attempt ${run.attempts}; queued again once)`)
+      const n = await heldRun(db, run).update({ status: 'queued', job_id: null, worker: null, progress: 0, current_label: `retrying after an internal error (ref ${ref})` })
+      if (n) await db('runs').where({ id: run.id, status: 'queued' }).whereNull('job_id').update({ job_id: await send(run.id) })
     }
   } catch (writeError) {
     // The database is away: the heartbeat stops with us, and a sweep settles the run later.

@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { basisOr404 } from '../../../utils/db/bases'
 import { useDb } from '../../../utils/db/connection'
 import { startEngineTask } from '../../../worker/engineTask'
+import { engineResultWithin } from '../../../utils/http/engineWithin'
 import { expressIn, type Fingerprint } from '../../../engine/board/fingerprints'
 import { typedRewritePlan } from '../../../engine/board/fingerprintVersion'
 import { toString as ratString, isZero } from '../../../engine/exact/rational'
@@ -20,23 +21,18 @@ export default defineApiHandler(async (event) => {
   await requireGroupRole(event, basis.group_id, 'viewer')
   const body = await readJson(event, TypedRewriteSchema)
   const kept = await useDb()('operators').where({ basis_id: basis.id, class_key: body.classKey, column: 'kept' }).orderBy('position').select('id', 'latex', 'fingerprint', 'text')
-  if (!(basis.classes as { key: string }[]).some((c) => c.key === body.classKey)) fail(404, `classKey: no class "${body.classKey}" in this basis`)
+  if (!(basis.classes as { key: string }[]).some((c) => c.key === body.classKey)) fail(404, `This basis has no class "${body.classKey}"; choose one of the classes shown on the board`)
   if (kept.some((k) => !k.fingerprint)) fail(409, 'This basis was stored without fingerprints; run it again to rewrite typed operators')
   // The run's frozen theory file fixed the sample points; the theory may have been edited since.
   const run = basis.run_id ? await useDb()('runs').where({ id: basis.run_id }).first('params') : null
   const theory = run?.params?.theory ?? basis.theory_definition
   const plan = typedRewritePlan(basis.fingerprint_version, kept.map((k) => k.text as string), body.text)
   const handle = startEngineTask<Fingerprint[]>({ kind: 'fingerprint', theory, classKey: body.classKey, texts: plan.texts, priorities: run?.params?.priorities }, () => {})
-  const timer = setTimeout(() => handle.cancel(), LIMIT_MS)
-  try {
-    const prints = await handle.result
-    const keptPrints = plan.useStored ? kept.map((k) => k.fingerprint as Fingerprint) : prints.slice(0, -1)
-    const combo = expressIn(keptPrints, prints[prints.length - 1]!)
-    if (!combo) return { rewrite: null, message: 'Not a combination of the kept operators: the kept set does not cover it (coverage incomplete)' }
-    const terms = combo.coefficients.map((c, i) => ({ c, k: kept[i]! })).filter(({ c }) => !isZero(c))
-      .map(({ c, k }) => ({ operatorId: k.id, latex: k.latex, coefficient: ratString(c) }))
-    return { rewrite: { vanishes: terms.length === 0, terms } }
-  } finally {
-    clearTimeout(timer)
-  }
+  const prints = await engineResultWithin(handle, LIMIT_MS, `Placing this operator takes longer than ${LIMIT_MS / 1000} s; try it in a class with fewer fields or derivatives`)
+  const keptPrints = plan.useStored ? kept.map((k) => k.fingerprint as Fingerprint) : prints.slice(0, -1)
+  const combo = expressIn(keptPrints, prints[prints.length - 1]!)
+  if (!combo) return { rewrite: null, message: 'Not a combination of the kept operators: the kept set does not cover it (coverage incomplete)' }
+  const terms = combo.coefficients.map((c, i) => ({ c, k: kept[i]! })).filter(({ c }) => !isZero(c))
+    .map(({ c, k }) => ({ operatorId: k.id, latex: k.latex, coefficient: ratString(c) }))
+  return { rewrite: { vanishes: terms.length === 0, terms } }
 })

@@ -4,7 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { ladderOf } from '../../../utils/db/scaleLadders'
 import { computeLadder } from '../../../utils/scales/ladderEstimates'
-import { EngineError } from '../../../engine/errors'
+import { EngineInputError } from '../../../engine/errors'
 import { SCALE_UNITS } from '../../../engine/scales/units'
 
 // Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet).
@@ -17,7 +17,8 @@ export default defineApiHandler(async (event) => {
   try {
     computed = stored ? computeLadder(stored.ladder) : null
   } catch (e) {
-    if (!(e instanceof EngineError)) throw e
+    // A stored ladder the engine refuses is shown with its message; anything else is a bug.
+    if (!(e instanceof EngineInputError)) throw e
     problem = e.message
   }
   return { theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
