@@ -11,7 +11,7 @@ export default defineApiHandler(async (event): Promise<TheoryCheckReply> => {
   await requireUser(event)
   const { theory } = await readJson(event, TheoryCheckSchema)
   const parsed = TheorySchema.safeParse(theory)
-  if (!parsed.success) fail(400, `theory: ${formatTheoryIssues(theory, parsed.error.issues)}`)
+  if (!parsed.success) fail(400, formatTheoryIssues(theory, parsed.error.issues))
   const conditions = anomalyConditions(parsed.data!)
   const anomalies = conditions.filter((c) => !c.ok) as AnomalyFailure[]
   const issues = anomalies.map((a) => (a.name.endsWith('Witten') ? `${a.name}: ${a.sum} is odd (must be even)` : `${a.name}: sum ${a.sum} (must vanish)`)).join('\n')

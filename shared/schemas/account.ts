@@ -1,7 +1,8 @@
 import { z } from 'zod'
+import './zodMessages'
 
 // Account forms, validated identically in the browser and on the server.
-export const EmailSchema = z.string({ error: 'email: required' }).trim().toLowerCase()
+export const EmailSchema = z.string({ error: 'Enter your e-mail address' }).trim().toLowerCase()
   .max(254, { error: 'E-mail address is too long (254 characters at most)' })
   .pipe(z.email({ error: 'Enter a valid e-mail address' }))
 export const PasswordSchema = z.string({ error: 'Password is required' })
@@ -20,9 +21,11 @@ export const SignInSchema = z.object({
   password: z.string({ error: 'Password is required' }).min(1, { error: 'Password is required' }).max(200),
 }).strict()
 
+const RESET_LINK = 'This reset link is incomplete; open the link from the e-mail again'
+
 export const ResetRequestSchema = z.object({ email: EmailSchema }).strict()
 export const ResetSchema = z.object({
-  token: z.string({ error: 'Reset token is required' }).min(20, { error: 'Reset token is malformed' }).max(100),
+  token: z.string({ error: RESET_LINK }).min(20, { error: RESET_LINK }).max(100, { error: RESET_LINK }),
   password: PasswordSchema,
 }).strict()
 

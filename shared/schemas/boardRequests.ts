@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import './zodMessages'
 
 export const MoveSchema = z.object({
-  column: z.enum(['kept', 'set_aside'], { error: 'column must be "kept" or "set_aside"' }),
-  position: z.number({ error: 'position: a whole number is required' }).int({ error: 'position must be a whole number' }).min(0, { error: 'position must be 0 or more' }).max(100_000),
-  version: z.number({ error: 'version: the operator version you saw is required' }).int().positive({ error: 'version must be positive' }),
+  column: z.enum(['kept', 'set_aside'], { error: 'must be "kept" or "set_aside"' }),
+  position: z.number({ error: 'must be a whole number (0 for the top of the column)' }).int({ error: 'must be a whole number' }).min(0, { error: 'must be 0 or more' }).max(100_000),
+  version: z.number({ error: 'must be the version of the operator you saw (a whole number); reload the board' }).int().positive({ error: 'must be positive' }),
 }).strict()
 
 export const TAG_KINDS = ['threshold', 'tree', 'loop', 'cp-odd', 'b-violating', 'custom'] as const
@@ -17,11 +18,11 @@ export const TAG_TITLES: Record<(typeof TAG_KINDS)[number], string> = {
 }
 
 export const TagCreateSchema = z.object({
-  kind: z.enum(TAG_KINDS, { error: `kind must be one of ${TAG_KINDS.join(', ')}` }),
-  label: z.string({ error: 'label must be text' }).trim().max(120, { error: 'label: at most 120 characters' }).optional(),
+  kind: z.enum(TAG_KINDS, { error: `must be one of ${TAG_KINDS.join(', ')}` }),
+  label: z.string({ error: 'must be text' }).trim().max(120, { error: 'must have at most 120 characters' }).optional(),
 }).strict().superRefine((t, ctx) => {
   if ((t.kind === 'threshold' || t.kind === 'custom') && !t.label) {
-    ctx.addIssue({ code: 'custom', path: ['label'], message: t.kind === 'threshold' ? 'label: name the heavy field whose integration shifts this coefficient' : 'label: a custom tag needs a text' })
+    ctx.addIssue({ code: 'custom', path: ['label'], message: t.kind === 'threshold' ? 'is required: name the heavy field whose integration shifts this coefficient' : 'is required: a custom tag needs a text' })
   }
 })
 
@@ -31,6 +32,6 @@ export function thresholdText(field: string): string {
 }
 
 export const TypedRewriteSchema = z.object({
-  classKey: z.string({ error: 'classKey: the class of the operator is required' }).min(1, { error: 'classKey: the class of the operator is required' }).max(200),
-  text: z.string({ error: 'text: the operator is required' }).trim().min(1, { error: 'text: the operator is empty' }).max(2000, { error: 'text: at most 2000 characters' }),
+  classKey: z.string({ error: 'is required: choose the class of the operator' }).min(1, { error: 'is required: choose the class of the operator' }).max(200),
+  text: z.string({ error: 'is required: type the operator' }).trim().min(1, { error: 'is empty: type the operator' }).max(2000, { error: 'must have at most 2000 characters' }),
 }).strict()

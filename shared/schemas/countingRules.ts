@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import './zodMessages'
 
 /**
  * Counting rules of a theory (power counting): how the order of an operator is computed
@@ -52,7 +53,7 @@ export const CountingRuleSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['weights'],
-        message: `counting rule "${rule.name}": kind "custom" needs weights for its building blocks`,
+        message: 'are required: a rule of kind "custom" needs a weight for each building block',
       })
     }
   })

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import './zodMessages'
 import { GROUP_ROLES } from '../types/roles'
 
 export const SlugSchema = z.string({ error: 'Short name is required' }).trim().toLowerCase()

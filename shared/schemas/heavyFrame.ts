@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import './zodMessages'
 
 /**
  * Heavy-particle (non-relativistic) frame of a theory ("frame": "heavy").
@@ -18,7 +19,7 @@ export const HeavyParticleSchema = z.object({
   name: NameSchema,
   reps: z.record(NameSchema, z.array(z.number().int().min(0).max(8)).max(7)).optional(),
   charges: z
-    .record(NameSchema, z.union([z.string().regex(/^-?(0|[1-9]\d{0,8})(\/[1-9]\d{0,8})?$/), z.number().int()]))
+    .record(NameSchema, z.union([z.string().regex(/^-?(0|[1-9]\d{0,8})(\/[1-9]\d{0,8})?$/, { message: 'a charge is a rational written "p/q" or an integer, e.g. "1/6"' }), z.number().int()]))
     .optional(),
   description: z.string().max(200).optional(),
 })
@@ -37,7 +38,7 @@ export const HeavyFrameSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['antiparticle', 'name'],
-        message: `heavy frame: the antiparticle field needs its own name, but both are "${h.particle.name}"`,
+        message: `must differ from the particle field's name "${h.particle.name}"`,
       })
     }
   })

@@ -1,16 +1,19 @@
 import { z } from 'zod'
+import './zodMessages'
 import { RoleSchema } from './group'
 
 export const ShareLinkCreateSchema = z.object({
-  expiresInDays: z.number({ error: 'expiresInDays must be a number of days' }).int({ error: 'expiresInDays must be a whole number' })
-    .min(1, { error: 'expiresInDays must be at least 1' }).max(365, { error: 'expiresInDays must be at most 365' }).optional(),
+  expiresInDays: z.number({ error: 'must be a whole number of days' }).int({ error: 'must be a whole number of days' })
+    .min(1, { error: 'must be at least 1' }).max(365, { error: 'must be at most 365' }).optional(),
 }).strict()
 
 export const InvitationCreateSchema = z.object({
-  email: z.string({ error: 'email: required' }).trim().toLowerCase().pipe(z.email({ error: 'email: enter a valid e-mail address' })),
+  email: z.string({ error: 'Enter the e-mail address to invite' }).trim().toLowerCase().pipe(z.email({ error: 'Enter a valid e-mail address' })),
   role: RoleSchema,
 }).strict()
 
+const INVITATION_LINK = 'This invitation link is incomplete; open the link from the e-mail again'
+
 export const InvitationAcceptSchema = z.object({
-  token: z.string({ error: 'token: required' }).min(20, { error: 'token is malformed' }).max(100, { error: 'token is malformed' }),
+  token: z.string({ error: INVITATION_LINK }).min(20, { error: INVITATION_LINK }).max(100, { error: INVITATION_LINK }),
 }).strict()

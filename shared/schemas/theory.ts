@@ -1,5 +1,7 @@
 import { z } from 'zod'
+import './zodMessages'
 import { CountingRuleSchema } from './countingRules'
+import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { EngineInputError } from '../../server/engine/errors'
 import { suReality } from '../../server/engine/group/irrep'
@@ -70,29 +72,28 @@ export type TheoryField = z.infer<typeof FieldSchema>
 type Report = (path: (string | number)[], message: string) => void
 
 function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame }, report: Report): void {
-  if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'the "heavy" key needs "frame": "heavy"')
+  if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'a heavy particle needs the heavy-particle frame; choose that frame, or remove the heavy particle')
   const groups = new Map<string, TheoryGroup>()
   t.groups.forEach((g, i) => {
-    const at = `groups[${i}] "${g.name}"`
-    if (groups.has(g.name)) report(['groups', i, 'name'], `${at}: duplicate group name`)
+    if (groups.has(g.name)) report(['groups', i, 'name'], 'is already the name of another symmetry; give each symmetry its own name')
     groups.set(g.name, g)
-    if (g.type === 'SU' && (g.n === undefined || g.n < 2 || g.n > 8)) report(['groups', i, 'n'], `${at}: SU(n) needs n from 2 to 8, but n = ${g.n}`)
-    if (g.type === 'Z' && (g.n === undefined || g.n < 2 || g.n > 64)) report(['groups', i, 'n'], `${at}: Z_n needs n from 2 to 64, but n = ${g.n}`)
-    if (g.type === 'U1' && g.n !== undefined) report(['groups', i, 'n'], `${at}: a U1 group takes no n, but n = ${g.n}`)
+    const given = g.n === undefined ? '; give n' : `, but n = ${g.n}`
+    if (g.type === 'SU' && (g.n === undefined || g.n < 2 || g.n > 8)) report(['groups', i, 'n'], `SU(n) needs n from 2 to 8${given}`)
+    if (g.type === 'Z' && (g.n === undefined || g.n < 2 || g.n > 64)) report(['groups', i, 'n'], `Z_n needs n from 2 to 64${given}`)
+    if (g.type === 'U1' && g.n !== undefined) report(['groups', i, 'n'], `a U(1) group takes no n; remove n = ${g.n}`)
   })
   const names = new Set<string>()
   const strengths = new Set<string>()
   t.fields.forEach((f, i) => {
-    const at = `fields[${i}] "${f.name}"`
-    const bad = (key: string | number, message: string, ...more: (string | number)[]) => report(['fields', i, key, ...more], `${at}: ${message}`)
-    if (names.has(f.name)) bad('name', 'duplicate field name')
-    if (f.name === 'D') bad('name', 'the name "D" is reserved for the covariant derivative')
+    const bad = (key: string | number, message: string, ...more: (string | number)[]) => report(['fields', i, key, ...more], message)
+    if (names.has(f.name)) bad('name', 'is already the name of another field; give each field its own name')
+    if (f.name === 'D') bad('name', RESERVED_D)
     names.add(f.name)
     checkReps(f, groups, bad)
     checkCharges(f, groups, bad)
     if (f.lorentz === 'F') checkStrength(f, groups, strengths, bad)
-    else if (f.gaugeOf !== undefined) bad('gaugeOf', `only a field strength (lorentz "F") has gaugeOf, but lorentz = ${f.lorentz}`)
-    if (f.real && f.lorentz !== 'S') bad('real', `only a scalar can be declared real, but lorentz = ${f.lorentz}`)
+    else if (f.gaugeOf !== undefined) bad('gaugeOf', 'only a field strength belongs to a gauge group; remove the gauge group, or make the field a field strength')
+    if (f.real && f.lorentz !== 'S') bad('real', 'only a scalar can be declared real; make the field complex, or a scalar')
     if (f.real && f.lorentz === 'S') checkRealScalar(f, groups, bad)
   })
   if (t.heavy) checkHeavy(t.heavy, groups, names, report)
@@ -101,71 +102,75 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
 /** The heavy block names declared groups, couples to a continuous gauge group, and its fields are new names. */
 function checkHeavy(h: HeavyFrame, groups: Map<string, TheoryGroup>, fieldNames: Set<string>, report: Report): void {
   const g = groups.get(h.gaugeGroup)
-  if (!g) report(['heavy', 'gaugeGroup'], `heavy particle: unknown group ${h.gaugeGroup}`)
-  else if (!g.gauge) report(['heavy', 'gaugeGroup'], `heavy particle: ${h.gaugeGroup} is a global symmetry (gauge false); it needs a gauge group`)
-  else if (g.type === 'Z') report(['heavy', 'gaugeGroup'], `heavy particle: ${h.gaugeGroup} is a discrete group Z${g.n}; it needs a U1 or SU(n) gauge group`)
+  if (!g) report(['heavy', 'gaugeGroup'], `the theory has no symmetry named "${h.gaugeGroup}"; choose one of its gauge groups`)
+  else if (!g.gauge) report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is a global symmetry (not gauged); choose a gauge group`)
+  else if (g.type === 'Z') report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is the discrete group Z_${g.n}; choose a U(1) or SU(n) gauge group`)
   // Reps and charges follow the roster's rules (a Pauli field is a fermion: not a field strength).
   const particle: TheoryField = { name: h.particle.name, lorentz: 'L', reps: h.particle.reps, charges: h.particle.charges }
-  const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], `heavy particle "${h.particle.name}": ${message}`)
+  const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], message)
   checkReps(particle, groups, bad)
   checkCharges(particle, groups, bad)
   for (const [key, name] of [['particle', h.particle.name], ['antiparticle', h.antiparticle?.name]] as const) {
     if (name === undefined) continue
-    if (fieldNames.has(name)) report(['heavy', key, 'name'], `heavy ${key} "${name}": a field of the roster already has this name`)
-    if (name === 'D') report(['heavy', key, 'name'], `heavy ${key}: the name "D" is reserved for the covariant derivative`)
+    if (fieldNames.has(name)) report(['heavy', key, 'name'], `is already the name of a field of the roster; choose another name than "${name}"`)
+    if (name === 'D') report(['heavy', key, 'name'], RESERVED_D)
   }
 }
+
+const RESERVED_D = 'cannot be "D", the covariant derivative; choose another name'
+const NO_SUCH_GROUP = (name: string) => `the theory has no symmetry named "${name}"; declare it, or remove this entry`
 
 type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void
 
 function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
   for (const [gname, labels] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
-    if (!g) { bad('reps', `unknown group ${gname}`, gname); continue }
-    if (g.type !== 'SU') { bad('reps', `${gname} is ${g.type}: reps are Dynkin labels of SU groups only (use charges)`, gname); continue }
-    if (labels.length !== (g.n ?? 0) - 1) bad('reps', `${gname} = SU(${g.n}) needs ${(g.n ?? 0) - 1} Dynkin labels, but got [${labels.join(',')}]`, gname)
-    else if (validSU(g.n) && suDimension(g.n!, labels) > MAX_REP_DIMENSION) {
-      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but ${gname} = [${labels.join(',')}] has dimension ${suDimension(g.n!, labels)}`, gname)
+    if (!g) { bad('reps', NO_SUCH_GROUP(gname), gname); continue }
+    if (g.type !== 'SU') { bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname); continue }
+    if (!validSU(g.n)) continue // the symmetry's own n is reported there
+    if (labels.length !== g.n! - 1) bad('reps', `SU(${g.n}) takes ${g.n! - 1} Dynkin label${g.n === 2 ? '' : 's'}, but [${labels.join(',')}] has ${labels.length}`, gname)
+    else if (suDimension(g.n!, labels) > MAX_REP_DIMENSION) {
+      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${labels.join(',')}] has dimension ${suDimension(g.n!, labels)}`, gname)
     }
-    if (f.lorentz === 'F' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from gaugeOf, but reps.${gname} = [${labels.join(',')}]`, gname)
+    if (f.lorentz === 'F' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from its gauge group; remove [${labels.join(',')}]`, gname)
   }
 }
 
 function checkCharges(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
   for (const [gname, q] of Object.entries(f.charges ?? {})) {
     const g = groups.get(gname)
-    if (!g) { bad('charges', `unknown group ${gname}`, gname); continue }
-    if (g.type === 'SU') { bad('charges', `${gname} is SU(${g.n}): give Dynkin labels in reps, not a charge`, gname); continue }
-    if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z${g.n} charge is an integer mod ${g.n}, but ${gname} = ${q}`, gname)
-    if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `zero denominator in ${gname} = ${q}`, gname)
-    if (f.lorentz === 'F' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge, but ${gname} = ${q}`, gname)
+    if (!g) { bad('charges', NO_SUCH_GROUP(gname), gname); continue }
+    if (g.type === 'SU') { bad('charges', `${gname} is SU(${g.n ?? 'n'}), which takes Dynkin labels, not a charge`, gname); continue }
+    if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z_${g.n ?? 'n'} charge is a whole number (counted mod ${g.n ?? 'n'}), but got ${q}`, gname)
+    if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `the charge ${q} has a zero denominator`, gname)
+    if (f.lorentz === 'F' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge; remove ${q}`, gname)
   }
 }
 
 function checkStrength(f: TheoryField, groups: Map<string, TheoryGroup>, strengths: Set<string>, bad: Bad): void {
   const g = f.gaugeOf === undefined ? undefined : groups.get(f.gaugeOf)
-  if (f.gaugeOf === undefined) bad('gaugeOf', 'a field strength (lorentz "F") needs gaugeOf, the name of its gauge group')
-  else if (!g) bad('gaugeOf', `unknown group ${f.gaugeOf}`)
-  else if (!g.gauge) bad('gaugeOf', `${f.gaugeOf} is a global symmetry (gauge false) and has no field strength`)
-  else if (g.type === 'Z') bad('gaugeOf', `${f.gaugeOf} is a discrete group Z${g.n} and has no field strength`)
+  if (f.gaugeOf === undefined) bad('gaugeOf', 'is required: choose the gauge group whose field strength this is')
+  else if (!g) bad('gaugeOf', `the theory has no symmetry named "${f.gaugeOf}"; choose one of its gauge groups`)
+  else if (!g.gauge) bad('gaugeOf', `${f.gaugeOf} is a global symmetry (not gauged) and has no field strength`)
+  else if (g.type === 'Z') bad('gaugeOf', `${f.gaugeOf} is the discrete group Z_${g.n} and has no field strength`)
   else if (strengths.has(f.gaugeOf)) bad('gaugeOf', `${f.gaugeOf} already has a field strength`)
   if (f.gaugeOf !== undefined) strengths.add(f.gaugeOf)
-  if (f.flavors !== undefined && f.flavors !== 1) bad('flavors', `a field strength has one flavor, but flavors = ${f.flavors}`)
+  if (f.flavors !== undefined && f.flavors !== 1) bad('flavors', `a field strength comes in one flavor, not ${f.flavors}`)
 }
 
 function checkRealScalar(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
   for (const [gname, q] of Object.entries(f.charges ?? {})) {
     const g = groups.get(gname)
-    if (g?.type === 'U1' && !isZeroCharge(q)) bad('charges', `a real scalar must have zero U(1) charges, but ${gname} = ${String(q).trim()}`, gname)
+    if (g?.type === 'U1' && !isZeroCharge(q)) bad('charges', `a real scalar must have zero U(1) charges, but this one is ${String(q).trim()}`, gname)
     if (g?.type === 'Z' && g.n !== undefined && /^\s*-?\d+\s*$/.test(String(q)) && (2 * Number(q)) % g.n !== 0) {
-      bad('charges', `a real scalar needs a self-conjugate Z${g.n} charge (2q = 0 mod ${g.n}), but ${gname} = ${q}`, gname)
+      bad('charges', `a real scalar needs a self-conjugate Z_${g.n} charge (2q = 0 mod ${g.n}), but this one is ${q}`, gname)
     }
   }
   for (const [gname, labels] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
     if (g?.type !== 'SU' || !validSU(g.n) || labels.length !== (g.n ?? 0) - 1) continue
     const reality = suReality(g.n ?? 0, labels)
-    if (reality !== 'real') bad('reps', `a real scalar must sit in a real representation, but ${gname} = [${labels.join(',')}] is ${reality}`, gname)
+    if (reality !== 'real') bad('reps', `a real scalar must sit in a real representation, but [${labels.join(',')}] is ${reality}`, gname)
   }
 }
 
@@ -177,29 +182,18 @@ function isZeroCharge(q: string | number): boolean {
   return /^\s*-?0+(\s*\/\s*\d+)?\s*$/.test(String(q))
 }
 
-/** Readable one-line-per-problem text of a zod error, naming the field and key at fault. */
-export function formatTheoryIssues(input: unknown, issues: readonly { path: PropertyKey[]; message: string; code?: string }[]): string {
-  return issues
-    .map((iss) => {
-      if (iss.code === 'custom') return iss.message
-      const path = iss.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '')
-      const fieldName = fieldNameAt(input, iss.path)
-      return `${path || 'theory'}${fieldName}: ${iss.message}`
-    })
-    .join('\n')
-}
-
-function fieldNameAt(input: unknown, path: PropertyKey[]): string {
-  if (path[0] !== 'fields' || typeof path[1] !== 'number') return ''
-  const fields = (input as { fields?: unknown[] } | null)?.fields
-  const name = (fields?.[path[1]] as { name?: unknown } | undefined)?.name
-  return typeof name === 'string' ? ` ("${name}")` : ''
+/**
+ * One readable line per problem of a theory file, naming the place in the file's own words:
+ * `Field 3 "phi", charge under Y: a real scalar must have zero U(1) charges, but this one is 1/3`.
+ */
+export function formatTheoryIssues(input: unknown, issues: readonly IssueLike[]): string {
+  return issues.map((iss) => describeIssue(iss, input, 'the theory file')).join('\n')
 }
 
 /**
  * Parse and validate a theory file (a JSON string or an already parsed object).
  * Throws EngineInputError whose message lists every problem, one per line, e.g.
- * `parseTheory: fields[2] "phi": a real scalar must have zero U(1) charges, but Y = 1/3`.
+ * `Field 3 "phi", charge under Y: a real scalar must have zero U(1) charges, but this one is 1/3`.
  */
 export function parseTheory(json: unknown): Theory {
   let input = json
@@ -207,7 +201,7 @@ export function parseTheory(json: unknown): Theory {
     try {
       input = JSON.parse(json)
     } catch (e) {
-      throw new EngineInputError('parseTheory', `theory file is not valid JSON: ${(e as Error).message}`)
+      throw new EngineInputError('parseTheory', `The theory file is not valid JSON (${(e as Error).message}); check its brackets, commas and quotes`)
     }
   }
   const result = TheorySchema.safeParse(input)

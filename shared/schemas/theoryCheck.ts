@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import './zodMessages'
 
 /**
  * POST /api/theory-check: the editor sends the theory it shows; the route validates it with
@@ -6,7 +7,7 @@ import { z } from 'zod'
  * The theory is checked as a whole inside the route, so that its message lists every problem.
  */
 export const TheoryCheckSchema = z.object({
-  theory: z.record(z.string(), z.unknown(), { error: 'theory: a theory file (a JSON object) is required' }),
+  theory: z.record(z.string(), z.unknown(), { error: 'is required: a theory file (a JSON object)' }),
 }).strict()
 
 export interface AnomalyFailure {

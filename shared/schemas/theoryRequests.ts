@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import './zodMessages'
 import { TheorySchema } from './theory'
 
 // Requests that carry a theory file; the file itself is validated by TheorySchema.
@@ -6,14 +7,17 @@ export const TheoryCreateSchema = z.object({ definition: TheorySchema }).strict(
 
 export const TheoryUpdateSchema = z.object({
   definition: TheorySchema,
-  version: z.number({ error: 'version: the version you edited is required (it guards against lost updates)' }).int().positive(),
+  version: z.number({ error: 'is required (it guards against lost updates)' }).int({ error: 'must be a whole number' }).positive({ error: 'must be positive' }),
 }).strict()
 
+const NoteSchema = z.string({ error: 'is required: write the note' }).trim().min(1, { error: 'is empty: write the note' })
+  .max(10_000, { error: 'must have at most 10000 characters' })
+
 export const AnnotationCreateSchema = z.object({
-  body: z.string({ error: 'body: the note text is required' }).trim().min(1, { error: 'body: the note is empty' }).max(10_000, { error: 'body: at most 10000 characters' }),
+  body: NoteSchema,
   operatorId: z.number().int().positive().optional(),
 }).strict()
 
 export const AnnotationUpdateSchema = z.object({
-  body: z.string({ error: 'body: the note text is required' }).trim().min(1, { error: 'body: the note is empty' }).max(10_000, { error: 'body: at most 10000 characters' }),
+  body: NoteSchema,
 }).strict()

@@ -4,6 +4,7 @@
  * Size limits live here so one request cannot ask for unbounded work.
  */
 import { z } from 'zod'
+import '../../../shared/schemas/zodMessages'
 import { SCALE_UNITS } from './units'
 
 const NameSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,23}$/, {
@@ -21,7 +22,7 @@ const LiteralSchema = z.union([
 export const ScaleSchema = z.object({
   name: NameSchema,
   value: LiteralSchema,
-  unit: z.enum(SCALE_UNITS, { message: `unit must be one of ${SCALE_UNITS.join(', ')}` }),
+  unit: z.enum(SCALE_UNITS, { message: `must be one of ${SCALE_UNITS.join(', ')}` }),
 })
 
 /** numerator / denominator: each a scale name or a literal number (both of the same kind). */
@@ -37,7 +38,7 @@ export const DerivedScaleSchema = z.object({
   from: NameSchema,
   factor: LiteralSchema.optional(),
   powers: z.record(NameSchema, z.number().int().min(-40).max(40)),
-  unit: z.enum(SCALE_UNITS, { message: `unit must be one of ${SCALE_UNITS.join(', ')}` }).optional(),
+  unit: z.enum(SCALE_UNITS, { message: `must be one of ${SCALE_UNITS.join(', ')}` }).optional(),
 })
 
 export const OrderSpecSchema = z.union([
@@ -49,9 +50,9 @@ export const OrderSpecSchema = z.union([
 ])
 
 export const ScaleLadderInputSchema = z.object({
-  scales: z.array(ScaleSchema).max(30, { message: 'at most 30 scales' }),
-  parameters: z.array(ExpansionParameterSchema).max(20, { message: 'at most 20 expansion parameters' }),
-  derived: z.array(DerivedScaleSchema).max(30, { message: 'at most 30 derived scales' }).optional(),
+  scales: z.array(ScaleSchema).max(30, { message: 'may list at most 30 scales' }),
+  parameters: z.array(ExpansionParameterSchema).max(20, { message: 'may list at most 20 expansion parameters' }),
+  derived: z.array(DerivedScaleSchema).max(30, { message: 'may list at most 30 derived scales' }).optional(),
   precisionTarget: z.number().positive().lt(1).optional(),
   countingParameter: NameSchema.optional(),
 })
@@ -61,4 +62,4 @@ export type ExpansionParameterInput = z.infer<typeof ExpansionParameterSchema>
 export type DerivedScaleInput = z.infer<typeof DerivedScaleSchema>
 export type OrderSpec = z.infer<typeof OrderSpecSchema>
 export type ScaleLadderInput = z.infer<typeof ScaleLadderInputSchema>
-export const OrderListSchema = z.array(OrderSpecSchema).max(50, { message: 'at most 50 orders' })
+export const OrderListSchema = z.array(OrderSpecSchema).max(50, { message: 'may list at most 50 orders' })

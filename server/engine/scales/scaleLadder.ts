@@ -3,6 +3,7 @@
  * as ratios of scales (or of literal numbers), and the estimated size of each order.
  */
 import { EngineInputError } from '../errors'
+import { describeIssue, describeZodError } from '../../../shared/schemas/describeZodError'
 import { div, mul, ONE, parseRational, rat, toString as ratText, type Rational } from '../exact/rational'
 import { parseDecimal, rationalToNumber } from './decimal'
 import {
@@ -51,7 +52,7 @@ function resolveScale(s: ScaleInput): ResolvedScale {
 function side(p: ExpansionParameterInput, v: number | string, scales: Map<string, ResolvedScale>) {
   if (typeof v === 'string' && scales.has(v)) return { scale: scales.get(v)! }
   if (typeof v === 'string' && !/^[\s\d+\-./eE]+$/.test(v)) {
-    throw new EngineInputError('buildScaleLadder', `parameter "${p.name}": "${v}" is neither a scale nor a number`)
+    throw new EngineInputError('buildScaleLadder', `Expansion parameter "${p.name}": "${v}" is neither the name of a scale nor a number; name a scale of the ladder or write a number`)
   }
   return { lit: literal(v) }
 }
@@ -60,11 +61,11 @@ function resolveParameter(p: ExpansionParameterInput, scales: Map<string, Resolv
   const a = side(p, p.numerator, scales)
   const b = side(p, p.denominator, scales)
   if (a.lit && b.lit) {
-    if (b.lit.value === 0) throw new EngineInputError('buildScaleLadder', `parameter "${p.name}": zero denominator`)
+    if (b.lit.value === 0) throw new EngineInputError('buildScaleLadder', `Expansion parameter "${p.name}" divides by zero; give it a non-zero denominator`)
     return { value: a.lit.value / b.lit.value, exact: a.lit.exact && b.lit.exact ? div(a.lit.exact, b.lit.exact) : undefined }
   }
   if (!a.scale || !b.scale) {
-    throw new EngineInputError('buildScaleLadder', `parameter "${p.name}" mixes a scale with a plain number (${p.numerator} / ${p.denominator}); a ratio must be dimensionless`)
+    throw new EngineInputError('buildScaleLadder', `Expansion parameter "${p.name}" mixes a scale with a plain number (${p.numerator} / ${p.denominator}); a ratio must be dimensionless, so divide a scale by a scale or a number by a number`)
   }
   const value = a.scale.valueMeV / b.scale.valueMeV
   if (!a.scale.native || !b.scale.native || a.scale.kind !== b.scale.kind) return { value }
@@ -79,7 +80,7 @@ function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exa
   let exact: Rational | undefined = ONE
   for (const [name, k] of Object.entries(powers)) {
     const p = params.get(name)
-    if (!p) throw new EngineInputError('buildScaleLadder', `order ${JSON.stringify(spec)} uses unknown parameter "${name}"`)
+    if (!p) throw new EngineInputError('buildScaleLadder', `Order ${typeof spec === 'number' ? spec : spec.order} uses the expansion parameter "${name}", which the ladder does not declare; add it or correct the name`)
     estimate *= p.value ** k
     exact = exact && p.exact ? mul(exact, powRational(p.exact, k)) : undefined
   }
@@ -89,7 +90,7 @@ function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exa
 }
 
 function countingPowers(n: number, counting: string | undefined): Record<string, number> {
-  if (!counting) throw new EngineInputError('buildScaleLadder', `order ${n} given as a number but the ladder has no expansion parameter`)
+  if (!counting) throw new EngineInputError('buildScaleLadder', `Order ${n} needs an expansion parameter to be estimated, but the ladder has none; add one (e.g. E/M)`)
   return n === 0 ? {} : { [counting]: n }
 }
 
@@ -105,23 +106,23 @@ function countingPowers(n: number, counting: string | undefined): Record<string,
  */
 export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[]): ScaleLadder {
   const parsed = ScaleLadderInputSchema.safeParse(input)
-  if (!parsed.success) throw new EngineInputError('buildScaleLadder', parsed.error.issues.map(i => `${i.path.join('.')}: ${i.message}`).join('; '))
+  if (!parsed.success) throw new EngineInputError('buildScaleLadder', describeZodError(parsed.error, input, 'the scale ladder'))
   const ords = OrderListSchema.safeParse(orders)
-  if (!ords.success) throw new EngineInputError('buildScaleLadder', `orders: ${ords.error.issues.map(i => `${i.path.join('.')}: ${i.message}`).join('; ')}`)
+  if (!ords.success) throw new EngineInputError('buildScaleLadder', ords.error.issues.map((i) => describeIssue({ path: ['orders', ...i.path], message: i.message }, { orders })).join('; '))
   const inp = parsed.data
   const scales = new Map<string, ResolvedScale>()
   for (const s of inp.scales) {
-    if (scales.has(s.name)) throw new EngineInputError('buildScaleLadder', `duplicate scale name "${s.name}"`)
+    if (scales.has(s.name)) throw new EngineInputError('buildScaleLadder', `Two scales are named "${s.name}"; give each scale its own name`)
     scales.set(s.name, resolveScale(s))
   }
   const params = new Map<string, { value: number, exact?: Rational }>()
   for (const p of inp.parameters) {
-    if (params.has(p.name) || scales.has(p.name)) throw new EngineInputError('buildScaleLadder', `duplicate name "${p.name}"`)
+    if (params.has(p.name) || scales.has(p.name)) throw new EngineInputError('buildScaleLadder', `The name "${p.name}" is used twice among the scales and expansion parameters; give each its own name`)
     params.set(p.name, resolveParameter(p, scales))
   }
   const counting = inp.countingParameter ?? inp.parameters[0]?.name
   if (inp.countingParameter && !params.has(inp.countingParameter)) {
-    throw new EngineInputError('buildScaleLadder', `countingParameter "${inp.countingParameter}" is not a parameter`)
+    throw new EngineInputError('buildScaleLadder', `The counting parameter "${inp.countingParameter}" is not one of the ladder's expansion parameters; choose one of them`)
   }
   return {
     scales: inp.scales.map(s => ladderScale(s, scales.get(s.name)!)).sort((a, b) => b.valueMeV - a.valueMeV),
@@ -136,7 +137,7 @@ export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[]): 
 function derivedScales(inp: ScaleLadderInput, scales: Map<string, ResolvedScale>, params: Map<string, { value: number, exact?: Rational }>): DerivedScale[] {
   const seen = new Set<string>()
   return (inp.derived ?? []).map((d) => {
-    if (seen.has(d.name) || scales.has(d.name) || params.has(d.name)) throw new EngineInputError('buildScaleLadder', `duplicate name "${d.name}"`)
+    if (seen.has(d.name) || scales.has(d.name) || params.has(d.name)) throw new EngineInputError('buildScaleLadder', `The name "${d.name}" is used twice among the scales, expansion parameters and derived scales; give each its own name`)
     seen.add(d.name)
     return derivedScale(d, scales, params)
   })

@@ -39,7 +39,7 @@ export async function runPriorities(theoryId: number, p: { derivativesOn?: strin
   const { keepFromBasis, ...rest } = p
   if (!keepFromBasis) return rest
   const basis = await useDb()('bases').where({ id: keepFromBasis, theory_id: theoryId }).first('id')
-  if (!basis) fail(404, `priorities.keepFromBasis: no basis ${keepFromBasis} of this theory`)
+  if (!basis) fail(404, `This theory has no basis ${keepFromBasis} to keep operators from; choose one of its own bases`)
   const rows = await useDb()('operators').where({ basis_id: keepFromBasis, column: 'kept' }).orderBy('position').select('class_key', 'text')
   const keep: Record<string, string[]> = {}
   for (const r of rows) (keep[r.class_key] ??= []).push(r.text)

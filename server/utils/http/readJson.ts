@@ -1,12 +1,14 @@
 import { readRawBody, getHeader, type H3Event } from 'h3'
 import type { ZodType } from 'zod'
 import { fail } from './apiHandler'
+import { describeZodError } from '../../../shared/schemas/describeZodError'
 
 export const MAX_BODY_BYTES = 512 * 1024
 
 /**
  * Read the JSON body and validate it with a zod schema. Malformed JSON → 400, oversized → 413,
- * schema failure → ZodError (mapped to 400 with the field named). Nothing is written before this.
+ * schema failure → 400 naming each field at fault in the user's words (the body supplies the
+ * names of list entries, e.g. field 3 "phi"). Nothing is written before this.
  */
 export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
   const declared = Number(getHeader(event, 'content-length') || 0)
@@ -21,13 +23,15 @@ export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes =
       fail(400, 'Request body is not valid JSON')
     }
   }
-  return schema.parse(value)
+  const parsed = schema.safeParse(value)
+  if (!parsed.success) fail(400, describeZodError(parsed.error, value))
+  return parsed.data
 }
 
 /** A positive integer route parameter, or 400. */
 export function intParam(event: H3Event, name: string): number {
   const raw = event.context.params?.[name]
   const n = Number(raw)
-  if (!raw || !Number.isSafeInteger(n) || n <= 0) fail(400, `${name}: expected a positive integer, got "${raw}"`)
+  if (!raw || !Number.isSafeInteger(n) || n <= 0) fail(400, `This address is not valid: "${raw ?? ''}" should be a positive whole number`)
   return n
 }

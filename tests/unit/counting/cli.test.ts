@@ -32,7 +32,7 @@ describe('count CLI', () => {
     const r = run(bad, '--max-dim', '6')
     expect(r.status).toBe(2)
     expect(r.stdout).toBe('')
-    expect(r.stderr).toContain('fields[0] "phi": unknown group Y')
+    expect(r.stderr).toContain('Field 1 "phi", charge under Y: the theory has no symmetry named "Y"')
     const missing = run('no-such-theory', '--max-dim', '6')
     expect([missing.status, missing.stdout]).toEqual([2, ''])
     expect(missing.stderr).toContain('no such theory file or preset: no-such-theory')

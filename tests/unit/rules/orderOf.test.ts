@@ -53,17 +53,17 @@ describe('custom and momentum-ratio rules use exact rational weights', () => {
 describe('bad input names the function and the value', () => {
   it('unknown block', () => {
     expect(() => orderOf({ Z: 1 }, mass, sm)).toThrow(EngineInputError)
-    expect(() => orderOf({ Z: 1 }, mass, sm)).toThrow('orderOf: rule "E/M" has no weight for building block "Z"')
+    expect(() => orderOf({ Z: 1 }, mass, sm)).toThrow('Counting rule "E/M" gives no weight to the building block "Z"')
   })
   it('negative or fractional multiplicity', () => {
-    expect(() => orderOf({ H: -1 }, mass, sm)).toThrow('orderOf: block "H" has multiplicity -1')
-    expect(() => orderOf({ H: 0.5 }, mass, sm)).toThrow('multiplicity 0.5')
+    expect(() => orderOf({ H: -1 }, mass, sm)).toThrow('The building block "H" appears -1 times')
+    expect(() => orderOf({ H: 0.5 }, mass, sm)).toThrow('appears 0.5 times')
   })
   it('a custom rule without weights is rejected by the schema and by resolveRule', () => {
     const bad = CountingRuleSchema.safeParse({ name: 'x', kind: 'custom' })
     expect(bad.success).toBe(false)
-    expect(bad.error!.issues[0]!.message).toContain('kind "custom" needs weights')
-    expect(() => resolveRule({ name: 'x', kind: 'custom' })).toThrow('resolveRule: counting rule "x" of kind "custom" has no weights')
+    expect(bad.error!.issues[0]!.message).toBe('are required: a rule of kind "custom" needs a weight for each building block')
+    expect(() => resolveRule({ name: 'x', kind: 'custom' })).toThrow('Counting rule "x" is of kind "custom" but gives no weights')
   })
   it('weights must be exact rationals "p/q", not decimals', () => {
     const bad = CountingRuleSchema.safeParse({ name: 'x', kind: 'velocity', weights: { D: '0.5' } })
@@ -71,7 +71,7 @@ describe('bad input names the function and the value', () => {
     expect(bad.error!.issues[0]!.message).toContain('exact rational')
   })
   it('operator without terms', () => {
-    expect(() => orderOfOperator({ id: 'empty', terms: [] }, mass, sm)).toThrow('orderOfOperator: operator "empty" has no terms')
+    expect(() => orderOfOperator({ id: 'empty', terms: [] }, mass, sm)).toThrow('Operator "empty" has no terms')
   })
 })
 
@@ -97,7 +97,7 @@ describe('class keys of the counting engine feed the rules', () => {
     expect(toString(orderOf(blocksFromClassKey('G_L^3'), mass, sm))).toBe('2')
   })
   it('unreadable keys are rejected with the token named', () => {
-    expect(() => blocksFromClassKey('D^0 H')).toThrow('blocksFromClassKey: cannot read "D^0" in class key "D^0 H"')
-    expect(() => blocksFromClassKey('  ')).toThrow('blocksFromClassKey: empty class key')
+    expect(() => blocksFromClassKey('D^0 H')).toThrow('Cannot read "D^0" in the class "D^0 H"')
+    expect(() => blocksFromClassKey('  ')).toThrow('The class is empty')
   })
 })

@@ -57,27 +57,27 @@ describe('theory schema', () => {
   it('names the field and key at fault', () => {
     const t = base()
     t.fields[2] = { name: 'phi', lorentz: 'S', real: true, charges: { Y: '1/3' } }
-    expect(errorOf(t)).toBe('parseTheory: fields[2] "phi": a real scalar must have zero U(1) charges, but Y = 1/3')
+    expect(errorOf(t)).toBe('Field 3 "phi", charge under Y: a real scalar must have zero U(1) charges, but this one is 1/3')
     t.fields[2] = { name: 'phi', lorentz: 'S', real: true, reps: { SU2L: [1] } }
     // the doublet of SU(2) is pseudoreal (Slansky, Phys. Rep. 79 (1981) 1, Table 11)
-    expect(errorOf(t)).toBe('parseTheory: fields[2] "phi": a real scalar must sit in a real representation, but SU2L = [1] is pseudoreal')
+    expect(errorOf(t)).toBe('Field 3 "phi", representation under SU2L: a real scalar must sit in a real representation, but [1] is pseudoreal')
     t.fields[2] = { name: 'phi', lorentz: 'S', real: true, reps: { SU3c: [1, 0] } }
-    expect(errorOf(t)).toContain('SU3c = [1,0] is complex')
+    expect(errorOf(t)).toBe('Field 3 "phi", representation under SU3c: a real scalar must sit in a real representation, but [1,0] is complex')
   })
 
   it('rejects bad references and shapes', () => {
     const cases: [(t: ReturnType<typeof base>) => void, string][] = [
-      [(t) => (t.fields[0]!.reps = { SU5: [1, 0, 0, 0] }), 'fields[0] "Q": unknown group SU5'],
-      [(t) => (t.fields[0]!.reps = { SU3c: [1] }), 'fields[0] "Q": SU3c = SU(3) needs 2 Dynkin labels, but got [1]'],
-      [(t) => (t.fields[0]!.charges = { P2: '1/2' }), 'fields[0] "Q": a Z2 charge is an integer mod 2, but P2 = 1/2'],
-      [(t) => (t.fields[0]!.charges = { SU2L: '1' }), 'fields[0] "Q": SU2L is SU(2): give Dynkin labels in reps, not a charge'],
-      [(t) => (t.fields[3]!.gaugeOf = 'Bno'), 'fields[3] "G": Bno is a global symmetry (gauge false) and has no field strength'],
-      [(t) => delete t.fields[3]!.gaugeOf, 'fields[3] "G": a field strength (lorentz "F") needs gaugeOf'],
-      [(t) => (t.fields[1]!.gaugeOf = 'Y'), 'fields[1] "H": only a field strength (lorentz "F") has gaugeOf, but lorentz = S'],
-      [(t) => (t.fields[1]!.name = 'Q'), 'fields[1] "Q": duplicate field name'],
-      [(t) => (t.fields[0]!.real = true), 'fields[0] "Q": only a scalar can be declared real, but lorentz = L'],
-      [(t) => (t.groups[0]!.n = 9), 'groups[0] "SU3c": SU(n) needs n from 2 to 8, but n = 9'],
-      [(t) => t.fields.push({ name: 'G2', lorentz: 'F', gaugeOf: 'SU3c' }), 'fields[4] "G2": SU3c already has a field strength'],
+      [(t) => (t.fields[0]!.reps = { SU5: [1, 0, 0, 0] }), 'Field 1 "Q", representation under SU5: the theory has no symmetry named "SU5"; declare it, or remove this entry'],
+      [(t) => (t.fields[0]!.reps = { SU3c: [1] }), 'Field 1 "Q", representation under SU3c: SU(3) takes 2 Dynkin labels, but [1] has 1'],
+      [(t) => (t.fields[0]!.charges = { P2: '1/2' }), 'Field 1 "Q", charge under P2: a Z_2 charge is a whole number (counted mod 2), but got 1/2'],
+      [(t) => (t.fields[0]!.charges = { SU2L: '1' }), 'Field 1 "Q", charge under SU2L: SU2L is SU(2), which takes Dynkin labels, not a charge'],
+      [(t) => (t.fields[3]!.gaugeOf = 'Bno'), 'Field 4 "G", gauge group of the field strength: Bno is a global symmetry (not gauged) and has no field strength'],
+      [(t) => delete t.fields[3]!.gaugeOf, 'Field 4 "G", gauge group of the field strength is required: choose the gauge group whose field strength this is'],
+      [(t) => (t.fields[1]!.gaugeOf = 'Y'), 'Field 2 "H", gauge group of the field strength: only a field strength belongs to a gauge group'],
+      [(t) => (t.fields[1]!.name = 'Q'), 'Field 2 "Q", name is already the name of another field'],
+      [(t) => (t.fields[0]!.real = true), 'Field 1 "Q", real: only a scalar can be declared real'],
+      [(t) => (t.groups[0]!.n = 9), 'Symmetry 1 "SU3c", n: SU(n) needs n from 2 to 8, but n = 9'],
+      [(t) => t.fields.push({ name: 'G2', lorentz: 'F', gaugeOf: 'SU3c' }), 'Field 5 "G2", gauge group of the field strength: SU3c already has a field strength'],
     ]
     for (const [edit, message] of cases) {
       const t = base()
@@ -89,16 +89,16 @@ describe('theory schema', () => {
   it('enforces the size limits (n of SU(N) 2..8, 40 fields, 8 groups, flavors 1..6, name pattern)', () => {
     const t = base()
     t.fields[0]!.flavors = 7
-    expect(errorOf(t)).toContain('fields[0].flavors ("Q"): Too big')
+    expect(errorOf(t)).toBe('Field 1 "Q", flavors must be at most 6')
     const many = base()
     many.fields = Array.from({ length: 41 }, (_, i) => ({ name: `s${i}`, lorentz: 'S' }))
-    expect(errorOf(many)).toMatch(/^parseTheory: fields: Too big/)
+    expect(errorOf(many)).toBe('Fields may list at most 40 entries')
     const groups = base()
     groups.groups = Array.from({ length: 9 }, (_, i) => ({ name: `U${i}`, type: 'U1', gauge: true }))
-    expect(errorOf(groups)).toMatch(/groups: Too big/)
+    expect(errorOf(groups)).toBe('Symmetries may list at most 8 entries')
     const name = base()
     name.fields[1]!.name = '2H'
-    expect(errorOf(name)).toContain('fields[1].name ("2H"): a name is a letter followed by up to 15 letters, digits or "_"')
-    expect(errorOf('{ not json')).toMatch(/^parseTheory: theory file is not valid JSON/)
+    expect(errorOf(name)).toBe('Field 2 "2H", name: a name is a letter followed by up to 15 letters, digits or "_"')
+    expect(errorOf('{ not json')).toMatch(/^The theory file is not valid JSON \(.+\); check its brackets, commas and quotes$/)
   })
 })

@@ -5,8 +5,7 @@ import { theoryOr404, publicTheory } from '../../../utils/db/theories'
 import { createChildTheory } from '../../../utils/db/towers'
 import { integrateOut } from '../../../engine/scales/integrateOut'
 import { IntegrateOutSchema } from '../../../../shared/schemas/scaleRequests'
-import { TheorySchema, type Theory } from '../../../../shared/schemas/theory'
-import { describeZodError } from '../../../../shared/schemas/describeZodError'
+import { TheorySchema, formatTheoryIssues, type Theory } from '../../../../shared/schemas/theory'
 import { EngineInputError } from '../../../engine/errors'
 
 // Editors integrate heavy fields out at a threshold scale: the child theory joins the group,
@@ -17,7 +16,7 @@ export default defineApiHandler(async (event) => {
   const { user } = await requireGroupRole(event, parent.group_id, 'editor')
   const step = integrateOut(TheorySchema.parse(parent.definition) as Theory, body.fields, body.scale)
   const check = TheorySchema.safeParse(step.child)
-  if (!check.success) throw new EngineInputError('integrateOut', `the theory left below the threshold is not valid: ${describeZodError(check.error)}`)
+  if (!check.success) throw new EngineInputError('integrateOut', `The theory left below the threshold would not be valid:\n${formatTheoryIssues(step.child, check.error.issues)}`)
   const { child, tags } = await createChildTheory(parent, step, body.fields, user.id)
   created(event)
   return { theory: publicTheory(child), thresholdTags: tags, generatedClasses: step.generatedClasses, thresholdScale: step.thresholdScale }

@@ -14,7 +14,7 @@ export default defineApiHandler(async (event) => {
   if (body.operatorId) {
     const op = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id')
       .where({ 'o.id': body.operatorId, 'b.theory_id': theory.id }).first('o.id')
-    if (!op) fail(404, `operatorId: no operator ${body.operatorId} in this theory`)
+    if (!op) fail(404, `This theory has no operator ${body.operatorId}; the note was not saved`)
   }
   const [row] = await useDb()('annotations')
     .insert({ theory_id: theory.id, operator_id: body.operatorId ?? null, author_id: user.id, body: body.body })
