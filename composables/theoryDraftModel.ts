@@ -124,13 +124,13 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
   const theory: Record<string, unknown> = { name: d.name.trim() }
   if (d.description.trim()) theory.description = d.description
   theory.frame = d.frame
-  const maxOrder = readInt(d.maxOrder, ['maxOrder'], issues, 'the maximum order is a whole number, e.g. 8')
+  const maxOrder = readInt(d.maxOrder, ['maxOrder'], issues, 'must be a whole number, e.g. 8')
   if (maxOrder !== undefined) theory.maxOrder = maxOrder
   theory.groups = d.groups.map((g, i) => {
     const out: Record<string, unknown> = { name: g.name.trim(), type: g.type }
-    const n = readInt(g.n, ['groups', i, 'n'], issues, `${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n, a whole number`)
+    const n = readInt(g.n, ['groups', i, 'n'], issues, `must be a whole number (the n of ${g.type === 'Z' ? 'Z_n' : 'SU(n)'})`)
     if (g.type !== 'U1' && n !== undefined) out.n = n
-    if (g.type !== 'U1' && n === undefined && !g.n.trim()) issues.push({ path: ['groups', i, 'n'], message: `${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n` })
+    if (g.type !== 'U1' && n === undefined && !g.n.trim()) issues.push({ path: ['groups', i, 'n'], message: `is required: ${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n` })
     out.gauge = g.gauge
     if (g.description !== undefined) out.description = g.description
     return out
@@ -145,7 +145,7 @@ function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Ma
   const out: Record<string, unknown> = { name: f.name.trim(), lorentz: f.lorentz }
   labelsToTheory(f, groups, out, ['fields', i], issues)
   if (f.lorentz === 'S' && f.real) out.real = true
-  const flavors = readInt(f.flavors, ['fields', i, 'flavors'], issues, 'flavors is a whole number from 1 to 6')
+  const flavors = readInt(f.flavors, ['fields', i, 'flavors'], issues, 'must be a whole number from 1 to 6')
   if (flavors !== undefined) out.flavors = flavors
   if (f.lorentz === 'F' || f.gaugeOf) {
     const g = f.gaugeOf.startsWith('?') ? f.gaugeOf.slice(1) : names.get(f.gaugeOf)
@@ -168,7 +168,7 @@ function readInt(raw: string, path: (string | number)[], issues: DraftIssue[], m
   const t = raw.trim()
   if (!t) return undefined
   if (/^-?\d{1,6}$/.test(t)) return Number(t)
-  issues.push({ path, message: `${message}, but got "${t}"` })
+  issues.push({ path, message: `${message}, not "${t}"` })
   return undefined
 }
 

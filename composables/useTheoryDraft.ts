@@ -1,5 +1,6 @@
-import { computed, ref, watch, onBeforeUnmount, type Ref } from 'vue'
+import { computed, reactive, ref, watch, onBeforeUnmount, type Ref } from 'vue'
 import { TheorySchema, formatTheoryIssues, type Theory } from '#shared/schemas/theory'
+import { describeIssue, inputMessage } from '#shared/schemas/describeZodError'
 import type { TheoryCheckReply } from '#shared/schemas/theoryCheck'
 import {
   type TheoryDraft, type DraftGroup, type DraftField, type DraftRule,
@@ -7,11 +8,6 @@ import {
 } from './theoryDraftModel'
 import { newHeavy } from './theoryDraft/heavyBlock'
 import { apiMessage } from './useValidatedForm'
-
-/** Strip the `fields[3] "e": ` prefix of a schema message when it is shown next to its input. */
-function inlineMessage(message: string): string {
-  return message.replace(/^(fields|groups)\[\d+\] "[^"]*": /, '')
-}
 
 function move<T>(rows: T[], i: number, delta: number) {
   const j = i + delta
@@ -33,8 +29,8 @@ export function useTheoryDraft(initial?: unknown) {
     const parsed = TheorySchema.safeParse(theory)
     const schemaIssues = parsed.success ? [] : parsed.error.issues
     const errors: Record<string, string> = {}
-    for (const iss of [...local, ...schemaIssues]) errors[issueKey(iss.path)] ??= inlineMessage(iss.message)
-    const lines = [...local.map((i) => `${i.path.join('.')}: ${i.message}`)]
+    for (const iss of [...local, ...schemaIssues]) errors[issueKey(iss.path)] ??= inputMessage(iss.message)
+    const lines = local.map((i) => describeIssue(i, theory, 'the theory'))
     if (schemaIssues.length) lines.push(...formatTheoryIssues(theory, schemaIssues).split('\n'))
     const valid = parsed.success && local.length === 0
     return { theory, valid, errors, lines, definition: valid ? (parsed.data as Theory) : null }
@@ -53,7 +49,21 @@ export function useTheoryDraft(initial?: unknown) {
   }
   if (initial !== undefined) markClean()
 
-  const error = (...path: (string | number)[]) => checked.value.errors[path.map(String).join('.')]
+  // A message shows once the user has edited its entry (a row, or a top-level input), after a
+  // save attempt, or for a loaded file: an untouched form shows no errors.
+  const edited = reactive(new Set<string>())
+  const revealed = ref(false)
+  const entryOf = (path: (string | number)[]): string => {
+    const [key, i] = path
+    if ((key === 'groups' || key === 'fields' || key === 'countingRules') && typeof i === 'number') return draft.value[key][i]?.uid ?? ''
+    return String(key)
+  }
+  const error = (...path: (string | number)[]) =>
+    (revealed.value || edited.has(entryOf(path)) ? checked.value.errors[path.map(String).join('.')] : undefined)
+  /** The user typed into the entry `entry` (a row's uid, or "name", "maxOrder", "heavy"). */
+  const markEdited = (entry: string) => { edited.add(entry) }
+  /** Show every message (a save attempt, or a file the user loaded). */
+  const reveal = () => { revealed.value = true }
 
   const ops = {
     addGroup: () => draft.value.groups.push(newGroup()),
@@ -71,7 +81,7 @@ export function useTheoryDraft(initial?: unknown) {
     removeHeavy: () => { delete draft.value.heavy },
   }
 
-  return { draft, checked, dirty, load, markClean, error, ...ops }
+  return { draft, checked, dirty, load, markClean, error, markEdited, reveal, ...ops }
 }
 
 /**

@@ -1,4 +1,5 @@
 import type { ZodType } from 'zod'
+import { inputMessage } from '#shared/schemas/describeZodError'
 
 /**
  * Form state validated by the same zod schema as the server route. Field errors come from
@@ -16,7 +17,7 @@ export function useValidatedForm<T extends Record<string, unknown>>(schema: ZodT
     if (result.success) return true
     for (const issue of result.error.issues) {
       const key = String(issue.path[0] ?? '')
-      fieldErrors.value[key] ??= issue.message
+      fieldErrors.value[key] ??= inputMessage(issue.message)
     }
     return false
   }
@@ -38,8 +39,17 @@ export function useValidatedForm<T extends Record<string, unknown>>(schema: ZodT
   return { values, fieldErrors, formError, busy, submit }
 }
 
-/** The readable message of a failed $fetch (our API always answers JSON with `message`). */
+/**
+ * The readable message of a failed $fetch: our API always answers JSON with `message`. Without
+ * one (no connection, a proxy's error page) the status says what happened; $fetch's own text
+ * ("[POST] /api/…: 502 …") never reaches the screen.
+ */
 export function apiMessage(error: unknown): string {
-  const e = error as { data?: { message?: string, data?: { message?: string } }, message?: string }
-  return e?.data?.data?.message || e?.data?.message || e?.message || 'Something went wrong'
+  const e = error as { data?: { message?: unknown, data?: { message?: unknown } }, statusCode?: number, status?: number } | null
+  const text = e?.data?.data?.message ?? e?.data?.message
+  if (typeof text === 'string' && text.trim()) return text
+  const status = e?.statusCode ?? e?.status
+  if (!status) return 'The server could not be reached; check the connection and try again.'
+  if (status >= 500) return 'The server could not finish this request; try again in a moment.'
+  return `The server refused this request (HTTP ${status}); reload the page and try again.`
 }

@@ -44,7 +44,7 @@ describe('typed text that is not a number', () => {
     const { theory, issues } = draftToTheory(d)
     expect(issues.map((i) => issueKey(i.path))).toEqual(['maxOrder', 'fields.0.reps.SU3c', 'fields.1.flavors'])
     expect(issues[1]!.message).toBe('Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "1,x"')
-    expect(issues[2]!.message).toBe('flavors is a whole number from 1 to 6, but got "three"')
+    expect(issues[2]!.message).toBe('must be a whole number from 1 to 6, not "three"')
     expect((theory.fields as Array<{ reps?: unknown }>)[0]!.reps).toEqual({ SU2L: [1] })
   })
 
@@ -64,7 +64,7 @@ describe('typed text that is not a number', () => {
     f.lorentz = 'F'
     d.fields.push(f)
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
-    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['fields.0.gaugeOf', 'fields[0] "A": a field strength (lorentz "F") needs gaugeOf, the name of its gauge group']])
+    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['fields.0.gaugeOf', 'is required: choose the gauge group whose field strength this is']])
   })
 
   it('a file that is not an object is refused with a message', () => {
@@ -137,6 +137,6 @@ describe('the heavy particle in the form', () => {
     const d = vexonium()
     d.heavy!.particle = 'Ad' // the dark photon's name
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
-    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['heavy.particle.name', 'heavy particle "Ad": a field of the roster already has this name']])
+    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['heavy.particle.name', 'is already the name of a field of the roster; choose another name than "Ad"']])
   })
 })
