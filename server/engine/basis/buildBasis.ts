@@ -84,8 +84,8 @@ export interface BasisReport {
  */
 export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
   const { maxDim, minDim = 5, nf } = opts
-  if (!Number.isInteger(maxDim) || maxDim < 5 || maxDim > 12) throw new EngineInputError('buildBasis', `maxDim must be an integer from 5 to 12, got ${maxDim}`)
-  if (nf !== undefined && (!Number.isInteger(nf) || nf < 1 || nf > 6)) throw new EngineInputError('buildBasis', `nf must be an integer from 1 to 6, got ${nf}`)
+  if (!Number.isInteger(maxDim) || maxDim < 5 || maxDim > 12) throw new EngineInputError('buildBasis', `The maximum dimension of an explicit basis must be a whole number from 5 to 12, not ${maxDim}`)
+  if (nf !== undefined && (!Number.isInteger(nf) || nf < 1 || nf > 6)) throw new EngineInputError('buildBasis', `The number of flavors must be a whole number from 1 to 6, not ${nf}`)
   const particles = theoryParticles(theory)
   const model = buildTheoryModel(theory, { nf: 1 })
   const counts = countOperators(theory, { maxDim, minDim, nf: 1 })

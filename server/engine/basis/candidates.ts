@@ -53,7 +53,7 @@ export function gaugeFactorLists(t: Theory, c: OperatorClass): SuStructure[][] {
  * Method: Shadmi & Weiss, JHEP 02 (2019) 165 (Lorentz part); δ/ε contractions (gauge part).
  */
 export function classCandidates(t: Theory, c: OperatorClass): { lorentz: LorentzStructure[]; gauge: SuStructure[][]; candidates: Candidate[] } {
-  if (c.legs.length > 12) throw new EngineInputError('classCandidates', `class ${c.key} has ${c.legs.length} fields; at most 12 are supported`)
+  if (c.legs.length > 12) throw new EngineInputError('classCandidates', `The class ${c.key} has ${c.legs.length} fields; explicit bases support at most 12; lower the maximum dimension`)
   let gauge: SuStructure[][] = chargesConserved(t, c) ? [[]] : []
   for (const list of gauge.length ? gaugeFactorLists(t, c) : []) gauge = gauge.flatMap((g) => list.map((s) => [...g, s]))
   const lorentz = gauge.length === 0 ? [] : lorentzStructures(c.legs.map((p) => p.angles), c.legs.map((p) => p.squares), c.k)

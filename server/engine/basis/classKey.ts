@@ -51,14 +51,14 @@ export function parseClassKey(particles: Particle[], key: string, minLegs = 3): 
   const legs: Particle[] = []
   for (const tok of key.trim().split(/\s+/)) {
     const m = /^(.+?)(?:\^(\d+))?$/.exec(tok)
-    if (!m) throw new EngineInputError('parseClassKey', `bad token "${tok}" in class key "${key}"`)
+    if (!m) throw new EngineInputError('parseClassKey', `Cannot read "${tok}" in the class "${key}"; write a class as fields with powers, e.g. "D^2 phi^2 phi*^2"`)
     const mult = m[2] === undefined ? 1 : Number(m[2])
     if (m[1] === 'D') { k += mult; continue }
     const p = byLabel.get(m[1]!)
-    if (!p) throw new EngineInputError('parseClassKey', `unknown particle "${m[1]}" in class key "${key}" (known: ${[...byLabel.keys()].join(', ')})`)
+    if (!p) throw new EngineInputError('parseClassKey', `The class "${key}" names "${m[1]}", which is not a field of this theory (its fields are ${[...byLabel.keys()].join(', ')})`)
     for (let i = 0; i < mult; i++) legs.push(p)
   }
-  if (legs.length < minLegs) throw new EngineInputError('parseClassKey', `a class needs at least 3 fields, got "${key}"`)
+  if (legs.length < minLegs) throw new EngineInputError('parseClassKey', `The class "${key}" has fewer than 3 fields; an operator class needs at least 3`)
   return makeClass(particles, k, legs)
 }
 

@@ -1,7 +1,7 @@
 /**
  * Structural conjugation of candidate operators within a self-conjugate class.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import type { ClassBasis } from './classBasis'
 import type { OperatorClass } from './classKey'
 import type { LorentzStructure } from './lorentzStructures'
@@ -16,7 +16,7 @@ export function conjugateLegMap(c: OperatorClass): number[] {
   const used = new Set<number>()
   return c.legs.map((p) => {
     const j = c.legs.findIndex((q, idx) => q.label === p.conjugate && !used.has(idx))
-    if (j < 0) throw new EngineInputError('conjugateLegMap', `class ${c.key} is not self-conjugate (no partner for ${p.label})`)
+    if (j < 0) throw new EngineInputError('conjugateLegMap', `The class ${c.key} is not its own conjugate (${p.label} has no partner), so "(X) + h.c." cannot be formed in it; write X alone`)
     used.add(j)
     return j
   })
@@ -48,7 +48,7 @@ export function conjugateSu(s: SuStructure, pi: number[]): SuStructure {
   const mapSlot = (si: number): number => {
     const sl = s.slots[si]!
     const j = find(pi[sl.leg]!, !sl.upper)
-    if (j < 0) throw new EngineInputError('conjugateSu', `no conjugate slot for leg ${sl.leg} in ${s.group}`)
+    if (j < 0) throw new EngineConsistencyError('conjugateSu', `no conjugate slot for leg ${sl.leg} in ${s.group}`)
     return j
   }
   return {

@@ -82,7 +82,7 @@ export function suStructures(group: string, n: number, kinds: SuKind[]): SuStruc
   if (diff % n !== 0) return []
   const [many, few] = diff >= 0 ? [ups, lows] : [lows, ups]
   const m = Math.abs(diff) / n
-  if (many.length > 12) throw new EngineInputError('suStructures', `too many ${group} indices (${many.length}) in one class`)
+  if (many.length > 12) throw new EngineInputError('suStructures', `A class with ${many.length} ${group} indices of one kind is beyond what explicit bases support (at most 12); lower the maximum dimension`)
   const out: SuStructure[] = []
   for (const chosen of combinations(many, m * n)) {
     const rest = many.filter((x) => !chosen.includes(x))

@@ -41,7 +41,7 @@ function splitTerms(text: string): { sign: 1 | -1; body: string }[] {
     if (i === text.length || (depth === 0 && (ch === '+' || ch === '-') && !/\^\s*$/.test(text.slice(0, i)))) {
       const body = text.slice(start, i).trim()
       if (body !== '') out.push({ sign, body })
-      else if (i !== 0 && i !== text.length) throw new EngineInputError('parseOperatorText', `empty term near position ${i} in "${text}"`)
+      else if (i !== 0 && i !== text.length) throw new EngineInputError('parseOperatorText', `"${text}" has an empty term near position ${i}; remove the extra sign, or write the missing term`)
       sign = ch === '-' ? -1 : 1
       start = i + 1
     }
@@ -59,15 +59,15 @@ function parseTerm(text: string, body: string, n: number, nGauge: number): { coe
   while (TOKEN.lastIndex < body.length) {
     const at = TOKEN.lastIndex
     const m = TOKEN.exec(body)
-    if (!m || m.index !== at) throw new EngineInputError('parseOperatorText', `cannot read "${body.slice(at).trim()}" in "${text}"`)
+    if (!m || m.index !== at) throw new EngineInputError('parseOperatorText', `Cannot read "${body.slice(at).trim()}" in "${text}"; write brackets such as <12>, [34] or s13, powers such as ^2, fractions such as 1/2 and gauge contractions such as {g:0}`)
     if (m[1] !== undefined || m[5] !== undefined) {
       const isS = m[5] !== undefined
       let [a, b] = isS ? [m[5]!, m[6]!] : [m[2]!, m[3]]
-      if (b === undefined) { if (a.length !== 2) throw new EngineInputError('parseOperatorText', `bracket needs two legs: "${m[0].trim()}" in "${text}"`); [a, b] = [a[0]!, a[1]!] }
+      if (b === undefined) { if (a.length !== 2) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two legs, e.g. <12> or <1,12>`); [a, b] = [a[0]!, a[1]!] }
       const i = Number(a) - 1
       const j = Number(b) - 1
-      if (i === j || i < 0 || j < 0 || i >= n || j >= n) throw new EngineInputError('parseOperatorText', `bad legs in "${m[0].trim()}" (class has ${n} legs) in "${text}"`)
-      if (!isS && (m[1] === '<') !== (m[4] === '>')) throw new EngineInputError('parseOperatorText', `mismatched bracket "${m[0].trim()}" in "${text}"`)
+      if (i === j || i < 0 || j < 0 || i >= n || j >= n) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two different legs from 1 to ${n} (the class has ${n} fields)`)
+      if (!isS && (m[1] === '<') !== (m[4] === '>')) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" mixes angle and square brackets; close < with > and [ with ]`)
       const pair: [number, number] = i < j ? [i, j] : [j, i]
       const flip = i < j ? rat(1) : rat(-1)
       // s_ij = ⟨ij⟩[ji] = −⟨ij⟩[ij]
@@ -78,17 +78,17 @@ function parseTerm(text: string, body: string, n: number, nGauge: number): { coe
       last = { lists, pair, sgn }
     } else if (m[7] !== undefined) {
       gaugeIndex = Number(m[7])
-      if (gaugeIndex >= nGauge) throw new EngineInputError('parseOperatorText', `gauge contraction {g:${gaugeIndex}} does not exist (class has ${nGauge}) in "${text}"`)
+      if (gaugeIndex >= nGauge) throw new EngineInputError('parseOperatorText', `The gauge contraction {g:${gaugeIndex}} in "${text}" does not exist; this class has ${nGauge}, numbered from {g:0}`)
     } else if (m[8] !== undefined) {
       coeff = ratMul(coeff, parseRational(m[8].replace(/\s+/g, '')))
     } else if (m[10] !== undefined) {
-      if (!last) throw new EngineInputError('parseOperatorText', `"^" must follow a bracket in "${text}"`)
+      if (!last) throw new EngineInputError('parseOperatorText', `In "${text}", a power "^" must follow a bracket, e.g. <12>^2`)
       for (let r = 1; r < Number(m[11]); r++) { for (const l of last.lists) l.push(last.pair); coeff = ratMul(coeff, last.sgn) }
       last = null
     }
   }
   if (gaugeIndex < 0) {
-    if (nGauge !== 1) throw new EngineInputError('parseOperatorText', `term "${body}" needs a gauge contraction {g:K}, K < ${nGauge}, in "${text}"`)
+    if (nGauge !== 1) throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" in "${text}" needs a gauge contraction: this class has ${nGauge}, so add one of {g:0} … {g:${nGauge - 1}}`)
     gaugeIndex = 0
   }
   return { coeff, angle, square, gaugeIndex }
@@ -102,17 +102,17 @@ function parseTerm(text: string, body: string, n: number, nGauge: number): { coe
 export function parseOperatorText(c: OperatorClass, text: string, nGauge: number): ParsedTerm[] {
   const n = c.legs.length
   const terms = splitTerms(text)
-  if (terms.length === 0) throw new EngineInputError('parseOperatorText', `empty operator text "${text}"`)
+  if (terms.length === 0) throw new EngineInputError('parseOperatorText', 'The operator is empty; type it in the input syntax, e.g. <12>[34]')
   return terms.map(({ sign, body }) => {
     const t = parseTerm(text, body, n, nGauge)
     const derivs = c.legs.map((p, i) => {
       const a = t.angle.filter((e) => e.includes(i)).length - p.angles
       const s = t.square.filter((e) => e.includes(i)).length - p.squares
-      if (a !== s || a < 0) throw new EngineInputError('parseOperatorText', `term "${body}" gives leg ${i + 1} (${p.label}) ${a + p.angles} angle and ${s + p.squares} square spinors; it needs ${p.angles} and ${p.squares} plus equal numbers per derivative`)
+      if (a !== s || a < 0) throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" gives leg ${i + 1} (${p.label}) ${a + p.angles} angle and ${s + p.squares} square spinors; this field needs ${p.angles} and ${p.squares}, plus one of each per derivative on it`)
       return a
     })
     const k = derivs.reduce((x, y) => x + y, 0)
-    if (k !== c.k) throw new EngineInputError('parseOperatorText', `term "${body}" has ${k} derivatives but class ${c.key} has ${c.k}`)
+    if (k !== c.k) throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" has ${k} derivatives, but the class ${c.key} has ${c.k}`)
     return { coeff: sign === 1 ? t.coeff : ratMul(t.coeff, rat(-1)), lorentz: { derivs, angle: t.angle, square: t.square }, gaugeIndex: t.gaugeIndex }
   })
 }

@@ -4,7 +4,7 @@
  * ⟨ij⟩ = λ_i^1 λ_j^2 − λ_i^2 λ_j^1 and [ij] = λ̃_i^1 λ̃_j^2 − λ̃_i^2 λ̃_j^1, so that
  * s_ij = (p_i + p_j)² = ⟨ij⟩[ij] up to the overall sign convention (we use s_ij = ⟨ij⟩[ji]).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import type { SeededRandom } from '../finite/rng'
 
@@ -25,7 +25,7 @@ function bracketTable(F: PrimeField, s: [number, number][]): number[][] {
 function solvePair(F: PrimeField, su: [number, number], sv: [number, number], K: number[][]): [[number, number], [number, number]] {
   // su^a xu^ȧ + sv^a xv^ȧ = K^{aȧ}; contract with ε_{ab} sv^b: ⟨su sv⟩ xu^ȧ = ⟨K, sv⟩^ȧ.
   const d = F.sub(F.mul(su[0], sv[1]), F.mul(su[1], sv[0]))
-  if (d === 0) throw new EngineInputError('randomKinematics', 'degenerate spinors drawn; retry with another seed')
+  if (d === 0) throw new EngineConsistencyError('randomKinematics', 'degenerate spinors drawn; retry with another seed')
   const xu: [number, number] = [0, 0]
   const xv: [number, number] = [0, 0]
   for (const c of [0, 1] as const) {
@@ -47,7 +47,7 @@ function solvePair(F: PrimeField, su: [number, number], sv: [number, number], K:
  * Reference: Elvang & Huang, Scattering Amplitudes in Gauge Theory and Gravity (CUP 2015), ch. 2.
  */
 export function randomKinematics(F: PrimeField, rng: SeededRandom, n: number, branch: 'angle' | 'square' = 'angle'): KinematicPoint {
-  if (!Number.isInteger(n) || n < 3) throw new EngineInputError('randomKinematics', `need at least 3 legs, got ${n}`)
+  if (!Number.isInteger(n) || n < 3) throw new EngineConsistencyError('randomKinematics', `need at least 3 legs, got ${n}`)
   const rnd = (): [number, number] => [rng.nonZero(F.p), rng.nonZero(F.p)]
   const lam: [number, number][] = []
   const lamt: [number, number][] = []

@@ -3,7 +3,7 @@
  * weights match the legs, for every distribution of the class's k derivatives over the
  * legs (a derivative on leg i adds one λ_i and one λ̃_i).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 
 export interface LorentzStructure {
   /** Derivatives on each leg. */
@@ -68,7 +68,7 @@ export function bracketGraphs(degrees: number[]): [number, number][][] {
  */
 export function lorentzStructures(angles: number[], squares: number[], k: number): LorentzStructure[] {
   if (angles.length !== squares.length) {
-    throw new EngineInputError('lorentzStructures', `angles (${angles.length}) and squares (${squares.length}) differ in length`)
+    throw new EngineConsistencyError('lorentzStructures', `angles (${angles.length}) and squares (${squares.length}) differ in length`)
   }
   const out: LorentzStructure[] = []
   for (const derivs of compositions(k, angles.length)) {

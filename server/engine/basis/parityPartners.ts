@@ -89,7 +89,7 @@ export function parityLegMap(particles: Particle[], c: OperatorClass): number[] 
     const start = q === undefined ? -1 : firstOf(q)
     const count = q === undefined ? 0 : c.legs.filter((x) => x.label === q).length
     const offset = i - firstOf(p.label)
-    if (start < 0 || offset >= count) throw new EngineInputError('parityLegMap', `class ${c.key} is not mapped to itself by parity (leg ${p.label})`)
+    if (start < 0 || offset >= count) throw new EngineInputError('parityLegMap', `Parity does not map the class ${c.key} to itself (${p.label} has no partner), so "(X) ± P" cannot be formed in it; write X alone`)
     return start + offset
   })
 }

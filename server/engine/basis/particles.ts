@@ -48,7 +48,7 @@ function suKind(fieldName: string, group: string, n: number, labels: readonly nu
   if (key === fund) return 'fund'
   if (key === anti) return 'anti'
   if (key === adj) return 'adj'
-  throw new EngineInputError('theoryParticles', `field ${fieldName}: representation [${key}] of ${group} = SU(${n}) is not supported (only fundamental, antifundamental, adjoint, singlet)`)
+  throw new EngineInputError('theoryParticles', `Field ${fieldName} sits in the representation [${key}] of ${group} = SU(${n}); explicit bases support the fundamental, antifundamental, adjoint and singlet only (counts support any)`)
 }
 
 const conjKind: Record<SuKind, SuKind> = { fund: 'anti', anti: 'fund', adj: 'adj', singlet: 'singlet' }
@@ -98,7 +98,7 @@ function conjugateOf(t: Theory, p: Particle): Particle {
  * Reference: Elvang & Huang, Scattering Amplitudes (CUP 2015), §2.
  */
 export function theoryParticles(t: Theory): Particle[] {
-  if (t.frame !== 'relativistic') throw new EngineInputError('theoryParticles', `the on-shell basis needs frame "relativistic", got "${t.frame}"`)
+  if (t.frame !== 'relativistic') throw new EngineInputError('theoryParticles', `Explicit bases from contact amplitudes need the relativistic frame, but this theory uses the ${t.frame} frame`)
   const out: Particle[] = []
   for (const f of t.fields) {
     const p = baseParticle(t, f)

@@ -56,10 +56,10 @@ export function rewriteOperator(b: ClassBasis, target: string | AmplitudeTarget)
   }
   const systems = b.primes.map((pd, pi) => ({ a: pd.keptRows, b: values[pi]! }))
   const out = solveOverQ(b.primes.map((pd) => pd.F), systems, { fn: 'rewriteOperator', about: `class ${b.key}` })
-  if (out.status === 'outside-span') throw new EngineInputError('rewriteOperator', `operator "${labelOf(target)}" is not in the span of class ${b.key}`)
+  if (out.status === 'outside-span') throw new EngineInputError('rewriteOperator', `The operator "${labelOf(target)}" is not a combination of the operators of the class ${b.key}`)
   if (out.status === 'not-liftable') {
     const { each, product } = liftReach(b.primes.map((pd) => pd.F.p))
-    throw new EngineInputError('rewriteOperator', `class ${b.key}: a coefficient is not a small rational (numerator and denominator up to ${each}, product up to ${product}, for ${b.primes.length} primes); an amplitude with a factor i or huge coefficients cannot be reconstructed`)
+    throw new EngineInputError('rewriteOperator', `In the class ${b.key}, a coefficient of the rewrite is not a fraction with numerator and denominator up to ${each} (product up to ${product}); an operator with a factor i, or with very large coefficients, cannot be rewritten exactly`)
   }
   const coeffs = out.coefficients
   return {

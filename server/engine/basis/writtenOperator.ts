@@ -48,6 +48,6 @@ export function writtenTerms(particles: Particle[], cls: OperatorClass, text: st
       gauge: x.gauge.map((s) => conjugateSu(s, pi)),
     }))]
   }
-  if (/h\.c\.|\bP\b/.test(t)) throw new EngineInputError('writtenTerms', `cannot read "${t}": write a combination as "(X) + h.c." or "(X) - P", with X in input syntax`)
+  if (/h\.c\.|\bP\b/.test(t)) throw new EngineInputError('writtenTerms', `Cannot read "${t}": write a combination as "(X) + h.c." or "(X) - P", with X in the input syntax`)
   return parseOperatorText(cls, t, gauge.length).map((x) => ({ coeff: x.coeff, lorentz: x.lorentz, gauge: gauge[x.gaugeIndex]! }))
 }

@@ -6,7 +6,7 @@
  * between their fingerprints, so coverage is a rank and a rewrite is a linear solve, exact mod
  * each prime, lifted to rationals from all primes together (finite/solveOverQ.ts).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import { PrimeSet } from '../finite/primeSet'
 import type { Rational } from '../exact/rational'
 
@@ -21,7 +21,7 @@ function checkAligned(fn: string, prints: Fingerprint[]) {
   const ref = prints[0]
   for (const fp of prints) {
     if (!ref || fp.primes.join() !== ref.primes.join() || fp.values.length !== fp.primes.length || fp.values.some((row, i) => row.length !== ref.values[i]!.length)) {
-      throw new EngineInputError(fn, 'fingerprints of one class must share primes and sample points')
+      throw new EngineConsistencyError(fn, 'fingerprints of one class must share primes and sample points')
     }
   }
 }
@@ -66,5 +66,5 @@ export function expressIn(basis: Fingerprint[], target: Fingerprint): Combinatio
 
 function tooLarge(set: PrimeSet, index: number): EngineInputError {
   const { each, product } = set.reach
-  return new EngineInputError('expressIn', `the coefficient of kept operator ${index + 1} is not a rational with numerator and denominator up to ${each} and product up to ${product}, the most that the stored fingerprints (${set.size} primes) determine; such a rewrite cannot be given exactly`)
+  return new EngineInputError('expressIn', `The coefficient of kept operator ${index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}), the most that the stored fingerprints determine; such a rewrite cannot be given exactly`)
 }

@@ -29,7 +29,7 @@ export function rulesOf(theory: RuleTheory): CountingRule[] {
 
 function contextOf(theory: RuleTheory): RuleContext {
   if (theory.frame === 'heavy') {
-    if (!theory.heavy) throw new EngineInputError('ruleOrders', 'a heavy-frame theory needs its "heavy" key')
+    if (!theory.heavy) throw new EngineInputError('ruleOrders', 'A theory in the heavy-particle frame needs its heavy particle; declare it in the editor')
     const light = lightFields(theory.fields ?? [], theory.groups ?? []).fields.map((f) => ({ name: f.name, dim: f.kind === 'dirac' ? '3/2' : '1' }))
     return { frame: 'heavy', particle: theory.heavy.particle.name, antiparticle: theory.heavy.antiparticle?.name, light }
   }
@@ -42,7 +42,7 @@ function contextOf(theory: RuleTheory): RuleContext {
  */
 export function ruleOrders(theory: RuleTheory, ruleName: string, operators: { id: number, classKey: string, terms?: Record<string, number>[] }[]): Record<number, string> {
   const rule = rulesOf(theory).find((r) => r.name === ruleName)
-  if (!rule) throw new EngineInputError('ruleOrders', `the theory has no counting rule named "${ruleName}"`)
+  if (!rule) throw new EngineInputError('ruleOrders', `The theory has no counting rule named "${ruleName}"; choose one of its rules`)
   const ctx = contextOf(theory)
   const resolved = resolveRule(rule, ctx)
   const out: Record<number, string> = {}

@@ -54,7 +54,7 @@ export function parseClassKey(model: TheoryModel, key: string): { counts: number
     const power = m?.[2] === undefined ? 1 : Number(m[2])
     if (name === 'D') { derivatives += power; continue }
     const i = model.species.findIndex((s) => s.key === name)
-    if (i < 0 || power < 1) throw new EngineInputError('parseClassKey', `unknown building block "${token}" in class "${key}"`)
+    if (i < 0 || power < 1) throw new EngineInputError('parseClassKey', `The class "${key}" names "${token}", which is not a field of this theory`)
     counts[i]! += power
   }
   return { counts, derivatives }
@@ -75,7 +75,7 @@ export const MAX_FIELD_CONTENTS = 400_000
  */
 export function enumerateFieldContents(model: TheoryModel, minDim: number, maxDim: number): FieldContent[] {
   if (!Number.isInteger(minDim) || !Number.isInteger(maxDim) || minDim < 1 || maxDim > 30 || minDim > maxDim) {
-    throw new EngineInputError('enumerateFieldContents', `need integers 1 <= minDim <= maxDim <= 30, got minDim = ${minDim}, maxDim = ${maxDim}`)
+    throw new EngineInputError('enumerateFieldContents', `The dimensions must be whole numbers with 1 ≤ lowest ≤ highest ≤ 30, not ${minDim} to ${maxDim}`)
   }
   const S = model.species.length
   const budget = 2 * maxDim
@@ -92,7 +92,7 @@ export function enumerateFieldContents(model: TheoryModel, minDim: number, maxDi
     if (++visited > MAX_ENUMERATION_NODES || out.length > MAX_FIELD_CONTENTS) {
       throw new EngineInputError(
         'enumerateFieldContents',
-        `theory "${model.name}" has too many field contents up to dimension ${maxDim} (search stopped after ${visited} steps, ${out.length} contents); lower maxDim`,
+        `Theory "${model.name}" has too many field contents up to dimension ${maxDim} (the search stopped after ${visited} steps and ${out.length} contents); lower the maximum dimension`,
       )
     }
     if (s === S) {
@@ -189,7 +189,7 @@ function chargesReachable(sums: number[], bounds: { lo: Ratio[][]; hi: Ratio[][]
  */
 export function enumerateClasses(model: TheoryModel, dimension: number): OperatorClass[] {
   if (!Number.isInteger(dimension) || dimension < 1 || dimension > 30) {
-    throw new EngineInputError('enumerateClasses', `dimension must be an integer from 1 to 30, got ${dimension}`)
+    throw new EngineInputError('enumerateClasses', `The dimension must be a whole number from 1 to 30, not ${dimension}`)
   }
   const out: OperatorClass[] = []
   for (const fc of enumerateFieldContents(model, dimension, dimension)) {
@@ -216,7 +216,7 @@ function integerCharges(model: TheoryModel): number[][] {
     return model.species.map((s) => {
       const v = (s.u1[g]!.num * l) / s.u1[g]!.den
       if (v > 1_000_000_000n || v < -1_000_000_000n) {
-        throw new EngineInputError('enumerateFieldContents', `U(1) charges of ${model.u1[g]!.name} have too large a common denominator (${l})`)
+        throw new EngineInputError('enumerateFieldContents', `The ${model.u1[g]!.name} charges have too large a common denominator (${l}); write them with smaller denominators`)
       }
       return Number(v)
     })

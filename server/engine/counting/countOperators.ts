@@ -62,13 +62,13 @@ export const MAX_COUNT_DIMENSION = 16
 export function countOperators(theory: Theory, options: CountOptions): CountResult {
   const { maxDim, minDim = 5 } = options
   if (!Number.isInteger(maxDim) || maxDim < 5 || maxDim > MAX_COUNT_DIMENSION) {
-    throw new EngineInputError('countOperators', `maxDim must be an integer from 5 to ${MAX_COUNT_DIMENSION}, got ${maxDim}`)
+    throw new EngineInputError('countOperators', `The maximum dimension of a count must be a whole number from 5 to ${MAX_COUNT_DIMENSION}, not ${maxDim}`)
   }
   if (!Number.isInteger(minDim) || minDim < 5 || minDim > maxDim) {
-    throw new EngineInputError('countOperators', `minDim must be an integer from 5 to maxDim = ${maxDim}, got ${minDim}`)
+    throw new EngineInputError('countOperators', `The lowest dimension must be a whole number from 5 to the maximum dimension ${maxDim}, not ${minDim}`)
   }
   if (theory.frame !== 'relativistic') {
-    throw new EngineInputError('countOperators', `frame "${theory.frame}" is counted by the heavy-particle engine, not by the Hilbert series`)
+    throw new EngineInputError('countOperators', `Theory "${theory.name}" uses the ${theory.frame} frame, which the Hilbert-series count does not cover; start a basis run instead`)
   }
   const model = buildTheoryModel(theory, { nf: options.nf })
   const contents = enumerateFieldContents(model, minDim, maxDim)
@@ -100,6 +100,6 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
 }
 
 function safeNumber(v: bigint, what: string): number {
-  if (v > BigInt(Number.MAX_SAFE_INTEGER)) throw new EngineInputError('countOperators', `count of ${what} exceeds 2^53: ${v}`)
+  if (v > BigInt(Number.MAX_SAFE_INTEGER)) throw new EngineInputError('countOperators', `The count for ${what} (${v}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
   return Number(v)
 }

@@ -28,7 +28,7 @@ const cache = new Map<number, CycleType[]>()
  */
 export function cycleTypes(n: number): CycleType[] {
   if (!Number.isInteger(n) || n < 0 || n > MAX_CYCLE_N) {
-    throw new EngineInputError('cycleTypes', `n must be an integer from 0 to ${MAX_CYCLE_N}, got ${n}`)
+    throw new EngineInputError('cycleTypes', `Operators with more than ${MAX_CYCLE_N} copies of one field are beyond the counting engine (here ${n}); lower the maximum dimension`)
   }
   let out = cache.get(n)
   if (!out) {

@@ -39,12 +39,12 @@ const LIMIT = 2 ** 52
  * f(0,0) − f(2,0) − f(0,2) + f(2,2) (Weyl integration formula, Fulton & Harris §26.2).
  */
 export function lorentzSingletSeries(factors: readonly LorentzFactor[], K: number): number[] {
-  if (!Number.isInteger(K) || K < 0 || K > 40) throw new EngineInputError('lorentzSingletSeries', `derivative order K must be 0..40, got ${K}`)
+  if (!Number.isInteger(K) || K < 0 || K > 40) throw new EngineInputError('lorentzSingletSeries', `Operators with more than 40 derivatives are beyond the counting engine (here ${K}); lower the maximum dimension`)
   let reachL = K
   let reachR = K
   for (const f of factors) {
     if (!(f.type in BASE_SPINS) || !Number.isInteger(f.cycle) || f.cycle < 1) {
-      throw new EngineInputError('lorentzSingletSeries', `bad factor ${JSON.stringify(f)}`)
+      throw new EngineConsistencyError('lorentzSingletSeries', `bad factor ${JSON.stringify(f)}`)
     }
     reachL += f.cycle * BASE_SPINS[f.type][0]
     reachR += f.cycle * BASE_SPINS[f.type][1]

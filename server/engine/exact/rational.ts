@@ -30,7 +30,7 @@ export function gcdBig(a: bigint, b: bigint): bigint {
 export function rat(num: bigint | number, den: bigint | number = 1n): Rational {
   const n = toBig('rat', num)
   const d = toBig('rat', den)
-  if (d === 0n) throw new EngineInputError('rat', `zero denominator in ${n}/${d}`)
+  if (d === 0n) throw new EngineInputError('rat', `A fraction cannot have a zero denominator (${n}/0)`)
   const g = gcdBig(n, d)
   const s = d < 0n ? -1n : 1n
   return g === 0n ? { num: 0n, den: 1n } : { num: (s * n) / g, den: (s * d) / g }
@@ -38,7 +38,7 @@ export function rat(num: bigint | number, den: bigint | number = 1n): Rational {
 
 function toBig(fn: string, v: bigint | number): bigint {
   if (typeof v === 'bigint') return v
-  if (!Number.isSafeInteger(v)) throw new EngineInputError(fn, `not a safe integer: ${v}`)
+  if (!Number.isSafeInteger(v)) throw new EngineInputError(fn, `${v} is not a whole number below 2^53`)
   return BigInt(v)
 }
 
@@ -53,9 +53,9 @@ export const ONE: Rational = { num: 1n, den: 1n }
  */
 export function parseRational(text: string): Rational {
   const m = /^\s*([+-]?\d+)\s*(?:\/\s*([+-]?\d+)\s*)?$/.exec(text)
-  if (!m) throw new EngineInputError('parseRational', `not a rational number: "${text}"`)
+  if (!m) throw new EngineInputError('parseRational', `"${text}" is not a fraction; write a whole number or p/q, e.g. 3/2`)
   const den = m[2] === undefined ? 1n : BigInt(m[2])
-  if (den === 0n) throw new EngineInputError('parseRational', `zero denominator in "${text}"`)
+  if (den === 0n) throw new EngineInputError('parseRational', `"${text}" has a zero denominator`)
   return rat(BigInt(m[1]!), den)
 }
 
@@ -81,7 +81,7 @@ export function mul(a: Rational, b: Rational): Rational {
 
 /** a / b; throws EngineInputError when b is zero. */
 export function div(a: Rational, b: Rational): Rational {
-  if (b.num === 0n) throw new EngineInputError('div', `division by zero: ${toString(a)} / 0`)
+  if (b.num === 0n) throw new EngineInputError('div', `Division by zero (${toString(a)} / 0)`)
   return rat(a.num * b.den, a.den * b.num)
 }
 
@@ -113,7 +113,7 @@ export function toString(a: Rational): string {
 
 /** The exact integer value; throws EngineInputError if the value is not an integer. */
 export function toBigInt(a: Rational): bigint {
-  if (a.den !== 1n) throw new EngineInputError('toBigInt', `not an integer: ${toString(a)}`)
+  if (a.den !== 1n) throw new EngineInputError('toBigInt', `${toString(a)} is not a whole number`)
   return a.num
 }
 

@@ -2,7 +2,7 @@
  * Dense exact linear algebra over F_p: row echelon form, rank, pivot (greedy) columns,
  * and solving linear systems. Matrices are arrays of rows of numbers in [0, p).
  */
-import { EngineCancelledError, EngineInputError } from '../errors'
+import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
 import type { PrimeField } from './primeField'
 
 export type ModMatrix = number[][]
@@ -31,7 +31,7 @@ export function rref(F: PrimeField, m: ModMatrix, signal?: CancelFlag): Echelon 
   const nRows = rows.length
   const nCols = nRows === 0 ? 0 : rows[0]!.length
   for (const r of rows) {
-    if (r.length !== nCols) throw new EngineInputError('rref', `ragged matrix: row of length ${r.length}, expected ${nCols}`)
+    if (r.length !== nCols) throw new EngineConsistencyError('rref', `ragged matrix: row of length ${r.length}, expected ${nCols}`)
   }
   const pivots: number[] = []
   let rank = 0
@@ -73,7 +73,7 @@ export function rank(F: PrimeField, m: ModMatrix, signal?: CancelFlag): number {
  * Method: Gauss–Jordan on the augmented matrix. Reference: Golub & Van Loan §3.2.
  */
 export function solve(F: PrimeField, a: ModMatrix, b: number[], signal?: CancelFlag): number[] {
-  if (a.length !== b.length) throw new EngineInputError('solve', `row count ${a.length} differs from right side length ${b.length}`)
+  if (a.length !== b.length) throw new EngineConsistencyError('solve', `row count ${a.length} differs from right side length ${b.length}`)
   const nCols = a.length === 0 ? 0 : a[0]!.length
   const aug = a.map((r, i) => [...r, b[i]!])
   const e = rref(F, aug, signal)

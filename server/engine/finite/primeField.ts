@@ -3,7 +3,7 @@
  * Every product a·b with a, b < 2^26 is below 2^52 and therefore exact in a double, so
  * (a*b) % p is exact. Elements are integers in [0, p).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import type { Rational } from '../exact/rational'
 
 /** Largest modulus accepted, so that products stay exact in IEEE doubles. */
@@ -30,7 +30,7 @@ export class PrimeField {
   readonly p: number
   constructor(p: number) {
     if (!isPrime(p) || p >= MAX_PRIME) {
-      throw new EngineInputError('PrimeField', `modulus must be a prime below 2^26, got ${p}`)
+      throw new EngineConsistencyError('PrimeField', `modulus must be a prime below 2^26, got ${p}`)
     }
     this.p = p
   }
@@ -48,9 +48,9 @@ export class PrimeField {
   mul(a: number, b: number): number {
     return (a * b) % this.p
   }
-  /** Multiplicative inverse; throws EngineInputError for 0. */
+  /** Multiplicative inverse; throws EngineConsistencyError for 0. */
   inv(a: number): number {
-    if (a % this.p === 0) throw new EngineInputError('PrimeField.inv', `0 has no inverse mod ${this.p}`)
+    if (a % this.p === 0) throw new EngineConsistencyError('PrimeField.inv', `0 has no inverse mod ${this.p}`)
     let [r0, r1] = [this.p, a % this.p]
     let [t0, t1] = [0, 1]
     while (r1 !== 0) {
@@ -80,7 +80,7 @@ export class PrimeField {
       const r = Number(((x % BigInt(this.p)) + BigInt(this.p)) % BigInt(this.p))
       return r
     }
-    if (!Number.isSafeInteger(x)) throw new EngineInputError('PrimeField.from', `not a safe integer: ${x}`)
+    if (!Number.isSafeInteger(x)) throw new EngineConsistencyError('PrimeField.from', `not a safe integer: ${x}`)
     const r = x % this.p
     return r < 0 ? r + this.p : r
   }
@@ -90,12 +90,12 @@ export class PrimeField {
   }
   /** A square root of −1 (exists iff p ≡ 1 mod 4); throws otherwise. */
   sqrtMinusOne(): number {
-    if (this.p % 4 !== 1) throw new EngineInputError('PrimeField.sqrtMinusOne', `p = ${this.p} is not 1 mod 4`)
+    if (this.p % 4 !== 1) throw new EngineConsistencyError('PrimeField.sqrtMinusOne', `p = ${this.p} is not 1 mod 4`)
     for (let g = 2; g < this.p; g++) {
       const c = this.pow(g, (this.p - 1) / 4)
       if (this.mul(c, c) === this.p - 1) return c
     }
-    throw new EngineInputError('PrimeField.sqrtMinusOne', `no root found mod ${this.p}`)
+    throw new EngineConsistencyError('PrimeField.sqrtMinusOne', `no root found mod ${this.p}`)
   }
 }
 

@@ -4,7 +4,7 @@
  * rational is lifted from all of them together. Callers hold one matrix (or system) per prime,
  * in the order of `fields`.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import type { Rational } from '../exact/rational'
 import { PrimeField, workingPrimes } from './primeField'
 import type { CancelFlag, ModMatrix } from './matrix'
@@ -27,7 +27,7 @@ export class PrimeSet {
 
   constructor(primes: readonly number[]) {
     if (primes.length === 0 || new Set(primes).size !== primes.length) {
-      throw new EngineInputError('PrimeSet', `need one or more distinct primes, got [${primes.join(', ')}]`)
+      throw new EngineConsistencyError('PrimeSet', `need one or more distinct primes, got [${primes.join(', ')}]`)
     }
     this.primes = [...primes]
     this.fields = primes.map((p) => new PrimeField(p))

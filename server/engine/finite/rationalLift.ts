@@ -4,7 +4,7 @@
  * only a fraction small enough that a random residue would almost never produce one, and check
  * the result against every prime.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import type { Rational } from '../exact/rational'
 import { crt, reconstructRationalOrNull, wangBound } from './rationalReconstruction'
 
@@ -42,11 +42,11 @@ export function liftReach(primes: readonly number[]): LiftReach {
 
 function checkResidues(residues: readonly number[], primes: readonly number[]): void {
   if (residues.length !== primes.length || primes.length === 0) {
-    throw new EngineInputError('liftRational', `need one residue per prime, got ${residues.length} residues for ${primes.length} primes`)
+    throw new EngineConsistencyError('liftRational', `need one residue per prime, got ${residues.length} residues for ${primes.length} primes`)
   }
   residues.forEach((r, i) => {
     if (!Number.isSafeInteger(r) || r < 0 || r >= primes[i]!) {
-      throw new EngineInputError('liftRational', `residue ${r} is not an element of F_${primes[i]}`)
+      throw new EngineConsistencyError('liftRational', `residue ${r} is not an element of F_${primes[i]}`)
     }
   })
 }

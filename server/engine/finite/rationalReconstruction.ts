@@ -2,7 +2,7 @@
  * Rational reconstruction and the Chinese remainder theorem: recover an exact rational
  * n/d from its image modulo m (or modulo several primes combined).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import { rat, type Rational } from '../exact/rational'
 
 /** ⌊√n⌋ by Newton's iteration on bigints (exact for any size, so any number of primes). */
@@ -60,7 +60,7 @@ export function reconstructRationalOrNull(a: bigint, m: bigint): Rational | null
  */
 export function crt(residues: bigint[], moduli: bigint[]): { residue: bigint; modulus: bigint } {
   if (residues.length !== moduli.length || moduli.length === 0) {
-    throw new EngineInputError('crt', `need equally many residues and moduli, got ${residues.length} and ${moduli.length}`)
+    throw new EngineConsistencyError('crt', `need equally many residues and moduli, got ${residues.length} and ${moduli.length}`)
   }
   let r = ((residues[0]! % moduli[0]!) + moduli[0]!) % moduli[0]!
   let m = moduli[0]!
@@ -82,6 +82,6 @@ function modInverse(a: bigint, m: bigint): bigint {
     ;[r0, r1] = [r1, r0 - q * r1]
     ;[t0, t1] = [t1, t0 - q * t1]
   }
-  if (r0 !== 1n) throw new EngineInputError('crt', `moduli not coprime: gcd(${a}, ${m}) = ${r0}`)
+  if (r0 !== 1n) throw new EngineConsistencyError('crt', `moduli not coprime: gcd(${a}, ${m}) = ${r0}`)
   return ((t0 % m) + m) % m
 }

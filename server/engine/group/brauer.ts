@@ -22,12 +22,12 @@ export function multiplyIrreps(n: number, irreps: Map<string, number>, x: Charac
   for (const [key, q] of irreps) {
     const lambda = parseWeightKey('multiplyIrreps', key)
     for (const [nu, m] of weights) {
-      if (nu.length !== n - 1) throw new EngineInputError('multiplyIrreps', `weight "${[...nu].join(',')}" does not have ${n - 1} labels for SU(${n})`)
+      if (nu.length !== n - 1) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${n - 1} labels of an SU(${n}) weight`)
       const r = reflectToDominant(nu, lambda)
       if (!r) continue
       const k = r.dynkin.join(',')
       const v = (out.get(k) ?? 0) + r.sign * q * m
-      if (!Number.isSafeInteger(v)) throw new EngineInputError('multiplyIrreps', `multiplicity ${v} beyond 2^53`)
+      if (!Number.isSafeInteger(v)) throw new EngineInputError('multiplyIrreps', `A multiplicity (${v}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
       if (v === 0) out.delete(k)
       else out.set(k, v)
     }

@@ -10,7 +10,7 @@ import { fixedPackedProduct } from './packed'
 
 function addTo(fn: string, out: Character, key: string, m: number): void {
   const v = (out.get(key) ?? 0) + m
-  if (!Number.isSafeInteger(v)) throw new EngineInputError(fn, `multiplicity overflow (beyond 2^53) at weight ${key}`)
+  if (!Number.isSafeInteger(v)) throw new EngineInputError(fn, `A weight multiplicity grows beyond 2^53 (at weight ${key}), past exact arithmetic; lower the maximum dimension or the number of flavors`)
   if (v === 0) out.delete(key)
   else out.set(key, v)
 }
@@ -33,7 +33,7 @@ export function characterProduct(a: Character, b: Character): Character {
     const sum = new Array<number>(wa.length)
     for (const [wb, mb, sb, kb] of bs) {
       if (sb !== sa) {
-        throw new EngineInputError('characterProduct', `weights of different shape: "${ka}" and "${kb}"`)
+        throw new EngineInputError('characterProduct', `Characters of different groups cannot be multiplied (weights "${ka}" and "${kb}")`)
       }
       for (let i = 0; i < wa.length; i++) sum[i] = wa[i]! + wb[i]!
       addTo('characterProduct', out, formatWeightKey(sum, sa), ma * mb)
@@ -52,7 +52,7 @@ export function characterPower(n: number, ch: Character, r: number): Character {
   checkN('characterPower', n)
   for (const k of ch.keys()) {
     if (parseWeightKey('characterPower', k).length !== n - 1 || k.includes(';')) {
-      throw new EngineInputError('characterPower', `weight "${k}" does not have ${n - 1} labels for SU(${n})`)
+      throw new EngineInputError('characterPower', `The weight "${k}" does not have the ${n - 1} labels of an SU(${n}) weight`)
     }
   }
   return characterAdams(ch, r)
@@ -64,7 +64,7 @@ export function characterPower(n: number, ch: Character, r: number): Character {
  */
 export function characterAdams(ch: Character, r: number): Character {
   if (!Number.isSafeInteger(r) || r < 1) {
-    throw new EngineInputError('characterPower', `Adams power r must be a positive integer, got ${r}`)
+    throw new EngineInputError('characterPower', `The Adams power must be a positive whole number, not ${r}`)
   }
   const out: Character = new Map()
   for (const [k, m] of ch) {

@@ -47,7 +47,7 @@ export function reflectToDominant(mu: ArrayLike<number>, shift: ArrayLike<number
 
 function checkedWeight(fn: string, n: number, key: string): Int32Array {
   const w = parseWeightKey(fn, key)
-  if (w.length !== n - 1 || key.includes(';')) throw new EngineInputError(fn, `weight "${key}" does not have ${n - 1} labels for SU(${n})`)
+  if (w.length !== n - 1 || key.includes(';')) throw new EngineInputError(fn, `The weight "${key}" does not have the ${n - 1} labels of an SU(${n}) weight`)
   return w
 }
 
@@ -106,7 +106,7 @@ export function singletCount(n: number, ch: Character): number {
     if (c !== 0) s += c * m
   }
   if (!Number.isSafeInteger(s)) {
-    throw new EngineInputError('singletCount', `multiplicities must be safe integers, got a total of ${s}`)
+    throw new EngineInputError('singletCount', `The number of singlets (${s}) is beyond exact arithmetic (a whole number below 2^53); lower the maximum dimension or the number of flavors`)
   }
   return s
 }

@@ -12,7 +12,7 @@ export const MAX_N = 8
 /** Throw EngineInputError unless 2 <= n <= 8 is an integer. */
 export function checkN(fn: string, n: number): void {
   if (!Number.isInteger(n) || n < MIN_N || n > MAX_N) {
-    throw new EngineInputError(fn, `SU(n) needs an integer n from ${MIN_N} to ${MAX_N}, got n = ${n}`)
+    throw new EngineInputError(fn, `SU(n) needs a whole number n from ${MIN_N} to ${MAX_N}, but n = ${n}`)
   }
 }
 
@@ -20,17 +20,18 @@ export function checkN(fn: string, n: number): void {
 export function checkDynkin(fn: string, n: number, dynkin: Dynkin): void {
   checkN(fn, n)
   if (!Array.isArray(dynkin) || dynkin.length !== n - 1) {
-    throw new EngineInputError(fn, `SU(${n}) Dynkin labels need ${n - 1} entries, got ${fmt(dynkin)}`)
+    throw new EngineInputError(fn, `SU(${n}) takes ${n - 1} Dynkin labels, but ${fmt(dynkin)} has ${Array.isArray(dynkin) ? dynkin.length : 0}`)
   }
   for (const a of dynkin) {
     if (!Number.isSafeInteger(a) || a < 0) {
-      throw new EngineInputError(fn, `Dynkin labels must be non-negative integers, got ${fmt(dynkin)}`)
+      throw new EngineInputError(fn, `Dynkin labels must be whole numbers, 0 or more, but they are ${fmt(dynkin)}`)
     }
   }
 }
 
 /** Compact JSON rendering of a bad value for error messages. */
 export function fmt(x: unknown): string {
+  if (x === undefined) return 'missing'
   try {
     return JSON.stringify(x) ?? String(x)
   } catch {
@@ -80,7 +81,7 @@ export function parseWeightKey(fn: string, key: string): Int32Array {
   for (let i = 0; i < parts.length; i++) {
     const x = Number(parts[i])
     if (!Number.isSafeInteger(x) || parts[i]!.trim() === '' || Math.abs(x) > 2 ** 30) {
-      throw new EngineInputError(fn, `malformed weight key "${key}"`)
+      throw new EngineInputError(fn, `"${key}" is not a weight (whole numbers separated by commas)`)
     }
     v[i] = x
   }

@@ -27,14 +27,14 @@ export const MAX_TWO_SPIN = 40
 function checkIrrep(fn: string, irrep: LorentzIrrep): void {
   const ok = Array.isArray(irrep) && irrep.length === 2 &&
     irrep.every((x) => Number.isSafeInteger(x) && x >= 0 && x <= MAX_TWO_SPIN)
-  if (!ok) throw new EngineInputError(fn, `Lorentz irrep must be [2j_l, 2j_r] with integers 0..${MAX_TWO_SPIN}, got ${JSON.stringify(irrep)}`)
+  if (!ok) throw new EngineInputError(fn, `A Lorentz representation is written [2j_L, 2j_R] with whole numbers from 0 to ${MAX_TWO_SPIN}, but it is ${JSON.stringify(irrep)}`)
 }
 
 function twoSpin(fn: string, j: string | number): number {
   const r: Rational = typeof j === 'number' ? (Number.isSafeInteger(2 * j) ? rat(2 * j, 2) : rat(-1)) : parseRational(String(j))
   const two = mul(r, rat(2))
   if (!isInteger(two) || two.num < 0n || two.num > BigInt(MAX_TWO_SPIN)) {
-    throw new EngineInputError(fn, `spin must be a non-negative multiple of 1/2 up to ${MAX_TWO_SPIN / 2}, got ${j}`)
+    throw new EngineInputError(fn, `A spin must be a multiple of 1/2 from 0 to ${MAX_TWO_SPIN / 2}, but it is ${j}`)
   }
   return Number(two.num)
 }

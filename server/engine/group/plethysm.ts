@@ -20,10 +20,10 @@ export interface PlethysmOptions {
 function checkPartition(fn: string, partition: readonly number[]): number {
   const ok = Array.isArray(partition) && partition.length > 0 &&
     partition.every((p, i) => Number.isSafeInteger(p) && p >= 1 && (i === 0 || p <= partition[i - 1]!))
-  if (!ok) throw new EngineInputError(fn, `partition must be a non-increasing list of positive integers, got ${fmt(partition)}`)
+  if (!ok) throw new EngineInputError(fn, `A partition must be a non-increasing list of positive whole numbers, but it is ${fmt(partition)}`)
   const k = partition.reduce((a, b) => a + b, 0)
   if (k > MAX_PLETHYSM_DEGREE) {
-    throw new EngineInputError(fn, `partition ${fmt(partition)} has size ${k}, above the limit ${MAX_PLETHYSM_DEGREE}`)
+    throw new EngineInputError(fn, `The partition ${fmt(partition)} has size ${k}, above the limit ${MAX_PLETHYSM_DEGREE} (at most ${MAX_PLETHYSM_DEGREE} copies of one field are symmetrised)`)
   }
   return k
 }
@@ -43,7 +43,7 @@ export function schurFunctorCharacter(
   const k = checkPartition('schurFunctorCharacter', partition)
   for (const key of ch.keys()) {
     if (parseWeightKey('schurFunctorCharacter', key).length !== n - 1 || key.includes(';')) {
-      throw new EngineInputError('schurFunctorCharacter', `weight "${key}" does not have ${n - 1} labels for SU(${n})`)
+      throw new EngineInputError('schurFunctorCharacter', `The weight "${key}" does not have the ${n - 1} labels of an SU(${n}) weight`)
     }
   }
   const acc = accumulateCycleIndex(n, ch, partition, k, opts)
@@ -78,7 +78,7 @@ function accumulateCycleIndex(
 
 function toSafe(q: bigint, w: string): number {
   if (q > BigInt(Number.MAX_SAFE_INTEGER) || q < -BigInt(Number.MAX_SAFE_INTEGER)) {
-    throw new EngineInputError('schurFunctorCharacter', `multiplicity ${q} at weight ${w} exceeds 2^53`)
+    throw new EngineInputError('schurFunctorCharacter', `A multiplicity (${q} at weight ${w}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
   }
   return Number(q)
 }

@@ -14,7 +14,7 @@ import { decomposeCharacter, singletContribution, singletCount } from './decompo
  * Reference: Fulton & Harris, §2.2 (irreps of a product group are outer products).
  */
 export function productCharacter(factors: readonly Character[]): Character {
-  if (factors.length === 0) throw new EngineInputError('productCharacter', 'needs at least one factor, got []')
+  if (factors.length === 0) throw new EngineInputError('productCharacter', 'A product group needs at least one factor')
   let out: Character = new Map(factors[0])
   for (const f of factors.slice(1)) {
     const next: Character = new Map()
@@ -29,7 +29,7 @@ export function productCharacter(factors: readonly Character[]): Character {
 function splitKey(fn: string, key: string, count: number): string[] {
   const parts = key.split(';')
   if (parts.length !== count) {
-    throw new EngineInputError(fn, `weight key "${key}" does not have ${count} factors separated by ';'`)
+    throw new EngineInputError(fn, `The weight "${key}" does not have one part per factor of the ${count}-factor product group`)
   }
   return parts
 }
@@ -67,7 +67,7 @@ export function decomposeProduct(ns: readonly number[], ch: Character): Map<stri
  */
 export function productSingletCount(ns: readonly number[], ch: Character): number {
   ns.forEach((n) => checkN('productSingletCount', n))
-  if (ns.length === 0) throw new EngineInputError('productSingletCount', 'needs at least one factor, got []')
+  if (ns.length === 0) throw new EngineInputError('productSingletCount', 'A product group needs at least one factor')
   if (ns.length === 1) {
     for (const k of ch.keys()) splitKey('productSingletCount', k, 1)
     return singletCount(ns[0]!, ch)

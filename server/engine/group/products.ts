@@ -32,7 +32,7 @@ export function tensorProduct(n: number, a: Dynkin, b: Dynkin): Map<string, numb
 }
 
 function checkPower(fn: string, k: number): void {
-  if (!Number.isSafeInteger(k) || k < 0) throw new EngineInputError(fn, `power k must be a non-negative integer, got ${k}`)
+  if (!Number.isSafeInteger(k) || k < 0) throw new EngineInputError(fn, `The power must be a whole number, 0 or more, not ${k}`)
 }
 
 /**

@@ -55,7 +55,7 @@ export function symmetricCharacter(lambda: readonly number[], mu: readonly numbe
   const kl = lambda.reduce((a, b) => a + b, 0)
   const km = mu.reduce((a, b) => a + b, 0)
   if (kl !== km) {
-    throw new EngineInputError('symmetricCharacter', `partitions of different sizes: ${JSON.stringify(lambda)} and ${JSON.stringify(mu)}`)
+    throw new EngineInputError('symmetricCharacter', `The partitions ${JSON.stringify(lambda)} and ${JSON.stringify(mu)} have different sizes; a character of the symmetric group needs two partitions of the same number`)
   }
   const len = lambda.length
   const beta = lambda.map((p, i) => p + len - 1 - i)

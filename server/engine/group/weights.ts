@@ -34,7 +34,7 @@ export function suDimension(n: number, dynkin: Dynkin): number {
   }
   const d = num / den
   if (d > BigInt(Number.MAX_SAFE_INTEGER)) {
-    throw new EngineInputError('suDimension', `dimension of SU(${n}) [${dynkinKey(dynkin)}] exceeds 2^53: ${d}`)
+    throw new EngineInputError('suDimension', `The SU(${n}) representation [${dynkinKey(dynkin)}] has dimension ${d}, beyond 2^53; choose a smaller representation`)
   }
   return Number(d)
 }
@@ -55,7 +55,7 @@ export function suWeights(n: number, dynkin: Dynkin): Character {
   if (hit) return hit
   const dim = suDimension(n, dynkin)
   if (dim > MAX_WEIGHT_DIMENSION) {
-    throw new EngineInputError('suWeights', `SU(${n}) irrep [${dynkinKey(dynkin)}] has dimension ${dim}, above the limit ${MAX_WEIGHT_DIMENSION}`)
+    throw new EngineInputError('suWeights', `The SU(${n}) representation [${dynkinKey(dynkin)}] has dimension ${dim}, above the limit of ${MAX_WEIGHT_DIMENSION} weights; choose a smaller representation`)
   }
   const lambda = dynkinToPartition(dynkin)
   const ch: Character = new Map()

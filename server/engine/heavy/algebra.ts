@@ -17,7 +17,7 @@
  * With several gauge factors D contains every coupled connection, so [D_t, D_i] is the sum of
  * their field strengths (charges absorbed into each connection).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 
 export type Element = Map<string, number>
 
@@ -34,7 +34,7 @@ export function splitKey(key: string): { spin: number; word: string } {
 function addTerm(out: Element, key: string, c: number): void {
   if (c === 0) return
   const v = (out.get(key) ?? 0) + c
-  if (!Number.isSafeInteger(v)) throw new EngineInputError('heavy algebra', `coefficient overflow at ${key}`)
+  if (!Number.isSafeInteger(v)) throw new EngineConsistencyError('heavy algebra', `coefficient overflow at ${key}`)
   if (v === 0) out.delete(key)
   else out.set(key, v)
 }
@@ -97,7 +97,7 @@ export function wordAtoms(word: string): string[] {
   for (let i = 0; i < word.length; i++) {
     if (word[i] !== '(') { out.push(word[i]!); continue }
     const j = word.indexOf(')', i)
-    if (j < 0) throw new EngineInputError('wordAtoms', `unclosed trace in the word "${word}"`)
+    if (j < 0) throw new EngineConsistencyError('wordAtoms', `unclosed trace in the word "${word}"`)
     out.push(word.slice(i, j + 1))
     i = j
   }
@@ -127,7 +127,7 @@ export function traceElement(a: Element): Element {
   const out: Element = new Map()
   for (const [k, c] of a) {
     const { spin, word } = splitKey(k)
-    if (word === '' || word.includes('(')) throw new EngineInputError('traceElement', `cannot trace the word "${word}"`)
+    if (word === '' || word.includes('(')) throw new EngineConsistencyError('traceElement', `cannot trace the word "${word}"`)
     addTerm(out, termKey(spin, `(${word})`), c)
   }
   return out

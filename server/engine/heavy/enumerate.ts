@@ -227,8 +227,8 @@ export function enumerateHeavyTheory(
   theory: { frame: string; groups: HeavyInput['groups']; fields?: HeavyInput['fields']; heavy?: HeavyFrame },
   opts: HeavyOptions = {},
 ): HeavyEnumeration {
-  if (theory.frame !== 'heavy') throw new EngineInputError('enumerateHeavyTheory', `the theory has frame "${theory.frame}"; the heavy-particle engine needs frame "heavy"`)
-  if (!theory.heavy) throw new EngineInputError('enumerateHeavyTheory', 'frame "heavy" needs a "heavy" key (particle, gaugeGroup, maxOrder)')
+  if (theory.frame !== 'heavy') throw new EngineInputError('enumerateHeavyTheory', `This theory uses the ${theory.frame} frame; heavy-particle operators need the heavy-particle frame`)
+  if (!theory.heavy) throw new EngineInputError('enumerateHeavyTheory', 'A theory in the heavy-particle frame needs its heavy particle (the particle field, the gauge group it couples to and the highest power of 1/m); declare it in the editor')
   return enumerateHeavy({ heavy: theory.heavy, groups: theory.groups, fields: theory.fields }, opts)
 }
 

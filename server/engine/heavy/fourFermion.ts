@@ -64,7 +64,7 @@ function toOperator(order: number, i: number, combo: HeavyOperator['fourCombo'] 
  * Phys. Rev. D 51 (1995) 1125.
  */
 export function enumerateFourFermion(order: number, colorN: number, particle: string, anti: string, signal?: CancelFlag, timeReversal = true): FourFermionOrder {
-  if (order !== 2 && order !== 4) throw new EngineInputError('enumerateFourFermion', `order must be 2 or 4 (parity-even contact operators), got ${order}`)
+  if (order !== 2 && order !== 4) throw new EngineInputError('enumerateFourFermion', `Four-fermion contact operators (parity even) come at orders 2 and 4 in 1/m, not at order ${order}`)
   if (signal?.aborted) throw new EngineCancelledError('four-fermion enumeration')
   const space = fourFermionSpace(order, { colorN, timeReversal, signal })
   const rest = fourFermionSpace(order, { colorN, timeReversal, restFrame: true, signal })

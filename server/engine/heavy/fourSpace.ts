@@ -145,9 +145,9 @@ const cache = new Map<string, FourSpace>()
  * greedy basis in candidate order. Reference: Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125.
  */
 export function fourFermionSpace(order: number, opts: FourSpaceOptions = {}): FourSpace {
-  if (order !== 2 && order !== 4) throw new EngineInputError('fourFermionSpace', `four-fermion contact operators are enumerated at orders 2 and 4 in 1/m, got ${order}`)
+  if (order !== 2 && order !== 4) throw new EngineInputError('fourFermionSpace', `Four-fermion contact operators are enumerated at orders 2 and 4 in 1/m, not at order ${order}`)
   const n = opts.colorN ?? 1
-  if (!Number.isInteger(n) || n < 1 || n > 8) throw new EngineInputError('fourFermionSpace', `colour dimension must be an integer 1..8, got ${n}`)
+  if (!Number.isInteger(n) || n < 1 || n > 8) throw new EngineInputError('fourFermionSpace', `The number of colours must be a whole number from 1 to 8, not ${n}`)
   const key = JSON.stringify([order, n, opts.chargeConjugation ?? true, opts.timeReversal ?? true, !!opts.restFrame, opts.seed ?? 0, opts.extraPoints ?? 0])
   const hit = cache.get(key)
   if (hit) return hit

@@ -11,7 +11,7 @@
  * Groups", 1939). Coefficients are real; the physical operator is the structure itself
  * (no hidden factors of i).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import { contractions } from './candidates'
 
 export type Ordering = 'direct' | 'exchanged'
@@ -82,7 +82,7 @@ const SPIN_CHOICES: FourSlot[][] = [[], [{ kind: 's1' }, { kind: 's2' }], [{ kin
  */
 export function fourCandidates(nDeriv: number, colours: readonly Colour[]): FourStructure[] {
   if (!Number.isInteger(nDeriv) || nDeriv < 0 || nDeriv % 2 !== 0 || nDeriv > 4) {
-    throw new EngineInputError('fourCandidates', `the number of derivatives must be 0, 2 or 4 (parity even), got ${nDeriv}`)
+    throw new EngineConsistencyError('fourCandidates', `the number of derivatives must be 0, 2 or 4 (parity even), got ${nDeriv}`)
   }
   const out: FourStructure[] = []
   for (const ordering of ['exchanged', 'direct'] as const) {
@@ -114,15 +114,15 @@ export function parseFour(text: string): FourStructure {
     if (tok === 'ex') { ordering = 'exchanged'; continue }
     if (tok === 'oct') { colour = 'octet'; continue }
     const m = /^(s1|s2|d[0-3]|eps)_([a-z]+)$/.exec(tok)
-    if (!m) throw new EngineInputError('parseFour', `unknown token "${tok}" in "${text}"`)
+    if (!m) throw new EngineConsistencyError('parseFour', `unknown token "${tok}" in "${text}"`)
     if (m[1] === 'eps') {
-      if (m[2]!.length !== 3 || epsLabels) throw new EngineInputError('parseFour', `bad ε token "${tok}" in "${text}"`)
+      if (m[2]!.length !== 3 || epsLabels) throw new EngineConsistencyError('parseFour', `bad ε token "${tok}" in "${text}"`)
       epsLabels = m[2]!.split('')
       continue
     }
-    if (m[2]!.length !== 1) throw new EngineInputError('parseFour', `token "${tok}" needs one index in "${text}"`)
+    if (m[2]!.length !== 1) throw new EngineConsistencyError('parseFour', `token "${tok}" needs one index in "${text}"`)
     const k = m[1]!
-    if ((k === 's1' || k === 's2') && slots.some((x) => x.kind === k)) throw new EngineInputError('parseFour', `two σ in one bilinear ("${tok}") in "${text}"`)
+    if ((k === 's1' || k === 's2') && slots.some((x) => x.kind === k)) throw new EngineConsistencyError('parseFour', `two σ in one bilinear ("${tok}") in "${text}"`)
     slots.push(k === 's1' || k === 's2' ? { kind: k } : { kind: 'd', leg: Number(k[1]) })
     labels.push(m[2]!)
   }
@@ -138,11 +138,11 @@ function contractionOf(labels: string[], epsLabels: string[] | undefined, text: 
     if (prev === undefined) open.set(lab, slot)
     else { pairs.push([prev, slot]); open.delete(lab) }
   })
-  if (open.size > 0) throw new EngineInputError('parseFour', `index ${[...open.keys()].join(',')} is not contracted in "${text}"`)
+  if (open.size > 0) throw new EngineConsistencyError('parseFour', `index ${[...open.keys()].join(',')} is not contracted in "${text}"`)
   if (!epsLabels) return { pairs }
   const eps = epsLabels.map((lab) => {
     const at = labels.flatMap((l, i) => (l === lab ? [i] : []))
-    if (at.length !== 1) throw new EngineInputError('parseFour', `ε index ${lab} must appear once outside ε in "${text}"`)
+    if (at.length !== 1) throw new EngineConsistencyError('parseFour', `ε index ${lab} must appear once outside ε in "${text}"`)
     return at[0]!
   }) as [number, number, number]
   return { pairs, eps }

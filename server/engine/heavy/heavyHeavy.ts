@@ -68,7 +68,7 @@ function rankOf(combos: FourCombo[], colorN: number, restFrame: boolean, signal?
  * (2010) 034005 (2 and 7 operators for nucleons with isospin, centre-of-mass frame).
  */
 export function enumerateHeavyHeavy(order: number, colorN: number, particle: string, timeReversal: boolean, signal?: CancelFlag): HeavyHeavyOrder {
-  if (order !== 2 && order !== 4) throw new EngineInputError('enumerateHeavyHeavy', `order must be 2 or 4 (parity-even contact operators), got ${order}`)
+  if (order !== 2 && order !== 4) throw new EngineInputError('enumerateHeavyHeavy', `Heavy–heavy contact operators (parity even) come at orders 2 and 4 in 1/m, not at order ${order}`)
   const colours = colorN === 1 ? (['singlet'] as const) : (['singlet', 'octet'] as const)
   const cands = symmetricFourCandidates(order - 2, colours, { chargeConjugation: false, timeReversal })
     .filter((c) => c.combo.every((t) => t.s.ordering === 'direct'))

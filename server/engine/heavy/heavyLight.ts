@@ -4,7 +4,7 @@
  * rotation-scalar operators (P- and T-even when imposed) modulo integration by parts, the heavy
  * field's EOM and the light fields' massless EOM, from the rank of their contact vertices.
  */
-import { EngineCancelledError, EngineInputError } from '../errors'
+import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
 import type { CancelFlag } from '../finite'
 import { fieldTex } from './fieldTex'
 import { colourInvariantCount, lightContents, type HeavyQuantumNumbers, type LightContent } from './lightContent'
@@ -69,7 +69,7 @@ function candidates(content: LightContent, structures: LightStructure[], timeRev
   const seen = new Set<string>()
   for (const s of structures) {
     const d = daggerLight(s, perm, content)
-    if (!d) throw new EngineInputError('heavyLight', `no conjugate colour structure in content ${content.key}`)
+    if (!d) throw new EngineConsistencyError('heavyLight', `no conjugate colour structure in content ${content.key}`)
     for (const imaginary of [false, true]) {
       if (timeReversal && imaginary !== lightTimeSign(s) < 0) continue
       const raw = simplify([{ coef: 1, s }, { coef: imaginary ? -d.coef : d.coef, s: d.s }])
@@ -102,7 +102,7 @@ function checkColour(content: LightContent, input: HeavyLightInput, groupNs: num
   const combos = content.colours.map((_, colour) => [{ coef: 1, s: { ...base, colour } }])
   const got = contactRank(model(content, combos, groupNs, [[0, 1, ...content.legs.map((_, i) => i + 2)]]), { label: 'heavy–light colour' }).basis.length
   if (got !== expected) {
-    throw new EngineInputError('heavyLight', `light content ${content.key} has ${expected} colour invariants but only ${got} are built from δ and SU(2) ε; contents that need an ε of SU(N ≥ 3) are not supported`)
+    throw new EngineInputError('heavyLight', `The light fields ${content.key} form ${expected} colour invariants with the heavy pair, but only ${got} can be built from δ and the ε of SU(2); heavy–light operators that need an ε of SU(N ≥ 3) are not supported`)
   }
 }
 

@@ -81,7 +81,7 @@ function indexType(labels: readonly number[], n: number, what: string, group: st
   const one = labels.reduce((s, x) => s + x, 0) === 1
   if (one && labels[0] === 1) return 'up'
   if (one && labels[n - 2] === 1) return 'down'
-  throw new EngineInputError('heavyLight', `${what} is in [${labels.join(',')}] of ${group}; heavy–light operators support only singlets, fundamentals and antifundamentals`)
+  throw new EngineInputError('heavyLight', `${what.charAt(0).toUpperCase()}${what.slice(1)} sits in [${labels.join(',')}] of ${group}; heavy–light operators support only singlets, fundamentals and antifundamentals`)
 }
 
 function pairings(items: number[], types: Map<number, 'up' | 'down'>, n: number): ColourPair[][] {

@@ -110,7 +110,7 @@ export function defaultConfig(colorN: number, charged = true): SpaceConfig {
  */
 export function orderSpaceFor(order: number, config: SpaceConfig, signal?: CancelFlag): OrderSpace {
   if (!Number.isInteger(order) || order < 1 || order > 4) {
-    throw new EngineInputError('orderSpace', `order in 1/m must be an integer 1..4, got ${order}`)
+    throw new EngineInputError('orderSpace', `The power of 1/m must be a whole number from 1 to 4, not ${order}`)
   }
   const key = `${order}:${JSON.stringify(config)}`
   const hit = cache.get(key)

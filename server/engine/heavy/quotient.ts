@@ -117,10 +117,10 @@ export class QuotientSpace {
       this.addPrime()
       out = this.solve(target)
     }
-    if (out.status === 'outside-span') throw new EngineInputError('QuotientSpace.rewrite', 'the operator is not in the span of the enumerated operators modulo EOM and IBP')
+    if (out.status === 'outside-span') throw new EngineInputError('QuotientSpace.rewrite', 'This operator is not a combination of the enumerated operators (modulo equations of motion and integration by parts)')
     if (out.status === 'not-liftable') {
       const { each, product } = this.set.reach
-      throw new EngineInputError('QuotientSpace.rewrite', `the coefficient of basis operator ${out.index + 1} is not a rational with numerator and denominator up to ${each} and product up to ${product}; it cannot be given exactly`)
+      throw new EngineInputError('QuotientSpace.rewrite', `The coefficient of basis operator ${out.index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}); it cannot be given exactly`)
     }
     return out.coefficients
   }

@@ -6,7 +6,7 @@
  * "The Classical Groups", 1939). Slot 0 is the spin index when present, then the indexed
  * letters in order.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import { addScaled, fieldElement, letterElement, levi, multiply, termKey, traceElement, type Element } from './algebra'
 import type { GaugeSetup } from './symbol'
 
@@ -179,7 +179,7 @@ export function expandStructure(s: Structure, setup?: GaugeSetup): Element {
   const used = new Array<number>(n).fill(0)
   for (const [a, b] of s.pairs) { used[a]!++; used[b]!++ }
   if (s.eps) for (const a of s.eps) used[a]!++
-  if (used.some((u) => u !== 1)) throw new EngineInputError('expandStructure', `every index slot must be contracted once, got ${used.join(',')}`)
+  if (used.some((u) => u !== 1)) throw new EngineConsistencyError('expandStructure', `every index slot must be contracted once, got ${used.join(',')}`)
   const [t0, t1] = s.trace ?? [0, 0]
   let total: Element = new Map()
   for (const { values, weight } of assignments(s)) {
@@ -222,19 +222,19 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
     if (tok === 'tr[') { open = letters.length; continue }
     if (tok === ']') { trace = [open, letters.length]; continue }
     const m = /^(D|T|E\d*|B\d*|s|eps)(?:_([a-z]+))?$/.exec(tok)
-    if (!m) throw new EngineInputError('parseStructure', `unknown token "${tok}" in "${text}"`)
+    if (!m) throw new EngineConsistencyError('parseStructure', `unknown token "${tok}" in "${text}"`)
     const [, name, idx] = m
     if (name === 'eps') {
-      if (!idx || idx.length !== 3 || epsLabels) throw new EngineInputError('parseStructure', `bad ε token "${tok}" in "${text}"`)
+      if (!idx || idx.length !== 3 || epsLabels) throw new EngineConsistencyError('parseStructure', `bad ε token "${tok}" in "${text}"`)
       epsLabels = idx.split('')
     } else if (name === 's') {
-      if (spin || !idx || idx.length !== 1) throw new EngineInputError('parseStructure', `bad spin token "${tok}" in "${text}"`)
+      if (spin || !idx || idx.length !== 1) throw new EngineConsistencyError('parseStructure', `bad spin token "${tok}" in "${text}"`)
       spin = true
       slotLabels.unshift(idx)
     } else if (name === 'T') {
       letters.push('T')
     } else {
-      if (!idx || idx.length !== 1) throw new EngineInputError('parseStructure', `token "${tok}" needs one index in "${text}"`)
+      if (!idx || idx.length !== 1) throw new EngineConsistencyError('parseStructure', `token "${tok}" needs one index in "${text}"`)
       letters.push(name as Letter)
       slotLabels.push(idx)
     }
@@ -247,12 +247,12 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
     if (prev === undefined) seen.set(lab, slot)
     else { pairs.push([prev, slot]); seen.delete(lab) }
   })
-  if (seen.size > 0) throw new EngineInputError('parseStructure', `index ${[...seen.keys()].join(',')} is not contracted in "${text}"`)
+  if (seen.size > 0) throw new EngineConsistencyError('parseStructure', `index ${[...seen.keys()].join(',')} is not contracted in "${text}"`)
   let eps: [number, number, number] | undefined
   if (epsLabels) {
     eps = epsLabels.map((lab) => {
       const slots = slotLabels.map((l, i) => (l === lab ? i : -1)).filter((i) => i >= 0)
-      if (slots.length !== 1) throw new EngineInputError('parseStructure', `ε index ${lab} must appear once outside ε in "${text}"`)
+      if (slots.length !== 1) throw new EngineConsistencyError('parseStructure', `ε index ${lab} must appear once outside ε in "${text}"`)
       return slots[0]!
     }) as [number, number, number]
   }

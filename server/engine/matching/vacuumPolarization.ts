@@ -21,7 +21,7 @@ function factorial(n: number): bigint {
  */
 export function vacuumPolarizationSeries(order: number): Rational[] {
   if (!Number.isInteger(order) || order < 1 || order > 30) {
-    throw new EngineInputError('vacuumPolarizationSeries', `order must be an integer 1..30, got ${order}`)
+    throw new EngineInputError('vacuumPolarizationSeries', `The order of the vacuum-polarization series must be a whole number from 1 to 30, not ${order}`)
   }
   return Array.from({ length: order }, (_, i) => {
     const k = i + 1
@@ -38,7 +38,7 @@ export function vacuumPolarizationSeries(order: number): Rational[] {
  */
 export function vacuumPolarizationOneLoop(q2OverM2: number, alphaQ2: number): number {
   if (!Number.isFinite(q2OverM2) || q2OverM2 >= 4) {
-    throw new EngineInputError('vacuumPolarizationOneLoop', `q²/m² must be finite and below the threshold 4, got ${q2OverM2}`)
+    throw new EngineInputError('vacuumPolarizationOneLoop', `q²/m² must be a finite number below the pair threshold 4, but it is ${q2OverM2}`)
   }
   const f = (x: number) => x * (1 - x) * -Math.log1p(-x * (1 - x) * q2OverM2)
   const n = 2000

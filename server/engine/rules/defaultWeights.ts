@@ -91,7 +91,7 @@ export function resolveRule(rule: CountingRule, ctx?: RuleContext): ResolvedRule
   else weights = relativisticDefaults(rule, ctx)
   for (const [k, v] of Object.entries(rule.weights ?? {})) weights.set(k, parseRational(v))
   if (rule.kind === 'custom' && !rule.weights) {
-    throw new EngineInputError('resolveRule', `counting rule "${rule.name}" of kind "custom" has no weights`)
+    throw new EngineInputError('resolveRule', `Counting rule "${rule.name}" is of kind "custom" but gives no weights; give a weight to each building block`)
   }
   const offset = rule.offset !== undefined ? parseRational(rule.offset) : defaultOffset(rule, ctx)
   return { name: rule.name, kind: rule.kind, weights, offset }

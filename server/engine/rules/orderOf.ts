@@ -36,12 +36,12 @@ export function orderOf(blocks: BlockCounts, rule: CountingRule | ResolvedRule, 
   let total = rat(0)
   for (const [block, n] of Object.entries(blocks)) {
     if (!Number.isSafeInteger(n) || n < 0) {
-      throw new EngineInputError('orderOf', `block "${block}" has multiplicity ${n}; expected a non-negative integer`)
+      throw new EngineInputError('orderOf', `The building block "${block}" appears ${n} times; a count of building blocks is a whole number, 0 or more`)
     }
     if (n === 0) continue
     const w = r.weights.get(block)
     if (!w) {
-      throw new EngineInputError('orderOf', `rule "${r.name}" has no weight for building block "${block}"`)
+      throw new EngineInputError('orderOf', `Counting rule "${r.name}" gives no weight to the building block "${block}"; add a weight for it`)
     }
     total = add(total, mul(w, rat(n)))
   }
@@ -54,7 +54,7 @@ export function orderOf(blocks: BlockCounts, rule: CountingRule | ResolvedRule, 
  * Method: minimum over terms of orderOf. Reference: common practice.
  */
 export function orderOfOperator(op: RuleOperator, rule: CountingRule | ResolvedRule, ctx?: RuleContext): Rational {
-  if (op.terms.length === 0) throw new EngineInputError('orderOfOperator', `operator "${op.id}" has no terms`)
+  if (op.terms.length === 0) throw new EngineInputError('orderOfOperator', `Operator "${op.id}" has no terms, so it has no order`)
   const r = asResolved(rule, ctx)
   let best: Rational | undefined
   for (const t of op.terms) {

@@ -11,7 +11,7 @@ import { RUNNING_CAUTION } from './caution'
 const LEPTON_MASSES_GEV = [ELECTRON_MASS_MEV / 1000, MUON_MASS_MEV / 1000, TAU_MASS_MEV / 1000]
 
 function requirePositive(fn: string, name: string, x: number): void {
-  if (!Number.isFinite(x) || x <= 0) throw new EngineInputError(fn, `${name} must be a positive finite number, got ${x}`)
+  if (!Number.isFinite(x) || x <= 0) throw new EngineInputError(fn, `${name} must be a positive number, but it is ${x}`)
 }
 
 /**
@@ -22,8 +22,8 @@ function requirePositive(fn: string, name: string, x: number): void {
  * Reference: M. Steinhauser, Phys. Lett. B 429 (1998) 158 (its one-loop term).
  */
 export function leptonicShiftOneLoop(muGeV: number, alphaInverse0 = ALPHA_INVERSE, leptonMassesGeV: readonly number[] = LEPTON_MASSES_GEV): number {
-  requirePositive('leptonicShiftOneLoop', 'muGeV', muGeV)
-  requirePositive('leptonicShiftOneLoop', 'alphaInverse0', alphaInverse0)
+  requirePositive('leptonicShiftOneLoop', 'The scale μ (GeV)', muGeV)
+  requirePositive('leptonicShiftOneLoop', 'α(0)⁻¹', alphaInverse0)
   const sum = leptonMassesGeV.reduce((s, m) => s + 2 * Math.log(muGeV / m) - 5 / 3, 0)
   return sum / (3 * Math.PI * alphaInverse0)
 }
@@ -58,10 +58,10 @@ export function alphaQedAtZ(input: AlphaQedAtZInput): AlphaQedAtZResult {
   const mW = input.mW ?? W_MASS_GEV
   const inv0 = input.alphaInverse0 ?? ALPHA_INVERSE
   const had = input.deltaAlphaHad5
-  if (!Number.isFinite(had) || had < 0 || had > 0.1) throw new EngineInputError('alphaQedAtZ', `deltaAlphaHad5 must be a number in [0, 0.1], got ${had}`)
-  requirePositive('alphaQedAtZ', 'mZ', mZ)
-  requirePositive('alphaQedAtZ', 'mW', mW)
-  if (mW >= mZ) throw new EngineInputError('alphaQedAtZ', `mW (${mW}) must be below mZ (${mZ})`)
+  if (!Number.isFinite(had) || had < 0 || had > 0.1) throw new EngineInputError('alphaQedAtZ', `The hadronic shift Δα_had⁽⁵⁾(M_Z²) must be a number from 0 to 0.1, but it is ${had}`)
+  requirePositive('alphaQedAtZ', 'M_Z (GeV)', mZ)
+  requirePositive('alphaQedAtZ', 'M_W (GeV)', mW)
+  if (mW >= mZ) throw new EngineInputError('alphaQedAtZ', `M_W = ${mW} GeV must be below M_Z = ${mZ} GeV`)
   const lep = leptonicShiftOneLoop(mZ, inv0)
   const deltaAlpha = lep + had
   const conversion = (100 / 27 - 1 / 6 - (7 / 4) * Math.log((mZ * mZ) / (mW * mW))) / (Math.PI * inv0)

@@ -14,8 +14,15 @@ export interface OdeOptions {
   signal?: CancelSignal
   /** Called after every accepted step with (t, y). */
   onStep?: (t: number, y: number) => void
-  /** Throws when y leaves (0, yMax) (default: no bound). */
+  /** Throws OdeRangeError when y leaves (0, yMax) (default: no bound). */
   yMax?: number
+}
+
+/** The solution left (0, yMax) at t: the caller says what that means for its equation. */
+export class OdeRangeError extends EngineConsistencyError {
+  constructor(readonly t: number, readonly y: number) {
+    super('integrateOde', `solution left its range (y = ${y} at t = ${t})`)
+  }
 }
 
 function rk4Step(f: (y: number) => number, y: number, h: number): number {
@@ -51,7 +58,7 @@ export function integrateOde(f: (y: number) => number, y0: number, t0: number, t
     y = half + (half - full) / 15
     t += h
     if (!Number.isFinite(y) || (opts.yMax !== undefined && (y <= 0 || y >= opts.yMax))) {
-      throw new EngineConsistencyError('integrateOde', `solution left its range (y = ${y} at t = ${t})`)
+      throw new OdeRangeError(t, y)
     }
     opts.onStep?.(t, y)
     const grow = err < tol / 32 ? 2 : 1

@@ -18,7 +18,7 @@ const BETA_NF_POLYNOMIALS: readonly (readonly ZetaRational[])[] = [
 
 function assertFlavours(fn: string, nf: number): void {
   if (!Number.isInteger(nf) || nf < 0 || nf > 6) {
-    throw new EngineInputError(fn, `the number of active quark flavours must be an integer 0..6, got ${nf}`)
+    throw new EngineInputError(fn, `The number of active quark flavours must be a whole number from 0 to 6, not ${nf}`)
   }
 }
 

@@ -2,7 +2,7 @@
  * Decoupling of a heavy quark from α_s in MS-bar: α_s^(n_f−1)(μ) = ζ_g² α_s^(n_f)(μ), with
  * ζ_g² = 1 + c1(L) a + c2(L) a², a = α_s^(n_f)(μ)/π and L = ln(μ²/m_h²).
  */
-import { EngineConsistencyError, EngineInputError } from '../errors'
+import { EngineInputError } from '../errors'
 import { parseRational, type Rational } from '../exact/rational'
 import { rationalToNumber } from '../scales/decimal'
 
@@ -33,7 +33,7 @@ const COEFFS: Record<HeavyMassKind, DecouplingCoefficients> = {
  */
 export function decouplingCoefficients(kind: HeavyMassKind): DecouplingCoefficients {
   const c = COEFFS[kind]
-  if (!c) throw new EngineInputError('decouplingCoefficients', `unknown mass kind "${kind}" (use "msbar" or "pole")`)
+  if (!c) throw new EngineInputError('decouplingCoefficients', `A heavy-quark mass is an MS-bar mass ("msbar") or a pole mass ("pole"), not "${kind}"`)
   return c
 }
 
@@ -44,7 +44,7 @@ export function decouplingCoefficients(kind: HeavyMassKind): DecouplingCoefficie
  * Reference: Chetyrkin, Kniehl, Steinhauser, Nucl. Phys. B 510 (1998) 61.
  */
 export function decouplingFactor(aOverPi: number, logMu2OverM2: number, kind: HeavyMassKind, loops: DecouplingLoops): number {
-  if (loops !== 1 && loops !== 2) throw new EngineInputError('decouplingFactor', `decoupling loops must be 1 or 2, got ${loops}`)
+  if (loops !== 1 && loops !== 2) throw new EngineInputError('decouplingFactor', `The decoupling loops must be 1 or 2, not ${loops}`)
   const { c1, c2 } = decouplingCoefficients(kind)
   const L = logMu2OverM2
   const n = rationalToNumber
@@ -76,5 +76,6 @@ export function decoupleUp(alphaLow: number, logMu2OverM2: number, kind: HeavyMa
     if (Math.abs(next - x) <= 1e-16 * Math.abs(next)) return next
     x = next
   }
-  throw new EngineConsistencyError('decoupleUp', `no convergence inverting the decoupling relation at α_s = ${alphaLow}`)
+  // Only a large α_s keeps the iteration from contracting: a property of the input, not a bug.
+  throw new EngineInputError('decoupleUp', `α_s = ${alphaLow} at a heavy-quark threshold is too large to match across it (the matching is perturbative); choose a smaller α_s or start above the threshold`)
 }

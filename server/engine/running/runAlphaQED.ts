@@ -37,8 +37,8 @@ export function chargeWeight(f: QedFermion): Rational {
 
 function checkFermions(fs: readonly QedFermion[]): void {
   for (const f of fs) {
-    if (!Number.isFinite(f.mass) || f.mass <= 0) throw new EngineInputError('runAlphaQED', `fermion "${f.name}" mass must be positive, got ${f.mass}`)
-    if (f.colours !== 1 && f.colours !== 3) throw new EngineInputError('runAlphaQED', `fermion "${f.name}" colours must be 1 or 3, got ${f.colours}`)
+    if (!Number.isFinite(f.mass) || f.mass <= 0) throw new EngineInputError('runAlphaQED', `The mass of fermion "${f.name}" must be positive, but it is ${f.mass}`)
+    if (f.colours !== 1 && f.colours !== 3) throw new EngineInputError('runAlphaQED', `Fermion "${f.name}" must come in 1 or 3 colours, not ${f.colours}`)
   }
 }
 
@@ -53,8 +53,8 @@ function checkFermions(fs: readonly QedFermion[]): void {
 export function runAlphaQED(input: RunAlphaQEDInput): RunAlphaQEDResult {
   const inv0 = input.alphaInverse0 ?? ALPHA_INVERSE
   const fermions = [...(input.fermions ?? QED_FERMIONS)].sort((a, b) => a.mass - b.mass)
-  if (!Number.isFinite(input.muTo) || input.muTo <= 0) throw new EngineInputError('runAlphaQED', `muTo must be a positive number of GeV, got ${input.muTo}`)
-  if (!Number.isFinite(inv0) || inv0 <= 0) throw new EngineInputError('runAlphaQED', `alphaInverse0 must be positive, got ${inv0}`)
+  if (!Number.isFinite(input.muTo) || input.muTo <= 0) throw new EngineInputError('runAlphaQED', `The wanted scale μ must be a positive number of GeV, but it is ${input.muTo}`)
+  if (!Number.isFinite(inv0) || inv0 <= 0) throw new EngineInputError('runAlphaQED', `α(0)⁻¹ must be positive, but it is ${inv0}`)
   checkFermions(fermions)
   const inverseAt = (mu: number) => fermions.reduce((s, f) => (f.mass < mu ? s - (2 / (3 * Math.PI)) * rationalToNumber(chargeWeight(f)) * Math.log(mu / f.mass) : s), inv0)
   const active = (mu: number) => fermions.filter(f => f.mass < mu).length
@@ -70,7 +70,7 @@ export function runAlphaQED(input: RunAlphaQEDInput): RunAlphaQEDResult {
     }
   }
   const alphaInverse = inverseAt(input.muTo)
-  if (!(alphaInverse > 0)) throw new EngineInputError('runAlphaQED', `α^-1 turns negative below μ = ${input.muTo} GeV (Landau pole)`)
+  if (!(alphaInverse > 0)) throw new EngineInputError('runAlphaQED', `α⁻¹ turns negative on the way to μ = ${input.muTo} GeV (Landau pole); choose a lower scale`)
   return {
     alpha: 1 / alphaInverse, alphaInverse, muTo: input.muTo, trace,
     computed: ['one-loop leading-logarithm running of α with step-function thresholds'],

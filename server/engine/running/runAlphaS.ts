@@ -2,8 +2,8 @@
  * Running of the strong coupling α_s(μ) in MS-bar at one to four loops, with decoupling of
  * heavy quarks at their thresholds (down or up in μ). Scales in GeV.
  */
-import { EngineConsistencyError, EngineInputError } from '../errors'
-import { integrateOde, type CancelSignal } from './odeStepper'
+import { EngineInputError } from '../errors'
+import { integrateOde, OdeRangeError, type CancelSignal } from './odeStepper'
 import { qcdBeta } from './qcdBeta'
 import { decoupleDown, decoupleUp, type DecouplingLoops, type HeavyMassKind } from './qcdDecoupling'
 import { RUNNING_CAUTION } from './caution'
@@ -41,6 +41,16 @@ export interface RunAlphaSResult {
   caution: string
 }
 
+const GEV = (mu: number) => `${Number(mu.toPrecision(3))} GeV`
+
+/** What it means for the user that α_s left (0, 4π) at t = ln μ², running from muA to muB. */
+function leftRangeText(e: OdeRangeError, muA: number, muB: number, nf: number): string {
+  const at = GEV(Math.exp(e.t / 2))
+  const run = `running from μ = ${GEV(muA)} to ${GEV(muB)} with ${nf} active flavours`
+  if (muB < muA) return `α_s grows beyond the perturbative range below μ = ${at} (${run}, towards the Landau pole); choose a higher scale, or a smaller α_s`
+  return `α_s leaves the perturbative range above μ = ${at} (${run}); choose a lower scale, or a smaller α_s`
+}
+
 /** dα/d ln μ² = −α Σ_{i<loops} β_i (α/4π)^{i+1} for n_f flavours. */
 function alphaSFlow(nf: number, loops: number): (alpha: number) => number {
   const beta = qcdBeta(nf).slice(0, loops)
@@ -57,9 +67,7 @@ function runSegment(alpha: number, muA: number, muB: number, nf: number, loops: 
   try {
     return integrateOde(alphaSFlow(nf, loops), alpha, 2 * Math.log(muA), 2 * Math.log(muB), { signal, onStep, yMax: 4 * Math.PI, maxStep: 0.05 })
   } catch (e) {
-    if (e instanceof EngineConsistencyError) {
-      throw new EngineInputError('runAlphaS', `α_s leaves the perturbative range between μ = ${muA} and ${muB} GeV with n_f = ${nf} (Landau pole): ${e.message}`)
-    }
+    if (e instanceof OdeRangeError) throw new EngineInputError('runAlphaS', leftRangeText(e, muA, muB, nf))
     throw e
   }
 }

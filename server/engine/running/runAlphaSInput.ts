@@ -11,16 +11,16 @@ export interface ValidatedRun { nfFrom: number, down: boolean, crossed: QcdThres
 const fail = (msg: string): never => { throw new EngineInputError('runAlphaS', msg) }
 
 function positive(name: string, x: unknown): void {
-  if (typeof x !== 'number' || !Number.isFinite(x) || x <= 0) fail(`${name} must be a positive finite number, got ${x}`)
+  if (typeof x !== 'number' || !Number.isFinite(x) || x <= 0) fail(`${name} must be a positive number, but it is ${x}`)
 }
 
 function checkThresholds(ths: QcdThreshold[], light: number): void {
-  if (ths.length + light > 6) fail(`${light} light flavours plus ${ths.length} thresholds exceed 6 quark flavours`)
+  if (ths.length + light > 6) fail(`${light} light flavours plus ${ths.length} heavy quarks make more than 6 quark flavours; remove heavy quarks or lower the light flavours`)
   const names = new Set<string>()
   for (const t of ths) {
-    positive(`threshold "${t.name}" mass`, t.mass)
-    if (t.kind !== 'msbar' && t.kind !== 'pole') fail(`threshold "${t.name}" kind must be "msbar" or "pole", got "${t.kind}"`)
-    if (names.has(t.name)) fail(`duplicate threshold name "${t.name}"`)
+    positive(`The mass of heavy quark "${t.name}"`, t.mass)
+    if (t.kind !== 'msbar' && t.kind !== 'pole') fail(`The mass of heavy quark "${t.name}" must be an MS-bar mass ("msbar") or a pole mass ("pole"), not "${t.kind}"`)
+    if (names.has(t.name)) fail(`Two heavy quarks are named "${t.name}"; give each its own name`)
     names.add(t.name)
   }
 }
@@ -30,28 +30,28 @@ function startFlavours(input: RunAlphaSInput, ths: QcdThreshold[], light: number
   const onThreshold = ths.some(t => t.mass === input.muFrom)
   if (input.nfFrom === undefined) return nfStrict
   if (input.nfFrom === nfStrict || (onThreshold && input.nfFrom === nfStrict + 1)) return input.nfFrom
-  return fail(`nfFrom = ${input.nfFrom} does not match μ = ${input.muFrom} GeV and the thresholds (expected ${nfStrict})`)
+  return fail(`${input.nfFrom} active flavours at μ₀ = ${input.muFrom} GeV do not match the heavy quarks listed (they give ${nfStrict}); correct the number of flavours or the quark masses`)
 }
 
 /** Check the input and work out the crossed thresholds in running order. */
 export function validateRunAlphaS(input: RunAlphaSInput): ValidatedRun {
-  positive('alphaS', input.alphaS)
-  if (input.alphaS >= 4 * Math.PI) fail(`alphaS = ${input.alphaS} is not perturbative`)
-  positive('muFrom', input.muFrom)
-  positive('muTo', input.muTo)
-  if (![1, 2, 3, 4].includes(input.loops)) fail(`loops must be 1, 2, 3 or 4, got ${input.loops}`)
+  positive('α_s', input.alphaS)
+  if (input.alphaS >= 4 * Math.PI) fail(`α_s = ${input.alphaS} is not perturbative (it must stay below 4π); choose a smaller α_s`)
+  positive('The starting scale μ₀ (GeV)', input.muFrom)
+  positive('The wanted scale μ (GeV)', input.muTo)
+  if (![1, 2, 3, 4].includes(input.loops)) fail(`The loops in β must be 1, 2, 3 or 4, not ${input.loops}`)
   const decouplingLoops = input.decouplingLoops ?? (input.loops >= 3 ? 2 : 1)
-  if (decouplingLoops !== 1 && decouplingLoops !== 2) fail(`decouplingLoops must be 1 or 2, got ${input.decouplingLoops}`)
+  if (decouplingLoops !== 1 && decouplingLoops !== 2) fail(`The decoupling loops must be 1 or 2, not ${input.decouplingLoops}`)
   if ((input.thresholds ?? []).length === 0 && input.lightFlavours === undefined) {
-    fail('no thresholds listed: give lightFlavours, the fixed number of active flavours')
+    fail('No heavy quarks are listed: give the number of light flavours, which then stays fixed, or list the heavy quarks')
   }
   const light = input.lightFlavours ?? 3
-  if (!Number.isInteger(light) || light < 0 || light > 6) fail(`lightFlavours must be an integer 0..6, got ${light}`)
+  if (!Number.isInteger(light) || light < 0 || light > 6) fail(`The light flavours must be a whole number from 0 to 6, not ${light}`)
   const ths = [...(input.thresholds ?? [])]
   checkThresholds(ths, light)
   const sorted = ths.sort((a, b) => a.mass - b.mass)
   for (let i = 0; i + 1 < sorted.length; i++) {
-    if (sorted[i]!.mass === sorted[i + 1]!.mass) fail(`thresholds "${sorted[i]!.name}" and "${sorted[i + 1]!.name}" have the same mass`)
+    if (sorted[i]!.mass === sorted[i + 1]!.mass) fail(`Heavy quarks "${sorted[i]!.name}" and "${sorted[i + 1]!.name}" have the same mass; give them different masses`)
   }
   const nfFrom = startFlavours(input, sorted, light)
   const activeAtStart = (t: QcdThreshold) => sorted.indexOf(t) < nfFrom - light

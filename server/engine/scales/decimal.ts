@@ -16,7 +16,7 @@ const DECIMAL = /^\s*([+-]?)(\d+)(?:\.(\d*))?(?:[eE]([+-]?\d{1,4}))?\s*$/
  */
 export function parseDecimal(text: string): Rational {
   const m = DECIMAL.exec(text)
-  if (!m) throw new EngineInputError('parseDecimal', `not a decimal number: "${text}"`)
+  if (!m) throw new EngineInputError('parseDecimal', `"${text}" is not a decimal number; write it like 0.511 or 4.18e3`)
   const frac = m[3] ?? ''
   const digits = BigInt(`${m[2]}${frac}`)
   const exp = Number(m[4] ?? '0') - frac.length

@@ -34,14 +34,14 @@ function factorOf(f: number | string | undefined): ParameterValue {
  */
 export function derivedScale(d: DerivedScaleInput, scales: Map<string, ResolvedScale>, params: Map<string, ParameterValue>): DerivedScale {
   const base = scales.get(d.from)
-  if (!base) throw new EngineInputError('buildScaleLadder', `derived scale "${d.name}" refers to unknown scale "${d.from}"`)
+  if (!base) throw new EngineInputError('buildScaleLadder', `Derived scale "${d.name}" starts from "${d.from}", which is not a scale of the ladder; choose one of its scales`)
   const f = factorOf(d.factor)
-  if (!(f.value > 0)) throw new EngineInputError('buildScaleLadder', `derived scale "${d.name}" needs a positive factor, got ${d.factor}`)
+  if (!(f.value > 0)) throw new EngineInputError('buildScaleLadder', `Derived scale "${d.name}" needs a positive factor, but the factor is ${d.factor}`)
   let valueMeV = base.valueMeV * f.value
   let exact = base.kind === 'energy' && base.native && f.exact ? mul(base.native, f.exact) : undefined
   for (const [name, k] of Object.entries(d.powers)) {
     const p = params.get(name)
-    if (!p) throw new EngineInputError('buildScaleLadder', `derived scale "${d.name}" uses unknown parameter "${name}"`)
+    if (!p) throw new EngineInputError('buildScaleLadder', `Derived scale "${d.name}" uses the expansion parameter "${name}", which the ladder does not declare; add it or correct the name`)
     valueMeV *= p.value ** k
     exact = exact && p.exact ? mul(exact, powRational(p.exact, k)) : undefined
   }

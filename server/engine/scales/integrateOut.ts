@@ -20,12 +20,12 @@ export interface IntegrateOutResult {
 }
 
 function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[] {
-  if (names.length === 0) throw new EngineInputError('integrateOut', 'no field names given')
+  if (names.length === 0) throw new EngineInputError('integrateOut', 'Choose at least one heavy field to integrate out')
   const byName = new Map(theory.fields.map(f => [f.name, f]))
   return names.map((n) => {
     const f = byName.get(n)
-    if (!f) throw new EngineInputError('integrateOut', `theory "${theory.name}" has no field "${n}"`)
-    if (f.lorentz === 'F') throw new EngineInputError('integrateOut', `field "${n}" is a gauge field strength; only matter fields can be integrated out`)
+    if (!f) throw new EngineInputError('integrateOut', `Theory "${theory.name}" has no field "${n}"; choose fields of its roster`)
+    if (f.lorentz === 'F') throw new EngineInputError('integrateOut', `Field "${n}" is a gauge field strength; only matter fields can be integrated out`)
     return f
   })
 }
@@ -55,12 +55,12 @@ function childTheory(theory: Theory, removed: Set<string>, scaleText: string): T
  */
 export function integrateOut(theory: Theory, fieldNames: readonly string[], thresholdScale: ThresholdScale): IntegrateOutResult {
   if (theory.frame !== 'relativistic') {
-    throw new EngineInputError('integrateOut', `theory "${theory.name}" has frame "${theory.frame}"; integrating out is supported for relativistic theories`)
+    throw new EngineInputError('integrateOut', `Theory "${theory.name}" uses the ${theory.frame} frame; fields can be integrated out of relativistic theories only`)
   }
   const removed = removedFieldsOf(theory, fieldNames)
   const valueMeV = toMeV(thresholdScale.value, thresholdScale.unit)
   const names = new Set(removed.map(f => f.name))
-  if (names.size !== removed.length) throw new EngineInputError('integrateOut', `field names repeat: ${fieldNames.join(', ')}`)
+  if (names.size !== removed.length) throw new EngineInputError('integrateOut', `A field is named more than once (${fieldNames.join(', ')}); name each heavy field once`)
   const scaleText = `${thresholdScale.name ? `${thresholdScale.name} = ` : ''}${thresholdScale.value} ${thresholdScale.unit}`
   const byName = new Map(removed.map(f => [f.name, f]))
   const groupOf = new Map(theory.groups.map(g => [g.name, g]))

@@ -76,7 +76,7 @@ export function isChargedUnder(field: TheoryField, g: TheoryGroup): boolean {
 export function thresholdShifts(removedFields: readonly TheoryField[], groups: readonly TheoryGroup[]): ThresholdShift[] {
   for (const f of removedFields) {
     if (f.lorentz === 'F') {
-      throw new EngineInputError('thresholdShifts', `field "${f.name}" is a gauge field strength; only matter fields can be integrated out`)
+      throw new EngineInputError('thresholdShifts', `Field "${f.name}" is a gauge field strength; only matter fields can be integrated out`)
     }
   }
   const out: ThresholdShift[] = []

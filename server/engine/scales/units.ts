@@ -24,7 +24,7 @@ export function isLengthUnit(unit: string): unit is LengthUnit {
 
 export function assertScaleUnit(fn: string, unit: string): asserts unit is ScaleUnit {
   if (!(SCALE_UNITS as readonly string[]).includes(unit)) {
-    throw new EngineInputError(fn, `unknown unit "${unit}" (use one of ${SCALE_UNITS.join(', ')})`)
+    throw new EngineInputError(fn, `"${unit}" is not a unit Scalewright knows; use one of ${SCALE_UNITS.join(', ')}`)
   }
 }
 
@@ -37,7 +37,7 @@ export function assertScaleUnit(fn: string, unit: string): asserts unit is Scale
 export function toMeV(value: number, unit: string): number {
   assertScaleUnit('toMeV', unit)
   if (!Number.isFinite(value) || value <= 0) {
-    throw new EngineInputError('toMeV', `a scale must be a positive finite number, got ${value} ${unit}`)
+    throw new EngineInputError('toMeV', `A scale must be a positive number, but this one is ${value} ${unit}`)
   }
   const scaled = value * 10 ** UNIT_POWER_OF_TEN[unit]
   return isLengthUnit(unit) ? HBAR_C_MEV_FM / scaled : scaled
@@ -52,7 +52,7 @@ export function toMeV(value: number, unit: string): number {
 export function fromMeV(valueMeV: number, unit: string): number {
   assertScaleUnit('fromMeV', unit)
   if (!Number.isFinite(valueMeV) || valueMeV <= 0) {
-    throw new EngineInputError('fromMeV', `a scale must be a positive finite number, got ${valueMeV} MeV`)
+    throw new EngineInputError('fromMeV', `A scale must be a positive number, but this one is ${valueMeV} MeV`)
   }
   const p = 10 ** UNIT_POWER_OF_TEN[unit]
   return isLengthUnit(unit) ? HBAR_C_MEV_FM / valueMeV / p : valueMeV / p

@@ -56,10 +56,10 @@ const LORENTZ_DIM2: Record<LorentzType, number> = { S: 2, L: 3, R: 3, FL: 4, FR:
  */
 export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): TheoryModel {
   if (theory.frame !== 'relativistic') {
-    throw new EngineInputError('buildTheoryModel', `frame "${theory.frame}" is handled by the heavy-particle engine, not by relativistic counting`)
+    throw new EngineInputError('buildTheoryModel', `Theory "${theory.name}" uses the ${theory.frame} frame, which the Hilbert-series count does not cover; start a basis run instead`)
   }
   if (opts.nf !== undefined && (!Number.isInteger(opts.nf) || opts.nf < 1 || opts.nf > 6)) {
-    throw new EngineInputError('buildTheoryModel', `nf must be an integer from 1 to 6, got ${opts.nf}`)
+    throw new EngineInputError('buildTheoryModel', `The number of flavors must be a whole number from 1 to 6, not ${opts.nf}`)
   }
   const model: TheoryModel = { name: theory.name, su: [], u1: [], zn: [], species: [] }
   for (const g of theory.groups) {

@@ -35,7 +35,7 @@ describe('parity partners and the image of a class (conventions: parity.ts, pari
   })
   it('the leg map refuses a class that P does not map to itself, naming it', () => {
     const ps = theoryParticles(qed)
-    expect(() => parityLegMap(ps, parseClassKey(ps, 'eL eR* A_L'))).toThrow('parityLegMap: class eL eR* A_L is not mapped to itself by parity (leg eL)')
+    expect(() => parityLegMap(ps, parseClassKey(ps, 'eL eR* A_L'))).toThrow('Parity does not map the class eL eR* A_L to itself (eL has no partner)')
   })
 })
 

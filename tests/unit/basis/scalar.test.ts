@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { EngineCancelledError } from '../../../server/engine/errors'
 import { buildBasis, classBasis, rewriteOperator, BASIS_NOTE } from '../../../server/engine/basis/index'
 import { rat } from '../../../server/engine/exact/rational'
 
@@ -40,19 +41,19 @@ describe('one real scalar', () => {
   it('bad operator text is rejected with the fragment named', () => {
     const b = classBasis(phi, 'D^2 phi^4')
     expect(() => rewriteOperator(b, '<12>')).toThrow('gives leg 1 (phi) 1 angle and 0 square spinors')
-    expect(() => rewriteOperator(b, 's15')).toThrow('bad legs in "s15" (class has 4 legs)')
-    expect(() => rewriteOperator(b, 's12 s34')).toThrow('has 4 derivatives but class D^2 phi^4 has 2')
-    expect(() => rewriteOperator(b, 's12 ?')).toThrow('cannot read "?"')
-    expect(() => classBasis(phi, 'psi^4')).toThrow('unknown particle "psi" in class key "psi^4"')
-    expect(() => classBasis(phi, 'phi^2')).toThrow('a class needs at least 3 fields, got "phi^2"')
+    expect(() => rewriteOperator(b, 's15')).toThrow('The bracket "s15" in "s15" needs two different legs from 1 to 4 (the class has 4 fields)')
+    expect(() => rewriteOperator(b, 's12 s34')).toThrow('has 4 derivatives, but the class D^2 phi^4 has 2')
+    expect(() => rewriteOperator(b, 's12 ?')).toThrow('Cannot read "?"')
+    expect(() => classBasis(phi, 'psi^4')).toThrow('The class "psi^4" names "psi", which is not a field of this theory')
+    expect(() => classBasis(phi, 'phi^2')).toThrow('The class "phi^2" has fewer than 3 fields')
   })
   it('input errors for the theory: frame and unsupported representations', () => {
-    expect(() => classBasis({ ...phi, frame: 'heavy' as const }, 'phi^6')).toThrow('needs frame "relativistic", got "heavy"')
+    expect(() => classBasis({ ...phi, frame: 'heavy' as const }, 'phi^6')).toThrow('Explicit bases from contact amplitudes need the relativistic frame, but this theory uses the heavy frame')
     const bad = { name: 'x', frame: 'relativistic' as const, groups: [{ name: 'SU3', type: 'SU' as const, n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'S' as const, reps: { SU3: [2, 0] } }] }
-    expect(() => classBasis(bad, 'S6^3')).toThrow('field S6: representation [2,0] of SU3 = SU(3) is not supported')
-    expect(() => buildBasis(phi, { maxDim: 13 })).toThrow('maxDim must be an integer from 5 to 12, got 13')
+    expect(() => classBasis(bad, 'S6^3')).toThrow('Field S6 sits in the representation [2,0] of SU3 = SU(3); explicit bases support the fundamental, antifundamental, adjoint and singlet only')
+    expect(() => buildBasis(phi, { maxDim: 13 })).toThrow('The maximum dimension of an explicit basis must be a whole number from 5 to 12, not 13')
   })
   it('is cancellable', () => {
-    expect(() => buildBasis(phi, { maxDim: 6, signal: { aborted: true } })).toThrow('cancelled')
+    expect(() => buildBasis(phi, { maxDim: 6, signal: { aborted: true } })).toThrow(EngineCancelledError)
   })
 })

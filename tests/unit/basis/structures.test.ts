@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { EngineConsistencyError } from '../../../server/engine/errors'
 import { PrimeField, SeededRandom, workingPrimes } from '../../../server/engine/finite/index'
 import { randomKinematics } from '../../../server/engine/basis/kinematics'
 import { bracketGraphs, lorentzStructures } from '../../../server/engine/basis/lorentzStructures'
@@ -35,7 +36,7 @@ describe('spinor kinematics (Elvang & Huang, Scattering Amplitudes, CUP 2015, ch
     expect(a.angle[0]![1]).not.toBe(0)
     expect(s.angle[1]![2]).toBe(0)
     expect(s.square[1]![2]).not.toBe(0)
-    expect(() => randomKinematics(F, rng, 2)).toThrow('randomKinematics: need at least 3 legs, got 2')
+    expect(() => randomKinematics(F, rng, 2)).toThrow(new EngineConsistencyError('randomKinematics', 'need at least 3 legs, got 2'))
   })
 })
 
@@ -72,8 +73,8 @@ describe('structures (common practice)', () => {
     expect(formatLorentz(t!.lorentz, null)).toBe('<12>^2[12]^2')
     const [u] = parseOperatorText(c, 's12^2', 1)
     expect(u!.coeff).toEqual(rat(1)) // s² = (−⟨12⟩[12])²
-    expect(() => parseOperatorText(c, '', 1)).toThrow('empty operator text')
-    expect(() => parseOperatorText(c, 's12^2 {g:3}', 1)).toThrow('gauge contraction {g:3} does not exist (class has 1)')
+    expect(() => parseOperatorText(c, '', 1)).toThrow('The operator is empty')
+    expect(() => parseOperatorText(c, 's12^2 {g:3}', 1)).toThrow('The gauge contraction {g:3} in "s12^2 {g:3}" does not exist; this class has 1, numbered from {g:0}')
   })
 })
 

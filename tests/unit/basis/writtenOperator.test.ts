@@ -36,6 +36,6 @@ describe('operators as a basis writes them', () => {
   it('names the problem when a combination cannot be read or is not defined on the class', () => {
     expect(() => typedFingerprint(smeft, 'D L L* H^2 H*^2', '<13>[23]{g:2} + h.c.')).toThrow('write a combination as "(X) + h.c." or "(X) - P"')
     // H^2 H* L e* ... a class that is not its own conjugate has no "+ h.c." combination.
-    expect(() => typedFingerprint(smeft, 'L e* H', '(<12>) + h.c.')).toThrow(/not self-conjugate/)
+    expect(() => typedFingerprint(smeft, 'L e* H', '(<12>) + h.c.')).toThrow(/is not its own conjugate/)
   })
 })

@@ -2,6 +2,7 @@ import { describe, it, expect } from 'vitest'
 import { coverageRank, expressIn, type Fingerprint } from '../../../server/engine/board/fingerprints'
 import { PrimeField, workingPrimes } from '../../../server/engine/finite/primeField'
 import { toString as ratString } from '../../../server/engine/exact/rational'
+import { EngineConsistencyError, EngineInputError } from '../../../server/engine/errors'
 
 // Exact linear algebra checks on synthetic fingerprints (common practice: a vector built as a
 // known rational combination must be recovered exactly; an independent one must not be).
@@ -51,7 +52,7 @@ describe('coverage and rewrites from fingerprints', () => {
 
   it('refuses a coefficient beyond both primes\' reach instead of guessing', () => {
     const target = combo([{ v: a, num: 1, den: 1 }, { v: b, num: 2 ** 26 + 15, den: 1 }])
-    expect(() => expressIn([A, B], target)).toThrow('expressIn: the coefficient of kept operator 2 is not a rational with numerator and denominator up to 47453092 and product up to 82595384')
+    expect(() => expressIn([A, B], target)).toThrow(new EngineInputError('expressIn', 'The coefficient of kept operator 2 is not a fraction with numerator and denominator up to 47453092 (product up to 82595384), the most that the stored fingerprints determine; such a rewrite cannot be given exactly'))
   })
 
   it('says an independent operator is not a combination', () => {
@@ -65,6 +66,6 @@ describe('coverage and rewrites from fingerprints', () => {
 
   it('refuses fingerprints from different sample sets', () => {
     const short: Fingerprint = { primes, values: primes.map(() => [1, 2, 3]) }
-    expect(() => coverageRank([A, short])).toThrow('coverageRank: fingerprints of one class must share primes and sample points')
+    expect(() => coverageRank([A, short])).toThrow(new EngineConsistencyError('coverageRank', 'fingerprints of one class must share primes and sample points'))
   })
 })

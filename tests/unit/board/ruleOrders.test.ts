@@ -24,6 +24,6 @@ describe('orders of board operators under a counting rule', () => {
 
   it('offers the mass-ratio rule when the theory declares none, and names a missing rule', () => {
     expect(rulesOf({ fields: [] }).map((r) => r.name)).toEqual([DEFAULT_RULE.name])
-    expect(() => ruleOrders({ fields: [] }, 'nope', [])).toThrow('ruleOrders: the theory has no counting rule named "nope"')
+    expect(() => ruleOrders({ fields: [] }, 'nope', [])).toThrow('The theory has no counting rule named "nope"')
   })
 })

@@ -88,16 +88,16 @@ describe('flavor polynomials', () => {
 describe('input errors and run control', () => {
   const scalar = preset('real-scalar')
   it('rejects bad dimensions and flavor numbers with the bad value in the message', () => {
-    expect(() => countOperators(scalar, { maxDim: 4 })).toThrow(new EngineInputError('countOperators', 'maxDim must be an integer from 5 to 16, got 4'))
-    expect(() => countOperators(scalar, { maxDim: 17 })).toThrow(/got 17/)
-    expect(() => countOperators(scalar, { maxDim: 8, minDim: 3 })).toThrow('countOperators: minDim must be an integer from 5 to maxDim = 8, got 3')
-    expect(() => countOperators(scalar, { maxDim: 8, nf: 7 })).toThrow('buildTheoryModel: nf must be an integer from 1 to 6, got 7')
+    expect(() => countOperators(scalar, { maxDim: 4 })).toThrow(new EngineInputError('countOperators', 'The maximum dimension of a count must be a whole number from 5 to 16, not 4'))
+    expect(() => countOperators(scalar, { maxDim: 17 })).toThrow(/not 17/)
+    expect(() => countOperators(scalar, { maxDim: 8, minDim: 3 })).toThrow('The lowest dimension must be a whole number from 5 to the maximum dimension 8, not 3')
+    expect(() => countOperators(scalar, { maxDim: 8, nf: 7 })).toThrow('The number of flavors must be a whole number from 1 to 6, not 7')
   })
 
   it('refuses the heavy-particle frame (handled by another engine)', () => {
     const heavy = { ...scalar, frame: 'heavy' as const }
     expect(() => countOperators(heavy, { maxDim: 6 })).toThrow(EngineInputError)
-    expect(() => countOperators(heavy, { maxDim: 6 })).toThrow('frame "heavy"')
+    expect(() => countOperators(heavy, { maxDim: 6 })).toThrow('uses the heavy frame, which the Hilbert-series count does not cover')
   })
 
   it('reports progress up to 1 and stops when cancelled', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { EngineConsistencyError, EngineInputError } from '../../../server/engine/errors'
 import { PrimeField, isPrime, workingPrimes, SeededRandom, rref, rank, solve, reconstructRational, crt } from '../../../server/engine/finite/index'
 import { rat } from '../../../server/engine/exact/rational'
 
@@ -13,7 +14,7 @@ describe('prime field (Knuth, TAOCP vol. 2, ยง4.5.2)', () => {
     expect(F7.fromRational(rat(1, 2))).toBe(4)
   })
   it('rejects 0 inverse and composite or too large moduli with the bad value', () => {
-    expect(() => F7.inv(0)).toThrow('PrimeField.inv: 0 has no inverse mod 7')
+    expect(() => F7.inv(0)).toThrow(new EngineConsistencyError('PrimeField.inv', '0 has no inverse mod 7'))
     expect(() => new PrimeField(15)).toThrow('got 15')
     expect(() => new PrimeField(2 ** 31 - 1)).toThrow('got 2147483647')
   })
@@ -51,11 +52,11 @@ describe('linear algebra mod p (Golub & Van Loan, Matrix Computations, ยง3.2)', 
   })
   it('solves and reports inconsistency', () => {
     expect(solve(F, [[2, 0], [0, 3]], [4, 6])).toEqual([2, 2])
-    expect(() => solve(F, [[1, 1], [2, 2]], [1, 3])).toThrow('solve: inconsistent system')
+    expect(() => solve(F, [[1, 1], [2, 2]], [1, 3])).toThrow(expect.objectContaining({ where: 'solve', message: expect.stringMatching(/^inconsistent system/) }))
     expect(() => rref(F, [[1, 2], [3]])).toThrow('ragged matrix: row of length 1, expected 2')
   })
   it('honours cancellation', () => {
-    expect(() => rref(F, [[1]], { aborted: true })).toThrow('rref cancelled')
+    expect(() => rref(F, [[1]], { aborted: true })).toThrow(expect.objectContaining({ where: 'rref', name: 'EngineCancelledError' }))
   })
 })
 
@@ -69,7 +70,7 @@ describe('rational reconstruction (Wang, SYMSAC 1981; von zur Gathen & Gerhard ย
     }
   })
   it('fails loudly when the modulus is too small', () => {
-    expect(() => reconstructRational(3n, 7n)).toThrow('reconstructRational: no rational with bound 1 has image 3 mod 7')
+    expect(() => reconstructRational(3n, 7n)).toThrow(new EngineInputError('reconstructRational', 'no rational with bound 1 has image 3 mod 7'))
   })
   it('CRT combines two primes and reconstructs larger fractions', () => {
     expect(crt([2n, 3n], [3n, 5n])).toEqual({ residue: 8n, modulus: 15n })
@@ -78,6 +79,6 @@ describe('rational reconstruction (Wang, SYMSAC 1981; von zur Gathen & Gerhard ย
     const r = [p, q].map((m) => BigInt(new PrimeField(Number(m)).fromRational(x)))
     const { residue, modulus } = crt(r, [p, q])
     expect(reconstructRational(residue, modulus)).toEqual(x)
-    expect(() => crt([1n], [4n, 6n])).toThrow('crt: need equally many residues and moduli, got 1 and 2')
+    expect(() => crt([1n], [4n, 6n])).toThrow(new EngineConsistencyError('crt', 'need equally many residues and moduli, got 1 and 2'))
   })
 })

@@ -3,7 +3,7 @@ import {
   PrimeField, PrimeSet, SeededRandom, agreedEchelon, agreedRank, agreedValue, liftRational, liftReach, reconstructRationalOrNull,
   crt, solveOverQ, workingPrimes, type ModSystem,
 } from '../../../server/engine/finite/index'
-import { EngineConsistencyError, EngineInputError } from '../../../server/engine/errors'
+import { EngineConsistencyError } from '../../../server/engine/errors'
 import { rat, toString as ratString, type Rational } from '../../../server/engine/exact/rational'
 import { LIFT_CASES, caseName } from './liftCases'
 
@@ -113,7 +113,7 @@ describe('solving over Q (named cases as the middle unknown)', () => {
     const p1 = set.primes[0]!
     const systems = set.fields.map((F) => ({ a: [[1], [0]], b: [1, F.from(p1)] }))
     expect(() => solveOverQ(set.fields, systems, { fn: 'expressIn', about: 'class X' }))
-      .toThrow(`expressIn: class X: the primes disagree on the target being in the span (true mod ${p1}, false mod ${set.primes[1]})`)
+      .toThrow(new EngineConsistencyError('expressIn', `class X: the primes disagree on the target being in the span (true mod ${p1}, false mod ${set.primes[1]})`))
   })
 })
 
@@ -150,7 +150,7 @@ describe('the facade', () => {
     expect(set.lift(set.image(rat(-7001, 3)))).toEqual(rat(-7001, 3))
   })
   it('refuses an empty or repeated prime list with the bad value', () => {
-    expect(() => new PrimeSet([])).toThrow(EngineInputError)
+    expect(() => new PrimeSet([])).toThrow(EngineConsistencyError) // built by the engine, never from a user's input
     expect(() => new PrimeSet([7, 7])).toThrow('need one or more distinct primes, got [7, 7]')
   })
 })

@@ -87,14 +87,14 @@ describe('neutral heavy fermion and the antiparticle sector', () => {
 describe('bad input and cancellation', () => {
   it('a discrete gauge group is rejected with the group named', () => {
     expect(() => enumerateHeavy({ ...qedLike, groups: [{ name: 'X', type: 'Z', n: 2 }] })).toThrow(EngineInputError)
-    expect(() => enumerateHeavy({ ...qedLike, groups: [{ name: 'X', type: 'Z', n: 2 }] })).toThrow('enumerateHeavy: gauge group "X" has type Z; only U1 or SU(N) gauge groups are supported')
+    expect(() => enumerateHeavy({ ...qedLike, groups: [{ name: 'X', type: 'Z', n: 2 }] })).toThrow('The heavy particle couples to "X", a discrete Z_2 group; it needs a U(1) or SU(N) gauge group')
   })
   it('SU(N): only (anti)fundamental heavy particles', () => {
     const su3 = { heavy: { particle: { name: 'psi', reps: { C: [1, 1] } }, gaugeGroup: 'C', maxOrder: 3 }, groups: [{ name: 'C', type: 'SU', n: 3 }] }
-    expect(() => enumerateHeavy(su3)).toThrow('enumerateHeavy: the heavy particle must be a fundamental or antifundamental of SU(3), got [1,1]')
+    expect(() => enumerateHeavy(su3)).toThrow('The heavy particle must be a fundamental or an antifundamental of SU(3), but its Dynkin labels are [1,1]')
   })
   it('unknown gauge group', () => {
-    expect(() => enumerateHeavy({ ...qedLike, groups: [{ name: 'Y', type: 'U1' }] })).toThrow('enumerateHeavy: gauge group "X" is not among the theory\'s groups')
+    expect(() => enumerateHeavy({ ...qedLike, groups: [{ name: 'Y', type: 'U1' }] })).toThrow('The heavy particle couples to "X", which is not a symmetry of the theory')
   })
   it('aborted runs throw EngineCancelledError and progress is reported', () => {
     const seen: string[] = []

@@ -30,7 +30,7 @@ describe('whole-theory entry point', () => {
     expect(r.fourFermion).toHaveLength(2)
   })
   it('a relativistic theory is refused with the frame named', () => {
-    expect(() => enumerateHeavyTheory({ frame: 'relativistic', groups: [] })).toThrow('enumerateHeavyTheory: the theory has frame "relativistic"; the heavy-particle engine needs frame "heavy"')
-    expect(() => enumerateHeavyTheory({ frame: 'heavy', groups: [] })).toThrow('enumerateHeavyTheory: frame "heavy" needs a "heavy" key')
+    expect(() => enumerateHeavyTheory({ frame: 'relativistic', groups: [] })).toThrow('This theory uses the relativistic frame; heavy-particle operators need the heavy-particle frame')
+    expect(() => enumerateHeavyTheory({ frame: 'heavy', groups: [] })).toThrow('A theory in the heavy-particle frame needs its heavy particle')
   })
 })

@@ -5,7 +5,7 @@ import {
 import { conjugateFourCombo, daggerFourCombo, fourCandidates, type FourCombo } from '../../../server/engine/heavy/fourStructure'
 import { conjugatePoint, evalFourCombo, pointTables, randomFourPoint } from '../../../server/engine/heavy/fourVertex'
 import { PrimeField, SeededRandom, workingPrimes } from '../../../server/engine/finite'
-import { EngineCancelledError, EngineInputError } from '../../../server/engine/errors'
+import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../../../server/engine/errors'
 
 const BBL = 'Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125'
 const arrows = (text: string): FourCombo => fourCombo(expandArrows(text))
@@ -134,14 +134,14 @@ describe('four-fermion sector inside enumerateHeavy', () => {
 describe('bad input and cancellation', () => {
   it('orders other than 2 and 4 are refused with the value named', () => {
     expect(() => enumerateFourFermion(3, 1, 'psi', 'chi')).toThrow(EngineInputError)
-    expect(() => enumerateFourFermion(3, 1, 'psi', 'chi')).toThrow('enumerateFourFermion: order must be 2 or 4 (parity-even contact operators), got 3')
-    expect(() => fourFermionSpace(6)).toThrow('fourFermionSpace: four-fermion contact operators are enumerated at orders 2 and 4 in 1/m, got 6')
-    expect(() => fourFermionSpace(2, { colorN: 0 })).toThrow('fourFermionSpace: colour dimension must be an integer 1..8, got 0')
+    expect(() => enumerateFourFermion(3, 1, 'psi', 'chi')).toThrow('Four-fermion contact operators (parity even) come at orders 2 and 4 in 1/m, not at order 3')
+    expect(() => fourFermionSpace(6)).toThrow('Four-fermion contact operators are enumerated at orders 2 and 4 in 1/m, not at order 6')
+    expect(() => fourFermionSpace(2, { colorN: 0 })).toThrow('The number of colours must be a whole number from 1 to 8, not 0')
   })
   it('the structure parser names the bad token', () => {
-    expect(() => parseFour('ex q1_i')).toThrow('parseFour: unknown token "q1_i" in "ex q1_i"')
-    expect(() => parseFour('ex d1_i')).toThrow('parseFour: index i is not contracted in "ex d1_i"')
-    expect(() => parseFour('s1_i s1_i')).toThrow('parseFour: two σ in one bilinear ("s1_i") in "s1_i s1_i"')
+    expect(() => parseFour('ex q1_i')).toThrow(new EngineConsistencyError('parseFour', 'unknown token "q1_i" in "ex q1_i"'))
+    expect(() => parseFour('ex d1_i')).toThrow('index i is not contracted in "ex d1_i"')
+    expect(() => parseFour('s1_i s1_i')).toThrow('two σ in one bilinear ("s1_i") in "s1_i s1_i"')
   })
   it('an aborted run throws EngineCancelledError', () => {
     expect(() => enumerateFourFermion(4, 2, 'psi', 'chi', { aborted: true })).toThrow(EngineCancelledError)

@@ -3,7 +3,7 @@ import { combo, expandCombo, orderSpace, rewriteHeavy, CONVENTIONAL_OPERATORS } 
 import { thetaCombo, daggerCombo, isParityEven, parseStructure } from '../../../server/engine/heavy/structure'
 import { addScaled, elementSignature } from '../../../server/engine/heavy/algebra'
 import { div, rat, toString } from '../../../server/engine/exact/rational'
-import { EngineInputError } from '../../../server/engine/errors'
+import { EngineConsistencyError } from '../../../server/engine/errors'
 
 const el = (terms: Array<[number, string]>) => expandCombo(combo(terms))
 
@@ -33,7 +33,7 @@ describe('identities modulo the heavy-field EOM iD_tψ = 0 and IBP', () => {
     expect(s.isNull(el([[1, 'E_k E_k']]))).toBe(false)
   })
   it('an operator outside the sector cannot be rewritten', () => {
-    expect(() => rewriteHeavy(combo([[1, 'D_i D_i D_j D_j']]), 2)).toThrow('QuotientSpace.rewrite: the operator is not in the span')
+    expect(() => rewriteHeavy(combo([[1, 'D_i D_i D_j D_j']]), 2)).toThrow('This operator is not a combination of the enumerated operators')
   })
 })
 
@@ -55,11 +55,11 @@ describe('symmetries of the published operators (Manohar 1997: Hermitian, P- and
 
 describe('structure parser and order limits', () => {
   it('rejects unknown tokens and uncontracted indices', () => {
-    expect(() => parseStructure('D_i Q_i')).toThrow(EngineInputError)
-    expect(() => parseStructure('D_i Q_i')).toThrow('parseStructure: unknown token "Q_i" in "D_i Q_i"')
+    expect(() => parseStructure('D_i Q_i')).toThrow(EngineConsistencyError) // catalog text of the engine, never typed by a user
+    expect(() => parseStructure('D_i Q_i')).toThrow('unknown token "Q_i" in "D_i Q_i"')
     expect(() => parseStructure('D_i D_j')).toThrow('index i,j is not contracted')
   })
   it('orders outside 1..4 are rejected', () => {
-    expect(() => orderSpace(5, true)).toThrow('orderSpace: order in 1/m must be an integer 1..4, got 5')
+    expect(() => orderSpace(5, true)).toThrow('The power of 1/m must be a whole number from 1 to 4, not 5')
   })
 })

@@ -23,8 +23,8 @@ describe('vacuum polarization Π̂₂(q²) of a heavy Dirac fermion (Peskin & Sc
   })
 
   it('rejects q² above the pair threshold and bad orders', () => {
-    expect(() => vacuumPolarizationOneLoop(5, alpha)).toThrow('vacuumPolarizationOneLoop: q²/m² must be finite and below the threshold 4, got 5')
-    expect(() => vacuumPolarizationSeries(0)).toThrow('vacuumPolarizationSeries: order must be an integer 1..30, got 0')
+    expect(() => vacuumPolarizationOneLoop(5, alpha)).toThrow('q²/m² must be a finite number below the pair threshold 4, but it is 5')
+    expect(() => vacuumPolarizationSeries(0)).toThrow('The order of the vacuum-polarization series must be a whole number from 1 to 30, not 0')
   })
 })
 

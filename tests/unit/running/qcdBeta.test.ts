@@ -39,7 +39,7 @@ describe('QCD β coefficients, normalisation da/d ln μ² = −β0 a² − β1 a
   })
 
   it('rejects flavour numbers outside 0..6', () => {
-    expect(() => qcdBeta(7)).toThrow('qcdBeta: the number of active quark flavours must be an integer 0..6, got 7')
-    expect(() => qcdBetaExact(2.5)).toThrow('qcdBetaExact: the number of active quark flavours must be an integer 0..6, got 2.5')
+    expect(() => qcdBeta(7)).toThrow('The number of active quark flavours must be a whole number from 0 to 6, not 7')
+    expect(() => qcdBetaExact(2.5)).toThrow('The number of active quark flavours must be a whole number from 0 to 6, not 2.5')
   })
 })

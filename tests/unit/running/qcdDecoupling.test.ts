@@ -41,7 +41,7 @@ describe('heavy-quark decoupling of α_s (Chetyrkin, Kniehl, Steinhauser, Nucl. 
   })
 
   it('rejects bad loop numbers and mass kinds', () => {
-    expect(() => decouplingFactor(0.1, 0, 'msbar', 3 as never)).toThrow('decouplingFactor: decoupling loops must be 1 or 2, got 3')
-    expect(() => decouplingCoefficients('kinetic' as never)).toThrow('decouplingCoefficients: unknown mass kind "kinetic"')
+    expect(() => decouplingFactor(0.1, 0, 'msbar', 3 as never)).toThrow('The decoupling loops must be 1 or 2, not 3')
+    expect(() => decouplingCoefficients('kinetic' as never)).toThrow('A heavy-quark mass is an MS-bar mass ("msbar") or a pole mass ("pole"), not "kinetic"')
   })
 })

@@ -20,7 +20,7 @@ describe('leptonic shift Δα_lep(M_Z²) at one loop', () => {
   })
 
   it('rejects a non-positive scale', () => {
-    expect(() => leptonicShiftOneLoop(0)).toThrow('leptonicShiftOneLoop: muGeV must be a positive finite number, got 0')
+    expect(() => leptonicShiftOneLoop(0)).toThrow('The scale μ (GeV) must be a positive number, but it is 0')
   })
 })
 
@@ -49,8 +49,8 @@ describe('α(M_Z) with the hadronic shift Δα_had^(5) = 0.02766 as an input', (
   })
 
   it('rejects an impossible hadronic shift or W heavier than Z', () => {
-    expect(() => alphaQedAtZ({ deltaAlphaHad5: -1 })).toThrow('alphaQedAtZ: deltaAlphaHad5 must be a number in [0, 0.1], got -1')
-    expect(() => alphaQedAtZ({ deltaAlphaHad5: 0.0276, mW: 95 })).toThrow('alphaQedAtZ: mW (95) must be below mZ (91.188)')
+    expect(() => alphaQedAtZ({ deltaAlphaHad5: -1 })).toThrow('The hadronic shift Δα_had⁽⁵⁾(M_Z²) must be a number from 0 to 0.1, but it is -1')
+    expect(() => alphaQedAtZ({ deltaAlphaHad5: 0.0276, mW: 95 })).toThrow('M_W = 95 GeV must be below M_Z = 91.188 GeV')
   })
 })
 
@@ -86,8 +86,8 @@ describe('runAlphaQED: one loop with step-function thresholds', () => {
   })
 
   it('rejects bad input', () => {
-    expect(() => runAlphaQED({ muTo: -1 })).toThrow('runAlphaQED: muTo must be a positive number of GeV, got -1')
-    expect(() => runAlphaQED({ muTo: 1, fermions: [{ ...CHARGED_LEPTONS[0]!, colours: 2 as never }] })).toThrow('runAlphaQED: fermion "e" colours must be 1 or 3, got 2')
+    expect(() => runAlphaQED({ muTo: -1 })).toThrow('The wanted scale μ must be a positive number of GeV, but it is -1')
+    expect(() => runAlphaQED({ muTo: 1, fermions: [{ ...CHARGED_LEPTONS[0]!, colours: 2 as never }] })).toThrow('Fermion "e" must come in 1 or 3 colours, not 2')
   })
 })
 

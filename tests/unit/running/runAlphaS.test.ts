@@ -101,18 +101,18 @@ describe('runAlphaS: α_s(M_Z) = 0.1180 (PDG 2024) through the b and c threshold
 describe('runAlphaS: bad input, cancellation, progress', () => {
   const base = { alphaS: 0.118, muFrom: 91.1876, muTo: 2, loops: 4 as const, lightFlavours: 5 }
   it('names the bad value', () => {
-    expect(() => runAlphaS({ alphaS: 0.118, muFrom: 91.1876, muTo: 2, loops: 4 })).toThrow('runAlphaS: no thresholds listed: give lightFlavours, the fixed number of active flavours')
-    expect(() => runAlphaS({ ...base, loops: 5 as never })).toThrow('runAlphaS: loops must be 1, 2, 3 or 4, got 5')
-    expect(() => runAlphaS({ ...base, muTo: -1 })).toThrow('runAlphaS: muTo must be a positive finite number, got -1')
-    expect(() => runAlphaS({ ...base, thresholds: [{ name: 'b', mass: 0, kind: 'msbar' }] })).toThrow('runAlphaS: threshold "b" mass must be a positive finite number, got 0')
-    expect(() => runAlphaS({ ...base, thresholds: [{ name: 'b', mass: 4, kind: 'kinetic' as never }] })).toThrow('runAlphaS: threshold "b" kind must be "msbar" or "pole", got "kinetic"')
-    expect(() => runAlphaS({ ...base, lightFlavours: 3, nfFrom: 3, thresholds: BC })).toThrow('runAlphaS: nfFrom = 3 does not match μ = 91.1876 GeV and the thresholds (expected 5)')
-    expect(() => runAlphaS({ ...base, decouplingLoops: 3 as never })).toThrow('runAlphaS: decouplingLoops must be 1 or 2, got 3')
-    expect(() => runAlphaS({ ...base, thresholds: BC })).toThrow('runAlphaS: 5 light flavours plus 2 thresholds exceed 6 quark flavours')
+    expect(() => runAlphaS({ alphaS: 0.118, muFrom: 91.1876, muTo: 2, loops: 4 })).toThrow('No heavy quarks are listed: give the number of light flavours')
+    expect(() => runAlphaS({ ...base, loops: 5 as never })).toThrow('The loops in β must be 1, 2, 3 or 4, not 5')
+    expect(() => runAlphaS({ ...base, muTo: -1 })).toThrow('The wanted scale μ (GeV) must be a positive number, but it is -1')
+    expect(() => runAlphaS({ ...base, thresholds: [{ name: 'b', mass: 0, kind: 'msbar' }] })).toThrow('The mass of heavy quark "b" must be a positive number, but it is 0')
+    expect(() => runAlphaS({ ...base, thresholds: [{ name: 'b', mass: 4, kind: 'kinetic' as never }] })).toThrow('The mass of heavy quark "b" must be an MS-bar mass ("msbar") or a pole mass ("pole"), not "kinetic"')
+    expect(() => runAlphaS({ ...base, lightFlavours: 3, nfFrom: 3, thresholds: BC })).toThrow('3 active flavours at μ₀ = 91.1876 GeV do not match the heavy quarks listed (they give 5)')
+    expect(() => runAlphaS({ ...base, decouplingLoops: 3 as never })).toThrow('The decoupling loops must be 1 or 2, not 3')
+    expect(() => runAlphaS({ ...base, thresholds: BC })).toThrow('5 light flavours plus 2 heavy quarks make more than 6 quark flavours')
   })
 
   it('reports a Landau pole instead of returning a number', () => {
-    expect(() => runAlphaS({ alphaS: 0.5, muFrom: 1, muTo: 0.1, loops: 1, lightFlavours: 3 })).toThrow(/runAlphaS: α_s leaves the perturbative range between μ = 1 and 0.1 GeV with n_f = 3 \(Landau pole\)/)
+    expect(() => runAlphaS({ alphaS: 0.5, muFrom: 1, muTo: 0.1, loops: 1, lightFlavours: 3 })).toThrow(/^α_s grows beyond the perturbative range below μ = 0\.\d+ GeV \(running from μ = 1 GeV to 0\.1 GeV with 3 active flavours, towards the Landau pole\); choose a higher scale/)
   })
 
   it('starts on a threshold with nfFrom choosing the side', () => {

@@ -17,6 +17,6 @@ describe('parseDecimal / rationalToNumber (common practice: positional decimal n
   })
 
   it('rejects text that is not a decimal number', () => {
-    expect(() => parseDecimal('1,5')).toThrow('parseDecimal: not a decimal number: "1,5"')
+    expect(() => parseDecimal('1,5')).toThrow('"1,5" is not a decimal number')
   })
 })

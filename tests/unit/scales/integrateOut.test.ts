@@ -67,7 +67,7 @@ describe('thresholdShifts', () => {
 
   it('rejects a field strength', () => {
     expect(() => thresholdShifts(theory.fields.filter(f => f.name === 'G'), theory.groups))
-      .toThrow('thresholdShifts: field "G" is a gauge field strength; only matter fields can be integrated out')
+      .toThrow('Field "G" is a gauge field strength; only matter fields can be integrated out')
   })
 })
 
@@ -100,10 +100,10 @@ describe('integrateOut', () => {
   })
 
   it('rejects unknown fields, field strengths, repeats and empty lists', () => {
-    expect(() => integrateOut(theory, ['X'], { value: 1, unit: 'TeV' })).toThrow('integrateOut: theory "SM plus T and S" has no field "X"')
-    expect(() => integrateOut(theory, ['W'], { value: 1, unit: 'TeV' })).toThrow('integrateOut: field "W" is a gauge field strength')
-    expect(() => integrateOut(theory, ['S', 'S'], { value: 1, unit: 'TeV' })).toThrow('integrateOut: field names repeat: S, S')
-    expect(() => integrateOut(theory, [], { value: 1, unit: 'TeV' })).toThrow('integrateOut: no field names given')
-    expect(() => integrateOut(theory, ['S'], { value: 1, unit: 'parsec' })).toThrow('toMeV: unknown unit "parsec"')
+    expect(() => integrateOut(theory, ['X'], { value: 1, unit: 'TeV' })).toThrow('Theory "SM plus T and S" has no field "X"')
+    expect(() => integrateOut(theory, ['W'], { value: 1, unit: 'TeV' })).toThrow('Field "W" is a gauge field strength')
+    expect(() => integrateOut(theory, ['S', 'S'], { value: 1, unit: 'TeV' })).toThrow('A field is named more than once (S, S)')
+    expect(() => integrateOut(theory, [], { value: 1, unit: 'TeV' })).toThrow('Choose at least one heavy field to integrate out')
+    expect(() => integrateOut(theory, ['S'], { value: 1, unit: 'parsec' })).toThrow('"parsec" is not a unit Scalewright knows')
   })
 })

@@ -27,8 +27,8 @@ describe('toMeV / fromMeV', () => {
   })
 
   it('rejects unknown units and non-positive values with the bad value in the message', () => {
-    expect(() => toMeV(1, 'kg')).toThrow('toMeV: unknown unit "kg"')
-    expect(() => toMeV(-2, 'MeV')).toThrow('toMeV: a scale must be a positive finite number, got -2 MeV')
-    expect(() => fromMeV(0, 'GeV')).toThrow('fromMeV: a scale must be a positive finite number, got 0 MeV')
+    expect(() => toMeV(1, 'kg')).toThrow('"kg" is not a unit Scalewright knows')
+    expect(() => toMeV(-2, 'MeV')).toThrow('A scale must be a positive number, but this one is -2 MeV')
+    expect(() => fromMeV(0, 'GeV')).toThrow('A scale must be a positive number, but this one is 0 MeV')
   })
 })

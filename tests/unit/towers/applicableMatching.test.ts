@@ -47,6 +47,6 @@ describe('orders below a precision target, for a basis', () => {
     expect(r.map((o) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[1, '1/100', false], [2, '1/1000', false], [3, '1/1000000', true]])
   })
   it('an order under an unknown parameter is refused with the engine message', () => {
-    expect(() => ordersBelowTarget({ ...doc, orders: [{ order: 2, powers: { lambda: 1 } }] }, [2], 1e-3)).toThrow('buildScaleLadder: order {"order":2,"powers":{"lambda":1}} uses unknown parameter "lambda"')
+    expect(() => ordersBelowTarget({ ...doc, orders: [{ order: 2, powers: { lambda: 1 } }] }, [2], 1e-3)).toThrow('Order 2 uses the expansion parameter "lambda", which the ladder does not declare; add it or correct the name')
   })
 })
