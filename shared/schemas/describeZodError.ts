@@ -67,7 +67,13 @@ export function describeZodError(error: ZodError, root?: unknown, whole?: string
   return error.issues.map((issue) => describeIssue(issue, root, whole)).join('; ')
 }
 
-/** A message shown next to its own input: the place is already on screen, so only the message. */
+/**
+ * A message shown next to its own input: the place is already on screen, so only the message,
+ * as a sentence ("is required" → "This is required", "must be …" → "Must be …").
+ */
 export function inputMessage(message: string): string {
-  return capitalised(message.trim())
+  const m = message.trim()
+  if (/^(is|has)\b/.test(m)) return `This ${m}`
+  if (/^(are|have)\b/.test(m)) return `These ${m}`
+  return capitalised(m)
 }

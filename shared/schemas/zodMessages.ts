@@ -16,7 +16,8 @@ const KINDS: Record<string, string> = {
 
 const quoted = (v: unknown) => (typeof v === 'string' ? `"${v}"` : String(v))
 const kindOf = (expected: unknown) => KINDS[String(expected)] ?? 'a value of another kind'
-const missing = (input: unknown) => input === undefined || input === null
+// JSON has no NaN: a number input left empty or unreadable arrives as null, so null is "of the wrong kind".
+const missing = (input: unknown) => input === undefined
 
 function tooSmall(iss: Extract<Issue, { code: 'too_small' }>): string {
   const min = Number(iss.minimum)
@@ -60,11 +61,20 @@ export function defaultMessage(iss: Issue): string {
       return `has ${one ? 'an unknown key' : 'unknown keys'} ${iss.keys.map(quoted).join(', ')}; check the spelling or remove ${one ? 'it' : 'them'}`
     }
     case 'invalid_union': return union(iss)
-    case 'invalid_key': return `has the key ${quoted(iss.input)}, which is not allowed (${nestedMessage(iss.issues)})`
+    // The key is already named by the place (e.g. 'representation under 1bad').
+    case 'invalid_key': return `is not allowed here (${nestedMessage(iss.issues)})`
     case 'invalid_element': return `has an entry that is not allowed (${nestedMessage(iss.issues)})`
     case 'invalid_value': return iss.values.length === 1 ? `must be ${quoted(iss.values[0])}` : `must be one of ${iss.values.map(quoted).join(', ')}`
     default: return 'is not valid'
   }
 }
 
-z.config({ customError: (iss) => defaultMessage(iss) })
+/**
+ * Install the map for every schema (idempotent). Importing this file installs it; the server
+ * bundle drops imports made for their side effects only, so a server plugin calls it too.
+ */
+export function installZodMessages(): void {
+  z.config({ customError: (iss) => defaultMessage(iss) })
+}
+
+installZodMessages()

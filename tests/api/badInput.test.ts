@@ -1,12 +1,22 @@
 import { describe, it, expect, beforeAll } from 'vitest'
-import { mutatingRoutes } from '../support/routes'
+import { listRoutes, mutatingRoutes } from '../support/routes'
 import { ROUTE_CASES } from '../support/routeCases'
 import { buildWorld, type World, type Actor } from '../support/fixtures'
 import { rowCounts } from '../support/db'
-import { messageOf } from '../support/client'
+import { messageOf, type Reply } from '../support/client'
+import { forbiddenIn } from '../support/forbiddenMessages'
+import { KEY_WORDS } from '../../shared/schemas/fieldWords'
 
 // Bad input on every mutating route that takes a body: malformed JSON, wrong types, missing
-// fields and oversized bodies all get a clear 4xx, and no table changes.
+// fields and oversized bodies all get a clear 4xx, and no table changes. Every 4xx message is
+// checked against the forbidden list (no code names, zod texts, internal keys, …).
+
+/** A 4xx reply whose message a user may read. */
+function expectReadable4xx(res: Reply, what: string) {
+  expect(res.status, `${what}: ${JSON.stringify(res.body)}`).toBeGreaterThanOrEqual(400)
+  expect(res.status, `${what}: ${JSON.stringify(res.body)}`).toBeLessThan(500)
+  expect(forbiddenIn(messageOf(res)), `${what}: ${messageOf(res)}`).toEqual([])
+}
 let world: World
 
 function actorFor(route: string): Actor {
@@ -38,6 +48,7 @@ describe.each(withBody)('%s', (route) => {
     const before = await rowCounts()
     const res = await actor.client.request(method, req.path, variant.body, { raw: variant.raw })
     expect(await rowCounts(), 'a rejected request wrote rows').toEqual(before)
+    expectReadable4xx(res, route)
     return res
   }
 
@@ -56,17 +67,32 @@ describe.each(withBody)('%s', (route) => {
       expect(messageOf(res)).toMatch(/\w+/)
     })
   }
-  it('each field with a wrong type → 400 naming it', async () => {
+  it('each field with a wrong type → 400 naming it in the user\'s words', async () => {
     const actor = actorFor(route)
     const keys = Object.keys(((await ROUTE_CASES[route]!.prepare(world, actor)).body ?? {}) as object)
     for (const key of keys) {
       const res = await send((b) => ({ body: { ...b, [key]: wrongTyped(b[key]) } }))
       expect(res.status, `${key}: ${JSON.stringify(res.body)}`).toBe(400)
-      expect(messageOf(res), `message names ${key}`).toContain(key)
+      expect(KEY_WORDS[key], `shared/schemas/fieldWords.ts has words for "${key}"`).toBeDefined()
+      expect(messageOf(res).toLowerCase(), `message names ${key}`).toContain(KEY_WORDS[key]!.toLowerCase())
     }
   })
-  it('unknown extra fields → 400', async () => {
-    expect((await send((b) => ({ body: { ...b, sneaky: true } }))).status).toBe(400)
+  it('each field missing, or null → 400 with a readable message', async () => {
+    const actor = actorFor(route)
+    const keys = Object.keys(((await ROUTE_CASES[route]!.prepare(world, actor)).body ?? {}) as object)
+    for (const key of keys) {
+      await send((b) => ({ body: { ...b, [key]: null } }))
+      // Without the key an optional field may succeed; a refusal must still be readable.
+      const req = await ROUTE_CASES[route]!.prepare(world, actor)
+      const { [key]: _dropped, ...rest } = req.body as Record<string, unknown>
+      const res = await actor.client.request(method, req.path, rest)
+      if (res.status >= 400) expectReadable4xx(res, `${route} without ${key}`)
+    }
+  })
+  it('unknown extra fields → 400 naming the key', async () => {
+    const res = await send((b) => ({ body: { ...b, sneaky: true } }))
+    expect(res.status).toBe(400)
+    expect(messageOf(res)).toContain('"sneaky"')
   })
   it('an oversized body → 413', async () => {
     const limit = ROUTE_CASES[route]!.maxBodyBytes ?? 512 * 1024
@@ -94,5 +120,20 @@ describe('theory files', () => {
     const stale = await world.owner.client.patch(`/api/theories/${world.theoryId}`, { definition: def, version: v })
     expect(stale.status).toBe(409)
     expect(messageOf(stale)).toContain(`now version ${v + 1}`)
+  })
+})
+
+// Every route, with addresses that name nothing (a word where a number belongs, a zero):
+// a readable 4xx, never a 500, for the signed-out, a stranger and an owner.
+describe('every route with a bad address', () => {
+  const addresses = (pattern: string) => ['not-a-number', '0'].map((v) => pattern.replace(/\[[^\]]+\]/g, v))
+  it.each(listRoutes().filter((r) => r.includes('[')))('%s', async (route) => {
+    const [method, pattern] = route.split(' ') as [string, string]
+    for (const path of addresses(pattern)) {
+      for (const client of [world.anonymous, world.stranger.client, world.owner.client]) {
+        const res = await client.request(method, path, method === 'GET' || method === 'DELETE' ? undefined : {})
+        expectReadable4xx(res, `${method} ${path}`)
+      }
+    }
   })
 })

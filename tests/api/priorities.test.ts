@@ -41,7 +41,7 @@ describe('priorities steer the choice, never the count (common practice: a basis
   it('keeping what another basis keeps is checked against the theory', async () => {
     const res = await world.editorClient().post(`/api/theories/${theoryId}/runs`, { kind: 'basis', maxDim: 6, priorities: { keepFromBasis: 999999 } })
     expect(res.status).toBe(404)
-    expect(messageOf(res)).toBe('priorities.keepFromBasis: no basis 999999 of this theory')
+    expect(messageOf(res)).toBe('This theory has no basis 999999 to keep operators from; choose one of its own bases')
     const plain = await basisOfRun({ kind: 'basis', maxDim: 6 })
     const again = await basisOfRun({ kind: 'basis', maxDim: 6, priorities: { keepFromBasis: plain.basis.id } })
     expect(keptText(again, 'phi phi* A_L^2')).toEqual(keptText(plain, 'phi phi* A_L^2'))

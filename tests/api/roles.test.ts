@@ -5,6 +5,7 @@ import { buildWorld, type World, type Actor } from '../support/fixtures'
 import { rowCounts } from '../support/db'
 import { messageOf, type ApiClient } from '../support/client'
 import { GROUP_ROLES, roleAtLeast } from '../../shared/types/roles'
+import { forbiddenIn } from '../support/forbiddenMessages'
 
 // Role enforcement on every mutating route, listed from the server/api folder (no sampling):
 // signed out → 401, stranger → 403, every group role below the floor → 403 with nothing
@@ -25,6 +26,7 @@ async function expectDenied(route: string, client: ApiClient, actor: Actor, stat
   const res = await client.request(method, req.path, req.body)
   expect(res.status, `${route} as ${actor.email}: ${JSON.stringify(res.body)}`).toBe(status)
   expect(messageOf(res).length, 'a denied request says why').toBeGreaterThan(5)
+  expect(forbiddenIn(messageOf(res)), messageOf(res)).toEqual([])
   expect(await rowCounts(), `${route} wrote rows while denied`).toEqual(before)
 }
 

@@ -1,8 +1,10 @@
-import { describe, it, expect, beforeAll } from 'vitest'
+import { describe, it, expect, beforeAll, vi } from 'vitest'
 import { buildWorld, type World } from '../support/fixtures'
 import { testDb } from '../support/db'
 import { messageOf } from '../support/client'
 import { findPreset } from '../../shared/presets/index'
+import { SMALL_THEORY } from '../support/fixtures'
+import { executeRun } from '../../server/worker/executeRun'
 
 let world: World
 beforeAll(async () => { world = await buildWorld() })
@@ -61,7 +63,26 @@ describe('background runs through the PostgreSQL queue', () => {
     const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 6 })
     const { run } = await waitFor(start.body.run.id, (r) => ['done', 'failed'].includes(r.status))
     expect(run.status).toBe('failed')
-    expect(run.error).toMatch(/^parseTheory: /)
+    expect(run.error).toMatch(/^Field 1 "x", Lorentz kind must be one of /)
+  })
+
+  it('an unexpected failure inside the engine fails the run with a reference to quote, and logs it', async () => {
+    // A frozen run the routes would never write (priorities.derivativesOn is not a list): a
+    // TypeError inside the engine thread. Carried out here, without the queue.
+    const params = { maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1, priorities: { derivativesOn: 7 } }
+    const [row] = await testDb()('runs').insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params) }).returning('id')
+    const log = vi.spyOn(console, 'error').mockImplementation(() => {})
+    try {
+      // Rethrown, so that the queue retries once; it keeps the name and stack the thread saw.
+      await expect(executeRun(testDb(), row.id)).rejects.toMatchObject({ name: 'TypeError', message: expect.stringMatching(/not iterable/) })
+      const { run } = await waitFor(row.id, (r) => r.status === 'failed')
+      const ref = /^Internal error \(ref ([0-9A-Z]{6})\); it has been logged\.$/.exec(run.error)?.[1]
+      expect(ref, run.error).toBeDefined()
+      expect(String(log.mock.calls[0]![0])).toContain(`internal error ref ${ref} during run ${row.id}`)
+      expect(log.mock.calls[0]![1]).toMatchObject({ name: 'TypeError' })
+    } finally {
+      log.mockRestore()
+    }
   })
 })
 

@@ -54,7 +54,7 @@ describe('POST /api/theory-check', () => {
     const before = await rowCounts()
     const res = await client.post('/api/theory-check', { theory })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toBe('theory: fields[5].charges.Y ("H"): a charge is a rational written "p/q" or an integer, e.g. "1/6"')
+    expect(messageOf(res)).toBe('Field 6 "H", charge under Y: a charge is a rational written "p/q" or an integer, e.g. "1/6"')
     expect(await rowCounts()).toEqual(before)
   })
 
@@ -63,13 +63,13 @@ describe('POST /api/theory-check', () => {
     theory.fields.push({ name: 'Z', lorentz: 'F', gaugeOf: 'Y' })
     const res = await client.post('/api/theory-check', { theory })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toBe('theory: fields[9] "Z": Y already has a field strength')
+    expect(messageOf(res)).toBe('Field 10 "Z", gauge group of the field strength: Y already has a field strength')
   })
 
   it('a missing theory is refused with 400 naming it', async () => {
     const res = await client.post('/api/theory-check', {})
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toMatch(/^theory: /)
+    expect(messageOf(res)).toBe('Theory is required: a theory file (a JSON object)')
   })
 
   it('needs an account', async () => {

@@ -38,7 +38,7 @@ describe('group management in a real browser', () => {
     const invitee = uniqueEmail('invitee-e2e')
     await owner.getByLabel('E-mail to invite').fill('not an address')
     await owner.getByRole('button', { name: 'Send invitation' }).click()
-    await expect.poll(() => owner.getByText('email: enter a valid e-mail address').count()).toBe(1)
+    await expect.poll(() => owner.getByText('Enter a valid e-mail address', { exact: true }).count()).toBe(1)
     await owner.getByLabel('E-mail to invite').fill(invitee)
     await owner.locator('#invite-role').selectOption('editor')
     await owner.getByRole('button', { name: 'Send invitation' }).click()

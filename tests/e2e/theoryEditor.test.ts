@@ -70,7 +70,7 @@ describe('the theory editor in a real browser', () => {
 
     // A bad charge: the schema's message appears next to that input.
     await page.getByLabel('Charge of H under Y', { exact: true }).fill('1/2x')
-    await expect.poll(() => messageNextTo(page, 'Charge of H under Y')).toBe('a charge is a rational written "p/q" or an integer, e.g. "1/6"')
+    await expect.poll(() => messageNextTo(page, 'Charge of H under Y')).toBe('A charge is a rational written "p/q" or an integer, e.g. "1/6"')
     expect(await page.getByLabel('Charge of H under Y', { exact: true }).getAttribute('aria-invalid')).toBe('true')
     await screenshot(page, 'theory-editor-bad-charge')
     await page.getByLabel('Charge of H under Y', { exact: true }).fill('1/2')
@@ -97,7 +97,7 @@ describe('the theory editor in a real browser', () => {
     await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toMatch(/^broken\.json is not valid JSON/)
     const bad = { name: 'Bad', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'F' }] }
     await upload.setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) })
-    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('fields[0] "phi": a field strength (lorentz "F") needs gaugeOf')
+    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('Field 1 "phi", gauge group of the field strength is required: choose the gauge group whose field strength this is')
     expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT') // nothing replaced
     await screenshot(page, 'theory-editor-upload-error')
     await page.setViewportSize({ width: 800, height: 1000 })
@@ -120,7 +120,7 @@ describe('the theory editor in a real browser', () => {
     // Symmetries and counting rules: a wrong number of Dynkin labels, a renamed group (the roster
     // follows it), a new counting rule with a bad weight, each message next to its input.
     await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1')
-    await expect.poll(() => messageNextTo(page, 'Dynkin labels of Q under SU3c')).toBe('SU3c = SU(3) needs 2 Dynkin labels, but got [1]')
+    await expect.poll(() => messageNextTo(page, 'Dynkin labels of Q under SU3c')).toBe('SU(3) takes 2 Dynkin labels, but [1] has 1')
     await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1,0')
     await page.getByLabel('Name of Y', { exact: true }).fill('Hyper')
     expect(await page.getByLabel('Charge of H under Hyper', { exact: true }).inputValue()).toBe('1/2')
@@ -130,7 +130,7 @@ describe('the theory editor in a real browser', () => {
     await page.getByRole('button', { name: 'Add a weight' }).click()
     await page.getByLabel('Building block 1 of momentum', { exact: true }).fill('D')
     await page.getByLabel('Weight of D in momentum', { exact: true }).fill('1/0')
-    await expect.poll(() => messageNextTo(page, 'Weight of D in momentum')).toBe('a weight must be an exact rational written "p/q" or an integer, e.g. "3/2"')
+    await expect.poll(() => messageNextTo(page, 'Weight of D in momentum')).toBe('A weight must be an exact rational written "p/q" or an integer, e.g. "3/2"')
     await page.getByLabel('Weight of D in momentum', { exact: true }).fill('1')
     await page.getByRole('button', { name: 'Save theory' }).click()
     await expect.poll(() => byTest(page, 'save-state').innerText()).toBe('Saved as version 4.')
@@ -167,7 +167,7 @@ describe('the theory editor in a real browser', () => {
 
     // A name the roster already uses is refused next to the input.
     await page.getByLabel('Particle field', { exact: true }).fill('Ad')
-    await expect.poll(() => messageNextTo(page, 'Particle field')).toBe('heavy particle "Ad": a field of the roster already has this name')
+    await expect.poll(() => messageNextTo(page, 'Particle field')).toBe('This is already the name of a field of the roster; choose another name than "Ad"')
     await page.getByLabel('Particle field', { exact: true }).fill('vex')
     await page.getByLabel('Antiparticle field', { exact: true }).fill('')
     await page.getByLabel('Highest power of 1/m', { exact: true }).selectOption('2')

@@ -47,7 +47,7 @@ export const OrderSpecSchema = z.union([
     order: z.union([z.number().int(), z.string().min(1).max(24)]),
     powers: z.record(NameSchema, z.number().int().min(-40).max(40)),
   }),
-])
+], { error: 'must be a whole number from 0 to 40, e.g. 2' })
 
 export const ScaleLadderInputSchema = z.object({
   scales: z.array(ScaleSchema).max(30, { message: 'may list at most 30 scales' }),

@@ -4,7 +4,7 @@ import { readJson, intParam } from '../../../utils/http/readJson'
 import { requireAdmin } from '../../../utils/auth/currentUser'
 import { useDb } from '../../../utils/db/connection'
 
-const SiteRoleBody = z.object({ siteRole: z.enum(['admin', 'member'], { error: 'siteRole must be admin or member' }) }).strict()
+const SiteRoleBody = z.object({ siteRole: z.enum(['admin', 'member'], { error: 'must be "admin" or "member"' }) }).strict()
 
 // Admins promote or demote accounts; the last admin cannot demote themselves.
 export default defineApiHandler(async (event) => {
