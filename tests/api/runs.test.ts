@@ -5,6 +5,7 @@ import { messageOf } from '../support/client'
 import { findPreset } from '../../shared/presets/index'
 import { SMALL_THEORY } from '../support/fixtures'
 import { executeRun } from '../../server/worker/executeRun'
+import { up as rewriteOldRunErrors } from '../../migrations/20261203_030_run_error_texts'
 
 let world: World
 beforeAll(async () => { world = await buildWorld() })
@@ -83,6 +84,20 @@ describe('background runs through the PostgreSQL queue', () => {
     } finally {
       log.mockRestore()
     }
+  })
+})
+
+describe('failed runs stored before errors were written for users', () => {
+  it('lose the function-name prefix, or say that an internal error happened (migration 030)', async () => {
+    const params = JSON.stringify({ maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1 })
+    const texts = ['parseTheory: fields[0] "x": duplicate field name', 'QuotientSpace.rewrite: the operator is not in the span', "Cannot read properties of undefined (reading 'legs')", 'engine thread exited with code 1', 'The class is empty']
+    const rows = await testDb()('runs').insert(texts.map((error) => ({ theory_id: world.theoryId, kind: 'count', params, status: 'failed', error }))).returning('id')
+    await rewriteOldRunErrors(testDb())
+    const after = await testDb()('runs').whereIn('id', rows.map((r: { id: number }) => r.id)).orderBy('id').pluck('error')
+    expect(after.slice(0, 2)).toEqual(['fields[0] "x": duplicate field name', 'the operator is not in the span'])
+    expect(after[2]).toMatch(/^This run failed with an internal error/)
+    expect(after[3]).toBe(after[2])
+    expect(after[4]).toBe('The class is empty')
   })
 })
 
