@@ -50,7 +50,7 @@ describe('custom and momentum-ratio rules use exact rational weights', () => {
   })
 })
 
-describe('bad input names the function and the value', () => {
+describe('bad input names the rule, the building block and the value', () => {
   it('unknown block', () => {
     expect(() => orderOf({ Z: 1 }, mass, sm)).toThrow(EngineInputError)
     expect(() => orderOf({ Z: 1 }, mass, sm)).toThrow('Counting rule "E/M" gives no weight to the building block "Z"')
