@@ -6,6 +6,7 @@ import { findPreset } from '../../../shared/presets/index'
 import { buildBasis, classBasis, rewriteOperator, parseOperatorText, theoryParticles, parseClassKey as basisClassKey } from '../../../server/engine/basis/index'
 import { parityLegMap } from '../../../server/engine/basis/parityPartners'
 import { typedFingerprint } from '../../../server/engine/board/typedOperator'
+import { expressIn, type Fingerprint } from '../../../server/engine/board/fingerprints'
 import { ruleOrders } from '../../../server/engine/board/ruleOrders'
 import { countOperators, enumerateClasses, enumerateFieldContents, lorentzSingletSeries, parseClassKey } from '../../../server/engine/counting/index'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'
@@ -16,7 +17,7 @@ import {
 } from '../../../server/engine/group/index'
 import { div, parseRational, rat, toBigInt, ONE, ZERO } from '../../../server/engine/exact/rational'
 import { solve } from '../../../server/engine/finite/matrix'
-import { PrimeField } from '../../../server/engine/finite/primeField'
+import { PrimeField, workingPrimes } from '../../../server/engine/finite/primeField'
 import { reconstructRational } from '../../../server/engine/finite/rationalReconstruction'
 import { combo, enumerateHeavy, enumerateHeavyTheory, enumerateFourFermion, fourFermionSpace, orderSpace, rewriteHeavy } from '../../../server/engine/heavy/index'
 import { vacuumPolarizationOneLoop, vacuumPolarizationSeries } from '../../../server/engine/matching/vacuumPolarization'
@@ -32,6 +33,8 @@ const qedLike = { heavy: { particle: { name: 'psi', charges: { X: '1' } }, gauge
 const ladder = { scales: [{ name: 'E', value: '10', unit: 'GeV' as const }, { name: 'M', value: '1', unit: 'TeV' as const }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }] }
 const qcd = { alphaS: 0.118, muFrom: 91.1876, muTo: 10, loops: 2 as const, thresholds: [{ name: 'b', mass: 4.18, kind: 'msbar' as const }] }
 const sm = { frame: 'relativistic' as const, fields: [{ name: 'H', lorentz: 'S' as const }] }
+const twoPrimes = workingPrimes(2)
+const print = (values: (p: number) => number[]): Fingerprint => ({ primes: twoPrimes, values: twoPrimes.map(values) })
 const sextet: Theory = parseTheory({ name: 'sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'S', reps: { C: [2, 0] } }] })
 
 const theoryCases: BadInput[] = [
@@ -74,6 +77,7 @@ const basisCases: BadInput[] = [
   { name: 'h.c. of a class that is not its own conjugate', run: () => typedFingerprint(preset('smeft'), 'L e* H', '(<12>) + h.c.') },
   { name: 'a parity image of a class that parity moves', run: () => parityLegMap(theoryParticles(preset('qed')), basisClassKey(theoryParticles(preset('qed')), 'eL eR* A_L')) },
   // A constant amplitude is no multiple of s² + t² + u², the one operator of D^4 φ^4.
+  { name: 'a rewrite coefficient beyond what stored fingerprints determine', run: () => expressIn([print(() => [1, 0, 0]), print(() => [0, 1, 0])], print((p) => [1, (2 ** 26 + 15) % p, 0])), says: /^The coefficient of kept operator 2 is not a fraction with numerator and denominator up to \d+/ },
   { name: 'a rewrite outside the span', run: () => rewriteOperator(classBasis(phi, 'D^4 phi^4'), { label: 'one', evaluate: (_F, _pt, map) => (map.every((m, i) => m === i) ? 1 : 0) }), says: /is not a combination of the operators of the class D\^4 phi\^4/ },
 ]
 
