@@ -14,6 +14,7 @@ export const KEY_WORDS: Record<string, string> = {
   gaugeOf: 'gauge group of the field strength', type: 'kind', n: 'n', gauge: 'gauge', kind: 'kind',
   weights: 'weights', offset: 'offset', parameter: 'expansion parameter', symbol: 'symbol',
   particle: 'particle field', antiparticle: 'antiparticle field', gaugeGroup: 'gauge group',
+  imposeParity: 'parity imposed', imposeTimeReversal: 'time reversal imposed',
   // runs, board, notes
   maxDim: 'maximum dimension', nf: 'number of flavors', priorities: 'priorities',
   derivativesOn: 'fields that preferably carry the derivatives', preferHermitian: 'preference for Hermitian combinations',

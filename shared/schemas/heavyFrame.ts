@@ -30,8 +30,8 @@ export const HeavyFrameSchema = z
     antiparticle: z.object({ name: NameSchema }).optional(),
     gaugeGroup: NameSchema,
     maxOrder: z.number().int().min(1).max(4),
-    imposeParity: z.boolean({ error: 'heavy.imposeParity must be true or false' }).optional(),
-    imposeTimeReversal: z.boolean({ error: 'heavy.imposeTimeReversal must be true or false' }).optional(),
+    imposeParity: z.boolean({ error: 'must be true or false' }).optional(),
+    imposeTimeReversal: z.boolean({ error: 'must be true or false' }).optional(),
   })
   .superRefine((h, ctx) => {
     if (h.antiparticle && h.antiparticle.name === h.particle.name) {

@@ -1,5 +1,6 @@
 import { describe, it, expect, beforeAll } from 'vitest'
 import { buildWorld, type World } from '../support/fixtures'
+import { messageOf } from '../support/client'
 import { findPreset } from '../../shared/presets/index'
 
 let world: World
@@ -79,9 +80,9 @@ describe('heavy-particle frame through the run pipeline', () => {
     const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition: { ...theory, name: 'Vexonium too deep' } })
     const deep = await world.owner.client.post(`/api/theories/${t.body.theory.id}/runs`, { kind: 'basis', maxOrder: 5 })
     expect(deep.status).toBe(400)
-    expect(JSON.stringify(deep.body)).toContain('a heavy-frame run goes up to 1/m^4')
+    expect(messageOf(deep)).toBe('Maximum order must be at most 4 for a heavy-particle run (up to 1/m^4), not 5')
     const neither = await world.owner.client.post(`/api/theories/${t.body.theory.id}/runs`, { kind: 'basis' })
     expect(neither.status).toBe(400)
-    expect(JSON.stringify(neither.body)).toContain('give maxDim (mass dimension) or maxOrder')
+    expect(messageOf(neither)).toBe('Maximum dimension is required: give the maximum dimension, or the maximum order (the power of 1/m in the heavy frame, dimension − 4 otherwise)')
   })
 })

@@ -54,10 +54,10 @@ export function runReach(definition: unknown, body: { kind: 'count' | 'basis', m
   const def = (definition ?? {}) as { frame?: string, heavy?: { maxOrder?: number } }
   if (def.frame === 'heavy') {
     const maxOrder = body.maxOrder ?? def.heavy?.maxOrder ?? 2
-    if (maxOrder > MAX_HEAVY_ORDER) fail(400, `maxOrder: a heavy-frame run goes up to 1/m^${MAX_HEAVY_ORDER}, got 1/m^${maxOrder}`)
+    if (maxOrder > MAX_HEAVY_ORDER) fail(400, `Maximum order must be at most ${MAX_HEAVY_ORDER} for a heavy-particle run (up to 1/m^${MAX_HEAVY_ORDER}), not ${maxOrder}`)
     return { maxOrder }
   }
   const maxDim = body.maxDim ?? body.maxOrder! + 4
-  if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `maxOrder: ${body.kind === 'basis' ? 'an explicit basis run goes up to order 4 (dimension 8)' : 'counts go up to order 12 (dimension 16)'}, got order ${maxDim - 4}`)
+  if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `Maximum order must be at most ${body.kind === 'basis' ? '4 for an explicit basis (dimension 8)' : '12 for a count (dimension 16)'}, not ${maxDim - 4}`)
   return { maxDim }
 }

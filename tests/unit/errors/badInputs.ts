@@ -20,6 +20,8 @@ import { solve } from '../../../server/engine/finite/matrix'
 import { PrimeField, workingPrimes } from '../../../server/engine/finite/primeField'
 import { reconstructRational } from '../../../server/engine/finite/rationalReconstruction'
 import { combo, enumerateHeavy, enumerateHeavyTheory, enumerateFourFermion, fourFermionSpace, orderSpace, rewriteHeavy } from '../../../server/engine/heavy/index'
+import { enumerateHeavyLight } from '../../../server/engine/heavy/heavyLight'
+import { enumerateHeavyHeavy } from '../../../server/engine/heavy/heavyHeavy'
 import { vacuumPolarizationOneLoop, vacuumPolarizationSeries } from '../../../server/engine/matching/vacuumPolarization'
 import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../../../server/engine/rules/index'
 import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, decoupleUp, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
@@ -85,7 +87,9 @@ const heavyCases: BadInput[] = [
   { name: 'a heavy particle coupled to a discrete group', run: () => enumerateHeavy({ ...qedLike, groups: [{ name: 'X', type: 'Z', n: 2 }] }) },
   { name: 'a heavy particle coupled to an unknown group', run: () => enumerateHeavy({ ...qedLike, groups: [{ name: 'Y', type: 'U1' }] }) },
   { name: 'a heavy octet', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 1] } }, gaugeGroup: 'C', maxOrder: 3 }, groups: [{ name: 'C', type: 'SU', n: 3 }] }) },
-  { name: 'a non-abelian heavy particle to 1/m⁴', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 0] } }, gaugeGroup: 'C', maxOrder: 4 }, groups: [{ name: 'C', type: 'SU', n: 3 }] }) },
+  { name: 'a heavy particle charged under two SU(N)', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 }, groups: [{ name: 'C', type: 'SU', n: 3 }, { name: 'W', type: 'SU', n: 2 }] }), says: /two non-abelian groups \(C, W\)/ },
+  { name: 'an adjoint light scalar beside a heavy quark', run: () => enumerateHeavyLight({ particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: [{ name: 'S8', lorentz: 'S', real: true, reps: { C: [1, 1] } }], groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], maxOrder: 2, parity: true, timeReversal: true }), says: /^Light field S8 sits in \[1,1\] of C/ },
+  { name: 'heavy–heavy operators at order 3', run: () => enumerateHeavyHeavy(3, 1, 'psi', true) },
   { name: 'heavy operators of a relativistic theory', run: () => enumerateHeavyTheory({ frame: 'relativistic', groups: [] }) },
   { name: 'a heavy frame without its particle', run: () => enumerateHeavyTheory({ frame: 'heavy', groups: [] }) },
   { name: 'four-fermion operators at order 3', run: () => enumerateFourFermion(3, 1, 'psi', 'chi') },

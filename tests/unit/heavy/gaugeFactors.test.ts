@@ -38,7 +38,7 @@ describe('several gauge groups at once', () => {
     expect(() => heavyGaugeSetup(
       { particle: { name: 'Q', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 },
       [{ name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'W', type: 'SU', n: 2, gauge: true }],
-    )).toThrow('the heavy particle is charged under two non-abelian groups (C, W); one SU(N) with any number of U(1) factors is supported')
+    )).toThrow('The heavy particle is charged under two non-abelian groups (C, W); one SU(N) together with any number of U(1) groups is supported')
   })
 })
 

@@ -26,6 +26,6 @@ describe('contact operators of two heavy particles of the same kind (ψ†ψ)(ψ
   })
   it('orders other than 2 and 4 are refused', () => {
     expect(() => enumerateHeavyHeavy(3, 1, 'psi', true)).toThrow(EngineInputError)
-    expect(() => enumerateHeavyHeavy(3, 1, 'psi', true)).toThrow('enumerateHeavyHeavy: order must be 2 or 4 (parity-even contact operators), got 3')
+    expect(() => enumerateHeavyHeavy(3, 1, 'psi', true)).toThrow('Heavy–heavy contact operators (parity even) come at orders 2 and 4 in 1/m, not at order 3')
   })
 })

@@ -65,6 +65,6 @@ describe('colour: a heavy quark with a light quark', () => {
   it('an adjoint light scalar is refused with the field named', () => {
     const adj = [{ name: 'S8', lorentz: 'S', real: true, reps: { C: [1, 1] } }]
     expect(() => enumerateHeavyLight({ ...input, fields: adj })).toThrow(EngineInputError)
-    expect(() => enumerateHeavyLight({ ...input, fields: adj })).toThrow('light field S8 is in [1,1] of C; heavy–light operators support only singlets, fundamentals and antifundamentals')
+    expect(() => enumerateHeavyLight({ ...input, fields: adj })).toThrow('Light field S8 sits in [1,1] of C; heavy–light operators support only singlets, fundamentals and antifundamentals')
   })
 })
