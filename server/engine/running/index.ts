@@ -1,4 +1,4 @@
-/** Running and decoupling of gauge couplings (QCD α_s to four loops, QED at one loop). */
+/** Running and decoupling of gauge couplings (QCD α_s to four loops, QED at one loop, any theory's own gauge couplings at two loops). */
 export * from './zetaRational'
 export * from './qcdBeta'
 export * from './qcdDecoupling'
@@ -8,3 +8,5 @@ export * from './qedFermions'
 export * from './runAlphaQED'
 export * from './alphaQedAtZ'
 export * from './caution'
+export * from './odeSystem'
+export * from './gauge/index'

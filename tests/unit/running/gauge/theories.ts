@@ -1,0 +1,35 @@
+// Theory files of the gauge-running tests, built from small helpers so that the roster
+// syntax lives in one place.
+import type { Theory, TheoryField, TheoryGroup } from '../../../../shared/schemas/theory'
+import { parseTheory } from '../../../../shared/schemas/theory'
+import smeft from '../../../../shared/presets/smeft.json'
+
+type Extra = Pick<TheoryField, 'reps' | 'charges' | 'flavors'>
+export const weyl = (name: string, extra: Extra = {}): TheoryField => ({ name, lorentz: 'L', ...extra })
+export const weylR = (name: string, extra: Extra = {}): TheoryField => ({ name, lorentz: 'R', ...extra })
+export const complexScalar = (name: string, extra: Extra = {}): TheoryField => ({ name, lorentz: 'S', ...extra })
+export const realScalar = (name: string, extra: Extra = {}): TheoryField => ({ name, lorentz: 'S', real: true, ...extra })
+export const strength = (name: string, group: string): TheoryField => ({ name, lorentz: 'F', gaugeOf: group })
+export const su = (name: string, n: number): TheoryGroup => ({ name, type: 'SU', n, gauge: true })
+export const u1 = (name: string): TheoryGroup => ({ name, type: 'U1', gauge: true })
+
+export function theory(name: string, groups: TheoryGroup[], fields: TheoryField[]): Theory {
+  return parseTheory({ name, frame: 'relativistic', groups, fields })
+}
+
+export const SM = parseTheory(smeft)
+
+/** SU(3) with the named Dirac quarks (a left- and a right-handed Weyl triplet each). */
+export function qcd(quarks: readonly string[], name = `QCD with ${quarks.length} quarks`): Theory {
+  const fields = quarks.flatMap((q) => [weyl(q, { reps: { SU3c: [1, 0] } }), weylR(`${q}R`, { reps: { SU3c: [1, 0] } })])
+  return theory(name, [su('SU3c', 3)], [...fields, strength('G', 'SU3c')])
+}
+
+/** A dark U(1) X with one complex scalar of charge qs and one Dirac fermion of charge qf. */
+export function darkU1(qs: string, qf: string): Theory {
+  return theory('Dark U(1)', [u1('X')], [
+    complexScalar('S', { charges: { X: qs } }),
+    weyl('chi', { charges: { X: qf } }), weylR('chiR', { charges: { X: qf } }),
+    strength('Ad', 'X'),
+  ])
+}
