@@ -6,6 +6,8 @@ import { buildBasis } from '../engine/basis/buildBasis'
 import { typedFingerprints } from '../engine/board/typedOperator'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
+import { towerGaugeContent } from '../engine/running/gauge/gaugeContent'
+import { gaugeRunningReport } from '../engine/running/gauge/report'
 import { parseTheory } from '../../shared/schemas/theory'
 import type { EngineTask } from './engineTask'
 import { toThreadError } from './threadError'
@@ -20,16 +22,24 @@ function onProgress(fraction: number, label: string) {
   parentPort!.postMessage({ type: 'progress', fraction, label })
 }
 
+function run(t: EngineTask): unknown {
+  if (t.kind === 'gauge-running') {
+    const steps = t.steps.map((s) => ({ theory: parseTheory(s.theory), thresholdGeV: s.thresholdGeV }))
+    return gaugeRunningReport(towerGaugeContent(steps), t.request, signal)
+  }
+  const theory = parseTheory(t.theory)
+  if (t.kind === 'fingerprint') return typedFingerprints(theory, t.classKey, t.texts, t.priorities)
+  if (theory.frame === 'heavy') {
+    const heavy = () => enumerateHeavyTheory({ ...theory, heavy: theory.heavy && { ...theory.heavy, maxOrder: t.maxOrder ?? theory.heavy.maxOrder } }, { onProgress, signal })
+    return t.kind === 'count' ? { heavy: true, byOrder: heavyReport(heavy(), false) } : heavy()
+  }
+  return t.kind === 'count'
+    ? countOperators(theory, { maxDim: t.maxDim!, nf: t.nf, flavorPolynomials: true, onProgress, signal })
+    : buildBasis(theory, { maxDim: t.maxDim!, nf: t.nf, priorities: t.priorities, onProgress, signal })
+}
+
 try {
-  const theory = parseTheory(task.theory)
-  const heavy = () => enumerateHeavyTheory({ ...theory, heavy: theory.heavy && { ...theory.heavy, maxOrder: task.kind !== 'fingerprint' ? task.maxOrder ?? theory.heavy.maxOrder : theory.heavy.maxOrder } }, { onProgress, signal })
-  const result = task.kind === 'fingerprint'
-    ? typedFingerprints(theory, task.classKey, task.texts, task.priorities)
-    : theory.frame === 'heavy'
-      ? task.kind === 'count' ? { heavy: true, byOrder: heavyReport(heavy(), false) } : heavy()
-      : task.kind === 'count'
-        ? countOperators(theory, { maxDim: task.maxDim!, nf: task.nf, flavorPolynomials: true, onProgress, signal })
-        : buildBasis(theory, { maxDim: task.maxDim!, nf: task.nf, priorities: task.priorities, onProgress, signal })
+  const result = run(task)
   parentPort!.postMessage({ type: 'done', result })
 } catch (error) {
   parentPort!.postMessage(toThreadError(error))

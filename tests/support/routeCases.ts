@@ -163,6 +163,12 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     body: 'required',
     prepare: async () => ({ path: '/api/running/qcd', body: { alphaS: 0.118, muFrom: 91.188, muTo: 10, loops: 2, thresholds: [{ name: 'b', mass: 4.183, kind: 'msbar' }] } }),
   },
+  // Reads only (nothing stored), so every group role may run the theory's own gauge couplings.
+  'POST /api/theories/[id]/gauge-running': {
+    access: { kind: 'group', min: 'viewer' },
+    body: 'required',
+    prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/gauge-running`, body: { loops: 1, muFromGeV: 1, alpha: { U: 0.01 }, plotFromGeV: 1, plotToGeV: 100 } }),
+  },
   'POST /api/running/qed': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/running/qed', body: { muTo: 91.188, quarks: false, deltaAlphaHad5: 0.02766 } }) },
   'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, body: 'required', prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
 }

@@ -6,22 +6,9 @@
 import { toString as ratText } from '../../exact/rational'
 import type { GaugeBetaCoefficients } from './betaCoefficients'
 import type { RunningSegment } from './segments'
+import type { CoefficientTable, MixingTerm } from '../../../../shared/types/gaugeRunning'
 
-/** A term of d y_T/d ln μ = −(1/2π)[b_T + (1/4π) Σ_c B_Tc α_c] involving a mixed pair: `coupling` null is b_T. */
-export interface MixingTerm { target: string, coupling: string | null, value: string }
-
-export interface CoefficientTable {
-  /** Range of μ in GeV; null below the lightest and above the heaviest threshold. */
-  lowGeV: number | null
-  highGeV: number | null
-  active: string[]
-  /** b_i, group order. */
-  oneLoop: string[]
-  /** B_ij, group × group. */
-  twoLoop: string[][]
-  /** With two or more U(1)s: does running mix them from none, and the non-zero mixing terms. */
-  mixing: { generated: boolean, terms: MixingTerm[] } | null
-}
+export type { CoefficientTable, MixingTerm }
 
 const slotName = (c: GaugeBetaCoefficients, i: number) => c.slots[i]!.groups.join(',')
 

@@ -7,6 +7,9 @@ import { EngineInputError } from '../../errors'
 import type { CancelSignal } from '../odeStepper'
 import type { GaugeContent } from './gaugeContent'
 import { inverseSpd, type SlotLayout } from './gaugeFlow'
+import type { GaugeCouplingValues } from '../../../../shared/types/gaugeRunning'
+
+export type { GaugeCouplingValues }
 
 export interface KineticMixingInput { groups: [string, string], epsilon: number }
 
@@ -22,14 +25,6 @@ export interface GaugeRunInput {
   mixing?: KineticMixingInput[]
   signal?: CancelSignal
   onProgress?: (fraction: number, label: string) => void
-}
-
-/** Couplings at one scale as a physicist reads them. */
-export interface GaugeCouplingValues {
-  /** 1/α per group (theory order); for a U(1) 4π/g² with g as in the mixing convention. */
-  alphaInverse: number[]
-  /** ε per pair of U(1)s k < l (order of `pairs`). */
-  epsilon: number[]
 }
 
 const fail = (message: string): never => { throw new EngineInputError('runGaugeCouplings', message) }

@@ -11,4 +11,4 @@ export { gaugeFlow, inverseSpd, perturbativeMargins, slotAlphas, slotLayout, typ
 export { MU_RANGE_GEV, readCouplings, startState, type GaugeCouplingValues, type GaugeRunInput, type KineticMixingInput } from './gaugeRunInput'
 export { formatGeV, gaugeCouplingsAt, runGaugeCouplings, type GaugeRunPoint, type GaugeRunResult, type GaugeRunStop } from './runGaugeCouplings'
 export { coefficientTable, type CoefficientTable, type MixingTerm } from './coefficientTable'
-export { GAUGE_RUNNING_ASSUMPTIONS, gaugeRunningReport, type GaugeReport, type GaugeReportRequest, type GaugeTableRow } from './report'
+export { GAUGE_RUNNING_ASSUMPTIONS, gaugeRunningReport, runningGroupList, type GaugeReport, type GaugeReportRequest, type GaugeTableRow } from './report'

@@ -9,7 +9,8 @@ import type { GaugeContent } from './gaugeContent'
 import { simpleGroupFactors } from './groupFactors'
 import type { GaugeRunInput } from './gaugeRunInput'
 import { runGaugeCouplings, type GaugeRunPoint, type GaugeRunStop } from './runGaugeCouplings'
-import { coefficientTable, type CoefficientTable } from './coefficientTable'
+import { coefficientTable } from './coefficientTable'
+import type { GaugeReport, GaugeTableRow } from '../../../../shared/types/gaugeRunning'
 
 export interface GaugeReportRequest {
   loops: 1 | 2
@@ -22,19 +23,7 @@ export interface GaugeReportRequest {
   muToGeV?: number
 }
 
-export interface GaugeTableRow extends GaugeRunPoint { label: string }
-
-export interface GaugeReport {
-  groups: { name: string, label: string, abelian: boolean }[]
-  pairs: [string, string][]
-  loops: 1 | 2
-  curve: GaugeRunPoint[]
-  table: GaugeTableRow[]
-  stops: GaugeRunStop[]
-  segments: CoefficientTable[]
-  assumptions: string[]
-  caution: string
-}
+export type { GaugeReport, GaugeTableRow }
 
 /** What the numbers assume, stated beside them. */
 export const GAUGE_RUNNING_ASSUMPTIONS: readonly string[] = [
@@ -44,6 +33,11 @@ export const GAUGE_RUNNING_ASSUMPTIONS: readonly string[] = [
   'Several U(1)s mix kinetically as they run (coupling-matrix form); ε is the kinetic mixing with canonically normalised field strengths.',
   'A heavy-frame particle is static and does not run; field strengths are not matter.',
 ]
+
+/** The running groups as the page names them. @example runningGroupList(gaugeContentOf(smeft))[0] // { name: 'SU3c', label: 'SU(3)', abelian: false } */
+export function runningGroupList(content: GaugeContent): GaugeReport['groups'] {
+  return content.groups.map((g) => ({ name: g.name, label: g.abelian ? 'U(1)' : simpleGroupFactors(g.group).label, abelian: g.abelian }))
+}
 
 /** Keep at most `max` points, always the ends and the segment changes. */
 function thin(points: GaugeRunPoint[], max: number): GaugeRunPoint[] {
@@ -88,7 +82,7 @@ export function gaugeRunningReport(content: GaugeContent, req: GaugeReportReques
   const down = runGaugeCouplings({ ...base, muToGeV: Math.min(req.plotFromGeV, req.muFromGeV) })
   const chosen = req.muToGeV === undefined ? null : runGaugeCouplings({ ...base, muToGeV: req.muToGeV })
   return {
-    groups: content.groups.map((g) => ({ name: g.name, label: g.abelian ? 'U(1)' : simpleGroupFactors(g.group).label, abelian: g.abelian })),
+    groups: runningGroupList(content),
     pairs: up.pairs,
     loops: req.loops,
     curve: thin([...down.points.slice(1).reverse(), ...up.points], 600),

@@ -8,10 +8,10 @@ import { integrateOdeSystem } from '../odeSystem'
 import type { GaugeContent } from './gaugeContent'
 import { gaugeFlow, perturbativeMargins, slotLayout, type SlotLayout } from './gaugeFlow'
 import { readCouplings, startState, type GaugeCouplingValues, type GaugeRunInput } from './gaugeRunInput'
+import type { GaugeRunPoint, GaugeRunStop } from '../../../../shared/types/gaugeRunning'
 import { runningSegments, segmentIndexAt, type RunningSegment } from './segments'
 
-export interface GaugeRunPoint extends GaugeCouplingValues { mu: number, segment: number }
-export interface GaugeRunStop { group: string, muGeV: number, direction: 'up' | 'down', message: string }
+export type { GaugeRunPoint, GaugeRunStop }
 
 export interface GaugeRunResult {
   /** Running groups (theory order) and the pairs of U(1)s whose ε is reported. */
