@@ -23,6 +23,8 @@ export interface GaugeRunInput {
   alpha: Record<string, number>
   /** ε at muFrom per pair of U(1)s (L ⊃ −(ε/2) F_k F_l); absent pairs start unmixed. */
   mixing?: KineticMixingInput[]
+  /** Scales (GeV) the running passes exactly, so that the points there are exact (table rows). */
+  marks?: readonly number[]
   signal?: CancelSignal
   onProgress?: (fraction: number, label: string) => void
 }

@@ -77,16 +77,18 @@ function distinctStops(stops: (GaugeRunStop | undefined)[]): GaugeRunStop[] {
 export function gaugeRunningReport(content: GaugeContent, req: GaugeReportRequest, signal?: GaugeRunInput['signal']): GaugeReport {
   if (content.groups.length === 0) throw new EngineInputError('gaugeRunningReport', 'This theory has no gauge group whose coupling runs (SU(N) or U(1) with gauge true).')
   if (!(req.plotFromGeV < req.plotToGeV)) throw new EngineInputError('gaugeRunningReport', `The plotted range must go from a lower to a higher scale, not from ${req.plotFromGeV} to ${req.plotToGeV} GeV.`)
-  const base = { content, loops: req.loops, muFromGeV: req.muFromGeV, alpha: req.alpha, mixing: req.mixing, signal }
+  const marks = req.muToGeV === undefined ? [] : [req.muToGeV]
+  const base = { content, loops: req.loops, muFromGeV: req.muFromGeV, alpha: req.alpha, mixing: req.mixing, marks, signal }
   const up = runGaugeCouplings({ ...base, muToGeV: Math.max(req.plotToGeV, req.muFromGeV) })
   const down = runGaugeCouplings({ ...base, muToGeV: Math.min(req.plotFromGeV, req.muFromGeV) })
-  const chosen = req.muToGeV === undefined ? null : runGaugeCouplings({ ...base, muToGeV: req.muToGeV })
+  const inLegs = [...down.points, ...up.points].find((p) => p.mu === req.muToGeV)
+  const chosen = req.muToGeV === undefined || inLegs ? null : runGaugeCouplings({ ...base, muToGeV: req.muToGeV })
   return {
     groups: runningGroupList(content),
     pairs: up.pairs,
     loops: req.loops,
     curve: thin([...down.points.slice(1).reverse(), ...up.points], 600),
-    table: tableRows(content, [...down.points, ...up.points], chosen && !chosen.stop ? chosen.end : null, req),
+    table: tableRows(content, [...down.points, ...up.points], inLegs ?? (chosen && !chosen.stop ? chosen.end : null), req),
     stops: distinctStops([down.stop, up.stop, chosen?.stop]),
     segments: up.segments.map(coefficientTable),
     assumptions: [...GAUGE_RUNNING_ASSUMPTIONS],

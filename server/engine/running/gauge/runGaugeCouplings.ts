@@ -44,10 +44,10 @@ function stopMessage(layout: SlotLayout, index: number, mu: number, up: boolean,
   return { group, muGeV: mu, direction: up ? 'up' : 'down', message: `${what} grows beyond 4π ${where}: perturbation theory fails there (a Landau pole lies close by), so the running stops.` }
 }
 
-/** The thresholds crossed from muFrom to muTo, in running order. */
-function crossings(segments: readonly RunningSegment[], from: number, to: number): number[] {
+/** The thresholds (and marked scales) passed from muFrom to muTo, in running order. */
+function crossings(segments: readonly RunningSegment[], from: number, to: number, marks: readonly number[]): number[] {
   const up = to >= from
-  const bounds = segments.slice(1).map((s) => s.lowGeV)
+  const bounds = [...new Set([...segments.slice(1).map((s) => s.lowGeV), ...marks])].sort((a, b) => a - b)
   return up ? bounds.filter((m) => m > from && m < to) : bounds.filter((m) => m < from && m > to).reverse()
 }
 
@@ -73,7 +73,7 @@ export function runGaugeCouplings(input: GaugeRunInput): GaugeRunResult {
   const margins = perturbativeMargins(layout)
   const total = Math.abs(Math.log(input.muToGeV / input.muFromGeV)) || 1
   let mu = input.muFromGeV
-  for (const edge of [...crossings(segments, mu, input.muToGeV), input.muToGeV]) {
+  for (const edge of [...crossings(segments, mu, input.muToGeV, input.marks ?? []), input.muToGeV]) {
     const seg = segmentIndexAt(segments, mu, up)
     const flow = gaugeFlow(segments[seg]!.coefficients, input.loops)
     const onStep = (t: number, s: Float64Array) => points.push(point(Math.exp(t), s, seg))

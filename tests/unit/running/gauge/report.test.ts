@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { formatGeV, gaugeContentOf, gaugeRunningReport, towerGaugeContent } from '../../../../server/engine/running/gauge/index'
+import { formatGeV, gaugeContentOf, gaugeRunningReport, runGaugeCouplings, towerGaugeContent } from '../../../../server/engine/running/gauge/index'
 import { darkU1, SM, theory, u1, weyl } from './theories'
 
 describe('formatGeV', () => {
@@ -21,6 +21,9 @@ describe('the couplings page report', () => {
     expect(r.curve[r.curve.length - 1]!.mu).toBeCloseTo(1e19, -6)
     expect(r.curve.every((p, i) => i === 0 || p.mu > r.curve[i - 1]!.mu)).toBe(true)
     expect(r.table.map((row) => row.label)).toEqual(['input scale', 'chosen scale'])
+    // The chosen scale is passed exactly on the way up: the same couplings as a run that ends there.
+    const direct = runGaugeCouplings({ content: gaugeContentOf(SM), loops: 2, muFromGeV: 91.1876, muToGeV: 1e16, alpha: { SU3c: 0.118, SU2L: 0.0338, Y: 0.0102 } })
+    r.table[1]!.alphaInverse.forEach((x, i) => expect(x).toBeCloseTo(direct.end.alphaInverse[i]!, 9))
     expect(r.segments).toEqual([{
       lowGeV: null, highGeV: null, active: ['Q', 'u', 'd', 'L', 'e', 'H'],
       oneLoop: ['-7', '-19/6', '41/6'],
