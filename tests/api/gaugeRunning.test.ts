@@ -84,6 +84,24 @@ describe('the running of a tower\'s gauge couplings', () => {
   })
 })
 
+describe('a tower the running cannot use', () => {
+  it('is reported as a problem on the page, naming what to fix', async () => {
+    const top = await newTheory({ ...DARK, name: 'Dark with an edited child' })
+    const below = await integrateOut(top, ['S'], 1, 'TeV')
+    const current = await world.byRole.editor.client.get(`/api/theories/${below}`)
+    const definition = { ...current.body.theory.definition, groups: [...DARK.groups, { name: 'C', type: 'SU', n: 3, gauge: true }] }
+    const edit = await world.byRole.editor.client.patch(`/api/theories/${below}`, { definition, version: current.body.theory.version })
+    expect(edit.status, JSON.stringify(edit.body)).toBe(200)
+    const r = await world.byRole.viewer.client.get(`/api/theories/${below}/gauge-running`)
+    expect(r.status).toBe(200)
+    expect(r.body.problem).toMatch(/and the theory above it, “Dark with an edited child”, have different gauge groups; the running through a tower needs the same gauge groups on every step\.$/)
+    expect(r.body.defaults).toBeNull()
+    const run = await world.byRole.viewer.client.post(`/api/theories/${below}/gauge-running`, RUN)
+    expect(run.status).toBe(422)
+    expect(messageOf(run)).toContain('have different gauge groups')
+  })
+})
+
 describe('the Standard Model preset', () => {
   it('suggests PDG-based inputs at M_Z and gives b = (−7, −19/6, 41/6), B_YY = 199/18 (Machacek & Vaughn 1983; from memory)', async () => {
     const id = await newTheory({ ...smeft, name: 'SM for running' })

@@ -90,8 +90,10 @@ function twoLoop(t: SlotPlan, c: SlotPlan, fields: readonly FieldFactors[], f: C
  *   B_aa = −(34/3) C2(G)² + Σ S (w2 C2 + w3 C2(G)), B_ab = Σ w2 S_a C_b (w2 = 2, 4, 2; w3 = 10/3, 2/3, 1/3),
  *   with U(1) charges entering as C → Q_m Q_n and S → d Q_k Q_l (the covariant coupling-matrix form of mixing).
  * Reference: M. E. Machacek, M. T. Vaughn, Nucl. Phys. B 222 (1983) 83 (general two-loop gauge β);
- *   F. del Aguila, G. D. Coughlan, M. Quirós, Nucl. Phys. B 307 (1988) 633 and M. Luo, Y. Xiao,
- *   Phys. Lett. B 555 (2003) 279 (several U(1)s with kinetic mixing).
+ *   F. del Aguila, G. D. Coughlan, M. Quirós, Nucl. Phys. B 307 (1988) 633 (one-loop mixing) and
+ *   M. Luo, Y. Xiao, Phys. Lett. B 555 (2003) 279 (two loops with several U(1)s). The two-loop mixing
+ *   terms here are Machacek–Vaughn's with g² Q² → Qᵀ α Q (the covariant form), derived by us and
+ *   checked for invariance under a change of U(1) basis, not copied from that paper.
  */
 export function gaugeBetaCoefficients(content: GaugeContent, active: (massGeV: number) => boolean = () => true): GaugeBetaCoefficients {
   const f = contentFactors(content)

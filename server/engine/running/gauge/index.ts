@@ -9,6 +9,6 @@ export { gaugeBetaCoefficients, MAX_ABELIAN_GROUPS, type CouplingSlot, type Gaug
 export { runningSegments, segmentIndexAt, type RunningSegment } from './segments'
 export { gaugeFlow, inverseSpd, perturbativeMargins, slotAlphas, slotLayout, type SlotLayout } from './gaugeFlow'
 export { MU_RANGE_GEV, readCouplings, startState, type GaugeCouplingValues, type GaugeRunInput, type KineticMixingInput } from './gaugeRunInput'
-export { formatGeV, gaugeCouplingsAt, runGaugeCouplings, type GaugeRunPoint, type GaugeRunResult, type GaugeRunStop } from './runGaugeCouplings'
+export { formatGeV, gaugeCouplingsAt, runGaugeCouplings, type GaugeCouplingsAt, type GaugeRunPoint, type GaugeRunResult, type GaugeRunStop } from './runGaugeCouplings'
 export { coefficientTable, type CoefficientTable, type MixingTerm } from './coefficientTable'
 export { GAUGE_RUNNING_ASSUMPTIONS, gaugeRunningReport, runningGroupList, type GaugeReport, type GaugeReportRequest, type GaugeTableRow } from './report'

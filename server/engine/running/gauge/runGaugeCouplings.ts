@@ -90,13 +90,17 @@ export function runGaugeCouplings(input: GaugeRunInput): GaugeRunResult {
   return { groups: layout.groups, pairs, loops: input.loops, segments, points, end: points[points.length - 1]!, stop: undefined }
 }
 
+/** Couplings at one scale, also by group name (α = g²/4π). */
+export interface GaugeCouplingsAt extends GaugeCouplingValues { alpha: Record<string, number> }
+
 /**
  * The couplings at one scale, for callers that need a value (matching, tables): throws the
  * stop message as an input error when the running cannot reach muTo.
- * @example gaugeCouplingsAt({ ...input, muToGeV: 1000 }).alphaInverse[0] // α_s⁻¹(1 TeV)
+ * @example gaugeCouplingsAt({ ...input, muToGeV: 1000 }).alpha.SU3c // α_s(1 TeV)
  */
-export function gaugeCouplingsAt(input: Omit<GaugeRunInput, 'onProgress'>): GaugeCouplingValues {
+export function gaugeCouplingsAt(input: Omit<GaugeRunInput, 'onProgress'>): GaugeCouplingsAt {
   const r = runGaugeCouplings(input)
   if (r.stop) throw new EngineInputError('gaugeCouplingsAt', `${r.stop.message.replace(/, so the running stops\.$/, '')}; ${formatGeV(input.muToGeV)} cannot be reached from ${formatGeV(input.muFromGeV)}.`)
-  return { alphaInverse: r.end.alphaInverse, epsilon: r.end.epsilon }
+  const alpha = Object.fromEntries(r.groups.map((g, i) => [g, 1 / r.end.alphaInverse[i]!]))
+  return { alphaInverse: r.end.alphaInverse, epsilon: r.end.epsilon, alpha }
 }

@@ -66,7 +66,7 @@ describe('inputs of the running, refused in a physicist\'s words', () => {
   const content = gaugeContentOf(theory('two U(1)s and colour', [{ name: 'C', type: 'SU', n: 3, gauge: true }, u1('X'), u1('Y')], [
     weyl('q', { reps: { C: [1, 0] }, charges: { X: '1', Y: '1' } }), weylR('qR', { reps: { C: [1, 0] }, charges: { X: '1' } }), strength('Gmu', 'C'),
   ]))
-  const ok = { content, loops: 2 as const, muFromGeV: 100, muToGeV: 1000, alpha: { C: 0.1, X: 0.01, Y: 0.01 } }
+  const ok = { content, loops: 2 as const, muFromGeV: 100, muToGeV: 1000, alpha: { C: 0.1, X: 0.01, Y: 0.01 } as Record<string, number> }
   const cases: [string, Partial<typeof ok> & { mixing?: { groups: [string, string], epsilon: number }[] }, string][] = [
     ['missing group', { alpha: { C: 0.1, X: 0.01 } }, 'Give α_Y at 100 GeV: every gauge coupling of the theory needs a starting value.'],
     ['unknown group', { alpha: { ...ok.alpha, Z: 0.1 } }, 'Z is not a running gauge group of this theory (those are C, X, Y).'],

@@ -48,7 +48,7 @@ describe('reparametrisation covariance at two loops', () => {
   const original = gaugeContentOf(theory('original', [su('W', 2), u1('X'), u1('Y')], fields((x) => String(x), (_x, y) => String(y))))
   const rotated = gaugeContentOf(theory('rotated', [su('W', 2), u1('X'), u1('Y')], fields((x, y) => String(x + y), (_x, y) => String(y))))
 
-  it('X′(μ) = L X(μ) Lᵀ and α_W is unchanged, 1 TeV → 10⁹ GeV (Luo & Xiao, Phys. Lett. B 555 (2003) 279: kinetic mixing as a change of basis)', () => {
+  it('X′(μ) = L X(μ) Lᵀ and α_W is unchanged, 1 TeV → 10⁹ GeV (common practice: a change of basis of the U(1)s changes no physics; this checks our two-loop mixing terms)', () => {
     const x = [[40, 5], [5, 60]]
     const xr = [[x[0]![0]! + 2 * x[0]![1]! + x[1]![1]!, x[0]![1]! + x[1]![1]!], [x[0]![1]! + x[1]![1]!, x[1]![1]!]]
     const input = (m: number[][]) => ({ alpha: { W: 1 / 30, X: 1 / m[0]![0]!, Y: 1 / m[1]![1]! }, mixing: [{ groups: ['X', 'Y'] as [string, string], epsilon: m[0]![1]! / Math.sqrt(m[0]![0]! * m[1]![1]!) }] })

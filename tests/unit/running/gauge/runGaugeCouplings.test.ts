@@ -42,6 +42,11 @@ describe('one U(1) against closed forms', () => {
     expectClose('α⁻¹ there', 0.1, r.end.alphaInverse[0]!, 1 / (4 * Math.PI), 1e-9)
   })
 
+  it('gaugeCouplingsAt gives the couplings by group name at a reachable scale', () => {
+    const at = gaugeCouplingsAt({ content, loops: 1, muFromGeV: 1, muToGeV: 1e6, alpha: { X: 0.01 } })
+    expectClose('α_X(10⁶ GeV)', 1e6, at.alpha.X!, 1 / (100 - (b / TWO_PI) * Math.log(1e6)), 1e-12, true)
+  })
+
   it('gaugeCouplingsAt refuses a scale beyond the pole with the same words', () => {
     expect(() => gaugeCouplingsAt({ content, loops: 2, muFromGeV: 1, muToGeV: 1e30, alpha: { X: 0.3 } }))
       .toThrow(/g_X grows beyond 4π above μ ≈ .* GeV: perturbation theory fails there \(a Landau pole lies close by\); 10³⁰ GeV cannot be reached from 1 GeV\.$/)
