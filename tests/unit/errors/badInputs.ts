@@ -25,6 +25,7 @@ import { enumerateHeavyHeavy } from '../../../server/engine/heavy/heavyHeavy'
 import { vacuumPolarizationOneLoop, vacuumPolarizationSeries } from '../../../server/engine/matching/vacuumPolarization'
 import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../../../server/engine/rules/index'
 import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, decoupleUp, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
+import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningReport, runGaugeCouplings, simpleGroupFactors, towerGaugeContent } from '../../../server/engine/running/gauge/index'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 
 export interface BadInput { name: string, run: () => unknown, says?: RegExp }
@@ -182,4 +183,19 @@ const libraryCases: BadInput[] = [
   { name: 'an inconsistent linear system', run: () => solve(new PrimeField(7), [[1, 1], [2, 2]], [1, 3]) },
 ]
 
-export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...libraryCases]
+const darkU1 = (n: number): Theory => ({ name: 'dark', frame: 'relativistic', groups: Array.from({ length: n }, (_, i) => ({ name: `D${i}`, type: 'U1' as const, gauge: true })), fields: [{ name: 'chi', lorentz: 'S', charges: { D0: '1' } }] })
+const darkContent = () => gaugeContentOf(darkU1(1))
+const gaugeRun = { content: darkContent(), loops: 1 as const, muFromGeV: 10, muToGeV: 100, alpha: { D0: 0.01 } }
+const gaugeRunningCases: BadInput[] = [
+  { name: 'a tower with no theory', run: () => towerGaugeContent([]), says: /no theory/ },
+  { name: 'a tower step without its threshold', run: () => towerGaugeContent([{ theory: darkU1(1), thresholdGeV: null }, { theory: darkU1(1), thresholdGeV: null }]), says: /threshold scale/ },
+  { name: 'more U(1) groups than the mixing follows', run: () => gaugeBetaCoefficients(gaugeContentOf(darkU1(9))), says: /at most 8/ },
+  { name: 'a running coupling for a finite group', run: () => simpleGroupFactors({ name: 'Z', type: 'Z', n: 3, gauge: true }), says: /only SU\(N\) and U\(1\)/ },
+  { name: 'a gauge running from zero GeV', run: () => runGaugeCouplings({ ...gaugeRun, muFromGeV: 0 }), says: /between/ },
+  { name: 'a gauge running with a non-perturbative input', run: () => runGaugeCouplings({ ...gaugeRun, alpha: { D0: 20 } }), says: /not a perturbative coupling/ },
+  { name: 'a gauge coupling asked beyond its Landau pole', run: () => gaugeCouplingsAt({ ...gaugeRun, alpha: { D0: 1 }, muToGeV: 1e30 }), says: /cannot be reached/ },
+  { name: 'a gauge running report of a theory without gauge groups', run: () => gaugeRunningReport(gaugeContentOf({ name: 'none', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] }), { loops: 1, muFromGeV: 10, alpha: {}, plotFromGeV: 1, plotToGeV: 100 }), says: /no gauge group/ },
+  { name: 'a gauge running report over a reversed range', run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }), says: /lower to a higher/ },
+]
+
+export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...libraryCases]
