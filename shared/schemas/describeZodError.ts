@@ -44,7 +44,8 @@ function locationParts(path: readonly PropertyKey[], root?: unknown): string[] {
   return parts
 }
 
-const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1)
+// Only Latin letters: a symbol such as α keeps its case ("Α of X" would be a capital alpha).
+const capitalised = (s: string) => (/^[a-z]/.test(s) ? s.charAt(0).toUpperCase() + s.slice(1) : s)
 // A message that begins with one of these is a predicate: "Maximum dimension must be at least 5".
 const PREDICATE = /^(must|is|are|has|have|may|needs|cannot|does)\b/
 

@@ -30,6 +30,8 @@ export const KEY_WORDS: Record<string, string> = {
   muTo: 'wanted scale μ', loops: 'loops in β', thresholds: 'heavy quarks', mass: 'mass', lightFlavours: 'light flavours',
   decouplingLoops: 'decoupling loops', plotFrom: 'start of the plot', plotTo: 'end of the plot',
   alphaInverse0: 'α(0)⁻¹', quarks: 'quark thresholds', deltaAlphaHad5: 'Δα_had⁽⁵⁾(M_Z²)',
+  muFromGeV: 'scale of the inputs', muToGeV: 'chosen scale', alpha: 'α per gauge group', mixing: 'kinetic mixing',
+  epsilon: 'ε', plotFromGeV: 'lowest plotted scale', plotToGeV: 'highest plotted scale',
 }
 
 /** A list key and the word for one of its entries ("field 3"). */
@@ -45,6 +47,7 @@ export const RECORD_WORDS: Record<string, (key: string) => string> = {
   charges: (k) => `charge under ${k}`,
   weights: (k) => `weight of ${k}`,
   powers: (k) => `power of ${k}`,
+  alpha: (k) => `α of ${k}`,
 }
 
 /** Keys that only wrap a document: a problem inside is named by the document's own words. */

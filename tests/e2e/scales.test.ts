@@ -125,6 +125,6 @@ describe('scales in a real browser', () => {
     await screenshot(page, 'couplings-gauge')
     await panel.getByLabel('α of QED at μ₀').fill('20')
     await panel.getByRole('button', { name: 'Run the gauge couplings' }).click()
-    await expect.poll(() => panel.getByRole('alert').first().textContent(), { timeout: 20_000 }).toContain('α must be below 4π to be perturbative')
+    await expect.poll(() => panel.getByRole('alert').first().textContent(), { timeout: 20_000 }).toContain('must be below 4π to be perturbative')
   })
 })
