@@ -55,21 +55,21 @@ export function decouplingFactor(aOverPi: number, logMu2OverM2: number, kind: He
 
 /**
  * α_s^(n_f−1)(μ) from α_s^(n_f)(μ) (going down through the threshold).
- * @example decoupleDown(0.2245, 0, 'msbar', 2) // 0.2246751 (= 0.2245 [1 + (11/72)(0.2245/π)²])
+ * @example alphaSBelowThreshold(0.2245, 0, 'msbar', 2) // 0.2246751 (= 0.2245 [1 + (11/72)(0.2245/π)²])
  * Method: α_low = ζ_g²(α_high) α_high.
  * Reference: Chetyrkin, Kniehl, Steinhauser, Nucl. Phys. B 510 (1998) 61.
  */
-export function decoupleDown(alphaHigh: number, logMu2OverM2: number, kind: HeavyMassKind, loops: DecouplingLoops): number {
+export function alphaSBelowThreshold(alphaHigh: number, logMu2OverM2: number, kind: HeavyMassKind, loops: DecouplingLoops): number {
   return alphaHigh * decouplingFactor(alphaHigh / Math.PI, logMu2OverM2, kind, loops)
 }
 
 /**
- * α_s^(n_f)(μ) from α_s^(n_f−1)(μ) (going up), the exact inverse of decoupleDown.
- * @example decoupleUp(decoupleDown(0.2245, 0, 'msbar', 2), 0, 'msbar', 2) // 0.2245 (to 1e-15)
+ * α_s^(n_f)(μ) from α_s^(n_f−1)(μ) (going up), the exact inverse of alphaSBelowThreshold.
+ * @example alphaSAboveThreshold(alphaSBelowThreshold(0.2245, 0, 'msbar', 2), 0, 'msbar', 2) // 0.2245 (to 1e-15)
  * Method: fixed-point iteration α_high ← α_low / ζ_g²(α_high) (a contraction for α_s < 1).
  * Reference: Chetyrkin, Kniehl, Steinhauser, Nucl. Phys. B 510 (1998) 61.
  */
-export function decoupleUp(alphaLow: number, logMu2OverM2: number, kind: HeavyMassKind, loops: DecouplingLoops): number {
+export function alphaSAboveThreshold(alphaLow: number, logMu2OverM2: number, kind: HeavyMassKind, loops: DecouplingLoops): number {
   let x = alphaLow
   for (let i = 0; i < 200; i++) {
     const next = alphaLow / decouplingFactor(x / Math.PI, logMu2OverM2, kind, loops)
@@ -77,5 +77,5 @@ export function decoupleUp(alphaLow: number, logMu2OverM2: number, kind: HeavyMa
     x = next
   }
   // Only a large α_s keeps the iteration from contracting: a property of the input, not a bug.
-  throw new EngineInputError('decoupleUp', `α_s = ${alphaLow} at a heavy-quark threshold is too large to match across it (the matching is perturbative); choose a smaller α_s or start above the threshold`)
+  throw new EngineInputError('alphaSAboveThreshold', `α_s = ${alphaLow} at a heavy-quark threshold is too large to match across it (the matching is perturbative); choose a smaller α_s or start above the threshold`)
 }

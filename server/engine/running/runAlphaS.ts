@@ -5,7 +5,7 @@
 import { EngineInputError } from '../errors'
 import { integrateOde, OdeRangeError, type CancelSignal } from './odeStepper'
 import { qcdBeta } from './qcdBeta'
-import { decoupleDown, decoupleUp, type DecouplingLoops, type HeavyMassKind } from './qcdDecoupling'
+import { alphaSBelowThreshold, alphaSAboveThreshold, type DecouplingLoops, type HeavyMassKind } from './qcdDecoupling'
 import { RUNNING_CAUTION } from './caution'
 import { validateRunAlphaS } from './runAlphaSInput'
 
@@ -93,8 +93,8 @@ export function runAlphaS(input: RunAlphaSInput): RunAlphaSResult {
   const totalLog = Math.abs(Math.log(input.muTo / input.muFrom)) || 1
   for (const th of v.crossed) {
     alpha = runSegment(alpha, mu, th.mass, nf, input.loops, trace, input.signal)
-    const below = v.down ? decoupleDown(alpha, 0, th.kind, v.decouplingLoops) : alpha
-    const above = v.down ? alpha : decoupleUp(alpha, 0, th.kind, v.decouplingLoops)
+    const below = v.down ? alphaSBelowThreshold(alpha, 0, th.kind, v.decouplingLoops) : alpha
+    const above = v.down ? alpha : alphaSAboveThreshold(alpha, 0, th.kind, v.decouplingLoops)
     const nfAbove = v.down ? nf : nf + 1
     crossings.push({ name: th.name, mass: th.mass, kind: th.kind, direction: v.down ? 'down' : 'up', nfAbove, alphaAbove: above, alphaBelow: below })
     alpha = v.down ? below : above

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { decoupleDown, decoupleUp, decouplingCoefficients, decouplingFactor } from '../../../server/engine/running/qcdDecoupling'
+import { alphaSBelowThreshold, alphaSAboveThreshold, decouplingCoefficients, decouplingFactor } from '../../../server/engine/running/qcdDecoupling'
 import { add, mul, parseRational, toString as ratText } from '../../../server/engine/exact/rational'
 import { expectClose } from '../scales/expectClose'
 
@@ -24,19 +24,19 @@ describe('heavy-quark decoupling of α_s (Chetyrkin, Kniehl, Steinhauser, Nucl. 
 
   it('going down at μ = m_h (MS-bar): α^(n_f−1) = α^(n_f)[1 + (11/72)(α/π)²]; pole: 1 − (7/24)(α/π)²', () => {
     const a = 0.2245
-    expectClose('msbar down', a, decoupleDown(a, 0, 'msbar', 2), a * (1 + (11 / 72) * (a / Math.PI) ** 2), 1e-16)
-    expectClose('pole down', a, decoupleDown(a, 0, 'pole', 2), a * (1 - (7 / 24) * (a / Math.PI) ** 2), 1e-16)
-    expect(decoupleDown(a, 0, 'msbar', 1)).toBe(a)
+    expectClose('msbar down', a, alphaSBelowThreshold(a, 0, 'msbar', 2), a * (1 + (11 / 72) * (a / Math.PI) ** 2), 1e-16)
+    expectClose('pole down', a, alphaSBelowThreshold(a, 0, 'pole', 2), a * (1 - (7 / 24) * (a / Math.PI) ** 2), 1e-16)
+    expect(alphaSBelowThreshold(a, 0, 'msbar', 1)).toBe(a)
   })
 
   it('the O(α_s) term is −(1/6) ln(μ²/m²) (CKS 1998)', () => {
     expectClose('one-loop log', 2, decouplingFactor(0.1, 2, 'msbar', 1), 1 - 0.1 * 2 / 6, 1e-15)
   })
 
-  it('decoupleUp inverts decoupleDown (both kinds, several logs)', () => {
+  it('alphaSAboveThreshold inverts alphaSBelowThreshold (both kinds, several logs)', () => {
     for (const kind of ['msbar', 'pole'] as const) for (const L of [-1, 0, 0.7]) {
       const a = 0.3
-      expectClose(`${kind} L=${L}`, { a, L }, decoupleUp(decoupleDown(a, L, kind, 2), L, kind, 2), a, 1e-15)
+      expectClose(`${kind} L=${L}`, { a, L }, alphaSAboveThreshold(alphaSBelowThreshold(a, L, kind, 2), L, kind, 2), a, 1e-15)
     }
   })
 
