@@ -12,6 +12,7 @@ import { letterSequences, relationStructures, structuresOn, tracedCombos } from 
 import { daggerCombo, expandCombo, expandStructure, simplifyCombo, thetaCombo, type Combo } from '../server/engine/heavy/structure'
 import { QuotientSpace } from '../server/engine/heavy/quotient'
 import { enumerateHeavyLight } from '../server/engine/heavy/heavyLight'
+import type { TheoryFieldLike } from '../server/engine/heavy/lightFields'
 import { enumerateHeavyHeavy } from '../server/engine/heavy/heavyHeavy'
 import { enumerateFourField } from '../server/engine/heavy/fourField'
 
@@ -46,7 +47,7 @@ function fromWords(N: number): number {
   return new QuotientSpace(els, relationStructures(5).map((s) => expandStructure(s)).filter((e) => e.size > 0), { colorN: N }).dimension
 }
 
-const electron = [{ name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } }]
+const electron: TheoryFieldLike[] = [{ name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }]
 
 export default async function heavyBench(): Promise<Record<string, Figure>> {
   return {

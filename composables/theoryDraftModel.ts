@@ -3,20 +3,20 @@
 // half-typed value is never lost, and converts to the theory file that TheorySchema validates.
 // Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
 import type { Theory } from '../shared/schemas/theory'
+import { LORENTZ_KINDS, type LorentzKind } from '../shared/schemas/lorentzKind'
 import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
 import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
 
 export type { DraftHeavy }
 
 export type GroupKind = 'SU' | 'U1' | 'Z'
-export type Lorentz = 'S' | 'L' | 'R' | 'F'
 export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
 
 export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
 export interface DraftField extends DraftLabels {
   uid: string
   name: string
-  lorentz: Lorentz
+  lorentz: LorentzKind
   real: boolean
   /** uid of a group of the draft, or "?NAME" for a group name the file names but does not declare. */
   gaugeOf: string
@@ -60,7 +60,7 @@ export function newGroup(): DraftGroup {
 }
 
 export function newField(): DraftField {
-  return { uid: newUid('f'), name: '', lorentz: 'S', real: false, gaugeOf: '', flavors: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
 }
 
 export function newRule(): DraftRule {
@@ -94,7 +94,7 @@ export function theoryToDraft(input: unknown): TheoryDraft {
 function fieldToDraft(f: Record<string, unknown>, byName: Map<string, string>): DraftField {
   const out = newField()
   out.name = text(f.name)
-  out.lorentz = (['S', 'L', 'R', 'F'].includes(String(f.lorentz)) ? f.lorentz : 'S') as Lorentz
+  out.lorentz = LORENTZ_KINDS.find((k) => k === f.lorentz) ?? 'scalar'
   out.real = f.real === true
   out.flavors = text(f.flavors)
   if (f.gaugeOf !== undefined) out.gaugeOf = byName.get(text(f.gaugeOf)) ?? `?${text(f.gaugeOf)}`
@@ -144,12 +144,12 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
 function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Map<string, string>, issues: DraftIssue[]) {
   const out: Record<string, unknown> = { name: f.name.trim(), lorentz: f.lorentz }
   labelsToTheory(f, groups, out, ['fields', i], issues)
-  if (f.lorentz === 'S' && f.real) out.real = true
+  if (f.lorentz === 'scalar' && f.real) out.real = true
   const flavors = readInt(f.flavors, ['fields', i, 'flavors'], issues, 'must be a whole number from 1 to 6')
   if (flavors !== undefined) out.flavors = flavors
-  if (f.lorentz === 'F' || f.gaugeOf) {
+  if (f.lorentz === 'field-strength' || f.gaugeOf) {
     const g = f.gaugeOf.startsWith('?') ? f.gaugeOf.slice(1) : names.get(f.gaugeOf)
-    if (g !== undefined && f.lorentz === 'F') out.gaugeOf = g
+    if (g !== undefined && f.lorentz === 'field-strength') out.gaugeOf = g
   }
   if (f.description !== undefined) out.description = f.description
   return out

@@ -8,10 +8,10 @@ export const DEMO_THEORIES = [
     frame: 'relativistic',
     groups: [{ name: 'Uh', type: 'U1', gauge: true }],
     fields: [
-      { name: 'TL', lorentz: 'L', charges: { Uh: '1' } },
-      { name: 'TR', lorentz: 'R', charges: { Uh: '1' } },
-      { name: 's', lorentz: 'S', real: true },
-      { name: 'A', lorentz: 'F', gaugeOf: 'Uh' },
+      { name: 'TL', lorentz: 'left-weyl', charges: { Uh: '1' } },
+      { name: 'TR', lorentz: 'right-weyl', charges: { Uh: '1' } },
+      { name: 's', lorentz: 'scalar', real: true },
+      { name: 'A', lorentz: 'field-strength', gaugeOf: 'Uh' },
     ],
   },
   {
@@ -20,8 +20,8 @@ export const DEMO_THEORIES = [
     frame: 'relativistic',
     groups: [{ name: 'Uh', type: 'U1', gauge: true }],
     fields: [
-      { name: 's', lorentz: 'S', real: true },
-      { name: 'A', lorentz: 'F', gaugeOf: 'Uh' },
+      { name: 's', lorentz: 'scalar', real: true },
+      { name: 'A', lorentz: 'field-strength', gaugeOf: 'Uh' },
     ],
   },
   { ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium in the heavy-particle frame' },

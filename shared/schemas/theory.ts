@@ -3,6 +3,7 @@ import './zodMessages'
 import { CountingRuleSchema } from './countingRules'
 import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
+import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
 import { EngineInputError } from '../../server/engine/errors'
 import { suReality } from '../../server/engine/group/irrep'
 import { suDimension } from '../../server/engine/group/weights'
@@ -12,9 +13,9 @@ import { suDimension } from '../../server/engine/group/weights'
  * Keys are part of the portable file format: extend, never rename.
  *
  * - groups: SU(n) (2 <= n <= 8), U1, or Z (Z_n, 2 <= n <= 64); `gauge` false = global symmetry.
- * - fields: lorentz "S" scalar (complex unless real), "L" left-handed Weyl fermion (1/2,0),
- *   "R" right-handed Weyl fermion (0,1/2), "F" field strength of the gauge group `gaugeOf`
- *   (both chiral halves, real, adjoint; a singlet of every other group).
+ * - fields: lorentz "scalar" (complex unless real), "left-weyl" fermion (1/2,0), "right-weyl"
+ *   fermion (0,1/2), "field-strength" of the gauge group `gaugeOf` (both chiral halves, real,
+ *   adjoint; a singlet of every other group). See ./lorentzKind.ts.
  *   reps: Dynkin labels per SU(n) group (absent = singlet); charges: rational strings per U1
  *   ("1/6"), integers mod n per Z group (absent = 0); flavors: 1..6 (default 1).
  *   Complex fields bring their conjugates.
@@ -43,7 +44,7 @@ export const GroupSchema = z.object({
 
 export const FieldSchema = z.object({
   name: NameSchema,
-  lorentz: z.enum(['S', 'L', 'R', 'F']),
+  lorentz: z.enum(LORENTZ_KINDS, { error: (iss) => lorentzKindMessage(iss.input) }),
   reps: z.record(NameSchema, z.array(z.number().int().min(0).max(12)).max(7)).optional(),
   charges: z.record(NameSchema, ChargeSchema).optional(),
   real: z.boolean().optional(),
@@ -91,10 +92,10 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
     names.add(f.name)
     checkReps(f, groups, bad)
     checkCharges(f, groups, bad)
-    if (f.lorentz === 'F') checkStrength(f, groups, strengths, bad)
+    if (f.lorentz === 'field-strength') checkStrength(f, groups, strengths, bad)
     else if (f.gaugeOf !== undefined) bad('gaugeOf', 'only a field strength belongs to a gauge group; remove the gauge group, or make the field a field strength')
-    if (f.real && f.lorentz !== 'S') bad('real', 'only a scalar can be declared real; make the field complex, or a scalar')
-    if (f.real && f.lorentz === 'S') checkRealScalar(f, groups, bad)
+    if (f.real && f.lorentz !== 'scalar') bad('real', 'only a scalar can be declared real; make the field complex, or a scalar')
+    if (f.real && f.lorentz === 'scalar') checkRealScalar(f, groups, bad)
   })
   if (t.heavy) checkHeavy(t.heavy, groups, names, report)
 }
@@ -106,7 +107,7 @@ function checkHeavy(h: HeavyFrame, groups: Map<string, TheoryGroup>, fieldNames:
   else if (!g.gauge) report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is a global symmetry (not gauged); choose a gauge group`)
   else if (g.type === 'Z') report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is the discrete group Z_${g.n}; choose a U(1) or SU(n) gauge group`)
   // Reps and charges follow the roster's rules (a Pauli field is a fermion: not a field strength).
-  const particle: TheoryField = { name: h.particle.name, lorentz: 'L', reps: h.particle.reps, charges: h.particle.charges }
+  const particle: TheoryField = { name: h.particle.name, lorentz: 'left-weyl', reps: h.particle.reps, charges: h.particle.charges }
   const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], message)
   checkReps(particle, groups, bad)
   checkCharges(particle, groups, bad)
@@ -132,7 +133,7 @@ function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): 
     else if (suDimension(g.n!, labels) > MAX_REP_DIMENSION) {
       bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${labels.join(',')}] has dimension ${suDimension(g.n!, labels)}`, gname)
     }
-    if (f.lorentz === 'F' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from its gauge group; remove [${labels.join(',')}]`, gname)
+    if (f.lorentz === 'field-strength' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from its gauge group; remove [${labels.join(',')}]`, gname)
   }
 }
 
@@ -143,7 +144,7 @@ function checkCharges(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad
     if (g.type === 'SU') { bad('charges', `${gname} is SU(${g.n ?? 'n'}), which takes Dynkin labels, not a charge`, gname); continue }
     if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z_${g.n ?? 'n'} charge is a whole number (counted mod ${g.n ?? 'n'}), but got ${q}`, gname)
     if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `the charge ${q} has a zero denominator`, gname)
-    if (f.lorentz === 'F' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge; remove ${q}`, gname)
+    if (f.lorentz === 'field-strength' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge; remove ${q}`, gname)
   }
 }
 

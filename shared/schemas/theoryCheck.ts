@@ -11,7 +11,7 @@ export const TheoryCheckSchema = z.object({
 }).strict()
 
 export interface AnomalyFailure {
-  /** e.g. "Y^3", "SU2L^2 Y", "gravity^2 Y", "SU2L Witten". */
+  /** e.g. "Y^3", "weak^2 Y", "gravity^2 Y", "weak Witten". */
   name: string
   /** The exact sum over left-handed Weyl fields, a rational string ("-3", "1/6"). */
   sum: string

@@ -106,7 +106,7 @@ describe('theory files', () => {
   it('a bad theory file names the field and the key at fault, and nothing is written', async () => {
     const before = await rowCounts()
     const res = await world.owner.client.post(`/api/groups/${world.slug}/theories`, {
-      definition: { name: 'Bad', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { U: '1/3' } }] },
+      definition: { name: 'Bad', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { U: '1/3' } }] },
     })
     expect(res.status).toBe(400)
     expect(messageOf(res)).toMatch(/phi/)

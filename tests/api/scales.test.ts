@@ -149,7 +149,7 @@ describe('integrate out: towers', () => {
 
 describe('set aside the orders below the precision target', () => {
   it('moves exactly the kept operators of the orders whose estimate is below the target, in one step', async () => {
-    const theoryId = await newTheory({ name: 'Board for targets', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'S', charges: { U: '1' } }, { name: 'A', lorentz: 'F', gaugeOf: 'U' }] })
+    const theoryId = await newTheory({ name: 'Board for targets', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', charges: { U: '1' } }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' }] })
     const { basisId } = await addBasis({ ...world, theoryId }) // order 2: the engine's kept operators and alternatives
     const db = testDb()
     const extra = [1, 1, 3].map((order, i) => ({ basis_id: basisId, order, class_key: `X${order}`, column: 'kept', position: i, text: `O${order}_${i}`, latex: 'O', structure: '{}', hermitian: true, real_parameters: 1 }))

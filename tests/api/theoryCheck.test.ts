@@ -18,7 +18,7 @@ describe('POST /api/theory-check', () => {
     const res = await client.post('/api/theory-check', { theory: smeft })
     expect(res.status, JSON.stringify(res.body)).toBe(200)
     expect(res.body).toMatchObject({ ok: true, issues: '', anomalies: [] })
-    // SU3c^3, SU3c^2 Y, SU2L^2 Y, SU2L Witten, Y^3, gravity^2 Y
+    // colour^3, colour^2 hypercharge, weak^2 hypercharge, weak Witten, hypercharge^3, gravity^2 hypercharge
     expect(res.body.checked).toBe(6)
   })
 
@@ -32,38 +32,38 @@ describe('POST /api/theory-check', () => {
     expect(res.status, JSON.stringify(res.body)).toBe(200)
     expect(res.body.ok).toBe(false)
     expect(res.body.anomalies).toEqual([
-      { name: 'Y^3', sum: '-3', ok: false },
-      { name: 'gravity^2 Y', sum: '-3', ok: false },
+      { name: 'hypercharge^3', sum: '-3', ok: false },
+      { name: 'gravity^2 hypercharge', sum: '-3', ok: false },
     ])
-    expect(res.body.issues).toBe('Y^3: sum -3 (must vanish)\ngravity^2 Y: sum -3 (must vanish)')
+    expect(res.body.issues).toBe('hypercharge^3: sum -3 (must vanish)\ngravity^2 hypercharge: sum -3 (must vanish)')
   })
 
   // One extra SU(2) doublet of left-handed fermions makes the number of doublets odd (12 + 1):
   // Witten, Phys. Lett. B 117 (1982) 324. A colour- and hypercharge-neutral doublet touches no other condition.
   it('an odd number of SU(2) doublets fails the Witten condition', async () => {
     const theory = clone()
-    theory.fields.push({ name: 'N', lorentz: 'L', reps: { SU2L: [1] } })
+    theory.fields.push({ name: 'N', lorentz: 'left-weyl', reps: { weak: [1] } })
     const res = await client.post('/api/theory-check', { theory })
-    expect(res.body.anomalies).toEqual([{ name: 'SU2L Witten', sum: '13', ok: false }])
-    expect(res.body.issues).toBe('SU2L Witten: 13 is odd (must be even)')
+    expect(res.body.anomalies).toEqual([{ name: 'weak Witten', sum: '13', ok: false }])
+    expect(res.body.issues).toBe('weak Witten: 13 is odd (must be even)')
   })
 
   it('a malformed theory is refused with 400 naming the field and the key at fault, and writes nothing', async () => {
     const theory = clone()
-    theory.fields[5].charges.Y = '1/2x'
+    theory.fields[5].charges.hypercharge = '1/2x'
     const before = await rowCounts()
     const res = await client.post('/api/theory-check', { theory })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toBe('Field 6 "H", charge under Y: a charge is a rational written "p/q" or an integer, e.g. "1/6"')
+    expect(messageOf(res)).toBe('Field 6 "H", charge under hypercharge: a charge is a rational written "p/q" or an integer, e.g. "1/6"')
     expect(await rowCounts()).toEqual(before)
   })
 
   it('a theory that breaks a cross-field rule is refused with the schema message', async () => {
     const theory = clone()
-    theory.fields.push({ name: 'Z', lorentz: 'F', gaugeOf: 'Y' })
+    theory.fields.push({ name: 'Z', lorentz: 'field-strength', gaugeOf: 'hypercharge' })
     const res = await client.post('/api/theory-check', { theory })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toBe('Field 10 "Z", gauge group of the field strength: Y already has a field strength')
+    expect(messageOf(res)).toBe('Field 10 "Z", gauge group of the field strength: hypercharge already has a field strength')
   })
 
   it('a missing theory is refused with 400 naming it', async () => {

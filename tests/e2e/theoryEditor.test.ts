@@ -55,26 +55,26 @@ describe('the theory editor in a real browser', () => {
     const warning = byTest(page, 'anomaly-warning')
     await warning.waitFor({ timeout: 15_000 })
     // Without e (3 flavors, left-handed conjugate Y = +1) the Y^3 and gravity^2 Y sums are -3 (same source).
-    expect(await warning.innerText()).toMatch(/Y\^3\s+sum = -3/)
-    expect(await warning.innerText()).toMatch(/gravity\^2 Y\s+sum = -3/)
+    expect(await warning.innerText()).toMatch(/hypercharge\^3\s+sum = -3/)
+    expect(await warning.innerText()).toMatch(/gravity\^2 hypercharge\s+sum = -3/)
     await screenshot(page, 'theory-editor-anomaly')
 
     // Put e back: a new row, then moved up to where it was.
     await page.getByRole('button', { name: 'Add a field' }).click()
     await page.getByLabel('Name of field 9', { exact: true }).fill('e')
-    await page.getByLabel('Lorentz type of e', { exact: true }).selectOption('R')
-    await page.getByLabel('Charge of e under Y', { exact: true }).fill('-1')
+    await page.getByLabel('Lorentz kind of e', { exact: true }).selectOption('right-weyl')
+    await page.getByLabel('Charge of e under hypercharge', { exact: true }).fill('-1')
     await page.getByLabel('Flavors of e', { exact: true }).fill('3')
     for (let i = 0; i < 4; i++) await page.getByRole('button', { name: 'Move e up', exact: true }).click()
     await expect.poll(() => byTest(page, 'anomaly-free').count(), { timeout: 15_000 }).toBe(1)
 
     // A bad charge: the schema's message appears next to that input.
-    await page.getByLabel('Charge of H under Y', { exact: true }).fill('1/2x')
-    await expect.poll(() => messageNextTo(page, 'Charge of H under Y')).toBe('A charge is a rational written "p/q" or an integer, e.g. "1/6"')
-    expect(await page.getByLabel('Charge of H under Y', { exact: true }).getAttribute('aria-invalid')).toBe('true')
+    await page.getByLabel('Charge of H under hypercharge', { exact: true }).fill('1/2x')
+    await expect.poll(() => messageNextTo(page, 'Charge of H under hypercharge')).toBe('A charge is a rational written "p/q" or an integer, e.g. "1/6"')
+    expect(await page.getByLabel('Charge of H under hypercharge', { exact: true }).getAttribute('aria-invalid')).toBe('true')
     await screenshot(page, 'theory-editor-bad-charge')
-    await page.getByLabel('Charge of H under Y', { exact: true }).fill('1/2')
-    await expect.poll(() => messageNextTo(page, 'Charge of H under Y')).toBe('')
+    await page.getByLabel('Charge of H under hypercharge', { exact: true }).fill('1/2')
+    await expect.poll(() => messageNextTo(page, 'Charge of H under hypercharge')).toBe('')
 
     await page.getByRole('button', { name: 'Create theory' }).click()
     await page.waitForURL(/\/theories\/\d+\/edit$/)
@@ -95,10 +95,14 @@ describe('the theory editor in a real browser', () => {
     const upload = page.locator('#theory-upload')
     await upload.setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"name": "half a file", ') })
     await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toMatch(/^broken\.json is not valid JSON/)
-    const bad = { name: 'Bad', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'F' }] }
+    const bad = { name: 'Bad', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'field-strength' }] }
     await upload.setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) })
     await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('Field 1 "phi", gauge group of the field strength is required: choose the gauge group whose field strength this is')
     expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT') // nothing replaced
+    const oldLetters = { name: 'Old', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] }
+    await upload.setInputFiles({ name: 'old.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(oldLetters)) })
+    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('"S" is the old one-letter spelling; write "scalar" (the other Lorentz kinds are "left-weyl", "right-weyl", "field-strength")')
+    expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT')
     await screenshot(page, 'theory-editor-upload-error')
     await page.setViewportSize({ width: 800, height: 1000 })
     await screenshot(page, 'theory-editor-tablet')
@@ -119,10 +123,10 @@ describe('the theory editor in a real browser', () => {
 
     // Symmetries and counting rules: a wrong number of Dynkin labels, a renamed group (the roster
     // follows it), a new counting rule with a bad weight, each message next to its input.
-    await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1')
-    await expect.poll(() => messageNextTo(page, 'Dynkin labels of Q under SU3c')).toBe('SU(3) takes 2 Dynkin labels, but [1] has 1')
-    await page.getByLabel('Dynkin labels of Q under SU3c', { exact: true }).fill('1,0')
-    await page.getByLabel('Name of Y', { exact: true }).fill('Hyper')
+    await page.getByLabel('Dynkin labels of Q under colour', { exact: true }).fill('1')
+    await expect.poll(() => messageNextTo(page, 'Dynkin labels of Q under colour')).toBe('SU(3) takes 2 Dynkin labels, but [1] has 1')
+    await page.getByLabel('Dynkin labels of Q under colour', { exact: true }).fill('1,0')
+    await page.getByLabel('Name of hypercharge', { exact: true }).fill('Hyper')
     expect(await page.getByLabel('Charge of H under Hyper', { exact: true }).inputValue()).toBe('1/2')
     await page.getByRole('button', { name: 'Add a counting rule' }).click()
     await page.locator('#rule-0-name').fill('momentum')

@@ -6,7 +6,7 @@ export const SMALL_THEORY = {
   name: 'Two scalars',
   frame: 'relativistic',
   groups: [{ name: 'U', type: 'U1', gauge: true }],
-  fields: [{ name: 'phi', lorentz: 'S', charges: { U: '1' } }, { name: 'A', lorentz: 'F', gaugeOf: 'U' }],
+  fields: [{ name: 'phi', lorentz: 'scalar', charges: { U: '1' } }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' }],
 }
 
 /** U(1) gauge theory with a charged Dirac fermion (two Weyl fields) and a real scalar: integrate-out cases. */
@@ -14,8 +14,8 @@ export const DIRAC_AND_SCALAR = {
   name: 'Heavy electron and a scalar', frame: 'relativistic',
   groups: [{ name: 'QED', type: 'U1', gauge: true }],
   fields: [
-    { name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } },
-    { name: 'S', lorentz: 'S', real: true }, { name: 'A', lorentz: 'F', gaugeOf: 'QED' },
+    { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } },
+    { name: 'S', lorentz: 'scalar', real: true }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' },
   ],
 }
 

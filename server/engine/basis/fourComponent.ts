@@ -37,13 +37,13 @@ function classify(legs: Particle[], l: LorentzStructure, f: number, g: number, l
   if (x === g) return { a: f, b: g, kind: 'S' }
   if (isAngle(f) !== isAngle(g)) {
     const p = legs[x]!
-    if (x === y && p.lorentz === 'S' && l.derivs[x] === 1 && angle[x]!.length === 1 && square[x]!.length === 1) return { a: f, b: g, kind: 'V', x }
+    if (x === y && p.lorentz === 'scalar' && l.derivs[x] === 1 && angle[x]!.length === 1 && square[x]!.length === 1) return { a: f, b: g, kind: 'V', x }
     if (x !== y && legs[x]!.fermion && legs[y]!.fermion && left.has(x) && left.has(y) && isAngle(x) !== isAngle(y)) return { a: f, b: g, kind: 'VV', c: x, d: y }
     return null
   }
   const p = legs[x]!
   const wanted = isAngle(f) ? angle[x]! : square[x]!
-  if (x === y && p.lorentz === 'F' && l.derivs[x] === 0 && wanted.length === 2 && angle[x]!.length + square[x]!.length === 2) return { a: f, b: g, kind: 'T', x }
+  if (x === y && p.lorentz === 'field-strength' && l.derivs[x] === 0 && wanted.length === 2 && angle[x]!.length + square[x]!.length === 2) return { a: f, b: g, kind: 'T', x }
   return null
 }
 

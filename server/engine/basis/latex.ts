@@ -17,8 +17,8 @@ export function letter(list: string[], i: number): string {
 }
 
 export function fieldSymbol(p: Particle): string {
-  const base = p.lorentz === 'F' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
-  return p.conj && p.lorentz !== 'F' ? `{${base}^{\\dagger}}` : base
+  const base = p.lorentz === 'field-strength' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
+  return p.conj && p.lorentz !== 'field-strength' ? `{${base}^{\\dagger}}` : base
 }
 
 /**

@@ -35,8 +35,8 @@ export function parityPartners(particles: Particle[]): Map<string, string> {
   const map = new Map<string, string>()
   const byLabel = new Map(particles.map((p) => [p.label, p]))
   for (const p of particles) {
-    if (p.lorentz === 'S') map.set(p.label, p.label)
-    if (p.lorentz === 'F') map.set(p.label, p.conjugate)
+    if (p.lorentz === 'scalar') map.set(p.label, p.label)
+    if (p.lorentz === 'field-strength') map.set(p.label, p.conjugate)
   }
   const matched = new Set<string>()
   for (const p of particles) {

@@ -1,8 +1,8 @@
 /**
  * Particles (on-shell legs) of a theory, in the all-outgoing helicity convention:
- * - a left-handed Weyl field ψ (lorentz "L") gives the leg ψ of helicity −1/2 (one λ) and
- *   its conjugate ψ* of helicity +1/2 (one λ̃); "R" is the mirror image (χ: +1/2, χ*: −1/2);
- * - a field strength X (lorentz "F") gives X_L = self-dual half, helicity −1 (λλ), and
+ * - a left-handed Weyl field ψ (lorentz "left-weyl") gives the leg ψ of helicity −1/2 (one λ) and
+ *   its conjugate ψ* of helicity +1/2 (one λ̃); "right-weyl" is the mirror image (χ: +1/2, χ*: −1/2);
+ * - a field strength X (lorentz "field-strength") gives X_L = self-dual half, helicity −1 (λλ), and
  *   X_R, helicity +1 (λ̃λ̃); they are each other's conjugates;
  * - a scalar H gives H and, unless real, H*.
  * SU(N) representations: fundamental (one upper index), antifundamental (one lower index),
@@ -11,6 +11,7 @@
 import { EngineInputError } from '../errors'
 import { parseRational, neg as ratNeg, type Rational } from '../exact/rational'
 import type { Theory, TheoryField } from '../../../shared/schemas/theory'
+import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 
 export type SuKind = 'fund' | 'anti' | 'adj' | 'singlet'
 
@@ -19,7 +20,7 @@ export interface Particle {
   label: string
   field: string
   conj: boolean
-  lorentz: 'S' | 'L' | 'R' | 'F'
+  lorentz: LorentzKind
   /** Twice the helicity. */
   helicity2: number
   /** Spinors of the undifferentiated field: angle (λ) and square (λ̃) counts. */
@@ -51,6 +52,11 @@ function suKind(fieldName: string, group: string, n: number, labels: readonly nu
   throw new EngineInputError('theoryParticles', `Field ${fieldName} sits in the representation [${key}] of ${group} = SU(${n}); explicit bases support the fundamental, antifundamental, adjoint and singlet only (counts support any)`)
 }
 
+/** Angle spinors, square spinors and doubled mass dimension of the undifferentiated field. */
+const SPIN: Record<LorentzKind, readonly [number, number, number]> = {
+  'scalar': [0, 0, 2], 'left-weyl': [1, 0, 3], 'right-weyl': [0, 1, 3], 'field-strength': [2, 0, 4],
+}
+
 const conjKind: Record<SuKind, SuKind> = { fund: 'anti', anti: 'fund', adj: 'adj', singlet: 'singlet' }
 
 function baseParticle(t: Theory, f: TheoryField): Particle {
@@ -60,7 +66,7 @@ function baseParticle(t: Theory, f: TheoryField): Particle {
   for (const g of t.groups) {
     if (g.type === 'SU') {
       const n = g.n ?? 0
-      if (f.lorentz === 'F') su[g.name] = f.gaugeOf === g.name ? 'adj' : 'singlet'
+      if (f.lorentz === 'field-strength') su[g.name] = f.gaugeOf === g.name ? 'adj' : 'singlet'
       else su[g.name] = suKind(f.name, g.name, n, f.reps?.[g.name] ?? new Array(n - 1).fill(0))
     } else if (g.type === 'U1') {
       u1[g.name] = parseRational(String(f.charges?.[g.name] ?? '0'))
@@ -69,14 +75,15 @@ function baseParticle(t: Theory, f: TheoryField): Particle {
       zn[g.name] = ((Number(f.charges?.[g.name] ?? 0) % n) + n) % n
     }
   }
-  const spin = { S: [0, 0, 2], L: [1, 0, 3], R: [0, 1, 3], F: [2, 0, 4] }[f.lorentz] as [number, number, number]
-  const label = f.lorentz === 'F' ? `${f.name}_L` : f.name
-  const selfConj = f.lorentz === 'S' && f.real === true
+  const spin = SPIN[f.lorentz]
+  const strength = f.lorentz === 'field-strength'
+  const label = strength ? `${f.name}_L` : f.name
+  const selfConj = f.lorentz === 'scalar' && f.real === true
   return {
     label, field: f.name, conj: false, lorentz: f.lorentz, helicity2: spin[1] - spin[0],
-    angles: spin[0], squares: spin[1], fermion: f.lorentz === 'L' || f.lorentz === 'R', dim2: spin[2],
+    angles: spin[0], squares: spin[1], fermion: f.lorentz === 'left-weyl' || f.lorentz === 'right-weyl', dim2: spin[2],
     su, u1, zn, flavors: f.flavors ?? 1, flavored: f.flavors !== undefined,
-    conjugate: f.lorentz === 'F' ? `${f.name}_R` : selfConj ? f.name : `${f.name}*`,
+    conjugate: strength ? `${f.name}_R` : selfConj ? f.name : `${f.name}*`,
   }
 }
 

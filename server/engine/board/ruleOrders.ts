@@ -9,10 +9,11 @@ import { orderOfOperator, formatOrder } from '../rules/orderOf'
 import { blocksFromClassKey } from '../rules/classKeyBlocks'
 import { lightFields } from '../heavy/lightFields'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
+import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 
 export interface RuleTheory {
   frame?: string
-  fields?: ReadonlyArray<{ name: string, lorentz: 'S' | 'L' | 'R' | 'F', reps?: Record<string, number[]>, charges?: Record<string, string | number>, real?: boolean, flavors?: number }>
+  fields?: ReadonlyArray<{ name: string, lorentz: LorentzKind, reps?: Record<string, number[]>, charges?: Record<string, string | number>, real?: boolean, flavors?: number }>
   groups?: ReadonlyArray<{ name: string, type: string, n?: number, gauge?: boolean }>
   heavy?: { particle: { name: string }, antiparticle?: { name: string } }
   countingRules?: CountingRule[]

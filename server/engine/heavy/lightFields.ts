@@ -6,15 +6,17 @@
  */
 import { parseRational, isZero, add, neg, type Rational, ZERO } from '../exact/rational'
 import { fieldTex } from './fieldTex'
+import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 
 export interface TheoryGroupLike { name: string; type: string; n?: number; gauge?: boolean }
 export interface TheoryFieldLike {
   name: string
-  lorentz: string
+  lorentz: LorentzKind
   reps?: Record<string, number[]>
   charges?: Record<string, string | number>
   real?: boolean
   flavors?: number
+  gaugeOf?: string
 }
 
 export type LightKind = 'dirac' | 'complexScalar' | 'realScalar'
@@ -31,12 +33,12 @@ export interface LightField {
   parts: string[]
 }
 
-/** Lorentz word of a roster field, accepting the one-letter codes and the spelled-out words. */
-export function lorentzKind(f: { lorentz: string }): 'scalar' | 'left' | 'right' | 'strength' {
+/** The heavy–light sector's name of a roster field's Lorentz kind (shared/schemas/lorentzKind.ts). */
+export function lorentzKind(f: { lorentz: LorentzKind }): 'scalar' | 'left' | 'right' | 'strength' {
   const l = f.lorentz
-  if (l === 'S' || l === 'scalar') return 'scalar'
-  if (l === 'L' || l === 'left-weyl') return 'left'
-  if (l === 'R' || l === 'right-weyl') return 'right'
+  if (l === 'scalar') return 'scalar'
+  if (l === 'left-weyl') return 'left'
+  if (l === 'right-weyl') return 'right'
   return 'strength'
 }
 

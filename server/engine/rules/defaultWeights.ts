@@ -5,10 +5,11 @@
 import { EngineInputError } from '../errors'
 import { parseRational, rat, type Rational } from '../exact/rational'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
+import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 
 /** The context a rule is applied in: a relativistic field list or a heavy-particle frame. */
 export type RuleContext =
-  | { frame: 'relativistic'; fields: ReadonlyArray<{ name: string; lorentz: 'S' | 'L' | 'R' | 'F' }> }
+  | { frame: 'relativistic'; fields: ReadonlyArray<{ name: string; lorentz: LorentzKind }> }
   | { frame: 'heavy'; particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }
 
 /** A rule with every weight resolved to an exact rational. */
@@ -19,8 +20,8 @@ export interface ResolvedRule {
   offset: Rational
 }
 
-const LORENTZ_DIMENSION: Record<'S' | 'L' | 'R' | 'F', Rational> = {
-  S: rat(1), L: rat(3, 2), R: rat(3, 2), F: rat(2),
+const LORENTZ_DIMENSION: Record<LorentzKind, Rational> = {
+  'scalar': rat(1), 'left-weyl': rat(3, 2), 'right-weyl': rat(3, 2), 'field-strength': rat(2),
 }
 
 /**
@@ -62,7 +63,7 @@ function relativisticDefaults(rule: CountingRule, fields: RuleContext & { frame:
       const d = LORENTZ_DIMENSION[f.lorentz]
       out.set(f.name, d)
       out.set(`${f.name}*`, d)
-      if (f.lorentz === 'F') { out.set(`${f.name}_L`, d); out.set(`${f.name}_R`, d) }
+      if (f.lorentz === 'field-strength') { out.set(`${f.name}_L`, d); out.set(`${f.name}_R`, d) }
     }
   } else if (rule.kind === 'momentumRatio') {
     out.set('D', rat(1))

@@ -29,13 +29,13 @@ function gaugeHints(f: TheoryField, groups: readonly TheoryGroup[]): GeneratedCl
  * Hints of the operator classes a removed field can generate.
  * Conventions: "tree" needs a coupling linear in the heavy field (to be checked on the
  * Lagrangian); "one-loop" arises from any gauge charge.
- * @example generatedClassHints({ name: 'S', lorentz: 'S', real: true }, [])[0].loop // 'tree'
+ * @example generatedClassHints({ name: 'S', lorentz: 'scalar', real: true }, [])[0].loop // 'tree'
  * Method: rules of thumb of tree-level and one-loop matching.
  * Reference: J. de Blas, J. C. Criado, M. Pérez-Victoria, J. Santiago, JHEP 03 (2018) 109 (tree level);
  *   B. Henning, X. Lu, H. Murayama, JHEP 01 (2016) 023 (one loop).
  */
 export function generatedClassHints(f: TheoryField, groups: readonly TheoryGroup[]): GeneratedClassHint[] {
-  const tree: GeneratedClassHint[] = f.lorentz === 'S'
+  const tree: GeneratedClassHint[] = f.lorentz === 'scalar'
     ? [{ field: f.name, loop: 'tree', description: `if ${f.name} couples linearly to light fields (a Yukawa coupling to a light fermion bilinear or a trilinear with light scalars): four-fermion operators, scalar-fermion operators and scalar-potential operators from its propagator (dimension 6 and up)` }]
     : [{ field: f.name, loop: 'tree', description: `if ${f.name} mixes with light fermions through a Yukawa coupling (vector-like fermion): operators with two fermions, scalars and derivatives (e.g. ψ^2 H^2 D, ψ^2 H^3 type) at dimension 6` }]
   const loop: GeneratedClassHint[] = [{ field: f.name, loop: 'one-loop', description: `scalar and fermion operators from loops of ${f.name} with its couplings to light fields (dipoles if it couples to light fermions and a gauge field)` }]

@@ -25,7 +25,7 @@ function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[
   return names.map((n) => {
     const f = byName.get(n)
     if (!f) throw new EngineInputError('integrateOut', `Theory "${theory.name}" has no field "${n}"; choose fields of its roster`)
-    if (f.lorentz === 'F') throw new EngineInputError('integrateOut', `Field "${n}" is a gauge field strength; only matter fields can be integrated out`)
+    if (f.lorentz === 'field-strength') throw new EngineInputError('integrateOut', `Field "${n}" is a gauge field strength; only matter fields can be integrated out`)
     return f
   })
 }

@@ -22,7 +22,7 @@ export interface ThresholdShift {
 
 /** 2/3 per Weyl fermion, 1/3 per complex scalar, 1/6 per real scalar (Machacek & Vaughn 1983). */
 function spinWeight(f: TheoryField): Rational {
-  if (f.lorentz === 'L' || f.lorentz === 'R') return rat(2, 3)
+  if (f.lorentz === 'left-weyl' || f.lorentz === 'right-weyl') return rat(2, 3)
   return f.real ? rat(1, 6) : rat(1, 3)
 }
 
@@ -38,7 +38,7 @@ function multiplicity(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGro
 
 /**
  * Contribution of one matter field to the one-loop gauge β coefficient b of group g.
- * @example fieldBetaContribution(top partner TL (SU3c [1,0]), SU3c, groups) // 1/3 (a Dirac quark gives 2/3)
+ * @example fieldBetaContribution(top partner TL (colour [1,0]), colour, groups) // 1/3 (a Dirac quark gives 2/3)
  * Method: b = −(11/3) C2(G) + (2/3) Σ_Weyl T(R) + (1/3) Σ_complex scalars T(R) (+1/6 for real scalars),
  *   T(R) the Dynkin index (T(fund) = 1/2) or Q² for U(1), times the multiplicity under the other groups.
  * Reference: M. E. Machacek, M. T. Vaughn, Nucl. Phys. B 222 (1983) 83; D. R. T. Jones, Nucl. Phys. B 75 (1974) 531.
@@ -53,7 +53,7 @@ export function fieldBetaContribution(f: TheoryField, g: TheoryGroup, groups: re
   return mul(mul(spinWeight(f), t), multiplicity(f, g, groups))
 }
 
-/** True when the field transforms non-trivially under the group g (SU: non-zero Dynkin labels; U(1): non-zero charge; Z_n: false). @example isChargedUnder(H, SU2L) // true */
+/** True when the field transforms non-trivially under the group g (SU: non-zero Dynkin labels; U(1): non-zero charge; Z_n: false). @example isChargedUnder(H, weak) // true */
 export function isChargedUnder(field: TheoryField, g: TheoryGroup): boolean {
   if (g.type === 'SU') return (field.reps?.[g.name] ?? []).some(a => a !== 0)
   if (g.type === 'U1') {
@@ -67,15 +67,15 @@ export function isChargedUnder(field: TheoryField, g: TheoryGroup): boolean {
  * The gauge groups whose kinetic-term coefficient shifts at one loop when `removedFields`
  * are integrated out: every SU(n) or U(1) gauge group under which a removed field is
  * non-singlet (Z_n and global groups have no kinetic term).
- * @example thresholdShifts([{ name: 'T', lorentz: 'L', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } }], smGroups)
- *   // [{ group: 'SU3c', type: 'SU', fields: ['T'], betaShift: '1/3' }, { group: 'Y', type: 'U1', fields: ['T'], betaShift: '8/9' }]
+ * @example thresholdShifts([{ name: 'T', lorentz: 'left-weyl', reps: { colour: [1, 0] }, charges: { Y: '2/3' } }], smGroups)
+ *   // [{ group: 'colour', type: 'SU', fields: ['T'], betaShift: '1/3' }, { group: 'Y', type: 'U1', fields: ['T'], betaShift: '8/9' }]
  * Method: a heavy loop contributes to the gauge two-point function iff the field carries the
  *   gauge charge (Dynkin index or charge squared non-zero); Δb from fieldBetaContribution.
  * Reference: S. Weinberg, Phys. Lett. B 91 (1980) 51; L. J. Hall, Nucl. Phys. B 178 (1981) 75.
  */
 export function thresholdShifts(removedFields: readonly TheoryField[], groups: readonly TheoryGroup[]): ThresholdShift[] {
   for (const f of removedFields) {
-    if (f.lorentz === 'F') {
+    if (f.lorentz === 'field-strength') {
       throw new EngineInputError('thresholdShifts', `Field "${f.name}" is a gauge field strength; only matter fields can be integrated out`)
     }
   }

@@ -2,7 +2,7 @@
  * Gauge anomaly conditions of the chiral fermions of a theory.
  *
  * Conventions: every fermion is written as a left-handed Weyl field; a right-handed field
- * ("lorentz": "R") enters as its conjugate (conjugate SU(n) rep, negated U(1) charges).
+ * ("lorentz": "right-weyl") enters as its conjugate (conjugate SU(n) rep, negated U(1) charges).
  * Each Weyl field is weighted by its flavor number and the dimensions of its representations
  * under the other SU(n) groups. Only gauge groups (gauge: true) are checked: anomalies of
  * global symmetries are not inconsistencies. Z_n (discrete) anomalies are not checked.
@@ -20,7 +20,7 @@ import { suCubicAnomaly, suIndex } from '../group/irrep'
 import { suDimension } from '../group/weights'
 
 export interface AnomalyCondition {
-  /** e.g. "SU3c^3", "SU2L^2 Y", "Y^3", "Y X^2", "gravity^2 Y", "SU2L Witten". */
+  /** e.g. "colour^3", "weak^2 Y", "Y^3", "Y X^2", "gravity^2 Y", "weak Witten". */
   name: string
   /** Exact sum over left-handed Weyl fields, as a rational string. */
   sum: string
@@ -79,8 +79,8 @@ export function checkAnomalies(theory: Theory): AnomalyCondition[] {
 function leftHanded(theory: Theory): Weyl[] {
   const out: Weyl[] = []
   for (const f of theory.fields) {
-    if (f.lorentz !== 'L' && f.lorentz !== 'R') continue
-    const conj = f.lorentz === 'R'
+    if (f.lorentz !== 'left-weyl' && f.lorentz !== 'right-weyl') continue
+    const conj = f.lorentz === 'right-weyl'
     const reps = new Map<string, number[]>()
     for (const [g, a] of Object.entries(f.reps ?? {})) reps.set(g, conj ? a.slice().reverse() : a.slice())
     const charges = new Map<string, Rational>()

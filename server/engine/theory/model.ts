@@ -9,6 +9,7 @@
  * Conjugation reverses SU(n) Dynkin labels and negates U(1) and Z_n charges.
  */
 import type { Theory } from '../../../shared/schemas/theory'
+import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
 
@@ -49,6 +50,9 @@ export interface TheoryModel {
 
 const LORENTZ_DIM2: Record<LorentzType, number> = { S: 2, L: 3, R: 3, FL: 4, FR: 4 }
 
+/** The species type of a matter field's Lorentz kind (a field strength splits into FL, FR). */
+const FILE_KIND_TYPE: Record<Exclude<LorentzKind, 'field-strength'>, LorentzType> = { 'scalar': 'S', 'left-weyl': 'L', 'right-weyl': 'R' }
+
 /**
  * Resolve a validated theory into species. `nf` (1..6) overrides the flavor number of every
  * field that declares "flavors". Throws EngineInputError for frame "heavy".
@@ -71,7 +75,7 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
     const flavored = f.flavors !== undefined
     const flavors = flavored ? (opts.nf ?? f.flavors!) : 1
     const base = { fieldIndex, fieldName: f.name, flavored, flavors }
-    if (f.lorentz === 'F') {
+    if (f.lorentz === 'field-strength') {
       const su = model.su.map((g) => (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)))
       const common = { ...base, fermion: false, dim2: 4, su, u1: model.u1.map(() => ZERO), zn: model.zn.map(() => 0) }
       const i = model.species.length
@@ -82,10 +86,10 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
     const su = model.su.map((g) => (f.reps?.[g.name] ?? zeros(g.n - 1)).slice())
     const u1 = model.u1.map((g) => parseRational(String(f.charges?.[g.name] ?? '0')))
     const zn = model.zn.map((g) => mod(Number(f.charges?.[g.name] ?? 0), g.n))
-    const lorentz: LorentzType = f.lorentz as 'S' | 'L' | 'R'
+    const lorentz: LorentzType = FILE_KIND_TYPE[f.lorentz]
     const fermion = lorentz !== 'S'
     const i = model.species.length
-    const self = f.lorentz === 'S' && f.real === true
+    const self = f.lorentz === 'scalar' && f.real === true
     model.species.push({ ...base, key: f.name, conjugate: false, lorentz, fermion, dim2: LORENTZ_DIM2[lorentz], su, u1, zn, partner: self ? i : i + 1 })
     if (self) return
     const conjLorentz: LorentzType = lorentz === 'L' ? 'R' : lorentz === 'R' ? 'L' : 'S'

@@ -13,7 +13,8 @@ const isSuSinglet = (f: TheoryField) => Object.values(f.reps ?? {}).every((label
 
 /** Two removed Weyl fields that form one Dirac fermion: L and R with equal charges, or two of one chirality with opposite charges, under every U(1). */
 function diracPartners(a: TheoryField, b: TheoryField, u1s: TheoryGroup[]): boolean {
-  if (!['L', 'R'].includes(a.lorentz) || !['L', 'R'].includes(b.lorentz)) return false
+  const weyl = ['left-weyl', 'right-weyl']
+  if (!weyl.includes(a.lorentz) || !weyl.includes(b.lorentz)) return false
   if ((a.flavors ?? 1) !== (b.flavors ?? 1)) return false
   return u1s.every((g) => (a.lorentz !== b.lorentz ? equals(charge(a, g), charge(b, g)) : equals(charge(a, g), neg(charge(b, g)))))
 }
@@ -32,7 +33,7 @@ export function applicableMatching(parent: Theory, removed: string[], scaleText:
   for (const [i, a] of fields.entries()) {
     for (const b of fields.slice(i + 1)) {
       if (used.has(a.name) || used.has(b.name) || !diracPartners(a, b, u1s)) continue
-      const gauge = u1s.find((g) => g.gauge && !isZero(charge(a, g)) && parent.fields.some((f) => f.lorentz === 'F' && f.gaugeOf === g.name))
+      const gauge = u1s.find((g) => g.gauge && !isZero(charge(a, g)) && parent.fields.some((f) => f.lorentz === 'field-strength' && f.gaugeOf === g.name))
       if (!gauge) continue
       used.add(a.name).add(b.name)
       const q = ratText(charge(a, gauge))

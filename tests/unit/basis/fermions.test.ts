@@ -4,9 +4,9 @@ import { rat } from '../../../server/engine/exact/rational'
 
 const weyl = {
   name: 'four Weyl fermions', frame: 'relativistic' as const, groups: [],
-  fields: ['a', 'b', 'c', 'd'].map((name) => ({ name, lorentz: 'L' as const })),
+  fields: ['a', 'b', 'c', 'd'].map((name) => ({ name, lorentz: 'left-weyl' as const })),
 }
-const oneWeyl = { name: 'one Weyl fermion', frame: 'relativistic' as const, groups: [], fields: [{ name: 'psi', lorentz: 'L' as const }] }
+const oneWeyl = { name: 'one Weyl fermion', frame: 'relativistic' as const, groups: [], fields: [{ name: 'psi', lorentz: 'left-weyl' as const }] }
 
 describe('Weyl fermions', () => {
   it('four distinct left-handed fermions (ψ1ψ2)(ψ3ψ4): 3 pairings, rank 2 (Schouten identity, common practice)', () => {

@@ -15,7 +15,7 @@ const photons = photonsJson as Theory
 const realScalar = realScalarJson as Theory
 const qed = qedJson as Theory
 const smeft = smeftJson as Theory
-const scalars = (names: string[]): Theory => ({ name: 'distinct real scalars', frame: 'relativistic', groups: [], fields: names.map((name) => ({ name, lorentz: 'S' as const, real: true })) })
+const scalars = (names: string[]): Theory => ({ name: 'distinct real scalars', frame: 'relativistic', groups: [], fields: names.map((name) => ({ name, lorentz: 'scalar' as const, real: true })) })
 const sum = (cs: ClassReport[], f: (c: ClassReport) => number | null): number => cs.reduce((s, c) => s + f(c)!, 0)
 
 describe('parity partners and the image of a class (conventions: parity.ts, parityPartners.ts)', () => {
@@ -118,7 +118,7 @@ describe('QED with one Dirac fermion (preset qed; Dirac bilinears under ψ → �
   })
   it('η = 1 convention: ψᵀCγ^μγ5ψ ∂_μa b (neutral Dirac pair, fermion number violated) is P-even — a polar vector (common practice, derived from γ^{μT} = −Cγ^μC⁻¹)', () => {
     const nd: Theory = { name: 'neutral Dirac', frame: 'relativistic', groups: [], fields: [
-      { name: 'NL', lorentz: 'L' }, { name: 'NR', lorentz: 'R' }, { name: 'a', lorentz: 'S', real: true }, { name: 'b', lorentz: 'S', real: true }] }
+      { name: 'NL', lorentz: 'left-weyl' }, { name: 'NR', lorentz: 'right-weyl' }, { name: 'a', lorentz: 'scalar', real: true }, { name: 'b', lorentz: 'scalar', real: true }] }
     const b = classBasis(nd, 'D NL NR a b')
     expect(b.rank).toBe(1)
     expect(describeOperators(b).map((o) => o.parity)).toEqual(['even'])
@@ -128,7 +128,7 @@ describe('QED with one Dirac fermion (preset qed; Dirac bilinears under ψ → �
 
 describe('P-eigen columns against the direct computation (common practice: the ±1 eigenspaces of an involution)', () => {
   const nd: Theory = { name: 'neutral Dirac', frame: 'relativistic', groups: [], fields: [
-    { name: 'NL', lorentz: 'L' }, { name: 'NR', lorentz: 'R' }, { name: 'a', lorentz: 'S', real: true }, { name: 'b', lorentz: 'S', real: true }] }
+    { name: 'NL', lorentz: 'left-weyl' }, { name: 'NR', lorentz: 'right-weyl' }, { name: 'a', lorentz: 'scalar', real: true }, { name: 'b', lorentz: 'scalar', real: true }] }
   const cases: [Theory, string][] = [[photons, 'A_L^2 A_R^2'], [scalars(['a', 'b', 'c', 'd', 'e']), 'D^4 a b c d e'], [qed, 'eL eL* eR eR*'], [qed, 'D^4 eL eL* eR eR*'], [nd, 'D NL NR a b']]
   it.each(cases)('%s %s: same P-even/P-odd counts with and without the P-eigen choice', (t, key) => {
     const direct = classBasis(t, key, { priorities: { preferParity: false } })

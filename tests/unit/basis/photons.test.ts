@@ -10,7 +10,7 @@ import { reconstructRational } from '../../../server/engine/finite/rationalRecon
 const photons = {
   name: 'photons', frame: 'relativistic' as const,
   groups: [{ name: 'QED', type: 'U1' as const, gauge: true }],
-  fields: [{ name: 'F', lorentz: 'F' as const, gaugeOf: 'QED' }],
+  fields: [{ name: 'F', lorentz: 'field-strength' as const, gaugeOf: 'QED' }],
 }
 
 type Op = (F: PrimeField, t: Tensor[]) => number

@@ -46,7 +46,7 @@ describe('choosing the basis under user priorities', () => {
 
 describe('command line scripts/basis.ts', () => {
   it('prints only JSON with the documented keys (real scalar, dimension 6: φ^6, common practice)', () => {
-    const theory = JSON.stringify({ name: 'phi', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] })
+    const theory = JSON.stringify({ name: 'phi', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] })
     const file = '/tmp/scalewright-basis-cli-test.json'
     execFileSync('node', ['-e', `require('fs').writeFileSync(${JSON.stringify(file)}, ${JSON.stringify(theory)})`])
     const out = execFileSync('node', ['--import', 'tsx', 'scripts/basis.ts', file, '--max-dim', '6'], { encoding: 'utf8' })

@@ -3,7 +3,7 @@ import { EngineCancelledError } from '../../../server/engine/errors'
 import { buildBasis, classBasis, rewriteOperator, BASIS_NOTE } from '../../../server/engine/basis/index'
 import { rat } from '../../../server/engine/exact/rational'
 
-const phi = { name: 'real scalar', frame: 'relativistic' as const, groups: [], fields: [{ name: 'phi', lorentz: 'S' as const, real: true }] }
+const phi = { name: 'real scalar', frame: 'relativistic' as const, groups: [], fields: [{ name: 'phi', lorentz: 'scalar' as const, real: true }] }
 
 describe('one real scalar', () => {
   it('dimension 6: only φ^6 survives (common practice); the tally matches the Hilbert series', () => {
@@ -49,7 +49,7 @@ describe('one real scalar', () => {
   })
   it('input errors for the theory: frame and unsupported representations', () => {
     expect(() => classBasis({ ...phi, frame: 'heavy' as const }, 'phi^6')).toThrow('Explicit bases from contact amplitudes need the relativistic frame, but this theory uses the heavy frame')
-    const bad = { name: 'x', frame: 'relativistic' as const, groups: [{ name: 'SU3', type: 'SU' as const, n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'S' as const, reps: { SU3: [2, 0] } }] }
+    const bad = { name: 'x', frame: 'relativistic' as const, groups: [{ name: 'SU3', type: 'SU' as const, n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar' as const, reps: { SU3: [2, 0] } }] }
     expect(() => classBasis(bad, 'S6^3')).toThrow('Field S6 sits in the representation [2,0] of SU3 = SU(3); explicit bases support the fundamental, antifundamental, adjoint and singlet only')
     expect(() => buildBasis(phi, { maxDim: 13 })).toThrow('The maximum dimension of an explicit basis must be a whole number from 5 to 12, not 13')
   })

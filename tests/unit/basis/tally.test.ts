@@ -15,7 +15,7 @@ vi.mock('../../../server/engine/counting/countOperators', async (orig) => {
 })
 
 const { buildBasis } = await import('../../../server/engine/basis/index')
-const phi = { name: 'phi', frame: 'relativistic' as const, groups: [], fields: [{ name: 'phi', lorentz: 'S' as const, real: true }] }
+const phi = { name: 'phi', frame: 'relativistic' as const, groups: [], fields: [{ name: 'phi', lorentz: 'scalar' as const, real: true }] }
 
 describe('tally check (rank must equal the Hilbert-series count: Henning, Lu, Melia & Murayama, JHEP 08 (2017) 016)', () => {
   it('reports a mismatch on the class and the dimension', () => {

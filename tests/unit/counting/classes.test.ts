@@ -81,11 +81,11 @@ describe('field-content enumeration against a brute-force oracle', () => {
         { name: 'Z3', type: 'Z', n: 3, gauge: false },
       ],
       fields: [
-        { name: 'a', lorentz: 'S', charges: { X: '1/3', Yp: '-2/7' } },
-        { name: 'b', lorentz: 'L', reps: { SU3: [1, 0] }, charges: { X: '-1/2', Z3: 1 } },
-        { name: 'c', lorentz: 'R', reps: { SU3: [0, 1] }, charges: { X: '1/6', Yp: '2/7' } },
-        { name: 'S', lorentz: 'S', charges: { X: '1', Z3: 2 } },
-        { name: 'F', lorentz: 'F', gaugeOf: 'X' },
+        { name: 'a', lorentz: 'scalar', charges: { X: '1/3', Yp: '-2/7' } },
+        { name: 'b', lorentz: 'left-weyl', reps: { SU3: [1, 0] }, charges: { X: '-1/2', Z3: 1 } },
+        { name: 'c', lorentz: 'right-weyl', reps: { SU3: [0, 1] }, charges: { X: '1/6', Yp: '2/7' } },
+        { name: 'S', lorentz: 'scalar', charges: { X: '1', Z3: 2 } },
+        { name: 'F', lorentz: 'field-strength', gaugeOf: 'X' },
       ],
     })
     const model = buildTheoryModel(theory)

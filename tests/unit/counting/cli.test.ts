@@ -28,7 +28,7 @@ describe('count CLI', () => {
   it('bad file or arguments: message on stderr, exit code 2, nothing on stdout', () => {
     const dir = mkdtempSync(join(tmpdir(), 'count-cli-'))
     const bad = join(dir, 'bad.json')
-    writeFileSync(bad, JSON.stringify({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { Y: '1/3' } }] }))
+    writeFileSync(bad, JSON.stringify({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3' } }] }))
     const r = run(bad, '--max-dim', '6')
     expect(r.status).toBe(2)
     expect(r.stdout).toBe('')

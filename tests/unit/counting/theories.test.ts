@@ -114,7 +114,7 @@ describe('discrete and global symmetries', () => {
     const t = parseTheory({
       name: 'Z2 scalar', frame: 'relativistic',
       groups: [{ name: 'P', type: 'Z', n: 2, gauge: false }],
-      fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { P: 1 } }],
+      fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { P: 1 } }],
     })
     expect(countOperators(t, { maxDim: 8 }).byDimension.map((d) => d.operators)).toEqual([0, 1, 0, 2])
   })
@@ -123,7 +123,7 @@ describe('discrete and global symmetries', () => {
     const t = parseTheory({
       name: 'O4', frame: 'relativistic',
       groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: false }, { name: 'U', type: 'U1', gauge: false }],
-      fields: [{ name: 'H', lorentz: 'S', reps: { SU2: [1] }, charges: { U: '1' } }],
+      fields: [{ name: 'H', lorentz: 'scalar', reps: { SU2: [1] }, charges: { U: '1' } }],
     })
     expect(countOperators(t, { maxDim: 6, minDim: 6 }).byDimension[0]!.classes).toEqual({ 'D^2 H^2 H*^2': 2, 'H^3 H*^3': 1 })
   })
@@ -140,21 +140,21 @@ describe('flavors as copies', () => {
       name: 'flavored', frame: 'relativistic',
       groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: true }, { name: 'Y', type: 'U1', gauge: true }],
       fields: [
-        { name: 'l', lorentz: 'L', reps: { SU2: [1] }, charges: { Y: '-1/2' }, flavors: 2 },
-        { name: 'e', lorentz: 'R', charges: { Y: '-1' }, flavors: 3 },
-        { name: 'h', lorentz: 'S', reps: { SU2: [1] }, charges: { Y: '1/2' } },
+        { name: 'l', lorentz: 'left-weyl', reps: { SU2: [1] }, charges: { Y: '-1/2' }, flavors: 2 },
+        { name: 'e', lorentz: 'right-weyl', charges: { Y: '-1' }, flavors: 3 },
+        { name: 'h', lorentz: 'scalar', reps: { SU2: [1] }, charges: { Y: '1/2' } },
       ],
     })
     const copies = parseTheory({
       ...flavored,
       name: 'copies',
       fields: [
-        { name: 'l1', lorentz: 'L', reps: { SU2: [1] }, charges: { Y: '-1/2' } },
-        { name: 'l2', lorentz: 'L', reps: { SU2: [1] }, charges: { Y: '-1/2' } },
-        { name: 'e1', lorentz: 'R', charges: { Y: '-1' } },
-        { name: 'e2', lorentz: 'R', charges: { Y: '-1' } },
-        { name: 'e3', lorentz: 'R', charges: { Y: '-1' } },
-        { name: 'h', lorentz: 'S', reps: { SU2: [1] }, charges: { Y: '1/2' } },
+        { name: 'l1', lorentz: 'left-weyl', reps: { SU2: [1] }, charges: { Y: '-1/2' } },
+        { name: 'l2', lorentz: 'left-weyl', reps: { SU2: [1] }, charges: { Y: '-1/2' } },
+        { name: 'e1', lorentz: 'right-weyl', charges: { Y: '-1' } },
+        { name: 'e2', lorentz: 'right-weyl', charges: { Y: '-1' } },
+        { name: 'e3', lorentz: 'right-weyl', charges: { Y: '-1' } },
+        { name: 'h', lorentz: 'scalar', reps: { SU2: [1] }, charges: { Y: '1/2' } },
       ],
     })
     const a = countOperators(flavored, { maxDim: 8 }).byDimension.map((d) => d.operators)

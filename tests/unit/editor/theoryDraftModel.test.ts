@@ -28,10 +28,10 @@ describe('theory draft round trip', () => {
 
   it('removing a group drops its column from every field', () => {
     const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
-    d.groups.splice(0, 1) // SU3c
+    d.groups.splice(0, 1) // colour
     const { theory } = draftToTheory(d)
     const q = (theory.fields as Array<{ name: string, reps?: Record<string, number[]> }>).find((f) => f.name === 'Q')!
-    expect(q.reps).toEqual({ SU2L: [1] })
+    expect(q.reps).toEqual({ weak: [1] })
   })
 })
 
@@ -42,10 +42,10 @@ describe('typed text that is not a number', () => {
     d.fields[1]!.flavors = 'three'
     d.maxOrder = '8.5'
     const { theory, issues } = draftToTheory(d)
-    expect(issues.map((i) => issueKey(i.path))).toEqual(['maxOrder', 'fields.0.reps.SU3c', 'fields.1.flavors'])
+    expect(issues.map((i) => issueKey(i.path))).toEqual(['maxOrder', 'fields.0.reps.colour', 'fields.1.flavors'])
     expect(issues[1]!.message).toBe('Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "1,x"')
     expect(issues[2]!.message).toBe('must be a whole number from 1 to 6, not "three"')
-    expect((theory.fields as Array<{ reps?: unknown }>)[0]!.reps).toEqual({ SU2L: [1] })
+    expect((theory.fields as Array<{ reps?: unknown }>)[0]!.reps).toEqual({ weak: [1] })
   })
 
   it('a bad charge reaches the schema, whose message is keyed to that input', () => {
@@ -53,7 +53,7 @@ describe('typed text that is not a number', () => {
     d.fields[5]!.charges[d.groups[2]!.uid] = '1/2x'
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
     expect(r.success).toBe(false)
-    expect(r.error!.issues.map((i) => issueKey(i.path))).toEqual(['fields.5.charges.Y'])
+    expect(r.error!.issues.map((i) => issueKey(i.path))).toEqual(['fields.5.charges.hypercharge'])
     expect(r.error!.issues[0]!.message).toBe('a charge is a rational written "p/q" or an integer, e.g. "1/6"')
   })
 
@@ -61,7 +61,7 @@ describe('typed text that is not a number', () => {
     const d = theoryToDraft({ name: 'x', frame: 'relativistic', groups: [], fields: [] })
     const f = newField()
     f.name = 'A'
-    f.lorentz = 'F'
+    f.lorentz = 'field-strength'
     d.fields.push(f)
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
     expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['fields.0.gaugeOf', 'is required: choose the gauge group whose field strength this is']])
@@ -81,8 +81,8 @@ describe('what the editor sends to the anomaly check', () => {
     expect(checkAnomalies(TheorySchema.parse(draftToTheory(d).theory))).toEqual([])
     d.fields.splice(4, 1)
     expect(checkAnomalies(TheorySchema.parse(draftToTheory(d).theory))).toEqual([
-      { name: 'Y^3', sum: '-3', ok: false },
-      { name: 'gravity^2 Y', sum: '-3', ok: false },
+      { name: 'hypercharge^3', sum: '-3', ok: false },
+      { name: 'gravity^2 hypercharge', sum: '-3', ok: false },
     ])
   })
 })

@@ -28,7 +28,7 @@ describe('several gauge groups at once', () => {
   it('a neutral particle with a photon in the roster keeps its magnetic moment σ·B and polarizabilities: 2, 2, 7 (common practice: the neutron in NRQED)', () => {
     const r = enumerateHeavy({
       heavy: { particle: { name: 'n', charges: { QED: '0' } }, gaugeGroup: 'QED', maxOrder: 3 },
-      groups: [{ name: 'QED', type: 'U1', gauge: true }], fields: [{ name: 'A', lorentz: 'F', gaugeOf: 'QED' } as never],
+      groups: [{ name: 'QED', type: 'U1', gauge: true }], fields: [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' } as never],
     })
     expect(r.charged).toBe(false)
     expect(r.gaugeGroups).toEqual([{ name: 'QED', kind: 'u1', coupled: false }])

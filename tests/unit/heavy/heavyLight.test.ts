@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest'
 import { enumerateHeavy } from '../../../server/engine/heavy'
 import { enumerateHeavyLight, type HeavyLightInput } from '../../../server/engine/heavy/heavyLight'
-import { lightFields } from '../../../server/engine/heavy/lightFields'
+import { lightFields, type TheoryFieldLike } from '../../../server/engine/heavy/lightFields'
 import type { LightCombo } from '../../../server/engine/heavy/lightStructure'
 import { EngineInputError } from '../../../server/engine/errors'
 
 const qed = [{ name: 'QED', type: 'U1', gauge: true }]
-const electron = [{ name: 'A', lorentz: 'F', gaugeOf: 'QED' }, { name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } }]
+const electron: TheoryFieldLike[] = [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' }, { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }]
 const muon = (over: Partial<HeavyLightInput> = {}): HeavyLightInput => ({
   particle: 'mu', heavy: { reps: {}, charges: { QED: '-1' } }, fields: electron, groups: qed, maxOrder: 2, parity: true, timeReversal: true, ...over,
 })
@@ -31,7 +31,7 @@ describe('heavy–light contact operators: a heavy lepton or nucleus with light 
     expect(enumerateHeavyLight(muon({ parity: false, timeReversal: false })).classes[0]!.count).toBe(8)
   })
   it('a Weyl fermion without a partner is named as left out, not silently dropped', () => {
-    const nu = [...electron, { name: 'nuL', lorentz: 'L' }]
+    const nu: TheoryFieldLike[] = [...electron, { name: 'nuL', lorentz: 'left-weyl' }]
     expect(enumerateHeavyLight(muon({ fields: nu })).unpaired).toEqual(['nuL'])
     const full = enumerateHeavy({ heavy: { particle: { name: 'mu', charges: { QED: '-1' } }, gaugeGroup: 'QED', maxOrder: 2 }, groups: qed, fields: nu })
     expect(full.heavyLightNote).toContain('Left out: nuL')
@@ -41,7 +41,7 @@ describe('heavy–light contact operators: a heavy lepton or nucleus with light 
 
 describe('a static heavy source and a light real scalar', () => {
   const scalar = (maxOrder: number, parity = true): HeavyLightInput => ({
-    particle: 'N', heavy: { reps: {}, charges: {} }, fields: [{ name: 'phi', lorentz: 'S', real: true }], groups: [], maxOrder, parity, timeReversal: true,
+    particle: 'N', heavy: { reps: {}, charges: {} }, fields: [{ name: 'phi', lorentz: 'scalar', real: true }], groups: [], maxOrder, parity, timeReversal: true,
   })
   it('order 0: ψ†ψφ; order 1: ψ†ψφ² (hand derivation, common practice)', () => {
     expect(enumerateHeavyLight(scalar(1)).classes.map((c) => [c.key, c.count])).toEqual([['N* N phi (1/m^0)', 1], ['N* N phi phi (1/m^1)', 1]])
@@ -57,13 +57,13 @@ describe('a static heavy source and a light real scalar', () => {
 
 describe('colour: a heavy quark with a light quark', () => {
   const su3 = [{ name: 'C', type: 'SU', n: 3, gauge: true }]
-  const quark = [{ name: 'qL', lorentz: 'L', reps: { C: [1, 0] } }, { name: 'qR', lorentz: 'R', reps: { C: [1, 0] } }]
+  const quark: TheoryFieldLike[] = [{ name: 'qL', lorentz: 'left-weyl', reps: { C: [1, 0] } }, { name: 'qR', lorentz: 'right-weyl', reps: { C: [1, 0] } }]
   const input: HeavyLightInput = { particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: quark, groups: su3, maxOrder: 2, parity: true, timeReversal: true }
   it('two colour structures (1⊗1 and T^a⊗T^a, i.e. δδ and crossed δδ) double the four spin structures: 8 at 1/m² (common practice: 3⊗3̄⊗3⊗3̄ has two singlets)', () => {
     expect(enumerateHeavyLight(input).classes.map((c) => c.count)).toEqual([8])
   })
   it('an adjoint light scalar is refused with the field named', () => {
-    const adj = [{ name: 'S8', lorentz: 'S', real: true, reps: { C: [1, 1] } }]
+    const adj: TheoryFieldLike[] = [{ name: 'S8', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }]
     expect(() => enumerateHeavyLight({ ...input, fields: adj })).toThrow(EngineInputError)
     expect(() => enumerateHeavyLight({ ...input, fields: adj })).toThrow('Light field S8 sits in [1,1] of C; heavy–light operators support only singlets, fundamentals and antifundamentals')
   })

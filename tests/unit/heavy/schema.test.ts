@@ -25,7 +25,7 @@ describe('a theory\'s heavy block against its groups and roster (common practice
   const theory = (heavy: Record<string, unknown>) => ({
     name: 'heavy test', frame: 'heavy',
     groups: [{ name: 'X', type: 'U1', gauge: true }, { name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'Bno', type: 'U1', gauge: false }, { name: 'P', type: 'Z', n: 2, gauge: true }],
-    fields: [{ name: 'A', lorentz: 'F', gaugeOf: 'X' }],
+    fields: [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'X' }],
     heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2, ...heavy },
   })
   const issues = (heavy: Record<string, unknown>) => {

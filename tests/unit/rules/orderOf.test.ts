@@ -8,8 +8,8 @@ import type { CountingRule } from '../../../shared/schemas/countingRules'
 const sm: RuleContext = {
   frame: 'relativistic',
   fields: [
-    { name: 'Q', lorentz: 'L' }, { name: 'u', lorentz: 'R' }, { name: 'L', lorentz: 'L' },
-    { name: 'H', lorentz: 'S' }, { name: 'G', lorentz: 'F' }, { name: 'B', lorentz: 'F' },
+    { name: 'Q', lorentz: 'left-weyl' }, { name: 'u', lorentz: 'right-weyl' }, { name: 'L', lorentz: 'left-weyl' },
+    { name: 'H', lorentz: 'scalar' }, { name: 'G', lorentz: 'field-strength' }, { name: 'B', lorentz: 'field-strength' },
   ],
 }
 const mass: CountingRule = { name: 'E/M', kind: 'massRatio' }

@@ -94,7 +94,7 @@ describe('runAlphaQED: one loop with step-function thresholds', () => {
 describe('consistency with the gauge β coefficient of the threshold data', () => {
   it('a Dirac lepton (two Weyl fields of charge −1) gives b = 4/3 and dα^-1/d ln μ = −b/(2π) = −2/(3π) (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83; Peskin & Schroeder §12.3)', () => {
     const qed = { name: 'QED', type: 'U1' as const, gauge: true }
-    const b = ['L', 'R'].map(l => fieldBetaContribution({ name: `mu${l}`, lorentz: l as 'L' | 'R', charges: { QED: '-1' } }, qed, [qed]))
+    const b = (['left-weyl', 'right-weyl'] as const).map(l => fieldBetaContribution({ name: `mu${l === 'left-weyl' ? 'L' : 'R'}`, lorentz: l, charges: { QED: '-1' } }, qed, [qed]))
     expect(ratText(sum(b))).toBe('4/3')
     const mu = CHARGED_LEPTONS[1]!
     const r = runAlphaQED({ muTo: mu.mass * Math.E, fermions: [mu] })

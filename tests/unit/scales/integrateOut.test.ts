@@ -8,20 +8,20 @@ const theory = parseTheory({
   name: 'SM plus T and S',
   frame: 'relativistic',
   groups: [
-    { name: 'SU3c', type: 'SU', n: 3, gauge: true },
-    { name: 'SU2L', type: 'SU', n: 2, gauge: true },
+    { name: 'colour', type: 'SU', n: 3, gauge: true },
+    { name: 'weak', type: 'SU', n: 2, gauge: true },
     { name: 'Y', type: 'U1', gauge: true },
     { name: 'Bno', type: 'U1', gauge: false },
   ],
   fields: [
-    { name: 'Q', lorentz: 'L', reps: { SU3c: [1, 0], SU2L: [1] }, charges: { Y: '1/6', Bno: '1/3' }, flavors: 3 },
-    { name: 'H', lorentz: 'S', reps: { SU2L: [1] }, charges: { Y: '1/2' } },
-    { name: 'TL', lorentz: 'L', reps: { SU3c: [1, 0] }, charges: { Y: '2/3', Bno: '1/3' } },
-    { name: 'TR', lorentz: 'R', reps: { SU3c: [1, 0] }, charges: { Y: '2/3', Bno: '1/3' } },
-    { name: 'S', lorentz: 'S', real: true },
-    { name: 'G', lorentz: 'F', gaugeOf: 'SU3c' },
-    { name: 'W', lorentz: 'F', gaugeOf: 'SU2L' },
-    { name: 'B', lorentz: 'F', gaugeOf: 'Y' },
+    { name: 'Q', lorentz: 'left-weyl', reps: { colour: [1, 0], weak: [1] }, charges: { Y: '1/6', Bno: '1/3' }, flavors: 3 },
+    { name: 'H', lorentz: 'scalar', reps: { weak: [1] }, charges: { Y: '1/2' } },
+    { name: 'TL', lorentz: 'left-weyl', reps: { colour: [1, 0] }, charges: { Y: '2/3', Bno: '1/3' } },
+    { name: 'TR', lorentz: 'right-weyl', reps: { colour: [1, 0] }, charges: { Y: '2/3', Bno: '1/3' } },
+    { name: 'S', lorentz: 'scalar', real: true },
+    { name: 'G', lorentz: 'field-strength', gaugeOf: 'colour' },
+    { name: 'W', lorentz: 'field-strength', gaugeOf: 'weak' },
+    { name: 'B', lorentz: 'field-strength', gaugeOf: 'Y' },
   ],
   countingRules: [{ name: 'custom', kind: 'custom', weights: { TL: '1', 'TL*': '1', H: '1' } }],
 })
@@ -30,7 +30,7 @@ describe('thresholdShifts', () => {
   it('a colour-triplet hypercharged fermion shifts the SU(3) and U(1)_Y kinetic terms, not SU(2) or a global U(1) (Weinberg, Phys. Lett. B 91 (1980) 51; Hall, Nucl. Phys. B 178 (1981) 75)', () => {
     const removed = theory.fields.filter(f => f.name === 'TL' || f.name === 'TR')
     expect(thresholdShifts(removed, theory.groups)).toEqual([
-      { group: 'SU3c', type: 'SU', fields: ['TL', 'TR'], betaShift: '2/3' },
+      { group: 'colour', type: 'SU', fields: ['TL', 'TR'], betaShift: '2/3' },
       { group: 'Y', type: 'U1', fields: ['TL', 'TR'], betaShift: '16/9' },
     ])
   })
@@ -40,7 +40,7 @@ describe('thresholdShifts', () => {
   })
 
   it('the Higgs doublet shifts SU(2) and Y (common practice)', () => {
-    expect(thresholdShifts(theory.fields.filter(f => f.name === 'H'), theory.groups).map(s => s.group)).toEqual(['SU2L', 'Y'])
+    expect(thresholdShifts(theory.fields.filter(f => f.name === 'H'), theory.groups).map(s => s.group)).toEqual(['weak', 'Y'])
   })
 
   it('a Dirac quark changes the SU(3) coefficient by 2/3, as in β0 = 11 − (2/3) n_f (Gross & Wilczek, PRL 30 (1973) 1343; Politzer, PRL 30 (1973) 1346)', () => {
@@ -51,18 +51,18 @@ describe('thresholdShifts', () => {
   it('all SM matter gives b_Y = 41/6, b_2 = 22/3 − 19/6 = 25/6, b_3 = 11 − 7 = 4 (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83: b = (41/6, −19/6, −7))', () => {
     const sm = parseTheory({
       name: 'SM', frame: 'relativistic',
-      groups: [{ name: 'SU3c', type: 'SU', n: 3, gauge: true }, { name: 'SU2L', type: 'SU', n: 2, gauge: true }, { name: 'Y', type: 'U1', gauge: true }],
+      groups: [{ name: 'colour', type: 'SU', n: 3, gauge: true }, { name: 'weak', type: 'SU', n: 2, gauge: true }, { name: 'Y', type: 'U1', gauge: true }],
       fields: [
-        { name: 'Q', lorentz: 'L', reps: { SU3c: [1, 0], SU2L: [1] }, charges: { Y: '1/6' }, flavors: 3 },
-        { name: 'u', lorentz: 'R', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' }, flavors: 3 },
-        { name: 'd', lorentz: 'R', reps: { SU3c: [1, 0] }, charges: { Y: '-1/3' }, flavors: 3 },
-        { name: 'L', lorentz: 'L', reps: { SU2L: [1] }, charges: { Y: '-1/2' }, flavors: 3 },
-        { name: 'e', lorentz: 'R', charges: { Y: '-1' }, flavors: 3 },
-        { name: 'H', lorentz: 'S', reps: { SU2L: [1] }, charges: { Y: '1/2' } },
+        { name: 'Q', lorentz: 'left-weyl', reps: { colour: [1, 0], weak: [1] }, charges: { Y: '1/6' }, flavors: 3 },
+        { name: 'u', lorentz: 'right-weyl', reps: { colour: [1, 0] }, charges: { Y: '2/3' }, flavors: 3 },
+        { name: 'd', lorentz: 'right-weyl', reps: { colour: [1, 0] }, charges: { Y: '-1/3' }, flavors: 3 },
+        { name: 'L', lorentz: 'left-weyl', reps: { weak: [1] }, charges: { Y: '-1/2' }, flavors: 3 },
+        { name: 'e', lorentz: 'right-weyl', charges: { Y: '-1' }, flavors: 3 },
+        { name: 'H', lorentz: 'scalar', reps: { weak: [1] }, charges: { Y: '1/2' } },
       ],
     })
     const s = thresholdShifts(sm.fields, sm.groups)
-    expect(s.map(x => [x.group, x.betaShift])).toEqual([['SU3c', '4'], ['SU2L', '25/6'], ['Y', '41/6']])
+    expect(s.map(x => [x.group, x.betaShift])).toEqual([['colour', '4'], ['weak', '25/6'], ['Y', '41/6']])
   })
 
   it('rejects a field strength', () => {
@@ -84,8 +84,8 @@ describe('integrateOut', () => {
 
   it('tags each (group, field) whose kinetic coefficient shifts', () => {
     expect(r.thresholdTags).toEqual([
-      { group: 'SU3c', field: 'TL', text: 'coefficient shifts when TL is integrated out', betaShift: '1/3' },
-      { group: 'SU3c', field: 'TR', text: 'coefficient shifts when TR is integrated out', betaShift: '1/3' },
+      { group: 'colour', field: 'TL', text: 'coefficient shifts when TL is integrated out', betaShift: '1/3' },
+      { group: 'colour', field: 'TR', text: 'coefficient shifts when TR is integrated out', betaShift: '1/3' },
       { group: 'Y', field: 'TL', text: 'coefficient shifts when TL is integrated out', betaShift: '8/9' },
       { group: 'Y', field: 'TR', text: 'coefficient shifts when TR is integrated out', betaShift: '8/9' },
     ])

@@ -4,12 +4,12 @@ import { ordersBelowTarget } from '../../../server/utils/scales/ladderEstimates'
 import type { Theory } from '../../../shared/schemas/theory'
 
 const qed = (fields: Theory['fields'], groups: Theory['groups'] = [{ name: 'QED', type: 'U1', gauge: true }]): Theory => ({
-  name: 'T', frame: 'relativistic', groups, fields: [...fields, { name: 'A', lorentz: 'F', gaugeOf: 'QED' }],
+  name: 'T', frame: 'relativistic', groups, fields: [...fields, { name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' }],
 })
 
 describe('which worked matching results apply to an integrate-out step', () => {
   it('a Dirac fermion of charge −1 written as L and R Weyl fields brings Euler–Heisenberg and the Uehling term (Heisenberg & Euler, Z. Phys. 98 (1936) 714; Uehling, Phys. Rev. 48 (1935) 55)', () => {
-    const t = qed([{ name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } }])
+    const t = qed([{ name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }])
     const m = applicableMatching(t, ['eL', 'eR'], 'm = 1 GeV')
     expect(m.map((x) => [x.id, x.fields, x.charge, x.group])).toEqual([['euler-heisenberg', ['eL', 'eR'], '-1', 'QED'], ['uehling', ['eL', 'eR'], '-1', 'QED']])
     // Euler–Heisenberg covariant form: (α²/90m⁴)[(FF)² + (7/4)(FF̃)²] (Heisenberg & Euler 1936).
@@ -17,21 +17,21 @@ describe('which worked matching results apply to an integrate-out step', () => {
   })
 
   it('two left-handed fields of opposite charge also form a Dirac fermion (common practice: ψ and the conjugate of its partner)', () => {
-    const t = qed([{ name: 'e', lorentz: 'L', charges: { QED: '-1' } }, { name: 'ec', lorentz: 'L', charges: { QED: '1' } }])
+    const t = qed([{ name: 'e', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'ec', lorentz: 'left-weyl', charges: { QED: '1' } }])
     expect(applicableMatching(t, ['e', 'ec'], 'M').map((x) => x.id)).toEqual(['euler-heisenberg', 'uehling'])
   })
 
   it('no result applies to a lone Weyl field, unequal charges, a neutral pair, a coloured pair or a theory without the photon (common practice)', () => {
-    const lone = qed([{ name: 'eL', lorentz: 'L', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'R', charges: { QED: '-1' } }])
+    const lone = qed([{ name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }])
     expect(applicableMatching(lone, ['eL'], 'M')).toEqual([])
-    const unequal = qed([{ name: 'a', lorentz: 'L', charges: { QED: '-1' } }, { name: 'b', lorentz: 'R', charges: { QED: '2' } }])
+    const unequal = qed([{ name: 'a', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'b', lorentz: 'right-weyl', charges: { QED: '2' } }])
     expect(applicableMatching(unequal, ['a', 'b'], 'M')).toEqual([])
-    const neutral = qed([{ name: 'a', lorentz: 'L' }, { name: 'b', lorentz: 'R' }])
+    const neutral = qed([{ name: 'a', lorentz: 'left-weyl' }, { name: 'b', lorentz: 'right-weyl' }])
     expect(applicableMatching(neutral, ['a', 'b'], 'M')).toEqual([])
-    const groups: Theory['groups'] = [{ name: 'QED', type: 'U1', gauge: true }, { name: 'SU3c', type: 'SU', n: 3, gauge: true }]
-    const coloured = qed([{ name: 'uL', lorentz: 'L', charges: { QED: '2/3' }, reps: { SU3c: [1, 0] } }, { name: 'uR', lorentz: 'R', charges: { QED: '2/3' }, reps: { SU3c: [1, 0] } }], groups)
+    const groups: Theory['groups'] = [{ name: 'QED', type: 'U1', gauge: true }, { name: 'colour', type: 'SU', n: 3, gauge: true }]
+    const coloured = qed([{ name: 'uL', lorentz: 'left-weyl', charges: { QED: '2/3' }, reps: { colour: [1, 0] } }, { name: 'uR', lorentz: 'right-weyl', charges: { QED: '2/3' }, reps: { colour: [1, 0] } }], groups)
     expect(applicableMatching(coloured, ['uL', 'uR'], 'M')).toEqual([])
-    const noPhoton: Theory = { name: 'T', frame: 'relativistic', groups: [{ name: 'B', type: 'U1', gauge: false }], fields: [{ name: 'a', lorentz: 'L', charges: { B: '1' } }, { name: 'b', lorentz: 'R', charges: { B: '1' } }] }
+    const noPhoton: Theory = { name: 'T', frame: 'relativistic', groups: [{ name: 'B', type: 'U1', gauge: false }], fields: [{ name: 'a', lorentz: 'left-weyl', charges: { B: '1' } }, { name: 'b', lorentz: 'right-weyl', charges: { B: '1' } }] }
     expect(applicableMatching(noPhoton, ['a', 'b'], 'M')).toEqual([])
   })
 })
