@@ -6,7 +6,7 @@
  * Returns median wall times (ms), with the total real parameters as a correctness stamp.
  */
 import { findPreset } from '../shared/presets/index'
-import { parseTheory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 import { buildBasis } from '../server/engine/basis/index'
 
 function median(xs: number[]): number {

@@ -6,7 +6,7 @@
  * resident memory after the runs.
  */
 import { findPreset } from '../shared/presets/index'
-import { parseTheory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 import { countOperators } from '../server/engine/counting/countOperators'
 
 interface Figure {

@@ -12,7 +12,7 @@
  * Exit code 1 with a message on stderr for bad input.
  */
 import { readFileSync } from 'node:fs'
-import { parseTheory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 import { buildBasis, type ClassReport } from '../server/engine/basis/index'
 import { heavyOutput } from './heavyCli'
 

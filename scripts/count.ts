@@ -11,7 +11,8 @@
  */
 import { existsSync, readFileSync } from 'node:fs'
 import { findPreset } from '../shared/presets/index'
-import { parseTheory, type Theory } from '../shared/schemas/theory'
+import type { Theory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 import { countOperators } from '../server/engine/counting/countOperators'
 import { heavyOutput } from './heavyCli'
 

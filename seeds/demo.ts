@@ -2,7 +2,7 @@ import type { Knex } from 'knex'
 import { DEMO_ADMIN, DEMO_GROUP, DEMO_MEMBERS, DEMO_PASSWORD } from './demoPeople'
 import { DEMO_THEORIES, DEMO_RUNS, DEMO_LADDER } from './demoTheories'
 import { LadderDocumentSchema } from '../shared/schemas/scaleRequests'
-import { parseTheory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 
 /**
  * Seed the demo into an empty database (does nothing when any account exists).

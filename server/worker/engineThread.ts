@@ -8,7 +8,7 @@ import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { towerGaugeContent } from '../engine/running/gauge/gaugeContent'
 import { gaugeRunningReport } from '../engine/running/gauge/report'
-import { parseTheory } from '../../shared/schemas/theory'
+import { parseTheory } from '../engine/theory/parseTheory'
 import type { EngineTask } from './engineTask'
 import { toThreadError } from './threadError'
 

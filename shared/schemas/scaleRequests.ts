@@ -2,8 +2,8 @@ import { z } from 'zod'
 import './zodMessages'
 import {
   DerivedScaleSchema, ExpansionParameterSchema, OrderListSchema, ScaleLadderInputSchema, ScaleSchema,
-} from '../../server/engine/scales/ladderSchema'
-import { SCALE_UNITS } from '../../server/engine/scales/units'
+} from './scaleLadder'
+import { SCALE_UNITS } from '../physics/scaleUnits'
 
 // Requests of the scale ladder, the tower (integrate out) and the running-coupling routes.
 // Every object is strict, so a misspelt key is a 400 naming it instead of being ignored.

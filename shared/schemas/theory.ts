@@ -4,9 +4,7 @@ import { CountingRuleSchema } from './countingRules'
 import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
-import { EngineInputError } from '../../server/engine/errors'
-import { suReality } from '../../server/engine/group/irrep'
-import { suDimension } from '../../server/engine/group/weights'
+import { irrepReality, weylDimension } from '../physics/suIrrep'
 
 /**
  * Theory file of Scalewright (JSON, uploaded by users and built by the editor).
@@ -130,8 +128,8 @@ function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): 
     if (g.type !== 'SU') { bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname); continue }
     if (!validSU(g.n)) continue // the symmetry's own n is reported there
     if (labels.length !== g.n! - 1) bad('reps', `SU(${g.n}) takes ${g.n! - 1} Dynkin label${g.n === 2 ? '' : 's'}, but [${labels.join(',')}] has ${labels.length}`, gname)
-    else if (suDimension(g.n!, labels) > MAX_REP_DIMENSION) {
-      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${labels.join(',')}] has dimension ${suDimension(g.n!, labels)}`, gname)
+    else if (weylDimension(g.n!, labels) > BigInt(MAX_REP_DIMENSION)) {
+      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${labels.join(',')}] has dimension ${weylDimension(g.n!, labels)}`, gname)
     }
     if (f.lorentz === 'field-strength' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from its gauge group; remove [${labels.join(',')}]`, gname)
   }
@@ -170,7 +168,7 @@ function checkRealScalar(f: TheoryField, groups: Map<string, TheoryGroup>, bad: 
   for (const [gname, labels] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
     if (g?.type !== 'SU' || !validSU(g.n) || labels.length !== (g.n ?? 0) - 1) continue
-    const reality = suReality(g.n ?? 0, labels)
+    const reality = irrepReality(g.n ?? 0, labels)
     if (reality !== 'real') bad('reps', `a real scalar must sit in a real representation, but [${labels.join(',')}] is ${reality}`, gname)
   }
 }
@@ -189,23 +187,4 @@ function isZeroCharge(q: string | number): boolean {
  */
 export function formatTheoryIssues(input: unknown, issues: readonly IssueLike[]): string {
   return issues.map((iss) => describeIssue(iss, input, 'the theory file')).join('\n')
-}
-
-/**
- * Parse and validate a theory file (a JSON string or an already parsed object).
- * Throws EngineInputError whose message lists every problem, one per line, e.g.
- * `Field 3 "phi", charge under Y: a real scalar must have zero U(1) charges, but this one is 1/3`.
- */
-export function parseTheory(json: unknown): Theory {
-  let input = json
-  if (typeof json === 'string') {
-    try {
-      input = JSON.parse(json)
-    } catch (e) {
-      throw new EngineInputError('parseTheory', `The theory file is not valid JSON (${(e as Error).message}); check its brackets, commas and quotes`)
-    }
-  }
-  const result = TheorySchema.safeParse(input)
-  if (!result.success) throw new EngineInputError('parseTheory', formatTheoryIssues(input, result.error.issues))
-  return result.data
 }

@@ -6,6 +6,7 @@ import type { Dynkin } from './types'
 import { checkDynkin, dynkinToPartition } from './labels'
 import { suDimension, suWeights } from './weights'
 import { type Rational, ZERO, div, mul, rat, sub } from '../exact/rational'
+import { irrepReality } from '../../../shared/physics/suIrrep'
 
 /**
  * Conjugate irrep: the Dynkin labels reversed.
@@ -26,10 +27,7 @@ export function suConjugate(n: number, dynkin: Dynkin): number[] {
  */
 export function suReality(n: number, dynkin: Dynkin): 'real' | 'pseudoreal' | 'complex' {
   checkDynkin('suReality', n, dynkin)
-  for (let i = 0; i < n - 1; i++) if (dynkin[i] !== dynkin[n - 2 - i]) return 'complex'
-  let exponent = 0n
-  for (let i = 1; i < n; i++) exponent += BigInt(i * (n - i)) * BigInt(dynkin[i - 1]!)
-  return exponent % 2n === 0n ? 'real' : 'pseudoreal'
+  return irrepReality(n, dynkin)
 }
 
 /**

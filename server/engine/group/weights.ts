@@ -5,6 +5,7 @@ import { EngineInputError } from '../errors'
 import type { Character, Dynkin } from './types'
 import { checkDynkin, dynkinKey, dynkinToPartition, epsilonToDynkin } from './labels'
 import { dominatedPartitions, kostka } from './kostka'
+import { weylDimension } from '../../../shared/physics/suIrrep'
 
 /** Largest irrep whose weights we enumerate (dimension), to keep memory bounded. */
 export const MAX_WEIGHT_DIMENSION = 5_000_000
@@ -23,16 +24,7 @@ const MAX_CACHED_ENTRIES = 4_000_000
  */
 export function suDimension(n: number, dynkin: Dynkin): number {
   checkDynkin('suDimension', n, dynkin)
-  const lambda = dynkinToPartition(dynkin)
-  let num = 1n
-  let den = 1n
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      num *= BigInt(lambda[i]! - lambda[j]! + j - i)
-      den *= BigInt(j - i)
-    }
-  }
-  const d = num / den
+  const d = weylDimension(n, dynkin)
   if (d > BigInt(Number.MAX_SAFE_INTEGER)) {
     throw new EngineInputError('suDimension', `The SU(${n}) representation [${dynkinKey(dynkin)}] has dimension ${d}, beyond 2^53; choose a smaller representation`)
   }

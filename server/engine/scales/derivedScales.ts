@@ -5,7 +5,7 @@
 import { EngineInputError } from '../errors'
 import { div, mul, parseRational, rat, toString as ratText, type Rational } from '../exact/rational'
 import { parseDecimal, rationalToNumber } from './decimal'
-import type { DerivedScaleInput } from './ladderSchema'
+import type { DerivedScaleInput } from '../../../shared/schemas/scaleLadder'
 import { fromMeV, isLengthUnit, UNIT_POWER_OF_TEN } from './units'
 
 export interface ResolvedScale { kind: 'energy' | 'length', valueMeV: number, native?: Rational }

@@ -1,7 +1,7 @@
 /** Scales of a theory: units, the scale ladder, and threshold data for towers. */
 export * from './units'
 export * from './decimal'
-export * from './ladderSchema'
+export * from '../../../shared/schemas/scaleLadder'
 export * from './scaleLadder'
 export * from './thresholdShifts'
 export * from './generatedClasses'

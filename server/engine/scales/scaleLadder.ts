@@ -9,7 +9,7 @@ import { parseDecimal, rationalToNumber } from './decimal'
 import {
   OrderListSchema, ScaleLadderInputSchema,
   type ExpansionParameterInput, type OrderSpec, type ScaleInput, type ScaleLadderInput,
-} from './ladderSchema'
+} from '../../../shared/schemas/scaleLadder'
 import { isLengthUnit, toMeV, UNIT_POWER_OF_TEN } from './units'
 import { derivedScale, powRational, type DerivedScale, type ResolvedScale } from './derivedScales'
 

@@ -1,5 +1,5 @@
 import { buildScaleLadder, type ScaleLadder } from '../../engine/scales/scaleLadder'
-import type { OrderSpec } from '../../engine/scales/ladderSchema'
+import type { OrderSpec } from '../../../shared/schemas/scaleLadder'
 import type { LadderDocument } from '../../../shared/schemas/scaleRequests'
 
 /** The computed ladder (sorted scales, derived scales, parameters, per-order estimates) of a stored document. */

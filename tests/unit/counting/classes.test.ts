@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { findPreset } from '../../../shared/presets/index'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { classKey, enumerateClasses, enumerateFieldContents, parseClassKey } from '../../../server/engine/counting/classes'
 import { lorentzSingletSeries } from '../../../server/engine/counting/lorentz'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'

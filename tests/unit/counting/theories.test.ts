@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { PRESETS, findPreset } from '../../../shared/presets/index'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { countOperators } from '../../../server/engine/counting/countOperators'
 import { EngineCancelledError, EngineInputError } from '../../../server/engine/errors'
 

@@ -5,7 +5,7 @@ import { relationStructures } from '../../../server/engine/heavy/candidates'
 import { expandStructure } from '../../../server/engine/heavy/structure'
 import { QuotientSpace } from '../../../server/engine/heavy/quotient'
 import { enumerateHeavyTheory } from '../../../server/engine/heavy'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 
 describe('the gauge-field symbol with 0, 1, 2 insertions is faithful through 1/m³', () => {
   const cands = symmetricCandidates(3).map((c) => c.element)

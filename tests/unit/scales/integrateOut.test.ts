@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { integrateOut } from '../../../server/engine/scales/integrateOut'
 import { thresholdShifts } from '../../../server/engine/scales/thresholdShifts'
 

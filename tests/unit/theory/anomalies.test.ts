@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { findPreset } from '../../../shared/presets/index'
-import { parseTheory, type Theory } from '../../../shared/schemas/theory'
+import type { Theory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { anomalyConditions, checkAnomalies } from '../../../server/engine/theory/anomalies'
 
 const smeft = parseTheory(findPreset('smeft')!.theory)

@@ -2,7 +2,8 @@ import { readdirSync, readFileSync } from 'node:fs'
 import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 import { PRESETS } from '../../../shared/presets/index'
-import { parseTheory, TheorySchema } from '../../../shared/schemas/theory'
+import { TheorySchema } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { EngineInputError } from '../../../server/engine/errors'
 
 const base = () => ({

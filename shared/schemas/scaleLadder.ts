@@ -4,8 +4,8 @@
  * Size limits live here so one request cannot ask for unbounded work.
  */
 import { z } from 'zod'
-import '../../../shared/schemas/zodMessages'
-import { SCALE_UNITS } from './units'
+import './zodMessages'
+import { SCALE_UNITS } from '../physics/scaleUnits'
 
 const NameSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,23}$/, {
   message: 'a name is a letter followed by up to 23 letters, digits or "_"',
