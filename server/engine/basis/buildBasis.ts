@@ -8,7 +8,7 @@ import { buildTheoryModel } from '../theory/model'
 import { enumerateClasses } from '../counting/classes'
 import { countOperators } from '../counting/countOperators'
 import { classBasis, BASIS_NOTE, type ClassBasis, type Priorities } from './classBasis'
-import { theoryParticles } from './particles'
+import { basisSpecies } from './species'
 import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
 import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { flavorDecomposition, type FlavorSummary } from './flavor'
@@ -86,7 +86,7 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
   const { maxDim, minDim = 5, nf } = opts
   if (!Number.isInteger(maxDim) || maxDim < 5 || maxDim > 12) throw new EngineInputError('buildBasis', `The maximum dimension of an explicit basis must be a whole number from 5 to 12, not ${maxDim}`)
   if (nf !== undefined && (!Number.isInteger(nf) || nf < 1 || nf > 6)) throw new EngineInputError('buildBasis', `The number of flavors must be a whole number from 1 to 6, not ${nf}`)
-  const particles = theoryParticles(theory)
+  const particles = basisSpecies(theory)
   const model = buildTheoryModel(theory, { nf: 1 })
   const counts = countOperators(theory, { maxDim, minDim, nf: 1 })
   const flavored = particles.some((p) => p.flavored && (nf ?? p.flavors) > 1)

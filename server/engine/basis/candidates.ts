@@ -40,7 +40,7 @@ export function gaugeFactorLists(t: Theory, c: OperatorClass): SuStructure[][] {
   const lists: SuStructure[][] = []
   for (const g of t.groups) {
     if (g.type !== 'SU') continue
-    const kinds = c.legs.map((p) => p.su[g.name] ?? 'singlet')
+    const kinds = c.legs.map((p) => p.suKind[g.name] ?? 'singlet')
     if (kinds.every((k) => k === 'singlet')) continue
     lists.push(suStructures(g.name, g.n ?? 0, kinds))
   }

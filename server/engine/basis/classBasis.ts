@@ -9,12 +9,14 @@ import type { PrimeField } from '../finite/primeField'
 import { PrimeSet } from '../finite/primeSet'
 import type { Theory } from '../../../shared/schemas/theory'
 import { parseClassKey, conjugateClass, type OperatorClass } from './classKey'
-import { theoryParticles, type Particle } from './particles'
+import { basisSpecies } from './species'
+import type { Species } from '../theory/model'
 import { classCandidates, type Candidate } from './candidates'
 import { pairRows, samplePoints, type SamplePoint } from './evaluation'
 import { identicalLegPermutations, type LegPermutation } from './symmetry'
 import { formatLorentz } from './inputSyntax'
 import { writtenTerms } from './writtenOperator'
+import { combinationText } from './combinationText'
 import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
@@ -25,7 +27,7 @@ import { parityColumns, reduceParityColumn, scaleRows } from './parityColumns'
 export const BASIS_NOTE = 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes'
 
 export interface Priorities {
-  /** Particle labels (e.g. "H", "H*") on which derivatives are preferred. */
+  /** Species labels (e.g. "H", "H*") on which derivatives are preferred. */
   derivativesOn?: string[]
   /** Operators (input syntax, per class key) to keep first when independent. */
   keep?: Record<string, string[]>
@@ -50,6 +52,8 @@ export interface Column {
   candidate?: Candidate
   /** For 'hermitian' columns: +1 for O + h.c., −1 for O − h.c. */
   conjSign?: 1 | -1
+  /** For 'hermitian' columns: the text of O. */
+  hermitianBase?: string
   /** For 'hermitian' columns: the partner combination vanishes, so O itself is Hermitian (up to a phase). */
   selfHermitian?: boolean
   /** P-eigen columns (classes mapped to themselves by parity): +1 for c + P(c), −1 for c − P(c). */
@@ -101,11 +105,11 @@ function hashSeed(s: string): number {
   return h
 }
 
-function derivativeScore(c: Candidate, legs: Particle[], preferred: Set<string>): number {
+function derivativeScore(c: Candidate, legs: Species[], preferred: Set<string>): number {
   return c.lorentz.derivs.reduce((s, d, i) => s + (preferred.has(legs[i]!.label) ? 0 : d), 0)
 }
 
-function buildColumns(particles: Particle[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
+function buildColumns(particles: Species[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
   const pref = new Set(pr?.derivativesOn ?? [])
   const keptTexts = pr?.keep?.[cls.key] ?? []
   const primes = PrimeSet.working()
@@ -146,7 +150,7 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
     const t = c.terms[0]!
     const bar = { lorentz: share(cacheL, conjugateLorentz(t.lorentz, pi)), gauge: share(cacheG, t.gauge.map((s) => conjugateSu(s, pi))) }
     return ([1, -1] as const).map((sg) => ({
-      text: `(${c.text}) ${sg === 1 ? '+' : '-'} h.c.`, source: 'hermitian' as const, candidate: c.candidate, conjSign: sg,
+      text: combinationText(c.text, 'h.c.', sg), hermitianBase: c.text, source: 'hermitian' as const, candidate: c.candidate, conjSign: sg,
       terms: [t, { ...bar, coeff: PrimeSet.working().image(sg) }],
     }))
   })
@@ -160,7 +164,7 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
  * the working primes must agree on the pivots (else EngineConsistencyError; finite/agreement.ts).
  */
 export function classBasis(theory: Theory, classKey: string | OperatorClass, opts: ClassOptions = {}): ClassBasis {
-  const particles = theoryParticles(theory)
+  const particles = basisSpecies(theory)
   const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
   const { candidates, gauge } = classCandidates(theory, cls)
   const perms = identicalLegPermutations(cls.legs)
@@ -217,7 +221,7 @@ function markSelfHermitian(columns: Column[], j: number, zero: boolean[]): { col
   if (c.source !== 'hermitian') return { column: c, halvings: 0 }
   const partner = c.conjSign === 1 ? j + 1 : j - 1
   if (zero[partner] !== true) return { column: { ...c, selfHermitian: false }, halvings: 0 }
-  return { column: { ...c, selfHermitian: true, terms: [c.terms[0]!], text: c.text.replace(/^\((.*)\) [+-] h\.c\.$/, '$1') }, halvings: 1 }
+  return { column: { ...c, selfHermitian: true, terms: [c.terms[0]!], text: c.hermitianBase! }, halvings: 1 }
 }
 
 function columnMatrix(F: PrimeField, pi: number, columns: Column[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {

@@ -1,39 +1,37 @@
 /**
- * Operator classes: a multiset of particles and a number k of covariant derivatives,
- * written as a key such as "D^2 H^2 H*^2", "G_L^3" or "Q Q* u u*".
- * Canonical order: "D^k" first, then particles in theory order (field, then conjugate).
+ * Operator classes of the explicit basis: a multiset of legs (species of the theory model)
+ * and a number k of covariant derivatives, keyed by theory/classKey.ts ("D^2 H^2 H*^2").
+ * Canonical leg order: theory order (field, then conjugate); identical legs are adjacent.
  */
 import { EngineInputError } from '../errors'
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
+import { formatClassKey, readClassKey } from '../theory/classKey'
 
 export interface OperatorClass {
   key: string
   k: number
   /** Legs in canonical order; identical particles are adjacent. */
-  legs: Particle[]
+  legs: Species[]
   /** Twice the mass dimension of the operators of this class. */
   dim2: number
 }
 
-/** Canonical key of a class. @example classKeyOf(2, [H,H,Hs,Hs]) // "D^2 H^2 H*^2" */
-export function classKeyOf(k: number, legs: Particle[]): string {
-  const parts: string[] = []
-  if (k > 0) parts.push(k === 1 ? 'D' : `D^${k}`)
-  let i = 0
-  while (i < legs.length) {
-    let j = i
-    while (j < legs.length && legs[j]!.label === legs[i]!.label) j++
-    parts.push(j - i === 1 ? legs[i]!.label : `${legs[i]!.label}^${j - i}`)
-    i = j
+/** Canonical key of a class (legs in canonical order). @example classKeyOf(2, [H,H,Hs,Hs]) // "D^2 H^2 H*^2" */
+export function classKeyOf(k: number, legs: Species[]): string {
+  const blocks: { label: string; power: number }[] = []
+  for (const p of legs) {
+    const last = blocks[blocks.length - 1]
+    if (last?.label === p.label) last.power++
+    else blocks.push({ label: p.label, power: 1 })
   }
-  return parts.join(' ')
+  return formatClassKey(k, blocks)
 }
 
 /**
  * Build a class from k and a multiset of legs (sorted into theory order).
  * @example makeClass(ps, 0, [Hs, H, H]).key // "H^2 H*"
  */
-export function makeClass(particles: Particle[], k: number, legs: Particle[]): OperatorClass {
+export function makeClass(particles: Species[], k: number, legs: Species[]): OperatorClass {
   const order = new Map(particles.map((p, i) => [p.label, i]))
   const sorted = [...legs].sort((a, b) => order.get(a.label)! - order.get(b.label)!)
   const dim2 = 2 * k + sorted.reduce((s, p) => s + p.dim2, 0)
@@ -41,32 +39,27 @@ export function makeClass(particles: Particle[], k: number, legs: Particle[]): O
 }
 
 /**
- * Parse a class key against the theory's particles.
+ * Parse a class key against the theory's species.
  * @example parseClassKey(ps, "D^2 H^2 H*^2").legs.length // 4
- * Throws EngineInputError naming the unknown token.
+ * Throws EngineInputError naming the unknown field, or when fewer than minLegs fields remain.
  */
-export function parseClassKey(particles: Particle[], key: string, minLegs = 3): OperatorClass {
+export function parseClassKey(particles: Species[], key: string, minLegs = 3): OperatorClass {
   const byLabel = new Map(particles.map((p) => [p.label, p]))
-  let k = 0
-  const legs: Particle[] = []
-  for (const tok of key.trim().split(/\s+/)) {
-    const m = /^(.+?)(?:\^(\d+))?$/.exec(tok)
-    if (!m) throw new EngineInputError('parseClassKey', `Cannot read "${tok}" in the class "${key}"; write a class as fields with powers, e.g. "D^2 phi^2 phi*^2"`)
-    const mult = m[2] === undefined ? 1 : Number(m[2])
-    if (m[1] === 'D') { k += mult; continue }
-    const p = byLabel.get(m[1]!)
-    if (!p) throw new EngineInputError('parseClassKey', `The class "${key}" names "${m[1]}", which is not a field of this theory (its fields are ${[...byLabel.keys()].join(', ')})`)
-    for (let i = 0; i < mult; i++) legs.push(p)
+  const { derivatives, blocks } = readClassKey(key)
+  const legs: Species[] = []
+  for (const b of blocks) {
+    const p = byLabel.get(b.label)
+    if (!p) throw new EngineInputError('parseClassKey', `The class "${key}" names "${b.label}", which is not a field of this theory (its fields are ${[...byLabel.keys()].join(', ')})`)
+    for (let i = 0; i < b.power; i++) legs.push(p)
   }
-  if (legs.length < minLegs) throw new EngineInputError('parseClassKey', `The class "${key}" has fewer than 3 fields; an operator class needs at least 3`)
-  return makeClass(particles, k, legs)
+  if (legs.length < minLegs) throw new EngineInputError('parseClassKey', `The class "${key}" has fewer than ${minLegs} fields; an operator class needs at least ${minLegs}`)
+  return makeClass(particles, derivatives, legs)
 }
 
 /**
  * Key of the conjugate class (every leg replaced by its conjugate).
  * @example conjugateClass(ps, class "L^2 H^2").key // "L*^2 H*^2"
  */
-export function conjugateClass(particles: Particle[], c: OperatorClass): OperatorClass {
-  const byLabel = new Map(particles.map((p) => [p.label, p]))
-  return makeClass(particles, c.k, c.legs.map((p) => byLabel.get(p.conjugate)!))
+export function conjugateClass(particles: Species[], c: OperatorClass): OperatorClass {
+  return makeClass(particles, c.k, c.legs.map((p) => particles[p.partner]!))
 }

@@ -26,11 +26,11 @@ export interface SamplePoint {
 export function samplePoints(F: PrimeField, t: Theory, c: OperatorClass, count: number, seed: number): SamplePoint[] {
   const rng = new SeededRandom(seed)
   const draw = (): number => rng.below(F.p)
-  const groups = t.groups.filter((g) => g.type === 'SU' && c.legs.some((p) => (p.su[g.name] ?? 'singlet') !== 'singlet'))
+  const groups = t.groups.filter((g) => g.type === 'SU' && c.legs.some((p) => (p.suKind[g.name] ?? 'singlet') !== 'singlet'))
   const out: SamplePoint[] = []
   for (let r = 0; r < count; r++) {
     const kin = randomKinematics(F, rng, c.legs.length, c.legs.length === 3 && r % 2 === 1 ? 'square' : 'angle')
-    const waves = groups.map((g) => c.legs.map((p) => randomSuWave(F, g.n ?? 0, p.su[g.name] ?? 'singlet', draw)))
+    const waves = groups.map((g) => c.legs.map((p) => randomSuWave(F, g.n ?? 0, p.suKind[g.name] ?? 'singlet', draw)))
     out.push({ kin, waves })
   }
   return out

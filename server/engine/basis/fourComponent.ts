@@ -12,7 +12,7 @@
  * the monomial does not pair up this way (derivatives on fermions, bosonic spinor
  * structures left over, or no fermions).
  */
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'
 import { gaugeIndexLetters } from './latex'
@@ -29,7 +29,7 @@ function partners(l: LorentzStructure, n: number): { angle: number[][]; square: 
   return { angle, square }
 }
 
-function classify(legs: Particle[], l: LorentzStructure, f: number, g: number, left: Set<number>): Bil | null {
+function classify(legs: Species[], l: LorentzStructure, f: number, g: number, left: Set<number>): Bil | null {
   const { angle, square } = partners(l, legs.length)
   const other = (i: number): number => (angle[i]!.length ? angle[i]![0]! : square[i]![0]!)
   const isAngle = (i: number): boolean => angle[i]!.length === 1
@@ -37,17 +37,17 @@ function classify(legs: Particle[], l: LorentzStructure, f: number, g: number, l
   if (x === g) return { a: f, b: g, kind: 'S' }
   if (isAngle(f) !== isAngle(g)) {
     const p = legs[x]!
-    if (x === y && p.lorentz === 'scalar' && l.derivs[x] === 1 && angle[x]!.length === 1 && square[x]!.length === 1) return { a: f, b: g, kind: 'V', x }
+    if (x === y && p.kind === 'scalar' && l.derivs[x] === 1 && angle[x]!.length === 1 && square[x]!.length === 1) return { a: f, b: g, kind: 'V', x }
     if (x !== y && legs[x]!.fermion && legs[y]!.fermion && left.has(x) && left.has(y) && isAngle(x) !== isAngle(y)) return { a: f, b: g, kind: 'VV', c: x, d: y }
     return null
   }
   const p = legs[x]!
   const wanted = isAngle(f) ? angle[x]! : square[x]!
-  if (x === y && p.lorentz === 'field-strength' && l.derivs[x] === 0 && wanted.length === 2 && angle[x]!.length + square[x]!.length === 2) return { a: f, b: g, kind: 'T', x }
+  if (x === y && p.kind === 'field-strength' && l.derivs[x] === 0 && wanted.length === 2 && angle[x]!.length + square[x]!.length === 2) return { a: f, b: g, kind: 'T', x }
   return null
 }
 
-function match(legs: Particle[], l: LorentzStructure, left: Set<number>): Bil[] | null {
+function match(legs: Species[], l: LorentzStructure, left: Set<number>): Bil[] | null {
   if (left.size === 0) return []
   const f = Math.min(...left)
   const rest = [...left].filter((g) => g !== f)
@@ -68,7 +68,7 @@ function match(legs: Particle[], l: LorentzStructure, left: Set<number>): Bil[] 
  * Four-component LaTeX, or null (see the file header).
  * @example fourComponentLatex([Q, u*, H], ⟨12⟩, gauge) // "(\\bar{u}_{i}Q^{iI})\\,H^{J}…" style
  */
-export function fourComponentLatex(legs: Particle[], l: LorentzStructure, gauge: SuStructure[]): string | null {
+export function fourComponentLatex(legs: Species[], l: LorentzStructure, gauge: SuStructure[]): string | null {
   const fermions = legs.map((p, i) => (p.fermion ? i : -1)).filter((i) => i >= 0)
   if (fermions.length === 0 || fermions.some((i) => l.derivs[i] !== 0)) return null
   const bils = match(legs, l, new Set(fermions))

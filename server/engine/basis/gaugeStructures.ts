@@ -8,7 +8,7 @@
  */
 import { EngineInputError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
-import type { SuKind } from './particles'
+import type { SuKind } from '../theory/model'
 import { evaluateSuChains } from './suFastPath'
 
 /** A slot is one SU(N) index of one leg. */

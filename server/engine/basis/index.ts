@@ -2,7 +2,7 @@
 export { classBasis, BASIS_NOTE, type ClassBasis, type ClassOptions, type Priorities } from './classBasis'
 export { rewriteOperator, type RewriteResult, type AmplitudeTarget } from './rewrite'
 export { parseOperatorText, formatLorentz } from './inputSyntax'
-export { theoryParticles, type Particle } from './particles'
+export { basisSpecies } from './species'
 export { parseClassKey, classKeyOf, type OperatorClass } from './classKey'
 export { randomKinematics, type KinematicPoint } from './kinematics'
 export { buildBasis, type BuildOptions, type BasisReport, type ClassReport, type DimensionReport } from './buildBasis'

@@ -5,7 +5,7 @@
  * a letter, ε tensors are written explicitly. Conjugate fields carry a dagger.
  * Four-component (Dirac-bilinear) forms: see fourComponent.ts.
  */
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'
 
@@ -16,9 +16,9 @@ export function letter(list: string[], i: number): string {
   return i < list.length ? list[i]! : `${list[i % list.length]!}_{${Math.floor(i / list.length)}}`
 }
 
-export function fieldSymbol(p: Particle): string {
-  const base = p.lorentz === 'field-strength' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
-  return p.conj && p.lorentz !== 'field-strength' ? `{${base}^{\\dagger}}` : base
+export function fieldSymbol(p: Species): string {
+  const base = p.kind === 'field-strength' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
+  return p.conj && p.kind !== 'field-strength' ? `{${base}^{\\dagger}}` : base
 }
 
 /**
@@ -26,7 +26,7 @@ export function fieldSymbol(p: Particle): string {
  * @example operatorLatex([H,H*,...], structure, []) // "(D_{\\alpha\\dot\\alpha}H)…"
  * Method: spinor-index bookkeeping (Dreiner, Haber & Martin, Phys. Rep. 494 (2010) 1).
  */
-export function operatorLatex(legs: Particle[], l: LorentzStructure, gauge: SuStructure[]): string {
+export function operatorLatex(legs: Species[], l: LorentzStructure, gauge: SuStructure[]): string {
   const low: string[][] = legs.map(() => [])
   const up: string[][] = legs.map(() => [])
   l.angle.forEach(([i, j], a) => { const x = letter(UNDOTTED, a); up[i]!.push(x); low[j]!.push(x) })

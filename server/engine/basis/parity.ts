@@ -28,7 +28,7 @@ import { EngineConsistencyError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import { solve } from '../finite/matrix'
 import { agreedValue } from '../finite/agreement'
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 import { conjugateClass, type OperatorClass } from './classKey'
 import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'
@@ -117,7 +117,7 @@ export interface ParityInput {
  * sample points over two primes; the trace of the involution counts the eigenvalues.
  * Reference: Elvang & Huang, Scattering Amplitudes (CUP 2015), §2 (λ ↔ λ̃ under parity).
  */
-export function classParity(particles: Particle[], b: ParityInput): ClassParity {
+export function classParity(particles: Species[], b: ParityInput): ClassParity {
   const { image, reason } = parityImage(particles, b.cls)
   const n = b.rank
   const none: ParityValue[] = b.kept.map(() => null)

@@ -10,6 +10,7 @@ import { PrimeSet } from '../finite/primeSet'
 import type { Column } from './classBasis'
 import { parityLorentz, paritySu } from './parity'
 import { formatLorentz } from './inputSyntax'
+import { combinationText } from './combinationText'
 
 /**
  * Columns c ± P(c) (image terms appended after the terms of c) for Hermitian combinations
@@ -46,7 +47,7 @@ export function parityColumns(cols: Column[], pi: number[], oneGauge: boolean): 
     const img = c.terms.map(image)
     return ([1, -1] as const).map((sg) => {
       const terms = [...c.terms, ...img.map((t) => (sg === 1 ? t : { ...t, coeff: primes.negated(t.coeff) }))]
-      const text = c.source === 'hermitian' ? `(${c.text}) ${sg === 1 ? '+' : '-'} P` : explicitText(terms)
+      const text = c.source === 'hermitian' ? combinationText(c.text, 'P', sg) : explicitText(terms)
       return { ...c, text, paritySign: sg, parityEigen: sg, parityBase: c.text, terms }
     })
   })
@@ -57,8 +58,6 @@ function explicitText(terms: Column['terms']): string {
   const [a, b] = terms as [Column['terms'][number], Column['terms'][number]]
   return `${formatLorentz(a.lorentz, null)} ${b.coeff[0] === 1 ? '+' : '-'} ${formatLorentz(b.lorentz, null)}`
 }
-
-const stripHc = (s: string): string => s.replace(/^\((.*)\) [+-] h\.c\.$/, '$1')
 
 /**
  * A chosen parity column whose partner vanishes is a multiple of a simpler operator:
@@ -77,7 +76,7 @@ export function reduceParityColumn(columns: Column[], j: number, zero: boolean[]
     const base: Column = { ...c, terms: c.terms.slice(0, n), text: c.parityBase!, paritySign: undefined, selfParity: true }
     // Both Hermitian partners (O ∓ h.c.) ± P vanish: O ∓ h.c. = 0, so O itself is Hermitian.
     const hBoth = hZero && zero[hPartner + (c.paritySign === 1 ? 1 : -1)] === true
-    if (c.source === 'hermitian' && hBoth) return { column: { ...base, terms: [c.terms[0]!], text: stripHc(c.parityBase!), selfHermitian: true }, halvings: 2 }
+    if (c.source === 'hermitian' && hBoth) return { column: { ...base, terms: [c.terms[0]!], text: c.hermitianBase!, selfHermitian: true }, halvings: 2 }
     return { column: { ...base, selfHermitian: c.source === 'hermitian' ? false : undefined }, halvings: 1 }
   }
   // Only hZero (O ∓ h.c.) ± P = 0: the column is 2(O ± P(O)), kept whole so that its text

@@ -14,29 +14,28 @@
  * on every class containing it.
  */
 import { EngineInputError } from '../errors'
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 import { makeClass, type OperatorClass } from './classKey'
 
-function sameCharges(p: Particle, q: Particle): boolean {
-  const keys = (r: Record<string, unknown>) => Object.keys(r).sort().join(',')
-  if (keys(p.su) !== keys(q.su) || keys(p.u1) !== keys(q.u1) || keys(p.zn) !== keys(q.zn)) return false
-  if (Object.entries(p.su).some(([g, k]) => q.su[g] !== k)) return false
+/** Same SU(N) kinds and charges under every group (species of one model list every group). */
+function sameCharges(p: Species, q: Species): boolean {
+  if (Object.entries(p.suKind).some(([g, k]) => q.suKind[g] !== k)) return false
   if (Object.entries(p.u1).some(([g, r]) => q.u1[g]!.num * r.den !== r.num * q.u1[g]!.den)) return false
   return Object.entries(p.zn).every(([g, z]) => q.zn[g] === z)
 }
 
 /**
  * Map particle label ↦ label of its parity partner; labels without partner are absent.
- * @example parityPartners(theoryParticles(qed)).get("eL") // "eR"
+ * @example parityPartners(basisSpecies(qed)).get("eL") // "eR"
  * Method: helicity flip at fixed charges (conventions above); common practice, e.g.
  * Dreiner, Haber & Martin, Phys. Rep. 494 (2010) 1, §2 (two-component spinors under P).
  */
-export function parityPartners(particles: Particle[]): Map<string, string> {
+export function parityPartners(particles: Species[]): Map<string, string> {
   const map = new Map<string, string>()
   const byLabel = new Map(particles.map((p) => [p.label, p]))
   for (const p of particles) {
-    if (p.lorentz === 'scalar') map.set(p.label, p.label)
-    if (p.lorentz === 'field-strength') map.set(p.label, p.conjugate)
+    if (p.kind === 'scalar') map.set(p.label, p.label)
+    if (p.kind === 'field-strength') map.set(p.label, p.conjugate)
   }
   const matched = new Set<string>()
   for (const p of particles) {
@@ -62,10 +61,10 @@ export interface ParityImage {
  * The parity image of a class: every leg replaced by its partner.
  * @example parityImage(qedParticles, class "eL eR* A_L").image.key // "eL* eR A_R"
  */
-export function parityImage(particles: Particle[], c: OperatorClass): ParityImage {
+export function parityImage(particles: Species[], c: OperatorClass): ParityImage {
   const partners = parityPartners(particles)
   const byLabel = new Map(particles.map((p) => [p.label, p]))
-  const legs: Particle[] = []
+  const legs: Species[] = []
   for (const p of c.legs) {
     const q = partners.get(p.label)
     if (q === undefined) {
@@ -81,7 +80,7 @@ export function parityImage(particles: Particle[], c: OperatorClass): ParityImag
  * leg i, blocks of identical particles matched in order (so π² = id).
  * @example parityLegMap(qedParticles, class "eL eL* eR eR*") // [2, 3, 0, 1]
  */
-export function parityLegMap(particles: Particle[], c: OperatorClass): number[] {
+export function parityLegMap(particles: Species[], c: OperatorClass): number[] {
   const partners = parityPartners(particles)
   const firstOf = (label: string): number => c.legs.findIndex((q) => q.label === label)
   return c.legs.map((p, i) => {

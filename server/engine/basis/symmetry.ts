@@ -2,7 +2,7 @@
  * Bose/Fermi symmetrisation over identical legs: the permutations of legs that map every
  * leg to a leg of the same particle, with the sign of the permutation of fermionic legs.
  */
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 
 export interface LegPermutation {
   /** map[i] = leg whose data replaces leg i. */
@@ -32,7 +32,7 @@ function parity(p: number[]): number {
  * @example identicalLegPermutations([phi, phi, phi]).length // 6
  * Method: spin–statistics (common practice).
  */
-export function identicalLegPermutations(legs: Particle[]): LegPermutation[] {
+export function identicalLegPermutations(legs: Species[]): LegPermutation[] {
   const blocks: number[][] = []
   legs.forEach((p, i) => {
     if (i > 0 && legs[i - 1]!.label === p.label) blocks[blocks.length - 1]!.push(i)

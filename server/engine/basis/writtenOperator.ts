@@ -6,7 +6,7 @@
  */
 import { EngineInputError } from '../errors'
 import { mul as ratMul, rat, type Rational } from '../exact/rational'
-import type { Particle } from './particles'
+import type { Species } from '../theory/model'
 import type { OperatorClass } from './classKey'
 import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'
@@ -14,11 +14,9 @@ import { parseOperatorText } from './inputSyntax'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import { parityLegMap } from './parityPartners'
 import { parityLorentz, paritySu } from './parity'
+import { mentionsCombination, readCombination } from './combinationText'
 
 export interface WrittenTerm { coeff: Rational, lorentz: LorentzStructure, gauge: SuStructure[] }
-
-const HERMITIAN = /^\((.*)\) ([+-]) h\.c\.$/
-const PARITY = /^\((.*)\) ([+-]) P$/
 
 /**
  * The terms of a written operator of class `cls` (gauge: the class's gauge contractions).
@@ -26,28 +24,26 @@ const PARITY = /^\((.*)\) ([+-]) P$/
  * Throws EngineInputError when the text is not input syntax, or names h.c. (P) in a class
  * that is not its own conjugate (parity image).
  */
-export function writtenTerms(particles: Particle[], cls: OperatorClass, text: string, gauge: SuStructure[][]): WrittenTerm[] {
+export function writtenTerms(particles: Species[], cls: OperatorClass, text: string, gauge: SuStructure[][]): WrittenTerm[] {
   const t = text.trim()
-  const p = PARITY.exec(t)
-  if (p) {
+  const c = readCombination(t)
+  if (c?.kind === 'P') {
     const pi = parityLegMap(particles, cls)
-    const sign = p[2] === '+' ? 1 : -1
-    const inner = writtenTerms(particles, cls, p[1]!, gauge)
+    const inner = writtenTerms(particles, cls, c.inner, gauge)
     return [...inner, ...inner.map((x) => {
       const image = parityLorentz(x.lorentz, pi)
-      return { coeff: ratMul(x.coeff, rat(sign * image.sign)), lorentz: image.lorentz, gauge: x.gauge.map((s) => paritySu(s, pi)) }
+      return { coeff: ratMul(x.coeff, rat(c.sign * image.sign)), lorentz: image.lorentz, gauge: x.gauge.map((s) => paritySu(s, pi)) }
     })]
   }
-  const h = HERMITIAN.exec(t)
-  if (h) {
+  if (c?.kind === 'h.c.') {
     const pi = conjugateLegMap(cls)
-    const inner = writtenTerms(particles, cls, h[1]!, gauge)
+    const inner = writtenTerms(particles, cls, c.inner, gauge)
     return [...inner, ...inner.map((x) => ({
-      coeff: h[2] === '+' ? x.coeff : ratMul(x.coeff, rat(-1)),
+      coeff: c.sign === 1 ? x.coeff : ratMul(x.coeff, rat(-1)),
       lorentz: conjugateLorentz(x.lorentz, pi),
       gauge: x.gauge.map((s) => conjugateSu(s, pi)),
     }))]
   }
-  if (/h\.c\.|\bP\b/.test(t)) throw new EngineInputError('writtenTerms', `Cannot read "${t}": write a combination as "(X) + h.c." or "(X) - P", with X in the input syntax`)
+  if (mentionsCombination(t)) throw new EngineInputError('writtenTerms', `Cannot read "${t}": write a combination as "(X) + h.c." or "(X) - P", with X in the input syntax`)
   return parseOperatorText(cls, t, gauge.length).map((x) => ({ coeff: x.coeff, lorentz: x.lorentz, gauge: gauge[x.gaugeIndex]! }))
 }

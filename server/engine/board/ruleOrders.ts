@@ -9,12 +9,14 @@ import { orderOfOperator, formatOrder } from '../rules/orderOf'
 import { blocksFromClassKey } from '../rules/classKeyBlocks'
 import { lightFields } from '../heavy/lightFields'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
-import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
+import type { Theory } from '../../../shared/schemas/theory'
+import { buildTheoryModel } from '../theory/model'
 
+/** The parts of a stored theory file the counting rules read. */
 export interface RuleTheory {
   frame?: string
-  fields?: ReadonlyArray<{ name: string, lorentz: LorentzKind, reps?: Record<string, number[]>, charges?: Record<string, string | number>, real?: boolean, flavors?: number }>
-  groups?: ReadonlyArray<{ name: string, type: string, n?: number, gauge?: boolean }>
+  groups?: Theory['groups']
+  fields?: Theory['fields']
   heavy?: { particle: { name: string }, antiparticle?: { name: string } }
   countingRules?: CountingRule[]
 }
@@ -34,7 +36,8 @@ function contextOf(theory: RuleTheory): RuleContext {
     const light = lightFields(theory.fields ?? [], theory.groups ?? []).fields.map((f) => ({ name: f.name, dim: f.kind === 'dirac' ? '3/2' : '1' }))
     return { frame: 'heavy', particle: theory.heavy.particle.name, antiparticle: theory.heavy.antiparticle?.name, light }
   }
-  return { frame: 'relativistic', fields: theory.fields ?? [] }
+  const roster = { name: '', frame: 'relativistic' as const, groups: theory.groups ?? [], fields: theory.fields ?? [] }
+  return { frame: 'relativistic', species: buildTheoryModel(roster).species }
 }
 
 /**
@@ -48,18 +51,18 @@ export function ruleOrders(theory: RuleTheory, ruleName: string, operators: { id
   const resolved = resolveRule(rule, ctx)
   const out: Record<number, string> = {}
   for (const op of operators) {
-    const terms = op.terms?.length ? op.terms : [classBlocks(op.classKey)]
+    const terms = op.terms?.length ? op.terms : [classBlocks(op.classKey, ctx)]
     out[op.id] = formatOrder(orderOfOperator({ id: String(op.id), terms }, resolved, ctx))
   }
   return out
 }
 
 /** Block counts of a relativistic class key; a field strength's chiral halves count as the field. */
-function classBlocks(key: string): Record<string, number> {
-  const blocks = blocksFromClassKey(key)
+function classBlocks(key: string, ctx: RuleContext): Record<string, number> {
+  const strengthOf = new Map(ctx.frame === 'relativistic' ? ctx.species.filter((s) => s.kind === 'field-strength').map((s) => [s.label, s.field]) : [])
   const out: Record<string, number> = {}
-  for (const [b, n] of Object.entries(blocks)) {
-    const name = b.replace(/_[LR]$/, '')
+  for (const [b, n] of Object.entries(blocksFromClassKey(key))) {
+    const name = strengthOf.get(b) ?? b
     out[name] = (out[name] ?? 0) + n
   }
   return out

@@ -6,7 +6,7 @@
 import type { Theory } from '../../../shared/schemas/theory'
 import { classBasis, type Priorities } from '../basis/classBasis'
 import { writtenTerms } from '../basis/writtenOperator'
-import { theoryParticles } from '../basis/particles'
+import { basisSpecies } from '../basis/species'
 import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
 
@@ -21,7 +21,7 @@ import type { Fingerprint } from './fingerprints'
  */
 export function typedFingerprints(theory: Theory, classKey: string, texts: readonly string[], priorities?: Priorities): Fingerprint[] {
   const b = classBasis(theory, classKey, { priorities })
-  const particles = theoryParticles(theory)
+  const particles = basisSpecies(theory)
   return texts.map((text) => {
     // Input syntax, or a Hermitian / parity combination as the board writes it.
     const terms = writtenTerms(particles, b.class, text, b.gaugeStructures)

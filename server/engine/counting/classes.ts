@@ -1,12 +1,10 @@
 /**
  * Operator classes: a field content (multiplicity of every species) plus a number of
- * covariant derivatives. Class keys are portable strings shared by the counting and the
- * explicit-basis engines: "D^k" first (omitted for k = 0, "D" for k = 1), then the species in
- * theory-file order, each field followed by its conjugate "NAME*", a field strength as its
- * chiral halves "NAME_L", "NAME_R", powers "^n" for n > 1, single spaces: "D^2 H^2 H*^2".
+ * covariant derivatives, written as class keys by theory/classKey.ts ("D^2 H^2 H*^2").
  */
 import { EngineInputError } from '../errors'
 import type { TheoryModel } from '../theory/model'
+import { classKeyOfCounts } from '../theory/classKey'
 
 export interface OperatorClass {
   /** Multiplicity per species (TheoryModel.species order). */
@@ -23,41 +21,6 @@ export interface FieldContent {
   fieldDim2: number
   /** Derivative numbers k giving a dimension in [minDim, maxDim] and passing the Lorentz parity rule. */
   derivatives: number[]
-}
-
-/**
- * Class key of a field content with k derivatives.
- * @example classKey(smeftModel, parseClassKey(smeftModel, 'H^2 H*^2').counts, 2) // "D^2 H^2 H*^2"
- * Convention: see the file header (common practice for class labels, as in Grzadkowski et al.,
- * JHEP 10 (2010) 085, written with chiral halves of field strengths).
- */
-export function classKey(model: TheoryModel, counts: readonly number[], derivatives: number): string {
-  const parts: string[] = []
-  if (derivatives > 0) parts.push(derivatives === 1 ? 'D' : `D^${derivatives}`)
-  model.species.forEach((s, i) => {
-    const n = counts[i] ?? 0
-    if (n > 0) parts.push(n === 1 ? s.key : `${s.key}^${n}`)
-  })
-  return parts.join(' ')
-}
-
-/**
- * Parse a class key back into species counts and derivative number.
- * @example parseClassKey(smeftModel, "D^2 H^2 H*^2").derivatives // 2
- */
-export function parseClassKey(model: TheoryModel, key: string): { counts: number[]; derivatives: number } {
-  const counts = model.species.map(() => 0)
-  let derivatives = 0
-  for (const token of key.trim().split(/\s+/)) {
-    const m = /^(.+?)(?:\^(\d+))?$/.exec(token)
-    const name = m?.[1] ?? ''
-    const power = m?.[2] === undefined ? 1 : Number(m[2])
-    if (name === 'D') { derivatives += power; continue }
-    const i = model.species.findIndex((s) => s.key === name)
-    if (i < 0 || power < 1) throw new EngineInputError('parseClassKey', `The class "${key}" names "${token}", which is not a field of this theory`)
-    counts[i]! += power
-  }
-  return { counts, derivatives }
 }
 
 /** Work limits of the enumeration (a run beyond them would not finish in reasonable time). */
@@ -136,8 +99,8 @@ function selectionCharges(model: TheoryModel): { moduli: number[]; perSpecies: n
   const moduli = [...model.u1.map(() => 0), ...model.zn.map((g) => g.n), ...model.su.map((g) => g.n)]
   const perSpecies = model.species.map((sp, i) => [
     ...u1.map((q) => q[i]!),
-    ...sp.zn,
-    ...sp.su.map((a) => a.reduce((t, x, j) => t + x * (j + 1), 0)),
+    ...model.zn.map((g) => sp.zn[g.name]!),
+    ...model.su.map((g) => sp.reps[g.name]!.reduce((t, x, j) => t + x * (j + 1), 0)),
   ])
   return { moduli, perSpecies }
 }
@@ -194,7 +157,7 @@ export function enumerateClasses(model: TheoryModel, dimension: number): Operato
   const out: OperatorClass[] = []
   for (const fc of enumerateFieldContents(model, dimension, dimension)) {
     for (const k of fc.derivatives) {
-      out.push({ counts: fc.counts, derivatives: k, dimension, key: classKey(model, fc.counts, k) })
+      out.push({ counts: fc.counts, derivatives: k, dimension, key: classKeyOfCounts(model, fc.counts, k) })
     }
   }
   return out
@@ -210,13 +173,13 @@ function allowedDerivatives(left: number, used: number, minDim: number, maxDim: 
 
 /** U(1) charges scaled by the lcm of their denominators per group, so sums stay integer. */
 function integerCharges(model: TheoryModel): number[][] {
-  return model.u1.map((_, g) => {
+  return model.u1.map(({ name }) => {
     let l = 1n
-    for (const s of model.species) l = lcm(l, s.u1[g]!.den)
+    for (const s of model.species) l = lcm(l, s.u1[name]!.den)
     return model.species.map((s) => {
-      const v = (s.u1[g]!.num * l) / s.u1[g]!.den
+      const v = (s.u1[name]!.num * l) / s.u1[name]!.den
       if (v > 1_000_000_000n || v < -1_000_000_000n) {
-        throw new EngineInputError('enumerateFieldContents', `The ${model.u1[g]!.name} charges have too large a common denominator (${l}); write them with smaller denominators`)
+        throw new EngineInputError('enumerateFieldContents', `The ${name} charges have too large a common denominator (${l}); write them with smaller denominators`)
       }
       return Number(v)
     })

@@ -40,7 +40,8 @@ export class CountContext {
     this.groups = model.su.map((g) => new GroupIntegrator(g.n))
     this.repList = model.su.map(() => [])
     this.repIndex = model.species.map((sp) =>
-      sp.su.map((a, g) => {
+      model.su.map(({ name }, g) => {
+        const a = sp.reps[name]!
         if (a.every((x) => x === 0)) return -1
         const key = a.join(',')
         const list = this.repList[g]!
@@ -63,7 +64,7 @@ export interface ContentResult {
 
 /**
  * Count the operators of one field content for each allowed derivative number.
- * @example countFieldContent(ctx, { counts: parseClassKey(smeftModel, 'H^3 H*^3').counts, fieldDim2: 12, derivatives: [0] }).counts // [1n]
+ * @example countFieldContent(ctx, { counts: countsOfClassKey(smeftModel, 'H^3 H*^3').counts, fieldDim2: 12, derivatives: [0] }).counts // [1n]
  */
 export function countFieldContent(ctx: CountContext, content: FieldContent): ContentResult {
   const present: number[] = []

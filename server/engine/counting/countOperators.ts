@@ -18,7 +18,7 @@ import type { Theory } from '../../../shared/schemas/theory'
 import { EngineCancelledError, EngineInputError } from '../errors'
 import { buildTheoryModel } from '../theory/model'
 import { enumerateFieldContents } from './classes'
-import { classKey } from './classes'
+import { classKeyOfCounts } from '../theory/classKey'
 import { CountContext, countFieldContent } from './contentCount'
 
 export interface CountOptions {
@@ -89,7 +89,7 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
       const k = content.derivatives[j]!
       const dim = (content.fieldDim2 + 2 * k) / 2
       const entry = byDimension[dim - minDim]!
-      const key = classKey(model, content.counts, k)
+      const key = classKeyOfCounts(model, content.counts, k)
       entry.classes[key] = safeNumber(count, key)
       entry.operators = safeNumber(BigInt(entry.operators) + count, `dimension ${dim}`)
       if (entry.flavorPolynomials) entry.flavorPolynomials[key] = result.polynomials[j]!

@@ -1,5 +1,5 @@
 import type { BoardExport } from './boardExport'
-import { classKeyTex } from '../../../shared/utils/classKeyTex'
+import { classKeyTex } from '../theory/classKey'
 
 function escapeText(s: string): string {
   return s.replace(/\\/g, '\\textbackslash{}').replace(/([&%$#_{}])/g, '\\$1').replace(/~/g, '\\textasciitilde{}').replace(/\^/g, '\\textasciicircum{}')

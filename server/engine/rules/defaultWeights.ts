@@ -5,11 +5,14 @@
 import { EngineInputError } from '../errors'
 import { parseRational, rat, type Rational } from '../exact/rational'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
-import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
+import type { Species } from '../theory/model'
 
-/** The context a rule is applied in: a relativistic field list or a heavy-particle frame. */
+/** The species facts a relativistic rule reads (theory/model.ts). */
+export type RuleSpecies = Pick<Species, 'label' | 'field' | 'kind' | 'dim2'>
+
+/** The context a rule is applied in: the species of a relativistic theory or a heavy-particle frame. */
 export type RuleContext =
-  | { frame: 'relativistic'; fields: ReadonlyArray<{ name: string; lorentz: LorentzKind }> }
+  | { frame: 'relativistic'; species: ReadonlyArray<RuleSpecies> }
   | { frame: 'heavy'; particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }
 
 /** A rule with every weight resolved to an exact rational. */
@@ -18,10 +21,6 @@ export interface ResolvedRule {
   kind: CountingRule['kind']
   weights: ReadonlyMap<string, Rational>
   offset: Rational
-}
-
-const LORENTZ_DIMENSION: Record<LorentzKind, Rational> = {
-  'scalar': rat(1), 'left-weyl': rat(3, 2), 'right-weyl': rat(3, 2), 'field-strength': rat(2),
 }
 
 /**
@@ -55,15 +54,14 @@ function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle
   return out
 }
 
-function relativisticDefaults(rule: CountingRule, fields: RuleContext & { frame: 'relativistic' }): Map<string, Rational> {
+/** Mass-ratio weights: every species weighs its mass dimension; a field strength's name weighs as its halves. */
+function relativisticDefaults(rule: CountingRule, ctx: RuleContext & { frame: 'relativistic' }): Map<string, Rational> {
   const out = new Map<string, Rational>()
   if (rule.kind === 'massRatio') {
     out.set('D', rat(1))
-    for (const f of fields.fields) {
-      const d = LORENTZ_DIMENSION[f.lorentz]
-      out.set(f.name, d)
-      out.set(`${f.name}*`, d)
-      if (f.lorentz === 'field-strength') { out.set(`${f.name}_L`, d); out.set(`${f.name}_R`, d) }
+    for (const s of ctx.species) {
+      out.set(s.label, rat(s.dim2, 2))
+      if (s.kind === 'field-strength') out.set(s.field, rat(s.dim2, 2))
     }
   } else if (rule.kind === 'momentumRatio') {
     out.set('D', rat(1))

@@ -2,7 +2,8 @@
  * Gauge anomaly conditions of the chiral fermions of a theory.
  *
  * Conventions: every fermion is written as a left-handed Weyl field; a right-handed field
- * ("lorentz": "right-weyl") enters as its conjugate (conjugate SU(n) rep, negated U(1) charges).
+ * ("lorentz": "right-weyl") enters as its conjugate (conjugate SU(n) rep, negated U(1) charges),
+ * as the (1/2,0) species of the theory model (model.ts).
  * Each Weyl field is weighted by its flavor number and the dimensions of its representations
  * under the other SU(n) groups. Only gauge groups (gauge: true) are checked: anomalies of
  * global symmetries are not inconsistencies. Z_n (discrete) anomalies are not checked.
@@ -15,7 +16,8 @@
  * (gravitational); Witten, Phys. Lett. B 117 (1982) 324 (SU(2) anomaly).
  */
 import type { Theory } from '../../../shared/schemas/theory'
-import { type Rational, ZERO, add, isZero, mul, neg, parseRational, rat, toString } from '../exact/rational'
+import { type Rational, ZERO, add, isZero, mul, rat, toString } from '../exact/rational'
+import { buildTheoryModel } from './model'
 import { suCubicAnomaly, suIndex } from '../group/irrep'
 import { suDimension } from '../group/weights'
 
@@ -76,21 +78,11 @@ export function checkAnomalies(theory: Theory): AnomalyCondition[] {
   return anomalyConditions(theory).filter((c) => !c.ok)
 }
 
+/** The (1/2,0) species of the model: left-weyl fields and the conjugates of right-weyl ones. */
 function leftHanded(theory: Theory): Weyl[] {
-  const out: Weyl[] = []
-  for (const f of theory.fields) {
-    if (f.lorentz !== 'left-weyl' && f.lorentz !== 'right-weyl') continue
-    const conj = f.lorentz === 'right-weyl'
-    const reps = new Map<string, number[]>()
-    for (const [g, a] of Object.entries(f.reps ?? {})) reps.set(g, conj ? a.slice().reverse() : a.slice())
-    const charges = new Map<string, Rational>()
-    for (const [g, q] of Object.entries(f.charges ?? {})) {
-      const r = parseRational(String(q))
-      charges.set(g, conj ? neg(r) : r)
-    }
-    out.push({ name: f.name, reps, charges, weight: f.flavors ?? 1 })
-  }
-  return out
+  return buildTheoryModel(theory).species.filter((s) => s.lorentz === 'L').map((s) => ({
+    name: s.label, reps: new Map(Object.entries(s.reps)), charges: new Map(Object.entries(s.u1)), weight: s.flavors,
+  }))
 }
 
 function charge(f: Weyl, group: string): Rational {

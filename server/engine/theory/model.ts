@@ -1,43 +1,65 @@
 /**
- * The engine's view of a theory file: the list of "species" (each field and, for complex
- * fields, its conjugate as a separate species; a field strength as its two chiral halves),
- * with Lorentz type, doubled mass dimension, representations and charges resolved.
+ * The engine's one view of a theory file: its groups and the list of "species" (each field
+ * and, for a complex field, its conjugate as a separate species; a field strength as its two
+ * chiral halves), with Lorentz irrep, helicity, doubled mass dimension, representations and
+ * charges resolved. Counting, bases, counting rules, anomalies and the board all read it.
  *
  * Conventions: species order = theory-file order, each field followed by its conjugate
- * ("H", "H*"; "Q", "Q*"); a field strength G gives "G_L" (Lorentz (1,0)) then "G_R" ((0,1)).
- * A left-handed Weyl fermion is (1/2,0), its conjugate (0,1/2); a right-handed one the reverse.
- * Conjugation reverses SU(n) Dynkin labels and negates U(1) and Z_n charges.
+ * ("H", "H*"; "Q", "Q*"); a field strength G gives "G_L" (Lorentz (1,0)) then "G_R" ((0,1)),
+ * each other's conjugates. A left-handed Weyl fermion is (1/2,0), its conjugate (0,1/2); a
+ * right-handed one the reverse. On-shell legs are all outgoing: a (j_L, j_R) species has
+ * 2j_L angle spinors λ and 2j_R square spinors λ̃, helicity j_R − j_L (so ψ of a left-weyl
+ * field has helicity −1/2, G_L −1). Conjugation reverses SU(n) Dynkin labels and negates
+ * U(1) and Z_n charges.
  */
 import type { Theory } from '../../../shared/schemas/theory'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
 
-/** Lorentz type of a species: scalar, (1/2,0), (0,1/2), (1,0), (0,1). */
+/** Lorentz irrep of a species: (0,0), (1/2,0), (0,1/2), (1,0), (0,1). */
 export type LorentzType = 'S' | 'L' | 'R' | 'FL' | 'FR'
 
+/** SU(n) representations the explicit basis supports; 'other' is counted but not built. */
+export type SuKind = 'fund' | 'anti' | 'adj' | 'singlet' | 'other'
+
 export interface Species {
-  /** Name used in class keys: "H", "H*", "G_L", "G_R", "phi". */
-  key: string
+  /** Name in class keys: "H", "H*", "G_L", "G_R", "phi". */
+  label: string
+  /** Name of the theory-file field it comes from, and that field's index. */
+  field: string
   fieldIndex: number
-  fieldName: string
-  conjugate: boolean
+  /** True for a conjugate (and for the (0,1) half of a field strength). */
+  conj: boolean
+  /** Label of the conjugate species (itself when self-conjugate) and its index. */
+  conjugate: string
+  partner: number
+  /** The field's Lorentz kind in the theory file. */
+  kind: LorentzKind
   lorentz: LorentzType
+  /** Spinors of the undifferentiated field: angle (λ) = 2j_L and square (λ̃) = 2j_R. */
+  angles: number
+  squares: number
+  /** Twice the helicity (squares − angles). */
+  helicity2: number
   fermion: boolean
   /** Twice the mass dimension: scalar 2, fermion 3, field strength 4. */
   dim2: number
-  /** Dynkin labels per SU group (order of TheoryModel.su). */
-  su: number[][]
-  /** Charge per U(1) group (order of TheoryModel.u1). */
-  u1: Rational[]
-  /** Charge mod n per Z group (order of TheoryModel.zn), in 0..n-1. */
-  zn: number[]
-  /** Number of flavors used in counts (after an --nf override). */
+  /** Dynkin labels per SU group name (every SU group; zeros for a singlet). */
+  reps: Record<string, number[]>
+  /**
+   * The same representations as the explicit basis names them: an index up (fund), down
+   * (anti), both (adj). A conjugate takes the conjugate kind, also where the irrep is
+   * self-conjugate (the SU(2) doublet's conjugate is 'anti').
+   */
+  suKind: Record<string, SuKind>
+  /** Charge per U(1) group name, and mod n per Z_n group name (every group; 0 when absent). */
+  u1: Record<string, Rational>
+  zn: Record<string, number>
+  /** Number of flavors used in counts (after an nf override). */
   flavors: number
   /** True when the field declares "flavors" (the variable Nf of flavor polynomials). */
   flavored: boolean
-  /** Index of the conjugate species (itself when self-conjugate). */
-  partner: number
 }
 
 export interface TheoryModel {
@@ -48,20 +70,25 @@ export interface TheoryModel {
   species: Species[]
 }
 
-const LORENTZ_DIM2: Record<LorentzType, number> = { S: 2, L: 3, R: 3, FL: 4, FR: 4 }
-
-/** The species type of a matter field's Lorentz kind (a field strength splits into FL, FR). */
-const FILE_KIND_TYPE: Record<Exclude<LorentzKind, 'field-strength'>, LorentzType> = { 'scalar': 'S', 'left-weyl': 'L', 'right-weyl': 'R' }
+/** (2j_L, 2j_R) and doubled mass dimension of each species irrep. */
+const IRREP: Record<LorentzType, { angles: number; squares: number; dim2: number }> = {
+  S: { angles: 0, squares: 0, dim2: 2 },
+  L: { angles: 1, squares: 0, dim2: 3 },
+  R: { angles: 0, squares: 1, dim2: 3 },
+  FL: { angles: 2, squares: 0, dim2: 4 },
+  FR: { angles: 0, squares: 2, dim2: 4 },
+}
+const CONJUGATE_TYPE: Record<LorentzType, LorentzType> = { S: 'S', L: 'R', R: 'L', FL: 'FR', FR: 'FL' }
+const CONJUGATE_KIND: Record<SuKind, SuKind> = { fund: 'anti', anti: 'fund', adj: 'adj', singlet: 'singlet', other: 'other' }
+const MATTER_TYPE: Record<Exclude<LorentzKind, 'field-strength'>, LorentzType> = { 'scalar': 'S', 'left-weyl': 'L', 'right-weyl': 'R' }
 
 /**
- * Resolve a validated theory into species. `nf` (1..6) overrides the flavor number of every
- * field that declares "flavors". Throws EngineInputError for frame "heavy".
- * @example buildTheoryModel(smeft).species.map(s => s.key).slice(0, 4) // ["Q","Q*","u","u*"]
+ * Resolve a validated theory into species (any frame: the roster of a heavy-frame theory too;
+ * the engines that need frame "relativistic" check it themselves). `nf` (1..6) overrides the
+ * flavor number of every field that declares "flavors".
+ * @example buildTheoryModel(smeft).species.map(s => s.label).slice(0, 4) // ["Q","Q*","u","u*"]
  */
 export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): TheoryModel {
-  if (theory.frame !== 'relativistic') {
-    throw new EngineInputError('buildTheoryModel', `Theory "${theory.name}" uses the ${theory.frame} frame, which the Hilbert-series count does not cover; start a basis run instead`)
-  }
   if (opts.nf !== undefined && (!Number.isInteger(opts.nf) || opts.nf < 1 || opts.nf > 6)) {
     throw new EngineInputError('buildTheoryModel', `The number of flavors must be a whole number from 1 to 6, not ${opts.nf}`)
   }
@@ -73,40 +100,60 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
   }
   theory.fields.forEach((f, fieldIndex) => {
     const flavored = f.flavors !== undefined
-    const flavors = flavored ? (opts.nf ?? f.flavors!) : 1
-    const base = { fieldIndex, fieldName: f.name, flavored, flavors }
-    if (f.lorentz === 'field-strength') {
-      const su = model.su.map((g) => (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)))
-      const common = { ...base, fermion: false, dim2: 4, su, u1: model.u1.map(() => ZERO), zn: model.zn.map(() => 0) }
-      const i = model.species.length
-      model.species.push({ ...common, key: `${f.name}_L`, conjugate: false, lorentz: 'FL', partner: i + 1 })
-      model.species.push({ ...common, key: `${f.name}_R`, conjugate: true, lorentz: 'FR', partner: i })
-      return
-    }
-    const su = model.su.map((g) => (f.reps?.[g.name] ?? zeros(g.n - 1)).slice())
-    const u1 = model.u1.map((g) => parseRational(String(f.charges?.[g.name] ?? '0')))
-    const zn = model.zn.map((g) => mod(Number(f.charges?.[g.name] ?? 0), g.n))
-    const lorentz: LorentzType = FILE_KIND_TYPE[f.lorentz]
-    const fermion = lorentz !== 'S'
+    const type: LorentzType = f.lorentz === 'field-strength' ? 'FL' : MATTER_TYPE[f.lorentz]
+    const reps = Object.fromEntries(model.su.map((g) => [g.name, f.lorentz === 'field-strength'
+      ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1))
+      : (f.reps?.[g.name] ?? zeros(g.n - 1)).slice()]))
+    const charged = f.lorentz !== 'field-strength'
+    const u1 = Object.fromEntries(model.u1.map((g) => [g.name, charged ? parseRational(String(f.charges?.[g.name] ?? '0')) : ZERO]))
+    const zn = Object.fromEntries(model.zn.map((g) => [g.name, charged ? mod(Number(f.charges?.[g.name] ?? 0), g.n) : 0]))
+    const suKind = Object.fromEntries(model.su.map((g) => [g.name, suKindOf(g.n, reps[g.name]!)]))
     const i = model.species.length
-    const self = f.lorentz === 'scalar' && f.real === true
-    model.species.push({ ...base, key: f.name, conjugate: false, lorentz, fermion, dim2: LORENTZ_DIM2[lorentz], su, u1, zn, partner: self ? i : i + 1 })
-    if (self) return
-    const conjLorentz: LorentzType = lorentz === 'L' ? 'R' : lorentz === 'R' ? 'L' : 'S'
-    model.species.push({
-      ...base,
-      key: `${f.name}*`,
-      conjugate: true,
-      lorentz: conjLorentz,
-      fermion,
-      dim2: LORENTZ_DIM2[conjLorentz],
-      su: su.map((a) => a.slice().reverse()),
-      u1: u1.map(neg),
-      zn: zn.map((q, k) => mod(-q, model.zn[k]!.n)),
-      partner: i,
-    })
+    const selfConjugate = f.lorentz === 'scalar' && f.real === true
+    const base = {
+      field: f.name, fieldIndex, kind: f.lorentz, fermion: type === 'L' || type === 'R',
+      flavored, flavors: flavored ? (opts.nf ?? f.flavors!) : 1,
+    }
+    const first = f.lorentz === 'field-strength' ? `${f.name}_L` : f.name
+    const second = f.lorentz === 'field-strength' ? `${f.name}_R` : `${f.name}*`
+    model.species.push(species({ ...base, label: first, conj: false, lorentz: type, reps, suKind, u1, zn },
+      selfConjugate ? { label: first, index: i } : { label: second, index: i + 1 }))
+    if (selfConjugate) return
+    const conjugate = {
+      ...base, label: second, conj: true, lorentz: CONJUGATE_TYPE[type],
+      reps: mapValues(reps, (a) => a.slice().reverse()),
+      suKind: mapValues(suKind, (k) => CONJUGATE_KIND[k]),
+      u1: mapValues(u1, neg),
+      zn: Object.fromEntries(model.zn.map((g) => [g.name, mod(-zn[g.name]!, g.n)])),
+    }
+    model.species.push(species(conjugate, { label: first, index: i }))
   })
   return model
+}
+
+type SpeciesCore = Omit<Species, 'conjugate' | 'partner' | 'angles' | 'squares' | 'helicity2' | 'dim2'>
+
+function species(core: SpeciesCore, partner: { label: string; index: number }): Species {
+  const { angles, squares, dim2 } = IRREP[core.lorentz]
+  return { ...core, conjugate: partner.label, partner: partner.index, angles, squares, helicity2: squares - angles, dim2 }
+}
+
+/**
+ * The explicit basis's name of an SU(n) irrep: fundamental [1,0,…], antifundamental […,0,1],
+ * adjoint ([2] for SU(2), [1,0,…,0,1] otherwise), singlet, or 'other'.
+ * @example suKindOf(3, [0, 1]) // 'anti'
+ */
+export function suKindOf(n: number, labels: readonly number[]): SuKind {
+  const key = labels.join(',')
+  if (labels.every((a) => a === 0)) return 'singlet'
+  if (key === adjoint(n).join(',')) return 'adj'
+  if (key === [1, ...zeros(n - 2)].join(',')) return 'fund'
+  if (key === [...zeros(n - 2), 1].join(',')) return 'anti'
+  return 'other'
+}
+
+function mapValues<T, U>(r: Record<string, T>, f: (x: T) => U): Record<string, U> {
+  return Object.fromEntries(Object.entries(r).map(([k, v]) => [k, f(v)]))
 }
 
 function zeros(k: number): number[] {

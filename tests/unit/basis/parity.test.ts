@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { buildBasis, classBasis, theoryParticles, parseClassKey, type ClassReport } from '../../../server/engine/basis/index'
+import { buildBasis, classBasis, basisSpecies, parseClassKey, type ClassReport } from '../../../server/engine/basis/index'
 import { describeOperators } from '../../../server/engine/basis/describe'
 import { parityLegMap, parityPartners } from '../../../server/engine/basis/parityPartners'
 import { parityLorentz } from '../../../server/engine/basis/parity'
@@ -20,11 +20,11 @@ const sum = (cs: ClassReport[], f: (c: ClassReport) => number | null): number =>
 
 describe('parity partners and the image of a class (conventions: parity.ts, parityPartners.ts)', () => {
   it('QED: eL ↔ eR, eL* ↔ eR*, A_L ↔ A_R (a Dirac fermion = L + R with equal charges; common practice)', () => {
-    const m = parityPartners(theoryParticles(qed))
+    const m = parityPartners(basisSpecies(qed))
     expect(Object.fromEntries(m)).toEqual({ eL: 'eR', eR: 'eL', 'eL*': 'eR*', 'eR*': 'eL*', A_L: 'A_R', A_R: 'A_L' })
   })
   it('SMEFT: chiral fermions have no partner, H and the field strengths do (common practice)', () => {
-    const m = parityPartners(theoryParticles(smeft))
+    const m = parityPartners(basisSpecies(smeft))
     for (const f of ['Q', 'u', 'd', 'L', 'e', 'Q*', 'e*']) expect(m.has(f)).toBe(false)
     expect(m.get('H')).toBe('H')
     expect(m.get('W_L')).toBe('W_R')
@@ -34,7 +34,7 @@ describe('parity partners and the image of a class (conventions: parity.ts, pari
     expect(parityLorentz({ derivs: [0, 0, 0, 0], angle: [[0, 1]], square: [] }, [1, 0, 2, 3]).sign).toBe(-1) // ⟨12⟩ ↦ [21] = −[12]
   })
   it('the leg map refuses a class that P does not map to itself, naming it', () => {
-    const ps = theoryParticles(qed)
+    const ps = basisSpecies(qed)
     expect(() => parityLegMap(ps, parseClassKey(ps, 'eL eR* A_L'))).toThrow('Parity does not map the class eL eR* A_L to itself (eL has no partner)')
   })
 })

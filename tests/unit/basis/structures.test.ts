@@ -6,7 +6,7 @@ import { bracketGraphs, lorentzStructures } from '../../../server/engine/basis/l
 import { suStructures, evaluateSu } from '../../../server/engine/basis/gaugeStructures'
 import { identicalLegPermutations } from '../../../server/engine/basis/symmetry'
 import { parseOperatorText, formatLorentz } from '../../../server/engine/basis/inputSyntax'
-import { theoryParticles } from '../../../server/engine/basis/particles'
+import { basisSpecies } from '../../../server/engine/basis/species'
 import { parseClassKey } from '../../../server/engine/basis/classKey'
 import { rat } from '../../../server/engine/exact/rational'
 
@@ -59,14 +59,14 @@ describe('structures (common practice)', () => {
     expect(evaluateSu(F, e!, [[1, 0, 0], [0, 1, 0], [0, 0, 1]])).toBe(1) // ε_123 = 1
   })
   it('identical-leg permutations carry Fermi signs', () => {
-    const ps = theoryParticles({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'psi', lorentz: 'left-weyl' }, { name: 'phi', lorentz: 'scalar', real: true }] })
+    const ps = basisSpecies({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'psi', lorentz: 'left-weyl' }, { name: 'phi', lorentz: 'scalar', real: true }] })
     const c = parseClassKey(ps, 'psi^2 phi^2')
     const perms = identicalLegPermutations(c.legs)
     expect(perms).toHaveLength(4)
     expect(perms.map((p) => p.sign).sort()).toEqual([-1, -1, 1, 1])
   })
   it('input syntax: signs of reversed brackets, powers, Mandelstams, round trip', () => {
-    const ps = theoryParticles({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] })
+    const ps = basisSpecies({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] })
     const c = parseClassKey(ps, 'D^4 phi^4')
     const [t] = parseOperatorText(c, '-1/2 <21>^2[12]^2', 1)
     expect(t!.coeff).toEqual(rat(-1, 2)) // ⟨21⟩² = ⟨12⟩²

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest'
 import { findPreset } from '../../../shared/presets/index'
 import { parseTheory } from '../../../server/engine/theory/parseTheory'
-import { classKey, enumerateClasses, enumerateFieldContents, parseClassKey } from '../../../server/engine/counting/classes'
+import { enumerateClasses, enumerateFieldContents } from '../../../server/engine/counting/classes'
+import { classKeyOfCounts as classKey, countsOfClassKey as parseClassKey, readClassKey } from '../../../server/engine/theory/classKey'
 import { lorentzSingletSeries } from '../../../server/engine/counting/lorentz'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'
 import { GroupIntegrator } from '../../../server/engine/counting/groupFactor'
@@ -15,18 +16,20 @@ const scalar = buildTheoryModel(parseTheory(findPreset('real-scalar')!.theory))
 
 describe('class keys', () => {
   it('species order: fields in file order, each followed by its conjugate, field strengths as chiral halves', () => {
-    expect(smeft.species.map((s) => s.key)).toEqual([
+    expect(smeft.species.map((s) => s.label)).toEqual([
       'Q', 'Q*', 'u', 'u*', 'd', 'd*', 'L', 'L*', 'e', 'e*', 'H', 'H*', 'G_L', 'G_R', 'W_L', 'W_R', 'B_L', 'B_R',
     ])
   })
 
-  it('D^k first, powers as ^n, single spaces; parseClassKey inverts classKey', () => {
+  it('D^k first, powers as ^n, single spaces; countsOfClassKey inverts classKeyOfCounts', () => {
     const { counts, derivatives } = parseClassKey(smeft, 'D^2 H^2 H*^2')
     expect(derivatives).toBe(2)
     expect(classKey(smeft, counts, 2)).toBe('D^2 H^2 H*^2')
     expect(classKey(smeft, parseClassKey(smeft, 'G_L^3').counts, 0)).toBe('G_L^3')
     expect(classKey(smeft, parseClassKey(smeft, 'H* D L* L H').counts, 1)).toBe('D L L* H H*')
-    expect(() => parseClassKey(smeft, 'D^2 X^2')).toThrow('The class "D^2 X^2" names "X^2", which is not a field of this theory')
+    expect(() => parseClassKey(smeft, 'D^2 X^2')).toThrow('The class "D^2 X^2" names "X", which is not a field of this theory (its fields are Q, Q*, u, u*, d, d*, L, L*, e, e*, H, H*, G_L, G_R, W_L, W_R, B_L, B_R)')
+    expect(() => parseClassKey(smeft, 'D^0 H')).toThrow('Cannot read "D^0" in the class "D^0 H"')
+    expect(readClassKey('H D H* D^2')).toEqual({ derivatives: 3, blocks: [{ label: 'H', power: 1 }, { label: 'H*', power: 1 }] })
   })
 
   it('enumerates dimension-6 SMEFT classes passing the selection rules (hypercharge, triality, Lorentz parity; common practice)', () => {
@@ -96,9 +99,9 @@ describe('field-content enumeration against a brute-force oracle', () => {
     const rec = (s: number, used: number): void => {
       if (s === S) {
         if (used === 0) return
-        const frac = (g: number) => counts.reduce((t, n, i) => t + n * Number(model.species[i]!.u1[g]!.num) * (42 / Number(model.species[i]!.u1[g]!.den)), 0)
-        const zn = counts.reduce((t, n, i) => t + n * model.species[i]!.zn[0]!, 0) % 3
-        const tri = counts.reduce((t, n, i) => t + n * (model.species[i]!.su[0]![0]! + 2 * model.species[i]!.su[0]![1]!), 0) % 3
+        const frac = (g: number) => counts.reduce((t, n, i) => t + n * Number(model.species[i]!.u1[model.u1[g]!.name]!.num) * (42 / Number(model.species[i]!.u1[model.u1[g]!.name]!.den)), 0)
+        const zn = counts.reduce((t, n, i) => t + n * model.species[i]!.zn[model.zn[0]!.name]!, 0) % 3
+        const tri = counts.reduce((t, n, i) => t + n * (model.species[i]!.reps[model.su[0]!.name]![0]! + 2 * model.species[i]!.reps[model.su[0]!.name]![1]!), 0) % 3
         const left = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'L' ? n : 0), 0)
         const right = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'R' ? n : 0), 0)
         if (frac(0) !== 0 || frac(1) !== 0 || zn !== 0 || tri !== 0 || (left - right) % 2 !== 0) return

@@ -1,16 +1,20 @@
 import { describe, expect, it } from 'vitest'
 import { orderOf, orderOfOperator, resolveRule, groupByOrder, reshuffle, type RuleContext } from '../../../server/engine/rules'
 import { toString } from '../../../server/engine/exact/rational'
+import { buildTheoryModel } from '../../../server/engine/theory/model'
 import { EngineInputError } from '../../../server/engine/errors'
 import { CountingRuleSchema } from '../../../shared/schemas/countingRules'
 import type { CountingRule } from '../../../shared/schemas/countingRules'
 
 const sm: RuleContext = {
   frame: 'relativistic',
-  fields: [
-    { name: 'Q', lorentz: 'left-weyl' }, { name: 'u', lorentz: 'right-weyl' }, { name: 'L', lorentz: 'left-weyl' },
-    { name: 'H', lorentz: 'scalar' }, { name: 'G', lorentz: 'field-strength' }, { name: 'B', lorentz: 'field-strength' },
-  ],
+  species: buildTheoryModel({
+    name: 'sm', frame: 'relativistic', groups: [],
+    fields: [
+      { name: 'Q', lorentz: 'left-weyl' }, { name: 'u', lorentz: 'right-weyl' }, { name: 'L', lorentz: 'left-weyl' },
+      { name: 'H', lorentz: 'scalar' }, { name: 'G', lorentz: 'field-strength' }, { name: 'B', lorentz: 'field-strength' },
+    ],
+  }).species,
 }
 const mass: CountingRule = { name: 'E/M', kind: 'massRatio' }
 
