@@ -9,6 +9,7 @@ import * as m007 from './20261202_007_session_cutoff'
 import * as m008 from './20261202_008_sign_in_failures'
 import * as m010 from './20261203_010_fingerprint_version'
 import * as m020 from './20261203_020_lorentz_kind_words'
+import * as m021 from './20261203_021_class_orders'
 import * as m030 from './20261203_030_run_error_texts'
 import * as m040 from './20261203_040_run_heartbeat'
 
@@ -25,6 +26,7 @@ const migrations: Record<string, Knex.Migration> = {
   '20261202_008_sign_in_failures': m008,
   '20261203_010_fingerprint_version': m010,
   '20261203_020_lorentz_kind_words': m020,
+  '20261203_021_class_orders': m021,
   '20261203_030_run_error_texts': m030,
   '20261203_040_run_heartbeat': m040,
 }

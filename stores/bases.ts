@@ -16,13 +16,10 @@ export interface BoardOperator {
 }
 /** Heavy-frame classes have an order in 1/m and no mass dimension, no Hilbert series (null). */
 export interface BoardClass {
-  order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null
+  order: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null
   realParameters?: number, cpEven?: number | null, cpOdd?: number | null, pEven?: number | null, pOdd?: number | null, parityReason?: string | null
 }
 
-export function classOrder(c: Pick<BoardClass, 'order' | 'dimension'>): number {
-  return c.order ?? (c.dimension as number) - 4
-}
 export interface Rewrite { vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
 export interface BoardTag { id: number, operatorId: number, kind: string, label: string }
 export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null }
@@ -67,7 +64,7 @@ export const useBasesStore = defineStore('bases', () => {
     tags.value = data.tags
     notes.value = data.notes
     const cols: Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }> = {}
-    for (const c of data.basis.classes as BoardClass[]) cols[classOrder(c)] ??= { kept: [], set_aside: [] }
+    for (const c of data.basis.classes as BoardClass[]) cols[c.order] ??= { kept: [], set_aside: [] }
     for (const op of data.operators as BoardOperator[]) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
     columns.value = cols
   }

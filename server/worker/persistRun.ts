@@ -8,6 +8,7 @@ import { heavyReport } from '../engine/heavy/report'
 import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
 import { heldRun, RunLostError } from './runLease'
+import { massRatioOrder } from '../engine/rules/defaultWeights'
 
 /**
  * Write a finished run in one transaction: nothing of it is visible unless all of it is. The
@@ -49,7 +50,7 @@ function basisSummary(report: BasisReport) {
 
 async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, report: BasisReport): Promise<number> {
   const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({
-    order: d.dimension - 4, dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
+    order: d.order, dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
     tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.flavor?.realParameters ?? c.realParameters, flavor: c.flavor ?? null,
     // Discrete symmetries in real parameters (null where undefined), so the board can impose them.
     // With several flavors P and CP also act on flavor indices: not counted here.
@@ -59,7 +60,7 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
   })))
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, fingerprint_version: FINGERPRINT_VERSION,
-    counting_rule: 'massRatio', max_order: (run.params.maxDim ?? 4) - 4, classes: JSON.stringify(classes), note: report.note,
+    counting_rule: 'massRatio', max_order: massRatioOrder(run.params.maxDim ?? 4), classes: JSON.stringify(classes), note: report.note,
     // As computed, the kept operators of each class are independent and complete.
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
@@ -76,8 +77,8 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
     }
   }
   const rows = report.byDimension.flatMap((d) => d.classes.flatMap((c) => [
-    ...c.operators.map((op) => row(d.dimension - 4, c.key, 'kept', op)),
-    ...(c.alternatives ?? []).map((op) => row(d.dimension - 4, c.key, 'set_aside', op)),
+    ...c.operators.map((op) => row(d.order, c.key, 'kept', op)),
+    ...(c.alternatives ?? []).map((op) => row(d.order, c.key, 'set_aside', op)),
   ]))
   for (let i = 0; i < rows.length; i += 500) await trx('operators').insert(rows.slice(i, i + 500))
   return basis.id

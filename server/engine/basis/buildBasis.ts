@@ -12,6 +12,7 @@ import { basisSpecies } from './species'
 import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
 import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { flavorDecomposition, type FlavorSummary } from './flavor'
+import { massRatioOrder } from '../rules/defaultWeights'
 
 export interface BuildOptions {
   maxDim: number
@@ -62,6 +63,8 @@ export interface ClassReport {
 
 export interface DimensionReport {
   dimension: number
+  /** Order under the mass-ratio rule (dimension − 4), stored with each class. */
+  order: number
   operators: number
   tallyOk: boolean
   message?: string
@@ -99,7 +102,7 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
     if (opts.signal?.aborted) throw new EngineCancelledError('basis')
     opts.onProgress?.(i / todo.length, `class ${key}`)
     let entry = byDimension.find((e) => e.dimension === d)
-    if (!entry) byDimension.push((entry = { dimension: d, operators: 0, tallyOk: true, classes: [] }))
+    if (!entry) byDimension.push((entry = { dimension: d, order: massRatioOrder(d), operators: 0, tallyOk: true, classes: [] }))
     if (done.has(key)) return
     const hOf = (k: string, nfCounts: typeof counts): number => nfCounts.byDimension.find((x) => x.dimension === d)?.classes[k] ?? 0
     const parsed = parseClassKey(particles, key, 1)

@@ -26,14 +26,14 @@ export interface BoardExport {
 /** Group flat operator rows into orders and classes (orders ascending, classes in stored order). */
 export function assembleExport(input: {
   theory: { name: string, definition: unknown }, countingRule: string, note: string, exportedAt: string,
-  classes: { order?: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null }[],
+  classes: { order: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null }[],
   operators: (Omit<ExportOperator, 'tags' | 'notes'> & { order: number, classKey: string })[],
   tags: { operatorId: number, kind: string, label: string }[],
   notes: { operatorId: number | null, authorName: string | null, body: string, createdAt: string | Date }[],
 }): BoardExport {
   const orders = new Map<number, ExportOrder>()
   for (const c of input.classes) {
-    const order = c.order ?? c.dimension! - 4
+    const order = c.order
     if (!orders.has(order)) orders.set(order, { order, dimension: c.dimension ?? null, classes: [] })
     orders.get(order)!.classes.push({ key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, operators: [] })
   }

@@ -69,8 +69,20 @@ function relativisticDefaults(rule: CountingRule, ctx: RuleContext & { frame: 'r
   return out
 }
 
+/** The mass-ratio rule's offset: the order of a relativistic operator is its mass dimension − 4. */
+export const MASS_RATIO_OFFSET = 4
+
+/**
+ * Order of a relativistic operator of this mass dimension under the mass-ratio rule.
+ * @example massRatioOrder(6) // 2
+ * Method: Σ weights (= mass dimension) − offset. Reference: common practice.
+ */
+export function massRatioOrder(dimension: number): number {
+  return dimension - MASS_RATIO_OFFSET
+}
+
 function defaultOffset(rule: CountingRule, ctx?: RuleContext): Rational {
-  if (rule.kind === 'massRatio') return rat(4)
+  if (rule.kind === 'massRatio') return rat(MASS_RATIO_OFFSET)
   if (rule.kind === 'velocity' && ctx?.frame === 'heavy') return rat(5)
   return rat(0)
 }

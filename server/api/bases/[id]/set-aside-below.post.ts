@@ -20,8 +20,7 @@ export default defineApiHandler(async (event) => {
   const below = estimates.filter((o) => o.belowTarget).map((o) => o.order)
   const { count } = await setAsideOrders(basis.id, below, user.id)
   // Coverage of the affected classes changed: recompute (this also bumps the basis version).
-  const classes = (basis.classes as { key: string, rank: number, order?: number, dimension: number | null }[])
-    .filter((c) => below.includes(c.order ?? (c.dimension as number) - 4))
+  const classes = (basis.classes as { key: string, rank: number, order: number }[]).filter((c) => below.includes(c.order))
   await recomputeCoverage(basis.id, classes)
   const basisVersion = (await basisOr404(basis.id)).version as number
   return { count, orders: below, estimates, target, basisVersion }

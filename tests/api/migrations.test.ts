@@ -3,9 +3,10 @@ import { buildWorld, type World } from '../support/fixtures'
 import { testDb } from '../support/db'
 import { messageOf } from '../support/client'
 import * as lorentzWords from '../../migrations/20261203_020_lorentz_kind_words'
+import * as classOrders from '../../migrations/20261203_021_class_orders'
 
-// The migration that writes Lorentz kinds in words, on the real test database. Each case runs
-// inside a transaction that is rolled back, so the rows of other tests are left as they were.
+// Migrations that rewrite stored data, on the real test database. Each case runs inside a
+// transaction that is rolled back, so the rows of other tests are left as they were.
 let world: World
 beforeAll(async () => { world = await buildWorld() })
 
@@ -62,5 +63,21 @@ describe('migration 20261203_020: Lorentz kinds in words', () => {
     expect(message).toContain('"S" is the old one-letter spelling; write "scalar" (the other Lorentz kinds are "left-weyl", "right-weyl", "field-strength")')
     expect(message).toContain('"F" is the old one-letter spelling; write "field-strength"')
     expect(await testDb()('theories').count('* as n')).toEqual(before)
+  })
+})
+
+describe('migration 20261203_021: every stored class carries its order', () => {
+  it('adds order = dimension − 4 where it is missing and leaves other classes alone', async () => {
+    await inRolledBackTransaction(async (trx) => {
+      const classes = [
+        { dimension: 6, key: 'H^3 H*^3', rank: 1 },
+        { order: 2, dimension: null, key: 'psi* psi (1/m^2)', rank: 3 },
+        { order: 4, dimension: 8, key: 'F_L^4', rank: 1 },
+      ]
+      const [basis] = await trx('bases').insert({ theory_id: world.theoryId, theory_version: 1, max_order: 4, classes: JSON.stringify(classes) }).returning('id')
+      await classOrders.up(trx)
+      const stored = (await trx('bases').where({ id: basis.id }).first('classes')).classes
+      expect(stored).toEqual([{ ...classes[0], order: 2 }, classes[1], classes[2]])
+    })
   })
 })
