@@ -16,7 +16,7 @@ import { suWeights } from './weights'
 /** A Lorentz irrep as [2 j_l, 2 j_r]. */
 export type LorentzIrrep = readonly [number, number]
 
-/** Standard Lorentz irreps of the theory file letters (S, L, R) and field-strength halves. */
+/** Standard Lorentz irreps of the species (theory/model.ts: scalar, Weyl fermions) and field-strength halves. */
 export const LORENTZ_IRREPS = {
   S: [0, 0], L: [1, 0], R: [0, 1], FL: [2, 0], FR: [0, 2], V: [1, 1],
 } as const satisfies Record<string, LorentzIrrep>

@@ -12,7 +12,7 @@
  * field has helicity −1/2, G_L −1). Conjugation reverses SU(n) Dynkin labels and negates
  * U(1) and Z_n charges.
  */
-import type { Theory } from '../../../shared/schemas/theory'
+import type { Theory, TheoryField } from '../../../shared/schemas/theory'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
@@ -99,43 +99,65 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
     else model.zn.push({ name: g.name, n: g.n!, gauge: g.gauge })
   }
   theory.fields.forEach((f, fieldIndex) => {
-    const flavored = f.flavors !== undefined
-    const type: LorentzType = f.lorentz === 'field-strength' ? 'FL' : MATTER_TYPE[f.lorentz]
-    const reps = Object.fromEntries(model.su.map((g) => [g.name, f.lorentz === 'field-strength'
-      ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1))
-      : (f.reps?.[g.name] ?? zeros(g.n - 1)).slice()]))
-    const charged = f.lorentz !== 'field-strength'
-    const u1 = Object.fromEntries(model.u1.map((g) => [g.name, charged ? parseRational(String(f.charges?.[g.name] ?? '0')) : ZERO]))
-    const zn = Object.fromEntries(model.zn.map((g) => [g.name, charged ? mod(Number(f.charges?.[g.name] ?? 0), g.n) : 0]))
-    const suKind = Object.fromEntries(model.su.map((g) => [g.name, suKindOf(g.n, reps[g.name]!)]))
+    const strength = f.lorentz === 'field-strength'
     const i = model.species.length
     const selfConjugate = f.lorentz === 'scalar' && f.real === true
-    const base = {
-      field: f.name, fieldIndex, kind: f.lorentz, fermion: type === 'L' || type === 'R',
-      flavored, flavors: flavored ? (opts.nf ?? f.flavors!) : 1,
+    const first: SpeciesParts = {
+      label: strength ? `${f.name}_L` : f.name, conj: false,
+      lorentz: strength ? 'FL' : MATTER_TYPE[f.lorentz as Exclude<LorentzKind, 'field-strength'>], ...fieldCharges(model, f),
     }
-    const first = f.lorentz === 'field-strength' ? `${f.name}_L` : f.name
-    const second = f.lorentz === 'field-strength' ? `${f.name}_R` : `${f.name}*`
-    model.species.push(species({ ...base, label: first, conj: false, lorentz: type, reps, suKind, u1, zn },
-      selfConjugate ? { label: first, index: i } : { label: second, index: i + 1 }))
-    if (selfConjugate) return
-    const conjugate = {
-      ...base, label: second, conj: true, lorentz: CONJUGATE_TYPE[type],
-      reps: mapValues(reps, (a) => a.slice().reverse()),
-      suKind: mapValues(suKind, (k) => CONJUGATE_KIND[k]),
-      u1: mapValues(u1, neg),
-      zn: Object.fromEntries(model.zn.map((g) => [g.name, mod(-zn[g.name]!, g.n)])),
-    }
-    model.species.push(species(conjugate, { label: first, index: i }))
+    const second: SpeciesParts = { label: strength ? `${f.name}_R` : `${f.name}*`, conj: true, lorentz: CONJUGATE_TYPE[first.lorentz], ...conjugateCharges(model, first) }
+    const flavors = f.flavors === undefined ? 1 : (opts.nf ?? f.flavors)
+    model.species.push(makeSpecies(f, fieldIndex, flavors, first, selfConjugate ? { label: first.label, index: i } : { label: second.label, index: i + 1 }))
+    if (!selfConjugate) model.species.push(makeSpecies(f, fieldIndex, flavors, second, { label: first.label, index: i }))
   })
   return model
 }
 
-type SpeciesCore = Omit<Species, 'conjugate' | 'partner' | 'angles' | 'squares' | 'helicity2' | 'dim2'>
+/** What distinguishes a species from its conjugate. */
+interface SpeciesParts {
+  label: string
+  conj: boolean
+  lorentz: LorentzType
+  reps: Record<string, number[]>
+  suKind: Record<string, SuKind>
+  u1: Record<string, Rational>
+  zn: Record<string, number>
+}
 
-function species(core: SpeciesCore, partner: { label: string; index: number }): Species {
-  const { angles, squares, dim2 } = IRREP[core.lorentz]
-  return { ...core, conjugate: partner.label, partner: partner.index, angles, squares, helicity2: squares - angles, dim2 }
+/** Representations and charges of a field as declared (a field strength: adjoint of gaugeOf, no charges). */
+function fieldCharges(model: TheoryModel, f: TheoryField): Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> {
+  const strength = f.lorentz === 'field-strength'
+  const out: Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> = { reps: {}, suKind: {}, u1: {}, zn: {} }
+  for (const g of model.su) {
+    const labels = strength ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)) : (f.reps?.[g.name] ?? zeros(g.n - 1)).slice()
+    out.reps[g.name] = labels
+    out.suKind[g.name] = suKindOf(g.n, labels)
+  }
+  for (const g of model.u1) out.u1[g.name] = strength ? ZERO : parseRational(String(f.charges?.[g.name] ?? '0'))
+  for (const g of model.zn) out.zn[g.name] = strength ? 0 : mod(Number(f.charges?.[g.name] ?? 0), g.n)
+  return out
+}
+
+/** Conjugate representations and charges: labels reversed, kinds conjugated, charges negated. */
+function conjugateCharges(model: TheoryModel, s: SpeciesParts): Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> {
+  const out: Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> = { reps: {}, suKind: {}, u1: {}, zn: {} }
+  for (const g of model.su) {
+    out.reps[g.name] = s.reps[g.name]!.slice().reverse()
+    out.suKind[g.name] = CONJUGATE_KIND[s.suKind[g.name]!]
+  }
+  for (const g of model.u1) out.u1[g.name] = neg(s.u1[g.name]!)
+  for (const g of model.zn) out.zn[g.name] = mod(-s.zn[g.name]!, g.n)
+  return out
+}
+
+function makeSpecies(f: TheoryField, fieldIndex: number, flavors: number, s: SpeciesParts, partner: { label: string; index: number }): Species {
+  const { angles, squares, dim2 } = IRREP[s.lorentz]
+  return {
+    label: s.label, field: f.name, fieldIndex, conj: s.conj, conjugate: partner.label, partner: partner.index,
+    kind: f.lorentz, lorentz: s.lorentz, angles, squares, helicity2: squares - angles, fermion: s.lorentz === 'L' || s.lorentz === 'R', dim2,
+    reps: s.reps, suKind: s.suKind, u1: s.u1, zn: s.zn, flavors, flavored: f.flavors !== undefined,
+  }
 }
 
 /**
@@ -150,10 +172,6 @@ export function suKindOf(n: number, labels: readonly number[]): SuKind {
   if (key === [1, ...zeros(n - 2)].join(',')) return 'fund'
   if (key === [...zeros(n - 2), 1].join(',')) return 'anti'
   return 'other'
-}
-
-function mapValues<T, U>(r: Record<string, T>, f: (x: T) => U): Record<string, U> {
-  return Object.fromEntries(Object.entries(r).map(([k, v]) => [k, f(v)]))
 }
 
 function zeros(k: number): number[] {
