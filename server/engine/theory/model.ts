@@ -115,20 +115,13 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
 }
 
 /** What distinguishes a species from its conjugate. */
-interface SpeciesParts {
-  label: string
-  conj: boolean
-  lorentz: LorentzType
-  reps: Record<string, number[]>
-  suKind: Record<string, SuKind>
-  u1: Record<string, Rational>
-  zn: Record<string, number>
-}
+type SpeciesParts = Pick<Species, 'label' | 'conj' | 'lorentz' | 'reps' | 'suKind' | 'u1' | 'zn'>
+type Charges = Pick<Species, 'reps' | 'suKind' | 'u1' | 'zn'>
 
 /** Representations and charges of a field as declared (a field strength: adjoint of gaugeOf, no charges). */
-function fieldCharges(model: TheoryModel, f: TheoryField): Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> {
+function fieldCharges(model: TheoryModel, f: TheoryField): Charges {
   const strength = f.lorentz === 'field-strength'
-  const out: Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> = { reps: {}, suKind: {}, u1: {}, zn: {} }
+  const out: Charges = { reps: {}, suKind: {}, u1: {}, zn: {} }
   for (const g of model.su) {
     const labels = strength ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)) : (f.reps?.[g.name] ?? zeros(g.n - 1)).slice()
     out.reps[g.name] = labels
@@ -140,8 +133,8 @@ function fieldCharges(model: TheoryModel, f: TheoryField): Pick<SpeciesParts, 'r
 }
 
 /** Conjugate representations and charges: labels reversed, kinds conjugated, charges negated. */
-function conjugateCharges(model: TheoryModel, s: SpeciesParts): Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> {
-  const out: Pick<SpeciesParts, 'reps' | 'suKind' | 'u1' | 'zn'> = { reps: {}, suKind: {}, u1: {}, zn: {} }
+function conjugateCharges(model: TheoryModel, s: SpeciesParts): Charges {
+  const out: Charges = { reps: {}, suKind: {}, u1: {}, zn: {} }
   for (const g of model.su) {
     out.reps[g.name] = s.reps[g.name]!.slice().reverse()
     out.suKind[g.name] = CONJUGATE_KIND[s.suKind[g.name]!]
