@@ -14,6 +14,7 @@
 import { readFileSync } from 'node:fs'
 import { parseTheory } from '../server/engine/theory/parseTheory'
 import { buildBasis, type ClassReport } from '../server/engine/basis/index'
+import { massRatioDimension } from '../server/engine/rules/defaultWeights'
 import { heavyOutput } from './heavyCli'
 
 function usage(msg: string): never {
@@ -64,14 +65,14 @@ function main(): void {
       process.stdout.write(`${JSON.stringify(heavyOutput(theory, maxOrder, true), null, 2)}\n`)
       return
     }
-    const maxDim = maxDimArg ?? maxOrder! + 4
+    const maxDim = maxDimArg ?? massRatioDimension(maxOrder!)
     const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf') })
     const entry = (d: (typeof r.byDimension)[number]) => ({ operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })
     const out = {
       theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
       ...(maxOrder === undefined
         ? { byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, ...entry(d) })) }
-        : { byOrder: r.byDimension.map((d) => ({ order: d.dimension - 4, dimension: d.dimension, ...entry(d) })) }),
+        : { byOrder: r.byDimension.map((d) => ({ order: d.order, dimension: d.dimension, ...entry(d) })) }),
     }
     process.stdout.write(`${JSON.stringify(out, null, 2)}\n`)
   } catch (e) {

@@ -14,6 +14,7 @@ import { findPreset } from '../shared/presets/index'
 import type { Theory } from '../shared/schemas/theory'
 import { parseTheory } from '../server/engine/theory/parseTheory'
 import { countOperators } from '../server/engine/counting/countOperators'
+import { massRatioDimension, massRatioOrder } from '../server/engine/rules/defaultWeights'
 import { heavyOutput } from './heavyCli'
 
 class UsageError extends Error {}
@@ -59,14 +60,14 @@ function main(): void {
       process.stdout.write(`${JSON.stringify(heavyOutput(theory, args.maxOrder, false))}\n`)
       return
     }
-    const maxDim = args.maxDim ?? args.maxOrder! + 4
+    const maxDim = args.maxDim ?? massRatioDimension(args.maxOrder!)
     const result = countOperators(theory, { maxDim, minDim: args.minDim, nf: args.nf })
     const plain = args.maxOrder === undefined
       ? { theory: result.theory, byDimension: result.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, classes: d.classes })) }
       : {
           theory: result.theory,
           byOrder: result.byDimension.map((d) => ({
-            order: d.dimension - 4, dimension: d.dimension, operators: d.operators,
+            order: massRatioOrder(d.dimension), dimension: d.dimension, operators: d.operators,
             classes: Object.entries(d.classes).map(([key, count]) => ({ key, count })),
           })),
         }

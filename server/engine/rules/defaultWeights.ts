@@ -81,6 +81,11 @@ export function massRatioOrder(dimension: number): number {
   return dimension - MASS_RATIO_OFFSET
 }
 
+/** The mass dimension of a mass-ratio order (inverse of massRatioOrder). @example massRatioDimension(2) // 6 */
+export function massRatioDimension(order: number): number {
+  return order + MASS_RATIO_OFFSET
+}
+
 function defaultOffset(rule: CountingRule, ctx?: RuleContext): Rational {
   if (rule.kind === 'massRatio') return rat(MASS_RATIO_OFFSET)
   if (rule.kind === 'velocity' && ctx?.frame === 'heavy') return rat(5)

@@ -3,6 +3,7 @@ import { fail } from '../http/apiHandler'
 import { MAX_HEAVY_ORDER, MAX_RUN_DIMENSION } from '../../../shared/schemas/runRequests'
 import { sendRunJob } from '../jobs/queue'
 import { settleRuns } from '../jobs/orphans'
+import { massRatioDimension, massRatioOrder } from '../../engine/rules/defaultWeights'
 
 export async function runOr404(id: number) {
   const row = await useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id').where('r.id', id).first('r.*', 't.group_id')
@@ -57,7 +58,7 @@ export function runReach(definition: unknown, body: { kind: 'count' | 'basis', m
     if (maxOrder > MAX_HEAVY_ORDER) fail(400, `Maximum order must be at most ${MAX_HEAVY_ORDER} for a heavy-particle run (up to 1/m^${MAX_HEAVY_ORDER}), not ${maxOrder}`)
     return { maxOrder }
   }
-  const maxDim = body.maxDim ?? body.maxOrder! + 4
-  if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `Maximum order must be at most ${body.kind === 'basis' ? '4 for an explicit basis (dimension 8)' : '12 for a count (dimension 16)'}, not ${maxDim - 4}`)
+  const maxDim = body.maxDim ?? massRatioDimension(body.maxOrder!)
+  if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `Maximum order must be at most ${body.kind === 'basis' ? '4 for an explicit basis (dimension 8)' : '12 for a count (dimension 16)'}, not ${massRatioOrder(maxDim)}`)
   return { maxDim }
 }
