@@ -1,14 +1,16 @@
 // Known bad inputs of the engine, one or more per place that throws an input error
 // (engineMessages.test.ts checks that every such place is reached and that every message
 // passes the forbidden list). `says` pins the part of the message a user acts on.
-import { parseTheory, type Theory } from '../../../shared/schemas/theory'
+import type { Theory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { findPreset } from '../../../shared/presets/index'
-import { buildBasis, classBasis, rewriteOperator, parseOperatorText, theoryParticles, parseClassKey as basisClassKey } from '../../../server/engine/basis/index'
+import { buildBasis, classBasis, rewriteOperator, parseOperatorText, basisSpecies, parseClassKey as basisClassKey } from '../../../server/engine/basis/index'
 import { parityLegMap } from '../../../server/engine/basis/parityPartners'
 import { typedFingerprint } from '../../../server/engine/board/typedOperator'
 import { expressIn, type Fingerprint } from '../../../server/engine/board/fingerprints'
 import { ruleOrders } from '../../../server/engine/board/ruleOrders'
-import { countOperators, enumerateClasses, enumerateFieldContents, lorentzSingletSeries, parseClassKey } from '../../../server/engine/counting/index'
+import { countOperators, enumerateClasses, enumerateFieldContents, lorentzSingletSeries } from '../../../server/engine/counting/index'
+import { countsOfClassKey } from '../../../server/engine/theory/classKey'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'
 import { buildTheoryModel } from '../../../server/engine/theory/model'
 import {
@@ -24,35 +26,34 @@ import { enumerateHeavyLight } from '../../../server/engine/heavy/heavyLight'
 import { enumerateHeavyHeavy } from '../../../server/engine/heavy/heavyHeavy'
 import { vacuumPolarizationOneLoop, vacuumPolarizationSeries } from '../../../server/engine/matching/vacuumPolarization'
 import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../../../server/engine/rules/index'
-import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, decoupleUp, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
+import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, alphaSAboveThreshold, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningReport, runGaugeCouplings, simpleGroupFactors, towerGaugeContent } from '../../../server/engine/running/gauge/index'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 
 export interface BadInput { name: string, run: () => unknown, says?: RegExp }
 
 const preset = (id: string) => findPreset(id)!.theory as Theory
-const phi: Theory = { name: 'real scalar', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] }
+const phi: Theory = { name: 'real scalar', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] }
 const qedLike = { heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 3 }, groups: [{ name: 'X', type: 'U1' as const, gauge: true }] }
 const ladder = { scales: [{ name: 'E', value: '10', unit: 'GeV' as const }, { name: 'M', value: '1', unit: 'TeV' as const }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }] }
 const qcd = { alphaS: 0.118, muFrom: 91.1876, muTo: 10, loops: 2 as const, thresholds: [{ name: 'b', mass: 4.18, kind: 'msbar' as const }] }
-const sm = { frame: 'relativistic' as const, fields: [{ name: 'H', lorentz: 'S' as const }] }
+const sm = { frame: 'relativistic' as const, species: buildTheoryModel({ name: 'one scalar', frame: 'relativistic', groups: [], fields: [{ name: 'H', lorentz: 'scalar' }] }).species }
 const twoPrimes = workingPrimes(2)
 const print = (values: (p: number) => number[]): Fingerprint => ({ primes: twoPrimes, values: twoPrimes.map(values) })
-const sextet: Theory = parseTheory({ name: 'sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'S', reps: { C: [2, 0] } }] })
+const sextet: Theory = parseTheory({ name: 'sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar', reps: { C: [2, 0] } }] })
 
 const theoryCases: BadInput[] = [
   { name: 'a theory file that is not JSON', run: () => parseTheory('{ "name": '), says: /^The theory file is not valid JSON/ },
-  { name: 'a real scalar with a charge', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { Y: '1/3' } }] }), says: /^Field 1 "phi", charge under Y: a real scalar/ },
-  { name: 'an SU group without n, and labels for it', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', gauge: true }], fields: [{ name: 'phi', lorentz: 'S', reps: { G: [1] } }] }), says: /^Symmetry 1 "G", n: SU\(n\) needs n from 2 to 8; give n$/ },
+  { name: 'a real scalar with a charge', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3' } }] }), says: /^Field 1 "phi", charge under Y: a real scalar/ },
+  { name: 'an SU group without n, and labels for it', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', reps: { G: [1] } }] }), says: /^Symmetry 1 "G", n: SU\(n\) needs n from 2 to 8; give n$/ },
   { name: 'an untyped, empty theory', run: () => parseTheory({ name: '', frame: 'x', groups: {}, fields: [{ name: 'a', lorentz: 'Q', reps: { '1bad': [1] } }] }), says: /^Name must not be empty/ },
   { name: 'a count of a heavy-frame theory', run: () => countOperators(preset('heavy-vexonium'), { maxDim: 6 }), says: /Hilbert-series count does not cover/ },
   { name: 'a count below dimension 5', run: () => countOperators(phi, { maxDim: 4 }) },
   { name: 'a count with seven flavors', run: () => countOperators(phi, { maxDim: 6, nf: 7 }), says: /number of flavors/ },
-  { name: 'the model of a heavy-frame theory', run: () => buildTheoryModel(preset('heavy-vexonium')) },
-  { name: 'a class naming an unknown field (counting)', run: () => parseClassKey(buildTheoryModel(phi), 'D^2 X^2'), says: /not a field of this theory/ },
+  { name: 'a class naming an unknown field (counting)', run: () => countsOfClassKey(buildTheoryModel(phi), 'D^2 X^2'), says: /not a field of this theory/ },
   { name: 'dimensions in the wrong order', run: () => enumerateFieldContents(buildTheoryModel(phi), 7, 6) },
   { name: 'a dimension of 0', run: () => enumerateClasses(buildTheoryModel(phi), 0) },
-  { name: 'charges with a huge common denominator', run: () => enumerateFieldContents(buildTheoryModel(parseTheory({ name: 'odd', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'a', lorentz: 'S', charges: { Y: '1/999999937' } }, { name: 'b', lorentz: 'S', charges: { Y: '1/999999929' } }, { name: 'c', lorentz: 'S', charges: { Y: '1/999999893' } }] })), 6, 6), says: /common denominator/ },
+  { name: 'charges with a huge common denominator', run: () => enumerateFieldContents(buildTheoryModel(parseTheory({ name: 'odd', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'a', lorentz: 'scalar', charges: { Y: '1/999999937' } }, { name: 'b', lorentz: 'scalar', charges: { Y: '1/999999929' } }, { name: 'c', lorentz: 'scalar', charges: { Y: '1/999999893' } }] })), 6, 6), says: /common denominator/ },
   { name: 'nineteen copies of one field', run: () => cycleTypes(19), says: /lower the maximum dimension/ },
   { name: 'more than 40 derivatives', run: () => lorentzSingletSeries([], 41) },
 ]
@@ -69,16 +70,16 @@ const basisCases: BadInput[] = [
   { name: 'a typed operator with unreadable text', run: () => rewriteOperator(classBasis(phi, 'D^2 phi^4'), 's12 ?') },
   { name: 'a typed operator with too many derivatives', run: () => rewriteOperator(classBasis(phi, 'D^2 phi^4'), 's12 s34') },
   { name: 'a typed operator with the wrong helicities', run: () => rewriteOperator(classBasis(phi, 'D^2 phi^4'), '<12>') },
-  { name: 'an empty typed operator', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '', 1) },
+  { name: 'an empty typed operator', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '', 1) },
   { name: 'a missing gauge contraction', run: () => typedFingerprint(preset('smeft'), 'D^2 H^2 H*^2', '<13>[13]'), says: /needs a gauge contraction/ },
-  { name: 'a gauge contraction that does not exist', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '{g:3}', 1) },
-  { name: 'a power without a bracket', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '^2', 1) },
-  { name: 'a bracket with one leg', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '<1>', 1) },
-  { name: 'an empty term', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '1 + + 1', 1) },
-  { name: 'mismatched brackets', run: () => parseOperatorText(basisClassKey(theoryParticles(phi), 'phi^4'), '<12]', 1) },
+  { name: 'a gauge contraction that does not exist', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '{g:3}', 1) },
+  { name: 'a power without a bracket', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '^2', 1) },
+  { name: 'a bracket with one leg', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '<1>', 1) },
+  { name: 'an empty term', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '1 + + 1', 1) },
+  { name: 'mismatched brackets', run: () => parseOperatorText(basisClassKey(basisSpecies(phi), 'phi^4'), '<12]', 1) },
   { name: 'h.c. written the wrong way', run: () => typedFingerprint(preset('smeft'), 'D L L* H^2 H*^2', '<13>[23]{g:2} + h.c.'), says: /"\(X\) \+ h\.c\."/ },
   { name: 'h.c. of a class that is not its own conjugate', run: () => typedFingerprint(preset('smeft'), 'L e* H', '(<12>) + h.c.') },
-  { name: 'a parity image of a class that parity moves', run: () => parityLegMap(theoryParticles(preset('qed')), basisClassKey(theoryParticles(preset('qed')), 'eL eR* A_L')) },
+  { name: 'a parity image of a class that parity moves', run: () => parityLegMap(basisSpecies(preset('qed')), basisClassKey(basisSpecies(preset('qed')), 'eL eR* A_L')) },
   // A constant amplitude is no multiple of s² + t² + u², the one operator of D^4 φ^4.
   { name: 'a rewrite coefficient beyond what stored fingerprints determine', run: () => expressIn([print(() => [1, 0, 0]), print(() => [0, 1, 0])], print((p) => [1, (2 ** 26 + 15) % p, 0])), says: /^The coefficient of kept operator 2 is not a fraction with numerator and denominator up to \d+/ },
   { name: 'a rewrite outside the span', run: () => rewriteOperator(classBasis(phi, 'D^4 phi^4'), { label: 'one', evaluate: (_F, _pt, map) => (map.every((m, i) => m === i) ? 1 : 0) }), says: /is not a combination of the operators of the class D\^4 phi\^4/ },
@@ -89,7 +90,7 @@ const heavyCases: BadInput[] = [
   { name: 'a heavy particle coupled to an unknown group', run: () => enumerateHeavy({ ...qedLike, groups: [{ name: 'Y', type: 'U1' }] }) },
   { name: 'a heavy octet', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 1] } }, gaugeGroup: 'C', maxOrder: 3 }, groups: [{ name: 'C', type: 'SU', n: 3 }] }) },
   { name: 'a heavy particle charged under two SU(N)', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 }, groups: [{ name: 'C', type: 'SU', n: 3 }, { name: 'W', type: 'SU', n: 2 }] }), says: /two non-abelian groups \(C, W\)/ },
-  { name: 'an adjoint light scalar beside a heavy quark', run: () => enumerateHeavyLight({ particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: [{ name: 'S8', lorentz: 'S', real: true, reps: { C: [1, 1] } }], groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], maxOrder: 2, parity: true, timeReversal: true }), says: /^Light field S8 sits in \[1,1\] of C/ },
+  { name: 'an adjoint light scalar beside a heavy quark', run: () => enumerateHeavyLight({ particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: [{ name: 'S8', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }], groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], maxOrder: 2, parity: true, timeReversal: true }), says: /^Light field S8 sits in \[1,1\] of C/ },
   { name: 'heavy–heavy operators at order 3', run: () => enumerateHeavyHeavy(3, 1, 'psi', true) },
   { name: 'heavy operators of a relativistic theory', run: () => enumerateHeavyTheory({ frame: 'relativistic', groups: [] }) },
   { name: 'a heavy frame without its particle', run: () => enumerateHeavyTheory({ frame: 'heavy', groups: [] }) },
@@ -134,7 +135,7 @@ const scaleCases: BadInput[] = [
   { name: 'integrating out a field strength', run: () => integrateOut(preset('scalar-qed'), ['A'], { value: 1, unit: 'TeV' }) },
   { name: 'integrating out a field twice', run: () => integrateOut(preset('smeft'), ['H', 'H'], { value: 1, unit: 'TeV' }) },
   { name: 'integrating out of a heavy-frame theory', run: () => integrateOut(preset('heavy-vexonium'), ['psi'], { value: 1, unit: 'TeV' }) },
-  { name: 'threshold shifts of a field strength', run: () => thresholdShifts([{ name: 'G', lorentz: 'F', gaugeOf: 'C' }], []) },
+  { name: 'threshold shifts of a field strength', run: () => thresholdShifts([{ name: 'G', lorentz: 'field-strength', gaugeOf: 'C' }], []) },
 ]
 
 const runningCases: BadInput[] = [
@@ -149,7 +150,7 @@ const runningCases: BadInput[] = [
   { name: 'flavours at μ₀ that do not match the quarks', run: () => runAlphaS({ ...qcd, nfFrom: 3 }) },
   { name: 'α_s above 4π', run: () => runAlphaS({ ...qcd, alphaS: 13 }) },
   { name: 'three decoupling loops', run: () => runAlphaS({ ...qcd, decouplingLoops: 3 as never }) },
-  { name: 'a large α_s matched up across a threshold', run: () => decoupleUp(40, 0, 'pole', 2), says: /too large to match across it/ },
+  { name: 'a large α_s matched up across a threshold', run: () => alphaSAboveThreshold(40, 0, 'pole', 2), says: /too large to match across it/ },
   { name: 'decoupling with three loops', run: () => decouplingFactor(0.1, 0, 'msbar', 3 as never) },
   { name: 'a kinetic heavy-quark mass', run: () => decouplingCoefficients('kinetic' as never) },
   { name: 'seven active flavours in β', run: () => qcdBeta(7) },

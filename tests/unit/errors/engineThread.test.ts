@@ -26,7 +26,7 @@ describe('errors cross the engine-thread boundary with their class', () => {
     expect(e).toMatchObject({ where: 'parseClassKey', message: 'The class "phi^2" has fewer than 3 fields; an operator class needs at least 3' })
   })
   it('an invalid theory file stays an EngineInputError naming the field', async () => {
-    const e = await failureOf({ kind: 'count', theory: { name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'D', lorentz: 'S' }] }, maxDim: 6 })
+    const e = await failureOf({ kind: 'count', theory: { name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'D', lorentz: 'scalar' }] }, maxDim: 6 })
     expect(e).toBeInstanceOf(EngineInputError)
     expect(e.message).toBe('Field 1 "D", name cannot be "D", the covariant derivative; choose another name')
   })
