@@ -37,12 +37,12 @@ describe('class keys', () => {
   })
 
   it('refuses what it cannot read, naming the token or the field', () => {
-    expect(() => readClassKey('')).toThrow('readClassKey: empty class key ""')
-    expect(() => readClassKey('H^0')).toThrow('readClassKey: cannot read "H^0" in class key "H^0"')
-    expect(() => readClassKey('H^-1 H*')).toThrow('cannot read "H^-1"')
-    expect(() => readClassKey('2H')).toThrow('cannot read "2H"')
-    expect(() => countsOfClassKey(model, 'H^2 phi^2')).toThrow('unknown field "phi" in class "H^2 phi^2"')
-    expect(() => parseClassKey(basisSpecies(smeft), 'H H*')).toThrow('parseClassKey: a class needs at least 3 fields, got "H H*"')
+    expect(() => readClassKey('')).toThrow('The class is empty; name its fields, e.g. "D^2 H^2 H*^2"')
+    expect(() => readClassKey('H^0')).toThrow('Cannot read "H^0" in the class "H^0"; write a class as fields with powers')
+    expect(() => readClassKey('H^-1 H*')).toThrow('Cannot read "H^-1"')
+    expect(() => readClassKey('2H')).toThrow('Cannot read "2H"')
+    expect(() => countsOfClassKey(model, 'H^2 phi^2')).toThrow('The class "H^2 phi^2" names "phi", which is not a field of this theory')
+    expect(() => parseClassKey(basisSpecies(smeft), 'H H*')).toThrow('The class "H H*" has fewer than 3 fields; an operator class needs at least 3')
   })
 
   it('writes TeX (never throws): upright long names, chiral halves as subscripts, conjugation and powers as superscripts', () => {

@@ -50,12 +50,12 @@ describe('the theory model', () => {
   it('applies an nf override to declared flavors only', () => {
     expect(m.species.map((s) => s.flavors)).toEqual([2, 2, 1, 1, 1, 1, 1])
     expect(buildTheoryModel(theory, { nf: 3 }).species.map((s) => s.flavors)).toEqual([3, 3, 1, 1, 1, 1, 1])
-    expect(() => buildTheoryModel(theory, { nf: 0 })).toThrow('buildTheoryModel: nf must be an integer from 1 to 6, got 0')
+    expect(() => buildTheoryModel(theory, { nf: 0 })).toThrow('The number of flavors must be a whole number from 1 to 6, not 0')
   })
 
   it('the on-shell basis refuses a representation it does not build, naming it', () => {
     const sextet: Theory = { ...theory, fields: [{ name: 'S6', lorentz: 'scalar', reps: { colour: [2, 0] } }] }
     expect(buildTheoryModel(sextet).species[0]!.suKind.colour).toBe('other')
-    expect(() => basisSpecies(sextet)).toThrow('basisSpecies: field S6: representation [2,0] of colour = SU(3) is not supported (only fundamental, antifundamental, adjoint, singlet)')
+    expect(() => basisSpecies(sextet)).toThrow('Field S6 sits in the representation [2,0] of colour = SU(3); explicit bases support the fundamental, antifundamental, adjoint and singlet only (counts support any)')
   })
 })
