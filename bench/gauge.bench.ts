@@ -5,7 +5,7 @@
  * three thresholds; three U(1)s that mix beside SU(3) × SU(2), two loops over 22 decades.
  */
 import smeft from '../shared/presets/smeft.json'
-import { parseTheory } from '../shared/schemas/theory'
+import { parseTheory } from '../server/engine/theory/parseTheory'
 import type { Theory, TheoryField } from '../shared/schemas/theory'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeRunningReport, runGaugeCouplings, towerGaugeContent } from '../server/engine/running/gauge/index'
 import { ALPHA_S_MZ, Z_MASS_GEV } from '../server/engine/scales/pdg2024'
@@ -28,11 +28,11 @@ function time(repeats: number, fn: () => unknown): number {
 }
 
 const SM = parseTheory(smeft)
-const SM_ALPHA = { SU3c: ALPHA_S_MZ, SU2L: 0.0338, Y: 0.0102 }
+const SM_ALPHA = { colour: ALPHA_S_MZ, weak: 0.0338, hypercharge: 0.0102 }
 
 function qcd(quarks: string[]): Theory {
-  const fields: TheoryField[] = quarks.flatMap((q) => [{ name: q, lorentz: 'L', reps: { SU3c: [1, 0] } }, { name: `${q}R`, lorentz: 'R', reps: { SU3c: [1, 0] } }])
-  return parseTheory({ name: `QCD${quarks.length}`, frame: 'relativistic', groups: [{ name: 'SU3c', type: 'SU', n: 3, gauge: true }], fields })
+  const fields: TheoryField[] = quarks.flatMap((q) => [{ name: q, lorentz: 'left-weyl', reps: { colour: [1, 0] } }, { name: `${q}R`, lorentz: 'right-weyl', reps: { colour: [1, 0] } }])
+  return parseTheory({ name: `QCD${quarks.length}`, frame: 'relativistic', groups: [{ name: 'colour', type: 'SU', n: 3, gauge: true }], fields })
 }
 
 /** The Standard Model with two more U(1)s (B−L and a dark D) and fields charged under several of them. */
@@ -43,10 +43,10 @@ function threeU1s(): Theory {
     name: 'SM x U(1)BL x U(1)D', frame: 'relativistic',
     groups: [...SM.groups, { name: 'BL', type: 'U1', gauge: true }, { name: 'D', type: 'U1', gauge: true }],
     fields: [...fields,
-      { name: 'nu', lorentz: 'R', charges: { BL: '-1' }, flavors: 3 },
-      { name: 'Phi', lorentz: 'S', charges: { BL: '2', D: '1' } },
-      { name: 'psi', lorentz: 'L', reps: { SU2L: [1] }, charges: { Y: '1/2', D: '1' } },
-      { name: 'psiR', lorentz: 'R', reps: { SU2L: [1] }, charges: { Y: '1/2', D: '1' } }],
+      { name: 'nu', lorentz: 'right-weyl', charges: { BL: '-1' }, flavors: 3 },
+      { name: 'Phi', lorentz: 'scalar', charges: { BL: '2', D: '1' } },
+      { name: 'psi', lorentz: 'left-weyl', reps: { weak: [1] }, charges: { hypercharge: '1/2', D: '1' } },
+      { name: 'psiR', lorentz: 'right-weyl', reps: { weak: [1] }, charges: { hypercharge: '1/2', D: '1' } }],
   })
 }
 
@@ -61,7 +61,7 @@ export default async function gaugeBench(): Promise<Record<string, number | Reco
   const mixed = gaugeContentOf(threeU1s())
   let points = 0
   const mixedRun = time(5, () => {
-    const r = runGaugeCouplings({ content: mixed, loops: 2, muFromGeV: 1e3, muToGeV: 1e-3 * 1e22, alpha: { ...SM_ALPHA, BL: 0.005, D: 0.005 }, mixing: [{ groups: ['Y', 'D'], epsilon: 0.01 }] })
+    const r = runGaugeCouplings({ content: mixed, loops: 2, muFromGeV: 1e3, muToGeV: 1e-3 * 1e22, alpha: { ...SM_ALPHA, BL: 0.005, D: 0.005 }, mixing: [{ groups: ['hypercharge', 'D'], epsilon: 0.01 }] })
     points = r.points.length
   })
   return {
@@ -69,8 +69,8 @@ export default async function gaugeBench(): Promise<Record<string, number | Reco
     sm_report_1loop_1GeV_to_1e19: time(10, () => report(1)),
     sm_report_2loop_1GeV_to_1e19: time(10, () => report(2)),
     qcd_tower_2loop_MZ_to_1_5GeV_and_10TeV: time(10, () => {
-      runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1.5, alpha: { SU3c: ALPHA_S_MZ } })
-      runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1e4, alpha: { SU3c: ALPHA_S_MZ } })
+      runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1.5, alpha: { colour: ALPHA_S_MZ } })
+      runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1e4, alpha: { colour: ALPHA_S_MZ } })
     }),
     three_u1_mixing_2loop_1TeV_to_1e19: { median_ms: mixedRun, steps: points },
   }

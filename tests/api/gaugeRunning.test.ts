@@ -12,9 +12,9 @@ const DARK = {
   name: 'Dark sector', frame: 'relativistic',
   groups: [{ name: 'X', type: 'U1', gauge: true }],
   fields: [
-    { name: 'S', lorentz: 'S', charges: { X: '1' } },
-    { name: 'chi', lorentz: 'L', charges: { X: '1' } }, { name: 'chiR', lorentz: 'R', charges: { X: '1' } },
-    { name: 'Ad', lorentz: 'F', gaugeOf: 'X' },
+    { name: 'S', lorentz: 'scalar', charges: { X: '1' } },
+    { name: 'chi', lorentz: 'left-weyl', charges: { X: '1' } }, { name: 'chiR', lorentz: 'right-weyl', charges: { X: '1' } },
+    { name: 'Ad', lorentz: 'field-strength', gaugeOf: 'X' },
   ],
 }
 const RUN = { loops: 1, muFromGeV: 1, alpha: { X: 0.01 }, plotFromGeV: 0.1, plotToGeV: 1e6 }
@@ -107,9 +107,9 @@ describe('the Standard Model preset', () => {
     const id = await newTheory({ ...smeft, name: 'SM for running' })
     const inputs = await world.byRole.viewer.client.get(`/api/theories/${id}/gauge-running`)
     expect(inputs.body.defaults.muFromGeV).toBe(91.188)
-    expect(inputs.body.defaults.alpha.SU3c).toBe(0.118)
+    expect(inputs.body.defaults.alpha.colour).toBe(0.118)
     // α_2 = α̂/sin²θ̂ with α̂⁻¹ = 127.93, sin²θ̂ = 0.23129 (PDG 2024; from memory): ≈ 0.03380.
-    expect(inputs.body.defaults.alpha.SU2L).toBeCloseTo(0.0338, 4)
+    expect(inputs.body.defaults.alpha.weak).toBeCloseTo(0.0338, 4)
     const { source: _s, ...defaults } = inputs.body.defaults
     const r = await world.byRole.viewer.client.post(`/api/theories/${id}/gauge-running`, { ...defaults, muToGeV: 1e16 })
     expect(r.status, JSON.stringify(r.body)).toBe(200)

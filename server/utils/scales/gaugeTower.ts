@@ -1,6 +1,6 @@
 import type { TowerNode } from '../db/towers'
 import type { TowerStep } from '../../engine/running/gauge/gaugeContent'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../engine/theory/parseTheory'
 
 /** A tower step as the engine thread receives it: the stored theory file, not yet parsed. */
 export interface StoredTowerStep { id: number, name: string, theory: unknown, thresholdGeV: number | null }

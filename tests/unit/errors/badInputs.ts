@@ -184,7 +184,7 @@ const libraryCases: BadInput[] = [
   { name: 'an inconsistent linear system', run: () => solve(new PrimeField(7), [[1, 1], [2, 2]], [1, 3]) },
 ]
 
-const darkU1 = (n: number): Theory => ({ name: 'dark', frame: 'relativistic', groups: Array.from({ length: n }, (_, i) => ({ name: `D${i}`, type: 'U1' as const, gauge: true })), fields: [{ name: 'chi', lorentz: 'S', charges: { D0: '1' } }] })
+const darkU1 = (n: number): Theory => ({ name: 'dark', frame: 'relativistic', groups: Array.from({ length: n }, (_, i) => ({ name: `D${i}`, type: 'U1' as const, gauge: true })), fields: [{ name: 'chi', lorentz: 'scalar', charges: { D0: '1' } }] })
 const darkContent = () => gaugeContentOf(darkU1(1))
 const gaugeRun = { content: darkContent(), loops: 1 as const, muFromGeV: 10, muToGeV: 100, alpha: { D0: 0.01 } }
 const gaugeRunningCases: BadInput[] = [
@@ -195,7 +195,7 @@ const gaugeRunningCases: BadInput[] = [
   { name: 'a gauge running from zero GeV', run: () => runGaugeCouplings({ ...gaugeRun, muFromGeV: 0 }), says: /between/ },
   { name: 'a gauge running with a non-perturbative input', run: () => runGaugeCouplings({ ...gaugeRun, alpha: { D0: 20 } }), says: /not a perturbative coupling/ },
   { name: 'a gauge coupling asked beyond its Landau pole', run: () => gaugeCouplingsAt({ ...gaugeRun, alpha: { D0: 1 }, muToGeV: 1e30 }), says: /cannot be reached/ },
-  { name: 'a gauge running report of a theory without gauge groups', run: () => gaugeRunningReport(gaugeContentOf({ name: 'none', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] }), { loops: 1, muFromGeV: 10, alpha: {}, plotFromGeV: 1, plotToGeV: 100 }), says: /no gauge group/ },
+  { name: 'a gauge running report of a theory without gauge groups', run: () => gaugeRunningReport(gaugeContentOf({ name: 'none', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] }), { loops: 1, muFromGeV: 10, alpha: {}, plotFromGeV: 1, plotToGeV: 100 }), says: /no gauge group/ },
   { name: 'a gauge running report over a reversed range', run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }), says: /lower to a higher/ },
 ]
 

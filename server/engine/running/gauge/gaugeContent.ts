@@ -48,8 +48,8 @@ export interface TowerStep { theory: Theory, thresholdGeV: number | null }
 const fail = (message: string): never => { throw new EngineInputError('gaugeContent', message) }
 
 function matterKind(f: TheoryField): MatterKind | null {
-  if (f.lorentz === 'F') return null
-  if (f.lorentz === 'S') return f.real ? 'real-scalar' : 'complex-scalar'
+  if (f.lorentz === 'field-strength') return null
+  if (f.lorentz === 'scalar') return f.real ? 'real-scalar' : 'complex-scalar'
   return 'weyl'
 }
 

@@ -41,7 +41,7 @@ function suFactors(n: number): SimpleGroupFactors {
 
 /**
  * The irrep invariants of a simple gauge group of the theory file.
- * @example simpleGroupFactors({ name: 'SU3c', type: 'SU', n: 3, gauge: true }).index([1, 1]) // 3
+ * @example simpleGroupFactors({ name: 'colour', type: 'SU', n: 3, gauge: true }).index([1, 1]) // 3
  * Method: SU(N) through the weight engine (Casimir from the partition of the highest weight,
  *   index T = dim R · C2(R) / dim G).
  * Reference: R. Slansky, Phys. Rep. 79 (1981) 1, eq. (4.14) and Table 30.

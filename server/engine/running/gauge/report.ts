@@ -34,7 +34,7 @@ export const GAUGE_RUNNING_ASSUMPTIONS: readonly string[] = [
   'A heavy-frame particle is static and does not run; field strengths are not matter.',
 ]
 
-/** The running groups as the page names them. @example runningGroupList(gaugeContentOf(smeft))[0] // { name: 'SU3c', label: 'SU(3)', abelian: false } */
+/** The running groups as the page names them. @example runningGroupList(gaugeContentOf(smeft))[0] // { name: 'colour', label: 'SU(3)', abelian: false } */
 export function runningGroupList(content: GaugeContent): GaugeReport['groups'] {
   return content.groups.map((g) => ({ name: g.name, label: g.abelian ? 'U(1)' : simpleGroupFactors(g.group).label, abelian: g.abelian }))
 }

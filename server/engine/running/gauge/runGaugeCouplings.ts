@@ -55,7 +55,7 @@ function crossings(segments: readonly RunningSegment[], from: number, to: number
  * α⁻¹ and ε from muFrom to muTo (all accepted steps), stopping where a coupling leaves the
  * perturbative range.
  * @example runGaugeCouplings({ content: gaugeContentOf(smeft), loops: 1, muFromGeV: 91.1876, muToGeV: 1e16,
- *   alpha: { SU3c: 0.118, SU2L: 0.0338, Y: 0.0102 } }).end.alphaInverse // ≈ [44.49, 45.88, 62.88] (one loop: 1/α − b ln(μ/μ0)/2π)
+ *   alpha: { colour: 0.118, weak: 0.0338, hypercharge: 0.0102 } }).end.alphaInverse // ≈ [44.49, 45.88, 62.88] (one loop: 1/α − b ln(μ/μ0)/2π)
  * Method: adaptive RK4 in ln μ (integrateOdeSystem) on the inverse couplings, segment by segment
  *   between thresholds, continuous at each threshold (MS-bar one-loop matching at μ = m).
  * Reference: Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83; Luo & Xiao, Phys. Lett. B 555 (2003) 279.
@@ -96,7 +96,7 @@ export interface GaugeCouplingsAt extends GaugeCouplingValues { alpha: Record<st
 /**
  * The couplings at one scale, for callers that need a value (matching, tables): throws the
  * stop message as an input error when the running cannot reach muTo.
- * @example gaugeCouplingsAt({ ...input, muToGeV: 1000 }).alpha.SU3c // α_s(1 TeV)
+ * @example gaugeCouplingsAt({ ...input, muToGeV: 1000 }).alpha.colour // α_s(1 TeV)
  */
 export function gaugeCouplingsAt(input: Omit<GaugeRunInput, 'onProgress'>): GaugeCouplingsAt {
   const r = runGaugeCouplings(input)

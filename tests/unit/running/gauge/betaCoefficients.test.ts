@@ -21,7 +21,7 @@ describe('Standard Model gauge β coefficients', () => {
   const sm = gaugeBetaCoefficients(gaugeContentOf(SM))
 
   it('one loop: b = (−7, −19/6, 41/6) with hypercharge as written (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83; from memory)', () => {
-    expect(sm.slots.map((s) => s.groups.join(','))).toEqual(['SU3c', 'SU2L', 'Y,Y'])
+    expect(sm.slots.map((s) => s.groups.join(','))).toEqual(['colour', 'weak', 'hypercharge,hypercharge'])
     expect(text(sm).b).toEqual(['-7', '-19/6', '41/6'])
     expect(sm.mixes).toBe(false)
   })
@@ -55,7 +55,7 @@ describe('QCD with n_f flavours against the QCD module', () => {
   })
 
   it('flavours of one field count like separate fields (common practice)', () => {
-    const three = theory('three flavours', [su('SU3c', 3)], [weyl('q', { reps: { SU3c: [1, 0] }, flavors: 3 }), weylR('qR', { reps: { SU3c: [1, 0] }, flavors: 3 })])
+    const three = theory('three flavours', [su('colour', 3)], [weyl('q', { reps: { colour: [1, 0] }, flavors: 3 }), weylR('qR', { reps: { colour: [1, 0] }, flavors: 3 })])
     expect(text(gaugeBetaCoefficients(gaugeContentOf(three)))).toEqual(text(gaugeBetaCoefficients(gaugeContentOf(qcd(['u', 'd', 's'])))))
   })
 })
@@ -92,8 +92,8 @@ describe('several U(1)s: kinetic mixing', () => {
     const c = gaugeBetaCoefficients(gaugeContentOf(t))
     const slot = (name: string) => c.slots.findIndex((s) => s.groups.join(',') === name)
     expect(toString(c.oneLoop[slot('BL,BL')]!)).toBe('12')
-    expect(toString(c.oneLoop[slot('Y,BL')]!)).toBe('16/3')
-    expect(toString(c.oneLoop[slot('Y,Y')]!)).toBe('41/6')
+    expect(toString(c.oneLoop[slot('hypercharge,BL')]!)).toBe('16/3')
+    expect(toString(c.oneLoop[slot('hypercharge,hypercharge')]!)).toBe('41/6')
     expect(c.mixes).toBe(true)
   })
 

@@ -1,20 +1,20 @@
 import { describe, expect, it } from 'vitest'
 import { gaugeContentOf, runGaugeCouplings, runningSegments, towerGaugeContent } from '../../../../server/engine/running/gauge/index'
 import { toString } from '../../../../server/engine/exact/rational'
-import { parseTheory } from '../../../../shared/schemas/theory'
+import { parseTheory } from '../../../../server/engine/theory/parseTheory'
 import vexonium from '../../../../shared/presets/heavy-vexonium.json'
 import { complexScalar, darkU1, qcd, realScalar, SM, strength, theory, u1, weyl, weylR } from './theories'
 
 describe('gauge content of a theory', () => {
   it('reads kinds, flavours, representations and charges; field strengths are not matter', () => {
     const c = gaugeContentOf(SM)
-    expect(c.groups.map((g) => [g.name, g.abelian])).toEqual([['SU3c', false], ['SU2L', false], ['Y', true]])
+    expect(c.groups.map((g) => [g.name, g.abelian])).toEqual([['colour', false], ['weak', false], ['hypercharge', true]])
     expect(c.multiplets.map((m) => [m.name, m.kind, m.flavors])).toEqual([
       ['Q', 'weyl', 3], ['u', 'weyl', 3], ['d', 'weyl', 3], ['L', 'weyl', 3], ['e', 'weyl', 3], ['H', 'complex-scalar', 1],
     ])
     const q = c.multiplets[0]!
-    expect(q.reps).toEqual({ SU3c: [1, 0], SU2L: [1] })
-    expect(toString(q.charges.Y!)).toBe('1/6')
+    expect(q.reps).toEqual({ colour: [1, 0], weak: [1] })
+    expect(toString(q.charges.hypercharge!)).toBe('1/6')
     expect(c.multiplets.every((m) => m.massGeV === 0)).toBe(true)
   })
 

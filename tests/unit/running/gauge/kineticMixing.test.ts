@@ -69,11 +69,11 @@ describe('reparametrisation covariance at two loops', () => {
 
 describe('a dark U(1) beside QCD without shared fields', () => {
   it('runs exactly as each theory alone (no term links them)', () => {
-    const both = gaugeContentOf(theory('both', [su('SU3c', 3), u1('X')], [
-      weyl('q', { reps: { SU3c: [1, 0] }, flavors: 4 }), weylR('qR', { reps: { SU3c: [1, 0] }, flavors: 4 }),
+    const both = gaugeContentOf(theory('both', [su('colour', 3), u1('X')], [
+      weyl('q', { reps: { colour: [1, 0] }, flavors: 4 }), weylR('qR', { reps: { colour: [1, 0] }, flavors: 4 }),
       complexScalar('S', { charges: { X: '2' } }), weyl('chi', { charges: { X: '1/3' } }), weylR('chiR', { charges: { X: '1/3' } }),
     ]))
-    const r = runGaugeCouplings({ content: both, loops: 2, muFromGeV: 10, muToGeV: 1e6, alpha: { SU3c: 0.15, X: 0.02 } })
+    const r = runGaugeCouplings({ content: both, loops: 2, muFromGeV: 10, muToGeV: 1e6, alpha: { colour: 0.15, X: 0.02 } })
     const dark = runGaugeCouplings({ content: gaugeContentOf(darkU1('2', '1/3')), loops: 2, muFromGeV: 10, muToGeV: 1e6, alpha: { X: 0.02 } })
     expectClose('α_X⁻¹', 1e6, r.end.alphaInverse[1]!, dark.end.alphaInverse[0]!, 1e-11)
   })

@@ -14,15 +14,15 @@ describe('formatGeV', () => {
 
 describe('the couplings page report', () => {
   it('Standard Model: curve both ways from M_Z, exact coefficients, no stop in 1 GeV – 10¹⁹ GeV', () => {
-    const r = gaugeRunningReport(gaugeContentOf(SM), { loops: 2, muFromGeV: 91.1876, alpha: { SU3c: 0.118, SU2L: 0.0338, Y: 0.0102 }, plotFromGeV: 1, plotToGeV: 1e19, muToGeV: 1e16 })
-    expect(r.groups).toEqual([{ name: 'SU3c', label: 'SU(3)', abelian: false }, { name: 'SU2L', label: 'SU(2)', abelian: false }, { name: 'Y', label: 'U(1)', abelian: true }])
+    const r = gaugeRunningReport(gaugeContentOf(SM), { loops: 2, muFromGeV: 91.1876, alpha: { colour: 0.118, weak: 0.0338, hypercharge: 0.0102 }, plotFromGeV: 1, plotToGeV: 1e19, muToGeV: 1e16 })
+    expect(r.groups).toEqual([{ name: 'colour', label: 'SU(3)', abelian: false }, { name: 'weak', label: 'SU(2)', abelian: false }, { name: 'hypercharge', label: 'U(1)', abelian: true }])
     expect(r.stops).toEqual([])
     expect(r.curve[0]!.mu).toBeCloseTo(1, 12)
     expect(r.curve[r.curve.length - 1]!.mu).toBeCloseTo(1e19, -6)
     expect(r.curve.every((p, i) => i === 0 || p.mu > r.curve[i - 1]!.mu)).toBe(true)
     expect(r.table.map((row) => row.label)).toEqual(['input scale', 'chosen scale'])
     // The chosen scale is passed exactly on the way up: the same couplings as a run that ends there.
-    const direct = runGaugeCouplings({ content: gaugeContentOf(SM), loops: 2, muFromGeV: 91.1876, muToGeV: 1e16, alpha: { SU3c: 0.118, SU2L: 0.0338, Y: 0.0102 } })
+    const direct = runGaugeCouplings({ content: gaugeContentOf(SM), loops: 2, muFromGeV: 91.1876, muToGeV: 1e16, alpha: { colour: 0.118, weak: 0.0338, hypercharge: 0.0102 } })
     r.table[1]!.alphaInverse.forEach((x, i) => expect(x).toBeCloseTo(direct.end.alphaInverse[i]!, 9))
     expect(r.segments).toEqual([{
       lowGeV: null, highGeV: null, active: ['Q', 'u', 'd', 'L', 'e', 'H'],
@@ -57,6 +57,6 @@ describe('the couplings page report', () => {
   it('refuses a theory without a running gauge group and an empty plot range', () => {
     const none = theory('no gauge', [], [weyl('a')])
     expect(() => gaugeRunningReport(gaugeContentOf(none), { loops: 1, muFromGeV: 1, alpha: {}, plotFromGeV: 1, plotToGeV: 10 })).toThrow('This theory has no gauge group whose coupling runs')
-    expect(() => gaugeRunningReport(gaugeContentOf(SM), { loops: 1, muFromGeV: 1, alpha: { SU3c: 0.1, SU2L: 0.03, Y: 0.01 }, plotFromGeV: 10, plotToGeV: 10 })).toThrow('The plotted range must go from a lower to a higher scale, not from 10 to 10 GeV.')
+    expect(() => gaugeRunningReport(gaugeContentOf(SM), { loops: 1, muFromGeV: 1, alpha: { colour: 0.1, weak: 0.03, hypercharge: 0.01 }, plotFromGeV: 10, plotToGeV: 10 })).toThrow('The plotted range must go from a lower to a higher scale, not from 10 to 10 GeV.')
   })
 })

@@ -71,7 +71,7 @@ describe('QCD through the thresholds of a tower agrees with the QCD module', () 
   it('α_s from M_Z to 1.5 GeV and to 10 TeV at one and two loops equals runAlphaS with continuous (one-loop) decoupling to 1e-10 (van Ritbergen et al. 1997 β0, β1; Chetyrkin et al. 1998 at L = 0)', () => {
     for (const loops of [1, 2] as const) {
       for (const mu of [1.5, 3, 50, 1e4]) {
-        const ours = runGaugeCouplings({ content, loops, muFromGeV: Z_MASS_GEV, muToGeV: mu, alpha: { SU3c: ALPHA_S_MZ } })
+        const ours = runGaugeCouplings({ content, loops, muFromGeV: Z_MASS_GEV, muToGeV: mu, alpha: { colour: ALPHA_S_MZ } })
         const theirs = runAlphaS({ alphaS: ALPHA_S_MZ, muFrom: Z_MASS_GEV, muTo: mu, loops, thresholds, decouplingLoops: 1 })
         expectClose(`α_s, ${loops} loop(s)`, mu, 1 / ours.end.alphaInverse[0]!, theirs.alphaS, 1e-10, true)
       }
@@ -79,23 +79,23 @@ describe('QCD through the thresholds of a tower agrees with the QCD module', () 
   })
 
   it('the segments carry n_f = 3, 4, 5, 6 (b = −9, −25/3, −23/3, −7)', () => {
-    const r = runGaugeCouplings({ content, loops: 1, muFromGeV: 2, muToGeV: 1000, alpha: { SU3c: 0.3 } })
+    const r = runGaugeCouplings({ content, loops: 1, muFromGeV: 2, muToGeV: 1000, alpha: { colour: 0.3 } })
     expect(r.segments.map((s) => rationalToNumber(s.coefficients.oneLoop[0]!) * 3)).toEqual([-27, -25, -23, -21])
     expect(r.segments.map((s) => s.active.length)).toEqual([6, 8, 10, 12])
   })
 
   it('running down, α_s stops where g_s passes 4π, below the scale the one-loop formula gives', () => {
-    const r = runGaugeCouplings({ content: gaugeContentOf(qcd(['u', 'd', 's'])), loops: 1, muFromGeV: 2, muToGeV: 1e-6, alpha: { SU3c: 0.3 } })
+    const r = runGaugeCouplings({ content: gaugeContentOf(qcd(['u', 'd', 's'])), loops: 1, muFromGeV: 2, muToGeV: 1e-6, alpha: { colour: 0.3 } })
     // α⁻¹(μ) = 1/0.3 + (9/2π) ln(μ/2) reaches 1/(4π) at ln(μ/2) = −2π(1/0.3 − 1/4π)/9.
     const expected = 2 * Math.exp((-TWO_PI * (1 / 0.3 - 1 / (4 * Math.PI))) / 9)
     expectClose('stop scale', 0.3, r.stop!.muGeV, expected, 1e-8, true)
-    expect(r.stop!.message).toMatch(/^g_SU3c grows beyond 4π below μ ≈ 0\.206 GeV/)
+    expect(r.stop!.message).toMatch(/^g_colour grows beyond 4π below μ ≈ 0\.206 GeV/)
   })
 })
 
 describe('Standard Model gauge couplings', () => {
   const content = gaugeContentOf(SM)
-  const alpha = { SU3c: 0.1180, SU2L: 0.03378, Y: 0.01016 }
+  const alpha = { colour: 0.1180, weak: 0.03378, hypercharge: 0.01016 }
 
   it('one loop: each α_i⁻¹ is a straight line in ln μ with slope −b_i/2π, b = (−7, −19/6, 41/6) (Machacek & Vaughn 1983)', () => {
     const r = runGaugeCouplings({ content, loops: 1, muFromGeV: Z_MASS_GEV, muToGeV: 1e16, alpha })
@@ -107,7 +107,7 @@ describe('Standard Model gauge couplings', () => {
   it('two loops: up to 10¹⁶ GeV and back returns the inputs to 1e-10 (common practice)', () => {
     const up = runGaugeCouplings({ content, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1e16, alpha })
     const [a3, a2, aY] = up.end.alphaInverse.map((x) => 1 / x)
-    const back = runGaugeCouplings({ content, loops: 2, muFromGeV: 1e16, muToGeV: Z_MASS_GEV, alpha: { SU3c: a3!, SU2L: a2!, Y: aY! } })
+    const back = runGaugeCouplings({ content, loops: 2, muFromGeV: 1e16, muToGeV: Z_MASS_GEV, alpha: { colour: a3!, weak: a2!, hypercharge: aY! } })
     Object.values(alpha).forEach((a, i) => expectClose('round trip', i, 1 / back.end.alphaInverse[i]!, a, 1e-10, true))
     // The two-loop terms lower α_3⁻¹(10¹⁶) relative to one loop (B_33 < 0 dominates; common practice).
     const one = runGaugeCouplings({ content, loops: 1, muFromGeV: Z_MASS_GEV, muToGeV: 1e16, alpha })
