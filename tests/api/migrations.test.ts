@@ -59,7 +59,7 @@ describe('migration 20261203_020: Lorentz kinds in words', () => {
     const res = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition: OLD })
     expect(res.status).toBe(400)
     const message = messageOf(res)
-    expect(message).toContain('fields[0].lorentz')
+    expect(message).toContain('Field 1 "h", Lorentz kind: "S" is the old one-letter spelling')
     expect(message).toContain('"S" is the old one-letter spelling; write "scalar" (the other Lorentz kinds are "left-weyl", "right-weyl", "field-strength")')
     expect(message).toContain('"F" is the old one-letter spelling; write "field-strength"')
     expect(await testDb()('theories').count('* as n')).toEqual(before)

@@ -64,7 +64,7 @@ describe('background runs through the PostgreSQL queue', () => {
     const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 6 })
     const { run } = await waitFor(start.body.run.id, (r) => ['done', 'failed'].includes(r.status))
     expect(run.status).toBe('failed')
-    expect(run.error).toMatch(/^Field 1 "x", Lorentz kind must be one of /)
+    expect(run.error).toMatch(/^Field 1 "x", Lorentz kind: "Q" is not a Lorentz kind; write one of "scalar", "left-weyl", "right-weyl", "field-strength"/)
   })
 
   it('an unexpected failure inside the engine is logged under a reference, retried once, then fails with the reference to quote', async () => {
