@@ -1,6 +1,7 @@
-// `npm test`: install what the tests need from Debian when missing (PostgreSQL, Chromium, LiE),
-// start the local PostgreSQL (unless DATABASE_URL), build the app once, type-check, run every
-// vitest project, and end with the plain line "N passed, N failed" that CI reads.
+// `npm test`: install what the tests need from Debian when missing (PostgreSQL, Chromium, LiE,
+// pdflatex and Latin Modern), start the local PostgreSQL (unless DATABASE_URL), build the app
+// once, type-check, run every vitest project, and end with the plain line "N passed, N failed"
+// that CI reads.
 import { spawnSync } from 'node:child_process'
 import { join } from 'node:path'
 import { ensureLocalPostgres } from './lib/postgres.mjs'

@@ -2,9 +2,16 @@ import type { BoardExport } from './boardExport'
 
 const HEADER = ['order', 'dimension', 'class', 'column', 'operator', 'latex', 'hermitian', 'real_parameters', 'flavor_components', 'tags', 'notes']
 
-/** RFC 4180 field: quoted when it holds a comma, quote or line break; quotes doubled. */
+/**
+ * RFC 4180 field: quoted when it holds a comma, quote or line break; quotes doubled. Text that
+ * begins with = + - @, a tab or a carriage return gets a leading apostrophe, so a spreadsheet
+ * shows it instead of running it as a formula (common practice, OWASP "CSV injection");
+ * numbers and booleans are written as they are.
+ * @example csvField('=1+1') // "'=1+1"
+ */
 export function csvField(value: unknown): string {
-  const s = String(value ?? '')
+  let s = String(value ?? '')
+  if (typeof value === 'string' && /^[=+\-@\t\r]/.test(s)) s = `'${s}`
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s
 }
 

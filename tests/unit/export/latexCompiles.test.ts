@@ -1,0 +1,67 @@
+import { describe, it, expect } from 'vitest'
+import { buildBasis, type BasisReport } from '../../../server/engine/basis/buildBasis'
+import { assembleExport } from '../../../server/engine/export/boardExport'
+import { toLatex } from '../../../server/engine/export/toLatex'
+import { toCsv, csvField } from '../../../server/engine/export/toCsv'
+import { findPreset } from '../../../shared/presets/index'
+import { compileLatex, HOSTILE_TEXTS } from '../../support/pdflatex'
+import { parseCsv } from '../../support/csv'
+
+// The LaTeX export of real bases, with hostile user text in every place a user writes one
+// (theory name, tags, the basis note, notes' authors), compiles with Debian's pdflatex in both
+// notations; the CSV export neutralises cells a spreadsheet would run (issue 12, item 5).
+
+/** The export of an engine-built basis, as the app assembles it, with hostile text everywhere. */
+function hostileExport(report: BasisReport) {
+  let id = 0
+  const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({ dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk })))
+  const operators = report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op) => ({
+    id: ++id, order: d.dimension - 4, classKey: c.key, column: 'kept' as const, text: op.text, latex: op.latex, latexDirac: op.latex4,
+    hermitian: op.hermitian, realParameters: op.realParameters,
+  }))))
+  return assembleExport({
+    theory: { name: HOSTILE_TEXTS[0]!, definition: {} },
+    countingRule: HOSTILE_TEXTS[2]!,
+    note: HOSTILE_TEXTS[1]!,
+    exportedAt: '2026-12-03T00:00:00.000Z',
+    classes,
+    operators,
+    tags: operators.flatMap((op, i) => [{ operatorId: op.id, kind: 'custom', label: HOSTILE_TEXTS[i % HOSTILE_TEXTS.length]! }]),
+    notes: operators.slice(0, 3).map((op, i) => ({ operatorId: op.id, authorName: '=cmd|\' /C calc\'!A0', body: HOSTILE_TEXTS[i]!, createdAt: '2026-12-01T00:00:00Z' })),
+  })
+}
+
+describe('the LaTeX export of real bases compiles with pdflatex', () => {
+  it.each([['qed', 8], ['scalar-qed', 8], ['smeft', 6]] as const)('%s up to dimension %i, both notations, hostile text included', (preset, maxDim) => {
+    const data = hostileExport(buildBasis(findPreset(preset)!.theory, { maxDim, nf: 1 }))
+    for (const dirac of [false, true]) {
+      const tex = toLatex(data, { dirac })
+      expect(tex).toMatch(/^% Scalewright basis export: Photons \\textbackslash\{\}input/)
+      expect(tex.split('\n').filter((l) => /\\(input|write18|immediate)/.test(l))).toEqual([])
+      const compiled = compileLatex(tex)
+      expect(compiled.ok, `${preset} dirac=${dirac}\n${compiled.log.slice(-3000)}`).toBe(true)
+      expect(compiled.log).not.toContain('/etc/passwd')
+    }
+  })
+})
+
+describe('the CSV export', () => {
+  it.each([
+    ['=1+1', '\'=1+1'], ['+1', '\'+1'], ['-2+3', '\'-2+3'], ['@SUM(A1)', '\'@SUM(A1)'], ['\tx', '\'\tx'], ['\rx', '"\'\rx"'],
+    ['plain', 'plain'], ['a=b', 'a=b'], ['=a,b', '"\'=a,b"'],
+  ])('neutralises %j as %j', (input, expected) => {
+    expect(csvField(input)).toBe(expected)
+  })
+
+  it('writes numbers as numbers, negative ones included', () => {
+    expect(csvField(-2)).toBe('-2')
+    expect(csvField(0)).toBe('0')
+    expect(csvField(true)).toBe('true')
+  })
+
+  it('no cell of a real export starts with = + - @, a tab or a carriage return', () => {
+    const rows = parseCsv(toCsv(hostileExport(buildBasis(findPreset('qed')!.theory, { maxDim: 6, nf: 1 }))))
+    expect(rows.flat().filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([])
+    expect(rows.some((r) => r.at(-1)!.startsWith('\'=cmd|'))).toBe(true)
+  })
+})
