@@ -7,14 +7,30 @@ const FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', 
   '--disable-background-networking', '--disable-component-update', '--disable-sync']
 export const SCREENSHOTS = resolve(import.meta.dirname, '..', '..', 'test-results', 'screenshots')
 
+// Content-Security-Policy violations that Chromium logged in any page of a browser launched
+// here. The pages must work under the policy the server sends, so closing a browser (every
+// e2e file does in afterAll) fails when any was seen.
+const violations = new WeakMap<Browser, string[]>()
+
 export async function launchBrowser(): Promise<Browser> {
   mkdirSync(SCREENSHOTS, { recursive: true })
   // playwright gives every launch a fresh temporary profile (user data dir) of its own.
-  return chromium.launch({ executablePath: '/usr/bin/chromium', args: FLAGS })
+  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: FLAGS })
+  const seen: string[] = []
+  violations.set(browser, seen)
+  const close = browser.close.bind(browser)
+  browser.close = async (options) => {
+    await close(options)
+    if (seen.length) throw new Error(`Content-Security-Policy violations in the browser console:\n${seen.join('\n')}`)
+  }
+  return browser
 }
 
 export async function newPage(browser: Browser, baseURL: string): Promise<Page> {
   const context = await browser.newContext({ baseURL, viewport: { width: 1280, height: 900 } })
+  context.on('console', (message) => {
+    if (/Content Security Policy/i.test(message.text())) violations.get(browser)?.push(`${message.location().url}: ${message.text()}`)
+  })
   return context.newPage()
 }
 

@@ -2,13 +2,15 @@ import { readRawBody, getHeader, type H3Event } from 'h3'
 import type { ZodType } from 'zod'
 import { fail } from './apiHandler'
 import { describeZodError } from '../../../shared/schemas/describeZodError'
+import { nulPath, nulMessage } from './nulText'
 
 export const MAX_BODY_BYTES = 512 * 1024
 
 /**
  * Read the JSON body and validate it with a zod schema. Malformed JSON → 400, oversized → 413,
- * schema failure → 400 naming each field at fault in the user's words (the body supplies the
- * names of list entries, e.g. field 3 "phi"). Nothing is written before this.
+ * a NUL character in any text → 400, schema failure → 400 naming each field at fault in the
+ * user's words (the body supplies the names of list entries, e.g. field 3 "phi"). Nothing is
+ * written before this.
  */
 export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
   const declared = Number(getHeader(event, 'content-length') || 0)
@@ -23,6 +25,8 @@ export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes =
       fail(400, 'Request body is not valid JSON')
     }
   }
+  const nul = nulPath(value)
+  if (nul) fail(400, nulMessage(nul))
   const parsed = schema.safeParse(value)
   if (!parsed.success) fail(400, describeZodError(parsed.error, value))
   return parsed.data
