@@ -12,6 +12,8 @@ import * as m020 from './20261203_020_lorentz_kind_words'
 import * as m021 from './20261203_021_class_orders'
 import * as m030 from './20261203_030_run_error_texts'
 import * as m040 from './20261203_040_run_heartbeat'
+import * as m050 from './20261203_050_sessions'
+import * as m051 from './20261203_051_sign_up_requests'
 
 // A static list: knex's folder loader cannot read .ts inside vitest or the Nitro bundle.
 // Append new migrations here, named YYYYMMDD_NNN_what.ts, never rename an applied one.
@@ -29,6 +31,8 @@ const migrations: Record<string, Knex.Migration> = {
   '20261203_021_class_orders': m021,
   '20261203_030_run_error_texts': m030,
   '20261203_040_run_heartbeat': m040,
+  '20261203_050_sessions': m050,
+  '20261203_051_sign_up_requests': m051,
 }
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -55,7 +55,7 @@ describe('session cookies', () => {
     await makeAdmin(admin.id)
     await new ApiClient().post('/api/auth/reset-request', { email: world.byRole.editor.email })
     const box = await admin.client.get(`/api/admin/outbox?to=${encodeURIComponent(world.byRole.editor.email)}`)
-    const token = /\/reset\/([A-Za-z0-9_-]{40,})/.exec(box.body.messages.at(-1).text)![1]!
+    const token = /\/reset\/([A-Za-z0-9_-]{40,})/.exec(box.body.messages[0].text)![1]! // the newest mail
     const newPassword = 'an entirely new password'
     expect((await new ApiClient().post('/api/auth/reset', { token, password: newPassword })).status).toBe(200)
 
@@ -65,7 +65,7 @@ describe('session cookies', () => {
         stale.cookie = cookie // each refusal also clears the cookie; try the same one everywhere
         const res = await stale.get(path)
         expect(res.status, path).toBe(401)
-        expect(messageOf(res)).toBe('This session has ended (the password was changed, or all other sessions were signed out); sign in again')
+        expect(messageOf(res)).toBe('This session has ended (signed out, the password was changed, or all other sessions were signed out); sign in again')
       }
     }
     const fresh = new ApiClient()
@@ -89,7 +89,7 @@ describe('changing the password and ending other sessions, while signed in', () 
     expect((await here.client.get('/api/auth/me')).status).toBe(200)
     const out = await elsewhere.get('/api/auth/me')
     expect(out.status).toBe(401)
-    expect(messageOf(out)).toBe('This session has ended (the password was changed, or all other sessions were signed out); sign in again')
+    expect(messageOf(out)).toBe('This session has ended (signed out, the password was changed, or all other sessions were signed out); sign in again')
     expect((await new ApiClient().post('/api/auth/signin', { email: here.email, password: TEST_PASSWORD })).status).toBe(401)
     expect((await new ApiClient().post('/api/auth/signin', { email: here.email, password: 'a new long password' })).status).toBe(200)
   })
@@ -109,6 +109,6 @@ describe('changing the password and ending other sessions, while signed in', () 
     expect((await here.client.get('/api/auth/me')).status).toBe(200)
     const out = await laptop.get('/api/auth/me')
     expect(out.status).toBe(401)
-    expect(messageOf(out)).toBe('This session has ended (the password was changed, or all other sessions were signed out); sign in again')
+    expect(messageOf(out)).toBe('This session has ended (signed out, the password was changed, or all other sessions were signed out); sign in again')
   })
 })

@@ -1,13 +1,11 @@
 import { defineApiHandler } from '../../utils/http/apiHandler'
 import { requireUser } from '../../utils/auth/currentUser'
-import { startSession } from '../../utils/auth/sessions'
-import { useDb } from '../../utils/db/connection'
+import { sessionFacts, endOtherSessions } from '../../utils/auth/sessions'
 
-// Sign out on every other browser (a lost laptop, a shared computer): sessions signed in
-// before now stop working; this browser gets a fresh session.
+// Sign out on every other browser (a lost laptop, a shared computer): their session rows go;
+// this browser's session stays.
 export default defineApiHandler(async (event) => {
   const user = await requireUser(event)
-  await useDb()('users').where({ id: user.id }).update({ sessions_valid_from: new Date() })
-  await startSession(event, user)
+  await endOtherSessions(user.id, (await sessionFacts(event)).sessionId)
   return { message: 'Signed out on every other browser.' }
 })

@@ -1,5 +1,6 @@
 import { startSession } from '../../utils/auth/sessions'
-import { refuseThrottledSignIn, recordFailedSignIn, clearFailedSignIns } from '../../utils/auth/throttle'
+import { takeSignInAttempt, clearFailedSignIns } from '../../utils/auth/throttle'
+import { passwordMatches } from '../../utils/auth/passwordCheck'
 import { defineApiHandler, fail } from '../../utils/http/apiHandler'
 import { readJson } from '../../utils/http/readJson'
 import { SignInSchema } from '../../../shared/schemas/account'
@@ -7,13 +8,12 @@ import { findUserByEmail, publicUser } from '../../utils/db/users'
 
 export default defineApiHandler(async (event) => {
   const body = await readJson(event, SignInSchema)
-  await refuseThrottledSignIn(event, body.email)
+  await takeSignInAttempt(event, body.email)
   const user = await findUserByEmail(body.email)
-  // Same message for unknown e-mail and wrong password: no account discovery.
-  if (!user || !(await verifyPassword(user.password_hash, body.password))) {
-    await recordFailedSignIn(event, body.email)
-    fail(401, 'E-mail or password is wrong')
-  }
+  // Same message and the same work (one scrypt check) for an unknown address and a wrong
+  // password: no account discovery.
+  const matches = await passwordMatches(user?.password_hash, body.password)
+  if (!user || !matches) fail(401, 'E-mail or password is wrong')
   await clearFailedSignIns(event, body.email)
   await startSession(event, publicUser(user))
   return { user: publicUser(user) }

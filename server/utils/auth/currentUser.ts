@@ -2,31 +2,39 @@ import type { H3Event } from 'h3'
 import type { Knex } from 'knex'
 import { useDb } from '../db/connection'
 import { fail } from '../http/apiHandler'
-import { sessionFacts, endSession, type SessionFacts } from './sessions'
+import { sessionFacts, endSession, SESSION_ENDED, type SessionFacts } from './sessions'
 import type { GroupRole, SiteRole } from '../../../shared/types/roles'
 import { roleAtLeast } from '../../../shared/types/roles'
 
 export interface CurrentUser { id: number, email: string, displayName: string, siteRole: SiteRole }
 
 /**
- * The signed-in user, re-read from the database on every request so that a removed account,
- * a changed site role or a password reset takes effect at once (the cookie carries only the
- * id and the sign-in time).
+ * The signed-in user, re-read from the database on every request together with the session's
+ * row, so that a sign-out, a removed account, a changed site role or a password reset takes
+ * effect at once (the cookie carries only the account and session ids).
  */
 export async function requireUser(event: H3Event): Promise<CurrentUser> {
   const session = await sessionFacts(event)
-  const row = await useDb()('users').where({ id: session.userId }).first('id', 'email', 'display_name', 'site_role', 'sessions_valid_from')
+  const row = await useDb()('users as u').leftJoin('sessions as cs', sessionJoin(session))
+    .where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id')
   return toUser(event, session, row)
 }
 
-async function toUser(event: H3Event, session: SessionFacts, row: Record<string, any> | undefined): Promise<CurrentUser> {
+/** Join condition of the caller's session row (null in the result when it has ended). */
+function sessionJoin(session: SessionFacts) {
+  return (j: Knex.JoinClause) => j.on('cs.user_id', 'u.id').andOnVal('cs.id', session.sessionId)
+}
+
+interface AccountRow { email: string, display_name: string, site_role: SiteRole, session_id: string | null }
+
+async function toUser(event: H3Event, session: SessionFacts, row: AccountRow | undefined): Promise<CurrentUser> {
   if (!row) {
     await endSession(event)
     fail(401, 'Your account no longer exists; sign in again')
   }
-  if (row.sessions_valid_from && session.signedInAt < new Date(row.sessions_valid_from).getTime()) {
+  if (!row.session_id) {
     await endSession(event)
-    fail(401, 'This session has ended (the password was changed, or all other sessions were signed out); sign in again')
+    fail(401, SESSION_ENDED)
   }
   return { id: session.userId, email: row.email, displayName: row.display_name, siteRole: row.site_role }
 }
@@ -50,7 +58,8 @@ function checkRole(role: GroupRole | null, needed: GroupRole): GroupRole {
 export async function requireGroupRole(event: H3Event, groupId: number, needed: GroupRole) {
   const session = await sessionFacts(event)
   const row = await useDb()('users as u').leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOnVal('m.group_id', groupId))
-    .where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'u.sessions_valid_from', 'm.role')
+    .leftJoin('sessions as cs', sessionJoin(session))
+    .where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id', 'm.role')
   const user = await toUser(event, session, row)
   return { user, role: checkRole((row!.role ?? null) as GroupRole | null, needed) }
 }
@@ -64,7 +73,7 @@ export function withCaller(q: Knex.QueryBuilder, userId: number, groupColumn: st
   return q.crossJoin(db.raw('users as u'))
     .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOn('m.group_id', groupColumn))
     .andWhere('u.id', userId)
-    .select('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'u.sessions_valid_from as u_valid_from', 'm.role as u_role')
+    .select('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'm.role as u_role')
 }
 
 /**
@@ -75,9 +84,10 @@ export function withCaller(q: Knex.QueryBuilder, userId: number, groupColumn: st
  */
 export async function requireRoleWith(event: H3Event, needed: GroupRole, query: (userId: number) => Knex.QueryBuilder) {
   const session = await sessionFacts(event)
-  const row = await query(session.userId).first()
+  // The session row joins here, not in withCaller, so that callers keep building with the user id.
+  const row = await query(session.userId).leftJoin('sessions as cs', sessionJoin(session)).select('cs.id as u_session').first()
   if (!row) return null
-  const user = await toUser(event, session, { email: row.u_email, display_name: row.u_name, site_role: row.u_site_role, sessions_valid_from: row.u_valid_from })
+  const user = await toUser(event, session, { email: row.u_email, display_name: row.u_name, site_role: row.u_site_role, session_id: row.u_session })
   return { row, user, role: checkRole((row.u_role ?? null) as GroupRole | null, needed) }
 }
 
