@@ -36,8 +36,14 @@ async function waitHealthy() {
 }
 
 async function seed(db: ReturnType<typeof knexFactory>) {
-  const signup = await fetch(`${base}/api/auth/signup`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: `bench-${Date.now()}@example.test`, password: 'bench password 1', displayName: 'Bench' }) })
-  const cookie = signup.headers.getSetCookie()[0]!.split(';')[0]!
+  // Sign up as a person does: ask, then open the link mailed to the address (the outbox table).
+  const email = `bench-${Date.now()}@example.test`
+  const json = { 'content-type': 'application/json' }
+  await fetch(`${base}/api/auth/signup`, { method: 'POST', headers: json, body: JSON.stringify({ email, password: 'bench password 1', displayName: 'Bench' }) })
+  const mail = await db('outbox').where({ to_address: email }).first('text_body')
+  const token = /\/welcome\/([A-Za-z0-9_-]+)/.exec(mail.text_body)![1]!
+  const confirmed = await fetch(`${base}/api/auth/signup-confirm`, { method: 'POST', headers: json, body: JSON.stringify({ token }) })
+  const cookie = confirmed.headers.getSetCookie()[0]!.split(';')[0]!
   const post = (path: string, body: unknown) => fetch(`${base}${path}`, { method: 'POST', headers: { 'content-type': 'application/json', cookie }, body: JSON.stringify(body) }).then((r) => r.json())
   await post('/api/groups', { slug: 'bench-group', name: 'Bench' })
   const theory = findPreset('smeft')!.theory

@@ -16,6 +16,12 @@ export const SignUpSchema = z.object({
   invitation: z.string().max(100).optional(),
 }).strict()
 
+const SIGN_UP_LINK = 'This sign-up link is incomplete; open the link from the e-mail again'
+
+export const SignUpConfirmSchema = z.object({
+  token: z.string({ error: SIGN_UP_LINK }).min(20, { error: SIGN_UP_LINK }).max(100, { error: SIGN_UP_LINK }),
+}).strict()
+
 export const SignInSchema = z.object({
   email: EmailSchema,
   password: z.string({ error: 'Password is required' }).min(1, { error: 'Password is required' }).max(200),

@@ -13,9 +13,4 @@ export const GroupCreateSchema = z.object({
 
 export const RoleSchema = z.enum(GROUP_ROLES, { error: `Role must be one of ${GROUP_ROLES.join(', ')}` })
 
-export const MemberAddSchema = z.object({
-  email: z.string().trim().toLowerCase().pipe(z.email({ error: 'Enter a valid e-mail address' })),
-  role: RoleSchema,
-}).strict()
-
 export const MemberRoleSchema = z.object({ role: RoleSchema }).strict()

@@ -8,7 +8,9 @@ export const ShareLinkCreateSchema = z.object({
 }).strict()
 
 export const InvitationCreateSchema = z.object({
-  email: z.string({ error: 'Enter the e-mail address to invite' }).trim().toLowerCase().pipe(z.email({ error: 'Enter a valid e-mail address' })),
+  email: z.string({ error: 'Enter the e-mail address to invite' }).trim().toLowerCase()
+    .max(254, { error: 'E-mail address is too long (254 characters at most)' })
+    .pipe(z.email({ error: 'Enter a valid e-mail address' })),
   role: RoleSchema,
 }).strict()
 

@@ -1,12 +1,15 @@
 import { describe, it, expect } from 'vitest'
-import { ApiClient, uniqueEmail, TEST_PASSWORD, signedUpClient, messageOf } from '../support/client'
+import { ApiClient, uniqueEmail, TEST_PASSWORD, signedUpClient, messageOf, mailedToken } from '../support/client'
 import { rowCounts, makeAdmin, testDb } from '../support/db'
 
 describe('accounts', () => {
   it('signs up, reads itself, signs out and in again', async () => {
     const client = new ApiClient()
     const email = uniqueEmail('alice')
-    const up = await client.post('/api/auth/signup', { email: email.toUpperCase(), password: TEST_PASSWORD, displayName: 'Alice' })
+    const asked = await client.post('/api/auth/signup', { email: email.toUpperCase(), password: TEST_PASSWORD, displayName: 'Alice' })
+    expect(asked.status).toBe(202)
+    expect(client.cookie).toBe('')
+    const up = await client.post('/api/auth/signup-confirm', { token: await mailedToken(email, 'welcome') })
     expect(up.status).toBe(201)
     expect(up.body.user).toMatchObject({ email, displayName: 'Alice', siteRole: 'member' })
     expect((await client.get('/api/auth/me')).body.user.email).toBe(email)
@@ -25,13 +28,30 @@ describe('accounts', () => {
     expect(row.password_hash).toMatch(/^\$scrypt\$/)
   })
 
-  it('refuses a second account on the same address and writes nothing', async () => {
-    const { email } = await signedUpClient('dup')
+  it('a second sign-up on a known address makes no account, changes nothing of the first, and mails its owner', async () => {
+    const { email, id } = await signedUpClient('dup')
     const before = await rowCounts()
-    const again = await new ApiClient().post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Dup' })
-    expect(again.status).toBe(409)
-    expect(messageOf(again)).toMatch(/already exists/)
-    expect(await rowCounts()).toEqual(before)
+    const account = await testDb()('users').where({ id }).first()
+    const again = await new ApiClient().post('/api/auth/signup', { email, password: 'another long password', displayName: 'Dup' })
+    expect(again.status).toBe(202)
+    expect(await rowCounts()).toEqual({ ...before, outbox: before.outbox! + 1, account_mails: before.account_mails! + 1 })
+    expect(await testDb()('users').where({ id }).first()).toEqual(account)
+    const mail = await testDb()('outbox').where({ to_address: email }).orderBy('id', 'desc').first('subject')
+    expect(mail.subject).toBe('Someone tried to create a Scalewright account with your address')
+  })
+
+  it('a sign-up link works once, and not after it expires', async () => {
+    const email = uniqueEmail('once')
+    await new ApiClient().post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Once' })
+    const token = await mailedToken(email, 'welcome')
+    expect((await new ApiClient().post('/api/auth/signup-confirm', { token })).status).toBe(201)
+    const again = await new ApiClient().post('/api/auth/signup-confirm', { token })
+    expect(again.status).toBe(400)
+    expect(messageOf(again)).toBe('This sign-up link is invalid, used or expired; sign up again')
+    const late = uniqueEmail('late')
+    await new ApiClient().post('/api/auth/signup', { email: late, password: TEST_PASSWORD, displayName: 'Late' })
+    await testDb()('sign_up_requests').where({ email: late }).update({ expires_at: new Date(Date.now() - 1000) })
+    expect((await new ApiClient().post('/api/auth/signup-confirm', { token: await mailedToken(late, 'welcome') })).status).toBe(400)
   })
 
   it('gives one message for a wrong password and an unknown address', async () => {
@@ -53,9 +73,9 @@ describe('password reset through the e-mailed one-time token', () => {
     expect(ask.status).toBe(200)
     const box = await admin.client.get(`/api/admin/outbox?to=${encodeURIComponent(email)}`)
     expect(box.status).toBe(200)
-    expect(box.body.messages).toHaveLength(1)
+    expect(box.body.messages.map((m: { subject: string }) => m.subject)).toEqual(['Reset your Scalewright password', 'Finish creating your Scalewright account'])
     const token = /\/reset\/([A-Za-z0-9_-]{40,})/.exec(box.body.messages[0].text)![1]!
-    const raw = await testDb()('outbox').where({ to_address: email }).first()
+    const raw = await testDb()('outbox').where({ to_address: email }).orderBy('id', 'desc').first()
     expect(raw.raw).toContain('Subject: Reset your Scalewright password') // built by nodemailer
 
     const newPassword = 'a brand new password'
@@ -67,12 +87,16 @@ describe('password reset through the e-mailed one-time token', () => {
     expect(messageOf(reuse)).toMatch(/invalid, used or expired/)
   })
 
-  it('answers the same for an unknown address and sends nothing', async () => {
+  it('answers the same for an unknown address, makes no reset link, and tells the address no account uses it', async () => {
+    const email = uniqueEmail('nobody')
     const before = await rowCounts()
-    const res = await new ApiClient().post('/api/auth/reset-request', { email: uniqueEmail('nobody') })
+    const res = await new ApiClient().post('/api/auth/reset-request', { email })
     expect(res.status).toBe(200)
     expect(res.body.message).toMatch(/If an account exists/)
-    expect(await rowCounts()).toEqual(before)
+    expect(await rowCounts()).toEqual({ ...before, outbox: before.outbox! + 1, account_mails: before.account_mails! + 1 })
+    const mail = await testDb()('outbox').where({ to_address: email }).first('subject', 'text_body')
+    expect(mail.subject).toBe('Scalewright password reset: no account uses this address')
+    expect(mail.text_body).not.toMatch(/\/reset\//)
   })
 
   it('refuses an expired token', async () => {
@@ -121,6 +145,6 @@ describe('throttling of password guessing and reset mails', () => {
       answers.add(res.body.message)
     }
     expect([...answers]).toEqual(['If an account exists for that address, a reset link is on its way.'])
-    expect(await testDb()('outbox').where({ to_address: email }).count('id as n').first()).toEqual({ n: '3' })
+    expect(await testDb()('outbox').where({ to_address: email, subject: 'Reset your Scalewright password' }).count('id as n').first()).toEqual({ n: '3' })
   })
 })

@@ -2,6 +2,7 @@ import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest'
 import type { Browser } from 'playwright-core'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { uniqueEmail } from '../support/client'
+import { signUpInBrowser } from '../support/signUp'
 
 let browser: Browser
 beforeAll(async () => { browser = await launchBrowser() })
@@ -16,11 +17,7 @@ describe('accounts in a real browser', () => {
     await expect.poll(() => page.getByText('Enter a valid e-mail address').count()).toBe(1)
     await expect.poll(() => page.getByText('Password must have at least 10 characters').count()).toBe(1)
 
-    await page.getByLabel('Name', { exact: true }).fill('Browser Tester')
-    await page.getByLabel('E-mail').fill(uniqueEmail('browser'))
-    await page.getByLabel(/^Password/).fill('a long enough password')
-    await page.getByRole('button', { name: 'Create account' }).click()
-    await page.waitForURL('**/groups')
+    await signUpInBrowser(page, 'Browser Tester', uniqueEmail('browser'))
     await page.getByLabel('Group name').fill('Browser Group')
     await page.getByLabel('Short name (for links)').fill(`browser-${Date.now().toString(36)}`)
     await page.getByRole('button', { name: 'Create group' }).click()
@@ -40,8 +37,7 @@ describe('accounts in a real browser', () => {
     const base = inject('baseUrl')
     const email = uniqueEmail('account-e2e')
     const here = await newPage(browser, base)
-    const signUp = await here.request.post('/api/auth/signup', { data: { email, password: 'first long password', displayName: 'Account Tester' } })
-    expect(signUp.status()).toBe(201)
+    await signUpInBrowser(here, 'Account Tester', email, 'first long password')
     const laptop = await newPage(browser, base)
     expect((await laptop.request.post('/api/auth/signin', { data: { email, password: 'first long password' } })).status()).toBe(200)
 

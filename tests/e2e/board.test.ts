@@ -3,6 +3,7 @@ import type { Browser, Page } from 'playwright-core'
 import { readFileSync } from 'node:fs'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { uniqueEmail } from '../support/client'
+import { signUpInBrowser } from '../support/signUp'
 
 let browser: Browser
 beforeAll(async () => { browser = await launchBrowser() })
@@ -11,13 +12,7 @@ afterAll(async () => { await browser?.close() })
 const byTest = (page: Page, id: string) => page.locator(`[data-test="${id}"]`)
 
 async function signUpWithGroup(page: Page) {
-  await page.goto('/signup')
-  await hydrated(page)
-  await page.getByLabel('Name', { exact: true }).fill('Board Tester')
-  await page.getByLabel('E-mail').fill(uniqueEmail('board-e2e'))
-  await page.getByLabel(/^Password/).fill('a long enough password')
-  await page.getByRole('button', { name: 'Create account' }).click()
-  await page.waitForURL('**/groups')
+  await signUpInBrowser(page, 'Board Tester', uniqueEmail('board-e2e'))
   const slug = `board-${Date.now().toString(36)}`
   await page.getByLabel('Group name').fill('Board group')
   await page.getByLabel('Short name (for links)').fill(slug)

@@ -2,19 +2,12 @@ import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest'
 import type { Browser, Page } from 'playwright-core'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { uniqueEmail, signedUpClient } from '../support/client'
+import { signUpInBrowser } from '../support/signUp'
 import { testDb } from '../support/db'
 
 let browser: Browser
 beforeAll(async () => { browser = await launchBrowser() })
 afterAll(async () => { await browser?.close() })
-
-async function signUp(page: Page, name: string, email: string) {
-  await page.getByLabel('Name', { exact: true }).fill(name)
-  await page.getByLabel('E-mail').fill(email)
-  await page.getByLabel(/^Password/).fill('a long enough password')
-  await page.getByRole('button', { name: 'Create account' }).click()
-  await page.waitForURL('**/groups')
-}
 
 /** The invitation token of the last mail to `email` (the outbox stands in for SMTP in tests). */
 async function invitationToken(email: string): Promise<string> {
@@ -25,9 +18,7 @@ async function invitationToken(email: string): Promise<string> {
 describe('group management in a real browser', () => {
   it('an owner invites by e-mail, the invitee joins through the link, the owner changes the role and withdraws another invitation', async () => {
     const owner = await newPage(browser, inject('baseUrl'))
-    await owner.goto('/signup')
-    await hydrated(owner)
-    await signUp(owner, 'Owner Tester', uniqueEmail('owner-e2e'))
+    await signUpInBrowser(owner, 'Owner Tester', uniqueEmail('owner-e2e'))
     const slug = `gm-${Date.now().toString(36)}`
     await owner.getByLabel('Group name').fill('Management Group')
     await owner.getByLabel('Short name (for links)').fill(slug)
@@ -102,18 +93,14 @@ describe('group management in a real browser', () => {
     const token = await invitationToken(email)
 
     const other = await newPage(browser, inject('baseUrl'))
-    await other.goto('/signup')
-    await hydrated(other)
-    await signUp(other, 'Someone Else', uniqueEmail('other-e2e'))
+    await signUpInBrowser(other, 'Someone Else', uniqueEmail('other-e2e'))
     await other.goto(`/join/${token}`)
     await hydrated(other)
     await expect.poll(() => other.locator('main').innerText()).toContain(`but this invitation is for ${email}`)
     expect(await other.getByRole('button', { name: 'Join' }).count()).toBe(0)
 
     const page = await newPage(browser, inject('baseUrl'))
-    await page.goto('/signup')
-    await hydrated(page)
-    await signUp(page, 'Joiner', email)
+    await signUpInBrowser(page, 'Joiner', email)
     await page.goto(`/join/${token}`)
     await hydrated(page)
     await page.getByRole('button', { name: 'Join' }).click()

@@ -3,6 +3,7 @@ import type { Browser, Page } from 'playwright-core'
 import { readFileSync } from 'node:fs'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { uniqueEmail } from '../support/client'
+import { signUpInBrowser } from '../support/signUp'
 import smeft from '../../shared/presets/smeft.json'
 
 let browser: Browser
@@ -10,13 +11,7 @@ beforeAll(async () => { browser = await launchBrowser() })
 afterAll(async () => { await browser?.close() })
 
 async function signUpAndFoundGroup(page: Page, name: string) {
-  await page.goto('/signup')
-  await hydrated(page)
-  await page.getByLabel('Name', { exact: true }).fill(name)
-  await page.getByLabel('E-mail').fill(uniqueEmail('editor-e2e'))
-  await page.getByLabel(/^Password/).fill('a long enough password')
-  await page.getByRole('button', { name: 'Create account' }).click()
-  await page.waitForURL('**/groups')
+  await signUpInBrowser(page, name, uniqueEmail('editor-e2e'))
   const slug = `ed-${Date.now().toString(36)}`
   await page.getByLabel('Group name').fill(`${name}'s group`)
   await page.getByLabel('Short name (for links)').fill(slug)

@@ -39,12 +39,22 @@ export function uniqueEmail(prefix = 'user'): string {
 
 export const TEST_PASSWORD = 'correct horse battery'
 
-/** Sign up a fresh account and return a client signed in as it. */
+/** The token of the last mail to `email` whose link goes to `/${page}/<token>` (the outbox stands in for SMTP). */
+export async function mailedToken(email: string, page: 'welcome' | 'reset' | 'join'): Promise<string> {
+  const { testDb } = await import('./db')
+  const mail = await testDb()('outbox').where({ to_address: email.toLowerCase() }).andWhere('text_body', 'like', `%/${page}/%`).orderBy('id', 'desc').first('text_body')
+  if (!mail) throw new Error(`no ${page} mail to ${email}`)
+  return new RegExp(`/${page}/([A-Za-z0-9_-]{40,})`).exec(mail.text_body)![1]!
+}
+
+/** Sign a fresh account up (the e-mailed link opened, as its owner would) and return a client signed in as it. */
 export async function signedUpClient(prefix = 'user'): Promise<{ client: ApiClient, email: string, id: number }> {
   const client = new ApiClient()
   const email = uniqueEmail(prefix)
-  const res = await client.post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: prefix })
-  if (res.status !== 201) throw new Error(`signup failed: ${res.status} ${JSON.stringify(res.body)}`)
+  const asked = await client.post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: prefix })
+  if (asked.status !== 202) throw new Error(`signup failed: ${asked.status} ${JSON.stringify(asked.body)}`)
+  const res = await client.post('/api/auth/signup-confirm', { token: await mailedToken(email, 'welcome') })
+  if (res.status !== 201) throw new Error(`signup confirmation failed: ${res.status} ${JSON.stringify(res.body)}`)
   return { client, email, id: res.body.user.id }
 }
 

@@ -7,7 +7,7 @@ export function testDb(): Knex {
   return db
 }
 
-export const ALL_TABLES = ['users', 'password_resets', 'groups', 'memberships', 'invitations', 'outbox', 'theories', 'runs', 'bases', 'operators', 'annotations', 'annotation_revisions', 'tags', 'share_links', 'threshold_tags', 'scale_ladders']
+export const ALL_TABLES = ['users', 'password_resets', 'groups', 'memberships', 'invitations', 'outbox', 'theories', 'runs', 'bases', 'operators', 'annotations', 'annotation_revisions', 'tags', 'share_links', 'threshold_tags', 'scale_ladders', 'sessions', 'sign_up_requests', 'account_mails']
 
 /** Row counts of every table, to prove that a rejected request wrote nothing. */
 export async function rowCounts(): Promise<Record<string, number>> {

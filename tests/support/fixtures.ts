@@ -1,4 +1,4 @@
-import { ApiClient, signedUpClient } from './client'
+import { ApiClient, signedUpClient, mailedToken } from './client'
 import { makeAdmin } from './db'
 import type { GroupRole } from '../../shared/types/roles'
 
@@ -41,12 +41,7 @@ export async function buildWorld(): Promise<World> {
   const g = await owner.client.post('/api/groups', { slug, name: `Group ${slug}` })
   if (g.status !== 201) throw new Error(`group create failed ${JSON.stringify(g.body)}`)
   const byRole = { owner } as Record<GroupRole, Actor>
-  for (const role of ['viewer', 'commenter', 'editor'] as const) {
-    const actor = await signedUpClient(role)
-    const r = await owner.client.post(`/api/groups/${slug}/members`, { email: actor.email, role })
-    if (r.status !== 201) throw new Error(`adding ${role} failed ${JSON.stringify(r.body)}`)
-    byRole[role] = actor
-  }
+  for (const role of ['viewer', 'commenter', 'editor'] as const) byRole[role] = await joined(owner, slug, await signedUpClient(role), role)
   const stranger = await signedUpClient('stranger')
   const admin = await signedUpClient('admin')
   await makeAdmin(admin.id)
@@ -55,12 +50,18 @@ export async function buildWorld(): Promise<World> {
   return { editorClient: () => byRole.editor.client, slug, groupId: g.body.group.id, owner, byRole, stranger, admin, anonymous: new ApiClient(), theoryId: t.body.theory.id }
 }
 
+/** The owner invites the actor with a role and the actor accepts the mailed invitation. */
+async function joined(owner: Actor, slug: string, actor: Actor, role: GroupRole): Promise<Actor> {
+  const r = await owner.client.post(`/api/groups/${slug}/members`, { email: actor.email, role })
+  if (r.status !== 201) throw new Error(`inviting ${role} failed ${JSON.stringify(r.body)}`)
+  const a = await actor.client.post('/api/invitations/accept', { token: await mailedToken(actor.email, 'join') })
+  if (a.status !== 200) throw new Error(`accepting as ${role} failed ${JSON.stringify(a.body)}`)
+  return actor
+}
+
 /** Add a fresh account to the group with a role (a target for member routes). */
 export async function addMember(world: World, role: GroupRole): Promise<Actor> {
-  const actor = await signedUpClient(`extra-${role}`)
-  const r = await world.owner.client.post(`/api/groups/${world.slug}/members`, { email: actor.email, role })
-  if (r.status !== 201) throw new Error(`adding member failed ${JSON.stringify(r.body)}`)
-  return actor
+  return joined(world.owner, world.slug, await signedUpClient(`extra-${role}`), role)
 }
 
 /**

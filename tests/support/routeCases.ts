@@ -1,7 +1,7 @@
 import type { GroupRole } from '../../shared/types/roles'
 import { createHash, randomBytes } from 'node:crypto'
 import { addMember, addBasis, SMALL_THEORY, type World, type Actor } from './fixtures'
-import { signedUpClient, TEST_PASSWORD } from './client'
+import { ApiClient, signedUpClient, mailedToken, TEST_PASSWORD } from './client'
 import { IMPORT_MAX_BYTES } from '../../shared/schemas/importChoice'
 import { testDb } from './db'
 
@@ -41,6 +41,7 @@ async function noteBy(w: World, author: Actor) {
  */
 export const ROUTE_CASES: Record<string, RouteCase> = {
   'POST /api/auth/signup': { access: { kind: 'public', why: 'creating an account' }, prepare: async () => ({ path: '/api/auth/signup', body: { email: `new-${fresh()}@example.test`, password: 'long enough password', displayName: 'New' } }), body: 'required' },
+  'POST /api/auth/signup-confirm': { access: { kind: 'public', why: 'guarded by the e-mailed token' }, prepare: async () => ({ path: '/api/auth/signup-confirm', body: { token: await pendingSignUp() } }), body: 'required' },
   'POST /api/auth/signin': { access: { kind: 'public', why: 'signing in' }, prepare: async () => ({ path: '/api/auth/signin', body: { email: 'nobody@example.test', password: 'x' } }), body: 'required' },
   'POST /api/auth/signout': { access: { kind: 'public', why: 'clears only the caller\'s own cookie' }, prepare: async () => ({ path: '/api/auth/signout' }) },
   'POST /api/auth/reset-request': { access: { kind: 'public', why: 'forgotten passwords' }, prepare: async () => ({ path: '/api/auth/reset-request', body: { email: 'nobody@example.test' } }), body: 'required' },
@@ -103,10 +104,11 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
   },
   'POST /api/bases/[id]/rewrite': { access: { kind: 'group', min: 'viewer' }, body: 'required', prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/rewrite`, body: { classKey: 'D^2 phi^2 phi*^2', text: '<13>[13]' } }) },
   'POST /api/operators/[id]/tags': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/operators/${(await basisOf(w)).operatorIds.photon}/tags`, body: { kind: 'custom', label: `tag ${fresh()}` } }) },
+  // Tags, like notes, are deleted by their author (or an owner): the tag is the actor's own when they may write.
   'DELETE /api/tags/[id]': {
     access: { kind: 'group', min: 'commenter' },
-    prepare: async (w) => {
-      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.photon, kind: 'custom', label: `t${fresh()}` }).returning('id')
+    prepare: async (w, actor) => {
+      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.photon, kind: 'custom', label: `t${fresh()}`, created_by: canWrite(w, actor).id }).returning('id')
       return { path: `/api/tags/${tag.id}` }
     },
   },
@@ -198,6 +200,14 @@ async function idleRun(w: World): Promise<number> {
 function canWrite(w: World, actor: Actor): Actor {
   const roles = Object.entries(w.byRole).filter(([, a]) => a.id === actor.id).map(([r]) => r)
   return roles.some((r) => r !== 'viewer') ? actor : w.byRole.commenter
+}
+
+/** The token of a fresh sign-up request (the link a new address is mailed). */
+async function pendingSignUp(): Promise<string> {
+  const email = `pending-${fresh()}@example.test`
+  const res = await new ApiClient().post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Pending' })
+  if (res.status !== 202) throw new Error(`signup failed ${JSON.stringify(res.body)}`)
+  return mailedToken(email, 'welcome')
 }
 
 // Members route needs an account that is not yet in the group: sign one up on demand.
