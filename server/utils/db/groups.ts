@@ -1,4 +1,3 @@
-import type { Knex } from 'knex'
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
 import type { GroupRole } from '../../../shared/types/roles'
@@ -37,11 +36,30 @@ export function membersOf(groupId: number) {
     .select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
 }
 
-/** Refuse a change that would leave the group without an owner. */
-export async function assertOwnerRemains(trx: Knex.Transaction, groupId: number, userId: number, newRole: GroupRole | null) {
-  if (newRole === 'owner') return
-  const owners = await trx('memberships').where({ group_id: groupId, role: 'owner' }).forUpdate().select('user_id')
-  if (owners.length === 1 && owners[0].user_id === userId) fail(409, 'A group needs at least one owner; make someone else owner first')
+/**
+ * Change a member's role (or remove them, `newRole` null) as `callerId`, keeping at least one
+ * owner. The group's row is locked first (FOR NO KEY UPDATE, which leaves inserts that refer
+ * to the group free), so that concurrent changes in one group run one after the other and
+ * never deadlock; the caller's own role is read again under the lock, so an owner demoted a
+ * moment ago can no longer act as one. Owners change anyone; every member may leave.
+ */
+export async function changeMembership(groupId: number, callerId: number, targetId: number, newRole: GroupRole | null) {
+  await useDb().transaction(async (trx) => {
+    await trx('groups').where({ id: groupId }).forNoKeyUpdate().first('id')
+    const members: { user_id: number, role: GroupRole }[] = await trx('memberships').where({ group_id: groupId }).select('user_id', 'role')
+    const callerRole = members.find((m) => m.user_id === callerId)?.role
+    const target = members.find((m) => m.user_id === targetId)
+    if (!callerRole) fail(403, 'You are not a member of this group')
+    const leaving = newRole === null && callerId === targetId
+    if (!leaving && callerRole !== 'owner') {
+      fail(403, newRole === null ? 'This needs the owner role in the group; you may only remove yourself' : `This needs the owner role in the group; you are ${callerRole}`)
+    }
+    if (!target) fail(404, 'That account is not a member of this group')
+    const owners = members.filter((m) => m.role === 'owner').length
+    if (target.role === 'owner' && newRole !== 'owner' && owners === 1) fail(409, 'A group needs at least one owner; make someone else owner first')
+    const row = trx('memberships').where({ group_id: groupId, user_id: targetId })
+    await (newRole === null ? row.delete() : row.update({ role: newRole }))
+  })
 }
 
 /**

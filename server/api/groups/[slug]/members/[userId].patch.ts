@@ -1,21 +1,16 @@
 import { getRouterParam } from 'h3'
-import { defineApiHandler, fail } from '../../../../utils/http/apiHandler'
+import { defineApiHandler } from '../../../../utils/http/apiHandler'
 import { readJson, intParam } from '../../../../utils/http/readJson'
 import { requireGroupRole } from '../../../../utils/auth/currentUser'
-import { groupBySlugOr404, assertOwnerRemains } from '../../../../utils/db/groups'
-import { useDb } from '../../../../utils/db/connection'
+import { groupBySlugOr404, changeMembership } from '../../../../utils/db/groups'
 import { MemberRoleSchema } from '../../../../../shared/schemas/group'
 
+// Owners change members' roles; the last owner stays.
 export default defineApiHandler(async (event) => {
   const group = await groupBySlugOr404(getRouterParam(event, 'slug')!)
-  await requireGroupRole(event, group.id, 'owner')
+  const { user } = await requireGroupRole(event, group.id, 'owner')
   const userId = intParam(event, 'userId')
   const { role } = await readJson(event, MemberRoleSchema)
-  await useDb().transaction(async (trx) => {
-    const member = await trx('memberships').where({ group_id: group.id, user_id: userId }).forUpdate().first()
-    if (!member) fail(404, 'That account is not a member of this group')
-    await assertOwnerRemains(trx, group.id, userId, role)
-    await trx('memberships').where({ group_id: group.id, user_id: userId }).update({ role })
-  })
+  await changeMembership(group.id, user.id, userId, role)
   return { member: { id: userId, role } }
 })
