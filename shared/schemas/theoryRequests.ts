@@ -13,6 +13,10 @@ export const TheoryUpdateSchema = z.object({
 const NoteSchema = z.string({ error: 'is required: write the note' }).trim().min(1, { error: 'is empty: write the note' })
   .max(10_000, { error: 'must have at most 10000 characters' })
 
+// Notes are capped so that one member cannot bloat a board (every note is part of its data).
+export const NOTES_PER_TARGET = 100 // on one operator, or on the theory itself
+export const NOTES_PER_AUTHOR = 500 // by one member on one theory
+
 export const AnnotationCreateSchema = z.object({
   body: NoteSchema,
   operatorId: z.number().int().positive().optional(),

@@ -1,5 +1,6 @@
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
+import { NOTES_PER_AUTHOR, NOTES_PER_TARGET } from '../../../shared/schemas/theoryRequests'
 
 export function annotationsOfTheory(theoryId: number) {
   return useDb()('annotations as a')
@@ -15,4 +16,29 @@ export async function annotationOr404(id: number) {
     .where('a.id', id).first('a.*', 't.group_id')
   if (!row) fail(404, `No note with id ${id}`)
   return row as { id: number, theory_id: number, operator_id: number | null, author_id: number | null, body: string, group_id: number }
+}
+
+// Namespace of the two-key advisory locks taken per theory while its notes are counted.
+const NOTES_LOCK = 12_001
+
+/**
+ * Write a note unless a cap is reached (409): NOTES_PER_AUTHOR by one member on the theory,
+ * NOTES_PER_TARGET on one operator (or on the theory itself). Counted and inserted under a
+ * lock per theory, so parallel posts cannot pass a cap together.
+ */
+export async function addNote(input: { theoryId: number, operatorId: number | null, authorId: number, body: string }) {
+  return useDb().transaction(async (trx) => {
+    await trx.raw('select pg_advisory_xact_lock(?, ?)', [NOTES_LOCK, input.theoryId])
+    const [counts] = await trx('annotations').where({ theory_id: input.theoryId }).select(
+      trx.raw('count(*) filter (where author_id = ?)::int as by_author', [input.authorId]),
+      trx.raw('count(*) filter (where operator_id is not distinct from ?)::int as on_target', [input.operatorId]))
+    if (counts.by_author >= NOTES_PER_AUTHOR) fail(409, `You have written ${NOTES_PER_AUTHOR} notes on this theory, the most one member may; delete old ones first`)
+    if (counts.on_target >= NOTES_PER_TARGET) {
+      fail(409, `This ${input.operatorId ? 'operator' : 'theory'} already carries ${NOTES_PER_TARGET} notes, the most it may; edit or delete an old note instead`)
+    }
+    const [row] = await trx('annotations')
+      .insert({ theory_id: input.theoryId, operator_id: input.operatorId, author_id: input.authorId, body: input.body })
+      .returning(['id', 'body', 'operator_id as operatorId', 'created_at as createdAt'])
+    return row as { id: number, body: string, operatorId: number | null, createdAt: Date }
+  })
 }

@@ -3,10 +3,11 @@ import { readJson, intParam } from '../../../../utils/http/readJson'
 import { requireGroupRole } from '../../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../../utils/db/theories'
 import { useDb } from '../../../../utils/db/connection'
+import { addNote } from '../../../../utils/db/annotations'
 import { AnnotationCreateSchema } from '../../../../../shared/schemas/theoryRequests'
 import { touchBasesOfTheory } from '../../../../utils/db/boardCache'
 
-// Commenters and above leave notes on a theory or on one of its operators.
+// Commenters and above leave notes on a theory or on one of its operators (capped: addNote).
 export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
   const { user } = await requireGroupRole(event, theory.group_id, 'commenter')
@@ -16,9 +17,7 @@ export default defineApiHandler(async (event) => {
       .where({ 'o.id': body.operatorId, 'b.theory_id': theory.id }).first('o.id')
     if (!op) fail(404, `This theory has no operator ${body.operatorId}; the note was not saved`)
   }
-  const [row] = await useDb()('annotations')
-    .insert({ theory_id: theory.id, operator_id: body.operatorId ?? null, author_id: user.id, body: body.body })
-    .returning(['id', 'body', 'operator_id as operatorId', 'created_at as createdAt'])
+  const row = await addNote({ theoryId: theory.id, operatorId: body.operatorId ?? null, authorId: user.id, body: body.body })
   await touchBasesOfTheory(theory.id)
   created(event)
   return { annotation: { ...row, authorId: user.id, authorName: user.displayName } }
