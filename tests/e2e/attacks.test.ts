@@ -90,3 +90,19 @@ describe('signing out in the browser', () => {
     expect((await copy.post('/api/groups', { slug: `late-${Date.now().toString(36)}`, name: 'Too late' })).status).toBe(401)
   })
 })
+
+describe('the pages\' Content-Security-Policy', () => {
+  it('stops a script injected into a page, and the e2e check reports the violation', async () => {
+    const own = await launchBrowser() // its own browser: the violation is expected here
+    const page = await newPage(own, base())
+    await page.goto('/signin')
+    await hydrated(page)
+    await page.evaluate(() => {
+      const s = document.createElement('script')
+      s.textContent = 'window.injected = 1'
+      document.body.appendChild(s)
+    })
+    expect(await page.evaluate(() => (window as unknown as { injected?: number }).injected)).toBeUndefined()
+    await expect(own.close()).rejects.toThrow(/Content-Security-Policy violations/)
+  })
+})
