@@ -27,16 +27,17 @@ function sessionConfig() {
 }
 
 /**
- * Sign the user in on this browser: a new `sessions` row and a sealed cookie naming it.
- * Rows older than the cookie's lifetime are deleted on the way (of every account), so the
- * table holds live sessions only.
+ * Sign the user in on this browser: a new `sessions` row and a sealed cookie naming it. The
+ * browser's previous session (if it had one) ends, and rows older than the cookie's lifetime
+ * are deleted on the way (of every account), so the table holds live sessions only.
  */
 export async function startSession(event: H3Event, user: { id: number, email: string, displayName: string, siteRole: string }, db: Knex = useDb()) {
   const sessionId = randomUUID()
   const maxAge = sessionConfig().maxAge ?? 30 * 86_400
+  if (getCookie(event, sessionConfig().name)) await deleteSessionRow(await getUserSession(event))
   await db('sessions').insert({ id: sessionId, user_id: user.id })
   await db('sessions').where('created_at', '<', new Date(Date.now() - maxAge * 1000)).delete()
-  await setUserSession(event, { user, sessionId })
+  await replaceUserSession(event, { user, sessionId })
 }
 
 /** The session cookie's facts, or 401. Whether the session and account still exist is the caller's check. */

@@ -63,6 +63,16 @@ describe('signing out ends the session on the server', () => {
     expect((await there.get('/api/auth/me')).status).toBe(200)
   })
 
+  it('signing in again on the same browser ends its previous session', async () => {
+    const { client, email, id } = await signedUpClient('again')
+    const earlier = copyOf(client)
+    expect((await client.post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
+    expect(client.cookie).not.toBe(earlier.cookie)
+    expect((await client.get('/api/auth/me')).status).toBe(200)
+    expect((await earlier.get('/api/auth/me')).status).toBe(401)
+    expect(await testDb()('sessions').where({ user_id: id }).count('id as n').first()).toEqual({ n: '1' })
+  })
+
   it('the page\'s session read reflects the account as it is now', async () => {
     const { client, id } = await signedUpClient('renamed')
     await testDb()('users').where({ id }).update({ display_name: 'Renamed Since' })
