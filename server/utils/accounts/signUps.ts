@@ -13,26 +13,33 @@ export const SIGN_UP_SENT = 'Check your mailbox: a link to finish creating the a
 /**
  * A sign-up without an invitation: the account is made only when the e-mailed link is opened.
  * A new address gets the link; an address that has an account gets a notice instead. Either
- * way the work is alike (one password hash, one row, one mail) and the answer is the same, so
- * a sign-up does not tell whether an address has an account.
+ * way the work is the same (one password hash, the same statements, one mail) and so is the
+ * answer, so a sign-up does not tell whether an address has an account.
  */
 export async function requestSignUp(input: { email: string, displayName: string }, passwordHash: string) {
   await useDb().transaction(async (trx) => {
     if (!(await takeMailQuota(trx, input.email, 'sign-up'))) return
     await trx('sign_up_requests').where('expires_at', '<', new Date()).delete()
-    const existing = await trx('users').where({ email: input.email }).first('id')
-    if (existing) return sendMail(accountExistsMail(input.email), { db: trx })
     const { token, hash } = newToken()
-    await trx('sign_up_requests').insert({
-      email: input.email, display_name: input.displayName, password_hash: passwordHash, token_hash: hash,
-      expires_at: new Date(Date.now() + SIGN_UP_HOURS * 3_600_000),
-    })
+    if (!(await storeSignUpRequest(trx, input, passwordHash, hash))) return sendMail(accountExistsMail(input.email), { db: trx })
     await sendMail({
       to: input.email,
       subject: 'Finish creating your Scalewright account',
       text: `Someone (you, we hope) asked for a Scalewright account with this address.\n\nOpen this link within ${SIGN_UP_HOURS} hours to finish:\n${appUrl(`/welcome/${token}`)}\n\nIf it was not you, ignore this message; no account is made.`,
     }, { db: trx })
   })
+}
+
+/**
+ * Store a sign-up request unless the address has an account, in one statement that runs alike
+ * either way (so the time does not tell); whether it stored one.
+ */
+async function storeSignUpRequest(trx: Knex.Transaction, input: { email: string, displayName: string }, passwordHash: string, tokenHash: string): Promise<boolean> {
+  const expires = new Date(Date.now() + SIGN_UP_HOURS * 3_600_000)
+  const { rows } = await trx.raw(`insert into sign_up_requests (email, display_name, password_hash, token_hash, expires_at)
+    select ?, ?, ?, ?, ?::timestamptz where not exists (select 1 from users where email = ?) returning id`,
+  [input.email, input.displayName, passwordHash, tokenHash, expires, input.email])
+  return rows.length > 0
 }
 
 function accountExistsMail(to: string) {
