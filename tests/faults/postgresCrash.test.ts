@@ -13,7 +13,7 @@ let clients: ApiClient[]
 
 beforeAll(async () => {
   stack = await startStack('crash')
-  const world = await groupWithTheory(stack.baseUrl)
+  const world = await groupWithTheory(stack)
   theoryId = world.theoryId
   // Four browser sessions of the group's owner.
   clients = [world.owner]

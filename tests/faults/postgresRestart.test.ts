@@ -12,7 +12,7 @@ let slug: string
 
 beforeAll(async () => {
   stack = await startStack('restart')
-  ;({ owner, theoryId, slug } = await groupWithTheory(stack.baseUrl))
+  ;({ owner, theoryId, slug } = await groupWithTheory(stack))
 })
 afterAll(async () => { await stack?.stop() })
 

@@ -13,7 +13,7 @@ let smallId: number
 
 beforeAll(async () => {
   stack = await startStack('worker')
-  const world = await groupWithTheory(stack.baseUrl)
+  const world = await groupWithTheory(stack)
   owner = world.owner
   smallId = world.theoryId
   const t = await owner.post(`/api/groups/${world.slug}/theories`, { definition: { ...findPreset('smeft')!.theory, name: 'SMEFT for the fault suite' } })

@@ -77,11 +77,16 @@ export async function waitUntil(check: () => Promise<boolean> | boolean, timeout
   throw new Error(describe())
 }
 
-/** A signed-up owner of a new group with one small theory. */
-export async function groupWithTheory(baseUrl: string) {
-  const owner = new ApiClient(baseUrl)
-  const signup = await owner.post('/api/auth/signup', { email: uniqueEmail('faults'), password: TEST_PASSWORD, displayName: 'Fault tester' })
-  if (signup.status !== 201) throw new Error(`signup failed ${JSON.stringify(signup.body)}`)
+/** A signed-up owner (through the mailed link, read from the stack's outbox) of a new group with one small theory. */
+export async function groupWithTheory(stack: Pick<Stack, 'baseUrl' | 'db'>) {
+  const owner = new ApiClient(stack.baseUrl)
+  const email = uniqueEmail('faults')
+  const signup = await owner.post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Fault tester' })
+  if (signup.status !== 202) throw new Error(`signup failed ${JSON.stringify(signup.body)}`)
+  const mail = await stack.db('outbox').where({ to_address: email }).andWhere('text_body', 'like', '%/welcome/%').first('text_body')
+  const token = /\/welcome\/([A-Za-z0-9_-]{40,})/.exec(mail?.text_body ?? '')?.[1]
+  if (!token) throw new Error(`no sign-up link mailed to ${email}`)
+  if ((await owner.post('/api/auth/signup-confirm', { token })).status !== 201) throw new Error('signup confirmation failed')
   const slug = `faults-${Date.now().toString(36)}`
   if ((await owner.post('/api/groups', { slug, name: `Group ${slug}` })).status !== 201) throw new Error('group create failed')
   const t = await owner.post(`/api/groups/${slug}/theories`, { definition: { ...SMALL_THEORY, name: `T-${slug}` } })
