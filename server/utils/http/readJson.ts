@@ -2,7 +2,7 @@ import { readRawBody, getHeader, type H3Event } from 'h3'
 import type { ZodType } from 'zod'
 import { fail } from './apiHandler'
 import { describeZodError } from '../../../shared/schemas/describeZodError'
-import { nulPath, nulMessage } from './nulText'
+import { nulPlace, nulMessage } from './nulText'
 
 export const MAX_BODY_BYTES = 512 * 1024
 
@@ -25,8 +25,8 @@ export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes =
       fail(400, 'Request body is not valid JSON')
     }
   }
-  const nul = nulPath(value)
-  if (nul) fail(400, nulMessage(nul))
+  const nul = nulPlace(value)
+  if (nul) fail(400, nulMessage(nul, value))
   const parsed = schema.safeParse(value)
   if (!parsed.success) fail(400, describeZodError(parsed.error, value))
   return parsed.data

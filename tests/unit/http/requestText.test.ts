@@ -1,24 +1,26 @@
 import { describe, it, expect } from 'vitest'
 import { createHash } from 'node:crypto'
-import { nulPath, nulMessage } from '../../../server/utils/http/nulText'
+import { nulPlace, nulMessage } from '../../../server/utils/http/nulText'
 import { inlineScripts, pageCsp } from '../../../server/utils/http/pageCsp'
+import { forbiddenIn } from '../../support/forbiddenMessages'
 
 // Pure helpers of the request guards (issue 12, item 6).
-describe('nulPath', () => {
+describe('nulPlace and nulMessage', () => {
   it.each([
-    [{ body: 'ok' }, null],
-    [{ body: 'a\u0000b' }, 'body'],
-    [{ definition: { fields: [{ name: 'phi' }, { name: 'x\u0000' }] } }, 'definition.fields[1].name'],
-    [['ok', ['deep\u0000']], '[1][0]'],
-    [{ 'key\u0000': 1 }, 'key\\0'],
-    ['\u0000', 'body'],
-    [{ n: 1, b: true, z: null }, null],
-  ])('%j → %j', (value, path) => {
-    expect(nulPath(value)).toBe(path)
-  })
-
-  it('says what to do', () => {
-    expect(nulMessage('body')).toBe('body: text may not contain the NUL character (U+0000); remove it')
+    [{ body: 'ok' }, null, ''],
+    [{ body: 'a\u0000b' }, ['body'], 'Note cannot contain the NUL character (U+0000); remove it'],
+    [{ definition: { fields: [{ name: 'phi' }, { name: 'x\u0000' }] } }, ['definition', 'fields', 1, 'name'], 'Field 2 "x\u2400", name cannot contain the NUL character (U+0000); remove it'],
+    [['ok', ['deep\u0000']], [1, 0], 'Entry 2, entry 1 cannot contain the NUL character (U+0000); remove it'],
+    [{ 'key\u0000': 1 }, [], 'The request has a key containing the NUL character (U+0000); remove it'],
+    ['\u0000', [], 'The request cannot contain the NUL character (U+0000); remove it'],
+    [{ n: 1, b: true, z: null }, null, ''],
+  ])('%j → %j: %s', (value, path, message) => {
+    const place = nulPlace(value)
+    expect(place?.path ?? null).toEqual(path)
+    if (place) {
+      expect(nulMessage(place, value)).toBe(message)
+      expect(forbiddenIn(message)).toEqual([])
+    }
   })
 })
 
