@@ -74,7 +74,8 @@ describe('every form, with bad input, shows only messages written for its user',
     await page.getByLabel('E-mail').fill(owner.email)
     await page.getByLabel(/^Password/).fill('a long enough password')
     await page.getByRole('button', { name: 'Create account' }).click()
-    await expectReadable(page, 'sign-up with a taken address', /already exists/)
+    // A taken address answers as a new one does (no account discovery); its owner gets a notice.
+    await expectReadable(page, 'sign-up with a taken address', /^Check your mailbox: a link to finish creating the account/)
 
     await page.goto('/signin')
     await hydrated(page)
