@@ -49,7 +49,7 @@ describe('notes are limited', () => {
   it('a note longer than 10000 characters is refused with the limit named', async () => {
     const res = await world.byRole.commenter.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'x'.repeat(10_001) })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toMatch(/^body: .*at most 10000 characters$/)
+    expect(messageOf(res)).toBe('Note must have at most 10000 characters')
   })
 
   it('one operator carries at most 100 notes', async () => {
@@ -114,7 +114,7 @@ describe('invitation mails with long names', () => {
   it('an address longer than 254 characters is refused before anything is written', async () => {
     const res = await world.owner.client.post(`/api/groups/${world.slug}/invitations`, { email: `${'a'.repeat(60)}@${'b'.repeat(60)}.${'c'.repeat(60)}.${'d'.repeat(60)}.example.test`, role: 'viewer' })
     expect(res.status).toBe(400)
-    expect(messageOf(res)).toMatch(/^email: .*at most 254 characters$/)
+    expect(messageOf(res)).toBe('E-mail address is too long (254 characters at most)')
   })
 })
 
