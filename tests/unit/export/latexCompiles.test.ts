@@ -14,9 +14,9 @@ import { parseCsv } from '../../support/csv'
 /** The export of an engine-built basis, as the app assembles it, with hostile text everywhere. */
 function hostileExport(report: BasisReport) {
   let id = 0
-  const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({ dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk })))
+  const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({ order: d.order, dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk })))
   const operators = report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op) => ({
-    id: ++id, order: d.dimension - 4, classKey: c.key, column: 'kept' as const, text: op.text, latex: op.latex, latexDirac: op.latex4,
+    id: ++id, order: d.order, classKey: c.key, column: 'kept' as const, text: op.text, latex: op.latex, latexDirac: op.latex4,
     hermitian: op.hermitian, realParameters: op.realParameters,
   }))))
   return assembleExport({
