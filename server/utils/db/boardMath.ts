@@ -1,66 +1,75 @@
+import type { Knex } from 'knex'
 import { useDb } from './connection'
-import { coverageRank, expressIn, type Fingerprint } from '../../engine/board/fingerprints'
-import { toString as ratString, isZero } from '../../engine/exact/rational'
+import { withBoardLock } from './boardLock'
+import { coverageOf, rewriteOnto, type ClassOperator, type Rewrite } from '../../engine/board/keptSet'
 
-interface OpRow { id: number, latex: string, text: string, column: string, fingerprint: Fingerprint | null, class_key: string }
+export type { Rewrite }
+export interface BoardOperatorRow extends ClassOperator { class_key: string, order: number, position: number, version: number }
 
-async function classOperators(basisId: number, classKey: string): Promise<OpRow[]> {
-  return useDb()('operators').where({ basis_id: basisId, class_key: classKey }).orderBy(['column', 'position'])
-    .select('id', 'latex', 'text', 'column', 'fingerprint', 'class_key')
+const COLUMNS = ['id', 'latex', 'text', 'column', 'fingerprint', 'class_key', 'order', 'position', 'version']
+
+/** The operators of one class (both columns), by column and position. */
+export function classOperators(db: Knex, basisId: number, classKey: string): Promise<BoardOperatorRow[]> {
+  return db('operators').where({ basis_id: basisId, class_key: classKey }).orderBy(['column', 'position']).select(COLUMNS)
 }
 
-/** Coverage of a class: rank of its kept operators over the required count. */
-export async function classCoverage(basisId: number, classKey: string, required: number) {
-  const ops = await classOperators(basisId, classKey)
-  const kept = ops.filter((o) => o.column === 'kept')
-  const prints = kept.map((o) => o.fingerprint).filter((f): f is Fingerprint => !!f)
-  const rank = prints.length === kept.length ? coverageRank(prints) : kept.length
-  return { classKey, rank, required, complete: rank === required }
+/** Every operator of a basis, by order, column and position. */
+export function basisOperators(db: Knex, basisId: number): Promise<BoardOperatorRow[]> {
+  return db('operators').where({ basis_id: basisId }).orderBy(['order', 'column', 'position', 'id']).select(COLUMNS)
 }
 
-export interface Rewrite { vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
+/** The number of independent operators a class needs (its rank in the stored basis). */
+export async function requiredRank(db: Knex, basisId: number, classKey: string): Promise<number> {
+  const { rows } = await db.raw('select (c->>\'rank\')::int as rank from bases b, jsonb_array_elements(b.classes) c where b.id = ? and c->>\'key\' = ?', [basisId, classKey])
+  return rows[0]?.rank ?? 0
+}
 
-/**
- * The operator written in terms of the kept operators of its class (excluding itself), or
- * null when it is independent of them (or fingerprints are missing).
- */
+/** The operator written in terms of the kept operators of its class (a read; see keptSet.ts). */
 export async function rewriteOntoKept(basisId: number, classKey: string, operatorId: number): Promise<Rewrite | null> {
-  const ops = await classOperators(basisId, classKey)
-  const target = ops.find((o) => o.id === operatorId)
-  const kept = ops.filter((o) => o.column === 'kept' && o.id !== operatorId)
-  if (!target?.fingerprint || kept.some((o) => !o.fingerprint)) return null
-  const combination = expressIn(kept.map((o) => o.fingerprint!), target.fingerprint)
-  if (!combination) return null
-  const terms = combination.coefficients
-    .map((c, i) => ({ c, op: kept[i]! }))
-    .filter(({ c }) => !isZero(c))
-    .map(({ c, op }) => ({ operatorId: op.id, latex: op.latex, coefficient: ratString(c) }))
-  return { vanishes: terms.length === 0, terms }
+  return rewriteOnto(await classOperators(useDb(), basisId, classKey), operatorId)
 }
+
+/** A class as bases.classes stores it (the parts the board's math reads). */
+export interface StoredClass { key: string, rank: number, order?: number, dimension?: number | null }
 
 export type CoverageMap = Record<string, { rank: number, required: number, complete: boolean }>
 
 /** Coverage of every class of a basis, keyed by class key: stored, or computed and stored. */
-export async function coverageOfClasses(basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
+export async function coverageOfClasses(basisId: number, classes: StoredClass[]): Promise<CoverageMap> {
   const row = await useDb()('bases').where({ id: basisId }).first('coverage')
   const stored = (row?.coverage ?? {}) as CoverageMap
   if (classes.every((c) => stored[c.key])) return stored
-  return recomputeCoverage(basisId, classes)
+  return withBoardLock(basisId, ordersOfClasses(classes), (trx) => recomputeCoverage(trx, basisId, classes))
 }
 
-/** Recompute and store coverage of the given classes (all of them after an import). */
-export async function recomputeCoverage(basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
+/** The distinct orders of the given classes (stored with their order, or a mass dimension). */
+export function ordersOfClasses(classes: StoredClass[]): number[] {
+  return [...new Set(classes.map((c) => c.order ?? (c.dimension as number) - 4))]
+}
+
+/** Coverage of the given classes from the operators as stored now (one read for all). */
+export function coverageFrom(ops: BoardOperatorRow[], classes: { key: string, rank: number }[]): CoverageMap {
+  const byClass = new Map<string, BoardOperatorRow[]>()
+  for (const o of ops) byClass.set(o.class_key, [...(byClass.get(o.class_key) ?? []), o])
   const out: CoverageMap = {}
   for (const c of classes) {
-    const { rank, required, complete } = await classCoverage(basisId, c.key, c.rank)
+    const { rank, required, complete } = coverageOf(c.key, byClass.get(c.key) ?? [], c.rank)
     out[c.key] = { rank, required, complete }
   }
-  await storeCoverage(basisId, out)
   return out
 }
 
-/** Merge class coverages into the stored map (one class after a move). */
-export async function storeCoverage(basisId: number, part: CoverageMap) {
-  // Bumps the version too: a board cached between the move and this update must not survive it.
-  await useDb()('bases').where({ id: basisId }).update({ coverage: useDb().raw('coverage || ?::jsonb', [JSON.stringify(part)]), version: useDb().raw('version + 1') })
+/** Recompute and store the coverage of the given classes (inside the caller's transaction). */
+export async function recomputeCoverage(db: Knex, basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
+  const out = coverageFrom(await basisOperators(db, basisId), classes)
+  await storeCoverage(db, basisId, out)
+  return out
+}
+
+/**
+ * Merge class coverages into the stored map and bump the basis version (a board cached
+ * before this change must not survive it). Call it last in a transaction: it locks the basis row.
+ */
+export async function storeCoverage(db: Knex, basisId: number, part: CoverageMap) {
+  await db('bases').where({ id: basisId }).update({ coverage: db.raw('coverage || ?::jsonb', [JSON.stringify(part)]), version: db.raw('version + 1') })
 }

@@ -1,4 +1,6 @@
 import { useDb } from './connection'
+import { withBoardLock } from './boardLock'
+import { recomputeCoverage, type StoredClass } from './boardMath'
 
 /** The distinct orders that have operators in a basis, ascending. */
 export async function ordersOfBasis(basisId: number): Promise<number[]> {
@@ -7,27 +9,28 @@ export async function ordersOfBasis(basisId: number): Promise<number[]> {
 }
 
 /**
- * Move every kept operator of the given orders to set aside, in one transaction: each moved
- * operator goes to the end of its order's set-aside column and its version is bumped, and the
- * basis version is bumped once. Returns how many moved and the new basis version.
+ * Move every kept operator of the given orders to set aside, in one transaction under the
+ * board locks of those orders: each moved operator goes to the end of its order's set-aside
+ * column and its version is bumped; the coverage of the orders' classes is recomputed and the
+ * basis version bumped. Returns how many moved and the new basis version.
  */
-export async function setAsideOrders(basisId: number, orders: number[], userId: number) {
-  return useDb().transaction(async (trx) => {
-    const basis = await trx('bases').where({ id: basisId }).forUpdate().first('version')
-    if (!orders.length) return { count: 0, basisVersion: basis.version as number }
-    const kept = await trx('operators').where({ basis_id: basisId, column: 'kept' }).whereIn('order', orders)
-      .orderBy(['order', 'position']).forUpdate().select('id', 'order')
-    if (!kept.length) return { count: 0, basisVersion: basis.version as number }
-    const ends = await trx('operators').where({ basis_id: basisId, column: 'set_aside' }).whereIn('order', orders)
-      .groupBy('order').select('order').max('position as last')
-    const next = new Map<number, number>(ends.map((e) => [e.order, Number(e.last) + 1]))
-    for (const op of kept) {
-      const position = next.get(op.order) ?? 0
-      next.set(op.order, position + 1)
-      await trx('operators').where({ id: op.id })
-        .update({ column: 'set_aside', position, version: trx.raw('version + 1'), moved_by: userId, moved_at: trx.fn.now() })
+export async function setAsideOrders(basisId: number, orders: number[], userId: number, classes: StoredClass[]) {
+  return withBoardLock(basisId, orders, async (trx) => {
+    const kept = orders.length ? await trx('operators').where({ basis_id: basisId, column: 'kept' }).whereIn('order', orders).orderBy(['order', 'position']).select('id', 'order') : []
+    if (kept.length) {
+      const ends = await trx('operators').where({ basis_id: basisId, column: 'set_aside' }).whereIn('order', orders)
+        .groupBy('order').select('order').max('position as last')
+      const next = new Map<number, number>(ends.map((e) => [e.order, Number(e.last) + 1]))
+      const positions = kept.map((op) => {
+        const position = next.get(op.order) ?? 0
+        next.set(op.order, position + 1)
+        return position
+      })
+      await trx.raw(`update operators o set "column" = 'set_aside', position = x.pos, version = o.version + 1, moved_by = ?, moved_at = now()
+        from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id`, [userId, kept.map((k) => k.id), positions])
+      await recomputeCoverage(trx, basisId, classes.filter((c) => orders.includes(c.order ?? (c.dimension as number) - 4)))
     }
-    const [row] = await trx('bases').where({ id: basisId }).increment('version', 1).returning('version')
-    return { count: kept.length, basisVersion: row.version as number }
+    const basis = await trx('bases').where({ id: basisId }).first('version')
+    return { count: kept.length, basisVersion: basis.version as number }
   })
 }

@@ -6,7 +6,7 @@ import { ladderOf } from '../../../utils/db/scaleLadders'
 import { ordersOfBasis, setAsideOrders } from '../../../utils/db/setAsideBelow'
 import { ordersBelowTarget } from '../../../utils/scales/ladderEstimates'
 import { SetAsideBelowSchema } from '../../../../shared/schemas/scaleRequests'
-import { recomputeCoverage } from '../../../utils/db/boardMath'
+import type { StoredClass } from '../../../utils/db/boardMath'
 
 // Editors set aside, in one transaction, every kept operator of the orders whose estimated
 // size (from the theory's scale ladder) lies below the precision target; answers the count.
@@ -18,10 +18,6 @@ export default defineApiHandler(async (event) => {
   if (!stored) fail(409, 'This theory has no scale ladder yet: save one on its scale-ladder page, then set orders aside')
   const estimates = ordersBelowTarget(stored!.ladder, await ordersOfBasis(basis.id), target)
   const below = estimates.filter((o) => o.belowTarget).map((o) => o.order)
-  const { count } = await setAsideOrders(basis.id, below, user.id)
-  // Coverage of the affected classes changed: recompute (this also bumps the basis version).
-  const classes = (basis.classes as { key: string, rank: number, order: number }[]).filter((c) => below.includes(c.order))
-  await recomputeCoverage(basis.id, classes)
-  const basisVersion = (await basisOr404(basis.id)).version as number
+  const { count, basisVersion } = await setAsideOrders(basis.id, below, user.id, basis.classes as StoredClass[])
   return { count, orders: below, estimates, target, basisVersion }
 })
