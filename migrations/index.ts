@@ -14,6 +14,9 @@ import * as m030 from './20261203_030_run_error_texts'
 import * as m040 from './20261203_040_run_heartbeat'
 import * as m050 from './20261203_050_sessions'
 import * as m051 from './20261203_051_sign_up_requests'
+import * as m090 from './20261203_090_soft_delete'
+import * as m091 from './20261203_091_imported_authors'
+import * as m092 from './20261203_092_request_keys'
 
 // A static list: knex's folder loader cannot read .ts inside vitest or the Nitro bundle.
 // Append new migrations here, named YYYYMMDD_NNN_what.ts, never rename an applied one.
@@ -33,6 +36,9 @@ const migrations: Record<string, Knex.Migration> = {
   '20261203_040_run_heartbeat': m040,
   '20261203_050_sessions': m050,
   '20261203_051_sign_up_requests': m051,
+  '20261203_090_soft_delete': m090,
+  '20261203_091_imported_authors': m091,
+  '20261203_092_request_keys': m092,
 }
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -1,4 +1,4 @@
-import type { GroupRole } from '../../shared/types/roles'
+import { GROUP_ROLES, type GroupRole } from '../../shared/types/roles'
 import { createHash, randomBytes } from 'node:crypto'
 import { addMember, addBasis, SMALL_THEORY, type World, type Actor } from './fixtures'
 import { ApiClient, signedUpClient, mailedToken, TEST_PASSWORD } from './client'
@@ -172,6 +172,30 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     prepare: async (w) => ({ path: `/api/theories/${w.theoryId}/gauge-running`, body: { loops: 1, muFromGeV: 1, alpha: { U: 0.01 }, plotFromGeV: 1, plotToGeV: 100 } }),
   },
   'POST /api/running/qed': { access: { kind: 'signedIn' }, body: 'required', prepare: async () => ({ path: '/api/running/qed', body: { muTo: 91.188, quarks: false, deltaAlphaHad5: 0.02766 } }) },
+  // Deletion marks a row; undo (restore) clears the mark. Each case deletes or restores a fresh target.
+  'DELETE /api/bases/[id]': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/bases/${(await addBasis(w)).basisId}` }) },
+  'POST /api/bases/[id]/restore': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/bases/${await deletedRow('bases', (await addBasis(w)).basisId)}/restore` }) },
+  'POST /api/theories/[id]/restore': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/theories/${await deletedRow('theories', (await newTheory(w)).id)}/restore` }) },
+  'DELETE /api/groups/[slug]': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/groups/${await groupLike(w, false)}` }) },
+  'POST /api/groups/[slug]/restore': { access: { kind: 'group', min: 'owner' }, prepare: async (w) => ({ path: `/api/groups/${await groupLike(w, true)}/restore` }) },
+  'POST /api/annotations/[id]/restore': {
+    access: { kind: 'group', min: 'commenter' },
+    prepare: async (w, actor) => ({ path: `/api/annotations/${await deletedRow('annotations', await noteBy(w, canWrite(w, actor)))}/restore` }),
+  },
+  'POST /api/tags/[id]/restore': {
+    access: { kind: 'group', min: 'commenter' },
+    prepare: async (w) => {
+      const [tag] = await testDb()('tags').insert({ operator_id: (await basisOf(w)).operatorIds.photon, kind: 'custom', label: `t${fresh()}`, deleted_at: new Date() }).returning('id')
+      return { path: `/api/tags/${tag.id}/restore` }
+    },
+  },
+  'POST /api/share-links/[id]/restore': {
+    access: { kind: 'group', min: 'owner' },
+    prepare: async (w) => {
+      const [link] = await testDb()('share_links').insert({ theory_id: w.theoryId, token_hash: createHash('sha256').update(fresh()).digest('hex'), revoked_at: new Date() }).returning('id')
+      return { path: `/api/share-links/${link.id}/restore` }
+    },
+  },
   'PATCH /api/admin/users/[id]': { access: { kind: 'admin' }, body: 'required', prepare: async (w) => ({ path: `/api/admin/users/${w.stranger.id}`, body: { siteRole: 'member' } }) },
 }
 
@@ -182,6 +206,19 @@ const bases = new WeakMap<World, ReturnType<typeof addBasis>>()
 function basisOf(w: World) {
   if (!bases.has(w)) bases.set(w, addBasis(w))
   return bases.get(w)!
+}
+
+/** Mark a row deleted (as its DELETE route would) and return its id: a target for undo. */
+async function deletedRow(table: 'bases' | 'theories' | 'annotations', id: number): Promise<number> {
+  await testDb()(table).where({ id }).update({ deleted_at: new Date() })
+  return id
+}
+
+/** A fresh group with the world's accounts in the world's roles (a target that may be deleted). */
+async function groupLike(w: World, deleted: boolean): Promise<string> {
+  const [g] = await testDb()('groups').insert({ slug: `del-${fresh()}`, name: 'A group to delete', deleted_at: deleted ? new Date() : null }).returning(['id', 'slug'])
+  await testDb()('memberships').insert(GROUP_ROLES.map((role) => ({ group_id: g.id, user_id: w.byRole[role].id, role })))
+  return g.slug
 }
 
 async function invitation(groupId: number, email: string) {

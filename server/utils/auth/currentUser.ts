@@ -5,6 +5,7 @@ import { fail } from '../http/apiHandler'
 import { sessionFacts, endSession, SESSION_ENDED, type SessionFacts } from './sessions'
 import type { GroupRole, SiteRole } from '../../../shared/types/roles'
 import { roleAtLeast } from '../../../shared/types/roles'
+import { liveTheories } from '../db/live'
 
 export interface CurrentUser { id: number, email: string, displayName: string, siteRole: SiteRole }
 
@@ -96,6 +97,6 @@ export function requireRoleOn(event: H3Event, kind: 'bases' | 'theories', id: nu
   const db = useDb()
   return requireRoleWith(event, needed, (userId) => kind === 'bases'
     // The board needs only the version (its cache key); classes/coverage are large JSON.
-    ? withCaller(db('bases as x').join('theories as t', 't.id', 'x.theory_id').select('x.id', 'x.version', 't.group_id').where('x.id', id), userId, 't.group_id')
-    : withCaller(db('theories as x').select('x.*').where('x.id', id), userId, 'x.group_id'))
+    ? withCaller(liveTheories(db('bases as x').join('theories as t', 't.id', 'x.theory_id')).select('x.id', 'x.version', 't.group_id').where('x.id', id).whereNull('x.deleted_at'), userId, 't.group_id')
+    : withCaller(liveTheories(db('theories as x').select('x.*').where('x.id', id), 'x'), userId, 'x.group_id'))
 }

@@ -1,16 +1,21 @@
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
+import { liveTheories } from './live'
+import { annotationsOfTheory } from './annotations'
+import { tagsOfOperators } from './tags'
 
-export async function basisOr404(id: number) {
-  const row = await useDb()('bases as b').join('theories as t', 't.id', 'b.theory_id')
-    .where('b.id', id).first('b.*', 't.group_id', 't.name as theory_name', 't.definition as theory_definition')
+/** A basis whose theory and group are not deleted (nor the basis itself, unless `deleted`: for undo). */
+export async function basisOr404(id: number, opts: { deleted?: boolean } = {}) {
+  const q = liveTheories(useDb()('bases as b').join('theories as t', 't.id', 'b.theory_id')).where('b.id', id)
+  if (!opts.deleted) q.whereNull('b.deleted_at')
+  const row = await q.first('b.*', 't.group_id', 't.name as theory_name', 't.definition as theory_definition')
   if (!row) fail(404, `No basis with id ${id}`)
   return row
 }
 
 export async function operatorOr404(id: number) {
-  const row = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id').join('theories as t', 't.id', 'b.theory_id')
-    .where('o.id', id).first('o.*', 't.group_id', 'b.theory_id')
+  const row = await liveTheories(useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id').join('theories as t', 't.id', 'b.theory_id'))
+    .where('o.id', id).whereNull('b.deleted_at').first('o.*', 't.group_id', 'b.theory_id')
   if (!row) fail(404, `No operator with id ${id}`)
   return row
 }
@@ -27,9 +32,8 @@ export async function boardData(basisId: number) {
         'relations', structure->'relations', 'publishedRewrite', structure->'publishedRewrite', 'gaugeEomNote', structure->'gaugeEomNote',
         'source', structure->'source', 'antiHermitian', structure->'antiHermitian') as structure`))
   const ids = operators.map((o) => o.id)
-  const tags = ids.length ? await db('tags').whereIn('operator_id', ids).select('id', 'operator_id as operatorId', 'kind', 'label') : []
-  const notes = await db('annotations as a').leftJoin('users as u', 'u.id', 'a.author_id').where('a.theory_id', basis.theory_id)
-    .orderBy('a.created_at').select('a.id', 'a.operator_id as operatorId', 'a.body', 'a.created_at as createdAt', 'a.updated_at as updatedAt', 'a.author_id as authorId', 'u.display_name as authorName')
+  const tags = ids.length ? await tagsOfOperators(ids) : []
+  const notes = await annotationsOfTheory(basis.theory_id)
   const thresholdTags = await db('threshold_tags').where({ theory_id: basis.theory_id }).select('id', 'term', 'field', 'text', 'details')
   return {
     basis: {
@@ -47,8 +51,9 @@ export async function boardData(basisId: number) {
   }
 }
 
+/** The newest basis of a theory that is not deleted (what a share link shows). */
 export function latestBasisOf(theoryId: number) {
-  return useDb()('bases').where({ theory_id: theoryId }).orderBy('id', 'desc').first('id')
+  return useDb()('bases').where({ theory_id: theoryId }).whereNull('deleted_at').orderBy('id', 'desc').first('id')
 }
 
 /** The frozen theory file a basis was computed from (the theory may have been edited since). */

@@ -2,10 +2,13 @@ import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
 import type { GroupRole } from '../../../shared/types/roles'
 
-export interface GroupRow { id: number, slug: string, name: string, description: string, created_at: Date }
+export interface GroupRow { id: number, slug: string, name: string, description: string, created_at: Date, deleted_at?: Date | null }
 
-export async function groupBySlugOr404(slug: string): Promise<GroupRow> {
-  const row = await useDb()('groups').where({ slug: String(slug).toLowerCase() }).first()
+/** A group that is not deleted; a deleted one only with `deleted` (for undo). */
+export async function groupBySlugOr404(slug: string, opts: { deleted?: boolean } = {}): Promise<GroupRow> {
+  const q = useDb()('groups').where({ slug: String(slug).toLowerCase() })
+  if (!opts.deleted) q.whereNull('deleted_at')
+  const row = await q.first()
   if (!row) fail(404, `No group with short name "${slug}"`)
   return row
 }
@@ -14,14 +17,15 @@ export function groupsOfUser(userId: number) {
   return useDb()('groups as g')
     .join('memberships as m', 'm.group_id', 'g.id')
     .where('m.user_id', userId)
+    .whereNull('g.deleted_at')
     .orderBy('g.name')
     .select('g.id', 'g.slug', 'g.name', 'g.description', 'm.role')
 }
 
 export async function createGroupWithOwner(input: { slug: string, name: string, description?: string }, ownerId: number): Promise<GroupRow> {
   return useDb().transaction(async (trx) => {
-    const clash = await trx('groups').where({ slug: input.slug }).first('id')
-    if (clash) fail(409, `The short name "${input.slug}" is taken`)
+    const clash = await trx('groups').where({ slug: input.slug }).first('id', 'deleted_at')
+    if (clash) fail(409, `The short name "${input.slug}" is taken${clash.deleted_at ? ' by a deleted group (its owners can still restore it)' : ''}; choose another`)
     const [group] = await trx('groups').insert({ slug: input.slug, name: input.name, description: input.description ?? '' }).returning('*')
     await trx('memberships').insert({ group_id: group.id, user_id: ownerId, role: 'owner' })
     return group
@@ -68,12 +72,12 @@ export async function changeMembership(groupId: number, callerId: number, target
  */
 export function groupPageQuery(slug: string) {
   const db = useDb()
-  return db('groups as g').where('g.slug', String(slug).toLowerCase()).select(
+  return db('groups as g').where('g.slug', String(slug).toLowerCase()).whereNull('g.deleted_at').select(
     'g.id', 'g.slug', 'g.name', 'g.description',
     db.raw(`(select coalesce(json_agg(json_build_object('id', mu.id, 'email', mu.email, 'displayName', mu.display_name, 'role', mm.role) order by mu.display_name), '[]'::json)
       from memberships mm join users mu on mu.id = mm.user_id where mm.group_id = g.id) as members`),
     db.raw(`(select coalesce(json_agg(json_build_object('id', t.id, 'name', t.name, 'version', t.version, 'parentId', t.parent_id,
         'updatedAt', to_char(t.updated_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) order by t.name), '[]'::json)
-      from theories t where t.group_id = g.id) as theories`),
+      from theories t where t.group_id = g.id and t.deleted_at is null) as theories`),
   )
 }

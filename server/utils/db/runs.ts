@@ -1,12 +1,13 @@
 import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
+import { liveTheories } from './live'
 import { MAX_HEAVY_ORDER, MAX_RUN_DIMENSION } from '../../../shared/schemas/runRequests'
 import { sendRunJob } from '../jobs/queue'
 import { settleRuns } from '../jobs/orphans'
 import { massRatioDimension, massRatioOrder } from '../../engine/rules/defaultWeights'
 
 export async function runOr404(id: number) {
-  const row = await useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id').where('r.id', id).first('r.*', 't.group_id')
+  const row = await liveTheories(useDb()('runs as r').join('theories as t', 't.id', 'r.theory_id')).where('r.id', id).first('r.*', 't.group_id')
   if (!row) fail(404, `No run with id ${id}`)
   return row
 }
@@ -39,7 +40,7 @@ export async function runPriorities(theoryId: number, p: { derivativesOn?: strin
   if (!p) return undefined
   const { keepFromBasis, ...rest } = p
   if (!keepFromBasis) return rest
-  const basis = await useDb()('bases').where({ id: keepFromBasis, theory_id: theoryId }).first('id')
+  const basis = await useDb()('bases').where({ id: keepFromBasis, theory_id: theoryId }).whereNull('deleted_at').first('id')
   if (!basis) fail(404, `This theory has no basis ${keepFromBasis} to keep operators from; choose one of its own bases`)
   const rows = await useDb()('operators').where({ basis_id: keepFromBasis, column: 'kept' }).orderBy('position').select('class_key', 'text')
   const keep: Record<string, string[]> = {}

@@ -3,16 +3,19 @@ import { fail } from '../http/apiHandler'
 
 export interface TheoryRow {
   id: number, group_id: number, name: string, definition: unknown, version: number,
-  parent_id: number | null, threshold: unknown, created_by: number | null, created_at: Date, updated_at: Date
+  parent_id: number | null, threshold: unknown, created_by: number | null, created_at: Date, updated_at: Date, deleted_at?: Date | null
 }
 
 export function theoriesOfGroup(groupId: number) {
-  return useDb()('theories').where({ group_id: groupId }).orderBy('name')
+  return useDb()('theories').where({ group_id: groupId }).whereNull('deleted_at').orderBy('name')
     .select('id', 'name', 'version', 'parent_id as parentId', 'updated_at as updatedAt')
 }
 
-export async function theoryOr404(id: number): Promise<TheoryRow> {
-  const row = await useDb()('theories').where({ id }).first()
+/** A theory of a group that is not deleted; the theory itself may be deleted only with `deleted` (for undo). */
+export async function theoryOr404(id: number, opts: { deleted?: boolean } = {}): Promise<TheoryRow> {
+  const q = useDb()('theories as t').join('groups as g', 'g.id', 't.group_id').whereNull('g.deleted_at').where('t.id', id)
+  if (!opts.deleted) q.whereNull('t.deleted_at')
+  const row = await q.first('t.*')
   if (!row) fail(404, `No theory with id ${id}`)
   return row
 }

@@ -15,7 +15,7 @@ export async function createChildTheory(parent: TheoryRow, step: IntegrateOutRes
     scale: step.thresholdScale.value, unit: step.thresholdScale.unit, valueMeV: step.thresholdScale.valueMeV, removedFields,
   }
   return useDb().transaction(async (trx) => {
-    const clash = await trx('theories').where({ group_id: parent.group_id, name: step.child.name }).first('id')
+    const clash = await trx('theories').where({ group_id: parent.group_id, name: step.child.name }).whereNull('deleted_at').first('id')
     if (clash) fail(409, `The group already has a theory named "${step.child.name}" (theory ${clash.id}); rename or delete it first`)
     const [child] = await trx('theories').insert({
       group_id: parent.group_id, name: step.child.name, definition: JSON.stringify(step.child),
@@ -36,7 +36,7 @@ export interface TowerNode {
 
 /** The whole tower through a theory: up to its root (same group), then every descendant, depth-first. */
 export async function towerOf(theory: TheoryRow): Promise<TowerNode[]> {
-  const all = await useDb()('theories').where({ group_id: theory.group_id }).orderBy('id').select('id', 'name', 'parent_id', 'threshold', 'definition')
+  const all = await useDb()('theories').where({ group_id: theory.group_id }).whereNull('deleted_at').orderBy('id').select('id', 'name', 'parent_id', 'threshold', 'definition')
   const byId = new Map(all.map((t) => [t.id as number, t]))
   let root = byId.get(theory.id)!
   const seen = new Set<number>([root.id])

@@ -2,12 +2,13 @@ import { defineApiHandler } from '../../../utils/http/apiHandler'
 import { intParam } from '../../../utils/http/readJson'
 import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
-import { useDb } from '../../../utils/db/connection'
+import { markDeleted } from '../../../utils/db/softDelete'
 
-// Only owners delete a theory (with its bases, notes and share links).
+// Only owners delete a theory; its bases, notes and share links go out of sight with it, and
+// undo brings all of them back.
 export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
-  await requireGroupRole(event, theory.group_id, 'owner')
-  await useDb()('theories').where({ id: theory.id }).delete()
-  return { deleted: theory.id }
+  const { user } = await requireGroupRole(event, theory.group_id, 'owner')
+  await markDeleted('theories', theory.id, user.id)
+  return { deleted: theory.id, undo: `/api/theories/${theory.id}/restore` }
 })

@@ -7,6 +7,7 @@ import { integrateOut } from '../../../engine/scales/integrateOut'
 import { IntegrateOutSchema } from '../../../../shared/schemas/scaleRequests'
 import { TheorySchema, formatTheoryIssues, type Theory } from '../../../../shared/schemas/theory'
 import { EngineInputError } from '../../../engine/errors'
+import { once } from '../../../utils/http/requestKeys'
 
 // Editors integrate heavy fields out at a threshold scale: the child theory joins the group,
 // linked to its parent, with the threshold tags of the gauge kinetic terms the fields shift.
@@ -17,7 +18,9 @@ export default defineApiHandler(async (event) => {
   const step = integrateOut(TheorySchema.parse(parent.definition) as Theory, body.fields, body.scale)
   const check = TheorySchema.safeParse(step.child)
   if (!check.success) throw new EngineInputError('integrateOut', `The theory left below the threshold would not be valid:\n${formatTheoryIssues(step.child, check.error.issues)}`)
-  const { child, tags } = await createChildTheory(parent, step, body.fields, user.id)
-  created(event)
-  return { theory: publicTheory(child), thresholdTags: tags, generatedClasses: step.generatedClasses, thresholdScale: step.thresholdScale }
+  return once(event, user.id, body, async () => {
+    const { child, tags } = await createChildTheory(parent, step, body.fields, user.id)
+    created(event)
+    return { theory: publicTheory(child), thresholdTags: tags, generatedClasses: step.generatedClasses, thresholdScale: step.thresholdScale }
+  })
 })

@@ -6,18 +6,21 @@ import { publicRun, runPriorities, runReach } from '../../../../utils/db/runs'
 import { useDb } from '../../../../utils/db/connection'
 import { useQueue, RUN_QUEUE } from '../../../../utils/jobs/queue'
 import { RunCreateSchema } from '../../../../../shared/schemas/runRequests'
+import { once } from '../../../../utils/http/requestKeys'
 
-// Editors start a background run; the theory file is frozen into the run's parameters.
+// Editors start a background run (once per request key); the theory file is frozen into the run's parameters.
 export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
   const { user } = await requireGroupRole(event, theory.group_id, 'editor')
   const body = await readJson(event, RunCreateSchema)
   const priorities = await runPriorities(theory.id, body.priorities)
   const params = { ...runReach(theory.definition, body), nf: body.nf, priorities, theory: theory.definition, theoryVersion: theory.version }
-  const [run] = await useDb()('runs').insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id }).returning('*')
-  const boss = await useQueue()
-  const jobId = await boss.send(RUN_QUEUE, { runId: run.id })
-  await useDb()('runs').where({ id: run.id }).update({ job_id: jobId })
-  created(event)
-  return { run: publicRun(run) }
+  return once(event, user.id, body, async () => {
+    const [run] = await useDb()('runs').insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id }).returning('*')
+    const boss = await useQueue()
+    const jobId = await boss.send(RUN_QUEUE, { runId: run.id })
+    await useDb()('runs').where({ id: run.id }).update({ job_id: jobId })
+    created(event)
+    return { run: publicRun(run) }
+  })
 })
