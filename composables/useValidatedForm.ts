@@ -3,13 +3,15 @@ import { inputMessage } from '#shared/schemas/describeZodError'
 
 /**
  * Form state validated by the same zod schema as the server route. Field errors come from
- * the schema on the client, and from the server's JSON `message` when the request fails.
+ * the schema on the client, and from the server's JSON `message` when the request fails. The
+ * submit button is disabled while a request runs (`busy`); each carries the form's request key.
  */
 export function useValidatedForm<T extends Record<string, unknown>>(schema: ZodType, initial: T) {
   const values = reactive({ ...initial }) as T
   const fieldErrors = ref<Record<string, string>>({})
   const formError = ref('')
-  const busy = ref(false)
+  const once = useSubmitOnce()
+  const busy = once.pending
 
   function validate(): boolean {
     const result = schema.safeParse(values)
@@ -22,18 +24,16 @@ export function useValidatedForm<T extends Record<string, unknown>>(schema: ZodT
     return false
   }
 
-  async function submit(action: (data: T) => Promise<unknown>) {
+  /** Validate, then run `action` once at a time with the form's request key (useSubmitOnce). */
+  async function submit(action: (data: T, headers: { 'idempotency-key': string }) => Promise<unknown>) {
+    if (busy.value) return false
     formError.value = ''
     if (!validate()) return false
-    busy.value = true
     try {
-      await action(values)
-      return true
+      return (await once.submit((headers) => action(values, headers).then(() => true))) ?? false
     } catch (error) {
       formError.value = apiMessage(error)
       return false
-    } finally {
-      busy.value = false
     }
   }
   return { values, fieldErrors, formError, busy, submit }

@@ -20,9 +20,12 @@ export interface BoardClass {
   realParameters?: number, cpEven?: number | null, cpOdd?: number | null, pEven?: number | null, pOdd?: number | null, parityReason?: string | null
 }
 
-export interface Rewrite { vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
-export interface BoardTag { id: number, operatorId: number, kind: string, label: string }
-export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null }
+/** A rewrite onto the kept operators; `exact: false` when the coefficients are beyond what the fingerprints give exactly. */
+export interface Rewrite { exact?: boolean, message?: string, vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
+/** Tags and notes carry their author: an account, or a name kept as text from an imported file (`authorImported`). */
+export interface BoardTag { id: number, operatorId: number, kind: string, label: string, authorId?: number | null, authorName?: string | null, authorImported?: boolean }
+export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null, authorImported?: boolean }
+type KeyHeaders = Record<string, string>
 
 export const useBasesStore = defineStore('bases', () => {
   const basis = ref<any>(null)
@@ -101,17 +104,24 @@ export const useBasesStore = defineStore('bases', () => {
   async function loadRewrite(op: BoardOperator) {
     rewrites.value[op.id] = (await $fetch(`/api/operators/${op.id}/rewrite`)).rewrite as Rewrite | null
   }
-  async function addTag(opId: number, kind: string, label?: string) {
-    const { tag } = await $fetch<{ tag: BoardTag }>(`/api/operators/${opId}/tags`, { method: 'POST', body: label ? { kind, label } : { kind } })
-    tags.value.push(tag)
+  async function addTag(opId: number, kind: string, label: string | undefined, headers: KeyHeaders) {
+    const { tag } = await $fetch<{ tag: BoardTag }>(`/api/operators/${opId}/tags`, { method: 'POST', headers, body: label ? { kind, label } : { kind } })
+    if (!tags.value.some((t) => t.id === tag.id)) tags.value.push(tag)
   }
-  async function removeTag(id: number) {
-    await $fetch(`/api/tags/${id}`, { method: 'DELETE' })
-    tags.value = tags.value.filter((t) => t.id !== id)
+  async function addNote(opId: number, body: string, headers: KeyHeaders) {
+    const { annotation } = await $fetch<{ annotation: BoardNote }>(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', headers, body: { operatorId: opId, body } })
+    if (!notes.value.some((n) => n.id === annotation.id)) notes.value.push(annotation)
   }
-  async function addNote(opId: number, body: string) {
-    const { annotation } = await $fetch<{ annotation: BoardNote }>(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', body: { operatorId: opId, body } })
-    notes.value.push(annotation)
+  /** Delete a tag or a note; the undo toast offers its restore route, after which the board reloads. */
+  async function remove(kind: 'tag' | 'note', id: number) {
+    const res = await $fetch<{ undo: string }>(kind === 'tag' ? `/api/tags/${id}` : `/api/annotations/${id}`, { method: 'DELETE' })
+    if (kind === 'tag') tags.value = tags.value.filter((t) => t.id !== id)
+    else notes.value = notes.value.filter((n) => n.id !== id)
+    const basisId = basis.value.id
+    useUndoStore().offer(kind === 'tag' ? 'Tag removed.' : 'Note deleted.', async () => {
+      await $fetch(res.undo, { method: 'POST' })
+      if (basis.value?.id === basisId) await load(basisId)
+    })
   }
   async function editNote(id: number, body: string) {
     await $fetch(`/api/annotations/${id}`, { method: 'PATCH', body: { body } })
@@ -129,5 +139,5 @@ export const useBasesStore = defineStore('bases', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, removeTag, addNote, editNote, matches }
+  return { impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, addNote, remove, editNote, matches }
 })

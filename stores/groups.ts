@@ -6,8 +6,8 @@ export const useGroupsStore = defineStore('groups', () => {
   async function loadMine() {
     mine.value = (await useRequestFetch()('/api/groups')).groups as GroupSummary[]
   }
-  async function create(body: { slug: string, name: string, description?: string }) {
-    const { group } = await $fetch('/api/groups', { method: 'POST', body })
+  async function create(body: { slug: string, name: string, description?: string }, headers?: Record<string, string>) {
+    const { group } = await $fetch('/api/groups', { method: 'POST', body, headers })
     mine.value = [...mine.value, group as GroupSummary].sort((a, b) => a.name.localeCompare(b.name))
     return group as GroupSummary
   }

@@ -14,9 +14,9 @@ export const useRunsStore = defineStore('runs', () => {
     theoryId.value = id
     runs.value = (await useRequestFetch()(`/api/theories/${id}/runs`)).runs as Run[]
   }
-  async function start(body: { kind: 'count' | 'basis', maxDim?: number, maxOrder?: number, nf?: number, priorities?: Record<string, unknown> }) {
-    const { run } = await $fetch(`/api/theories/${theoryId.value}/runs`, { method: 'POST', body })
-    runs.value = [run as Run, ...runs.value]
+  async function start(body: { kind: 'count' | 'basis', maxDim?: number, maxOrder?: number, nf?: number, priorities?: Record<string, unknown> }, headers?: Record<string, string>) {
+    const { run } = await $fetch(`/api/theories/${theoryId.value}/runs`, { method: 'POST', body, headers })
+    if (!runs.value.some((r) => r.id === (run as Run).id)) runs.value = [run as Run, ...runs.value]
     return run as Run
   }
   async function refreshActive() {

@@ -13,7 +13,7 @@ export const useTheoriesStore = defineStore('theories', () => {
   const current = ref<SavedTheory | null>(null)
   const role = ref<GroupRole | null>(null)
   const presets = ref<PresetEntry[]>([])
-  const saving = ref(false)
+  const { pending: saving, submit: once } = useSubmitOnce()
   const saveError = ref('')
   const conflict = ref('')
   const savedAt = ref<number | null>(null)
@@ -41,12 +41,15 @@ export const useTheoriesStore = defineStore('theories', () => {
     return presets.value
   }
 
-  async function attempt(action: () => Promise<SavedTheory>) {
-    saving.value = true
+  /** Create or save, once at a time, with a request key (a double click saves one version). */
+  async function attempt(action: (headers: Record<string, string>) => Promise<SavedTheory>) {
+    if (saving.value) return null
     saveError.value = ''
     conflict.value = ''
     try {
-      current.value = await action()
+      const saved = await once(action)
+      if (!saved) return null
+      current.value = saved
       savedAt.value = Date.now()
       return current.value
     } catch (error) {
@@ -54,21 +57,19 @@ export const useTheoriesStore = defineStore('theories', () => {
       if (status === 409 && current.value) conflict.value = apiMessage(error)
       else saveError.value = apiMessage(error)
       return null
-    } finally {
-      saving.value = false
     }
   }
 
   /** Declare a new theory in a group (POST /api/groups/:slug/theories). */
   function create(slug: string, definition: Theory) {
-    return attempt(async () => (await $fetch<{ theory: SavedTheory }>(`/api/groups/${slug}/theories`, { method: 'POST', body: { definition } })).theory)
+    return attempt(async (headers) => (await $fetch<{ theory: SavedTheory }>(`/api/groups/${slug}/theories`, { method: 'POST', headers, body: { definition } })).theory)
   }
 
   /** Save the open theory as its next version (PATCH with the version it was loaded at). */
   function save(definition: Theory) {
     const open = current.value
     if (!open) throw new Error('no theory is open')
-    return attempt(async () => (await $fetch<{ theory: SavedTheory }>(`/api/theories/${open.id}`, { method: 'PATCH', body: { definition, version: open.version } })).theory)
+    return attempt(async (headers) => (await $fetch<{ theory: SavedTheory }>(`/api/theories/${open.id}`, { method: 'PATCH', headers, body: { definition, version: open.version } })).theory)
   }
 
   return { current, role, presets, saving, saveError, conflict, savedAt, reset, load, loadPresets, create, save }
