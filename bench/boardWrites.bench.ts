@@ -41,7 +41,7 @@ async function editor(base: string, cookie: string, ops: Op[], db: Knex, until: 
     const column = reorder ? op.column : op.column === 'kept' ? 'set_aside' : 'kept'
     const t0 = performance.now()
     const res = await fetch(`${base}/api/operators/${op.id}/move`, {
-      method: 'POST', headers: { 'content-type': 'application/json', cookie },
+      method: 'POST', headers: { 'content-type': 'application/json', origin: base, cookie },
       body: JSON.stringify({ column, position: Math.floor(Math.random() * 40), version: op.version }),
     })
     const body = await res.json() as { operator?: { version: number, column: Op['column'] } }

@@ -12,6 +12,8 @@ beforeAll(async () => { browser = await launchBrowser() })
 afterAll(async () => { await browser?.close() })
 
 const byTest = (page: Page, id: string) => page.locator(`[data-test="${id}"]`)
+// Polls wait for the server's answer (held 1.5 s on purpose below) on a shared machine; vitest's default is 1 s.
+const WAIT = { timeout: 15_000 }
 
 async function signUpWithGroup(page: Page) {
   await page.goto('/signup')
@@ -54,7 +56,7 @@ describe('submitting once and undoing deletions', () => {
     await slowDown(page, /\/api\/theories\/\d+\/runs$/, 1500)
     const start = page.getByRole('button', { name: 'Start run' })
     await start.click()
-    await expect.poll(() => start.isDisabled()).toBe(true)
+    await expect.poll(() => start.isDisabled(), WAIT).toBe(true)
     await start.evaluate((b) => (b as HTMLButtonElement).form!.requestSubmit())
     await page.getByRole('link', { name: 'Open basis board' }).waitFor({ timeout: 90_000 })
     expect(await testDb()('runs').where({ theory_id: theory.id }).count('* as n').first()).toEqual({ n: '1' })
@@ -69,10 +71,10 @@ describe('submitting once and undoing deletions', () => {
     await page.getByLabel('Add a note').fill('Only once, please.')
     const save = page.getByRole('button', { name: 'Save note' })
     await save.click()
-    await expect.poll(() => save.isDisabled()).toBe(true)
+    await expect.poll(() => save.isDisabled(), WAIT).toBe(true)
     await save.evaluate((b) => (b as HTMLButtonElement).form!.requestSubmit())
-    await expect.poll(() => page.getByText('Only once, please.').count()).toBe(1)
-    await expect.poll(() => save.isDisabled()).toBe(false)
+    await expect.poll(() => page.getByText('Only once, please.').count(), WAIT).toBe(1)
+    await expect.poll(() => save.isDisabled(), WAIT).toBe(false)
     expect(await testDb()('annotations').where({ theory_id: theory.id, body: 'Only once, please.' }).count('* as n').first()).toEqual({ n: '1' })
     await page.unrouteAll()
 
@@ -81,11 +83,11 @@ describe('submitting once and undoing deletions', () => {
     await page.getByText('Delete this note?').waitFor()
     await screenshot(page, 'undo-note-question')
     await page.getByRole('button', { name: 'Delete', exact: true }).click()
-    await expect.poll(() => page.getByText('Only once, please.').count()).toBe(0)
-    await expect.poll(() => byTest(page, 'undo-toast').innerText()).toContain('Note deleted.')
+    await expect.poll(() => page.getByText('Only once, please.').count(), WAIT).toBe(0)
+    await expect.poll(() => byTest(page, 'undo-toast').innerText(), WAIT).toContain('Note deleted.')
     await screenshot(page, 'undo-note-toast')
     await byTest(page, 'undo-toast').getByRole('button', { name: 'Undo' }).click()
-    await expect.poll(() => page.getByText('Only once, please.').count()).toBe(1)
+    await expect.poll(() => page.getByText('Only once, please.').count(), WAIT).toBe(1)
 
     // Delete the basis from the theory page, undo; then the theory, undo from its group's page.
     const basisId = Number(/bases\/(\d+)/.exec(page.url())![1])
@@ -94,9 +96,9 @@ describe('submitting once and undoing deletions', () => {
     const row = page.locator(`[data-basis="${basisId}"]`)
     await row.getByRole('button', { name: 'Delete' }).click()
     await row.getByRole('button', { name: 'Delete' }).click()
-    await expect.poll(() => row.count()).toBe(0)
+    await expect.poll(() => row.count(), WAIT).toBe(0)
     await byTest(page, 'undo-toast').getByRole('button', { name: 'Undo' }).click()
-    await expect.poll(() => row.count()).toBe(1)
+    await expect.poll(() => row.count(), WAIT).toBe(1)
     await byTest(page, 'theory-delete').getByRole('button', { name: 'Delete theory' }).click()
     await byTest(page, 'theory-delete').getByRole('button', { name: 'Delete', exact: true }).click()
     await page.waitForURL(`**/groups/${slug}`)
@@ -104,7 +106,7 @@ describe('submitting once and undoing deletions', () => {
     expect(await page.getByRole('link', { name: 'Undo theory' }).count()).toBe(0)
     await byTest(page, 'undo-toast').getByRole('button', { name: 'Undo' }).click()
     await page.waitForURL(`**/theories/${theory.id}`)
-    await expect.poll(() => page.locator('h1').innerText()).toBe('Undo theory')
+    await expect.poll(() => page.locator('h1').innerText(), WAIT).toBe('Undo theory')
 
     // Delete the group: it leaves the list of groups; undo brings it back.
     await page.goto(`/groups/${slug}`)
@@ -112,11 +114,11 @@ describe('submitting once and undoing deletions', () => {
     await byTest(page, 'group-delete').getByRole('button', { name: 'Delete group' }).click()
     await byTest(page, 'group-delete').getByRole('button', { name: 'Delete', exact: true }).click()
     await page.waitForURL(/\/groups$/)
-    await expect.poll(() => page.getByRole('link', { name: 'Undo group' }).count()).toBe(0)
+    await expect.poll(() => page.getByRole('link', { name: 'Undo group' }).count(), WAIT).toBe(0)
     await screenshot(page, 'undo-group-toast')
     await byTest(page, 'undo-toast').getByRole('button', { name: 'Undo' }).click()
     await page.waitForURL(`**/groups/${slug}`)
-    await expect.poll(() => page.locator('h1').innerText()).toBe('Undo group')
+    await expect.poll(() => page.locator('h1').innerText(), WAIT).toBe('Undo group')
     expect(errors).toEqual([])
   })
 })

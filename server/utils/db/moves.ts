@@ -41,7 +41,7 @@ function refuseRedundantKeep(ops: BoardOperatorRow[], op: OperatorRef, required:
   if (printed ? keptRank(withIt) > keptRank(others) : others.length < required) return
   const named = others.slice(0, 3).map((o) => o.text || `#${o.id}`).join(', ') + (others.length > 3 ? ', …' : '')
   const why = !printed ? `the class needs ${required} kept operator${required === 1 ? '' : 's'} and has ${others.length} already`
-    : others.length ? `it is a combination of the kept ${named}` : 'it vanishes modulo equations of motion and integration by parts'
+    : others.length ? `it is a combination of the kept operator${others.length === 1 ? '' : 's'} ${named}` : 'it vanishes modulo equations of motion and integration by parts'
   fail(409, `Keeping this operator would make the kept set of class ${op.class_key} redundant: ${why}. Set one of them aside first.`)
 }
 
