@@ -2,9 +2,9 @@
  * Board writes under many editors: 50 and 200 concurrent clients move operators between kept
  * and set aside and reorder the columns of one order (SMEFT dimension 6, one flavor) of the
  * built server on a real database, for a fixed time each. Reported: the latency quantiles, the
- * answers by kind (200, 409 stale version or redundant keep, 5xx must be 0) and, read from the
- * tables afterwards, the classes whose kept set is redundant or whose stored coverage is wrong
- * (both must be 0). Each client keeps the versions it was answered, as a browser tab does, and
+ * answers by kind (200; 409 for a stale version or a redundant keep, and apart those refused
+ * after waiting 10 s for the order's lock; 5xx must be 0) and, read from the tables afterwards,
+ * the classes whose kept set is redundant or whose stored coverage is wrong (both must be 0). Each client keeps the versions it was answered, as a browser tab does, and
  * reads an operator's version again after a 409 (as the board reloads).
  */
 import type { Knex } from 'knex'
@@ -34,7 +34,9 @@ async function seed(base: string, db: Knex) {
 }
 
 /** One editor's loop until `until`: a random operator of the order, moved or reordered at random. */
-async function editor(base: string, cookie: string, ops: Op[], db: Knex, until: number, out: { ms: number, status: number }[]) {
+interface Answer { ms: number, status: number, lockWait: boolean }
+
+async function editor(base: string, cookie: string, ops: Op[], db: Knex, until: number, out: Answer[]) {
   while (Date.now() < until) {
     const op = ops[Math.floor(Math.random() * ops.length)]!
     const reorder = Math.random() < 0.5
@@ -44,8 +46,8 @@ async function editor(base: string, cookie: string, ops: Op[], db: Knex, until: 
       method: 'POST', headers: { 'content-type': 'application/json', origin: base, cookie },
       body: JSON.stringify({ column, position: Math.floor(Math.random() * 40), version: op.version }),
     })
-    const body = await res.json() as { operator?: { version: number, column: Op['column'] } }
-    out.push({ ms: performance.now() - t0, status: res.status })
+    const body = await res.json() as { operator?: { version: number, column: Op['column'] }, message?: string }
+    out.push({ ms: performance.now() - t0, status: res.status, lockWait: res.status === 409 && /waited too long/.test(body.message ?? '') })
     if (res.status === 200 && body.operator) Object.assign(op, { version: body.operator.version, column: body.operator.column })
     else Object.assign(op, await db('operators').where({ id: op.id }).first('version', 'column'))
   }
@@ -53,7 +55,7 @@ async function editor(base: string, cookie: string, ops: Op[], db: Knex, until: 
 
 async function load(base: string, db: Knex, cookies: string[], basisId: number, clients: number) {
   const rows: Op[] = await db('operators').where({ basis_id: basisId, order: ORDER }).select('id', 'column', 'version')
-  const answers: { ms: number, status: number }[] = []
+  const answers: Answer[] = []
   const until = Date.now() + SECONDS * 1000
   await Promise.all(Array.from({ length: clients }, (_, i) => editor(base, cookies[i % cookies.length]!, rows, db, until, answers)))
   const ms = answers.map((a) => a.ms).sort((a, b) => a - b)
@@ -62,6 +64,7 @@ async function load(base: string, db: Knex, cookies: string[], basisId: number, 
   return {
     p50_ms: round(quantile(ms, 0.5)), p95_ms: round(quantile(ms, 0.95)), p99_ms: round(quantile(ms, 0.99)),
     requests: answers.length, ok: answers.filter((a) => a.status === 200).length, conflicts_409: answers.filter((a) => a.status === 409).length,
+    lock_wait_409: answers.filter((a) => a.lockWait).length,
     server_errors_5xx: answers.filter((a) => a.status >= 500).length, other: answers.filter((a) => ![200, 409].includes(a.status) && a.status < 500).length,
     redundant_classes: health.redundant.length, stale_coverage_classes: health.staleCoverage.length, operators_in_order: rows.length,
   }
