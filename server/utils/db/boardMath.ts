@@ -30,7 +30,8 @@ export async function rewriteOntoKept(basisId: number, classKey: string, operato
 }
 
 /** A class as bases.classes stores it (the parts the board's math reads). */
-export interface StoredClass { key: string, rank: number, order?: number, dimension?: number | null }
+/** A class as stored with its basis: every class carries its order (migration 021 added it to old ones). */
+export interface StoredClass { key: string, rank: number, order: number, dimension?: number | null }
 
 export type CoverageMap = Record<string, { rank: number, required: number, complete: boolean }>
 
@@ -44,7 +45,7 @@ export async function coverageOfClasses(basisId: number, classes: StoredClass[])
 
 /** The distinct orders of the given classes (stored with their order, or a mass dimension). */
 export function ordersOfClasses(classes: StoredClass[]): number[] {
-  return [...new Set(classes.map((c) => c.order ?? (c.dimension as number) - 4))]
+  return [...new Set(classes.map((c) => c.order))]
 }
 
 /** Coverage of the given classes from the operators as stored now (one read for all). */

@@ -28,7 +28,7 @@ export async function setAsideOrders(basisId: number, orders: number[], userId: 
       })
       await trx.raw(`update operators o set "column" = 'set_aside', position = x.pos, version = o.version + 1, moved_by = ?, moved_at = now()
         from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id`, [userId, kept.map((k) => k.id), positions])
-      await recomputeCoverage(trx, basisId, classes.filter((c) => orders.includes(c.order ?? (c.dimension as number) - 4)))
+      await recomputeCoverage(trx, basisId, classes.filter((c) => orders.includes(c.order)))
     }
     const basis = await trx('bases').where({ id: basisId }).first('version')
     return { count: kept.length, basisVersion: basis.version as number }

@@ -3,7 +3,7 @@ import { defineApiHandler } from '../../../utils/http/apiHandler'
 import { intParam } from '../../../utils/http/readJson'
 import { requireGroupRole, requireRoleOn } from '../../../utils/auth/currentUser'
 import { basisOr404, boardData } from '../../../utils/db/bases'
-import { coverageOfClasses } from '../../../utils/db/boardMath'
+import { coverageOfClasses, type StoredClass } from '../../../utils/db/boardMath'
 import { cachedBoard, storeBoard } from '../../../utils/db/boardCache'
 import { acceptsGzip } from '../../../utils/http/acceptsGzip'
 
@@ -22,7 +22,7 @@ export default defineApiHandler(async (event) => {
   let bytes = cachedBoard(id, version, access.role)
   if (!bytes) {
     const { groupId: _g, ...data } = await boardData(id)
-    storeBoard(id, version, JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as { key: string, rank: number }[]) }))
+    storeBoard(id, version, JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as StoredClass[]) }))
     bytes = cachedBoard(id, version, access.role)!
   }
   setResponseHeader(event, 'content-type', 'application/json; charset=utf-8')

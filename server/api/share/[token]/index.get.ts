@@ -3,7 +3,7 @@ import { defineApiHandler } from '../../../utils/http/apiHandler'
 import { theoryForShareToken } from '../../../utils/db/shareLinks'
 import { theoryOr404, publicTheory } from '../../../utils/db/theories'
 import { boardData, latestBasisOf } from '../../../utils/db/bases'
-import { coverageOfClasses } from '../../../utils/db/boardMath'
+import { coverageOfClasses, type StoredClass } from '../../../utils/db/boardMath'
 
 // Read-only view through a share link: the theory and its latest basis with tags and notes.
 // There is no route that accepts a share token for writing.
@@ -13,6 +13,6 @@ export default defineApiHandler(async (event) => {
   const latest = await latestBasisOf(theoryId)
   const board = latest ? await boardData(latest.id) : null
   if (board) delete (board as { groupId?: number }).groupId
-  const coverage = board ? await coverageOfClasses(board.basis.id, board.basis.classes as { key: string, rank: number }[]) : {}
+  const coverage = board ? await coverageOfClasses(board.basis.id, board.basis.classes as StoredClass[]) : {}
   return { theory, board: board && { ...board, coverage }, role: 'share' }
 })
