@@ -130,6 +130,18 @@ describe('integrate out: towers', () => {
     expect(tower.body.nodes[1].matching).toEqual([])
   })
 
+  it('half of a Dirac pair is a 422 giving the reason and the partner; the scales read offers the partners; nothing is written', async () => {
+    const parentId = await newTheory({ ...DEMO_LIKE, name: 'Half a Dirac pair' })
+    const before = await rowCounts()
+    const half = await world.owner.client.post(`/api/theories/${parentId}/integrate-out`, { fields: ['eL'], scale: { value: 1, unit: 'TeV' } })
+    expect(half.status).toBe(422)
+    expect(messageOf(half)).toContain('eL cannot be integrated out without a partner')
+    expect(messageOf(half)).toContain('Integrate out eL, eR together.')
+    expect(await rowCounts()).toEqual(before)
+    const scales = await world.byRole.viewer.client.get(`/api/theories/${parentId}/scales`)
+    expect(scales.body.massPartners).toEqual({ eL: ['eR'], eR: ['eL'] })
+  })
+
   it('unknown fields are a 422 naming them; a repeated step is a 409; nothing is written', async () => {
     const parentId = await newTheory({ ...DEMO_LIKE, name: 'Twice removed' })
     const before = await rowCounts()

@@ -82,7 +82,9 @@ describe('scales in a real browser', () => {
     await page.goto(`/theories/${theoryId}/integrate-out`)
     await hydrated(page)
     await page.locator('input[name="field-eL"]').check()
-    await page.locator('input[name="field-eR"]').check()
+    // The form ticks the other half of the Dirac fermion along and says why.
+    await expect.poll(() => page.locator('input[name="field-eR"]').isChecked()).toBe(true)
+    expect(await page.locator('[data-test="partner-note"]').textContent()).toContain('Also chose eR')
     await page.locator('input[name="scaleName"]').fill('me')
     await page.locator('input[name="scaleValue"]').fill('0.51099895')
     await page.locator('select[name="scaleUnit"]').selectOption('MeV')

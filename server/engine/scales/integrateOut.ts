@@ -2,12 +2,14 @@
  * One step of a tower: remove heavy fields from a theory at a threshold scale and report the
  * threshold tags and the kinds of operators the heavy fields can generate.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import type { Theory, TheoryField } from '../../../shared/schemas/theory'
 import { generatedClassHints, type GeneratedClassHint } from './generatedClasses'
 import { fieldBetaContribution, thresholdShifts } from './thresholdShifts'
 import { toString as ratText } from '../exact/rational'
 import { toMeV } from './units'
+import { checkMassPartners } from './massPartners'
+import { anomalyConditions } from '../theory/anomalies'
 
 export interface ThresholdScale { name?: string, value: number, unit: string }
 /** betaShift: the field's exact contribution to the one-loop b of the group (see fieldBetaContribution). */
@@ -47,10 +49,31 @@ function childTheory(theory: Theory, removed: Set<string>, scaleText: string): T
 }
 
 /**
+ * Refuse a set that leaves an inconsistent child: a fermion without a mass partner in the set
+ * (half of a Dirac pair). A vector-like set cannot change the anomaly conditions; that is checked too.
+ * The message names the fields and offers the partners to add.
+ */
+function checkIntegrity(theory: Theory, child: Theory, names: readonly string[]): void {
+  const { problems, partners } = checkMassPartners(theory, names)
+  if (problems.length) {
+    const offer = partners.length ? ` Integrate out ${[...names, ...partners].join(', ')} together.` : ''
+    throw new EngineInputError('integrateOut', `these fields cannot be integrated out as chosen. ${problems.join(' ')}${offer}`)
+  }
+  const before = new Map(anomalyConditions(theory).map(c => [c.name, c.ok]))
+  const broken = anomalyConditions(child).filter(c => !c.ok && before.get(c.name) !== false)
+  if (broken.length) {
+    const list = broken.map(c => `${c.name} (sum ${c.sum})`).join(', ')
+    // A vector-like set carries no anomaly, so this is a bug in the partner check, never hidden.
+    throw new EngineConsistencyError('integrateOut', `removing ${names.join(', ')} leaves a theory with gauge anomalies the original does not have: ${list}`)
+  }
+}
+
+/**
  * The child theory below a threshold, with threshold tags and generated-operator hints.
  * @example integrateOut(qedWithMuon, ['mu'], { value: 105.6583755, unit: 'MeV' }).thresholdTags
  *   // [{ group: 'QED', field: 'mu', text: 'coefficient shifts when mu is integrated out', betaShift: '2/3' }]
- * Method: remove the fields; tag every gauge group under which a removed field is charged.
+ * Method: check that every removed fermion has its mass partner in the set (massPartners.ts) and
+ * that no anomaly appears below; remove the fields; tag every gauge group under which a removed field is charged.
  * Reference: S. Weinberg, Phys. Lett. B 91 (1980) 51 (effective gauge theories at thresholds).
  */
 export function integrateOut(theory: Theory, fieldNames: readonly string[], thresholdScale: ThresholdScale): IntegrateOutResult {
@@ -68,8 +91,10 @@ export function integrateOut(theory: Theory, fieldNames: readonly string[], thre
     group: s.group, field, text: `coefficient shifts when ${field} is integrated out`,
     betaShift: ratText(fieldBetaContribution(byName.get(field)!, groupOf.get(s.group)!, theory.groups)),
   })))
+  const child = childTheory(theory, names, scaleText)
+  checkIntegrity(theory, child, [...names])
   return {
-    child: childTheory(theory, names, scaleText),
+    child,
     thresholdScale: { ...thresholdScale, valueMeV },
     thresholdTags,
     generatedClasses: removed.flatMap(f => generatedClassHints(f, theory.groups)),

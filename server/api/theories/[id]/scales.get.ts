@@ -6,8 +6,11 @@ import { ladderOf } from '../../../utils/db/scaleLadders'
 import { computeLadder } from '../../../utils/scales/ladderEstimates'
 import { EngineInputError } from '../../../engine/errors'
 import { SCALE_UNITS } from '../../../engine/scales/units'
+import { partnerMap } from '../../../engine/scales/massPartners'
+import { TheorySchema } from '../../../../shared/schemas/theory'
 
-// Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet).
+// Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet),
+// and the fermions' mass partners (which fields must be integrated out together).
 export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
   const { role } = await requireGroupRole(event, theory.group_id, 'viewer')
@@ -21,5 +24,8 @@ export default defineApiHandler(async (event) => {
     if (!(e instanceof EngineInputError)) throw e
     problem = e.message
   }
-  return { theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
+  const parsed = TheorySchema.safeParse(theory.definition)
+  // For each fermion, the fields that can give it a mass: the integrate-out form ticks them along.
+  const massPartners = parsed.success ? partnerMap(parsed.data) : {}
+  return { massPartners, theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
 })
