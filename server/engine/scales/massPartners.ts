@@ -14,7 +14,7 @@ import type { Theory, TheoryField, TheoryGroup } from '../../../shared/schemas/t
 import { suReality } from '../group/irrep'
 import { type Rational, neg, parseRational, toString as ratText } from '../exact/rational'
 
-type Reality = 'real' | 'pseudoreal' | 'complex'
+export type Reality = 'real' | 'pseudoreal' | 'complex'
 
 interface WeylForm { field: TheoryField, key: string, conjugateKey: string, reality: Reality, copies: number }
 
@@ -48,12 +48,18 @@ function realityOf(f: TheoryField, groups: readonly TheoryGroup[]): Reality {
   return pseudo % 2 === 0 ? 'real' : 'pseudoreal'
 }
 
+/** A field's representation under every group (as written, or conjugated), and its reality. */
+export function representationOf(f: TheoryField, groups: readonly TheoryGroup[], conjugate = false): { key: string, conjugateKey: string, reality: Reality } {
+  return {
+    key: groups.map(g => keyOf(g, f, conjugate)).join(' '),
+    conjugateKey: groups.map(g => keyOf(g, f, !conjugate)).join(' '),
+    reality: realityOf(f, groups),
+  }
+}
+
 /** The field as a left-handed Weyl fermion: its representation key, the conjugate's, its reality. */
 function weylForm(f: TheoryField, groups: readonly TheoryGroup[]): WeylForm {
-  const right = f.lorentz === 'R'
-  const key = groups.map(g => keyOf(g, f, right)).join(' ')
-  const conjugateKey = groups.map(g => keyOf(g, f, !right)).join(' ')
-  return { field: f, key, conjugateKey, reality: realityOf(f, groups), copies: f.flavors ?? 1 }
+  return { field: f, ...representationOf(f, groups, f.lorentz === 'R'), copies: f.flavors ?? 1 }
 }
 
 export interface MassPartnerCheck {

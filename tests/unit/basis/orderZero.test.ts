@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest'
+import { parseTheory } from '../../../shared/schemas/theory'
+import { orderZero } from '../../../server/engine/basis/orderZero'
+import { PRESETS } from '../../../shared/presets/index'
+
+const preset = (id: string) => PRESETS.find(p => p.id === id)!.theory
+const summary = (t: ReturnType<typeof orderZero>) => t.classes.map(c => [c.key, c.role, c.rank, c.realParameters])
+
+describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
+  it('QED: two kinetic terms, the photon kinetic and θ terms, one complex Dirac mass (Peskin & Schroeder 1995, eq. 4.3)', () => {
+    expect(summary(orderZero(preset('qed')))).toEqual([
+      ['D eL eL*', 'kinetic', 1, 0],
+      ['D eR eR*', 'kinetic', 1, 0],
+      ['A_L^2', 'gauge kinetic', 2, 2],
+      ['eL eR*', 'mass', 1, 2],
+    ])
+  })
+
+  it('a real scalar with Z2 off: mass, cubic and quartic, one real parameter each (common practice)', () => {
+    const r = orderZero(preset('real-scalar'))
+    expect(summary(r).filter(c => c[1] !== 'kinetic')).toEqual([['phi^2', 'mass', 1, 1], ['phi^3', 'cubic', 1, 1], ['phi^4', 'quartic', 1, 1]])
+  })
+
+  it('a Z2 forbids the cubic; a charged scalar has no φ² mass, only |φ|² (common practice)', () => {
+    const z2 = parseTheory({ name: 'Z2 scalar', frame: 'relativistic', groups: [{ name: 'P', type: 'Z', n: 2, gauge: false }], fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { P: 1 } }] })
+    expect(summary(orderZero(z2)).map(c => c[0])).toEqual(['D^2 phi^2', 'phi^2', 'phi^4'])
+    expect(summary(orderZero(preset('scalar-qed'))).filter(c => c[1] === 'mass')).toEqual([['phi phi*', 'mass', 1, 1]])
+  })
+
+  it('mass terms follow the symmetries: a neutral Weyl fermion has a Majorana mass, a charged or chiral one none; a doublet pair only antisymmetrically', () => {
+    const t = parseTheory({
+      name: 'Weyl masses', frame: 'relativistic',
+      groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: true }, { name: 'X', type: 'U1', gauge: false }],
+      fields: [
+        { name: 'N', lorentz: 'R' },
+        { name: 'C', lorentz: 'L', charges: { X: '1' } },
+        { name: 'Dw', lorentz: 'L', reps: { SU2: [1] }, flavors: 2 },
+        { name: 'T', lorentz: 'L', reps: { SU2: [2] } },
+      ],
+    })
+    const masses = orderZero(t).classes.filter(c => c.role === 'mass')
+    // N N (Majorana, complex: 2 real); Dw Dw antisymmetric in 2 flavours (1 complex entry); T T (Majorana triplet).
+    expect(masses.map(c => [c.key, c.realParameters, c.flavorParameters])).toEqual([['N*^2', 2, 2], ['Dw^2', 0, 2], ['T^2', 2, 2]])
+  })
+
+  it('the Standard Model: 14 real parameters for one generation; 62 with three, i.e. 19 physical ones after field redefinitions (PDG review "Standard Model" — recalled from memory)', () => {
+    const r = orderZero(preset('smeft'))
+    expect(summary(r).map(c => c[1])).toEqual(['kinetic', 'kinetic', 'kinetic', 'kinetic', 'kinetic', 'kinetic', 'gauge kinetic', 'gauge kinetic', 'gauge kinetic', 'mass', 'quartic', 'Yukawa', 'Yukawa', 'Yukawa'])
+    expect(r.classes.find(c => c.key === 'H H*')!.realParameters).toBe(1) // μ²
+    expect(r.classes.find(c => c.key === 'H^2 H*^2')!.realParameters).toBe(1) // λ
+    expect(r.realParameters).toBe(14) // 3 g + 3 θ + μ² + λ + 3 complex Yukawas
+    expect(r.flavorParameters).toBe(62) // 3 g + 3 θ + μ² + λ + 3 × 18 Yukawa entries
+    // Physical count (massless neutrinos): the flavour group U(3)^5 (45 generators) leaves baryon number and the
+    // three lepton numbers unbroken, so 45 − 4 = 41 Yukawa parameters are unphysical (54 − 41 = 13: 9 masses, 3
+    // angles, 1 phase); θ of SU(2) is rotated away by the anomalous B + L and θ of U(1)_Y has no effect: 62 − 41 − 2 = 19.
+    expect(r.flavorParameters! - (45 - 4) - 2).toBe(19)
+  })
+
+  it('no mass term for any Standard-Model fermion: all are chiral (common practice)', () => {
+    expect(orderZero(preset('smeft')).classes.filter(c => c.role === 'mass').map(c => c.key)).toEqual(['H H*'])
+  })
+
+  it('Yukawa and quartic operators carry fingerprints (the board rewrites onto them); written terms do not', () => {
+    const r = orderZero(preset('smeft'))
+    const yukawa = r.classes.find(c => c.role === 'Yukawa')!
+    expect(yukawa.operators[0]).toHaveProperty('fingerprint')
+    expect(r.classes[0]!.operators[0]).not.toHaveProperty('fingerprint')
+  })
+
+  it('refuses the heavy frame', () => {
+    expect(() => orderZero(preset('heavy-vexonium'))).toThrow('orderZero: theory')
+  })
+})
