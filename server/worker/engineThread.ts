@@ -3,6 +3,7 @@
 import { parentPort, workerData } from 'node:worker_threads'
 import { countOperators } from '../engine/counting/countOperators'
 import { buildBasis } from '../engine/basis/buildBasis'
+import { orderZeroHeavy } from '../engine/basis/orderZero'
 import { typedFingerprints } from '../engine/board/typedOperator'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
@@ -31,11 +32,11 @@ function run(t: EngineTask): unknown {
   if (t.kind === 'fingerprint') return typedFingerprints(theory, t.classKey, t.texts, t.priorities)
   if (theory.frame === 'heavy') {
     const heavy = () => enumerateHeavyTheory({ ...theory, heavy: theory.heavy && { ...theory.heavy, maxOrder: t.maxOrder ?? theory.heavy.maxOrder } }, { onProgress, signal })
-    return t.kind === 'count' ? { heavy: true, byOrder: heavyReport(heavy(), false) } : heavy()
+    return t.kind === 'count' ? { heavy: true, byOrder: heavyReport(heavy(), false) } : { ...heavy(), orderZero: orderZeroHeavy(theory, { signal }) }
   }
   return t.kind === 'count'
     ? countOperators(theory, { maxDim: t.maxDim!, nf: t.nf, flavorPolynomials: true, onProgress, signal })
-    : buildBasis(theory, { maxDim: t.maxDim!, nf: t.nf, priorities: t.priorities, onProgress, signal })
+    : buildBasis(theory, { maxDim: t.maxDim!, nf: t.nf, priorities: t.priorities, onProgress, signal, orderZero: true })
 }
 
 try {

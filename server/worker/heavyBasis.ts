@@ -1,13 +1,15 @@
 import type { Knex } from 'knex'
 import type { HeavyEnumeration, HeavyOperator } from '../engine/heavy/enumerate'
 import type { RunParams } from './persistRun'
+import type { OrderZeroReport } from '../engine/basis/orderZero'
+import { orderZeroClassRows, orderZeroOperators, orderZeroRow } from './orderZeroBasis'
 
 /**
  * Store a heavy-frame enumeration as a basis: per order in 1/m, the ψ†…ψ bilinears kept,
  * the published operators of that order set aside with their rewrite onto the enumerated
  * basis and their coefficient relations, the χ copies and the leading four-fermion sector.
  */
-export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, e: HeavyEnumeration): Promise<number> {
+export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, theory_id: number, params: RunParams }, e: HeavyEnumeration & { orderZero?: OrderZeroReport }): Promise<number> {
   const p = e.particle
   const a = e.antiparticle
   const classes: Record<string, unknown>[] = []
@@ -23,6 +25,12 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
       hermitian: true, real_parameters: realParameters,
       structure: JSON.stringify({ antiHermitian: !!op.antiHermitian, terms: op.terms, relations: op.relations, gaugeEomNote: op.gaugeEomNote ?? null, source: op.source ?? null, coefficient: op.coefficient ?? null, fixedBy: op.fixedBy ?? null, ...extra }),
     })
+  }
+  // Order 0: ψ†iD_tψ and the light fields' renormalizable Lagrangian.
+  if (e.orderZero) {
+    classes.push(...orderZeroClassRows(e.orderZero))
+    const at = { kept: 0, set_aside: 0 }
+    for (const o of orderZeroOperators(e.orderZero)) rows.push(orderZeroRow(o, at[o.column]++))
   }
   for (const o of e.orders) {
     const key = `${p}* ${p} (1/m^${o.order})`
@@ -65,7 +73,7 @@ export async function writeHeavyBasis(trx: Knex.Transaction, run: { id: number, 
   }
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, counting_rule: '1/m',
-    max_order: Math.max(0, ...e.orders.map((o) => o.order), ...(e.heavyLight ?? []).map((c) => c.order)), classes: JSON.stringify(classes), note: [e.eomNote, e.antiparticleNote].filter(Boolean).join('\n'),
+    max_order: Math.max(0, ...e.orders.map((o) => o.order), ...(e.heavyLight ?? []).map((c) => c.order)), classes: JSON.stringify(classes), note: [e.eomNote, e.antiparticleNote, e.orderZero?.note].filter(Boolean).join('\n'),
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   if (rows.length) await trx('operators').insert(rows.map((r) => ({ ...r, basis_id: basis.id })))

@@ -9,6 +9,8 @@ import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
 import { heldRun, RunLostError } from './runLease'
 import { massRatioOrder } from '../engine/rules/defaultWeights'
+import { orderZeroClassRows, orderZeroOperators, orderZeroRow, tagThresholdsOnOrderZero } from './orderZeroBasis'
+import { ORDER_ZERO_NOTE } from '../engine/basis/orderZero'
 
 /**
  * Write a finished run in one transaction: nothing of it is visible unless all of it is. The
@@ -45,6 +47,7 @@ function basisSummary(report: BasisReport) {
     note: report.note,
     nf: report.nf,
     byDimension: report.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, tallyOk: d.tallyOk, classes: d.classes.length })),
+    ...(report.orderZero ? { orderZero: { classes: report.orderZero.classes.length, realParameters: report.orderZero.flavorParameters ?? report.orderZero.realParameters } } : {}),
   }
 }
 
@@ -58,9 +61,10 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
       ? { cpEven: null, cpOdd: null, pEven: null, pOdd: null, parityReason: 'with several flavors, P and CP also act on flavor indices (not counted)' }
       : { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: c.pEven ?? null, pOdd: c.pOdd ?? null, parityReason: c.parityReason ?? null }),
   })))
+  if (report.orderZero) classes.unshift(...orderZeroClassRows(report.orderZero) as typeof classes)
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, fingerprint_version: FINGERPRINT_VERSION,
-    counting_rule: 'massRatio', max_order: massRatioOrder(run.params.maxDim ?? 4), classes: JSON.stringify(classes), note: report.note,
+    counting_rule: 'massRatio', max_order: massRatioOrder(run.params.maxDim ?? 4), classes: JSON.stringify(classes), note: report.orderZero ? `${report.note}\n${ORDER_ZERO_NOTE}` : report.note,
     // As computed, the kept operators of each class are independent and complete.
     coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
@@ -76,11 +80,14 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
       latex: op.latex, latex_dirac: op.latex4 ?? null, hermitian: op.hermitian, real_parameters: op.realParameters,
     }
   }
-  const rows = report.byDimension.flatMap((d) => d.classes.flatMap((c) => [
+  const at = { kept: 0, set_aside: 0 }
+  const zero = report.orderZero ? orderZeroOperators(report.orderZero).map((o) => ({ ...orderZeroRow(o, at[o.column]++), basis_id: basis.id })) : []
+  const rows = zero.concat(report.byDimension.flatMap((d) => d.classes.flatMap((c) => [
     ...c.operators.map((op) => row(d.order, c.key, 'kept', op)),
     ...(c.alternatives ?? []).map((op) => row(d.order, c.key, 'set_aside', op)),
-  ]))
+  ])))
   for (let i = 0; i < rows.length; i += 500) await trx('operators').insert(rows.slice(i, i + 500))
+  if (report.orderZero) await tagThresholdsOnOrderZero(trx, basis.id, run.theory_id, run.params.theory as never)
   return basis.id
 }
 

@@ -13,6 +13,7 @@ import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
 import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { flavorDecomposition, type FlavorSummary } from './flavor'
 import { massRatioOrder } from '../rules/defaultWeights'
+import { orderZero, type OrderZeroReport } from './orderZero'
 
 export interface BuildOptions {
   maxDim: number
@@ -21,6 +22,8 @@ export interface BuildOptions {
   priorities?: Priorities
   onProgress?: (fraction: number, label: string) => void
   signal?: { aborted: boolean }
+  /** Also enumerate order 0, the renormalizable Lagrangian (see orderZero.ts). */
+  orderZero?: boolean
 }
 
 export interface ClassReport {
@@ -77,6 +80,8 @@ export interface BasisReport {
   /** Flavor number override (undefined: as declared by the theory). */
   nf?: number
   byDimension: DimensionReport[]
+  /** Order 0 (mass dimension ≤ 4), when asked for. */
+  orderZero?: OrderZeroReport
 }
 
 /**
@@ -138,8 +143,9 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
       e.message = `dimension ${e.dimension}: ${e.operators} real parameters from the explicit basis, ${total} from the Hilbert series`
     }
   }
+  const zero = opts.orderZero ? { orderZero: orderZero(theory, { priorities: opts.priorities, signal: opts.signal }) } : {}
   opts.onProgress?.(1, 'done')
-  return { theory: theory.name, note: BASIS_NOTE, nf, byDimension: byDimension.filter((e) => e.dimension >= minDim) }
+  return { theory: theory.name, note: BASIS_NOTE, nf, byDimension: byDimension.filter((e) => e.dimension >= minDim), ...zero }
 }
 
 /** Of a class and its conjugate, the one with fewer conjugated fields and right-handed strengths. */

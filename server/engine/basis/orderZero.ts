@@ -112,3 +112,21 @@ export function orderZero(theory: Theory, opts: { priorities?: Priorities, signa
   const flavorParameters = classes.some(c => c.flavorParameters === null) ? null : classes.reduce((s, c) => s + c.flavorParameters!, 0)
   return { note: ORDER_ZERO_NOTE, classes, realParameters, flavorParameters }
 }
+
+export const HEAVY_ORDER_ZERO_NOTE = 'Order 0 in the heavy-particle frame: the leading term ψ†iD_tψ of each heavy field (its rest mass removed by the phase '
+  + 'redefinition ψ → e^{−imt}ψ, and its normalisation canonical) and the light fields\' renormalizable Lagrangian, with the assumptions above.'
+
+/**
+ * Order 0 of a heavy-frame theory: ψ†iD_tψ (and χ's) beside the light fields' renormalizable Lagrangian.
+ * @example orderZeroHeavy(vexonium).classes[0].operators[0].text // "psi* iD_t psi"
+ */
+export function orderZeroHeavy(theory: Theory, opts: { signal?: { aborted: boolean } } = {}): OrderZeroReport {
+  if (!theory.heavy) throw new EngineInputError('orderZeroHeavy', `theory "${theory.name}" has no heavy particle`)
+  const light = orderZero({ ...theory, frame: 'relativistic', heavy: undefined }, opts)
+  const names = [theory.heavy.particle.name, theory.heavy.antiparticle?.name].filter((n): n is string => !!n)
+  const heavy = names.map((n): OrderZeroClass => {
+    const t: OrderZeroTerm = { key: `${n}* ${n} (1/m^0)`, conjugateKey: `${n}* ${n} (1/m^0)`, dimension: 4, role: 'kinetic', text: `${n}* iD_t ${n}`, latex: `{${n}^{\\dagger}}\\,iD_t\\,${n}`, hermitian: true, realParameters: 0, flavorParameters: 0 }
+    return { key: t.key, conjugateKey: t.key, dimension: 4, role: 'kinetic', rank: 1, realParameters: 0, flavorParameters: 0, operators: [written(t)], alternatives: [] }
+  })
+  return { note: `${light.note} ${HEAVY_ORDER_ZERO_NOTE}`, classes: [...heavy, ...light.classes], realParameters: light.realParameters, flavorParameters: light.flavorParameters }
+}

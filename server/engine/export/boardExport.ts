@@ -42,7 +42,8 @@ export function assembleExport(input: {
   const orders = new Map<number, ExportOrder>()
   for (const c of input.classes) {
     const order = c.order
-    if (!orders.has(order)) orders.set(order, { order, dimension: c.dimension ?? null, classes: [] })
+    // Order 0 mixes mass dimensions 2 to 4 (the renormalizable Lagrangian): no single dimension.
+    if (!orders.has(order)) orders.set(order, { order, dimension: order === 0 ? null : c.dimension ?? null, classes: [] })
     orders.get(order)!.classes.push({ key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, operators: [] })
   }
   // Operators come by order, column and position: their place in the column counts from 0.

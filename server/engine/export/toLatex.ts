@@ -44,7 +44,8 @@ function orderTable(data: BoardExport, order: BoardExport['orders'][number], opt
     const body = opts.dirac && o.latexDirac ? o.latexDirac : o.latex
     lines.push(`$${classKeyLatex(c.key)}$ & $${body}$ & ${o.realParameters} & ${tags} \\\\`)
   }
-  const dimension = order.dimension === null ? '' : ` (mass dimension ${order.dimension})`
+  const lagrangian = order.order === 0 && data.countingRule !== '1/m' ? ' (the renormalizable Lagrangian, mass dimension at most 4)' : ''
+  const dimension = order.dimension === null ? lagrangian : ` (mass dimension ${order.dimension})`
   lines.push('\\hline', '\\end{tabular}', `\\caption{${latexText(data.theory.name)}: kept operators of order ${order.order}${dimension}.}`, '\\end{table}', '')
   return lines
 }

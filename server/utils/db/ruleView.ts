@@ -7,7 +7,8 @@ export async function ordersUnderRule(basisId: number, ruleName: string | undefi
   const theory = (await theoryOfBasis(basisId)) as RuleTheory
   const rules = rulesOf(theory).map((r) => ({ name: r.name, kind: r.kind, parameter: r.parameter ?? null }))
   if (!ruleName) return { rules, rule: null, orders: {} }
-  const ops = await useDb()('operators').where({ basis_id: basisId }).select('id', 'class_key', 'structure')
+  // Order 0 (the renormalizable Lagrangian, ψ†iD_tψ) defines the leading order: it is not re-counted under other rules.
+  const ops = await useDb()('operators').where({ basis_id: basisId }).where('order', '>', 0).select('id', 'class_key', 'structure')
   const orders = ruleOrders(theory, ruleName, ops.map((o) => ({ id: o.id, classKey: o.class_key, terms: o.structure?.terms })))
   return { rules, rule: ruleName, orders }
 }

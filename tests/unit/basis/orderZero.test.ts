@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { parseTheory } from '../../../shared/schemas/theory'
-import { orderZero } from '../../../server/engine/basis/orderZero'
+import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 import { PRESETS } from '../../../shared/presets/index'
 
 const preset = (id: string) => PRESETS.find(p => p.id === id)!.theory
@@ -67,7 +67,12 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
     expect(r.classes[0]!.operators[0]).not.toHaveProperty('fingerprint')
   })
 
-  it('refuses the heavy frame', () => {
+  it('refuses the heavy frame; there, order 0 is ψ†iD_tψ, χ†iD_tχ and the light fields\' Lagrangian (Caswell & Lepage, Phys. Lett. B 167 (1986) 437)', () => {
     expect(() => orderZero(preset('heavy-vexonium'))).toThrow('orderZero: theory')
+    const r = orderZeroHeavy(preset('heavy-vexonium'))
+    expect(r.classes.map(c => [c.key, c.operators.map(o => o.text)])).toEqual([
+      ['psi* psi (1/m^0)', ['psi* iD_t psi']], ['chi* chi (1/m^0)', ['chi* iD_t chi']], ['Ad_L^2', ['kinetic Ad', 'theta Ad']],
+    ])
+    expect(r.note).toContain('rest mass removed')
   })
 })
