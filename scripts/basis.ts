@@ -2,7 +2,9 @@
  * Explicit operator basis from the command line.
  *   node --import tsx scripts/basis.ts THEORY.json --max-dim N [--min-dim M] [--nf K]
  *   npm run --silent basis -- THEORY.json --max-order N   (order = dimension − 4; heavy frame: power of 1/m)
- * With --max-order the result is {"theory","byOrder":[{"order","operators","classes":[…]}]}; a
+ * With --max-order the result is {"theory","byOrder":[{"order","operators","classes":[…]}],"orderZero"}, where
+ * orderZero is the renormalizable Lagrangian: {"note","realParameters","flavorParameters","classes":[{"key",
+ * "role","dimension","rank","realParameters","flavorParameters","operators":[{"text","latex","hermitian","realParameters"}]}]}; a
  * heavy-frame theory needs --max-order and lists each class's operators (text, LaTeX, real parameters).
  * Prints only JSON: {"theory","note","byDimension":[{"dimension","operators" (real
  * parameters),"tallyOk","classes":[{"key","conjugateKey","rank","hilbert","tallyOk",
@@ -16,6 +18,7 @@ import { parseTheory } from '../server/engine/theory/parseTheory'
 import { buildBasis, type ClassReport } from '../server/engine/basis/index'
 import { massRatioDimension } from '../server/engine/rules/defaultWeights'
 import { heavyOutput } from './heavyCli'
+import type { OrderZeroReport } from '../server/engine/basis/orderZero'
 
 function usage(msg: string): never {
   process.stderr.write(`basis: ${msg}\nusage: node --import tsx scripts/basis.ts THEORY.json (--max-dim N [--min-dim M] | --max-order N) [--nf K]\n`)
@@ -44,6 +47,16 @@ function classJson(c: ClassReport) {
   }
 }
 
+function orderZeroJson(z: OrderZeroReport) {
+  return {
+    note: z.note, realParameters: z.realParameters, flavorParameters: z.flavorParameters,
+    classes: z.classes.map((c) => ({
+      key: c.key, role: c.role, dimension: c.dimension, rank: c.rank, realParameters: c.realParameters, flavorParameters: c.flavorParameters,
+      operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: o.hermitian, realParameters: o.realParameters })),
+    })),
+  }
+}
+
 function main(): void {
   const args = process.argv.slice(2)
   const file = args.find((a, i) => !a.startsWith('--') && (i === 0 || !args[i - 1]!.startsWith('--')))
@@ -66,13 +79,13 @@ function main(): void {
       return
     }
     const maxDim = maxDimArg ?? massRatioDimension(maxOrder!)
-    const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf') })
+    const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf'), orderZero: maxOrder !== undefined })
     const entry = (d: (typeof r.byDimension)[number]) => ({ operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })
     const out = {
       theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
       ...(maxOrder === undefined
         ? { byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, ...entry(d) })) }
-        : { byOrder: r.byDimension.map((d) => ({ order: d.order, dimension: d.dimension, ...entry(d) })) }),
+        : { byOrder: r.byDimension.map((d) => ({ order: d.order, dimension: d.dimension, ...entry(d) })), orderZero: orderZeroJson(r.orderZero!) }),
     }
     process.stdout.write(`${JSON.stringify(out, null, 2)}\n`)
   } catch (e) {

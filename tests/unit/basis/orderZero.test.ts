@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { execFileSync } from 'node:child_process'
 import { parseTheory } from '../../../shared/schemas/theory'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 import { PRESETS } from '../../../shared/presets/index'
@@ -74,5 +75,16 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
       ['psi* psi (1/m^0)', ['psi* iD_t psi']], ['chi* chi (1/m^0)', ['chi* iD_t chi']], ['Ad_L^2', ['kinetic Ad', 'theta Ad']],
     ])
     expect(r.note).toContain('rest mass removed')
+  })
+})
+
+describe('command line: npm run basis -- FILE --max-order N prints order 0', () => {
+  it('QED to order 1: the orderZero block with its classes and real parameters (Peskin & Schroeder 1995, eq. 4.3)', () => {
+    const file = '/tmp/scalewright-order-zero-cli.json'
+    execFileSync('node', ['-e', `require('fs').writeFileSync(${JSON.stringify(file)}, ${JSON.stringify(JSON.stringify(preset('qed')))})`])
+    const j = JSON.parse(execFileSync('node', ['--import', 'tsx', 'scripts/basis.ts', file, '--max-order', '1'], { encoding: 'utf8' }))
+    expect(j.orderZero.classes.map((c: { key: string, role: string }) => [c.key, c.role])).toEqual([['D eL eL*', 'kinetic'], ['D eR eR*', 'kinetic'], ['A_L^2', 'gauge kinetic'], ['eL eR*', 'mass']])
+    expect(j.orderZero.realParameters).toBe(4)
+    expect(j.byOrder[0].order).toBe(1)
   })
 })
