@@ -16,7 +16,8 @@ import { describeOperators, describeAlternative, type BasisOperator } from './de
 import { orderZeroBilinears, type OrderZeroRole, type OrderZeroTerm } from './orderZeroBilinears'
 
 export const ORDER_ZERO_NOTE = 'Order 0 is the renormalizable Lagrangian (mass dimension ≤ 4). The equations of motion are not used here: '
-  + 'the kinetic terms define them. Assumed: kinetic terms canonical (kinetic mixing removed by field redefinitions, so they carry no free parameter); '
+  + 'the kinetic terms define them. Assumed: matter kinetic terms canonical (mixing of fields with equal quantum numbers removed by field redefinitions, so they carry no free parameter); '
+  + 'gauge kinetic terms carry the couplings, and two abelian field strengths may mix (listed, since the charges are fixed); '
   + 'total derivatives dropped except the θ terms, kept as topological terms; the linear (tadpole) term of a singlet scalar removed by shifting the field; '
   + 'a mass term is listed only where it is invariant under every group of the theory, gauge and global. Real parameters count before field '
   + 'redefinitions (rephasings and flavour rotations) remove the unphysical ones.'

@@ -72,6 +72,23 @@ function gaugeTerms(model: TheoryModel, f: TheoryField, group: TheoryGroup | und
   ]
 }
 
+/**
+ * Kinetic mixing of two abelian field strengths, X_{μν} Y^{μν} and its θ-like partner X_{μν} Ỹ^{μν}:
+ * gauge invariant at dimension 4; with the charges fixed by the theory file it is a parameter of its
+ * own (Holdom, Phys. Lett. B 166 (1986) 196).
+ */
+function abelianMixing(model: TheoryModel, strengths: TheoryField[], groups: Map<string, TheoryGroup>): OrderZeroTerm[] {
+  const abelian = strengths.filter(f => groups.get(f.gaugeOf ?? '')?.type === 'U1')
+  return abelian.flatMap((x, i) => abelian.slice(i + 1).flatMap((y): OrderZeroTerm[] => {
+    const key = keyFor(model, [`${x.name}_L`, `${y.name}_L`], 0)
+    const base = { key, conjugateKey: keyFor(model, [`${x.name}_R`, `${y.name}_R`], 0), dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
+    return [
+      { ...base, role: 'gauge kinetic', text: `mixing ${x.name} ${y.name}`, latex: `${x.name}_{\\mu\\nu} ${y.name}^{\\mu\\nu}`, note: 'kinetic mixing of two abelian gauge fields' },
+      { ...base, role: 'theta', text: `theta mixing ${x.name} ${y.name}`, latex: `${x.name}_{\\mu\\nu} \\tilde ${y.name}^{\\mu\\nu}`, note: 'a total derivative kept as a topological term; no effect in perturbation theory' },
+    ]
+  }))
+}
+
 interface Form { field: TheoryField, label: string, key: string, conjugateKey: string, reality: string, n: number, fermion: boolean }
 
 /** Each matter field as it enters a mass term: scalars as written, fermions as left-handed Weyl fields. */
@@ -134,6 +151,7 @@ export function orderZeroBilinears(model: TheoryModel, theory: Theory): OrderZer
   return [
     ...theory.fields.filter(f => f.lorentz !== 'F').map(f => kineticTerm(model, f)),
     ...theory.fields.filter(f => f.lorentz === 'F').flatMap(f => gaugeTerms(model, f, groups.get(f.gaugeOf ?? ''))),
+    ...abelianMixing(model, theory.fields.filter(f => f.lorentz === 'F'), groups),
     ...massTerms(model, theory),
   ]
 }

@@ -57,6 +57,16 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
     expect(r.flavorParameters! - (45 - 4) - 2).toBe(19)
   })
 
+  it('two abelian gauge fields mix at dimension 4: X·Y and X·Ỹ listed (Holdom, Phys. Lett. B 166 (1986) 196); one non-abelian and one abelian do not', () => {
+    const t = parseTheory({
+      name: 'Dark photon', frame: 'relativistic',
+      groups: [{ name: 'Y', type: 'U1', gauge: true }, { name: 'X', type: 'U1', gauge: true }, { name: 'SU2', type: 'SU', n: 2, gauge: true }],
+      fields: [{ name: 'B', lorentz: 'F', gaugeOf: 'Y' }, { name: 'Ad', lorentz: 'F', gaugeOf: 'X' }, { name: 'W', lorentz: 'F', gaugeOf: 'SU2' }],
+    })
+    const mixing = orderZero(t).classes.filter(c => c.operators.some(o => o.text.startsWith('mixing')))
+    expect(mixing.map(c => [c.key, c.operators.map(o => o.text)])).toEqual([['B_L Ad_L', ['mixing B Ad', 'theta mixing B Ad']]])
+  })
+
   it('no mass term for any Standard-Model fermion: all are chiral (common practice)', () => {
     expect(orderZero(preset('smeft')).classes.filter(c => c.role === 'mass').map(c => c.key)).toEqual(['H H*'])
   })
