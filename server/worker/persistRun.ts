@@ -61,12 +61,12 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
       ? { cpEven: null, cpOdd: null, pEven: null, pOdd: null, parityReason: 'with several flavors, P and CP also act on flavor indices (not counted)' }
       : { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: c.pEven ?? null, pOdd: c.pOdd ?? null, parityReason: c.parityReason ?? null }),
   })))
-  if (report.orderZero) classes.unshift(...orderZeroClassRows(report.orderZero) as typeof classes)
+  const zeroClasses = report.orderZero ? orderZeroClassRows(report.orderZero) : []
   const [basis] = await trx('bases').insert({
     theory_id: run.theory_id, run_id: run.id, theory_version: run.params.theoryVersion, fingerprint_version: FINGERPRINT_VERSION,
-    counting_rule: 'massRatio', max_order: massRatioOrder(run.params.maxDim ?? 4), classes: JSON.stringify(classes), note: report.orderZero ? `${report.note}\n${ORDER_ZERO_NOTE}` : report.note,
+    counting_rule: 'massRatio', max_order: massRatioOrder(run.params.maxDim ?? 4), classes: JSON.stringify([...zeroClasses, ...classes]), note: report.orderZero ? `${report.note}\n${ORDER_ZERO_NOTE}` : report.note,
     // As computed, the kept operators of each class are independent and complete.
-    coverage: JSON.stringify(Object.fromEntries(classes.map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
+    coverage: JSON.stringify(Object.fromEntries([...zeroClasses, ...classes].map((c) => [c.key, { rank: c.rank, required: c.rank, complete: true }]))),
   }).returning('id')
   // Positions run per order and column, in class order: kept operators, then the alternatives.
   const next = { kept: new Map<number, number>(), set_aside: new Map<number, number>() }
