@@ -97,7 +97,7 @@ function contactClasses(theory: Theory, opts: { priorities?: Priorities, signal?
  * @example orderZero(qed).classes.map(c => c.role) // ['kinetic', 'kinetic', 'gauge kinetic', 'mass'] (θ shares the gauge class)
  */
 export function orderZero(theory: Theory, opts: { priorities?: Priorities, signal?: { aborted: boolean } } = {}): OrderZeroReport {
-  if (theory.frame !== 'relativistic') throw new EngineInputError('orderZero', `theory "${theory.name}" has frame "${theory.frame}"; order 0 is enumerated for relativistic theories`)
+  if (theory.frame !== 'relativistic') throw new EngineInputError('orderZero', `Theory "${theory.name}" uses the ${theory.frame} frame; the renormalizable Lagrangian is enumerated this way for relativistic theories only`)
   const model = buildTheoryModel(theory, { nf: 1 })
   const byKey = new Map<string, OrderZeroClass>()
   for (const t of orderZeroBilinears(model, theory)) {
@@ -122,7 +122,7 @@ export const HEAVY_ORDER_ZERO_NOTE = 'Order 0 in the heavy-particle frame: the l
  * @example orderZeroHeavy(vexonium).classes[0].operators[0].text // "psi* iD_t psi"
  */
 export function orderZeroHeavy(theory: Theory, opts: { signal?: { aborted: boolean } } = {}): OrderZeroReport {
-  if (!theory.heavy) throw new EngineInputError('orderZeroHeavy', `theory "${theory.name}" has no heavy particle`)
+  if (!theory.heavy) throw new EngineInputError('orderZeroHeavy', `Theory "${theory.name}" has no heavy particle; give it a "heavy" block or use the relativistic frame`)
   const light = orderZero({ ...theory, frame: 'relativistic', heavy: undefined }, opts)
   const names = [theory.heavy.particle.name, theory.heavy.antiparticle?.name].filter((n): n is string => !!n)
   const heavy = names.map((n): OrderZeroClass => {

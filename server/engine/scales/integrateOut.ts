@@ -57,14 +57,14 @@ function checkIntegrity(theory: Theory, child: Theory, names: readonly string[])
   const { problems, partners } = checkMassPartners(theory, names)
   if (problems.length) {
     const offer = partners.length ? ` Integrate out ${[...names, ...partners].join(', ')} together.` : ''
-    throw new EngineInputError('integrateOut', `these fields cannot be integrated out as chosen. ${problems.join(' ')}${offer}`)
+    throw new EngineInputError('integrateOut', `These fields cannot be integrated out as chosen. ${problems.join(' ')}${offer}`)
   }
   const before = new Map(anomalyConditions(theory).map(c => [c.name, c.ok]))
   const broken = anomalyConditions(child).filter(c => !c.ok && before.get(c.name) !== false)
   if (broken.length) {
     const list = broken.map(c => `${c.name} (sum ${c.sum})`).join(', ')
     // A vector-like set carries no anomaly, so this is a bug in the partner check, never hidden.
-    throw new EngineConsistencyError('integrateOut', `removing ${names.join(', ')} leaves a theory with gauge anomalies the original does not have: ${list}`)
+    throw new EngineConsistencyError('integrateOut', `Removing ${names.join(', ')} leaves a theory with gauge anomalies the original does not have: ${list}`)
   }
 }
 

@@ -29,6 +29,7 @@ import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../..
 import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, alphaSAboveThreshold, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningReport, runGaugeCouplings, simpleGroupFactors, towerGaugeContent } from '../../../server/engine/running/gauge/index'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
+import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 
 export interface BadInput { name: string, run: () => unknown, says?: RegExp }
 
@@ -136,6 +137,9 @@ const scaleCases: BadInput[] = [
   { name: 'integrating out a field twice', run: () => integrateOut(preset('smeft'), ['H', 'H'], { value: 1, unit: 'TeV' }) },
   { name: 'integrating out of a heavy-frame theory', run: () => integrateOut(preset('heavy-vexonium'), ['psi'], { value: 1, unit: 'TeV' }) },
   { name: 'threshold shifts of a field strength', run: () => thresholdShifts([{ name: 'G', lorentz: 'field-strength', gaugeOf: 'C' }], []) },
+  { name: 'integrating out half of a Dirac fermion', run: () => integrateOut(preset('qed'), ['eL'], { value: 1, unit: 'TeV' }), says: /eL cannot be integrated out without a partner.*Integrate out eL, eR together/ },
+  { name: 'order 0 of a heavy-frame theory as if relativistic', run: () => orderZero(preset('heavy-vexonium')), says: /uses the heavy frame/ },
+  { name: 'heavy order 0 of a theory without a heavy particle', run: () => orderZeroHeavy(preset('qed')), says: /has no heavy particle/ },
 ]
 
 const runningCases: BadInput[] = [

@@ -98,7 +98,7 @@ describe('integrateOut refuses an inconsistent child', () => {
   const at = { value: 1, unit: 'TeV' }
   it('half of a Dirac pair: the reason and the partner to add', () => {
     const pair = parseTheory({ ...theory, fields: theory.fields.filter(f => f.name !== 'u' && f.name !== 'Tc') })
-    expect(() => integrateOut(pair, ['TL'], at)).toThrow(/integrateOut: these fields cannot be integrated out as chosen\. TL cannot be integrated out without a partner: .*; the theory has TR for that\. Integrate out TL, TR together\./)
+    expect(() => integrateOut(pair, ['TL'], at)).toThrow(/^These fields cannot be integrated out as chosen\. TL cannot be integrated out without a partner: .*; the theory has TR for that\. Integrate out TL, TR together\./)
   })
   it('the whole pair is accepted', () => {
     expect(integrateOut(theory, ['TL', 'TR'], at).child.fields.map(f => f.name)).not.toContain('TL')
