@@ -40,7 +40,7 @@ export async function tagThresholdsOnOrderZero(trx: Knex.Transaction, basisId: n
   const thresholds: ThresholdRow[] = await trx('threshold_tags').where({ theory_id: theoryId }).select('field', 'details')
   if (!thresholds.length) return
   const kinetic = await trx('operators').where({ basis_id: basisId, order: 0 }).where('text', 'like', 'kinetic %').select('id', 'text')
-  const strengthOf = new Map((theory.fields ?? []).filter((f) => f.lorentz === 'F' && f.gaugeOf).map((f) => [f.gaugeOf!, f.name]))
+  const strengthOf = new Map((theory.fields ?? []).filter((f) => f.lorentz === 'field-strength' && f.gaugeOf).map((f) => [f.gaugeOf!, f.name]))
   const rows = thresholds.flatMap((t) => {
     const op = kinetic.find((o) => o.text === `kinetic ${strengthOf.get(t.details?.group ?? '')}`)
     const at = t.details?.scale !== undefined ? ` at ${t.details.scale} ${t.details.unit ?? ''}`.trimEnd() : ''

@@ -10,7 +10,7 @@ import { EngineCancelledError, EngineInputError } from '../errors'
 import { buildTheoryModel } from '../theory/model'
 import { enumerateClasses } from '../counting/classes'
 import { classBasis, type Priorities } from './classBasis'
-import { theoryParticles } from './particles'
+import { basisSpecies } from './species'
 import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
 import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { orderZeroBilinears, type OrderZeroRole, type OrderZeroTerm } from './orderZeroBilinears'
@@ -66,7 +66,7 @@ function flavorParametersOf(cls: OperatorClass, realParameters: number): number 
 
 /** Classes of three and four fields at dimension 3 and 4 without derivatives. */
 function contactClasses(theory: Theory, opts: { priorities?: Priorities, signal?: { aborted: boolean } }): OrderZeroClass[] {
-  const particles = theoryParticles(theory)
+  const particles = basisSpecies(theory)
   const model = buildTheoryModel(theory, { nf: 1 })
   const done = new Set<string>()
   const out: OrderZeroClass[] = []

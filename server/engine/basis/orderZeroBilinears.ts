@@ -9,7 +9,7 @@
  */
 import type { Theory, TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
 import type { TheoryModel } from '../theory/model'
-import { classKey } from '../counting/classes'
+import { classKeyOfCounts } from '../theory/classKey'
 import { representationOf } from '../scales/massPartners'
 
 export type OrderZeroRole = 'kinetic' | 'gauge kinetic' | 'theta' | 'mass' | 'cubic' | 'quartic' | 'Yukawa' | 'other'
@@ -35,22 +35,22 @@ const dagger = (name: string) => `{${name}^{\\dagger}}`
 
 function keyFor(model: TheoryModel, labels: string[], derivatives: number): string {
   const counts = model.species.map(() => 0)
-  for (const l of labels) counts[model.species.findIndex(s => s.key === l)]! += 1
-  return classKey(model, counts, derivatives)
+  for (const l of labels) counts[model.species.findIndex(s => s.label === l)]! += 1
+  return classKeyOfCounts(model, counts, derivatives)
 }
 const conjLabel = (l: string) => (l.endsWith('*') ? l.slice(0, -1) : `${l}*`)
 
 /** Kinetic terms: canonical, so they carry no free parameter (field rescaling). */
 function kineticTerm(model: TheoryModel, f: TheoryField): OrderZeroTerm {
   const base = { dimension: 4, role: 'kinetic' as const, hermitian: true, realParameters: 0, flavorParameters: 0 }
-  if (f.lorentz === 'S' && f.real) {
+  if (f.lorentz === 'scalar' && f.real) {
     const key = keyFor(model, [f.name, f.name], 2)
     return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex: `\\tfrac12 (D_\\mu ${tex(f.name)})(D^\\mu ${tex(f.name)})` }
   }
-  const key = keyFor(model, [f.name, `${f.name}*`], f.lorentz === 'S' ? 2 : 1)
-  const latex = f.lorentz === 'S'
+  const key = keyFor(model, [f.name, `${f.name}*`], f.lorentz === 'scalar' ? 2 : 1)
+  const latex = f.lorentz === 'scalar'
     ? `(D_\\mu ${tex(f.name)})^\\dagger (D^\\mu ${tex(f.name)})`
-    : `i\\,${dagger(f.name)}\\,${f.lorentz === 'L' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(f.name)}`
+    : `i\\,${dagger(f.name)}\\,${f.lorentz === 'left-weyl' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(f.name)}`
   return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex }
 }
 
@@ -93,9 +93,9 @@ interface Form { field: TheoryField, label: string, key: string, conjugateKey: s
 
 /** Each matter field as it enters a mass term: scalars as written, fermions as left-handed Weyl fields. */
 function massForm(f: TheoryField, groups: readonly TheoryGroup[]): Form {
-  const right = f.lorentz === 'R'
+  const right = f.lorentz === 'right-weyl'
   const rep = representationOf(f, groups, right)
-  return { field: f, label: right ? `${f.name}*` : f.name, ...rep, n: f.flavors ?? 1, fermion: f.lorentz !== 'S' }
+  return { field: f, label: right ? `${f.name}*` : f.name, ...rep, n: f.flavors ?? 1, fermion: f.lorentz !== 'scalar' }
 }
 
 /** The mass term of two forms (a before b in theory order), or null when no singlet exists. */
@@ -103,7 +103,7 @@ function massTerm(model: TheoryModel, a: Form, b: Form, bConjugated: boolean): O
   const same = a.field === b.field
   const labels = [a.label, bConjugated ? conjLabel(b.label) : b.label]
   const key = keyFor(model, labels, 0)
-  const conjugateKey = keyFor(model, labels.map(l => (model.species.find(s => s.key === conjLabel(l)) ? conjLabel(l) : l)), 0)
+  const conjugateKey = keyFor(model, labels.map(l => (model.species.find(s => s.label === conjLabel(l)) ? conjLabel(l) : l)), 0)
   const hermitian = key === conjugateKey
   const dimension = a.fermion ? 3 : 2
   let realParameters = hermitian ? 1 : 2
@@ -126,7 +126,7 @@ function massTerm(model: TheoryModel, a: Form, b: Form, bConjugated: boolean): O
 
 /** Every mass term allowed by the theory's symmetries (pairs in theory order). */
 function massTerms(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
-  const forms = theory.fields.filter(f => f.lorentz !== 'F').map(f => massForm(f, theory.groups))
+  const forms = theory.fields.filter(f => f.lorentz !== 'field-strength').map(f => massForm(f, theory.groups))
   const out: OrderZeroTerm[] = []
   const seen = new Set<string>()
   const push = (t: OrderZeroTerm | null) => {
@@ -149,9 +149,9 @@ function massTerms(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
 export function orderZeroBilinears(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
   const groups = new Map(theory.groups.map(g => [g.name, g]))
   return [
-    ...theory.fields.filter(f => f.lorentz !== 'F').map(f => kineticTerm(model, f)),
-    ...theory.fields.filter(f => f.lorentz === 'F').flatMap(f => gaugeTerms(model, f, groups.get(f.gaugeOf ?? ''))),
-    ...abelianMixing(model, theory.fields.filter(f => f.lorentz === 'F'), groups),
+    ...theory.fields.filter(f => f.lorentz !== 'field-strength').map(f => kineticTerm(model, f)),
+    ...theory.fields.filter(f => f.lorentz === 'field-strength').flatMap(f => gaugeTerms(model, f, groups.get(f.gaugeOf ?? ''))),
+    ...abelianMixing(model, theory.fields.filter(f => f.lorentz === 'field-strength'), groups),
     ...massTerms(model, theory),
   ]
 }

@@ -18,7 +18,7 @@ export type Reality = 'real' | 'pseudoreal' | 'complex'
 
 interface WeylForm { field: TheoryField, key: string, conjugateKey: string, reality: Reality, copies: number }
 
-export const isFermion = (f: TheoryField): boolean => f.lorentz === 'L' || f.lorentz === 'R'
+export const isFermion = (f: TheoryField): boolean => f.lorentz === 'left-weyl' || f.lorentz === 'right-weyl'
 
 /** Charge q under a group in the left-handed form (negated for a right-handed field), as text. */
 function chargeText(q: Rational, g: TheoryGroup): string {
@@ -59,7 +59,7 @@ export function representationOf(f: TheoryField, groups: readonly TheoryGroup[],
 
 /** The field as a left-handed Weyl fermion: its representation key, the conjugate's, its reality. */
 function weylForm(f: TheoryField, groups: readonly TheoryGroup[]): WeylForm {
-  return { field: f, ...representationOf(f, groups, f.lorentz === 'R'), copies: f.flavors ?? 1 }
+  return { field: f, ...representationOf(f, groups, f.lorentz === 'right-weyl'), copies: f.flavors ?? 1 }
 }
 
 export interface MassPartnerCheck {

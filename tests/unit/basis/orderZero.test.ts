@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { execFileSync } from 'node:child_process'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 import { PRESETS } from '../../../shared/presets/index'
 
@@ -23,7 +23,7 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
   })
 
   it('a Z2 forbids the cubic; a charged scalar has no φ² mass, only |φ|² (common practice)', () => {
-    const z2 = parseTheory({ name: 'Z2 scalar', frame: 'relativistic', groups: [{ name: 'P', type: 'Z', n: 2, gauge: false }], fields: [{ name: 'phi', lorentz: 'S', real: true, charges: { P: 1 } }] })
+    const z2 = parseTheory({ name: 'Z2 scalar', frame: 'relativistic', groups: [{ name: 'P', type: 'Z', n: 2, gauge: false }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { P: 1 } }] })
     expect(summary(orderZero(z2)).map(c => c[0])).toEqual(['D^2 phi^2', 'phi^2', 'phi^4'])
     expect(summary(orderZero(preset('scalar-qed'))).filter(c => c[1] === 'mass')).toEqual([['phi phi*', 'mass', 1, 1]])
   })
@@ -33,10 +33,10 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
       name: 'Weyl masses', frame: 'relativistic',
       groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: true }, { name: 'X', type: 'U1', gauge: false }],
       fields: [
-        { name: 'N', lorentz: 'R' },
-        { name: 'C', lorentz: 'L', charges: { X: '1' } },
-        { name: 'Dw', lorentz: 'L', reps: { SU2: [1] }, flavors: 2 },
-        { name: 'T', lorentz: 'L', reps: { SU2: [2] } },
+        { name: 'N', lorentz: 'right-weyl' },
+        { name: 'C', lorentz: 'left-weyl', charges: { X: '1' } },
+        { name: 'Dw', lorentz: 'left-weyl', reps: { SU2: [1] }, flavors: 2 },
+        { name: 'T', lorentz: 'left-weyl', reps: { SU2: [2] } },
       ],
     })
     const masses = orderZero(t).classes.filter(c => c.role === 'mass')
@@ -61,7 +61,7 @@ describe('order 0: the renormalizable Lagrangian, hand-derivable cases', () => {
     const t = parseTheory({
       name: 'Dark photon', frame: 'relativistic',
       groups: [{ name: 'Y', type: 'U1', gauge: true }, { name: 'X', type: 'U1', gauge: true }, { name: 'SU2', type: 'SU', n: 2, gauge: true }],
-      fields: [{ name: 'B', lorentz: 'F', gaugeOf: 'Y' }, { name: 'Ad', lorentz: 'F', gaugeOf: 'X' }, { name: 'W', lorentz: 'F', gaugeOf: 'SU2' }],
+      fields: [{ name: 'B', lorentz: 'field-strength', gaugeOf: 'Y' }, { name: 'Ad', lorentz: 'field-strength', gaugeOf: 'X' }, { name: 'W', lorentz: 'field-strength', gaugeOf: 'SU2' }],
     })
     const mixing = orderZero(t).classes.filter(c => c.operators.some(o => o.text.startsWith('mixing')))
     expect(mixing.map(c => [c.key, c.operators.map(o => o.text)])).toEqual([['B_L Ad_L', ['mixing B Ad', 'theta mixing B Ad']]])

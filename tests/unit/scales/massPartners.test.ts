@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { checkMassPartners, partnerMap } from '../../../server/engine/scales/massPartners'
 import { integrateOut } from '../../../server/engine/scales/integrateOut'
 
@@ -16,18 +16,18 @@ const theory = parseTheory({
     { name: 'Lno', type: 'U1', gauge: false },
   ],
   fields: [
-    { name: 'Q', lorentz: 'L', reps: { SU3c: [1, 0], SU2L: [1] }, charges: { Y: '1/6' }, flavors: 3 },
-    { name: 'u', lorentz: 'R', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' }, flavors: 3 },
-    { name: 'TL', lorentz: 'L', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } },
-    { name: 'TR', lorentz: 'R', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } },
-    { name: 'Tc', lorentz: 'L', reps: { SU3c: [0, 1] }, charges: { Y: '-2/3' } },
-    { name: 'N', lorentz: 'R' },
-    { name: 'NL', lorentz: 'R', charges: { Lno: '1' } },
-    { name: 'Wino', lorentz: 'L', reps: { SU2L: [2] } },
-    { name: 'D1', lorentz: 'L', reps: { SU2L: [1] } },
-    { name: 'D2', lorentz: 'L', reps: { SU2L: [1] } },
-    { name: 'H', lorentz: 'S', reps: { SU2L: [1] }, charges: { Y: '1/2' } },
-    { name: 'G', lorentz: 'F', gaugeOf: 'SU3c' },
+    { name: 'Q', lorentz: 'left-weyl', reps: { SU3c: [1, 0], SU2L: [1] }, charges: { Y: '1/6' }, flavors: 3 },
+    { name: 'u', lorentz: 'right-weyl', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' }, flavors: 3 },
+    { name: 'TL', lorentz: 'left-weyl', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } },
+    { name: 'TR', lorentz: 'right-weyl', reps: { SU3c: [1, 0] }, charges: { Y: '2/3' } },
+    { name: 'Tc', lorentz: 'left-weyl', reps: { SU3c: [0, 1] }, charges: { Y: '-2/3' } },
+    { name: 'N', lorentz: 'right-weyl' },
+    { name: 'NL', lorentz: 'right-weyl', charges: { Lno: '1' } },
+    { name: 'Wino', lorentz: 'left-weyl', reps: { SU2L: [2] } },
+    { name: 'D1', lorentz: 'left-weyl', reps: { SU2L: [1] } },
+    { name: 'D2', lorentz: 'left-weyl', reps: { SU2L: [1] } },
+    { name: 'H', lorentz: 'scalar', reps: { SU2L: [1] }, charges: { Y: '1/2' } },
+    { name: 'G', lorentz: 'field-strength', gaugeOf: 'SU3c' },
   ],
 })
 
