@@ -1,0 +1,95 @@
+import { describe, expect, it } from 'vitest'
+import { countGoldstone, type GoldstoneCountOptions } from '../../../server/engine/goldstone/countGoldstone'
+
+function orders(o: Omit<GoldstoneCountOptions, 'maxOrder'> & { maxOrder: number }) {
+  return countGoldstone(o).byOrder
+}
+const at = (o: ReturnType<typeof orders>, order: number) => o.find((x) => x.order === order)!
+
+describe('SU(N)×SU(N)/SU(N) with external sources s, p, l, r', () => {
+  const three = orders({ coset: 'chiral', N: 3, sources: true, maxOrder: 10 })
+  const two = orders({ coset: 'chiral', N: 2, sources: true, maxOrder: 8 })
+  const general = orders({ coset: 'chiral', N: 'general', sources: true, maxOrder: 8 })
+
+  it('N = 3: 2, 12, 117, 1959, 45171 C- and P-even terms at p², …, p¹⁰ (Graf, Henning, Lu, Melia, Murayama, JHEP 01 (2021) 142, title)', () => {
+    expect(three.map((o) => [o.order, o.operators])).toEqual([[2, 2], [4, 12], [6, 117], [8, 1959], [10, 45171]])
+  })
+
+  it('N = 3, p⁴: L1 … L10 and the contact terms H1, H2 (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465)', () => {
+    expect(at(three, 4)).toMatchObject({ operators: 12, contact: 2, byParity: { even: 12, odd: 0 } })
+  })
+
+  it('N = 2, p⁴: l1 … l7 and h1, h2, h3 (Gasser & Leutwyler, Ann. Phys. 158 (1984) 142)', () => {
+    expect(at(two, 4)).toMatchObject({ operators: 10, contact: 3, byParity: { even: 10, odd: 0 } })
+  })
+
+  it('general N, p⁴: L0 … L10, H1, H2 (Bijnens, Colangelo, Ecker, Ann. Phys. 280 (2000) 100)', () => {
+    expect(at(general, 4)).toMatchObject({ operators: 13, contact: 2 })
+  })
+
+  it('p⁶ normal parity: 112 + 3 terms for general N, 90 + 4 for N = 3 (Bijnens, Colangelo, Ecker, Ann. Phys. 280 (2000) 100)', () => {
+    expect([at(general, 6).byParity.even, at(general, 6).contact]).toEqual([115, 3])
+    expect([at(three, 6).byParity.even, at(three, 6).contact]).toEqual([94, 4])
+  })
+
+  it('p⁶ normal parity, N = 2: 52 + 4 = 56, one fewer than the 57 (53 + 4) of Bijnens, Colangelo, Ecker, Ann. Phys. 280 (2000) 100; Haefeli, Ivanov, Schmid, Ecker, arXiv:0705.0576 (2007) showed one of those 57 to be redundant (from memory); the explicit basis (basis tests) confirms 56', () => {
+    expect([at(two, 6).byParity.even, at(two, 6).contact]).toEqual([56, 4])
+  })
+
+  it('p⁶ odd intrinsic parity: 24 terms for general N, 23 for N = 3, 5 for N = 2 (Bijnens, Girlanda, Talavera, Eur. Phys. J. C 23 (2002) 539)', () => {
+    expect([at(general, 6).byParity.odd, at(three, 6).byParity.odd, at(two, 6).byParity.odd]).toEqual([24, 23, 5])
+  })
+
+  it('p⁸ normal parity: 1862, 1254 and 475 terms for general N, N = 3, N = 2 (Bijnens, Hermansson-Truedsson, Wang, JHEP 01 (2019) 102; from memory)', () => {
+    expect([at(general, 8).byParity.even, at(three, 8).byParity.even, at(two, 8).byParity.even]).toEqual([1862, 1254, 475])
+  })
+
+  it('no operator at odd orders; the WZW term is not a local invariant, so p⁴ has no odd-intrinsic-parity term (common practice)', () => {
+    expect(three.every((o) => o.order % 2 === 0)).toBe(true)
+    expect(at(three, 4).byParity.odd).toBe(0)
+  })
+
+  it('the θ term admits the C-even P-odd terms: at p² also i⟨χ−⟩ (common practice: a θ rotated into the quark masses)', () => {
+    const theta = orders({ coset: 'chiral', N: 3, sources: true, theta: true, maxOrder: 4 })
+    expect(at(theta, 2).operators).toBe(3)
+    expect(at(theta, 4).operators).toBe(12 + at(three, 4).sectors.cEvenPOdd)
+  })
+})
+
+describe('without sources (pure Goldstone self-interactions)', () => {
+  it('p⁴: 2 terms for N = 2 (l1, l2), 3 for N = 3 (L1, L2, L3), 4 for general N (with L0) (Gasser & Leutwyler 1984, 1985; Bijnens, Colangelo, Ecker 2000)', () => {
+    const p4 = (N: number | 'general') => at(orders({ coset: 'chiral', N, sources: false, maxOrder: 4 }), 4).operators
+    expect([p4(2), p4(3), p4('general')]).toEqual([2, 3, 4])
+  })
+
+  it('SU(2)×SU(2)/SU(2) = SO(4)/SO(3): the same normal-parity counts as O(4)/O(3) through p⁸ (common practice)', () => {
+    const su2 = orders({ coset: 'chiral', N: 2, sources: false, maxOrder: 8 }).map((o) => o.byParity.even)
+    const o4 = orders({ coset: 'orthogonal', N: 3, sources: false, maxOrder: 8 }).map((o) => o.operators)
+    expect(su2).toEqual([1, 2, 5, 16])
+    expect(o4).toEqual(su2)
+  })
+})
+
+describe('O(N+1)/O(N)', () => {
+  it('p⁴ with the O(N+1) vector source χ and gauge source: l1 … l6 and h1, h2, i.e. the terms of Gasser & Leutwyler, Ann. Phys. 158 (1984) 142 (O(4) form) without l7 and h3, which need their second source χ̃ of the two-flavour case', () => {
+    for (const N of [3, 4, 5, 'general'] as const) {
+      expect(at(orders({ coset: 'orthogonal', N, sources: true, maxOrder: 4 }), 4)).toMatchObject({ operators: 8, contact: 2 })
+    }
+  })
+
+  it('has no charge conjugation of its own and no ε-terms that are P-even', () => {
+    const o = orders({ coset: 'orthogonal', N: 3, sources: true, maxOrder: 6 })
+    for (const x of o) expect([x.sectors.cOddPEven, x.sectors.cOddPOdd, x.byParity.odd]).toEqual([0, 0, 0])
+  })
+})
+
+describe('input', () => {
+  it('refuses orders and N it cannot count, with a message in the user\'s terms', () => {
+    expect(() => countGoldstone({ coset: 'chiral', N: 3, sources: true, maxOrder: 18 })).toThrow('the highest chiral order must be an even power of p from 2 to 14, got 18')
+    expect(() => countGoldstone({ coset: 'chiral', N: 1, sources: true, maxOrder: 4 })).toThrow('N must be an integer from 2 to 12 or "general" for SU(N)×SU(N)/SU(N), got 1')
+  })
+
+  it('stops when the run is cancelled', () => {
+    expect(() => countGoldstone({ coset: 'chiral', N: 3, sources: true, maxOrder: 8, signal: { aborted: true } })).toThrow('cancelled')
+  })
+})
