@@ -146,8 +146,9 @@ interface ClassSeries { key: string, parity: 'even' | 'odd', sectors: Sectors[] 
 
 /**
  * Sum the contents into the classes integration by parts keeps apart: in the free limit
- * ∂_μ u_ν = (symmetric part) + ½ f_−μν and ∂·u = (i/2) χ̂_−, so u, χ_− and f_− letters (the
- * intrinsically odd ones) are one kind, while χ_+ and f_+ stay themselves.
+ * ∂_μ u_ν = (symmetric part) − ½ f_−μν (Maurer–Cartan: ∇_μu_ν − ∇_νu_μ = −f_−μν) and
+ * ∂·u = (i/2) χ̂_−, so u, χ_− and f_− letters (the intrinsically odd ones) are one kind, while
+ * χ_+ and f_+ stay themselves.
  */
 function cosetClasses(ctx: CosetContext, blocks: readonly Block[], o: GoldstoneCountOptions): ClassSeries[] {
   const contents = enumerateContents(blocks, ctx.K)
@@ -180,7 +181,7 @@ function zeroTraces(K: number): Rational[][] {
  *   is a total derivative by Maurer–Cartan; the series still counts it (C-even, P-odd), once per
  *   singlet of Sym²(f_+).
  * - without sources the topological current ε^{μνρσ}⟨u_ν u_ρ u_σ⟩ is identically conserved (its
- *   divergence needs an antisymmetric ∂_μ u_ν = f_−μν = 0), so the series subtracts one total
+ *   divergence needs an antisymmetric ∂_μ u_ν, i.e. f_−μν = 0), so the series subtracts one total
  *   derivative too many in the class u³ (C-odd, P-even; SU(N) cosets only: O(N) has no such
  *   invariant ε_abc).
  */
