@@ -33,21 +33,35 @@ export interface Block {
   charge: 1 | -1
   /** Sign under Hermitian conjugation (which also reverses products). */
   hermitian: 1 | -1
-  /** True for blocks that exist only with the external sources switched on. */
-  source: boolean
+  /** The external sources the block needs: scalar (s, p), vector (l_μ, r_μ), or none. */
+  source: 'scalar' | 'vector' | null
+}
+
+/** Which external sources a theory has. */
+export interface SourceSwitch { scalar: boolean, vector: boolean }
+
+/** Normalize the sources option: true/false switches both. */
+export function sourceSwitch(s: boolean | SourceSwitch): SourceSwitch {
+  return typeof s === 'boolean' ? { scalar: s, vector: s } : s
+}
+
+/** Whether a block exists with these sources. */
+export function blockPresent(b: Block, s: SourceSwitch): boolean {
+  return b.source === null || s[b.source]
 }
 
 export const BLOCKS: readonly Block[] = [
-  { name: 'u', symbol: 'u', tower: 'goldstone', flavor: 'sl', parity: -1, charge: 1, hermitian: 1, source: false },
-  { name: 'chi+', symbol: 'χ+', tower: 'source', flavor: 'gl', parity: 1, charge: 1, hermitian: 1, source: true },
-  { name: 'chi-', symbol: 'χ−', tower: 'source', flavor: 'gl', parity: -1, charge: 1, hermitian: -1, source: true },
-  { name: 'f+', symbol: 'f+', tower: 'strength', flavor: 'sl', parity: 1, charge: -1, hermitian: 1, source: true },
-  { name: 'f-', symbol: 'f−', tower: 'strength', flavor: 'sl', parity: -1, charge: 1, hermitian: 1, source: true },
+  { name: 'u', symbol: 'u', tower: 'goldstone', flavor: 'sl', parity: -1, charge: 1, hermitian: 1, source: null },
+  { name: 'chi+', symbol: 'χ+', tower: 'source', flavor: 'gl', parity: 1, charge: 1, hermitian: 1, source: 'scalar' },
+  { name: 'chi-', symbol: 'χ−', tower: 'source', flavor: 'gl', parity: -1, charge: 1, hermitian: -1, source: 'scalar' },
+  { name: 'f+', symbol: 'f+', tower: 'strength', flavor: 'sl', parity: 1, charge: -1, hermitian: 1, source: 'vector' },
+  { name: 'f-', symbol: 'f−', tower: 'strength', flavor: 'sl', parity: -1, charge: 1, hermitian: 1, source: 'vector' },
 ]
 
-/** Blocks used by a count: the Goldstone block always, the source blocks when sources are on. */
-export function activeBlocks(sources: boolean, singletVector = false): Block[] {
-  return BLOCKS.filter((b) => sources || !b.source).map((b) => (singletVector && b.name === 'f+' ? { ...b, flavor: 'gl' as const } : b))
+/** Blocks used by a count: the Goldstone block always, the source blocks when their sources are on. */
+export function activeBlocks(sources: boolean | SourceSwitch): Block[] {
+  const s = sourceSwitch(sources)
+  return BLOCKS.filter((b) => blockPresent(b, s))
 }
 
 /**
@@ -60,15 +74,15 @@ export function activeBlocks(sources: boolean, singletVector = false): Block[] {
  * two-flavour case); Hasenfratz & Leutwyler, Nucl. Phys. B 343 (1990) 241 (general N).
  */
 export const ORTHOGONAL_BLOCKS: readonly Block[] = [
-  { name: 'u', symbol: 'u', tower: 'goldstone', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: false },
-  { name: 'chi+', symbol: 'χ+', tower: 'source', flavor: 'singlet', parity: 1, charge: 1, hermitian: 1, source: true },
-  { name: 'chi-', symbol: 'χ−', tower: 'source', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: true },
-  { name: 'f+', symbol: 'f+', tower: 'strength', flavor: 'adjoint', parity: 1, charge: 1, hermitian: 1, source: true },
-  { name: 'f-', symbol: 'f−', tower: 'strength', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: true },
+  { name: 'u', symbol: 'u', tower: 'goldstone', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: null },
+  { name: 'chi+', symbol: 'χ+', tower: 'source', flavor: 'singlet', parity: 1, charge: 1, hermitian: 1, source: 'scalar' },
+  { name: 'chi-', symbol: 'χ−', tower: 'source', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: 'scalar' },
+  { name: 'f+', symbol: 'f+', tower: 'strength', flavor: 'adjoint', parity: 1, charge: 1, hermitian: 1, source: 'vector' },
+  { name: 'f-', symbol: 'f−', tower: 'strength', flavor: 'vector', parity: -1, charge: 1, hermitian: 1, source: 'vector' },
 ]
 
 /** Source-only letters of O(N+1) (contact terms): the vector χ^A and the field strength F^{AB}. */
 export const ORTHOGONAL_SOURCE_BLOCKS: readonly Block[] = [
-  { name: 'chi+', symbol: 'χ', tower: 'source', flavor: 'vector', parity: 1, charge: 1, hermitian: 1, source: true },
-  { name: 'f+', symbol: 'F', tower: 'strength', flavor: 'adjoint', parity: 1, charge: 1, hermitian: 1, source: true },
+  { name: 'chi+', symbol: 'χ', tower: 'source', flavor: 'vector', parity: 1, charge: 1, hermitian: 1, source: 'scalar' },
+  { name: 'f+', symbol: 'F', tower: 'strength', flavor: 'adjoint', parity: 1, charge: 1, hermitian: 1, source: 'vector' },
 ]

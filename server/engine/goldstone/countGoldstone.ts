@@ -14,7 +14,7 @@
  */
 import { add, rat, type Rational } from '../exact/rational'
 import { EngineCancelledError, EngineInputError } from '../errors'
-import { BLOCKS, ORTHOGONAL_BLOCKS, ORTHOGONAL_SOURCE_BLOCKS, type Block } from './blocks'
+import { BLOCKS, blockPresent, ORTHOGONAL_BLOCKS, ORTHOGONAL_SOURCE_BLOCKS, sourceSwitch, type Block, type SourceSwitch } from './blocks'
 import { contactTopological, contactTraces } from './contactSeries'
 import { CosetContext, contentTraces, sectorCounts, type Sectors } from './cosetSeries'
 import { OrthogonalFlavor, UnitaryFlavor } from './flavorModels'
@@ -27,7 +27,8 @@ export interface GoldstoneCountOptions {
   coset: CosetKind
   /** Flavors N (SU(N) cosets, N ≥ 2) or the N of O(N+1)/O(N) (N ≥ 1); 'general' = no N-specific relations. */
   N: number | 'general'
-  sources: boolean
+  /** External sources: scalar (s, p) and vector (l_μ, r_μ); a boolean switches both. */
+  sources: boolean | SourceSwitch
   /** θ term present: P is not a symmetry, P-odd (C-even) operators are counted as well. */
   theta?: boolean
   maxOrder: number
@@ -92,12 +93,13 @@ export function cosetName(coset: CosetKind, N: number | 'general' | 'N'): string
 export function countGoldstone(options: GoldstoneCountOptions): GoldstoneCountResult {
   checkOptions(options)
   const { coset, maxOrder: K } = options
-  const blocks = (coset === 'chiral' ? BLOCKS : ORTHOGONAL_BLOCKS).filter((b) => options.sources || !b.source)
+  const sources = sourceSwitch(options.sources)
+  const blocks = (coset === 'chiral' ? BLOCKS : ORTHOGONAL_BLOCKS).filter((b) => blockPresent(b, sources))
   const flavorN = options.N === 'general' ? (coset === 'chiral' ? GENERAL_N : K + 1) : options.N
   const flavor = coset === 'chiral' ? new UnitaryFlavor(flavorN) : new OrthogonalFlavor(flavorN)
   const ctx = new CosetContext(flavor, K, options.signal)
   const classes = cosetClasses(ctx, blocks, options)
-  const contact = options.sources ? contactCounts(options, flavorN) : []
+  const contact = sources.scalar || sources.vector ? contactCounts(options, sources, flavorN) : []
   const pick = (s: Sectors) => s.cEvenPEven + (options.theta ? s.cEvenPOdd : 0)
   const byOrder: GoldstoneOrderCount[] = []
   for (let d = Math.max(2, options.minOrder ?? 2); d <= K; d++) {
@@ -156,7 +158,7 @@ function cosetClasses(ctx: CosetContext, blocks: readonly Block[], o: GoldstoneC
   contents.forEach((counts, i) => {
     if (o.signal?.aborted) throw new EngineCancelledError('operator count')
     if (i % 16 === 0) o.onProgress?.((0.9 * i) / contents.length, `class ${i + 1} of ${contents.length}`)
-    const key = classKey(blocks, counts, o.sources)
+    const key = classKey(blocks, counts)
     const odd = blocks.reduce((n, b, j) => n + (b.parity === -1 ? counts[j]! : 0), 0)
     const entry = sums.get(key) ?? { parity: odd % 2 === 0 ? 'even' as const : 'odd' as const, traces: zeroTraces(ctx.K) }
     const t = contentTraces(ctx, blocks, counts).traces
@@ -193,27 +195,43 @@ function deltaH(ctx: CosetContext, blocks: readonly Block[], key: string, d: num
     const sym2 = (ctx.flavor.singlets([{ kind, cycle: 1 }, { kind, cycle: 1 }], false) + ctx.flavor.singlets([{ kind, cycle: 2 }], false)) / 2
     return { cEvenPOdd: -sym2 }
   }
-  if (key === 'u^3' && blocks.length === 1 && blocks[0]!.flavor === 'sl') return { cOddPEven: 1 }
+  const content = classShape(key)
+  const noMaurerCartanSource = !blocks.some((b) => b.name === 'f-')
+  if (content.odd === 3 && content.even === 0 && noMaurerCartanSource && blocks[0]!.flavor === 'sl') return { cOddPEven: 1 }
   return {}
 }
 
-/** Class key: the intrinsically odd letters together, then χ+ and f+. */
-function classKey(blocks: readonly Block[], counts: readonly number[], sources: boolean): string {
+/** Numbers of intrinsically odd and even letters of a class key. */
+function classShape(key: string): { odd: number, even: number } {
+  let odd = 0
+  let even = 0
+  for (const part of key.split(' ').filter(Boolean)) {
+    const [name, power] = part.split('^') as [string, string | undefined]
+    if (name === 'χ+' || name === 'f+') even += Number(power ?? 1)
+    else odd += Number(power ?? 1)
+  }
+  return { odd, even }
+}
+
+/** Class key: the intrinsically odd letters together ("{u,χ−,f−}^2", or "u^2" without sources), then χ+ and f+. */
+function classKey(blocks: readonly Block[], counts: readonly number[]): string {
   const power = (s: string, n: number) => (n === 1 ? s : `${s}^${n}`)
   const odd = blocks.reduce((n, b, j) => n + (b.parity === -1 ? counts[j]! : 0), 0)
+  const oddNames = blocks.filter((b) => b.parity === -1).map((b) => b.symbol)
   const parts: string[] = []
-  if (odd > 0) parts.push(power(sources ? '{u,χ−,f−}' : 'u', odd))
+  if (odd > 0) parts.push(power(oddNames.length === 1 ? oddNames[0]! : `{${oddNames.join(',')}}`, odd))
   blocks.forEach((b, j) => { if (b.parity === 1 && counts[j]! > 0) parts.push(power(b.symbol, counts[j]!)) })
   return parts.join(' ')
 }
 
 /** Sector counts of the contact terms per order, one entry per orbit of contents. */
-function contactCounts(o: GoldstoneCountOptions, N: number): Sectors[][] {
+function contactCounts(o: GoldstoneCountOptions, sources: SourceSwitch, N: number): Sectors[][] {
   const K = o.maxOrder
   const out: Sectors[][] = []
   if (o.coset === 'orthogonal') {
     const ctx = new CosetContext(new OrthogonalFlavor(N + 1), K, o.signal)
     for (const counts of enumerateContents(ORTHOGONAL_SOURCE_BLOCKS, K)) {
+      if (counts.some((n, i) => n > 0 && !blockPresent(ORTHOGONAL_SOURCE_BLOCKS[i]!, sources))) continue
       const t = contentTraces(ctx, ORTHOGONAL_SOURCE_BLOCKS, counts).traces
       const topological = (d: number) => (d === 4 && counts[0] === 0 && counts[1] === 2 ? { cEvenPOdd: -1 } : {})
       out.push(t[0]!.map((_, d) => sectorCounts(t.map((r) => r[d]!), `contact terms χ^${counts[0]} F^${counts[1]} at p^${d}`, topological(d))))
@@ -221,9 +239,11 @@ function contactCounts(o: GoldstoneCountOptions, N: number): Sectors[][] {
     return out
   }
   const ctx = new CosetContext(new UnitaryFlavor(N), K, o.signal)
-  for (let a = 0; 2 * a <= K; a++) {
+  const maxScalar = sources.scalar ? K : 0
+  const maxVector = sources.vector ? K : 0
+  for (let a = 0; 2 * a <= maxScalar; a++) {
     for (let b = 0; b <= a && 2 * (a + b) <= K; b++) {
-      for (let c = 0; 2 * (a + b + c) <= K; c++) {
+      for (let c = 0; 2 * (a + b + c) <= K && 2 * c <= maxVector; c++) {
         for (let e = 0; e <= c && 2 * (a + b + c + e) <= K; e++) {
           if (a + b + c + e === 0) continue
           const content = [a, b, c, e] as const

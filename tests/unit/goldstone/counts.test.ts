@@ -56,6 +56,14 @@ describe('SU(N)×SU(N)/SU(N) with external sources s, p, l, r', () => {
   })
 })
 
+describe('sources switched one at a time', () => {
+  const p4 = (scalar: boolean, vector: boolean) => at(orders({ coset: 'chiral', N: 3, sources: { scalar, vector }, maxOrder: 4 }), 4)
+  it('N = 3, p⁴ with s, p only: L1 … L8 and H2; with l_μ, r_μ only: L1, L2, L3, L9, L10 and H1 (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465, the terms sorted by the sources they hold)', () => {
+    expect(p4(true, false)).toMatchObject({ operators: 9, contact: 1 })
+    expect(p4(false, true)).toMatchObject({ operators: 6, contact: 1 })
+  })
+})
+
 describe('without sources (pure Goldstone self-interactions)', () => {
   it('p⁴: 2 terms for N = 2 (l1, l2), 3 for N = 3 (L1, L2, L3), 4 for general N (with L0) (Gasser & Leutwyler 1984, 1985; Bijnens, Colangelo, Ecker 2000)', () => {
     const p4 = (N: number | 'general') => at(orders({ coset: 'chiral', N, sources: false, maxOrder: 4 }), 4).operators
