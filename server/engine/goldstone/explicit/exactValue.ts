@@ -3,31 +3,38 @@
  * full set of legs of ∫d⁴x O, i.e. its tree-level matrix element at first order, mod p.
  * Lorentz labels are summed with η^{μν} while the letters of a trace are multiplied in order, so
  * only the labels still open between letters are enumerated (the start of each cyclic trace is
- * chosen to keep them few). Traces that share labels with other factors or with ε^{μνρσ} (ε^{0123}
- * = +1, indices of the letters lower) stay open until the factors are multiplied.
+ * chosen to keep them few). Every letter needs at least one leg, so a partial product is formed
+ * only on subsets small enough to leave a leg for each letter still to come. Traces that share
+ * labels with other factors or with ε^{μνρσ} (ε^{0123} = +1, indices of the letters lower) stay
+ * open until the factors are multiplied.
  */
 import { EngineInputError } from '../../errors'
 import type { GMat, GScalar } from './graded'
 import { METRIC } from './kinematics'
 import { SOURCE_SIDES, type Factor, type Letter, type Monomial, type Operator } from './monomial'
 import { ClassicalSolution, PAIRS } from './perturbiner'
+import { bestRotation, compileTrace, distinctLabels, type TracePlan } from './contractionPlan'
 
 const pairIndex = (a: number, b: number): number => PAIRS.findIndex(([x, y]) => x === a && y === b)
 
-const PERMUTATIONS_4: [number[], number][] = (() => {
+const PERMUTATIONS_4: [number[], number][] = permutations(4)
+
+function permutations(n: number): [number[], number][] {
+  if (n === 1) return [[[0], 1]]
   const out: [number[], number][] = []
-  const rec = (rest: number[], acc: number[], sign: number) => {
-    if (rest.length === 0) { out.push([acc, sign]); return }
-    rest.forEach((x, i) => rec([...rest.slice(0, i), ...rest.slice(i + 1)], [...acc, x], i % 2 === 0 ? sign : -sign))
-  }
-  rec([0, 1, 2, 3], [], 1)
+  for (const [p, s] of permutations(n - 1)) for (let i = 0; i < n; i++) out.push([[...p.slice(0, i), n - 1, ...p.slice(i)], (n - 1 - i) % 2 === 0 ? s : -s])
   return out
-})()
+}
+
+const planCache = new WeakMap<Monomial, { plans: TracePlan[], external: number[] }>()
 
 /** Evaluates letters and monomials on one classical solution; letter components are cached. */
 export class ExactEvaluator {
   private readonly cache = new Map<string, GMat>()
-  constructor(readonly sol: ClassicalSolution) {}
+  private readonly n: number
+  constructor(readonly sol: ClassicalSolution) {
+    this.n = sol.config.legs.length
+  }
 
   private bare(l: Letter, idx: number[]): GMat {
     const s = this.sol
@@ -66,30 +73,43 @@ export class ExactEvaluator {
       if (!sides) v = sp.add(dv, sp.commutator(s.gamma[mu]!, inner))
       else {
         const A = (side: 'L' | 'R') => (side === 'L' ? s.l[mu]! : s.r[mu]!)
-        const conn = sp.sub(sp.mul(A(sides[0]), inner), sp.mul(inner, A(sides[1])))
-        v = sp.sub(dv, sp.scale(s.i, conn))
+        v = sp.sub(dv, sp.scale(s.i, sp.sub(sp.mul(A(sides[0]), inner), sp.mul(inner, A(sides[1])))))
       }
     }
     this.cache.set(key, v)
     return v
   }
 
-  /** A letter with its internally contracted labels summed; `values` gives the other labels. */
-  private letterSummed(l: Letter, values: Map<number, number>): GMat {
+  private readonly components = new Map<Letter, GMat[]>()
+
+  /** A letter with its own (non-internal) labels set to `values` (in `own` order), internal ones summed. */
+  letterAt(l: Letter, own: readonly number[], values: ArrayLike<number>): GMat {
+    let flat = 0
+    for (let i = 0; i < own.length; i++) flat += values[i]! * 4 ** i
+    let slot = this.components.get(l)
+    if (!slot) { slot = new Array(4 ** own.length); this.components.set(l, slot) }
+    const hit = slot[flat]
+    if (hit) return hit
     const labels = [...l.d, ...l.idx]
     const internal = labels.filter((x, i) => labels.indexOf(x) !== i)
-    const sp = this.sol.space
-    if (internal.length === 0) return this.letter(l, l.d.map((x) => values.get(x)!), l.idx.map((x) => values.get(x)!))
-    let sum = sp.zero()
-    forEachAssignment(internal, (vals, w) => {
-      const all = new Map([...values, ...vals])
-      const term = this.letter(l, l.d.map((x) => all.get(x)!), l.idx.map((x) => all.get(x)!))
-      sum = w === 1 ? sp.add(sum, term) : sp.sub(sum, term)
-    })
-    return sum
+    const value = new Map<number, number>(own.map((x, i) => [x, values[i]!]))
+    const at = () => this.letter(l, l.d.map((x) => value.get(x)!), l.idx.map((x) => value.get(x)!))
+    let out: GMat
+    if (internal.length === 0) out = at()
+    else {
+      const sp = this.sol.space
+      out = sp.zero()
+      for (let a = 0; a < 4 ** internal.length; a++) {
+        let w = 1
+        internal.forEach((x, i) => { const v = Math.floor(a / 4 ** i) % 4; value.set(x, v); w *= METRIC[v]! })
+        out = w === 1 ? sp.add(out, at()) : sp.sub(out, at())
+      }
+    }
+    slot[flat] = out
+    return out
   }
 
-  /** Value of ∫d⁴x of the operator at the full set of legs (mod p). */
+  /** Value of ∫d⁴x of the operator at the full set of legs (mod p); zero with more letters than legs. */
   operator(op: Operator): number {
     const F = this.sol.F
     let s = 0
@@ -98,166 +118,152 @@ export class ExactEvaluator {
   }
 
   monomial(m: Monomial): number {
-    const F = this.sol.F
-    const sp = this.sol.space
-    const full = sp.size - 1
-    const external = externalLabels(m)
-    if (m.factors.length === 1 && !m.eps && m.factors[0]!.type === 'trace') return this.traceAtFull(m.factors[0]!.letters)
-    const tensors = m.factors.map((f) => ({ labels: [...external].filter((x) => factorLabels(f).has(x)).sort((a, b) => a - b), values: this.factorTensor(f, external) }))
-    const epsLabels = m.eps ?? []
-    const shared = [...external].filter((x) => !epsLabels.includes(x))
-    let total = 0
-    const epsAssignments: [Map<number, number>, number][] = m.eps ? PERMUTATIONS_4.map(([perm, sign]) => [new Map(epsLabels.map((x, i) => [x, perm[i]!])), sign]) : [[new Map(), 1]]
-    for (const [epsVals, epsSign] of epsAssignments) {
-      forEachAssignment(shared, (vals, w) => {
-        const all = new Map([...vals, ...epsVals])
-        let prod: GScalar | null = null
-        for (const t of tensors) {
-          const key = t.labels.map((x) => all.get(x)).join('')
-          const g = t.values.get(key)!
-          prod = prod === null ? g : sp.mulScalar(prod, g)
-        }
-        const v = prod![full]!
-        total = F.add(total, w * epsSign === 1 ? v : F.neg(v))
-      })
+    const letters = m.factors.reduce((s, f) => s + f.letters.length, 0)
+    if (letters > this.n) return 0
+    let compiled = planCache.get(m)
+    if (!compiled) {
+      // ε labels are fixed to each of the 24 permutations in turn; the other shared labels stay open
+      const fixed = new Set(m.eps ?? [])
+      const external = new Set([...externalLabels(m)].filter((x) => !fixed.has(x)))
+      compiled = { plans: m.factors.map((f) => compileTrace(bestRotation(f.letters, external, fixed), external, fixed)), external: [...external].sort((a, b) => a - b) }
+      planCache.set(m, compiled)
     }
-    return total
-  }
-
-  /** One trace alone (no shared labels, no ε): only the full-set component is formed. */
-  private traceAtFull(letters: readonly Letter[]): number {
+    const { plans, external } = compiled
     const F = this.sol.F
-    const sp = this.sol.space
-    const rotated = bestRotation(letters, new Set())
-    const states = this.contract(rotated.slice(0, -1), new Set(), rotated[rotated.length - 1]!)
-    const last = rotated[rotated.length - 1]!
+    const single = m.factors.length === 1 && m.factors[0]!.type === 'trace'
+    if (!m.eps) return single ? this.traceAtFull(plans[0]!, new Int8Array(plans[0]!.maxLabel + 1)) : this.combine(m, plans, external, null)
     let total = 0
-    for (const st of states) {
-      const own = lettersLabels([last]).filter((x) => !st.open.has(x))
-      forEachAssignment(own.filter((x, i) => own.indexOf(x) === i && !isInternal(last, x)), (vals, w) => {
-        const all = new Map([...st.open, ...vals])
-        const v = sp.traceProductAtFull(st.M, this.letterSummed(last, all))
-        // labels of the last letter that were open close here
-        let weight = w
-        for (const [x, val] of st.open) if (lettersLabels([last]).includes(x)) weight *= METRIC[val]!
-        total = F.add(total, weight === 1 ? v : F.neg(v))
-      })
+    for (const [perm, sign] of PERMUTATIONS_4) {
+      const vals = new Int8Array(Math.max(...m.eps, ...plans.map((p) => p.maxLabel)) + 1)
+      m.eps.forEach((x, i) => { vals[x] = perm[i]! })
+      const v = single ? this.traceAtFull(plans[0]!, vals) : this.combine(m, plans, external, vals)
+      total = sign === 1 ? F.add(total, v) : F.sub(total, v)
     }
     return total
   }
 
   /**
-   * Multiply letters in order, summing each label when its second appearance is reached (unless it
-   * is external). States carry the open labels' values; `next` (optional) is the letter that will
-   * follow, whose labels must stay open.
+   * Multiply along a trace plan. `reserve` legs are kept for letters outside this factor, so a
+   * product after step t is formed on subsets of at most n − reserve − (letters still to come).
    */
-  private contract(letters: readonly Letter[], external: Set<number>, next?: Letter): { open: Map<number, number>, M: GMat }[] {
+  private run(plan: TracePlan, reserve: number, steps: number, vals: Int8Array): (GMat | undefined)[] {
     const sp = this.sol.space
-    let states: { open: Map<number, number>, M: GMat }[] = [{ open: new Map(), M: sp.identity() }]
-    letters.forEach((l, pos) => {
-      const mine = lettersLabels([l]).filter((x) => !isInternal(l, x))
-      const later = new Set(lettersLabels(letters.slice(pos + 1)).concat(next ? lettersLabels([next]) : []))
-      const merged = new Map<string, { open: Map<number, number>, M: GMat }>()
-      for (const st of states) {
-        const fresh = mine.filter((x) => !st.open.has(x))
-        forEachAssignment(fresh, (vals) => {
-          const all = new Map([...st.open, ...vals])
-          let product = pos === 0 ? this.letterSummed(l, all) : sp.mul(st.M, this.letterSummed(l, all))
-          let weight = 1
-          const open = new Map<number, number>()
-          for (const [x, v] of all) {
-            if (external.has(x) || later.has(x)) open.set(x, v)
-            else if (st.open.has(x) && mine.includes(x)) weight *= METRIC[v]!
-          }
-          if (weight === -1) product = sp.scale(this.sol.F.neg(1), product)
-          const key = [...open].sort((a, b) => a[0] - b[0]).map(([x, v]) => `${x}:${v}`).join(',')
-          const prev = merged.get(key)
-          merged.set(key, { open, M: prev ? sp.add(prev.M, product) : product })
-        }, false)
+    const ownVals = new Int8Array(8)
+    let state: (GMat | undefined)[] = [sp.identity()]
+    for (let t = 0; t < steps; t++) {
+      const st = plan.steps[t]!
+      const maxSize = this.n - reserve - (plan.steps.length - 1 - t)
+      const next: (GMat | undefined)[] = new Array(4 ** st.nextOpen.length)
+      for (let a = 0; a < state.length; a++) {
+        const M = state[a]
+        if (!M) continue
+        for (let i = 0; i < st.prevOpen.length; i++) vals[st.prevOpen[i]!] = Math.floor(a / 4 ** i) % 4
+        for (let b = 0; b < 4 ** st.fresh.length; b++) {
+          for (let i = 0; i < st.fresh.length; i++) vals[st.fresh[i]!] = Math.floor(b / 4 ** i) % 4
+          let w = 1
+          for (const x of st.closing) w *= METRIC[vals[x]!]!
+          for (let i = 0; i < st.own.length; i++) ownVals[i] = vals[st.own[i]!]!
+          const comp = this.letterAt(st.letter, st.own, ownVals)
+          const product = t === 0 ? comp : sp.mul(M, comp, maxSize)
+          let c = 0
+          for (let i = 0; i < st.nextOpen.length; i++) c += vals[st.nextOpen[i]!]! * 4 ** i
+          // accumulators are fresh arrays, never a cached letter component
+          if (!next[c]) next[c] = sp.zero()
+          sp.accumulate(next[c]!, product, w as 1 | -1)
+        }
       }
-      states = [...merged.values()]
-    })
-    return states
+      state = next
+    }
+    return state
   }
 
-  /** Graded scalar of one factor for every assignment of its external labels (key: values in label order). */
-  private factorTensor(f: Factor, external: Set<number>): Map<string, GScalar> {
+  /** One trace alone (no shared labels, no ε): only the full-set component of the last product. */
+  private traceAtFull(plan: TracePlan, vals: Int8Array): number {
+    const F = this.sol.F
     const sp = this.sol.space
-    const mine = [...factorLabels(f)].filter((x) => external.has(x)).sort((a, b) => a - b)
-    const out = new Map<string, GScalar>()
-    if (f.type === 'trace') {
-      const rotated = bestRotation(f.letters, external)
-      for (const st of this.contract(rotated, external)) {
-        const key = [...st.open].sort((a, b) => a[0] - b[0]).map(([, v]) => v).join('')
-        out.set(key, sp.trace(st.M))
-      }
-      return out
+    const last = plan.steps[plan.steps.length - 1]!
+    const state = plan.steps.length === 1 ? [sp.identity()] : this.run(plan, 0, plan.steps.length - 1, vals)
+    let total = 0
+    for (let a = 0; a < state.length; a++) {
+      const M = state[a]
+      if (!M) continue
+      for (let i = 0; i < last.prevOpen.length; i++) vals[last.prevOpen[i]!] = Math.floor(a / 4 ** i) % 4
+      let w = 1
+      for (const x of last.closing) w *= METRIC[vals[x]!]!
+      const v = sp.traceProductAtFull(M, this.letterAt(last.letter, last.own, Int8Array.from(last.own, (x) => vals[x]!)))
+      total = F.add(total, w === 1 ? v : F.neg(v))
     }
-    forEachAssignment(mine, (vals) => {
-      const internal = lettersLabels(f.letters).filter((x) => !external.has(x))
-      const unique = internal.filter((x, i) => internal.indexOf(x) === i)
-      let sum: GScalar | null = null
-      forEachAssignment(unique, (inner, w) => {
-        const all = new Map([...vals, ...inner])
-        const mats = f.letters.map((l) => this.letter(l, l.d.map((x) => all.get(x)!), l.idx.map((x) => all.get(x)!)))
-        const d = this.mixedDeterminant(mats)
-        sum = sum === null ? (w === 1 ? d : negate(this.sol.F.p, d)) : addScalar(this.sol.F.p, sum, w === 1 ? d : negate(this.sol.F.p, d))
-      })
-      out.set(mine.map((x) => vals.get(x)).join(''), sum ?? sp.zeroScalar())
-    })
+    return total
+  }
+
+  /** Several factors: each a graded scalar tensor over its shared labels (ε labels preset in `fixed`). */
+  private combine(m: Monomial, plans: TracePlan[], shared: number[], fixed: Int8Array | null): number {
+    const { F, space: sp } = this.sol
+    const sizes = m.factors.map((f) => f.letters.length)
+    const total = sizes.reduce((a, b) => a + b, 0)
+    const vals = fixed ?? new Int8Array(Math.max(0, ...plans.map((p) => p.maxLabel)) + 1)
+    const tensors = m.factors.map((f, i) => ({
+      labels: plans[i]!.external,
+      values: f.type === 'trace' ? this.traceTensor(plans[i]!, total - sizes[i]!, vals.slice()) : this.detTensor(f, plans[i]!, vals.slice()),
+    }))
+    const full = sp.size - 1
+    let out = 0
+    for (let a = 0; a < 4 ** shared.length; a++) {
+      let w = 1
+      shared.forEach((x, i) => { const v = Math.floor(a / 4 ** i) % 4; vals[x] = v; w *= METRIC[v]! })
+      let prod: GScalar | null = null
+      for (const t of tensors) {
+        let c = 0
+        t.labels.forEach((x, i) => { c += vals[x]! * 4 ** i })
+        const g = t.values[c]
+        if (!g) { prod = null; break }
+        prod = prod === null ? g : sp.mulScalar(prod, g)
+      }
+      if (prod) out = F.add(out, w === 1 ? prod[full]! : F.neg(prod[full]!))
+    }
     return out
   }
 
-  /** (1/N!) Σ_{σ,τ} sgn σ sgn τ Π_k (X_k)_{σk τk}, graded. */
-  private mixedDeterminant(mats: GMat[]): GScalar {
+  private traceTensor(plan: TracePlan, reserve: number, vals: Int8Array): (GScalar | undefined)[] {
+    return this.run(plan, reserve, plan.steps.length, vals).map((M) => (M ? this.sol.space.trace(M) : undefined))
+  }
+
+  /** (1/N!) Σ_{σ,τ} sgn σ sgn τ Π_k (X_k)_{σk τk} for every value of the external labels. */
+  private detTensor(f: Factor, plan: TracePlan, preset: Int8Array): (GScalar | undefined)[] {
     const { F, space: sp } = this.sol
     const N = this.sol.config.N
-    if (mats.length !== N) throw new EngineInputError('mixedDeterminant', `det needs ${N} letters for N = ${N}, got ${mats.length}`)
-    const entry = (X: GMat, i: number, j: number): GScalar => Float64Array.from({ length: sp.size }, (_, S) => X[S * sp.nn + i * N + j]!)
+    if (f.letters.length !== N) throw new EngineInputError('detTensor', `det needs ${N} letters for N = ${N}, got ${f.letters.length}`)
+    const ext = plan.external
+    const labels = distinctLabels(f.letters)
+    const vals = new Int8Array(Math.max(preset.length, ...labels.map((x) => x + 1)))
+    vals.set(preset)
+    // labels neither shared nor preset (ε) are summed inside the determinant
+    const presetLabels = new Set(plan.steps.flatMap((st) => st.own.filter((x) => !st.fresh.includes(x) && !st.prevOpen.includes(x) && !st.closing.includes(x))))
+    const internal = labels.filter((x) => !ext.includes(x) && !presetLabels.has(x))
+    const out: (GScalar | undefined)[] = new Array(4 ** ext.length)
     const perms = permutations(N)
-    let total = sp.zeroScalar()
-    for (const [s, ss] of perms) {
-      for (const [t, ts] of perms) {
-        let prod = entry(mats[0]!, s[0]!, t[0]!)
-        for (let k = 1; k < N; k++) prod = sp.mulScalar(prod, entry(mats[k]!, s[k]!, t[k]!))
-        total = ss * ts === 1 ? addScalar(F.p, total, prod) : addScalar(F.p, total, negate(F.p, prod))
-      }
-    }
     let fact = 1
     for (let k = 2; k <= N; k++) fact *= k
     const inv = F.inv(fact)
-    return total.map((x) => F.mul(x, inv)) as GScalar
+    for (let a = 0; a < out.length; a++) {
+      ext.forEach((x, i) => { vals[x] = Math.floor(a / 4 ** i) % 4 })
+      let sum = sp.zeroScalar()
+      for (let b = 0; b < 4 ** internal.length; b++) {
+        let w = 1
+        internal.forEach((x, i) => { const v = Math.floor(b / 4 ** i) % 4; vals[x] = v; w *= METRIC[v]! })
+        const mats = f.letters.map((l) => this.letter(l, l.d.map((x) => vals[x]!), l.idx.map((x) => vals[x]!)))
+        const entry = (X: GMat, i: number, j: number): GScalar => Float64Array.from({ length: sp.size }, (_, S) => X[S * sp.nn + i * N + j]!)
+        for (const [s, ss] of perms) for (const [t, ts] of perms) {
+          let prod = entry(mats[0]!, s[0]!, t[0]!)
+          for (let k = 1; k < N; k++) prod = sp.mulScalar(prod, entry(mats[k]!, s[k]!, t[k]!))
+          const sign = ss * ts * w
+          for (let S = 0; S < sp.size; S++) sum[S] = sign === 1 ? F.add(sum[S]!, prod[S]!) : F.sub(sum[S]!, prod[S]!)
+        }
+      }
+      out[a] = sum.map((x) => F.mul(x, inv)) as GScalar
+    }
+    return out
   }
-}
-
-function negate(p: number, a: GScalar): GScalar {
-  return a.map((x) => (x === 0 ? 0 : p - x)) as GScalar
-}
-
-function addScalar(p: number, a: GScalar, b: GScalar): GScalar {
-  return a.map((x, i) => (x + b[i]!) % p) as GScalar
-}
-
-function permutations(n: number): [number[], number][] {
-  if (n === 1) return [[[0], 1]]
-  const out: [number[], number][] = []
-  for (const [p, s] of permutations(n - 1)) {
-    for (let i = 0; i < n; i++) out.push([[...p.slice(0, i), n - 1, ...p.slice(i)], (n - 1 - i) % 2 === 0 ? s : -s])
-  }
-  return out
-}
-
-function lettersLabels(letters: readonly Letter[]): number[] {
-  return letters.flatMap((l) => [...l.d, ...l.idx])
-}
-
-function isInternal(l: Letter, x: number): boolean {
-  const labels = [...l.d, ...l.idx]
-  return labels.indexOf(x) !== labels.lastIndexOf(x)
-}
-
-function factorLabels(f: Factor): Set<number> {
-  return new Set(lettersLabels(f.letters))
 }
 
 /** Labels shared between factors or with ε. */
@@ -265,42 +271,10 @@ function externalLabels(m: Monomial): Set<number> {
   const out = new Set<number>(m.eps ?? [])
   const where = new Map<number, number>()
   m.factors.forEach((f, i) => {
-    for (const x of factorLabels(f)) {
+    for (const x of distinctLabels(f.letters)) {
       if (where.has(x) && where.get(x) !== i) out.add(x)
       where.set(x, i)
     }
   })
   return out
 }
-
-/** Enumerate 4^k values of the labels; w = Π η over them when `metric`. */
-function forEachAssignment(labels: readonly number[], visit: (vals: Map<number, number>, w: number) => void, metric = true): void {
-  const vals = new Map<number, number>()
-  const rec = (i: number, w: number) => {
-    if (i === labels.length) { visit(vals, w); return }
-    for (let v = 0; v < 4; v++) { vals.set(labels[i]!, v); rec(i + 1, metric ? w * METRIC[v]! : w) }
-    vals.delete(labels[i]!)
-  }
-  rec(0, 1)
-}
-
-/** The cyclic rotation of a trace with the fewest open labels along the way. */
-function bestRotation(letters: readonly Letter[], external: Set<number>): Letter[] {
-  let best: Letter[] = [...letters]
-  let bestCost = Infinity
-  for (let r = 0; r < letters.length; r++) {
-    const rot = [...letters.slice(r), ...letters.slice(0, r)]
-    let cost = 0
-    const open = new Set<number>()
-    rot.forEach((l, pos) => {
-      const later = new Set(lettersLabels(rot.slice(pos + 1)))
-      const mine = lettersLabels([l]).filter((x) => !isInternal(l, x))
-      const fresh = mine.filter((x) => !open.has(x)).length
-      cost += 4 ** (open.size + fresh)
-      for (const x of mine) { if (external.has(x) || later.has(x)) open.add(x); else open.delete(x) }
-    })
-    if (cost < bestCost) { bestCost = cost; best = rot }
-  }
-  return best
-}
-

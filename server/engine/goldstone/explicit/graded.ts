@@ -3,12 +3,26 @@
  * ("perturbiner" form): X(x) = Σ_S X_S ε_S e^{i k_S·x}, S a subset of the legs, ε_i² = 0, so only
  * square-free products survive and every leg enters at most once. A product of fields convolves
  * over disjoint subsets: (XY)_S = Σ_{T ⊆ S} X_T Y_{S∖T}; ∂_μ multiplies X_S by i k_{S,μ}.
- * Entries are elements of F_p (p < 2^26, so a·b + c < 2^53 stays exact in a double).
+ * Entries are elements of F_p with p < 2^21 (explicitPrimes): a sum of up to 2^11 products a·b
+ * stays below 2^53, exact in a double, so products are reduced once per entry.
  * Reference: Rosly & Selivanov, Phys. Lett. B 399 (1997) 135 (perturbiner); Berends & Giele,
  * Nucl. Phys. B 306 (1988) 759 (recursion over subsets of legs).
  */
 import { EngineInputError } from '../../errors'
-import type { PrimeField } from '../../finite/primeField'
+import { isPrime, type PrimeField } from '../../finite/primeField'
+
+/** Largest modulus of the explicit engine (see the file header). */
+export const EXPLICIT_PRIME_LIMIT = 2 ** 21
+
+/**
+ * The `count` largest primes ≡ 1 (mod 4) below 2^21 (√−1 exists mod p).
+ * @example explicitPrimes(2) // [2097133, 2097101]
+ */
+export function explicitPrimes(count: number): number[] {
+  const out: number[] = []
+  for (let n = EXPLICIT_PRIME_LIMIT - 3; out.length < count; n -= 4) if (isPrime(n)) out.push(n)
+  return out
+}
 
 /** A graded N × N matrix: entry (S, i, j) at S·N² + i·N + j. */
 export type GMat = Float64Array
@@ -23,6 +37,8 @@ export class GradedSpace {
   readonly popcount: Uint8Array
   constructor(readonly F: PrimeField, readonly n: number, readonly N: number) {
     if (n < 1 || n > 9) throw new EngineInputError('GradedSpace', `between 1 and 9 legs are supported, got ${n}`)
+    if (F.p >= EXPLICIT_PRIME_LIMIT) throw new EngineInputError('GradedSpace', `the explicit engine works mod primes below 2^21, got ${F.p}`)
+    if (2 ** n * N * (F.p - 1) ** 2 >= 2 ** 53) throw new EngineInputError('GradedSpace', `${n} legs with ${N} × ${N} matrices would overflow the exact sums mod ${F.p}`)
     this.size = 1 << n
     this.nn = N * N
     this.popcount = new Uint8Array(this.size)
@@ -80,11 +96,28 @@ export class GradedSpace {
     return out
   }
 
-  /** Subsets where X is non-zero (for skipping work in products). */
+  private readonly supports = new WeakMap<GMat, number[]>()
+
+  /** Subsets where X is non-zero (for skipping work in products), cached per array (fields are not mutated after use). */
   support(X: GMat, maxSize = this.n): number[] {
-    const out: number[] = []
-    for (let s = 0; s <= maxSize; s++) for (const S of this.masksBySize[s]!) if (!this.isZeroAt(X, S)) out.push(S)
-    return out
+    let all = this.supports.get(X)
+    if (!all) {
+      all = []
+      for (let s = 0; s <= this.n; s++) for (const S of this.masksBySize[s]!) if (!this.isZeroAt(X, S)) all.push(S)
+      this.supports.set(X, all)
+    }
+    return maxSize >= this.n ? all : all.filter((S) => this.popcount[S]! <= maxSize)
+  }
+
+  /** X += c·Y in place (c = ±1), for accumulators that are not used as factors before they are complete. */
+  accumulate(X: GMat, Y: GMat, sign: 1 | -1): void {
+    const p = this.F.p
+    for (let k = 0; k < X.length; k++) {
+      const y = Y[k]!
+      if (y === 0) continue
+      const s = sign === 1 ? X[k]! + y : X[k]! - y
+      X[k] = s >= p ? s - p : s < 0 ? s + p : s
+    }
   }
 
   /** (XY)_S for every S with at most maxSize legs. */
@@ -94,28 +127,25 @@ export class GradedSpace {
     const out = new Float64Array(this.size * nn)
     const sy = new Uint8Array(this.size)
     for (const S of this.support(Y, maxSize)) sy[S] = 1
-    const acc = new Float64Array(nn)
     for (const T of this.support(X, maxSize)) {
       const free = (this.size - 1) & ~T
-      // every U disjoint from T (including 0) with |T ∪ U| ≤ maxSize
+      const oa = T * nn
       for (let U = free; ; U = (U - 1) & free) {
         if (sy[U] && this.popcount[T | U]! <= maxSize) {
-          const oa = T * nn
           const ob = U * nn
           const oc = (T | U) * nn
-          acc.fill(0)
           for (let i = 0; i < N; i++) {
             for (let k = 0; k < N; k++) {
               const a = X[oa + i * N + k]!
               if (a === 0) continue
-              for (let j = 0; j < N; j++) acc[i * N + j] = (acc[i * N + j]! + a * Y[ob + k * N + j]!) % p
+              for (let j = 0; j < N; j++) out[oc + i * N + j]! += a * Y[ob + k * N + j]!
             }
           }
-          for (let q = 0; q < nn; q++) { const s = out[oc + q]! + acc[q]!; out[oc + q] = s >= p ? s - p : s }
         }
         if (U === 0) break
       }
     }
+    for (let q = 0; q < out.length; q++) if (out[q] !== 0) out[q] = out[q]! % p
     return out
   }
 

@@ -1,16 +1,24 @@
 /**
- * Random external data for amplitudes of the chiral Lagrangian over F_p: massless Goldstone legs
- * (on-shell momenta), scalar-source legs (s and p, i.e. χ and χ†, off-shell) and vector-source legs
- * (l_μ and r_μ, off-shell), with total momentum zero. Minkowski metric η = diag(1, −1, −1, −1);
- * vectors are stored with lower indices. Fields are complexified: χ† and u† are independent
- * letters of polynomial identities, so they are drawn independently (a Hermitian configuration is
- * a special case).
+ * Random external data for amplitudes of the chiral Lagrangian over F_p, with total momentum zero:
+ * massless Goldstone legs ('pion', on shell) and off-shell source legs of one kind each:
+ *   's'  scalar density:        χ = χ† = S
+ *   'p'  pseudoscalar density:  χ = iP, χ† = −iP
+ *   'v'  vector current:        l_μ = r_μ = V e_μ
+ *   'a'  axial current:         r_μ = −l_μ = A e_μ
+ * Values are multilinear in the legs, so these pure kinds lose nothing; they make every linear
+ * letter a single flavor matrix, and by intrinsic parity (u, χ_−, f_− take pion, p and a legs;
+ * χ_+ takes s legs, f_+ takes v legs) a configuration sees one class of the Hilbert series only.
+ * Minkowski metric η = diag(1, −1, −1, −1); vectors are stored with lower indices. Fields are
+ * complexified (a Hermitian configuration is a special case of these polynomial identities).
  */
 import { EngineConsistencyError } from '../../errors'
 import type { PrimeField } from '../../finite/primeField'
 import type { SeededRandom } from '../../finite/rng'
 
-export type LegKind = 'pion' | 'scalar' | 'vector'
+export type LegKind = 'pion' | 's' | 'p' | 'v' | 'a'
+
+/** Legs that carry momentum off shell (every kind but the Goldstone one). */
+export const isSourceLeg = (k: LegKind): boolean => k !== 'pion'
 
 export type Vec4 = [number, number, number, number]
 
@@ -76,9 +84,8 @@ const negate = (F: PrimeField, v: Vec4): Vec4 => [F.neg(v[0]), F.neg(v[1]), F.ne
 function momenta(F: PrimeField, rng: SeededRandom, kinds: readonly LegKind[]): Vec4[] {
   const n = kinds.length
   const ks: Vec4[] = kinds.map((kind) => (kind === 'pion' ? nullVector(F, rng) : randomVector(F, rng)))
-  const last = kinds.lastIndexOf('scalar') >= 0 || kinds.lastIndexOf('vector') >= 0
-    ? Math.max(kinds.lastIndexOf('scalar'), kinds.lastIndexOf('vector'))
-    : -1
+  let last = -1
+  kinds.forEach((k, i) => { if (isSourceLeg(k)) last = i })
   if (last >= 0) {
     ks[last] = negate(F, sumVectors(F, ks.filter((_, i) => i !== last)))
     return ks
@@ -111,16 +118,20 @@ function propagatorsDefined(F: PrimeField, legs: readonly Leg[]): boolean {
 
 /**
  * A random configuration with the given leg kinds.
- * @example randomConfig(F, rng, 3, ['pion', 'pion', 'scalar']).legs[0].kind // 'pion'
+ * @example randomConfig(F, rng, 3, ['pion', 'pion', 'p']).legs[0].kind // 'pion'
  */
 export function randomConfig(F: PrimeField, rng: SeededRandom, N: number, kinds: readonly LegKind[]): Config {
+  const i = F.sqrtMinusOne()
   for (let attempt = 0; attempt < 20; attempt++) {
     const ks = momenta(F, rng, kinds)
-    const legs: Leg[] = kinds.map((kind, i) => {
-      const k = ks[i]!
+    const legs: Leg[] = kinds.map((kind, j) => {
+      const k = ks[j]!
       if (kind === 'pion') return { kind, k, T: randomMatrix(F, rng, N, true) }
-      if (kind === 'scalar') return { kind, k, chi: randomMatrix(F, rng, N, false), chiBar: randomMatrix(F, rng, N, false) }
-      return { kind, k, tl: randomMatrix(F, rng, N, true), tr: randomMatrix(F, rng, N, true), el: randomVector(F, rng), er: randomVector(F, rng) }
+      if (kind === 's') { const S = randomMatrix(F, rng, N, false); return { kind, k, chi: S, chiBar: S } }
+      if (kind === 'p') { const P = randomMatrix(F, rng, N, false); return { kind, k, chi: P.map((x) => F.mul(i, x)), chiBar: P.map((x) => F.mul(F.neg(i), x)) } }
+      const M = randomMatrix(F, rng, N, true)
+      const e = randomVector(F, rng)
+      return { kind, k, tl: kind === 'v' ? M : M.map((x) => F.neg(x)), tr: M, el: e, er: e }
     })
     if (propagatorsDefined(F, legs)) return { legs, N }
   }

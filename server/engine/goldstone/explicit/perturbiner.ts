@@ -69,8 +69,8 @@ export class ClassicalSolution {
     this.r = [0, 1, 2, 3].map(() => sp.zero())
     config.legs.forEach((leg, j) => {
       const o = (1 << j) * sp.nn
-      if (leg.kind === 'scalar') { this.chi.set(leg.chi!, o); this.chiBar.set(leg.chiBar!, o) }
-      if (leg.kind === 'vector') {
+      if (leg.chi) { this.chi.set(leg.chi, o); this.chiBar.set(leg.chiBar!, o) }
+      if (leg.tl) {
         for (let m = 0; m < 4; m++) {
           this.l[m]!.set(leg.tl!.map((x) => F.mul(x, leg.el![m]!)), o)
           this.r[m]!.set(leg.tr!.map((x) => F.mul(x, leg.er![m]!)), o)
