@@ -19,6 +19,7 @@ import { buildBasis, type ClassReport } from '../server/engine/basis/index'
 import { massRatioDimension } from '../server/engine/rules/defaultWeights'
 import { heavyOutput } from './heavyCli'
 import type { OrderZeroReport } from '../server/engine/basis/orderZero'
+import { goldstoneCli } from './lib/goldstoneCli'
 
 function usage(msg: string): never {
   process.stderr.write(`basis: ${msg}\nusage: node --import tsx scripts/basis.ts THEORY.json (--max-dim N [--min-dim M] | --max-order N) [--nf K]\n`)
@@ -58,6 +59,7 @@ function orderZeroJson(z: OrderZeroReport) {
 }
 
 function main(): void {
+  if (goldstoneCli('basis', process.argv.slice(2))) return
   const args = process.argv.slice(2)
   const file = args.find((a, i) => !a.startsWith('--') && (i === 0 || !args[i - 1]!.startsWith('--')))
   if (!file) usage('missing THEORY.json')

@@ -16,6 +16,7 @@ import { parseTheory } from '../server/engine/theory/parseTheory'
 import { countOperators } from '../server/engine/counting/countOperators'
 import { massRatioDimension, massRatioOrder } from '../server/engine/rules/defaultWeights'
 import { heavyOutput } from './heavyCli'
+import { goldstoneCli } from './lib/goldstoneCli'
 
 class UsageError extends Error {}
 
@@ -52,6 +53,7 @@ function loadTheory(source: string): Theory {
 }
 
 function main(): void {
+  if (goldstoneCli('count', process.argv.slice(2))) return
   try {
     const args = parseArgs(process.argv.slice(2))
     const theory = loadTheory(args.source)

@@ -5,6 +5,7 @@ import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
 import { irrepReality, weylDimension } from '../physics/suIrrep'
+import { GoldstoneFrameSchema, checkGoldstoneFrame, type GoldstoneFrame } from './goldstoneFrame'
 
 /**
  * Theory file of Scalewright (JSON, uploaded by users and built by the editor).
@@ -55,12 +56,13 @@ export const TheorySchema = z
   .object({
     name: z.string().min(1).max(80),
     description: z.string().max(2000).optional(),
-    frame: z.enum(['relativistic', 'heavy']),
+    frame: z.enum(['relativistic', 'heavy', 'goldstone']),
     maxOrder: z.number().int().min(0).max(40).optional(),
     groups: z.array(GroupSchema).max(MAX_GROUPS),
     fields: z.array(FieldSchema).max(MAX_FIELDS),
     countingRules: z.array(CountingRuleSchema).optional(),
     heavy: HeavyFrameSchema.optional(),
+    goldstone: GoldstoneFrameSchema.optional(),
   })
   .superRefine((t, ctx) => checkTheory(t, (path, message) => ctx.addIssue({ code: 'custom', path, message })))
 
@@ -70,8 +72,9 @@ export type TheoryField = z.infer<typeof FieldSchema>
 
 type Report = (path: (string | number)[], message: string) => void
 
-function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame }, report: Report): void {
+function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame; goldstone?: GoldstoneFrame }, report: Report): void {
   if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'a heavy particle needs the heavy-particle frame; choose that frame, or remove the heavy particle')
+  checkGoldstoneFrame(t.frame, t.goldstone, report)
   const groups = new Map<string, TheoryGroup>()
   t.groups.forEach((g, i) => {
     if (groups.has(g.name)) report(['groups', i, 'name'], 'is already the name of another symmetry; give each symmetry its own name')
