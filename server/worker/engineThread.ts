@@ -9,6 +9,7 @@ import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { towerGaugeContent } from '../engine/running/gauge/gaugeContent'
 import { gaugeRunningReport } from '../engine/running/gauge/report'
+import { goldstoneTask } from '../engine/goldstone/task'
 import { parseTheory } from '../engine/theory/parseTheory'
 import type { EngineTask } from './engineTask'
 import { toThreadError } from './threadError'
@@ -29,6 +30,7 @@ function run(t: EngineTask): unknown {
     return gaugeRunningReport(towerGaugeContent(steps), t.request, signal)
   }
   const theory = parseTheory(t.theory)
+  if (theory.frame === 'goldstone') return goldstoneTask(theory, t, { onProgress, signal })
   if (t.kind === 'fingerprint') return typedFingerprints(theory, t.classKey, t.texts, t.priorities)
   if (theory.frame === 'heavy') {
     const heavy = () => enumerateHeavyTheory({ ...theory, heavy: theory.heavy && { ...theory.heavy, maxOrder: t.maxOrder ?? theory.heavy.maxOrder } }, { onProgress, signal })

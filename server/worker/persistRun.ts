@@ -4,6 +4,7 @@ import type { BasisReport } from '../engine/basis/buildBasis'
 import type { BasisOperator } from '../engine/basis/describe'
 import type { HeavyEnumeration } from '../engine/heavy/enumerate'
 import { writeHeavyBasis } from './heavyBasis'
+import { isGoldstoneBasis, writeGoldstoneBasis } from './goldstoneBasis'
 import { heavyReport } from '../engine/heavy/report'
 import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
@@ -22,6 +23,9 @@ export async function persistRunResult(db: Knex, run: { id: number, attempts: nu
     if (!await heldRun(trx, run).forUpdate().first('id')) throw new RunLostError(run.id)
     if (run.kind === 'count') {
       await finish(trx, run.id, result)
+    } else if (isGoldstoneBasis(result)) {
+      const basisId = await writeGoldstoneBasis(trx, run, result)
+      await finish(trx, run.id, { goldstone: true, basisId, note: result.note, byOrder: result.byOrder.map((o) => ({ order: o.order, operators: o.rank, hilbert: o.hilbert, tallyOk: o.tallyOk })) })
     } else if (isHeavy(result)) {
       const basisId = await writeHeavyBasis(trx, run, result)
       await finish(trx, run.id, { heavy: true, basisId, note: result.eomNote, byOrder: heavyReport(result, false).map((o) => ({ order: o.order, operators: o.operators, realParameters: o.realParameters, matchesPublished: result.orders.find((x) => x.order === o.order)?.conventionalSpansBasis ?? null })) })

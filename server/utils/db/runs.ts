@@ -53,7 +53,8 @@ export async function runPriorities(theoryId: number, p: { derivativesOn?: strin
  * heavy.maxOrder, at most 4); any other theory in mass dimension (maxDim, or maxOrder + 4).
  */
 export function runReach(definition: unknown, body: { kind: 'count' | 'basis', maxDim?: number, maxOrder?: number }): { maxDim?: number, maxOrder?: number } {
-  const def = (definition ?? {}) as { frame?: string, heavy?: { maxOrder?: number } }
+  const def = (definition ?? {}) as { frame?: string, heavy?: { maxOrder?: number }, goldstone?: { maxOrder?: number } }
+  if (def.frame === 'goldstone') return { maxOrder: goldstoneReach(def.goldstone?.maxOrder, body) }
   if (def.frame === 'heavy') {
     const maxOrder = body.maxOrder ?? def.heavy?.maxOrder ?? 2
     if (maxOrder > MAX_HEAVY_ORDER) fail(400, `Maximum order must be at most ${MAX_HEAVY_ORDER} for a heavy-particle run (up to 1/m^${MAX_HEAVY_ORDER}), not ${maxOrder}`)
@@ -62,4 +63,13 @@ export function runReach(definition: unknown, body: { kind: 'count' | 'basis', m
   const maxDim = body.maxDim ?? massRatioDimension(body.maxOrder!)
   if (maxDim > MAX_RUN_DIMENSION[body.kind]) fail(400, `Maximum order must be at most ${body.kind === 'basis' ? '4 for an explicit basis (dimension 8)' : '12 for a count (dimension 16)'}, not ${massRatioOrder(maxDim)}`)
   return { maxDim }
+}
+
+/** A Goldstone-frame run goes to a chiral order p^k (even; explicit bases to p^6), the theory's own when none is asked. */
+function goldstoneReach(declared: number | undefined, body: { kind: 'count' | 'basis', maxOrder?: number }): number {
+  const highest = body.kind === 'basis' ? 6 : 12
+  const maxOrder = body.maxOrder ?? Math.min(declared ?? 4, highest)
+  if (maxOrder % 2 !== 0) fail(400, `Maximum order must be even for a Goldstone-frame run (operators exist at even powers of p only), not ${maxOrder}`)
+  if (maxOrder > highest) fail(400, `Maximum order must be at most ${highest} for a Goldstone-frame ${body.kind === 'basis' ? 'run: an explicit basis is built up to p^6' : 'count run'}, not ${maxOrder}`)
+  return maxOrder
 }

@@ -57,3 +57,13 @@ describe('explicit p⁶ basis, N = 2', () => {
     expect(o.alternatives.every((a) => a.rewrite!.length > 0)).toBe(true)
   }, 600_000)
 })
+
+describe('the kept choice follows the priorities', () => {
+  it('N = 3, p⁴: asking for ⟨u·u⟩² first keeps it and sets aside a term it replaces by Cayley–Hamilton (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465)', () => {
+    const o = goldstoneBasis({ N: 3, sources: true, maxOrder: 4, minOrder: 4, keep: { 'p^4': ['⟨u_μ u^μ⟩⟨u_ν u^ν⟩'] } }).byOrder[0]!
+    expect(o.kept.map((k) => k.text)).toContain('⟨u_μ u^μ⟩⟨u_ν u^ν⟩')
+    expect([o.rank, o.tallyOk]).toEqual([12, true])
+    const partners = ['⟨u_μ u_ν u^μ u^ν⟩', '⟨u_μ u^μ u_ν u^ν⟩', '⟨u_μ u_ν⟩⟨u^μ u^ν⟩']
+    expect(partners.filter((t) => o.kept.some((k) => k.text === t))).toHaveLength(2)
+  })
+})

@@ -19,7 +19,7 @@ import { expressIn, type Fingerprint } from '../../board/fingerprints'
 import { PrimeField } from '../../finite/primeField'
 import { explicitPrimes } from './graded'
 import { SeededRandom } from '../../finite/rng'
-import { rank as matrixRank } from '../../finite/matrix'
+import { rank as matrixRank, rref } from '../../finite/matrix'
 import { countGoldstone } from '../countGoldstone'
 import { sourceSwitch, type SourceSwitch } from '../blocks'
 import { contactCandidates, cosetCandidates, type Candidate } from './candidates'
@@ -135,10 +135,11 @@ function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress
     if (order === 2 && !anySource) blocks.push(wholeBlock(cands.filter((c) => c.letters === m), m, target))
     else blocks.push(selectBlock(cands.filter((c) => c.letters === m), m, classes, { F, rng, N, oddKinds, signal: o.signal }))
   }
+  const tidy = tidier(F, blocks)
+  if (o.keep?.[key]?.length) reprioritize(F, blocks, o.keep[key]!, tidy)
   const keptRaw = blocks.flatMap((b) => b.kept)
   const live = blocks.flatMap((b) => b.candidates).filter((c) => !keptRaw.includes(c))
   const altRaw = [...live.filter((c) => c.contact), ...live.filter((c) => !c.contact)].slice(0, o.maxAlternatives ?? 40)
-  const tidy = tidier(F, blocks)
   const kept = keptRaw.map(tidy)
   const alternatives = altRaw.map(tidy)
   // the configurations that raised a class's rank separate the kept operators exactly (block triangularity)
@@ -183,6 +184,21 @@ function tidier(F: PrimeField, blocks: BlockResult[]): (c: Candidate) => Candida
   return (c) => {
     const b = blocks.find((x) => x.columns.has(c))
     return b ? simplify(F, c, b.columns.get(c)!, evaluators.get(b)!) : c
+  }
+}
+
+/**
+ * Keep first the operators a user asked for, matched by their shown (merged) text: the greedy
+ * choice is redone on the leading values already computed, in the new priority order.
+ */
+function reprioritize(F: PrimeField, blocks: BlockResult[], keep: string[], tidy: (c: Candidate) => Candidate): void {
+  const wanted = new Map(keep.map((text, i) => [text, i]))
+  for (const b of blocks) {
+    if (b.columns.size === 0) continue
+    const order = b.candidates.map((c, i) => ({ c, k: wanted.get(operatorText(tidy(c).op)) ?? keep.length + i })).sort((x, y) => x.k - y.k)
+    const e = rref(F, b.configs.map((_, r) => order.map(({ c }) => b.columns.get(c)![r]!)))
+    b.candidates = order.map(({ c }) => c)
+    b.kept = e.pivots.map((col) => order[col]!.c)
   }
 }
 

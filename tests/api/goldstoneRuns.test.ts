@@ -1,0 +1,80 @@
+import { describe, it, expect, beforeAll } from 'vitest'
+import { buildWorld, type World } from '../support/fixtures'
+import { messageOf } from '../support/client'
+
+let world: World
+let theoryId: number
+const definition = { name: 'Three light pions', frame: 'goldstone', groups: [], fields: [], goldstone: { coset: 'chiral', N: 3, sources: { scalar: true, vector: true }, maxOrder: 4 } }
+
+beforeAll(async () => {
+  world = await buildWorld()
+  const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition })
+  expect(t.status, JSON.stringify(t.body)).toBe(201)
+  theoryId = t.body.theory.id
+})
+
+async function finished(body: Record<string, unknown>) {
+  const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, body)
+  expect(start.status, JSON.stringify(start.body)).toBe(201)
+  const end = Date.now() + 120_000
+  while (Date.now() < end) {
+    const { body: r } = await world.owner.client.get(`/api/runs/${start.body.run.id}`)
+    if (r.run.status === 'done') return r.run
+    if (r.run.status === 'failed') throw new Error(r.run.error)
+    await new Promise((res) => setTimeout(res, 200))
+  }
+  throw new Error('run did not finish')
+}
+
+describe('Goldstone frame through the run pipeline', () => {
+  it('counts per chiral order to p⁸: 2, 12, 117, 1959 for N = 3 with sources (Graf, Henning, Lu, Melia, Murayama, JHEP 01 (2021) 142)', async () => {
+    const run = await finished({ kind: 'count', maxOrder: 8 })
+    expect(run.maxOrder).toBe(8)
+    expect(run.summary.byOrder.map((o: { operators: number }) => o.operators)).toEqual([2, 12, 117, 1959])
+  })
+
+  it('stores the explicit p⁴ basis on the board, one class per order: L1 … L10, H1, H2 kept (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465); setting one aside leaves the order incomplete', async () => {
+    const run = await finished({ kind: 'basis' })
+    expect(run.summary.byOrder.map((o: { order: number, operators: number, tallyOk: boolean }) => [o.order, o.operators, o.tallyOk])).toEqual([[2, 2, true], [4, 12, true]])
+    const { body } = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}`)
+    const p4 = body.basis.classes.find((c: { key: string }) => c.key === 'p^4')
+    expect(p4).toMatchObject({ order: 4, rank: 12, hilbert: 12, tallyOk: true, frame: 'goldstone', contact: { hilbert: 2, rank: 2, kept: 2 } })
+    const kept = body.operators.filter((o: { column: string, order: number }) => o.column === 'kept' && o.order === 4)
+    expect(kept).toHaveLength(12)
+    const target = kept.find((o: { text: string }) => o.text === '⟨u_μ u_ν u^μ u^ν⟩')
+    const moved = await world.byRole.editor.client.post(`/api/operators/${target.id}/move`, { column: 'set_aside', position: 0, version: target.version })
+    expect(moved.status, JSON.stringify(moved.body)).toBe(200)
+    expect(moved.body.coverage).toEqual({ classKey: 'p^4', rank: 11, required: 12, complete: false })
+    // N = 3: ⟨u·u⟩² is the Cayley–Hamilton partner of the term set aside (Gasser & Leutwyler 1985): kept instead, the order is complete again
+    const square = body.operators.find((o: { text: string, column: string }) => o.text === '⟨u_μ u^μ⟩⟨u_ν u^ν⟩' && o.column === 'set_aside')
+    const back = await world.byRole.editor.client.post(`/api/operators/${square.id}/move`, { column: 'kept', position: 0, version: square.version })
+    expect(back.status, JSON.stringify(back.body)).toBe(200)
+    expect(back.body.coverage).toEqual({ classKey: 'p^4', rank: 12, required: 12, complete: true })
+    // exports carry the chiral orders and both columns
+    const json = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}/export?format=json`)
+    const p4json = json.body.orders.find((o: { order: number }) => o.order === 4)
+    expect(p4json.classes[0].operators.filter((op: { column: string }) => op.column === 'kept')).toHaveLength(12)
+    const tex = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}/export?format=latex`)
+    expect(tex.status).toBe(200)
+    expect(String(tex.body)).toContain('kept operators of order 4')
+    // a new run that keeps first what this basis keeps makes the same choice
+    const again = await finished({ kind: 'basis', maxOrder: 4, priorities: { keepFromBasis: run.summary.basisId } })
+    const next = await world.byRole.viewer.client.get(`/api/bases/${again.summary.basisId}`)
+    const keptNow = next.body.operators.filter((o: { column: string, order: number }) => o.column === 'kept' && o.order === 4).map((o: { text: string }) => o.text)
+    expect(keptNow).toContain('⟨u_μ u^μ⟩⟨u_ν u^ν⟩')
+    expect(keptNow).not.toContain('⟨u_μ u_ν u^μ u^ν⟩')
+    expect(keptNow).toHaveLength(12)
+  })
+
+  it('refuses a too-deep or odd chiral order in the user\'s terms and starts nothing', async () => {
+    const deep = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'basis', maxOrder: 8 })
+    expect(deep.status).toBe(400)
+    expect(messageOf(deep)).toMatch(/an explicit basis is built up to p\^6/)
+    const odd = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxOrder: 5 })
+    expect(odd.status).toBe(400)
+    expect(messageOf(odd)).toMatch(/even/)
+    const plain = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 6 })
+    expect(plain.status).toBe(201) // a mass dimension is ignored: the theory's own chiral order applies
+    expect(plain.body.run.maxOrder).toBe(4)
+  })
+})
