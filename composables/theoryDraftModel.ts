@@ -6,6 +6,7 @@ import type { Theory } from '../shared/schemas/theory'
 import { LORENTZ_KINDS, type LorentzKind } from '../shared/schemas/lorentzKind'
 import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
 import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
+import { type DraftGoldstone, goldstoneToDraft, goldstoneToTheory } from './theoryDraft/goldstoneBlock'
 
 export type { DraftHeavy }
 
@@ -31,7 +32,7 @@ export interface DraftRule {
 export interface TheoryDraft {
   name: string
   description: string
-  frame: 'relativistic' | 'heavy'
+  frame: 'relativistic' | 'heavy' | 'goldstone'
   maxOrder: string
   groups: DraftGroup[]
   fields: DraftField[]
@@ -40,6 +41,8 @@ export interface TheoryDraft {
   hasRules: boolean
   /** The heavy-particle block; written to the file only while the frame is "heavy". */
   heavy?: DraftHeavy
+  /** The Goldstone block; written to the file only while the frame is "goldstone". */
+  goldstone?: DraftGoldstone
 }
 
 /** A problem found while reading the typed text, at the theory-file path of its input. */
@@ -83,11 +86,12 @@ export function theoryToDraft(input: unknown): TheoryDraft {
   const byName = new Map(groups.map((g) => [g.name, g.uid]))
   const fields = list(input.fields).map((f) => fieldToDraft(isRecord(f) ? f : {}, byName))
   const rules = list(input.countingRules).map((r) => ruleToDraft(isRecord(r) ? r : {}))
-  const frame = input.frame === 'heavy' ? 'heavy' : 'relativistic'
+  const frame = input.frame === 'heavy' || input.frame === 'goldstone' ? input.frame : 'relativistic'
   return {
     name: text(input.name), description: text(input.description), frame, maxOrder: text(input.maxOrder),
     groups, fields, countingRules: rules, hasRules: Array.isArray(input.countingRules),
     ...(input.heavy !== undefined ? { heavy: heavyToDraft(input.heavy, byName) } : {}),
+    ...(input.goldstone !== undefined ? { goldstone: goldstoneToDraft(input.goldstone) } : {}),
   }
 }
 
@@ -138,6 +142,7 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
   theory.fields = d.fields.map((f, i) => fieldToTheory(f, i, d.groups, names, issues))
   if (d.hasRules || d.countingRules.length) theory.countingRules = d.countingRules.map(ruleToTheory)
   if (d.heavy !== undefined && d.frame === 'heavy') theory.heavy = heavyToTheory(d.heavy, d.groups, issues)
+  if (d.goldstone !== undefined && d.frame === 'goldstone') theory.goldstone = goldstoneToTheory(d.goldstone, issues)
   return { theory, issues }
 }
 
@@ -174,6 +179,7 @@ function readInt(raw: string, path: (string | number)[], issues: DraftIssue[], m
 
 /** Where an issue is shown: its path cut to the depth of one input ("fields.4.charges.Y"). */
 export function issueKey(path: readonly PropertyKey[]): string {
+  if (path[0] === 'goldstone') return path.slice(0, path[1] === 'sources' ? 3 : 2).map(String).join('.')
   if (path[0] === 'heavy') {
     const depth = path[1] === 'particle' && (path[2] === 'reps' || path[2] === 'charges') ? 4
       : path[1] === 'particle' || path[1] === 'antiparticle' ? 3 : 2

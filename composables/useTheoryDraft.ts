@@ -7,6 +7,7 @@ import {
   emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newUid,
 } from './theoryDraftModel'
 import { newHeavy } from './theoryDraft/heavyBlock'
+import { newGoldstone } from './theoryDraft/goldstoneBlock'
 import { apiMessage } from './useValidatedForm'
 
 function move<T>(rows: T[], i: number, delta: number) {
@@ -79,6 +80,8 @@ export function useTheoryDraft(initial?: unknown) {
     removeWeight: (r: number, w: number) => draft.value.countingRules[r]!.weights.splice(w, 1),
     addHeavy: () => { draft.value.heavy = newHeavy(draft.value.groups) },
     removeHeavy: () => { delete draft.value.heavy },
+    addGoldstone: () => { draft.value.goldstone = newGoldstone() },
+    removeGoldstone: () => { delete draft.value.goldstone },
   }
 
   return { draft, checked, dirty, load, markClean, error, markEdited, reveal, ...ops }

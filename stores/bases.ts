@@ -18,6 +18,9 @@ export interface BoardOperator {
 export interface BoardClass {
   order: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null
   realParameters?: number, cpEven?: number | null, cpOdd?: number | null, pEven?: number | null, pOdd?: number | null, parityReason?: string | null
+  /** Goldstone frame: one class per chiral order, with the Hilbert-series classes it holds. */
+  frame?: 'goldstone', hilbertClasses?: { key: string, hilbert: number, rank: number, tallyOk: boolean }[]
+  contact?: { hilbert: number, rank: number, kept: number }, evaluatedAtN?: number
 }
 
 /** A rewrite onto the kept operators; `exact: false` when the coefficients are beyond what the fingerprints give exactly. */

@@ -11,6 +11,7 @@ import qed from './qed.json'
 import scalarQed from './scalar-qed.json'
 import qcdLike from './qcd-like.json'
 import heavyVexonium from './heavy-vexonium.json'
+import umbralPions from './umbral-pions.json'
 
 export interface Preset {
   id: string
@@ -28,6 +29,8 @@ export const PRESETS: readonly Preset[] = [
   { id: 'qcd-like', title: 'QCD-like', description: 'SU(3) gauge theory with 2 Dirac quark flavors and the gluon.', theory: qcdLike as Theory },
   // written by the heavy-particle helper; frame "heavy" (not counted by the Hilbert series)
   { id: 'heavy-vexonium', title: 'Vexonium (heavy frame)', description: 'A heavy fermion and its antiparticle bound by a dark U(1), in the heavy-particle frame.', theory: heavyVexonium as unknown as Theory },
+  // frame "goldstone": counted and built per chiral order (server/engine/goldstone)
+  { id: 'umbral-pions', title: 'Umbral pions (Goldstone frame)', description: 'Eight light pions of a hidden confining sector with three light flavors, with scalar and vector sources, to p⁶.', theory: umbralPions as unknown as Theory },
 ]
 
 /** The preset with this id, or undefined. */

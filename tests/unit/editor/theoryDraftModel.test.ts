@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest'
 import { theoryToDraft, draftToTheory, issueKey, newField } from '../../../composables/theoryDraftModel'
 import { newHeavy } from '../../../composables/theoryDraft/heavyBlock'
+import { newGoldstone } from '../../../composables/theoryDraft/goldstoneBlock'
 import { TheorySchema } from '../../../shared/schemas/theory'
 import { PRESETS } from '../../../shared/presets/index'
 import { checkAnomalies } from '../../../server/engine/theory/anomalies'
@@ -138,5 +139,32 @@ describe('the heavy particle in the form', () => {
     d.heavy!.particle = 'Ad' // the dark photon's name
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
     expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['heavy.particle.name', 'is already the name of a field of the roster; choose another name than "Ad"']])
+  })
+})
+
+describe('the Goldstone block in the form (common practice: lossless form model)', () => {
+  const umbral = () => theoryToDraft(PRESETS.find((p) => p.id === 'umbral-pions')!.theory)
+
+  it('a relativistic frame leaves the block out; a new block is three flavors with all sources to p⁴', () => {
+    const d = umbral()
+    d.frame = 'relativistic'
+    expect(draftToTheory(d).theory.goldstone).toBeUndefined()
+    d.frame = 'goldstone'
+    d.goldstone = newGoldstone()
+    expect(draftToTheory(d).theory.goldstone).toEqual({ coset: 'chiral', N: 3, sources: { scalar: true, vector: true }, maxOrder: 4 })
+  })
+
+  it('typing errors are keyed to their inputs; the schema\'s range checks too', () => {
+    const d = umbral()
+    d.goldstone!.N = 'three'
+    d.goldstone!.maxOrder = ''
+    expect(draftToTheory(d).issues.map((i) => [issueKey(i.path), i.message])).toEqual([
+      ['goldstone.N', 'N is a whole number or "general", but got "three"'],
+      ['goldstone.maxOrder', 'choose the highest chiral order (an even power of p, 2 to 14)'],
+    ])
+    d.goldstone!.N = '1'
+    d.goldstone!.maxOrder = '6'
+    const r = TheorySchema.safeParse(draftToTheory(d).theory)
+    expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['goldstone.N', 'Goldstone frame: N must be from 2 to 12 (or "general") for the chiral coset, but N = 1']])
   })
 })
