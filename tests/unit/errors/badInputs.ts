@@ -28,6 +28,7 @@ import { vacuumPolarizationOneLoop, vacuumPolarizationSeries } from '../../../se
 import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../../../server/engine/rules/index'
 import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, alphaSAboveThreshold, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningReport, runGaugeCouplings, simpleGroupFactors, towerGaugeContent } from '../../../server/engine/running/gauge/index'
+import { goldstoneCases } from './goldstoneBadInputs'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 
@@ -203,4 +204,4 @@ const gaugeRunningCases: BadInput[] = [
   { name: 'a gauge running report over a reversed range', run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }), says: /lower to a higher/ },
 ]
 
-export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...libraryCases]
+export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...libraryCases]
