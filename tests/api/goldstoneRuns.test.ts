@@ -34,7 +34,7 @@ describe('Goldstone frame through the run pipeline', () => {
   })
 
   it('stores the explicit p⁴ basis on the board, one class per order: L1 … L10, H1, H2 kept (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465); setting one aside leaves the order incomplete', async () => {
-    const run = await finished({ kind: 'basis' })
+    const run = await finished({ kind: 'basis', maxOrder: 4 }) // a run request names its reach: one with neither maxDim nor maxOrder is refused
     expect(run.summary.byOrder.map((o: { order: number, operators: number, tallyOk: boolean }) => [o.order, o.operators, o.tallyOk])).toEqual([[2, 2, true], [4, 12, true]])
     const { body } = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}`)
     const p4 = body.basis.classes.find((c: { key: string }) => c.key === 'p^4')
