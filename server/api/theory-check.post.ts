@@ -3,16 +3,16 @@ import { readJson } from '../utils/http/readJson'
 import { requireUser } from '../utils/auth/currentUser'
 import { TheorySchema, formatTheoryIssues } from '../../shared/schemas/theory'
 import { TheoryCheckSchema, type TheoryCheckReply, type AnomalyFailure } from '../../shared/schemas/theoryCheck'
-import { anomalyConditions } from '../engine/theory/anomalies'
+import { compute } from '../utils/compute/computePool'
 
 // The editor's live check: validate the theory file (400 naming the field at fault) and list
 // the gauge-anomaly conditions its chiral fermions fail, with their exact sums.
 export default defineApiHandler(async (event): Promise<TheoryCheckReply> => {
-  await requireUser(event)
+  const user = await requireUser(event)
   const { theory } = await readJson(event, TheoryCheckSchema)
   const parsed = TheorySchema.safeParse(theory)
   if (!parsed.success) fail(400, formatTheoryIssues(theory, parsed.error.issues))
-  const conditions = anomalyConditions(parsed.data!)
+  const conditions = await compute('anomalies', parsed.data!, user.id)
   const anomalies = conditions.filter((c) => !c.ok) as AnomalyFailure[]
   const issues = anomalies.map((a) => (a.name.endsWith('Witten') ? `${a.name}: ${a.sum} is odd (must be even)` : `${a.name}: sum ${a.sum} (must vanish)`)).join('\n')
   return { ok: anomalies.length === 0, issues, anomalies, checked: conditions.length }

@@ -4,6 +4,7 @@ import {
   DerivedScaleSchema, ExpansionParameterSchema, OrderListSchema, ScaleLadderInputSchema, ScaleSchema,
 } from './scaleLadder'
 import { SCALE_UNITS } from '../physics/scaleUnits'
+import { ladderOverBudget, overBudgetMessage } from './ladderBudget'
 
 // Requests of the scale ladder, the tower (integrate out) and the running-coupling routes.
 // Every object is strict, so a misspelt key is a 400 naming it instead of being ignored.
@@ -14,7 +15,10 @@ export const LadderDocumentSchema = ScaleLadderInputSchema.extend({
   parameters: z.array(ExpansionParameterSchema.strict()).max(20, { message: 'may list at most 20 expansion parameters' }),
   derived: z.array(DerivedScaleSchema.strict()).max(30, { message: 'may list at most 30 derived scales' }).optional(),
   orders: OrderListSchema.min(1, { message: 'must list at least one order to estimate' }),
-}).strict()
+}).strict().superRefine((doc, ctx) => {
+  // The size budget: exact numbers too long to compute quickly are refused before any work.
+  for (const o of ladderOverBudget(doc).slice(0, 3)) ctx.addIssue({ code: 'custom', path: o.path, message: overBudgetMessage(o) })
+})
 export type LadderDocument = z.infer<typeof LadderDocumentSchema>
 
 export const LadderSaveSchema = z.object({

@@ -11,6 +11,7 @@ import {
   type ExpansionParameterInput, type OrderSpec, type ScaleInput, type ScaleLadderInput,
 } from '../../../shared/schemas/scaleLadder'
 import { isLengthUnit, toMeV, UNIT_POWER_OF_TEN } from './units'
+import { ladderOverBudget, overBudgetMessage } from '../../../shared/schemas/ladderBudget'
 import { derivedScale, powRational, type DerivedScale, type ResolvedScale } from './derivedScales'
 
 export interface LadderScale {
@@ -110,6 +111,8 @@ export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[]): 
   const ords = OrderListSchema.safeParse(orders)
   if (!ords.success) throw new EngineInputError('buildScaleLadder', ords.error.issues.map((i) => describeIssue({ path: ['orders', ...i.path], message: i.message }, { orders })).join('; '))
   const inp = parsed.data
+  const over = ladderOverBudget({ ...inp, orders: ords.data })
+  if (over.length) throw new EngineInputError('buildScaleLadder', overBudgetMessage(over[0]!))
   const scales = new Map<string, ResolvedScale>()
   for (const s of inp.scales) {
     if (scales.has(s.name)) throw new EngineInputError('buildScaleLadder', `Two scales are named "${s.name}"; give each scale its own name`)

@@ -4,6 +4,7 @@ import { EngineInputError } from '../../engine/errors'
 import { describeZodError } from '../../../shared/schemas/describeZodError'
 import { databaseUnavailableError } from './databaseUnavailable'
 import { reportInternalError } from '../internalError'
+import { computeBusyError } from '../compute/computeErrors'
 
 /**
  * The one error mapper of the API: every route is written with it, so every answer is JSON with
@@ -32,6 +33,8 @@ function answer(statusCode: number, statusMessage: string, message: string): H3E
 export const ERROR_CLASSIFIERS: ErrorClassifier[] = [
   // PostgreSQL away (stopped, restarting): 503 with Retry-After, not an internal error.
   (e, event) => (event ? databaseUnavailableError(event, e) : undefined),
+  // Too much work waiting (compute lanes, runs): 429 with Retry-After.
+  (e, event) => (event ? computeBusyError(event, e) : undefined),
   // Thrown on purpose by routes (fail(), requireUser, 404s); a bare 5xx from a library is not ours.
   (e) => (isError(e) && (e.statusCode < 500 || typeof (e.data as { message?: unknown } | undefined)?.message === 'string') ? e : undefined),
   (e) => (e instanceof ZodError ? answer(400, 'Bad Request', describeZodError(e)) : undefined),

@@ -1,4 +1,5 @@
-import { readRawBody, getHeader, type H3Event } from 'h3'
+import type { H3Event } from 'h3'
+import { readCappedText } from './cappedBody'
 import type { ZodType } from 'zod'
 import { fail } from './apiHandler'
 import { describeZodError } from '../../../shared/schemas/describeZodError'
@@ -7,16 +8,14 @@ import { nulPlace, nulMessage } from './nulText'
 export const MAX_BODY_BYTES = 512 * 1024
 
 /**
- * Read the JSON body and validate it with a zod schema. Malformed JSON → 400, oversized → 413,
- * a NUL character in any text → 400, schema failure → 400 naming each field at fault in the
- * user's words (the body supplies the names of list entries, e.g. field 3 "phi"). Nothing is
- * written before this.
+ * Read the JSON body (counted as it streams in, see cappedBody.ts; 413 before more than the cap
+ * is held) and validate it with a zod schema. Malformed JSON → 400, oversized → 413, a NUL
+ * character in any text → 400, schema failure → 400 naming each field at fault in the user's
+ * words (the body supplies the names of list entries, e.g. field 3 "phi"). Nothing is written
+ * before this.
  */
 export async function readJson<T>(event: H3Event, schema: ZodType<T>, maxBytes = MAX_BODY_BYTES): Promise<T> {
-  const declared = Number(getHeader(event, 'content-length') || 0)
-  if (declared > maxBytes) fail(413, `Request body too large: ${declared} bytes, the limit is ${maxBytes}`)
-  const raw = await readRawBody(event, 'utf8')
-  if (raw && Buffer.byteLength(raw) > maxBytes) fail(413, `Request body too large: the limit is ${maxBytes} bytes`)
+  const raw = await readCappedText(event, maxBytes)
   let value: unknown = {}
   if (raw && raw.trim()) {
     try {

@@ -4,7 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { basisOr404 } from '../../../utils/db/bases'
 import { ladderOf } from '../../../utils/db/scaleLadders'
 import { ordersOfBasis, setAsideOrders } from '../../../utils/db/setAsideBelow'
-import { ordersBelowTarget } from '../../../utils/scales/ladderEstimates'
+import { compute } from '../../../utils/compute/computePool'
 import { SetAsideBelowSchema } from '../../../../shared/schemas/scaleRequests'
 import type { StoredClass } from '../../../utils/db/boardMath'
 
@@ -16,7 +16,7 @@ export default defineApiHandler(async (event) => {
   const { user } = await requireGroupRole(event, basis.group_id, 'editor')
   const stored = await ladderOf(basis.theory_id)
   if (!stored) fail(409, 'This theory has no scale ladder yet: save one on its scale-ladder page, then set orders aside')
-  const estimates = ordersBelowTarget(stored!.ladder, await ordersOfBasis(basis.id), target)
+  const estimates = await compute('ordersBelowTarget', { doc: stored!.ladder, orders: await ordersOfBasis(basis.id), target }, user.id)
   const below = estimates.filter((o) => o.belowTarget).map((o) => o.order)
   const { count, basisVersion } = await setAsideOrders(basis.id, below, user.id, basis.classes as StoredClass[])
   return { count, orders: below, estimates, target, basisVersion }

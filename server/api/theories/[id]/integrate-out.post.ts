@@ -3,7 +3,7 @@ import { intParam, readJson } from '../../../utils/http/readJson'
 import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404, publicTheory } from '../../../utils/db/theories'
 import { createChildTheory } from '../../../utils/db/towers'
-import { integrateOut } from '../../../engine/scales/integrateOut'
+import { compute } from '../../../utils/compute/computePool'
 import { IntegrateOutSchema } from '../../../../shared/schemas/scaleRequests'
 import { TheorySchema, formatTheoryIssues, type Theory } from '../../../../shared/schemas/theory'
 import { EngineInputError } from '../../../engine/errors'
@@ -15,7 +15,7 @@ export default defineApiHandler(async (event) => {
   const body = await readJson(event, IntegrateOutSchema)
   const parent = await theoryOr404(intParam(event, 'id'))
   const { user } = await requireGroupRole(event, parent.group_id, 'editor')
-  const step = integrateOut(TheorySchema.parse(parent.definition) as Theory, body.fields, body.scale)
+  const step = await compute('integrateOut', { parent: TheorySchema.parse(parent.definition) as Theory, fields: body.fields, scale: body.scale }, user.id)
   const check = TheorySchema.safeParse(step.child)
   if (!check.success) throw new EngineInputError('integrateOut', `The theory left below the threshold would not be valid:\n${formatTheoryIssues(step.child, check.error.issues)}`)
   return once(event, user.id, body, async () => {

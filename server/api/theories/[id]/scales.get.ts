@@ -3,22 +3,24 @@ import { intParam } from '../../../utils/http/readJson'
 import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { ladderOf } from '../../../utils/db/scaleLadders'
-import { computeLadder } from '../../../utils/scales/ladderEstimates'
+import { compute } from '../../../utils/compute/computePool'
 import { EngineInputError } from '../../../engine/errors'
 import { SCALE_UNITS } from '../../../engine/scales/units'
 import { partnerMap } from '../../../engine/scales/massPartners'
 import { TheorySchema } from '../../../../shared/schemas/theory'
 
-// Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet),
-// and the fermions' mass partners (which fields must be integrated out together).
+// Everyone in the group reads the scale ladder and its computed estimates (version 0: none saved yet).
+// The estimates are computed in the compute pool and remembered by input (a stored ladder saved
+// before the size budget existed may be over it: its problem is shown, and the read stays fast).
+// It also answers the fermions' mass partners (which fields must be integrated out together).
 export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
-  const { role } = await requireGroupRole(event, theory.group_id, 'viewer')
+  const { role, user } = await requireGroupRole(event, theory.group_id, 'viewer')
   const stored = await ladderOf(theory.id)
   let computed = null
   let problem = ''
   try {
-    computed = stored ? computeLadder(stored.ladder) : null
+    computed = stored ? await compute('ladder', stored.ladder, user.id) : null
   } catch (e) {
     // A stored ladder the engine refuses is shown with its message; anything else is a bug.
     if (!(e instanceof EngineInputError)) throw e

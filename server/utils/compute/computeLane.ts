@@ -1,0 +1,106 @@
+import { Worker } from 'node:worker_threads'
+import { EngineError } from '../../engine/errors'
+import { fromThreadError, type ThreadErrorMessage } from '../../worker/threadError'
+import { ComputeBudgetError, ComputeBusyError } from './computeErrors'
+import { computeThreadEntry } from './threadEntry'
+
+export interface LaneLimits {
+  /** Threads at most (each computes one task at a time). */
+  threads: number
+  /** Tasks waiting for a thread at most; one more is refused with 429. */
+  queue: number
+  /** Tasks (waiting or computing) of one user at most; one more is refused with 429. */
+  perUser: number
+  /** A thread idle this long ends (its memory is returned). */
+  idleMs: number
+}
+interface Job { id: number, kind: string, input: unknown, user: string, budgetMs: number, what: string, resolve: (v: unknown) => void, reject: (e: Error) => void }
+interface Slot { worker: Worker, job?: Job, timer?: NodeJS.Timeout, idle?: NodeJS.Timeout }
+
+/**
+ * A small bounded pool of engine threads with a wait queue: the event loop only sends inputs
+ * and receives results. A task over its time budget ends its thread (synchronous engine loops
+ * cannot be interrupted otherwise); a fresh thread takes the next task.
+ */
+export class ComputeLane {
+  private slots: Slot[] = []
+  private waiting: Job[] = []
+  private perUser = new Map<string, number>()
+  private nextId = 1
+  constructor(readonly name: string, readonly limits: LaneLimits) {}
+
+  get stats() { return { threads: this.slots.length, busy: this.slots.filter((s) => s.job).length, waiting: this.waiting.length } }
+
+  run(kind: string, input: unknown, opts: { user: string, budgetMs: number, what: string }): Promise<unknown> {
+    const mine = this.perUser.get(opts.user) ?? 0
+    if (mine >= this.limits.perUser) {
+      throw new ComputeBusyError(`You already have ${mine} ${this.name} in progress (the limit is ${this.limits.perUser} at a time); wait for them to finish, then try again`, 2)
+    }
+    const free = this.slots.some((s) => !s.job) || this.slots.length < this.limits.threads
+    if (!free && this.waiting.length >= this.limits.queue) {
+      throw new ComputeBusyError(`The server is busy: ${this.waiting.length} ${this.name} are waiting for a thread (the limit is ${this.limits.queue}); try again in a few seconds`, 5)
+    }
+    this.perUser.set(opts.user, mine + 1)
+    return new Promise((resolve, reject) => {
+      this.waiting.push({ id: this.nextId++, kind, input, ...opts, resolve, reject })
+      this.pump()
+    }).finally(() => {
+      const n = (this.perUser.get(opts.user) ?? 1) - 1
+      if (n > 0) this.perUser.set(opts.user, n)
+      else this.perUser.delete(opts.user)
+    })
+  }
+
+  private pump() {
+    while (this.waiting.length) {
+      const slot = this.slots.find((s) => !s.job) ?? (this.slots.length < this.limits.threads ? this.spawn() : undefined)
+      if (!slot) return
+      this.start(slot, this.waiting.shift()!)
+    }
+  }
+
+  private start(slot: Slot, job: Job) {
+    clearTimeout(slot.idle)
+    slot.job = job
+    slot.timer = setTimeout(() => {
+      this.retire(slot)
+      job.reject(new ComputeBudgetError(`${job.what} takes longer than its budget of ${job.budgetMs / 1000} s, so the server stopped it. Ask for less (fewer orders, smaller powers or shorter numbers), or start a background run where there is one`))
+    }, job.budgetMs)
+    slot.worker.postMessage({ id: job.id, kind: job.kind, input: job.input })
+  }
+
+  private spawn(): Slot {
+    const slot: Slot = { worker: new Worker(computeThreadEntry()) }
+    slot.worker.unref()
+    slot.worker.on('message', (msg: { id: number, ok: boolean, result?: unknown, name?: string, message?: string }) => {
+      const job = slot.job
+      if (!job || job.id !== msg.id) return
+      this.finish(slot)
+      if (msg.ok) job.resolve(msg.result)
+      else job.reject(fromThreadError(msg.error!))
+    })
+    slot.worker.on('error', (error) => { const job = slot.job; this.retire(slot); job?.reject(error as Error) })
+    slot.worker.on('exit', (code) => { const job = slot.job; this.retire(slot); job?.reject(new EngineError(`engine thread exited with code ${code}`)) })
+    this.slots.push(slot)
+    return slot
+  }
+
+  private finish(slot: Slot) {
+    clearTimeout(slot.timer)
+    slot.job = undefined
+    slot.idle = setTimeout(() => this.retire(slot), this.limits.idleMs)
+    slot.idle.unref()
+    this.pump()
+  }
+
+  /** Take a thread out of the pool and end it; its task (if any) is settled by the caller. */
+  private retire(slot: Slot) {
+    if (!this.slots.includes(slot)) return
+    clearTimeout(slot.timer)
+    clearTimeout(slot.idle)
+    slot.job = undefined
+    this.slots = this.slots.filter((s) => s !== slot)
+    void slot.worker.terminate()
+    this.pump()
+  }
+}

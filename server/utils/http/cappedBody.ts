@@ -1,0 +1,39 @@
+import { setResponseHeader, type H3Event } from 'h3'
+import { fail } from './apiHandler'
+
+/**
+ * The request body as text, counted while it arrives: past `maxBytes` reading stops at once and
+ * the answer is 413 (the connection is closed after it), so neither a chunked body without
+ * Content-Length nor a false one is ever held in memory beyond the cap.
+ */
+export async function readCappedText(event: H3Event, maxBytes: number): Promise<string> {
+  const declared = Number(event.node.req.headers['content-length'] || 0)
+  if (declared > maxBytes) tooLarge(event, maxBytes, declared)
+  const req = event.node.req
+  if (req.readableEnded) return ''
+  const chunks: Buffer[] = []
+  let total = 0
+  await new Promise<void>((resolve, reject) => {
+    const onData = (chunk: Buffer) => {
+      total += chunk.length
+      if (total <= maxBytes) return void chunks.push(chunk)
+      cleanup()
+      chunks.length = 0
+      reject(new Error('over the cap'))
+    }
+    const onEnd = () => { cleanup(); resolve() }
+    const onError = (error: Error) => { cleanup(); reject(error) }
+    const cleanup = () => { req.off('data', onData); req.off('end', onEnd); req.off('error', onError) }
+    req.on('data', onData).on('end', onEnd).on('error', onError)
+  }).catch(() => tooLarge(event, maxBytes))
+  return Buffer.concat(chunks).toString('utf8')
+}
+
+function tooLarge(event: H3Event, maxBytes: number, declared?: number): never {
+  const req = event.node.req
+  req.pause()
+  // Unread bytes may still be on their way: close the connection once the 413 is sent.
+  setResponseHeader(event, 'Connection', 'close')
+  event.node.res.once('finish', () => req.destroy())
+  return fail(413, `Request body too large${declared ? `: ${declared} bytes` : ''}; the limit is ${maxBytes.toLocaleString('en')} bytes`)
+}

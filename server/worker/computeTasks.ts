@@ -1,0 +1,39 @@
+// The engine calls that routes make, by name. They run in the compute pool's threads
+// (server/utils/compute/computePool.ts), never on the server's event loop.
+import { computeLadder, ordersBelowTarget } from '../utils/scales/ladderEstimates'
+import { qcdRunning, qedRunning } from '../utils/scales/runningCurves'
+import { anomalyConditions } from '../engine/theory/anomalies'
+import { integrateOut } from '../engine/scales/integrateOut'
+import { countOperators } from '../engine/counting/countOperators'
+import { typedFingerprints } from '../engine/board/typedOperator'
+import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
+import { heavyReport } from '../engine/heavy/report'
+import { parseTheory } from '../../shared/schemas/theory'
+import type { Theory } from '../../shared/schemas/theory'
+import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
+import type { Priorities } from '../engine/basis/classBasis'
+
+interface QuickCount { theory: unknown, maxDim: number, nf?: number }
+
+/** A quick count (the editor's): light theories by dimension, heavy-frame theories by order. */
+function quickCount({ theory, maxDim, nf }: QuickCount) {
+  const parsed = parseTheory(theory)
+  if (parsed.frame === 'heavy') return { heavy: true, byOrder: heavyReport(enumerateHeavyTheory(parsed, {}), false) }
+  return countOperators(parsed, { maxDim, nf, flavorPolynomials: true })
+}
+
+export const COMPUTE_TASKS = {
+  ladder: (doc: LadderDocument) => computeLadder(doc),
+  ordersBelowTarget: (a: { doc: LadderDocument, orders: number[], target: number }) => ordersBelowTarget(a.doc, a.orders, a.target),
+  qcdRunning: (req: RunningQcdRequest) => qcdRunning(req),
+  qedRunning: (req: RunningQedRequest) => qedRunning(req),
+  anomalies: (theory: Theory) => anomalyConditions(theory),
+  integrateOut: (a: { parent: Theory, fields: string[], scale: Parameters<typeof integrateOut>[2] }) => integrateOut(a.parent, a.fields, a.scale),
+  quickCount,
+  typedFingerprints: (a: { theory: unknown, classKey: string, texts: string[], priorities?: Priorities }) =>
+    typedFingerprints(parseTheory(a.theory), a.classKey, a.texts, a.priorities),
+}
+
+export type ComputeKind = keyof typeof COMPUTE_TASKS
+export type ComputeInput<K extends ComputeKind> = Parameters<(typeof COMPUTE_TASKS)[K]>[0]
+export type ComputeOutput<K extends ComputeKind> = ReturnType<(typeof COMPUTE_TASKS)[K]>
