@@ -12,3 +12,4 @@ parentPort!.on('message', (msg: { id: number, kind: ComputeKind, input: unknown 
     parentPort!.postMessage({ id: msg.id, ok: false, error: toThreadError(error) })
   }
 })
+parentPort!.postMessage({ ready: true })

@@ -15,7 +15,7 @@ export interface LaneLimits {
   idleMs: number
 }
 interface Job { id: number, kind: string, input: unknown, user: string, budgetMs: number, what: string, resolve: (v: unknown) => void, reject: (e: Error) => void }
-interface Slot { worker: Worker, job?: Job, timer?: NodeJS.Timeout, idle?: NodeJS.Timeout }
+interface Slot { worker: Worker, ready: boolean, job?: Job, timer?: NodeJS.Timeout, idle?: NodeJS.Timeout }
 
 /**
  * A small bounded pool of engine threads with a wait queue: the event loop only sends inputs
@@ -62,18 +62,28 @@ export class ComputeLane {
   private start(slot: Slot, job: Job) {
     clearTimeout(slot.idle)
     slot.job = job
+    slot.worker.postMessage({ id: job.id, kind: job.kind, input: job.input })
+    if (slot.ready) this.startBudget(slot, job)
+  }
+
+  /** The budget counts computing time only: it starts once the thread has loaded the engine. */
+  private startBudget(slot: Slot, job: Job) {
     slot.timer = setTimeout(() => {
       this.retire(slot)
       job.reject(new ComputeBudgetError(`${job.what} takes longer than its budget of ${job.budgetMs / 1000} s, so the server stopped it. Ask for less (fewer orders, smaller powers or shorter numbers), or start a background run where there is one`))
     }, job.budgetMs)
-    slot.worker.postMessage({ id: job.id, kind: job.kind, input: job.input })
   }
 
   private spawn(): Slot {
-    const slot: Slot = { worker: new Worker(computeThreadEntry()) }
+    const slot: Slot = { worker: new Worker(computeThreadEntry()), ready: false }
     slot.worker.unref()
-    slot.worker.on('message', (msg: { id: number, ok: boolean, result?: unknown, name?: string, message?: string }) => {
+    slot.worker.on('message', (msg: { id: number, ok: boolean, ready?: boolean, result?: unknown, name?: string, message?: string }) => {
       const job = slot.job
+      if (msg.ready) {
+        slot.ready = true
+        if (job) this.startBudget(slot, job)
+        return
+      }
       if (!job || job.id !== msg.id) return
       this.finish(slot)
       if (msg.ok) job.resolve(msg.result)

@@ -11,8 +11,8 @@ const threads = (fallback: number) => Math.max(1, Number(process.env.SCALEWRIGHT
  * are the site's promise that no account can take all the threads or all the memory.
  */
 export const COMPUTE_LANES = {
-  light: new ComputeLane('computations', { threads: threads(2), queue: 32, perUser: 4, idleMs: 30_000 }),
-  count: new ComputeLane('quick counts', { threads: threads(2), queue: 4, perUser: 2, idleMs: 30_000 }),
+  light: new ComputeLane('computations', { threads: threads(2), queue: 32, perUser: 4, idleMs: 300_000 }),
+  count: new ComputeLane('quick counts', { threads: threads(2), queue: 4, perUser: 2, idleMs: 300_000 }),
 }
 
 /** Lane, time budget and the words for a message, per task. */

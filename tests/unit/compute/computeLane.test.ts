@@ -1,0 +1,42 @@
+import { describe, it, expect } from 'vitest'
+import { ComputeLane } from '../../../server/utils/compute/computeLane'
+import { ComputeBudgetError, ComputeBusyError } from '../../../server/utils/compute/computeErrors'
+import { ResultCache, canonicalJson } from '../../../server/utils/compute/resultCache'
+
+const LADDER = { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], orders: [1, 2] }
+
+describe('compute lane (real threads)', () => {
+  it('computes in a thread; over the time budget the thread is ended and the message says so; the next task still runs', async () => {
+    const lane = new ComputeLane('computations', { threads: 1, queue: 4, perUser: 4, idleMs: 1000 })
+    // 1 ms cannot even start the thread: the budget must fire.
+    await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(ComputeBudgetError)
+    await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(/takes longer than its budget of 0.001 s/)
+    const ok = await lane.run('ladder', LADDER, { user: 'u', budgetMs: 30_000, what: 'This scale ladder' }) as { parameters: { exact: string }[] }
+    // ε = 10 GeV / 1 TeV = 1/100 exactly (arithmetic).
+    expect(ok.parameters[0]!.exact).toBe('1/100')
+    expect(lane.stats.threads).toBeLessThanOrEqual(1)
+  }, 60_000)
+
+  it('refuses past the per-user and the queue limits with ComputeBusyError', async () => {
+    const lane = new ComputeLane('quick counts', { threads: 1, queue: 1, perUser: 2, idleMs: 1000 })
+    const opts = (user: string) => ({ user, budgetMs: 30_000, what: 'x' })
+    const a = lane.run('ladder', LADDER, opts('u'))
+    const b = lane.run('ladder', LADDER, opts('u'))
+    expect(() => lane.run('ladder', LADDER, opts('u'))).toThrow(/You already have 2 quick counts in progress \(the limit is 2 at a time\)/)
+    expect(() => lane.run('ladder', LADDER, opts('v'))).toThrow(ComputeBusyError)
+    await Promise.all([a, b])
+  }, 60_000)
+})
+
+describe('result cache', () => {
+  it('canonical JSON ignores key order; the cache drops the least recently used past its caps', () => {
+    expect(canonicalJson({ b: 1, a: { d: 2, c: 3 } })).toBe(canonicalJson({ a: { c: 3, d: 2 }, b: 1 }))
+    const cache = new ResultCache(2, 1000)
+    cache.set('x', { ok: true, value: 1 })
+    cache.set('y', { ok: true, value: 2 })
+    cache.get('x')
+    cache.set('z', { ok: true, value: 3 })
+    expect(cache.get('y')).toBeUndefined()
+    expect(cache.get('x')).toEqual({ ok: true, value: 1 })
+  })
+})
