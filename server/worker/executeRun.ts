@@ -5,25 +5,33 @@ import { claimRun, heldRun, startLease, RunLostError } from './runLease'
 import { RUN_LEASE, type SendRun } from '../utils/jobs/orphans'
 import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../engine/errors'
 import { reportInternalError } from '../utils/internalError'
+import { RUN_LIMITS, overtimeMessage } from '../utils/jobs/runLimits'
 
 /**
  * Carry out one run: claim it (only while queued), compute in a worker thread, beat the
  * heartbeat with the progress, honour a cancel request, and write the result in one
  * transaction. How its end is recorded: see recordEnd. Nothing is thrown: the queue never
- * retries by itself. */
-export async function executeRun(db: Knex, runId: number, send: SendRun): Promise<void> {
+ * retries by itself. A run past the time limit of its kind fails with a message.
+ */
+export async function executeRun(db: Knex, runId: number, send: SendRun, timeMinutes = RUN_LIMITS.timeMinutes): Promise<void> {
   const run = await claimRun(db, runId)
   if (!run) return // done, cancelled, or held by another worker: a duplicate job
   const params = run.params as RunParams
   let pending: { fraction: number, label: string } | undefined
   const handle = startEngineTask({ kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, maxOrder: params.maxOrder, nf: params.nf, priorities: params.priorities }, (fraction, label) => { pending = { fraction, label } })
   const lease = startLease(db, run, () => { const p = pending; pending = undefined; return p }, () => handle.cancel())
+  // The run-time limit of its kind: past it the engine is stopped and the run fails with a message.
+  let overtime = false
+  const minutes = timeMinutes[run.kind] ?? 15
+  const limit = setTimeout(() => { overtime = true; handle.cancel() }, minutes * 60_000)
   try {
     const result = await handle.result
     await persistRunResult(db, { ...run, theory_id: run.theory_id, kind: run.kind, params }, result)
   } catch (error) {
-    await recordEnd(db, run, lease.lost ? new RunLostError(run.id) : error, send)
+    const why = lease.lost ? new RunLostError(run.id) : overtime ? new EngineInputError('executeRun', overtimeMessage(run.kind, minutes)) : error
+    await recordEnd(db, run, why, send)
   } finally {
+    clearTimeout(limit)
     lease.stop()
   }
 }

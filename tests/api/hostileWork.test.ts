@@ -66,3 +66,46 @@ describe('request bodies are capped while they stream', () => {
     }
   })
 })
+
+describe('fair, bounded runs', () => {
+  const heavy = { kind: 'count', maxDim: 16, nf: 3 }
+  const jobPriority = async (runId: number) => {
+    const { job_id: jobId } = await testDb()('runs').where({ id: runId }).first('job_id')
+    return (await testDb().raw('select priority from pgboss.job where id = ?', [jobId])).rows[0]?.priority as number
+  }
+
+  it('one person may have 3 runs waiting or computing: the 4th is refused with 429 naming the limit; groups take turns in the queue', async () => {
+    const a = await buildWorld()
+    const b = await buildWorld()
+    const ids: number[] = []
+    try {
+      for (let i = 0; i < 3; i++) {
+        const r = await a.byRole.editor.client.post(`/api/theories/${a.theoryId}/runs`, heavy)
+        expect(r.status, JSON.stringify(r.body)).toBe(201)
+        ids.push(r.body.run.id)
+      }
+      const fourth = await a.byRole.editor.client.post(`/api/theories/${a.theoryId}/runs`, heavy)
+      expect(fourth.status).toBe(429)
+      expect(messageOf(fourth)).toMatch(/You already have 3 runs waiting or computing \(the limit is 3 per person\)/)
+      const other = await b.byRole.editor.client.post(`/api/theories/${b.theoryId}/runs`, heavy)
+      expect(other.status).toBe(201)
+      ids.push(other.body.run.id)
+      // Group A's third run waits behind at least one of its own; group B's first run goes ahead of it.
+      expect(await jobPriority(ids[2]!)).toBeLessThan(0)
+      expect(await jobPriority(other.body.run.id)).toBe(0)
+    } finally {
+      for (const id of ids) await testDb()('runs').where({ id }).update({ cancel_requested: true, status: 'cancelled' })
+    }
+  })
+
+  it('a run past the time limit of its kind is stopped and failed with a message', async () => {
+    const { executeRun } = await import('../../server/worker/executeRun')
+    const theory = (await testDb()('theories').where({ id: world.theoryId }).first('definition')).definition
+    const params = { maxDim: 16, nf: 3, theory, theoryVersion: 1 }
+    const [run] = await testDb()('runs').insert({ theory_id: world.theoryId, kind: 'count', params: JSON.stringify(params), status: 'queued', job_id: 'test-overtime' }).returning('*')
+    await executeRun(testDb(), run.id, async () => null, { count: 0.001, basis: 0.001 })
+    const after = await testDb()('runs').where({ id: run.id }).first()
+    expect(after.status).toBe('failed')
+    expect(after.error).toMatch(/This count run took longer than its limit of 0.001 minutes and was stopped; nothing of it was saved/)
+  }, 60_000)
+})
