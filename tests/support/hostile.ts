@@ -40,7 +40,7 @@ export function chunkedPost(baseUrl: string, path: string, totalBytes: number): 
       resolve({ status: res.statusCode ?? 0, sentBytes: sent })
       req.destroy()
     })
-    req.on('error', (e) => { if (!answered) reject(e) })
+    req.on('error', (e) => { if (!answered) reject(new Error(`no answer after ${sent} bytes: ${e.message}`)) })
     const pump = () => {
       while (!answered && sent < totalBytes) {
         sent += chunk.length

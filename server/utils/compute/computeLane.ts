@@ -11,7 +11,7 @@ export interface LaneLimits {
   queue: number
   /** Tasks (waiting or computing) of one user at most; one more is refused with 429. */
   perUser: number
-  /** A thread idle this long ends (its memory is returned). */
+  /** A thread idle this long ends (its memory is returned); the lane's first thread stays. */
   idleMs: number
 }
 interface Job { id: number, kind: string, input: unknown, user: string, budgetMs: number, what: string, resolve: (v: unknown) => void, reject: (e: Error) => void }
@@ -28,6 +28,11 @@ export class ComputeLane {
   private perUser = new Map<string, number>()
   private nextId = 1
   constructor(readonly name: string, readonly limits: LaneLimits) {}
+
+  /** Start the first thread now: booting one (tsx and the engine) takes seconds of CPU. */
+  warm() {
+    if (!this.slots.length) this.finish(this.spawn())
+  }
 
   get stats() { return { threads: this.slots.length, busy: this.slots.filter((s) => s.job).length, waiting: this.waiting.length } }
 
@@ -98,7 +103,7 @@ export class ComputeLane {
   private finish(slot: Slot) {
     clearTimeout(slot.timer)
     slot.job = undefined
-    slot.idle = setTimeout(() => this.retire(slot), this.limits.idleMs)
+    slot.idle = setTimeout(() => { if (this.slots[0] !== slot) this.retire(slot) }, this.limits.idleMs)
     slot.idle.unref()
     this.pump()
   }

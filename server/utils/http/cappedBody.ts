@@ -29,11 +29,15 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
   return Buffer.concat(chunks).toString('utf8')
 }
 
+/** How long the rest of a refused body is read and thrown away before the connection is cut. */
+const DRAIN_MS = 2000
+
 function tooLarge(event: H3Event, maxBytes: number, declared?: number): never {
   const req = event.node.req
-  req.pause()
-  // Unread bytes may still be on their way: close the connection once the 413 is sent.
+  // The rest of the body is read and dropped (no memory held), so that the client, still
+  // sending, reads our 413 instead of a reset; then the connection is closed.
+  req.resume()
   setResponseHeader(event, 'Connection', 'close')
-  event.node.res.once('finish', () => req.destroy())
+  event.node.res.once('finish', () => setTimeout(() => req.destroy(), DRAIN_MS).unref())
   return fail(413, `Request body too large${declared ? `: ${declared} bytes` : ''}; the limit is ${maxBytes.toLocaleString('en')} bytes`)
 }
