@@ -82,7 +82,7 @@ export class ComputeLane {
   private spawn(): Slot {
     const slot: Slot = { worker: new Worker(computeThreadEntry()), ready: false }
     slot.worker.unref()
-    slot.worker.on('message', (msg: { id: number, ok: boolean, ready?: boolean, result?: unknown, name?: string, message?: string }) => {
+    slot.worker.on('message', (msg: { id: number, ok: boolean, ready?: boolean, result?: unknown, error?: ThreadErrorMessage }) => {
       const job = slot.job
       if (msg.ready) {
         slot.ready = true
