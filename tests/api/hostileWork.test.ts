@@ -72,6 +72,8 @@ describe('quick counts are bounded per user', () => {
 
 describe('request bodies are capped while they stream', () => {
   it('a 50 MB chunked body without Content-Length, signed out, is answered 413 after at most a few MB', async () => {
+    // Sign-in is open to the signed-out and reads its body after the request guards (our
+    // Origin, a JSON type), so the body itself is what gets refused here.
     const results = await Promise.all(Array.from({ length: 3 }, () => chunkedPost(inject('baseUrl'), '/api/auth/signin', 50 * 1024 * 1024)))
     for (const r of results) {
       expect(r.status).toBe(413)

@@ -1,9 +1,9 @@
-import { setResponseHeader, type H3Event } from 'h3'
+import type { H3Event } from 'h3'
 import { fail } from './apiHandler'
 
 /**
  * The request body as text, counted while it arrives: past `maxBytes` reading stops at once and
- * the answer is 413 (the connection is closed after it), so neither a chunked body without
+ * the answer is 413 (the connection is cut a little after it), so neither a chunked body without
  * Content-Length nor a false one is ever held in memory beyond the cap.
  */
 export async function readCappedText(event: H3Event, maxBytes: number): Promise<string> {
@@ -18,6 +18,7 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
       total += chunk.length
       if (total <= maxBytes) return void chunks.push(chunk)
       cleanup()
+      req.pause() // a flowing stream without listeners would keep reading (and dropping)
       chunks.length = 0
       reject(new Error('over the cap'))
     }
@@ -34,10 +35,13 @@ const DRAIN_MS = 2000
 
 function tooLarge(event: H3Event, maxBytes: number, declared?: number): never {
   const req = event.node.req
-  // The rest of the body is read and dropped (no memory held), so that the client, still
-  // sending, reads our 413 instead of a reset; then the connection is closed.
-  req.resume()
-  setResponseHeader(event, 'Connection', 'close')
-  event.node.res.once('finish', () => setTimeout(() => req.destroy(), DRAIN_MS).unref())
+  // Nothing more is read until the 413 is sent, so the server holds at most the cap. Then the
+  // rest is read and dropped for DRAIN_MS before the connection is cut: closing at once (as
+  // "Connection: close" makes Node do) with the client still sending resets the connection,
+  // and a reset can wipe the 413 from the client's buffer before it is read.
+  event.node.res.once('finish', () => {
+    req.resume()
+    setTimeout(() => req.destroy(), DRAIN_MS).unref()
+  })
   return fail(413, `Request body too large${declared ? `: ${declared} bytes` : ''}; the limit is ${maxBytes.toLocaleString('en')} bytes`)
 }
