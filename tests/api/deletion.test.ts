@@ -1,6 +1,6 @@
 import { describe, it, expect, beforeAll } from 'vitest'
 import { buildWorld, addBasis, SMALL_THEORY, type World } from '../support/fixtures'
-import { ApiClient, messageOf } from '../support/client'
+import { ApiClient, mailedToken, messageOf } from '../support/client'
 import { testDb } from '../support/db'
 
 // Deleting notes, tags, share links, bases, theories and groups: the deleted rows leave every
@@ -108,7 +108,10 @@ describe('share links, bases, theories and groups', () => {
   it('a deleted group is gone for every member until an owner undoes it; its short name stays taken', async () => {
     const slug = `gone-${Date.now().toString(36)}`
     expect((await world.owner.client.post('/api/groups', { slug, name: 'Gone for a while' })).status).toBe(201)
-    await world.owner.client.post(`/api/groups/${slug}/members`, { email: world.byRole.editor.email, role: 'editor' })
+    // Adding a member is an invitation the person accepts.
+    expect((await world.owner.client.post(`/api/groups/${slug}/members`, { email: world.byRole.editor.email, role: 'editor' })).status).toBe(201)
+    const accepted = await world.byRole.editor.client.post('/api/invitations/accept', { token: await mailedToken(world.byRole.editor.email, 'join') })
+    expect(accepted.status, JSON.stringify(accepted.body)).toBe(200)
     const t = (await world.owner.client.post(`/api/groups/${slug}/theories`, { definition: { ...SMALL_THEORY, name: 'Inside' } })).body.theory
     expect((await world.byRole.editor.client.delete(`/api/groups/${slug}`)).status).toBe(403)
     const del = await world.owner.client.delete(`/api/groups/${slug}`)

@@ -71,14 +71,16 @@ describe('quick counts are bounded per user', () => {
 })
 
 describe('request bodies are capped while they stream', () => {
-  it('a 50 MB chunked body without Content-Length, signed out, is answered 413 after at most a few MB', async () => {
+  it('a 50 MB chunked body without Content-Length, signed out, is answered 413 after at most a few MB (the cap plus socket buffers)', async () => {
     // Sign-in is open to the signed-out and reads its body after the request guards (our
     // Origin, a JSON type), so the body itself is what gets refused here.
     const results = await Promise.all(Array.from({ length: 3 }, () => chunkedPost(inject('baseUrl'), '/api/auth/signin', 50 * 1024 * 1024)))
     for (const r of results) {
       expect(r.status).toBe(413)
-      // The cap is 512 KB; socket buffers on both sides hold a few MB more at most.
-      expect(r.sentBytes).toBeLessThan(8 * 1024 * 1024)
+      // The cap is 512 KB; the kernel's socket buffers on both sides take several MB more before
+      // the sender blocks (8.8 MB was seen under load: loopback receive buffers grow by
+      // autotuning). A server that buffered the body would take all 50 MB; 16 MB is under a third.
+      expect(r.sentBytes).toBeLessThan(16 * 1024 * 1024)
     }
   })
 })

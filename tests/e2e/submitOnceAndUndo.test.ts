@@ -4,6 +4,7 @@ import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser
 import { uniqueEmail } from '../support/client'
 import { testDb } from '../support/db'
 import { SMALL_THEORY } from '../support/fixtures'
+import { signUpInBrowser } from '../support/signUp'
 
 // Double submission and deletion in the browser: create buttons are disabled while their
 // request runs (a second submit sends nothing), and deletions ask first and can be undone.
@@ -16,13 +17,7 @@ const byTest = (page: Page, id: string) => page.locator(`[data-test="${id}"]`)
 const WAIT = { timeout: 15_000 }
 
 async function signUpWithGroup(page: Page) {
-  await page.goto('/signup')
-  await hydrated(page)
-  await page.getByLabel('Name', { exact: true }).fill('Undo Tester')
-  await page.getByLabel('E-mail').fill(uniqueEmail('undo-e2e'))
-  await page.getByLabel(/^Password/).fill('a long enough password')
-  await page.getByRole('button', { name: 'Create account' }).click()
-  await page.waitForURL('**/groups')
+  await signUpInBrowser(page, 'Undo Tester', uniqueEmail('undo-e2e'))
   const slug = `undo-${Date.now().toString(36)}`
   await page.getByLabel('Group name').fill('Undo group')
   await page.getByLabel('Short name (for links)').fill(slug)

@@ -1,4 +1,4 @@
-import type { H3Event } from 'h3'
+import { readRawBody, type H3Event } from 'h3'
 import { fail } from './apiHandler'
 
 /**
@@ -10,6 +10,13 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
   const declared = Number(event.node.req.headers['content-length'] || 0)
   if (declared > maxBytes) tooLarge(event, maxBytes, declared)
   const req = event.node.req
+  // A request made by the server's own page rendering (Nitro's local fetch) carries its body in
+  // memory, not as a stream: it is already held, so read it as h3 does and check its size.
+  if (bodyInMemory(event)) {
+    const raw = (await readRawBody(event, 'utf8')) ?? ''
+    if (Buffer.byteLength(raw) > maxBytes) tooLarge(event, maxBytes)
+    return raw
+  }
   if (req.readableEnded) return ''
   const chunks: Buffer[] = []
   let total = 0
@@ -28,6 +35,12 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
     req.on('data', onData).on('end', onEnd).on('error', onError)
   }).catch(() => tooLarge(event, maxBytes))
   return Buffer.concat(chunks).toString('utf8')
+}
+
+/** True when h3 would find the body already in memory (see readRawBody) rather than on a socket. */
+function bodyInMemory(event: H3Event): boolean {
+  const req = event.node.req as unknown as { body?: unknown, rawBody?: unknown }
+  return Boolean((event as unknown as { _requestBody?: unknown })._requestBody || event.web?.request?.body || req.rawBody || req.body)
 }
 
 /** How long the rest of a refused body is read and thrown away before the connection is cut. */
