@@ -17,15 +17,11 @@ import { buildBasis } from '../server/engine/basis/buildBasis'
 import { persistRunResult } from '../server/worker/persistRun'
 import { findPreset } from '../shared/presets/index'
 import { launchBrowser, newPage } from '../tests/support/browser'
+import { median } from './support/timing'
 
 const root = resolve(import.meta.dirname, '..')
 const PORT = 3401
 const base = `http://127.0.0.1:${PORT}`
-
-function median(xs: number[]) {
-  const s = [...xs].sort((a, b) => a - b)
-  return s.length % 2 ? s[s.length >> 1]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2
-}
 
 async function waitHealthy() {
   for (let i = 0; i < 300; i++) {

@@ -8,12 +8,7 @@
 import { findPreset } from '../shared/presets/index'
 import { parseTheory } from '../server/engine/theory/parseTheory'
 import { buildBasis } from '../server/engine/basis/index'
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
-}
+import { median } from './support/timing'
 
 const round = (x: number): number => Math.round(x * 10) / 10
 

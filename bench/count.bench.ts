@@ -8,6 +8,7 @@
 import { findPreset } from '../shared/presets/index'
 import { parseTheory } from '../server/engine/theory/parseTheory'
 import { countOperators } from '../server/engine/counting/countOperators'
+import { median } from './support/timing'
 
 interface Figure {
   median_ms: number
@@ -17,12 +18,6 @@ interface Figure {
   /** Published total of the top dimension (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016). */
   expected_operators: number
   target_ms: number
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
 }
 
 function measure(maxDim: number, nf: number, repeats: number, target: number, expected: number): Figure {

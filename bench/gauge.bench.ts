@@ -9,23 +9,7 @@ import { parseTheory } from '../server/engine/theory/parseTheory'
 import type { Theory, TheoryField } from '../shared/schemas/theory'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeRunningReport, runGaugeCouplings, towerGaugeContent } from '../server/engine/running/gauge/index'
 import { ALPHA_S_MZ, Z_MASS_GEV } from '../server/engine/scales/pdg2024'
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
-}
-
-function time(repeats: number, fn: () => unknown): number {
-  fn() // warm-up
-  const ts: number[] = []
-  for (let i = 0; i < repeats; i++) {
-    const t0 = performance.now()
-    fn()
-    ts.push(performance.now() - t0)
-  }
-  return Number(median(ts).toFixed(3))
-}
+import { medianTime } from './support/timing'
 
 const SM = parseTheory(smeft)
 const SM_ALPHA = { colour: ALPHA_S_MZ, weak: 0.0338, hypercharge: 0.0102 }
@@ -60,15 +44,15 @@ export default async function gaugeBench(): Promise<Record<string, number | Reco
   ])
   const mixed = gaugeContentOf(threeU1s())
   let points = 0
-  const mixedRun = time(5, () => {
+  const mixedRun = medianTime(5, () => {
     const r = runGaugeCouplings({ content: mixed, loops: 2, muFromGeV: 1e3, muToGeV: 1e-3 * 1e22, alpha: { ...SM_ALPHA, BL: 0.005, D: 0.005 }, mixing: [{ groups: ['hypercharge', 'D'], epsilon: 0.01 }] })
     points = r.points.length
   })
   return {
-    sm_exact_coefficients: time(20, () => gaugeBetaCoefficients(sm)),
-    sm_report_1loop_1GeV_to_1e19: time(10, () => report(1)),
-    sm_report_2loop_1GeV_to_1e19: time(10, () => report(2)),
-    qcd_tower_2loop_MZ_to_1_5GeV_and_10TeV: time(10, () => {
+    sm_exact_coefficients: medianTime(20, () => gaugeBetaCoefficients(sm)),
+    sm_report_1loop_1GeV_to_1e19: medianTime(10, () => report(1)),
+    sm_report_2loop_1GeV_to_1e19: medianTime(10, () => report(2)),
+    qcd_tower_2loop_MZ_to_1_5GeV_and_10TeV: medianTime(10, () => {
       runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1.5, alpha: { colour: ALPHA_S_MZ } })
       runGaugeCouplings({ content: tower, loops: 2, muFromGeV: Z_MASS_GEV, muToGeV: 1e4, alpha: { colour: ALPHA_S_MZ } })
     }),

@@ -5,12 +5,7 @@
  * JHEP 01 (2021) 142). Run alone: npm run bench -- goldstoneCount
  */
 import { countGoldstone } from '../server/engine/goldstone/countGoldstone'
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
-}
+import { median } from './support/timing'
 
 function countsToP12(repeats: number) {
   const times: number[] = []

@@ -15,14 +15,9 @@ import { enumerateHeavyLight } from '../server/engine/heavy/heavyLight'
 import type { TheoryFieldLike } from '../server/engine/heavy/lightFields'
 import { enumerateHeavyHeavy } from '../server/engine/heavy/heavyHeavy'
 import { enumerateFourField } from '../server/engine/heavy/fourField'
+import { median } from './support/timing'
 
 interface Figure { median_ms: number, repeats: number, count: number, expected: number | null }
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
-}
 
 function time(repeats: number, expected: number | null, f: () => number): Figure {
   const times: number[] = []

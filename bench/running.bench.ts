@@ -9,23 +9,7 @@ import { runAlphaQED } from '../server/engine/running/runAlphaQED'
 import { alphaQedAtZ } from '../server/engine/running/alphaQedAtZ'
 import { buildScaleLadder } from '../server/engine/scales/scaleLadder'
 import { ALPHA_S_MZ, BOTTOM_MSBAR_MASS_GEV, CHARM_MSBAR_MASS_GEV, Z_MASS_GEV } from '../server/engine/scales/pdg2024'
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b)
-  const m = s.length >> 1
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2
-}
-
-function time(repeats: number, fn: () => unknown): number {
-  fn() // warm-up
-  const ts: number[] = []
-  for (let i = 0; i < repeats; i++) {
-    const t0 = performance.now()
-    fn()
-    ts.push(performance.now() - t0)
-  }
-  return Number(median(ts).toFixed(3))
-}
+import { medianTime } from './support/timing'
 
 const BC: QcdThreshold[] = [
   { name: 'b', mass: BOTTOM_MSBAR_MASS_GEV, kind: 'msbar' },
@@ -34,17 +18,17 @@ const BC: QcdThreshold[] = [
 
 export default async function runningBench(): Promise<Record<string, number | Record<string, unknown>>> {
   let tracePoints = 0
-  const alphaSRoundTrip = time(15, () => {
+  const alphaSRoundTrip = medianTime(15, () => {
     const down = runAlphaS({ alphaS: ALPHA_S_MZ, muFrom: Z_MASS_GEV, muTo: 1, loops: 4, thresholds: BC })
     const up = runAlphaS({ alphaS: down.alphaS, muFrom: 1, muTo: Z_MASS_GEV, loops: 4, thresholds: BC })
     tracePoints = down.trace.length + up.trace.length
   })
   return {
     alphaS_4loop_MZ_to_1GeV_and_back: { median_ms: alphaSRoundTrip, trace_points: tracePoints },
-    alphaS_1loop_MZ_to_1GeV: time(15, () => runAlphaS({ alphaS: ALPHA_S_MZ, muFrom: Z_MASS_GEV, muTo: 1, loops: 1, thresholds: BC })),
-    alphaQED_1loop_all_fermions_to_MZ: time(50, () => runAlphaQED({ muTo: Z_MASS_GEV })),
-    alphaQED_at_MZ_onshell_and_msbar: time(50, () => alphaQedAtZ({ deltaAlphaHad5: 0.02766 })),
-    scale_ladder_hydrogen_exact: time(50, () => buildScaleLadder({
+    alphaS_1loop_MZ_to_1GeV: medianTime(15, () => runAlphaS({ alphaS: ALPHA_S_MZ, muFrom: Z_MASS_GEV, muTo: 1, loops: 1, thresholds: BC })),
+    alphaQED_1loop_all_fermions_to_MZ: medianTime(50, () => runAlphaQED({ muTo: Z_MASS_GEV })),
+    alphaQED_at_MZ_onshell_and_msbar: medianTime(50, () => alphaQedAtZ({ deltaAlphaHad5: 0.02766 })),
+    scale_ladder_hydrogen_exact: medianTime(50, () => buildScaleLadder({
       scales: [{ name: 'me', value: '0.51099895000', unit: 'MeV' }, { name: 'mp', value: '938.27208816', unit: 'MeV' }, { name: 'mb', value: '4.18', unit: 'GeV' }],
       parameters: [{ name: 'alpha', numerator: '1', denominator: '137.035999084' }, { name: 'r', numerator: 'me', denominator: 'mb' }],
       derived: [{ name: 'Ry', from: 'me', factor: '1/2', powers: { alpha: 2 }, unit: 'eV' }],
