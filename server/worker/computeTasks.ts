@@ -23,8 +23,8 @@ function quickCount({ theory, maxDim, nf }: QuickCount) {
 }
 
 export const COMPUTE_TASKS = {
-  ladder: (doc: LadderDocument) => computeLadder(doc),
-  ordersBelowTarget: (a: { doc: LadderDocument, orders: number[], target: number }) => ordersBelowTarget(a.doc, a.orders, a.target),
+  ladder: (a: { doc: LadderDocument, frame: string }) => computeLadder(a.doc, a.frame),
+  ordersBelowTarget: (a: { doc: LadderDocument, orders: number[], target: number, frame: string }) => ordersBelowTarget(a.doc, a.orders, a.target, a.frame),
   qcdRunning: (req: RunningQcdRequest) => qcdRunning(req),
   qedRunning: (req: RunningQedRequest) => qedRunning(req),
   anomalies: (theory: Theory) => anomalyConditions(theory),

@@ -66,6 +66,21 @@ describe('Goldstone frame through the run pipeline', () => {
     expect(keptNow).toHaveLength(12)
   })
 
+  it('the scale ladder counts p^k as (p/Λ_χ)^(k−2), as the board heading does: set aside below 1/10 takes p⁴ (1/16) and keeps p² (1) (Manohar and Georgi, Nucl. Phys. B 234 (1984) 189)', async () => {
+    const run = await finished({ kind: 'basis', maxOrder: 4 })
+    const ladder = { scales: [{ name: 'p', value: '3/10', unit: 'GeV' }, { name: 'Lambda_chi', value: '6/5', unit: 'GeV' }], parameters: [{ name: 'eps', numerator: 'p', denominator: 'Lambda_chi' }], orders: [2, 4, 6] }
+    const saved = await world.byRole.editor.client.request('PUT', `/api/theories/${theoryId}/scales`, { ladder, version: 0 })
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200)
+    expect(saved.body.computed.orders.map((o: { order: number, exactEstimate: string }) => [o.order, o.exactEstimate])).toEqual([[2, '1'], [4, '1/16'], [6, '1/256']])
+    const read = await world.byRole.viewer.client.get(`/api/theories/${theoryId}/scales`)
+    expect(read.body).toMatchObject({ frame: 'goldstone', computed: { leadingOrder: 2 } })
+    const res = await world.byRole.editor.client.post(`/api/bases/${run.summary.basisId}/set-aside-below`, { target: 0.1 })
+    expect(res.status, JSON.stringify(res.body)).toBe(200)
+    expect(res.body.orders).toEqual([4])
+    expect(res.body.count).toBe(12)
+    expect(res.body.estimates.map((o: { order: number, exactEstimate: string }) => [o.order, o.exactEstimate])).toEqual([[2, '1'], [4, '1/16']])
+  })
+
   it('refuses a too-deep or odd chiral order in the user\'s terms and starts nothing', async () => {
     const deep = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'basis', maxOrder: 8 })
     expect(deep.status).toBe(400)

@@ -31,6 +31,8 @@ export interface ScaleLadder {
   orders: LadderOrder[]
   precisionTarget?: number
   countingParameter?: string
+  /** The order estimated as 1 when it is not order 0 (2: the p² Lagrangian of a Goldstone-frame theory). */
+  leadingOrder?: number
 }
 
 /** Exact rational of a literal given as text; numbers stay numeric (undefined). */
@@ -75,8 +77,8 @@ function resolveParameter(p: ExpansionParameterInput, scales: Map<string, Resolv
   return { value, exact }
 }
 
-function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exact?: Rational }>, counting: string | undefined, target?: number): LadderOrder {
-  const powers = typeof spec === 'number' ? countingPowers(spec, counting) : spec.powers
+function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exact?: Rational }>, counting: string | undefined, leading: number, target?: number): LadderOrder {
+  const powers = typeof spec === 'number' ? countingPowers(spec, counting, leading) : spec.powers
   let estimate = 1
   let exact: Rational | undefined = ONE
   for (const [name, k] of Object.entries(powers)) {
@@ -90,22 +92,28 @@ function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exa
   return exact ? { order, estimate, exactEstimate: ratText(exact), belowTarget } : { order, estimate, belowTarget }
 }
 
-function countingPowers(n: number, counting: string | undefined): Record<string, number> {
+function countingPowers(n: number, counting: string | undefined, leading: number): Record<string, number> {
+  if (n === leading) return {}
   if (!counting) throw new EngineInputError('buildScaleLadder', `Order ${n} needs an expansion parameter to be estimated, but the ladder has none; add one (e.g. E/M)`)
-  return n === 0 ? {} : { [counting]: n }
+  if (n < leading) throw new EngineInputError('buildScaleLadder', `Order ${n} lies below the leading order ${leading} of this theory's power counting (a Goldstone-frame theory starts at p²); list orders from ${leading} up`)
+  return { [counting]: n - leading }
 }
+
+/** How plain orders are estimated: order n is ε^(n − leadingOrder) (0 in general; 2 in the Goldstone frame, see shared/physics/leadingOrder.ts). */
+export interface LadderCounting { leadingOrder?: number }
 
 /**
  * The scale ladder: scales sorted from highest to lowest energy, expansion parameters, and per
  * order its estimated size (product of the parameters to their powers; a plain order n under
- * the counting parameter ε is ε^n, e.g. (E/M)^n) flagged when below the precision target.
+ * the counting parameter ε is ε^(n − leadingOrder), e.g. (E/M)^n, or (p/Λ_χ)^(k−2) for the chiral
+ * order p^k of a Goldstone-frame theory) flagged when below the precision target.
  * @example buildScaleLadder({ scales: [{ name: 'E', value: '1', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }],
  *   parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], precisionTarget: 1e-5 }, [1, 2])
  *   // orders: [{ order: 1, estimate: 1e-3, exactEstimate: '1/1000', belowTarget: false }, { order: 2, estimate: 1e-6, exactEstimate: '1/1000000', belowTarget: true }]
  * Method: naive dimensional analysis with O(1) coefficients; exact rationals when every input is printed text.
  * Reference: common practice of EFT power counting (e.g. H. Georgi, Annu. Rev. Nucl. Part. Sci. 43 (1993) 209).
  */
-export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[]): ScaleLadder {
+export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[], rule: LadderCounting = {}): ScaleLadder {
   const parsed = ScaleLadderInputSchema.safeParse(input)
   if (!parsed.success) throw new EngineInputError('buildScaleLadder', describeZodError(parsed.error, input, 'the scale ladder'))
   const ords = OrderListSchema.safeParse(orders)
@@ -131,9 +139,10 @@ export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[]): 
     scales: inp.scales.map(s => ladderScale(s, scales.get(s.name)!)).sort((a, b) => b.valueMeV - a.valueMeV),
     derived: derivedScales(inp, scales, params),
     parameters: [...params].map(([name, p]) => (p.exact ? { name, value: p.value, exact: ratText(p.exact) } : { name, value: p.value })),
-    orders: ords.data.map(o => estimateOrder(o, params, counting, inp.precisionTarget)),
+    orders: ords.data.map(o => estimateOrder(o, params, counting, rule.leadingOrder ?? 0, inp.precisionTarget)),
     ...(inp.precisionTarget !== undefined ? { precisionTarget: inp.precisionTarget } : {}),
     ...(counting ? { countingParameter: counting } : {}),
+    ...(rule.leadingOrder ? { leadingOrder: rule.leadingOrder } : {}),
   }
 }
 

@@ -3,7 +3,7 @@ import { ComputeLane } from '../../../server/utils/compute/computeLane'
 import { ComputeBudgetError, ComputeBusyError } from '../../../server/utils/compute/computeErrors'
 import { ResultCache, canonicalJson } from '../../../server/utils/compute/resultCache'
 
-const LADDER = { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], orders: [1, 2] }
+const LADDER = { doc: { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], orders: [1, 2] }, frame: 'relativistic' }
 
 describe('compute lane (real threads)', () => {
   it('computes in a thread; over the time budget the thread is ended and the message says so; the next task still runs', async () => {

@@ -126,6 +126,7 @@ const scaleCases: BadInput[] = [
   { name: 'a ladder scale in kilograms', run: () => buildScaleLadder({ ...ladder, scales: [{ name: 'E', value: '1', unit: 'kg' as never }] }, []), says: /^Scale 1 "E", unit must be one of/ },
   { name: 'an order list that is not a list of orders', run: () => buildScaleLadder(ladder, [-1]), says: /^Order 1 must be at least 0$/ },
   { name: 'two scales of one name', run: () => buildScaleLadder({ scales: [...ladder.scales, ...ladder.scales], parameters: [] }, []) },
+  { name: 'an order below a Goldstone theory\'s leading p²', run: () => buildScaleLadder(ladder, [0, 2, 4], { leadingOrder: 2 }), says: /below the leading order 2/ },
   { name: 'a parameter named like a scale', run: () => buildScaleLadder({ ...ladder, parameters: [{ name: 'E', numerator: 'E', denominator: 'M' }] }, []) },
   { name: 'an unknown counting parameter', run: () => buildScaleLadder({ ...ladder, countingParameter: 'zz' }, []) },
   { name: 'a derived scale named like a scale', run: () => buildScaleLadder({ ...ladder, derived: [{ name: 'E', from: 'M', powers: {} }] }, []) },

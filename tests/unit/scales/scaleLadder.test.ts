@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest'
 import { buildScaleLadder } from '../../../server/engine/scales/scaleLadder'
 import { parseDecimal } from '../../../server/engine/scales/decimal'
-import { div, mul, parseRational, toString as ratText } from '../../../server/engine/exact/rational'
+import { div, mul, parseRational, rat, toString as ratText } from '../../../server/engine/exact/rational'
+import { powRational } from '../../../server/engine/scales/derivedScales'
+import { leadingOrderOf, suppressionPower } from '../../../shared/physics/leadingOrder'
 import {
   ALPHA_INVERSE_TEXT, ELECTRON_MASS_MEV_TEXT, PROTON_ELECTRON_MASS_RATIO, PROTON_MASS_MEV_TEXT, RYDBERG_ENERGY_EV,
 } from '../../../server/engine/scales/codata2018'
@@ -90,6 +92,30 @@ describe('buildScaleLadder: mass-ratio rule (E/M)^n', () => {
   it('float inputs stay numeric (no exact field)', () => {
     const l = buildScaleLadder({ scales: [{ name: 'a', value: 2, unit: 'GeV' }, { name: 'b', value: 8, unit: 'GeV' }], parameters: [{ name: 'r', numerator: 'a', denominator: 'b' }] }, [2])
     expect(l.orders[0]).toEqual({ order: 2, estimate: 0.0625, belowTarget: false })
+  })
+})
+
+describe('buildScaleLadder: Goldstone frame, order p^k is (p/Λ_χ)^(k−2)', () => {
+  // Power counting of chiral Lagrangians: the p² Lagrangian leads, a p^k term is suppressed by
+  // (p/Λ_χ)^(k−2) with Λ_χ ≈ 4πF (Manohar and Georgi, Nucl. Phys. B 234 (1984) 189).
+  const chiral = {
+    scales: [{ name: 'p', value: '3/10', unit: 'GeV' as const }, { name: 'Lambda_chi', value: '6/5', unit: 'GeV' as const }],
+    parameters: [{ name: 'eps', numerator: 'p', denominator: 'Lambda_chi' }], precisionTarget: 1e-2,
+  }
+  it('p = 0.3 GeV, Λ_χ = 1.2 GeV: p² is 1, p⁴ is 1/16, p⁶ is 1/256 (below 1/100), exactly', () => {
+    const l = buildScaleLadder(chiral, [2, 4, 6], { leadingOrder: leadingOrderOf('goldstone') })
+    expect(l.orders.map(o => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[2, '1', false], [4, '1/16', false], [6, '1/256', true]])
+  })
+  it('the board heading\'s power and the ladder\'s power are one rule', () => {
+    for (const k of [2, 4, 6, 8]) {
+      const est = buildScaleLadder(chiral, [k], { leadingOrder: leadingOrderOf('goldstone') }).orders[0]!.exactEstimate
+      expect(est).toBe(ratText(powRational(rat(1n, 4n), suppressionPower(k, 'goldstone'))))
+    }
+    expect(suppressionPower(3, 'relativistic')).toBe(3)
+    expect(suppressionPower(3, 'heavy')).toBe(3)
+  })
+  it('refuses an order below p² in words', () => {
+    expect(() => buildScaleLadder(chiral, [0], { leadingOrder: 2 })).toThrow('Order 0 lies below the leading order 2 of this theory\'s power counting')
   })
 })
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest'
 import { applicableMatching } from '../../../server/utils/scales/applicableMatching'
-import { ordersBelowTarget } from '../../../server/utils/scales/ladderEstimates'
+import { frameOfBasisClasses, ordersBelowTarget } from '../../../server/utils/scales/ladderEstimates'
 import type { Theory } from '../../../shared/schemas/theory'
 
 const qed = (fields: Theory['fields'], groups: Theory['groups'] = [{ name: 'QED', type: 'U1', gauge: true }]): Theory => ({
@@ -43,10 +43,17 @@ describe('orders below a precision target, for a basis', () => {
     orders: [0, { order: 2, powers: { eps: 1, g: 1 } }],
   }
   it('an order listed with its own powers uses them; any other order n is ε^n (common practice, naive dimensional analysis)', () => {
-    const r = ordersBelowTarget(doc, [1, 2, 3], 1e-3)
+    const r = ordersBelowTarget(doc, [1, 2, 3], 1e-3, 'relativistic')
     expect(r.map((o) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[1, '1/100', false], [2, '1/1000', false], [3, '1/1000000', true]])
   })
+  it('a Goldstone-frame basis: chiral order p^k is ε^(k−2), as its board heading says (p/Λ_χ)^(k−2) (Manohar and Georgi, Nucl. Phys. B 234 (1984) 189)', () => {
+    const chiral = { ...doc, orders: [2] }
+    const r = ordersBelowTarget(chiral, [2, 4, 6], 1e-3, 'goldstone')
+    expect(r.map((o) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[2, '1', false], [4, '1/10000', true], [6, '1/100000000', true]])
+    expect(ordersBelowTarget(chiral, [4], 1e-3, frameOfBasisClasses([{ key: 'p^4', frame: 'goldstone' }]))[0]!.exactEstimate).toBe('1/10000')
+    expect(frameOfBasisClasses([{ key: 'phi^4' }])).toBe('relativistic')
+  })
   it('an order under an unknown parameter is refused with the engine message', () => {
-    expect(() => ordersBelowTarget({ ...doc, orders: [{ order: 2, powers: { lambda: 1 } }] }, [2], 1e-3)).toThrow('Order 2 uses the expansion parameter "lambda", which the ladder does not declare; add it or correct the name')
+    expect(() => ordersBelowTarget({ ...doc, orders: [{ order: 2, powers: { lambda: 1 } }] }, [2], 1e-3, 'relativistic')).toThrow('Order 2 uses the expansion parameter "lambda", which the ladder does not declare; add it or correct the name')
   })
 })

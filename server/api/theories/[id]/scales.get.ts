@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { ladderOf } from '../../../utils/db/scaleLadders'
 import { compute } from '../../../utils/compute/computePool'
+import { frameOfDefinition } from '../../../utils/scales/ladderEstimates'
 import { EngineInputError } from '../../../engine/errors'
 import { SCALE_UNITS } from '../../../engine/scales/units'
 import { partnerMap } from '../../../engine/scales/massPartners'
@@ -17,10 +18,11 @@ export default defineApiHandler(async (event) => {
   const theory = await theoryOr404(intParam(event, 'id'))
   const { role, user } = await requireGroupRole(event, theory.group_id, 'viewer')
   const stored = await ladderOf(theory.id)
+  const frame = frameOfDefinition(theory.definition)
   let computed = null
   let problem = ''
   try {
-    computed = stored ? await compute('ladder', stored.ladder, user.id) : null
+    computed = stored ? await compute('ladder', { doc: stored.ladder, frame }, user.id) : null
   } catch (e) {
     // A stored ladder the engine refuses is shown with its message; anything else is a bug.
     if (!(e instanceof EngineInputError)) throw e
@@ -29,5 +31,5 @@ export default defineApiHandler(async (event) => {
   const parsed = TheorySchema.safeParse(theory.definition)
   // For each fermion, the fields that can give it a mass: the integrate-out form ticks them along.
   const massPartners = parsed.success ? partnerMap(parsed.data) : {}
-  return { massPartners, theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
+  return { massPartners, theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, frame, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
 })

@@ -4,6 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { saveLadder } from '../../../utils/db/scaleLadders'
 import { compute } from '../../../utils/compute/computePool'
+import { frameOfDefinition } from '../../../utils/scales/ladderEstimates'
 import { LadderSaveSchema } from '../../../../shared/schemas/scaleRequests'
 import { once } from '../../../utils/http/requestKeys'
 
@@ -14,6 +15,6 @@ export default defineApiHandler(async (event) => {
   const body = await readJson(event, LadderSaveSchema)
   const theory = await theoryOr404(intParam(event, 'id'))
   const { user } = await requireGroupRole(event, theory.group_id, 'editor')
-  const computed = await compute('ladder', body.ladder, user.id)
+  const computed = await compute('ladder', { doc: body.ladder, frame: frameOfDefinition(theory.definition) }, user.id)
   return once(event, user.id, body, async () => ({ ladder: body.ladder, version: await saveLadder(theory.id, body.ladder, body.version, user.id), computed }))
 })
