@@ -25,7 +25,7 @@ import { sourceSwitch, type SourceSwitch } from '../blocks'
 import { contactCandidates, cosetCandidates, type Candidate } from './candidates'
 import { ExactEvaluator } from './exactValue'
 import { randomConfig, type Config, type LegKind } from './kinematics'
-import { operatorText } from './monomial'
+import { letterCount, operatorText, type Operator } from './monomial'
 import { ClassicalSolution } from './perturbiner'
 import { selectBlock, simplify, type BlockResult } from './selection'
 import { classContent } from './configs'
@@ -116,7 +116,22 @@ function lettersOfClass(key: string): number {
   return c.odd + c.chiPlus + c.fPlus
 }
 
-function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress: (f: number, label: string) => void): GoldstoneOrderBasis {
+/** The candidates of one order, their selection per letter degree, and the configurations that separate them. */
+export interface OrderSelection {
+  count: ReturnType<typeof countGoldstone>['byOrder'][number]
+  blocks: BlockResult[]
+  configs: Config[]
+  patterns: LegKind[][]
+  fields: [PrimeField, PrimeField]
+  tidy: (c: Candidate) => Candidate
+}
+
+/**
+ * Select the kept operators of one order and the configurations that fix its fingerprints. The
+ * configurations depend only on (order, N, sources), not on the priorities, so a later call
+ * reproduces the points of a stored basis (typed rewrites, typedGoldstone.ts).
+ */
+export function selectOrder(order: number, N: number, o: GoldstoneBasisOptions, progress: (f: number, label: string) => void): OrderSelection {
   const count = countGoldstone({ coset: 'chiral', N: o.N, sources: o.sources, maxOrder: order, minOrder: order }).byOrder[0]!
   const key = `p^${order}`
   const sources = sourceSwitch(o.sources)
@@ -137,17 +152,23 @@ function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress
   }
   const tidy = tidier(F, blocks)
   if (o.keep?.[key]?.length) reprioritize(F, blocks, o.keep[key]!, tidy)
+  // the configurations that raised a class's rank separate the kept operators exactly (block triangularity)
+  const configs = order === 2 && !anySource ? lowOrderConfigs(F, rng, N) : blocks.flatMap((b) => b.pivots.map((k) => b.configs[k]!))
+  const patterns = order === 2 && !anySource ? configs.map((c) => c.legs.map((l) => l.kind)) : blocks.flatMap((b) => b.pivots.map((k) => b.patterns[k]!))
+  return { count, blocks, configs, patterns, fields: [F, new PrimeField(p2)], tidy }
+}
+
+function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress: (f: number, label: string) => void): GoldstoneOrderBasis {
+  const { count, blocks, configs, patterns, fields, tidy } = selectOrder(order, N, o, progress)
+  const key = `p^${order}`
   const keptRaw = blocks.flatMap((b) => b.kept)
   const live = blocks.flatMap((b) => b.candidates).filter((c) => !keptRaw.includes(c))
   const altRaw = [...live.filter((c) => c.contact), ...live.filter((c) => !c.contact)].slice(0, o.maxAlternatives ?? 40)
   const kept = keptRaw.map(tidy)
   const alternatives = altRaw.map(tidy)
-  // the configurations that raised a class's rank separate the kept operators exactly (block triangularity)
-  const configs = order === 2 && !anySource ? lowOrderConfigs(F, rng, N) : blocks.flatMap((b) => b.pivots.map((k) => b.configs[k]!))
-  const patterns = order === 2 && !anySource ? configs.map((c) => c.legs.map((l) => l.kind)) : blocks.flatMap((b) => b.pivots.map((k) => b.patterns[k]!))
   const contactAll = live.filter((c) => c.contact && !altRaw.includes(c))
   const everything = [...kept, ...alternatives, ...contactAll]
-  const prints = exactFingerprints(everything, [F, new PrimeField(p2)], configs, patterns, N, order, o.signal, (f) => progress(0.3 + 0.7 * f, 'exact values'))
+  const prints = exactFingerprints(everything.map((c) => c.op), fields, configs, patterns, N, order, o.signal, (f) => progress(0.3 + 0.7 * f, 'exact values'), everything)
   const keptPrints = kept.map((c) => prints.get(c)!)
   const exactRank = rankOf(keptPrints)
   const contactPrints = [...kept, ...contactAll].filter((c) => c.contact).map((c) => prints.get(c)!)
@@ -211,9 +232,14 @@ function lowOrderConfigs(F: PrimeField, rng: SeededRandom, N: number): Config[] 
   return [0, 1].map(() => randomConfig(F, rng, N, ['pion', 'pion', 'pion', 'pion']))
 }
 
-/** Exact values of the operators at the configurations (prime 1) and at fresh ones of the same patterns (prime 2). */
-function exactFingerprints(cands: Candidate[], fields: PrimeField[], configs: Config[], patterns: LegKind[][], N: number, order: number, signal: { aborted: boolean } | undefined, progress: (f: number) => void): Map<Candidate, Fingerprint> {
-  const values = cands.map(() => fields.map(() => [] as number[]))
+/**
+ * Exact values of the operators at the configurations (prime 1) and at fresh ones of the same
+ * patterns (prime 2); `letters` is each operator's number of letters (its filtration degree).
+ */
+export function exactFingerprints<T>(ops: readonly Operator[], fields: readonly PrimeField[], configs: readonly Config[], patterns: readonly LegKind[][], N: number, order: number,
+  signal: { aborted: boolean } | undefined, progress: (f: number) => void, keys: readonly T[]): Map<T, Fingerprint> {
+  const letters = ops.map((op) => Math.min(...op.terms.map((t) => letterCount(t.mono))))
+  const values = ops.map(() => fields.map(() => [] as number[]))
   fields.forEach((F, fi) => {
     const rng = new SeededRandom(7000 + order + fi)
     const list = fi === 0 ? configs : patterns.map((k) => randomConfig(F, rng, N, k))
@@ -222,13 +248,13 @@ function exactFingerprints(cands: Candidate[], fields: PrimeField[], configs: Co
       progress((fi * list.length + k) / (fields.length * list.length))
       const n = cfg.legs.length
       // as many letters as legs: the exact value is the leading one; more letters than legs: zero
-      const needExact = cands.some((c) => c.letters < n)
+      const needExact = letters.some((m) => m < n)
       const ev = needExact ? new ExactEvaluator(new ClassicalSolution(F, cfg)) : null
       const free = new FreeEvaluator(F, cfg)
-      cands.forEach((c, j) => values[j]![fi]!.push(c.letters > n ? 0 : c.letters === n ? free.operator(c.op) : ev!.operator(c.op)))
+      ops.forEach((op, j) => values[j]![fi]!.push(letters[j]! > n ? 0 : letters[j] === n ? free.operator(op) : ev!.operator(op)))
     })
   })
-  return new Map(cands.map((c, j) => [c, { primes: fields.map((F) => F.p), values: values[j]! }]))
+  return new Map(keys.map((c, j) => [c, { primes: fields.map((F) => F.p), values: values[j]! }]))
 }
 
 function rankOf(prints: Fingerprint[]): number {
