@@ -6,6 +6,7 @@ import { anomalyConditions } from '../engine/theory/anomalies'
 import { integrateOut } from '../engine/scales/integrateOut'
 import { countOperators } from '../engine/counting/countOperators'
 import { typedFingerprints } from '../engine/board/typedOperator'
+import { goldstoneTypedFingerprints, type GoldstoneTypedInput } from '../engine/goldstone/explicit/typedGoldstone'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { parseTheory } from '../engine/theory/parseTheory'
@@ -30,6 +31,7 @@ export const COMPUTE_TASKS = {
   anomalies: (theory: Theory) => anomalyConditions(theory),
   integrateOut: (a: { parent: Theory, fields: string[], scale: Parameters<typeof integrateOut>[2] }) => integrateOut(a.parent, a.fields, a.scale),
   quickCount,
+  goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput, texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),
   typedFingerprints: (a: { theory: unknown, classKey: string, texts: string[], priorities?: Priorities }) =>
     typedFingerprints(parseTheory(a.theory), a.classKey, a.texts, a.priorities),
 }

@@ -66,6 +66,19 @@ describe('Goldstone frame through the run pipeline', () => {
     expect(keptNow).toHaveLength(12)
   })
 
+  it('rewrites a typed operator onto the kept p⁴ terms: ⟨u·u⟩² = 2⟨u_μ u_ν u^μ u^ν⟩ + 4⟨u_μ u^μ u_ν u^ν⟩ − 2⟨u_μ u_ν⟩⟨u^μ u^ν⟩ for N = 3 (Cayley–Hamilton; Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465)', async () => {
+    const run = await finished({ kind: 'basis', maxOrder: 4 })
+    const res = await world.byRole.viewer.client.post(`/api/bases/${run.summary.basisId}/rewrite`, { classKey: 'p^4', text: '<u_μ u^μ><u_ν u^ν>' })
+    expect(res.status, JSON.stringify(res.body)).toBe(200)
+    const { body } = await world.byRole.viewer.client.get(`/api/bases/${run.summary.basisId}`)
+    const textOf = (id: number) => body.operators.find((o: { id: number }) => o.id === id).text
+    const terms = Object.fromEntries(res.body.rewrite.terms.map((t: { operatorId: number, coefficient: string }) => [textOf(t.operatorId), t.coefficient]))
+    expect(terms).toEqual({ '⟨u_μ u_ν u^μ u^ν⟩': '2', '⟨u_μ u^μ u_ν u^ν⟩': '4', '⟨u_μ u_ν⟩⟨u^μ u^ν⟩': '-2' })
+    const bad = await world.byRole.viewer.client.post(`/api/bases/${run.summary.basisId}/rewrite`, { classKey: 'p^4', text: '<u_μ u_ν>' })
+    expect(bad.status).toBe(422)
+    expect(messageOf(bad)).toContain('the index μ appears 1 time')
+  })
+
   it('the scale ladder counts p^k as (p/Λ_χ)^(k−2), as the board heading does: set aside below 1/10 takes p⁴ (1/16) and keeps p² (1) (Manohar and Georgi, Nucl. Phys. B 234 (1984) 189)', async () => {
     const run = await finished({ kind: 'basis', maxOrder: 4 })
     const ladder = { scales: [{ name: 'p', value: '3/10', unit: 'GeV' }, { name: 'Lambda_chi', value: '6/5', unit: 'GeV' }], parameters: [{ name: 'eps', numerator: 'p', denominator: 'Lambda_chi' }], orders: [2, 4, 6] }

@@ -25,6 +25,7 @@ const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES, budgetMs: n
   integrateOut: { lane: 'light', budgetMs: 5_000, what: 'Integrating out these fields' },
   quickCount: { lane: 'count', budgetMs: 10_000, what: 'This count (a quick count is for up to 10 s; start a background run instead)' },
   typedFingerprints: { lane: 'count', budgetMs: 20_000, what: 'Placing this typed operator' },
+  goldstoneTypedFingerprints: { lane: 'count', budgetMs: 20_000, what: 'Placing this typed operator' },
 }
 
 const cache = new ResultCache(500, 32 * 1024 * 1024)

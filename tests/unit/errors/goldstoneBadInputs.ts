@@ -7,6 +7,8 @@ import { goldstoneTask } from '../../../server/engine/goldstone/task'
 import { goldstoneBasis } from '../../../server/engine/goldstone/explicit/goldstoneBasis'
 import { GradedSpace, explicitPrimes } from '../../../server/engine/goldstone/explicit/graded'
 import { checkLabels } from '../../../server/engine/goldstone/explicit/monomial'
+import { parseGoldstoneOperator } from '../../../server/engine/goldstone/explicit/parseGoldstone'
+import { goldstoneTypedFingerprints } from '../../../server/engine/goldstone/explicit/typedGoldstone'
 import { ExactEvaluator } from '../../../server/engine/goldstone/explicit/exactValue'
 import { ClassicalSolution } from '../../../server/engine/goldstone/explicit/perturbiner'
 import { randomConfig } from '../../../server/engine/goldstone/explicit/kinematics'
@@ -30,7 +32,13 @@ function shortDet(): number {
 
 export const goldstoneCases: BadInput[] = [
   { name: 'a Goldstone task of a theory without its block', run: () => goldstoneTask({ ...umbral(), goldstone: undefined }, { kind: 'count' }, {}), says: /needs its "goldstone" block/ },
-  { name: 'a typed operator in the Goldstone frame', run: () => goldstoneTask(umbral(), { kind: 'fingerprint' }, {}), says: /not rewritten in the Goldstone frame/ },
+  { name: 'a typed operator in a Goldstone class that is not an order', run: () => goldstoneTask(umbral(), { kind: 'fingerprint', classKey: 'u^4', texts: ['⟨u_μ u^μ u_ν u^ν⟩'] }, {}), says: /one chiral order, written p\^4/ },
+  { name: 'a typed Goldstone operator with an open index', run: () => parseGoldstoneOperator('⟨u_μ u_ν⟩'), says: /the index μ appears 1 time/ },
+  { name: 'a typed Goldstone operator with an unknown letter', run: () => parseGoldstoneOperator('⟨x_μ x^μ⟩'), says: /a building block \(u, χ\+/ },
+  { name: 'an unclosed typed Goldstone trace', run: () => parseGoldstoneOperator('⟨u_μ u^μ'), says: /is not closed/ },
+  { name: 'an empty typed Goldstone operator', run: () => parseGoldstoneOperator('  '), says: /the text is empty/ },
+  { name: 'a typed Goldstone operator of another order', run: () => goldstoneTypedFingerprints({ N: 3, sources: { scalar: true, vector: true }, order: 4, evaluatedAtN: 3 }, ['⟨u_μ u^μ⟩']), says: /chiral order p\^2, but this class is p\^4/ },
+  { name: 'a typed Goldstone operator at p^6', run: () => goldstoneTypedFingerprints({ N: 3, sources: { scalar: true, vector: true }, order: 6, evaluatedAtN: 3 }, ['⟨u_μ u^μ⟩']), says: /rewritten up to p\^4/ },
   { name: 'an explicit basis of O(N+1)/O(N)', run: () => goldstoneTask(withBlock({ coset: 'orthogonal' }), { kind: 'basis' }, {}), says: /run the counts/ },
   { name: 'an explicit basis with the θ term', run: () => goldstoneTask(withBlock({ theta: true }), { kind: 'basis' }, {}), says: /P-invariant/ },
   { name: 'an explicit Goldstone basis to p^8', run: () => goldstoneBasis({ N: 3, sources: { scalar: true, vector: true }, maxOrder: 8 }), says: /up to p\^6/ },
