@@ -8,8 +8,9 @@ import { z } from 'zod'
  * - coset: "chiral" = SU(N)_L × SU(N)_R / SU(N)_V (N ≥ 2), "orthogonal" = O(N+1)/O(N) (N ≥ 1);
  *   N may be "general" (no relation specific to a given N).
  * - sources: external scalar sources s, p (χ = 2B(s + ip)) and vector sources l_μ, r_μ
- *   (traceless), each switched on or off. Tensor sources and the singlet (U(1)) parts of the
- *   sources are not offered.
+ *   (traceless), each switched on or off; singletVector adds the U(1)_V source v_μ^(s) (its
+ *   field strength, a flavor singlet: the photon of N = 2 needs it), counts only, chiral coset.
+ *   Tensor sources and the axial singlet (U(1)_A) are not offered.
  * - theta: a θ term is present, so P is not a symmetry: P-odd (C-even) terms are counted too.
  * - maxOrder: highest chiral order counted (an even power of p, 2 … 14); explicit bases are
  *   built up to p⁶ (SU(N) cosets).
@@ -30,6 +31,7 @@ export const GoldstoneFrameSchema = z
     sources: z.object({
       scalar: z.boolean({ message: 'sources.scalar is true or false (the sources s, p)' }),
       vector: z.boolean({ message: 'sources.vector is true or false (the sources l_μ, r_μ)' }),
+      singletVector: z.boolean({ message: 'sources.singletVector is true or false (the singlet vector source v_μ of U(1)_V)' }).optional(),
     }).strict(),
     theta: z.boolean().optional(),
     maxOrder: z.number().int({ message: 'the highest chiral order is a whole number (a power of p)' }),
@@ -43,6 +45,9 @@ export const GoldstoneFrameSchema = z
     const lowest = g.coset === 'chiral' ? 2 : 1
     if (g.N !== 'general' && (g.N < lowest || g.N > GOLDSTONE_MAX_N)) {
       bad('N', `N must be from ${lowest} to ${GOLDSTONE_MAX_N} (or "general") for the ${g.coset} coset, but N = ${g.N}`)
+    }
+    if (g.sources.singletVector && g.coset !== 'chiral') {
+      bad('sources', 'the singlet vector source belongs to the chiral coset SU(N)×SU(N)/SU(N); for O(N+1)/O(N) switch it off')
     }
     if (g.maxOrder < 2 || g.maxOrder > GOLDSTONE_MAX_ORDER || g.maxOrder % 2 !== 0) {
       bad('maxOrder', `the highest chiral order is an even power of p from 2 to ${GOLDSTONE_MAX_ORDER}, but maxOrder = ${g.maxOrder}`)

@@ -17,7 +17,7 @@
 import type { FlavorKind } from './flavorModels'
 import type { TowerKind } from './towers'
 
-export type BlockName = 'u' | 'chi+' | 'chi-' | 'f+' | 'f-'
+export type BlockName = 'u' | 'chi+' | 'chi-' | 'f+' | 'f-' | 'v'
 
 export interface Block {
   name: BlockName
@@ -33,21 +33,27 @@ export interface Block {
   charge: 1 | -1
   /** Sign under Hermitian conjugation (which also reverses products). */
   hermitian: 1 | -1
-  /** The external sources the block needs: scalar (s, p), vector (l_μ, r_μ), or none. */
-  source: 'scalar' | 'vector' | null
+  /** The external sources the block needs: scalar (s, p), vector (l_μ, r_μ), the singlet vector v_μ^(s), or none. */
+  source: 'scalar' | 'vector' | 'singletVector' | null
 }
 
-/** Which external sources a theory has. */
-export interface SourceSwitch { scalar: boolean, vector: boolean }
+/**
+ * Which external sources a theory has. singletVector: the U(1)_V part of the vector source,
+ * v_μ^(s) = ⟨r_μ + l_μ⟩/(2N) (the quark-number current's source; the photon's for N = 2, whose
+ * charge matrix is not traceless). It enters only through its field strength v_μν, a flavor
+ * singlet with C = −1 (Ebertshäuser, Fearing, Scherer, Phys. Rev. D 65 (2002) 054033, the U(1)_V
+ * extension; Bijnens, Girlanda, Talavera, Eur. Phys. J. C 23 (2002) 539).
+ */
+export interface SourceSwitch { scalar: boolean, vector: boolean, singletVector?: boolean }
 
 /** Normalize the sources option: true/false switches both. */
 export function sourceSwitch(s: boolean | SourceSwitch): SourceSwitch {
-  return typeof s === 'boolean' ? { scalar: s, vector: s } : s
+  return typeof s === 'boolean' ? { scalar: s, vector: s } : { scalar: s.scalar, vector: s.vector, singletVector: s.singletVector === true }
 }
 
 /** Whether a block exists with these sources. */
 export function blockPresent(b: Block, s: SourceSwitch): boolean {
-  return b.source === null || s[b.source]
+  return b.source === null || s[b.source] === true
 }
 
 export const BLOCKS: readonly Block[] = [
@@ -56,6 +62,7 @@ export const BLOCKS: readonly Block[] = [
   { name: 'chi-', symbol: 'χ−', tower: 'source', flavor: 'gl', parity: -1, charge: 1, hermitian: -1, source: 'scalar' },
   { name: 'f+', symbol: 'f+', tower: 'strength', flavor: 'sl', parity: 1, charge: -1, hermitian: 1, source: 'vector' },
   { name: 'f-', symbol: 'f−', tower: 'strength', flavor: 'sl', parity: -1, charge: 1, hermitian: 1, source: 'vector' },
+  { name: 'v', symbol: 'v', tower: 'strength', flavor: 'singlet', parity: 1, charge: -1, hermitian: 1, source: 'singletVector' },
 ]
 
 /** Blocks used by a count: the Goldstone block always, the source blocks when their sources are on. */

@@ -5,7 +5,8 @@
  * parity, C and P sectors, and with the number of contact terms (sources only, no Goldstone field).
  *
  * Cosets: SU(N)_L × SU(N)_R / SU(N)_V (N ≥ 2, or general N: no trace relations) and
- * O(N+1)/O(N). External sources s, p, l_μ, r_μ (traceless l, r) switched on or off; with the θ
+ * O(N+1)/O(N). External sources s, p, l_μ, r_μ (traceless l, r) switched on or off, and for the
+ * chiral coset the singlet vector source v_μ^(s) (U(1)_V, through its field strength); with the θ
  * term the theory is not P-invariant, and P-odd operators are counted too.
  * Method: the Hilbert series of the non-linear realization (cosetSeries.ts), summed over the
  * classes that integration by parts keeps apart; the contact terms by the linear Hilbert series
@@ -73,6 +74,9 @@ function checkOptions(o: GoldstoneCountOptions): void {
   }
   const min = o.minOrder ?? 2
   if (!Number.isInteger(min) || min < 2 || min > o.maxOrder) throw new EngineInputError(fn, `the lowest chiral order must be from 2 to ${o.maxOrder}, got ${min}`)
+  if (o.coset !== 'chiral' && typeof o.sources === 'object' && o.sources.singletVector) {
+    throw new EngineInputError(fn, 'the singlet vector source belongs to the chiral coset SU(N)×SU(N)/SU(N); for O(N+1)/O(N) switch it off')
+  }
   const lowest = o.coset === 'chiral' ? 2 : 1
   if (o.N !== 'general' && (!Number.isInteger(o.N) || o.N < lowest || o.N > 12)) {
     throw new EngineInputError(fn, `N must be an integer from ${lowest} to 12 or "general" for ${cosetName(o.coset, 'N')}, got ${o.N}`)
@@ -99,7 +103,7 @@ export function countGoldstone(options: GoldstoneCountOptions): GoldstoneCountRe
   const flavor = coset === 'chiral' ? new UnitaryFlavor(flavorN) : new OrthogonalFlavor(flavorN)
   const ctx = new CosetContext(flavor, K, options.signal)
   const classes = cosetClasses(ctx, blocks, options)
-  const contact = sources.scalar || sources.vector ? contactCounts(options, sources, flavorN) : []
+  const contact = sources.scalar || sources.vector || sources.singletVector ? contactCounts(options, sources, flavorN) : []
   const pick = (s: Sectors) => s.cEvenPEven + (options.theta ? s.cEvenPOdd : 0)
   const byOrder: GoldstoneOrderCount[] = []
   for (let d = Math.max(2, options.minOrder ?? 2); d <= K; d++) {
@@ -190,6 +194,7 @@ function zeroTraces(K: number): Rational[][] {
 function deltaH(ctx: CosetContext, blocks: readonly Block[], key: string, d: number): Partial<Sectors> {
   if (d !== 4) return {}
   const fPlus = blocks.find((b) => b.name === 'f+')
+  if (key === 'v^2') return { cEvenPOdd: -1 } // ε^{μνρσ} v_μν v_ρσ: the abelian Chern–Simons density, a total derivative
   if (key === 'f+^2' && fPlus) {
     const kind = fPlus.flavor
     const sym2 = (ctx.flavor.singlets([{ kind, cycle: 1 }, { kind, cycle: 1 }], false) + ctx.flavor.singlets([{ kind, cycle: 2 }], false)) / 2
@@ -207,7 +212,7 @@ function classShape(key: string): { odd: number, even: number } {
   let even = 0
   for (const part of key.split(' ').filter(Boolean)) {
     const [name, power] = part.split('^') as [string, string | undefined]
-    if (name === 'χ+' || name === 'f+') even += Number(power ?? 1)
+    if (name === 'χ+' || name === 'f+' || name === 'v') even += Number(power ?? 1)
     else odd += Number(power ?? 1)
   }
   return { odd, even }
@@ -241,14 +246,17 @@ function contactCounts(o: GoldstoneCountOptions, sources: SourceSwitch, N: numbe
   const ctx = new CosetContext(new UnitaryFlavor(N), K, o.signal)
   const maxScalar = sources.scalar ? K : 0
   const maxVector = sources.vector ? K : 0
+  const maxSinglet = sources.singletVector ? K : 0
   for (let a = 0; 2 * a <= maxScalar; a++) {
     for (let b = 0; b <= a && 2 * (a + b) <= K; b++) {
       for (let c = 0; 2 * (a + b + c) <= K && 2 * c <= maxVector; c++) {
         for (let e = 0; e <= c && 2 * (a + b + c + e) <= K; e++) {
-          if (a + b + c + e === 0) continue
-          const content = [a, b, c, e] as const
-          const t = contactTraces(ctx, N, content)
-          out.push(t[0]!.map((_, d) => sectorCounts(t.map((r) => r[d]!), `contact terms (${content.join(',')}) at p^${d}`, contactTopological(content, d))))
+          for (let v = 0; 2 * (a + b + c + e + v) <= K && 2 * v <= maxSinglet; v++) {
+            if (a + b + c + e + v === 0) continue
+            const content = [a, b, c, e, v] as const
+            const t = contactTraces(ctx, N, content)
+            out.push(t[0]!.map((_, d) => sectorCounts(t.map((r) => r[d]!), `contact terms (${content.join(',')}) at p^${d}`, contactTopological(content, d))))
+          }
         }
       }
     }

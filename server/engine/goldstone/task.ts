@@ -36,5 +36,6 @@ export function goldstoneTask(theory: Theory, task: GoldstoneTaskInput, o: { onP
   if (task.kind === 'count') return countGoldstone({ coset: g.coset, N: g.N, sources: g.sources, theta: g.theta, maxOrder, onProgress: o.onProgress, signal: o.signal })
   if (g.coset !== 'chiral') throw new EngineInputError('goldstoneTask', 'explicit bases are built for SU(N)×SU(N)/SU(N); for O(N+1)/O(N) run the counts')
   if (g.theta) throw new EngineInputError('goldstoneTask', 'explicit bases are built for P-invariant theories; with the θ term run the counts (P-odd terms included)')
+  if (g.sources.singletVector) throw new EngineInputError('goldstoneTask', 'explicit bases are built without the singlet vector source; switch it off for a basis, or run the counts (they include it)')
   return goldstoneBasis({ N: g.N, sources: g.sources, maxOrder: Math.min(maxOrder, MAX_EXPLICIT_ORDER), keep: task.priorities?.keep, onProgress: o.onProgress, signal: o.signal })
 }

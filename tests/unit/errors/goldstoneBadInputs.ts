@@ -4,6 +4,7 @@ import type { Theory } from '../../../shared/schemas/theory'
 import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { findPreset } from '../../../shared/presets/index'
 import { goldstoneTask } from '../../../server/engine/goldstone/task'
+import { countGoldstone } from '../../../server/engine/goldstone/countGoldstone'
 import { goldstoneBasis } from '../../../server/engine/goldstone/explicit/goldstoneBasis'
 import { GradedSpace, explicitPrimes } from '../../../server/engine/goldstone/explicit/graded'
 import { checkLabels } from '../../../server/engine/goldstone/explicit/monomial'
@@ -40,6 +41,8 @@ export const goldstoneCases: BadInput[] = [
   { name: 'a typed Goldstone operator of another order', run: () => goldstoneTypedFingerprints({ N: 3, sources: { scalar: true, vector: true }, order: 4, evaluatedAtN: 3 }, ['⟨u_μ u^μ⟩']), says: /chiral order p\^2, but this class is p\^4/ },
   { name: 'a typed Goldstone operator at p^6', run: () => goldstoneTypedFingerprints({ N: 3, sources: { scalar: true, vector: true }, order: 6, evaluatedAtN: 3 }, ['⟨u_μ u^μ⟩']), says: /rewritten up to p\^4/ },
   { name: 'an explicit basis of O(N+1)/O(N)', run: () => goldstoneTask(withBlock({ coset: 'orthogonal' }), { kind: 'basis' }, {}), says: /run the counts/ },
+  { name: 'an explicit basis with the singlet vector source', run: () => goldstoneTask(withBlock({ sources: { scalar: true, vector: true, singletVector: true } }), { kind: 'basis' }, {}), says: /without the singlet vector source/ },
+  { name: 'a singlet vector source on O(N+1)/O(N)', run: () => countGoldstone({ coset: 'orthogonal', N: 3, sources: { scalar: true, vector: true, singletVector: true }, maxOrder: 4 }), says: /belongs to the chiral coset/ },
   { name: 'an explicit basis with the θ term', run: () => goldstoneTask(withBlock({ theta: true }), { kind: 'basis' }, {}), says: /P-invariant/ },
   { name: 'an explicit Goldstone basis to p^8', run: () => goldstoneBasis({ N: 3, sources: { scalar: true, vector: true }, maxOrder: 8 }), says: /up to p\^6/ },
   { name: 'an explicit Goldstone value with ten legs', run: () => new GradedSpace(field(), 10, 3), says: /between 1 and 9 legs/ },

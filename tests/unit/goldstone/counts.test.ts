@@ -76,6 +76,25 @@ describe('SU(N)×SU(N)/SU(N) with external sources s, p, l, r', () => {
   })
 })
 
+describe('with the singlet vector source v_μ^(s) (U(1)_V)', () => {
+  const withSinglet = (N: number | 'general') => orders({ coset: 'chiral', N, sources: { scalar: true, vector: true, singletVector: true }, maxOrder: 8 })
+  const [two, three, general] = [withSinglet(2), withSinglet(3), withSinglet('general')]
+
+  it('p⁶ odd intrinsic parity: 13 terms for N = 2 (Bijnens, Girlanda, Talavera, Eur. Phys. J. C 23 (2002) 539, abstract), 24 + 8 for general N (Ebertshäuser, Fearing, Scherer, Phys. Rev. D 65 (2002) 054033, abstract: 8 supplementary terms for SU(N)×SU(N)×U(1)_V)', () => {
+    expect([at(two, 6).byParity.odd, at(general, 6).byParity.odd]).toEqual([13, 32])
+    expect(at(three, 6).byParity.odd).toBe(31) // 23 + 8: not stated in those abstracts; recorded here
+  })
+
+  it('p⁸ odd intrinsic parity "including a singlet trace": 1210, 892 and 211 terms for general N, N = 3, N = 2 ("The anomalous chiral Lagrangian at order p⁸", JHEP 01 (2024), abstract)', () => {
+    expect([at(general, 8).byParity.odd, at(three, 8).byParity.odd, at(two, 8).byParity.odd]).toEqual([1210, 892, 211])
+  })
+
+  it('p⁴ gains one term, the contact term v_μν v^μν (common practice: the singlet\'s own kinetic-like counterterm); p² is unchanged', () => {
+    expect([at(two, 4).operators, at(two, 4).contact, at(three, 4).operators, at(three, 4).contact]).toEqual([11, 4, 13, 3])
+    expect(at(three, 2).operators).toBe(2)
+  })
+})
+
 describe('sources switched one at a time', () => {
   const p4 = (scalar: boolean, vector: boolean) => at(orders({ coset: 'chiral', N: 3, sources: { scalar, vector }, maxOrder: 4 }), 4)
   it('N = 3, p⁴ with s, p only: L1 … L8 and H2; with l_μ, r_μ only: L1, L2, L3, L9, L10 and H1 (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465, the terms sorted by the sources they hold)', () => {
