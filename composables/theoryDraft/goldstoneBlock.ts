@@ -9,6 +9,8 @@ export interface DraftGoldstone {
   N: string
   scalar: boolean
   vector: boolean
+  /** The singlet vector source v_μ of U(1)_V (chiral coset, counts only). */
+  singletVector: boolean
   theta: boolean
   /** Highest chiral order, an even power of p (2 … 14), typed. */
   maxOrder: string
@@ -19,7 +21,7 @@ export interface DraftGoldstone {
 
 /** A fresh block: three light flavors with all sources, to p⁴. */
 export function newGoldstone(): DraftGoldstone {
-  return { coset: 'chiral', N: '3', scalar: true, vector: true, theta: false, maxOrder: '4', decayConstant: '', goldstoneName: '' }
+  return { coset: 'chiral', N: '3', scalar: true, vector: true, singletVector: false, theta: false, maxOrder: '4', decayConstant: '', goldstoneName: '' }
 }
 
 export function goldstoneToDraft(input: unknown): DraftGoldstone {
@@ -27,7 +29,7 @@ export function goldstoneToDraft(input: unknown): DraftGoldstone {
   const sources = isRecord(g.sources) ? g.sources : {}
   return {
     coset: g.coset === 'orthogonal' ? 'orthogonal' : 'chiral', N: asText(g.N),
-    scalar: sources.scalar === true, vector: sources.vector === true, theta: g.theta === true,
+    scalar: sources.scalar === true, vector: sources.vector === true, singletVector: sources.singletVector === true, theta: g.theta === true,
     maxOrder: asText(g.maxOrder), decayConstant: asText(g.decayConstant), goldstoneName: asText(g.goldstoneName),
     ...(g.description !== undefined ? { description: asText(g.description) } : {}),
   }
@@ -39,7 +41,7 @@ export function goldstoneToTheory(d: DraftGoldstone, issues: DraftIssue[]): Reco
   if (n === 'general') out.N = 'general'
   else if (/^\d{1,3}$/.test(n)) out.N = Number(n)
   else issues.push({ path: ['goldstone', 'N'], message: n ? `N is a whole number or "general", but got "${n}"` : 'N is needed: the number of light flavors (or "general")' })
-  out.sources = { scalar: d.scalar, vector: d.vector }
+  out.sources = { scalar: d.scalar, vector: d.vector, ...(d.singletVector ? { singletVector: true } : {}) }
   if (d.theta) out.theta = true
   const k = d.maxOrder.trim()
   if (/^\d{1,3}$/.test(k)) out.maxOrder = Number(k)

@@ -20,6 +20,12 @@ describe('GoldstoneFrameSchema (common practice: schema validation)', () => {
     expect(messages(GoldstoneFrameSchema.safeParse({ ...block, sources: { scalar: 'yes', vector: true } }))[0]).toBe('sources.scalar is true or false (the sources s, p)')
     expect(GoldstoneFrameSchema.safeParse({ ...block, tensor: true }).success).toBe(false)
   })
+
+  it('takes the singlet vector source on the chiral coset only', () => {
+    const singlet = { scalar: true, vector: true, singletVector: true }
+    expect(GoldstoneFrameSchema.safeParse({ ...block, sources: singlet }).success).toBe(true)
+    expect(messages(GoldstoneFrameSchema.safeParse({ ...block, coset: 'orthogonal', sources: singlet }))).toEqual(['Goldstone frame: the singlet vector source belongs to the chiral coset SU(N)×SU(N)/SU(N); for O(N+1)/O(N) switch it off'])
+  })
 })
 
 describe('the goldstone block in a theory file', () => {
