@@ -168,11 +168,21 @@ function checkRealScalar(f: TheoryField, groups: Map<string, TheoryGroup>, bad: 
       bad('charges', `a real scalar needs a self-conjugate Z_${g.n} charge (2q = 0 mod ${g.n}), but this one is ${q}`, gname)
     }
   }
+  // Frobenius–Schur indicator of a product representation = product of the factors' indicators
+  // (+1 real, −1 pseudoreal, 0 complex): a real (2,2) of SU(2)×SU(2) is real.
+  const factors: { gname: string; labels: number[]; reality: string }[] = []
   for (const [gname, labels] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
     if (g?.type !== 'SU' || !validSU(g.n) || labels.length !== (g.n ?? 0) - 1) continue
-    const reality = irrepReality(g.n ?? 0, labels)
-    if (reality !== 'real') bad('reps', `a real scalar must sit in a real representation, but [${labels.join(',')}] is ${reality}`, gname)
+    factors.push({ gname, labels, reality: irrepReality(g.n ?? 0, labels) })
+  }
+  const complex = factors.find((x) => x.reality === 'complex')
+  const pseudo = factors.filter((x) => x.reality === 'pseudoreal')
+  if (complex) bad('reps', `a real scalar must sit in a real representation, but [${complex.labels.join(',')}] is complex`, complex.gname)
+  else if (pseudo.length === 1) bad('reps', `a real scalar must sit in a real representation, but [${pseudo[0]!.labels.join(',')}] is pseudoreal`, pseudo[0]!.gname)
+  else if (pseudo.length % 2 === 1) {
+    const list = pseudo.map((x) => `${x.gname} = [${x.labels.join(',')}]`).join(', ')
+    bad('reps', `a real scalar must sit in a real representation, but the product of the reality indicators is −1: ${list} are pseudoreal (an even number of pseudoreal factors is real)`, pseudo[0]!.gname)
   }
 }
 

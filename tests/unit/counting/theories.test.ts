@@ -128,6 +128,20 @@ describe('discrete and global symmetries', () => {
     expect(countOperators(t, { maxDim: 6, minDim: 6 }).byDimension[0]!.classes).toEqual({ 'D^2 H^2 H*^2': 2, 'H^3 H*^3': 1 })
   })
 
+  it('a real (2,2) bidoublet of SU(2)_L × SU(2)_R counts with custodial symmetry: Φ^6 → 1 and D^2 Φ^4 → 1 (the custodial-violating Q_HD is gone; Sikivie, Susskind, Voloshin, Zakharov, Nucl. Phys. B 173 (1980) 189; Grzadkowski et al., JHEP 10 (2010) 085)', () => {
+    const t = parseTheory({
+      name: 'custodial', frame: 'relativistic',
+      groups: [{ name: 'SU2L', type: 'SU', n: 2, gauge: false }, { name: 'SU2R', type: 'SU', n: 2, gauge: false }],
+      fields: [{ name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [1] } }],
+    })
+    const r = countOperators(t, { maxDim: 8 })
+    expect(r.byDimension[1]!.classes).toEqual({ 'D^2 Phi^4': 1, 'Phi^6': 1 })
+    // The same four real components as one real 4-vector of O(4) (SU(2)×SU(2)/Z2 = SO(4)):
+    // odd powers vanish (the (2,2) is odd under the centre), like a Z2-odd field.
+    expect(r.byDimension[0]!.operators).toBe(0)
+    expect(r.byDimension[2]!.operators).toBe(0)
+  })
+
   it('SMEFT one flavor, dimensions 9 and 10: 560 and 15456 (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016, title)', () => {
     const r = countOperators(preset('smeft'), { maxDim: 10, minDim: 9, nf: 1 })
     expect(r.byDimension.map((d) => d.operators)).toEqual([560, 15456])
