@@ -12,6 +12,7 @@ import scalarQed from './scalar-qed.json'
 import qcdLike from './qcd-like.json'
 import heavyVexonium from './heavy-vexonium.json'
 import umbralPions from './umbral-pions.json'
+import smeftU35 from './smeft-u3-5.json'
 
 export interface Preset {
   id: string
@@ -27,6 +28,7 @@ export const PRESETS: readonly Preset[] = [
   { id: 'qed', title: 'QED', description: 'One Dirac fermion of charge −1 (two Weyl fields) and the photon.', theory: qed as Theory },
   { id: 'scalar-qed', title: 'Scalar QED', description: 'A complex scalar of charge 1 and the photon.', theory: scalarQed as Theory },
   { id: 'qcd-like', title: 'QCD-like', description: 'SU(3) gauge theory with 2 Dirac quark flavors and the gluon.', theory: qcdLike as Theory },
+  { id: 'smeft-u3-5', title: 'SMEFT with U(3)^5 flavour symmetry', description: 'One copy of each SM field; the flavour group U(3)^5 written as SU(3)^5 × U(1)^5 (13 groups in all).', theory: smeftU35 as Theory },
   // written by the heavy-particle helper; frame "heavy" (not counted by the Hilbert series)
   { id: 'heavy-vexonium', title: 'Vexonium (heavy frame)', description: 'A heavy fermion and its antiparticle bound by a dark U(1), in the heavy-particle frame.', theory: heavyVexonium as unknown as Theory },
   // frame "goldstone": counted and built per chiral order (server/engine/goldstone)

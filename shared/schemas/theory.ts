@@ -21,7 +21,7 @@ import { GoldstoneFrameSchema, checkGoldstoneFrame, type GoldstoneFrame } from '
  */
 export const NAME_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,15}$/
 export const MAX_FIELDS = 40
-export const MAX_GROUPS = 8
+export const MAX_GROUPS = 32
 export const MAX_FLAVORS = 6
 export const MAX_REP_DIMENSION = 1000
 

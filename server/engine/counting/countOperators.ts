@@ -20,6 +20,7 @@ import { buildTheoryModel } from '../theory/model'
 import { enumerateFieldContents } from './classes'
 import { classKeyOfCounts } from '../theory/classKey'
 import { CountContext, countFieldContent } from './contentCount'
+import { checkCountBudget } from './budget'
 
 export interface CountOptions {
   maxDim: number
@@ -34,6 +35,8 @@ export interface CountOptions {
   flavorPolynomials?: boolean
   onProgress?: (fraction: number, label: string) => void
   signal?: { aborted: boolean }
+  /** Work budget in estimated cycle-index terms (default COUNT_WORK_BUDGET, see budget.ts). */
+  workBudget?: number
 }
 
 export interface DimensionCount {
@@ -72,6 +75,7 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
   }
   const model = buildTheoryModel(theory, { nf: options.nf })
   const contents = enumerateFieldContents(model, minDim, maxDim)
+  checkCountBudget(model, contents, maxDim, options.workBudget)
   const ctx = new CountContext(model, maxDim)
   const byDimension: DimensionCount[] = []
   for (let d = minDim; d <= maxDim; d++) {
