@@ -4,13 +4,14 @@
 // Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
 import type { Theory } from '../shared/schemas/theory'
 import { LORENTZ_KINDS, type LorentzKind } from '../shared/schemas/lorentzKind'
+import { GROUP_KINDS, type GroupKind, groupKindLabel, takesN } from '../shared/schemas/groupKinds'
 import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
 import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
 import { type DraftGoldstone, goldstoneToDraft, goldstoneToTheory } from './theoryDraft/goldstoneBlock'
 
 export type { DraftHeavy }
 
-export type GroupKind = 'SU' | 'U1' | 'Z'
+export type { GroupKind }
 export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
 
 export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
@@ -80,7 +81,7 @@ export function theoryToDraft(input: unknown): TheoryDraft {
   if (!isRecord(input)) throw new Error('a theory file is a JSON object with "name", "frame", "groups" and "fields"')
   const groups: DraftGroup[] = list(input.groups).map((g) => {
     const r = isRecord(g) ? g : {}
-    const type = (['SU', 'U1', 'Z'].includes(String(r.type)) ? r.type : 'U1') as GroupKind
+    const type = ((GROUP_KINDS as readonly string[]).includes(String(r.type)) ? r.type : 'U1') as GroupKind
     return { uid: newUid('g'), name: text(r.name), type, n: text(r.n), gauge: r.gauge !== false, ...(r.description !== undefined ? { description: text(r.description) } : {}) }
   })
   const byName = new Map(groups.map((g) => [g.name, g.uid]))
@@ -132,9 +133,10 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
   if (maxOrder !== undefined) theory.maxOrder = maxOrder
   theory.groups = d.groups.map((g, i) => {
     const out: Record<string, unknown> = { name: g.name.trim(), type: g.type }
-    const n = readInt(g.n, ['groups', i, 'n'], issues, `must be a whole number (the n of ${g.type === 'Z' ? 'Z_n' : 'SU(n)'})`)
-    if (g.type !== 'U1' && n !== undefined) out.n = n
-    if (g.type !== 'U1' && n === undefined && !g.n.trim()) issues.push({ path: ['groups', i, 'n'], message: `is required: ${g.type === 'Z' ? 'Z_n' : 'SU(n)'} needs n` })
+    const label = g.type === 'Z' ? 'Z_n' : groupKindLabel(g.type)
+    const n = takesN(g.type) ? readInt(g.n, ['groups', i, 'n'], issues, `must be a whole number (the n of ${label})`) : undefined
+    if (n !== undefined) out.n = n
+    if (takesN(g.type) && n === undefined && !g.n.trim()) issues.push({ path: ['groups', i, 'n'], message: `is required: ${label} needs n` })
     out.gauge = g.gauge
     if (g.description !== undefined) out.description = g.description
     return out

@@ -1,9 +1,10 @@
 // Representations and charges of one field as editor text per group uid, and back: shared by the
 // field roster and the heavy particle. (Outside composables/' top level: not auto-imported.)
 import type { DraftGroup, DraftIssue } from '../theoryDraftModel'
+import { groupInputKind } from '../../shared/schemas/groupKinds'
 
 export interface DraftLabels {
-  /** Dynkin labels per group uid, typed as "1,0" (empty = singlet). */
+  /** Dynkin labels ("1,0") or a finite group's irrep name ("3") per group uid (empty = singlet). */
   reps: Record<string, string>
   /** Charge per group uid, typed as "1/6" (empty = 0). */
   charges: Record<string, string>
@@ -26,6 +27,7 @@ export function labelsToDraft(reps: unknown, charges: unknown, byName: Map<strin
   for (const [g, labels] of Object.entries(isRecord(reps) ? reps : {})) {
     const uid = byName.get(g)
     if (uid && Array.isArray(labels)) out.reps[uid] = labels.join(',')
+    else if (uid && typeof labels === 'string') out.reps[uid] = labels
     else out.strayReps[g] = labels
   }
   for (const [g, q] of Object.entries(isRecord(charges) ? charges : {})) {
@@ -46,12 +48,14 @@ export function labelsToTheory(d: DraftLabels, groups: DraftGroup[], out: Record
   for (const g of groups) {
     const rep = (d.reps[g.uid] ?? '').trim()
     const q = (d.charges[g.uid] ?? '').trim()
-    if (g.type === 'SU' && rep) {
+    const kind = groupInputKind(g.type)
+    if (kind === 'labels' && rep) {
       const labels = rep.split(/[\s,]+/).filter(Boolean)
       if (labels.every((a) => /^\d{1,2}$/.test(a))) reps[g.name] = labels.map(Number)
       else issues.push({ path: [...at, 'reps', g.name], message: `Dynkin labels are whole numbers separated by commas, e.g. "1,0", but got "${rep}"` })
     }
-    if (g.type !== 'SU' && q) charges[g.name] = q
+    if (kind === 'irrep' && rep) reps[g.name] = rep
+    if (kind === 'charge' && q) charges[g.name] = q
   }
   if (Object.keys(reps).length) out.reps = reps
   if (Object.keys(charges).length) out.charges = charges

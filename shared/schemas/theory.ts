@@ -4,18 +4,22 @@ import { CountingRuleSchema } from './countingRules'
 import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
-import { irrepReality, weylDimension } from '../physics/suIrrep'
 import { GoldstoneFrameSchema, checkGoldstoneFrame, type GoldstoneFrame } from './goldstoneFrame'
+import { GROUP_KINDS, groupKindLabel, isFiniteKind, isLieKind } from './groupKinds'
+import { MAX_REP_DIMENSION, type RepValue, checkRealRepresentation, checkRep, groupNProblem } from './theoryGroups'
 
 /**
  * Theory file of Scalewright (JSON, uploaded by users and built by the editor).
  * Keys are part of the portable file format: extend, never rename.
  *
- * - groups: SU(n) (2 <= n <= 8), U1, or Z (Z_n, 2 <= n <= 64); `gauge` false = global symmetry.
+ * - groups: SU(n) (2 <= n <= 8), SO(n) (5 <= n <= 18), Sp(n) (n even, 4 <= n <= 16), G2, F4, E6,
+ *   E7, E8, U1, Z (Z_n, 2 <= n <= 64), or a finite flavour group S3, A4, S4, Q8, Tprime (T′),
+ *   Delta27 (Δ(27)) (groupKinds.ts); `gauge` false = global symmetry.
  * - fields: lorentz "scalar" (complex unless real), "left-weyl" fermion (1/2,0), "right-weyl"
  *   fermion (0,1/2), "field-strength" of the gauge group `gaugeOf` (both chiral halves, real,
  *   adjoint; a singlet of every other group). See ./lorentzKind.ts.
- *   reps: Dynkin labels per SU(n) group (absent = singlet); charges: rational strings per U1
+ *   reps: Dynkin labels per Lie group (Bourbaki's numbering), an irrep name per finite group
+ *   (absent = singlet); charges: rational strings per U1
  *   ("1/6"), integers mod n per Z group (absent = 0); flavors: 1..6 (default 1).
  *   Complex fields bring their conjugates.
  */
@@ -23,7 +27,7 @@ export const NAME_PATTERN = /^[A-Za-z][A-Za-z0-9_]{0,15}$/
 export const MAX_FIELDS = 40
 export const MAX_GROUPS = 32
 export const MAX_FLAVORS = 6
-export const MAX_REP_DIMENSION = 1000
+export { MAX_REP_DIMENSION }
 
 const NameSchema = z.string().regex(NAME_PATTERN, {
   message: 'a name is a letter followed by up to 15 letters, digits or "_"',
@@ -35,7 +39,7 @@ const ChargeSchema = z.union([
 
 export const GroupSchema = z.object({
   name: NameSchema,
-  type: z.enum(['SU', 'U1', 'Z']),
+  type: z.enum(GROUP_KINDS),
   n: z.number().int().optional(),
   gauge: z.boolean(),
   description: z.string().max(200).optional(),
@@ -44,7 +48,7 @@ export const GroupSchema = z.object({
 export const FieldSchema = z.object({
   name: NameSchema,
   lorentz: z.enum(LORENTZ_KINDS, { error: (iss) => lorentzKindMessage(iss.input) }),
-  reps: z.record(NameSchema, z.array(z.number().int().min(0).max(12)).max(7)).optional(),
+  reps: z.record(NameSchema, z.union([z.array(z.number().int().min(0).max(12)).max(9), z.string().max(8)])).optional(),
   charges: z.record(NameSchema, ChargeSchema).optional(),
   real: z.boolean().optional(),
   flavors: z.number().int().min(1).max(MAX_FLAVORS).optional(),
@@ -79,10 +83,9 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
   t.groups.forEach((g, i) => {
     if (groups.has(g.name)) report(['groups', i, 'name'], 'is already the name of another symmetry; give each symmetry its own name')
     groups.set(g.name, g)
-    const given = g.n === undefined ? '; give n' : `, but n = ${g.n}`
-    if (g.type === 'SU' && (g.n === undefined || g.n < 2 || g.n > 8)) report(['groups', i, 'n'], `SU(n) needs n from 2 to 8${given}`)
-    if (g.type === 'Z' && (g.n === undefined || g.n < 2 || g.n > 64)) report(['groups', i, 'n'], `Z_n needs n from 2 to 64${given}`)
-    if (g.type === 'U1' && g.n !== undefined) report(['groups', i, 'n'], `a U(1) group takes no n; remove n = ${g.n}`)
+    const nProblem = groupNProblem(g)
+    if (nProblem) report(['groups', i, 'n'], nProblem)
+    if (g.gauge && isFiniteKind(g.type)) report(['groups', i, 'gauge'], `${groupKindLabel(g.type)} is a finite group; declare it global (not gauged)`)
   })
   const names = new Set<string>()
   const strengths = new Set<string>()
@@ -107,6 +110,7 @@ function checkHeavy(h: HeavyFrame, groups: Map<string, TheoryGroup>, fieldNames:
   if (!g) report(['heavy', 'gaugeGroup'], `the theory has no symmetry named "${h.gaugeGroup}"; choose one of its gauge groups`)
   else if (!g.gauge) report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is a global symmetry (not gauged); choose a gauge group`)
   else if (g.type === 'Z') report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is the discrete group Z_${g.n}; choose a U(1) or SU(n) gauge group`)
+  else if (g.type !== 'U1' && g.type !== 'SU') report(['heavy', 'gaugeGroup'], `${h.gaugeGroup} is ${groupKindLabel(g.type, g.n)}; the heavy-particle frame needs a U(1) or SU(n) gauge group`)
   // Reps and charges follow the roster's rules (a Pauli field is a fermion: not a field strength).
   const particle: TheoryField = { name: h.particle.name, lorentz: 'left-weyl', reps: h.particle.reps, charges: h.particle.charges }
   const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], message)
@@ -125,16 +129,13 @@ const NO_SUCH_GROUP = (name: string) => `the theory has no symmetry named "${nam
 type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void
 
 function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
-  for (const [gname, labels] of Object.entries(f.reps ?? {})) {
+  for (const [gname, rep] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
     if (!g) { bad('reps', NO_SUCH_GROUP(gname), gname); continue }
-    if (g.type !== 'SU') { bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname); continue }
-    if (!validSU(g.n)) continue // the symmetry's own n is reported there
-    if (labels.length !== g.n! - 1) bad('reps', `SU(${g.n}) takes ${g.n! - 1} Dynkin label${g.n === 2 ? '' : 's'}, but [${labels.join(',')}] has ${labels.length}`, gname)
-    else if (weylDimension(g.n!, labels) > BigInt(MAX_REP_DIMENSION)) {
-      bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${labels.join(',')}] has dimension ${weylDimension(g.n!, labels)}`, gname)
-    }
-    if (f.lorentz === 'field-strength' && labels.some((a) => a !== 0)) bad('reps', `a field strength takes its representation from its gauge group; remove [${labels.join(',')}]`, gname)
+    if (!isLieKind(g.type) && !isFiniteKind(g.type)) { bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname); continue }
+    if (groupNProblem(g)) continue // the symmetry's own n is reported there
+    const ok = checkRep(g, rep, bad)
+    if (ok && f.lorentz === 'field-strength' && (typeof rep === 'string' || rep.some((a) => a !== 0))) bad('reps', `a field strength takes its representation from its gauge group; remove ${typeof rep === 'string' ? `"${rep}"` : `[${rep.join(',')}]`}`, gname)
   }
 }
 
@@ -142,7 +143,7 @@ function checkCharges(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad
   for (const [gname, q] of Object.entries(f.charges ?? {})) {
     const g = groups.get(gname)
     if (!g) { bad('charges', NO_SUCH_GROUP(gname), gname); continue }
-    if (g.type === 'SU') { bad('charges', `${gname} is SU(${g.n ?? 'n'}), which takes Dynkin labels, not a charge`, gname); continue }
+    if (g.type !== 'U1' && g.type !== 'Z') { bad('charges', `${gname} is ${groupKindLabel(g.type, g.n)}, which takes ${isFiniteKind(g.type) ? 'an irrep name' : 'Dynkin labels'}, not a charge`, gname); continue }
     if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z_${g.n ?? 'n'} charge is a whole number (counted mod ${g.n ?? 'n'}), but got ${q}`, gname)
     if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `the charge ${q} has a zero denominator`, gname)
     if (f.lorentz === 'field-strength' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge; remove ${q}`, gname)
@@ -155,6 +156,7 @@ function checkStrength(f: TheoryField, groups: Map<string, TheoryGroup>, strengt
   else if (!g) bad('gaugeOf', `the theory has no symmetry named "${f.gaugeOf}"; choose one of its gauge groups`)
   else if (!g.gauge) bad('gaugeOf', `${f.gaugeOf} is a global symmetry (not gauged) and has no field strength`)
   else if (g.type === 'Z') bad('gaugeOf', `${f.gaugeOf} is the discrete group Z_${g.n} and has no field strength`)
+  else if (isFiniteKind(g.type)) bad('gaugeOf', `${f.gaugeOf} is the finite group ${groupKindLabel(g.type, g.n)} and has no field strength`)
   else if (strengths.has(f.gaugeOf)) bad('gaugeOf', `${f.gaugeOf} already has a field strength`)
   if (f.gaugeOf !== undefined) strengths.add(f.gaugeOf)
   if (f.flavors !== undefined && f.flavors !== 1) bad('flavors', `a field strength comes in one flavor, not ${f.flavors}`)
@@ -168,26 +170,13 @@ function checkRealScalar(f: TheoryField, groups: Map<string, TheoryGroup>, bad: 
       bad('charges', `a real scalar needs a self-conjugate Z_${g.n} charge (2q = 0 mod ${g.n}), but this one is ${q}`, gname)
     }
   }
-  // Frobenius–Schur indicator of a product representation = product of the factors' indicators
-  // (+1 real, −1 pseudoreal, 0 complex): a real (2,2) of SU(2)×SU(2) is real.
-  const factors: { gname: string; labels: number[]; reality: string }[] = []
-  for (const [gname, labels] of Object.entries(f.reps ?? {})) {
+  const reps: [TheoryGroup, RepValue][] = []
+  for (const [gname, rep] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
-    if (g?.type !== 'SU' || !validSU(g.n) || labels.length !== (g.n ?? 0) - 1) continue
-    factors.push({ gname, labels, reality: irrepReality(g.n ?? 0, labels) })
+    if (!g || groupNProblem(g) || !(isLieKind(g.type) || isFiniteKind(g.type))) continue
+    if (checkRep(g, rep, () => {})) reps.push([g, rep])
   }
-  const complex = factors.find((x) => x.reality === 'complex')
-  const pseudo = factors.filter((x) => x.reality === 'pseudoreal')
-  if (complex) bad('reps', `a real scalar must sit in a real representation, but [${complex.labels.join(',')}] is complex`, complex.gname)
-  else if (pseudo.length === 1) bad('reps', `a real scalar must sit in a real representation, but [${pseudo[0]!.labels.join(',')}] is pseudoreal`, pseudo[0]!.gname)
-  else if (pseudo.length % 2 === 1) {
-    const list = pseudo.map((x) => `${x.gname} = [${x.labels.join(',')}]`).join(', ')
-    bad('reps', `a real scalar must sit in a real representation, but the product of the reality indicators is −1: ${list} are pseudoreal (an even number of pseudoreal factors is real)`, pseudo[0]!.gname)
-  }
-}
-
-function validSU(n: number | undefined): boolean {
-  return n !== undefined && Number.isInteger(n) && n >= 2 && n <= 8
+  checkRealRepresentation(reps, bad)
 }
 
 function isZeroCharge(q: string | number): boolean {

@@ -5,6 +5,7 @@
  */
 import { EngineInputError } from '../errors'
 import type { Theory } from '../../../shared/schemas/theory'
+import { groupKindLabel } from '../../../shared/schemas/groupKinds'
 import { buildTheoryModel, type Species } from '../theory/model'
 
 /**
@@ -16,6 +17,11 @@ import { buildTheoryModel, type Species } from '../theory/model'
 export function basisSpecies(t: Theory): Species[] {
   if (t.frame !== 'relativistic') throw new EngineInputError('basisSpecies', `Explicit bases from contact amplitudes need the relativistic frame, but this theory uses the ${t.frame} frame`)
   const model = buildTheoryModel(t)
+  const other = [...model.lie, ...model.finite][0]
+  if (other) {
+    const g = t.groups.find((x) => x.name === other.name)!
+    throw new EngineInputError('basisSpecies', `group ${g.name} = ${groupKindLabel(g.type, g.n)}: explicit bases are written for SU(n), U(1) and Z_n groups; this group is counted (Hilbert series) but not written out`)
+  }
   for (const s of model.species) {
     for (const g of model.su) {
       if (s.suKind[g.name] !== 'other') continue

@@ -9,6 +9,7 @@ import { EngineInputError } from '../errors'
 import type { TheoryModel } from '../theory/model'
 import type { FieldContent } from './classes'
 import { partitionsOf } from '../group/symmetricGroup'
+import { speciesRepKeys } from './contentCount'
 
 /** Largest estimated number of (cycle-type combination × group) terms of one count. */
 export const COUNT_WORK_BUDGET = 2e8
@@ -38,7 +39,7 @@ export function estimateCountWork(model: TheoryModel, contents: readonly FieldCo
     c.counts.forEach((n, s) => {
       if (n === 0) return
       visits *= partitionNumber(n)
-      model.species[s]!.su.forEach((labels, g) => { if (labels.some((a) => a !== 0)) acting.add(g) })
+      speciesRepKeys(model, model.species[s]!).forEach((key, g) => { if (key !== null) acting.add(g) })
     })
     terms += visits * (1 + acting.size)
   }

@@ -9,11 +9,11 @@
  */
 import { EngineConsistencyError } from '../errors'
 import { rat, toString as ratToString } from '../exact/rational'
-import type { TheoryModel } from '../theory/model'
+import type { Species, TheoryModel } from '../theory/model'
 import { cycleTypes } from './cycleTypes'
 import { CycleMultiset, MAX_CYCLE } from './cycleMultiset'
 import { ExactSum } from './exactSum'
-import { GroupIntegrator } from './groupFactor'
+import { GroupIntegrator, type IntegrationScheme, finiteScheme, lieScheme, suScheme } from './groupFactor'
 import { lorentzSingletSeries, type LorentzFactor } from './lorentz'
 import type { FieldContent } from './classes'
 
@@ -22,10 +22,11 @@ const LORENTZ_CODES: readonly LorentzFactor['type'][] = ['S', 'L', 'R', 'FL', 'F
 /** Caches shared by all contents of one counting run. */
 export class CountContext {
   readonly lorentz = new Map<string, number[]>()
-  readonly groups: GroupIntegrator[]
-  /** Per SU group: the distinct non-trivial reps (Dynkin keys) of the theory. */
+  /** One integrator per non-abelian group: the SU groups, then the other Lie groups, then the finite ones. */
+  readonly groups: GroupIntegrator<unknown, unknown>[]
+  /** Per non-abelian group: the distinct non-trivial reps (keys) of the theory. */
   readonly repList: string[][]
-  /** Per species per SU group: index into repList, or -1 for a singlet. */
+  /** Per species per non-abelian group: index into repList, or -1 for a singlet. */
   readonly repIndex: number[][]
   /** Per species: index of its Lorentz type in LORENTZ_CODES. */
   readonly lorentzIndex: number[]
@@ -33,17 +34,19 @@ export class CountContext {
   readonly speciesShape: string[]
   /** Results per content shape (contents equal up to U(1)/Z_n charges and species order). */
   readonly shapes = new Map<string, ContentResult>()
-  /** Scratch multisets of the Lorentz and SU(n) cycle data (empty between contents). */
+  /** Scratch multisets of the Lorentz and non-abelian cycle data (empty between contents). */
   readonly lorentzCycles = new CycleMultiset(LORENTZ_CODES.length)
   readonly groupCycles: CycleMultiset[]
   constructor(readonly model: TheoryModel, readonly maxDim: number) {
-    this.groups = model.su.map((g) => new GroupIntegrator(g.n))
-    this.repList = model.su.map(() => [])
+    this.groups = [
+      ...model.su.map((g) => integrator(suScheme(g.n))),
+      ...model.lie.map((g) => integrator(lieScheme(g.rs))),
+      ...model.finite.map((g) => integrator(finiteScheme(g.table))),
+    ]
+    this.repList = this.groups.map(() => [])
     this.repIndex = model.species.map((sp) =>
-      model.su.map(({ name }, g) => {
-        const a = sp.reps[name]!
-        if (a.every((x) => x === 0)) return -1
-        const key = a.join(',')
+      speciesRepKeys(model, sp).map((key, g) => {
+        if (key === null) return -1
         const list = this.repList[g]!
         if (!list.includes(key)) list.push(key)
         return list.indexOf(key)
@@ -53,6 +56,21 @@ export class CountContext {
     this.speciesShape = model.species.map((sp, s) => `${sp.lorentz}/${this.repIndex[s]!.join(',')}/${sp.flavored ? 'f' : ''}${sp.flavors}`)
     this.groupCycles = this.repList.map((reps) => new CycleMultiset(Math.max(1, reps.length)))
   }
+}
+
+/** An integrator with its scheme's types erased (the count only reads integers from it). */
+function integrator<T, F>(scheme: IntegrationScheme<T, F>): GroupIntegrator<unknown, unknown> {
+  return new GroupIntegrator(scheme) as unknown as GroupIntegrator<unknown, unknown>
+}
+
+/**
+ * A species' representation key per non-abelian group in CountContext order (Dynkin labels
+ * "1,0" for Lie groups, the irrep index for finite groups), null for the trivial one.
+ */
+export function speciesRepKeys(model: TheoryModel, sp: Species): (string | null)[] {
+  const labels = [...model.su.map((g) => sp.reps[g.name]!), ...model.lie.map((g) => sp.lie[g.name]!)]
+  const lie = labels.map((a) => (a.every((x) => x === 0) ? null : a.join(',')))
+  return [...lie, ...model.finite.map((g) => sp.finite[g.name]!).map((i) => (i === 0 ? null : String(i)))]
 }
 
 export interface ContentResult {

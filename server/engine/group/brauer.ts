@@ -10,6 +10,26 @@ import { characterAdams } from './character'
 import { classSize, factorial, partitionsOf, symmetricCharacter } from './symmetricGroup'
 import type { PlethysmOptions } from './plethysm'
 
+/** A Weyl chamber: reflect μ + shift + ρ to the dominant chamber (null on a wall). */
+export interface Chamber {
+  rank: number
+  /** Name used in error messages, e.g. "SU(3)" or "E6". */
+  label: string
+  reflect(mu: ArrayLike<number>, shift: ArrayLike<number> | null): { sign: number; labels: number[] } | null
+}
+
+/** The chamber of SU(n) (type A_{n−1}). */
+export function suChamber(n: number): Chamber {
+  return {
+    rank: n - 1,
+    label: `SU(${n})`,
+    reflect: (mu, shift) => {
+      const r = reflectToDominant(mu, shift)
+      return r && { sign: r.sign, labels: r.dynkin }
+    },
+  }
+}
+
 /**
  * Irreps of (Σ_λ q_λ V_λ) ⊗ X, X a Weyl-invariant (possibly virtual) character:
  * V_λ ⊗ X = Σ_{ν ∈ X} m_X(ν) ε(w) V_{w(λ+ν+ρ)-ρ} (walls dropped).
@@ -17,15 +37,20 @@ import type { PlethysmOptions } from './plethysm'
  * Reference: Fulton & Harris, Representation Theory, exercise 25.33; Klimyk (1968).
  */
 export function multiplyIrreps(n: number, irreps: Map<string, number>, x: Character): Map<string, number> {
+  return multiplyIrrepsIn(suChamber(n), irreps, x)
+}
+
+/** multiplyIrreps for any Weyl chamber (simple Lie algebras: lie/rootSystem.ts). */
+export function multiplyIrrepsIn(c: Chamber, irreps: Map<string, number>, x: Character): Map<string, number> {
   const out = new Map<string, number>()
   const weights = [...x].map(([k, m]) => [parseWeightKey('multiplyIrreps', k), m] as const)
   for (const [key, q] of irreps) {
     const lambda = parseWeightKey('multiplyIrreps', key)
     for (const [nu, m] of weights) {
-      if (nu.length !== n - 1) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${n - 1} labels of an SU(${n}) weight`)
-      const r = reflectToDominant(nu, lambda)
+      if (nu.length !== c.rank) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${c.rank} labels of a ${c.label} weight`)
+      const r = c.reflect(nu, lambda)
       if (!r) continue
-      const k = r.dynkin.join(',')
+      const k = r.labels.join(',')
       const v = (out.get(k) ?? 0) + r.sign * q * m
       if (!Number.isSafeInteger(v)) throw new EngineInputError('multiplyIrreps', `A multiplicity (${v}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
       if (v === 0) out.delete(k)
@@ -44,7 +69,14 @@ export function multiplyIrreps(n: number, irreps: Map<string, number>, x: Charac
 export function schurFunctorIrreps(
   n: number, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {},
 ): Map<string, number> {
-  const zero = new Array<number>(n - 1).fill(0).join(',')
+  return schurFunctorIrrepsIn(suChamber(n), ch, partition, k, opts)
+}
+
+/** schurFunctorIrreps for any Weyl chamber. */
+export function schurFunctorIrrepsIn(
+  c: Chamber, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {},
+): Map<string, number> {
+  const zero = new Array<number>(c.rank).fill(0).join(',')
   const acc = new Map<string, bigint>()
   const adams = new Map<number, Character>()
   const prefix = new Map<string, Map<string, number>>()
@@ -61,7 +93,7 @@ export function schurFunctorIrreps(
         if (hit) cur = hit
         else {
           if (!adams.has(r)) adams.set(r, characterAdams(ch, r))
-          cur = multiplyIrreps(n, cur, adams.get(r)!)
+          cur = multiplyIrrepsIn(c, cur, adams.get(r)!)
           prefix.set(key, cur)
         }
       }

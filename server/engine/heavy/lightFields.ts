@@ -12,7 +12,7 @@ export interface TheoryGroupLike { name: string; type: string; n?: number; gauge
 export interface TheoryFieldLike {
   name: string
   lorentz: LorentzKind
-  reps?: Record<string, number[]>
+  reps?: Record<string, number[] | string>
   charges?: Record<string, string | number>
   real?: boolean
   flavors?: number
@@ -45,8 +45,8 @@ export function lorentzKind(f: { lorentz: LorentzKind }): 'scalar' | 'left' | 'r
 function sameQuantumNumbers(a: TheoryFieldLike, b: TheoryFieldLike, groups: readonly TheoryGroupLike[]): boolean {
   for (const g of groups) {
     if (g.type === 'SU') {
-      const ra = a.reps?.[g.name] ?? []
-      const rb = b.reps?.[g.name] ?? []
+      const ra = dynkinReps(a.reps)[g.name] ?? []
+      const rb = dynkinReps(b.reps)[g.name] ?? []
       if (ra.some((x) => x !== 0) || rb.some((x) => x !== 0)) {
         if (ra.join(',') !== rb.join(',')) return false
       }
@@ -83,13 +83,13 @@ export function lightFields(fields: readonly TheoryFieldLike[], groups: readonly
   for (const f of fields) {
     const kind = lorentzKind(f)
     if (kind === 'scalar') {
-      out.push({ name: f.name, kind: f.real ? 'realScalar' : 'complexScalar', dim2: 2, tex: fieldTex(f.name), reps: f.reps ?? {}, charges: f.charges ?? {}, parts: [f.name] })
+      out.push({ name: f.name, kind: f.real ? 'realScalar' : 'complexScalar', dim2: 2, tex: fieldTex(f.name), reps: dynkinReps(f.reps), charges: f.charges ?? {}, parts: [f.name] })
     } else if (kind === 'left') {
       const r = rights.find((x) => !used.has(x.name) && sameQuantumNumbers(f, x, groups))
       if (!r) { unpaired.push(f.name); continue }
       used.add(r.name)
       const name = diracName(f.name, r.name)
-      out.push({ name, kind: 'dirac', dim2: 3, tex: fieldTex(name), reps: f.reps ?? {}, charges: f.charges ?? {}, parts: [f.name, r.name] })
+      out.push({ name, kind: 'dirac', dim2: 3, tex: fieldTex(name), reps: dynkinReps(f.reps), charges: f.charges ?? {}, parts: [f.name, r.name] })
     }
   }
   for (const r of rights) if (!used.has(r.name)) unpaired.push(r.name)
@@ -100,4 +100,9 @@ export function lightFields(fields: readonly TheoryFieldLike[], groups: readonly
 export function chargeOf(f: { charges?: Record<string, string | number> }, group: string): Rational {
   const q = f.charges?.[group]
   return q === undefined ? ZERO : parseRational(String(q).replace(/\s+/g, ''))
+}
+
+/** Dynkin labels per Lie group (finite flavour groups, named by irrep, do not enter the heavy frame's light content). */
+function dynkinReps(reps: Record<string, number[] | string> | undefined): Record<string, number[]> {
+  return Object.fromEntries(Object.entries(reps ?? {}).filter((e): e is [string, number[]] => typeof e[1] !== 'string'))
 }

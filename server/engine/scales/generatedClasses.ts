@@ -16,9 +16,10 @@ function gaugeHints(f: TheoryField, groups: readonly TheoryGroup[]): GeneratedCl
   const out: GeneratedClassHint[] = []
   for (const g of groups) {
     if (!g.gauge || !isChargedUnder(f, g)) continue
-    const strength = g.type === 'SU' ? `${g.name} field strength` : `${g.name} field strength (abelian)`
+    const abelian = g.type === 'U1'
+    const strength = abelian ? `${g.name} field strength (abelian)` : `${g.name} field strength`
     out.push({ field: f.name, loop: 'one-loop', description: `shift of the ${strength} kinetic term (threshold correction to the ${g.name} coupling)` })
-    out.push({ field: f.name, loop: 'one-loop', description: g.type === 'SU'
+    out.push({ field: f.name, loop: 'one-loop', description: !abelian
       ? `pure-gauge operators of ${g.name}: X^3 at dimension 6, X^4 at dimension 8, and X D^2 X (reducible by the equations of motion to currents)`
       : `pure-gauge operators of ${g.name}: F D^2 F at dimension 6 (vacuum polarization, Uehling) and F^4 at dimension 8 (Euler–Heisenberg type)` })
   }

@@ -4,13 +4,14 @@
  */
 import { EngineInputError } from '../errors'
 import { add, mul, parseRational, rat, ZERO, toString as ratText, type Rational } from '../exact/rational'
-import { suDimension } from '../group/weights'
-import { suIndex } from '../group/irrep'
+import { isTrivialRep, repDimension, repIndex } from '../group/representation'
 import type { TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
+import { FINITE_KINDS, type FiniteKind } from '../group/finite/tables'
 
 export interface ThresholdShift {
   group: string
-  type: 'SU' | 'U1'
+  /** Kind of the gauge group (theory-file type: SU, SO, Sp, G2, …, U1). */
+  type: string
   /** Removed fields charged (non-singlet) under the group, in input order. */
   fields: string[]
   /**
@@ -26,12 +27,12 @@ function spinWeight(f: TheoryField): Rational {
   return f.real ? rat(1, 6) : rat(1, 3)
 }
 
-/** Number of components of the field under every group except g (SU dimensions; U(1), Z_n add none). */
+/** Number of components of the field under every group except g (dimensions under the non-abelian groups, gauge or global; U(1), Z_n add none). */
 function multiplicity(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGroup[]): Rational {
   let m = rat(f.flavors ?? 1)
   for (const h of groups) {
-    const labels = f.reps?.[h.name]
-    if (h.name !== g.name && h.type === 'SU' && labels) m = mul(m, rat(suDimension(h.n!, labels)))
+    const rep = f.reps?.[h.name]
+    if (h.name !== g.name && rep !== undefined) m = mul(m, rat(repDimension(h.type, h.n, rep)))
   }
   return m
 }
@@ -45,7 +46,8 @@ function multiplicity(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGro
  */
 export function fieldBetaContribution(f: TheoryField, g: TheoryGroup, groups: readonly TheoryGroup[]): Rational {
   let t: Rational = ZERO
-  if (g.type === 'SU' && f.reps?.[g.name]) t = suIndex(g.n!, f.reps[g.name]!)
+  const rep = f.reps?.[g.name]
+  if (g.type !== 'U1' && rep !== undefined) t = repIndex(g.type, g.n, rep)
   if (g.type === 'U1' && f.charges?.[g.name] !== undefined) {
     const q = parseRational(String(f.charges[g.name]))
     t = mul(q, q)
@@ -53,9 +55,9 @@ export function fieldBetaContribution(f: TheoryField, g: TheoryGroup, groups: re
   return mul(mul(spinWeight(f), t), multiplicity(f, g, groups))
 }
 
-/** True when the field transforms non-trivially under the group g (SU: non-zero Dynkin labels; U(1): non-zero charge; Z_n: false). @example isChargedUnder(H, weak) // true */
+/** True when the field transforms non-trivially under the group g (non-abelian: a non-trivial representation; U(1): non-zero charge; Z_n: false). @example isChargedUnder(H, weak) // true */
 export function isChargedUnder(field: TheoryField, g: TheoryGroup): boolean {
-  if (g.type === 'SU') return (field.reps?.[g.name] ?? []).some(a => a !== 0)
+  if (g.type !== 'U1' && g.type !== 'Z') return !isTrivialRep(g.type, field.reps?.[g.name])
   if (g.type === 'U1') {
     const q = field.charges?.[g.name]
     return q !== undefined && parseRational(String(q)).num !== 0n
@@ -81,7 +83,7 @@ export function thresholdShifts(removedFields: readonly TheoryField[], groups: r
   }
   const out: ThresholdShift[] = []
   for (const g of groups) {
-    if (!g.gauge || g.type === 'Z') continue
+    if (!g.gauge || g.type === 'Z' || FINITE_KINDS.includes(g.type as FiniteKind)) continue
     const charged = removedFields.filter(f => isChargedUnder(f, g))
     if (charged.length === 0) continue
     const shift = charged.reduce((s, f) => add(s, fieldBetaContribution(f, g, groups)), ZERO)

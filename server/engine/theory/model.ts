@@ -16,6 +16,12 @@ import type { Theory, TheoryField } from '../../../shared/schemas/theory'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
+import { isFiniteKind, isLieKind, type LieKind } from '../../../shared/schemas/groupKinds'
+import type { RootSystem } from '../group/lie/rootSystem'
+import { adjointLabels, rootSystemOf } from '../group/lie/simpleGroups'
+import { lieConjugate } from '../group/lie/lieIrrep'
+import type { FiniteGroupTable } from '../group/finite/tables'
+import { finiteConjugate, finiteGroup, irrepIndex } from '../group/finite/finiteGroup'
 
 /** Lorentz irrep of a species: (0,0), (1/2,0), (0,1/2), (1,0), (0,1). */
 export type LorentzType = 'S' | 'L' | 'R' | 'FL' | 'FR'
@@ -53,6 +59,10 @@ export interface Species {
    * self-conjugate (the SU(2) doublet's conjugate is 'anti').
    */
   suKind: Record<string, SuKind>
+  /** Dynkin labels per SO / Sp / exceptional group name (zeros for a singlet). */
+  lie: Record<string, number[]>
+  /** Irrep index per finite group name (0 = the trivial irrep). */
+  finite: Record<string, number>
   /** Charge per U(1) group name, and mod n per Z_n group name (every group; 0 when absent). */
   u1: Record<string, Rational>
   zn: Record<string, number>
@@ -65,6 +75,9 @@ export interface Species {
 export interface TheoryModel {
   name: string
   su: { name: string; n: number; gauge: boolean }[]
+  /** SO(n), Sp(n), G2, F4, E6, E7, E8 (SU(n) stays in `su`). */
+  lie: { name: string; kind: LieKind; n?: number; gauge: boolean; rs: RootSystem }[]
+  finite: { name: string; gauge: boolean; table: FiniteGroupTable }[]
   u1: { name: string; gauge: boolean }[]
   zn: { name: string; n: number; gauge: boolean }[]
   species: Species[]
@@ -92,9 +105,11 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
   if (opts.nf !== undefined && (!Number.isInteger(opts.nf) || opts.nf < 1 || opts.nf > 6)) {
     throw new EngineInputError('buildTheoryModel', `The number of flavors must be a whole number from 1 to 6, not ${opts.nf}`)
   }
-  const model: TheoryModel = { name: theory.name, su: [], u1: [], zn: [], species: [] }
+  const model: TheoryModel = { name: theory.name, su: [], lie: [], finite: [], u1: [], zn: [], species: [] }
   for (const g of theory.groups) {
     if (g.type === 'SU') model.su.push({ name: g.name, n: g.n!, gauge: g.gauge })
+    else if (isLieKind(g.type)) model.lie.push({ name: g.name, kind: g.type, n: g.n, gauge: g.gauge, rs: rootSystemOf(g.type, g.n) })
+    else if (isFiniteKind(g.type)) model.finite.push({ name: g.name, gauge: g.gauge, table: finiteGroup(g.type) })
     else if (g.type === 'U1') model.u1.push({ name: g.name, gauge: g.gauge })
     else model.zn.push({ name: g.name, n: g.n!, gauge: g.gauge })
   }
@@ -115,18 +130,20 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
 }
 
 /** What distinguishes a species from its conjugate. */
-type SpeciesParts = Pick<Species, 'label' | 'conj' | 'lorentz' | 'reps' | 'suKind' | 'u1' | 'zn'>
-type Charges = Pick<Species, 'reps' | 'suKind' | 'u1' | 'zn'>
+type SpeciesParts = Pick<Species, 'label' | 'conj' | 'lorentz' | 'reps' | 'suKind' | 'lie' | 'finite' | 'u1' | 'zn'>
+type Charges = Pick<Species, 'reps' | 'suKind' | 'lie' | 'finite' | 'u1' | 'zn'>
 
 /** Representations and charges of a field as declared (a field strength: adjoint of gaugeOf, no charges). */
 function fieldCharges(model: TheoryModel, f: TheoryField): Charges {
   const strength = f.lorentz === 'field-strength'
-  const out: Charges = { reps: {}, suKind: {}, u1: {}, zn: {} }
+  const out: Charges = { reps: {}, suKind: {}, lie: {}, finite: {}, u1: {}, zn: {} }
   for (const g of model.su) {
-    const labels = strength ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)) : (f.reps?.[g.name] ?? zeros(g.n - 1)).slice()
+    const labels = strength ? (g.name === f.gaugeOf ? adjoint(g.n) : zeros(g.n - 1)) : labelsOf(f, g.name, g.n - 1)
     out.reps[g.name] = labels
     out.suKind[g.name] = suKindOf(g.n, labels)
   }
+  for (const g of model.lie) out.lie[g.name] = strength ? (g.name === f.gaugeOf ? adjointLabels(g.rs) : zeros(g.rs.rank)) : labelsOf(f, g.name, g.rs.rank)
+  for (const g of model.finite) out.finite[g.name] = strength ? 0 : irrepOf(f, g.name, g.table)
   for (const g of model.u1) out.u1[g.name] = strength ? ZERO : parseRational(String(f.charges?.[g.name] ?? '0'))
   for (const g of model.zn) out.zn[g.name] = strength ? 0 : mod(Number(f.charges?.[g.name] ?? 0), g.n)
   return out
@@ -134,11 +151,13 @@ function fieldCharges(model: TheoryModel, f: TheoryField): Charges {
 
 /** Conjugate representations and charges: labels reversed, kinds conjugated, charges negated. */
 function conjugateCharges(model: TheoryModel, s: SpeciesParts): Charges {
-  const out: Charges = { reps: {}, suKind: {}, u1: {}, zn: {} }
+  const out: Charges = { reps: {}, suKind: {}, lie: {}, finite: {}, u1: {}, zn: {} }
   for (const g of model.su) {
     out.reps[g.name] = s.reps[g.name]!.slice().reverse()
     out.suKind[g.name] = CONJUGATE_KIND[s.suKind[g.name]!]
   }
+  for (const g of model.lie) out.lie[g.name] = lieConjugate(g.rs, s.lie[g.name]!)
+  for (const g of model.finite) out.finite[g.name] = finiteConjugate(g.table, s.finite[g.name]!)
   for (const g of model.u1) out.u1[g.name] = neg(s.u1[g.name]!)
   for (const g of model.zn) out.zn[g.name] = mod(-s.zn[g.name]!, g.n)
   return out
@@ -149,7 +168,7 @@ function makeSpecies(f: TheoryField, fieldIndex: number, flavors: number, s: Spe
   return {
     label: s.label, field: f.name, fieldIndex, conj: s.conj, conjugate: partner.label, partner: partner.index,
     kind: f.lorentz, lorentz: s.lorentz, angles, squares, helicity2: squares - angles, fermion: s.lorentz === 'L' || s.lorentz === 'R', dim2,
-    reps: s.reps, suKind: s.suKind, u1: s.u1, zn: s.zn, flavors, flavored: f.flavors !== undefined,
+    reps: s.reps, suKind: s.suKind, lie: s.lie, finite: s.finite, u1: s.u1, zn: s.zn, flavors, flavored: f.flavors !== undefined,
   }
 }
 
@@ -165,6 +184,22 @@ export function suKindOf(n: number, labels: readonly number[]): SuKind {
   if (key === [1, ...zeros(n - 2)].join(',')) return 'fund'
   if (key === [...zeros(n - 2), 1].join(',')) return 'anti'
   return 'other'
+}
+
+/** Dynkin labels of a field under a Lie group (zeros when absent). */
+function labelsOf(f: TheoryField, group: string, rank: number): number[] {
+  const rep = f.reps?.[group]
+  if (rep === undefined) return zeros(rank)
+  if (typeof rep === 'string') throw new EngineInputError('buildTheoryModel', `field ${f.name}: ${group} takes Dynkin labels, not the irrep name "${rep}"`)
+  return rep.slice()
+}
+
+/** Irrep index of a field under a finite group (0, the trivial irrep, when absent). */
+function irrepOf(f: TheoryField, group: string, table: FiniteGroupTable): number {
+  const rep = f.reps?.[group]
+  if (rep === undefined) return 0
+  if (typeof rep !== 'string') throw new EngineInputError('buildTheoryModel', `field ${f.name}: ${group} = ${table.label} takes an irrep name, not Dynkin labels [${rep.join(',')}]`)
+  return irrepIndex(table, rep)
 }
 
 function zeros(k: number): number[] {

@@ -1,6 +1,7 @@
 import { MATCHING_LIBRARY, coefficientText } from '../../engine/matching/library'
 import { parseRational, toString as ratText, equals, neg, isZero } from '../../engine/exact/rational'
 import type { Theory, TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
+import { isTrivialRep } from '../../engine/group/representation'
 
 export interface AppliedMatching {
   id: string, title: string, source: string, loops: number, dimension: number
@@ -9,7 +10,7 @@ export interface AppliedMatching {
 }
 
 const charge = (f: TheoryField, g: TheoryGroup) => parseRational(String(f.charges?.[g.name] ?? '0'))
-const isSuSinglet = (f: TheoryField) => Object.values(f.reps ?? {}).every((labels) => labels.every((a) => a === 0))
+const isSuSinglet = (f: TheoryField, groups: TheoryGroup[]) => groups.every((g) => isTrivialRep(g.type, f.reps?.[g.name]))
 
 /** Two removed Weyl fields that form one Dirac fermion: L and R with equal charges, or two of one chirality with opposite charges, under every U(1). */
 function diracPartners(a: TheoryField, b: TheoryField, u1s: TheoryGroup[]): boolean {
@@ -26,7 +27,7 @@ function diracPartners(a: TheoryField, b: TheoryField, u1s: TheoryGroup[]): bool
  * "heavy charged Dirac fermion in QED" with the photon as the light field).
  */
 export function applicableMatching(parent: Theory, removed: string[], scaleText: string): AppliedMatching[] {
-  const fields = parent.fields.filter((f) => removed.includes(f.name) && isSuSinglet(f))
+  const fields = parent.fields.filter((f) => removed.includes(f.name) && isSuSinglet(f, parent.groups))
   const u1s = parent.groups.filter((g) => g.type === 'U1')
   const out: AppliedMatching[] = []
   const used = new Set<string>()

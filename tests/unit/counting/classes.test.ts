@@ -5,7 +5,7 @@ import { enumerateClasses, enumerateFieldContents } from '../../../server/engine
 import { classKeyOfCounts as classKey, countsOfClassKey as parseClassKey, readClassKey } from '../../../server/engine/theory/classKey'
 import { lorentzSingletSeries } from '../../../server/engine/counting/lorentz'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'
-import { GroupIntegrator } from '../../../server/engine/counting/groupFactor'
+import { GroupIntegrator, suScheme } from '../../../server/engine/counting/groupFactor'
 import { EngineConsistencyError, EngineInputError } from '../../../server/engine/errors'
 import { buildTheoryModel } from '../../../server/engine/theory/model'
 import { characterProduct } from '../../../server/engine/group/character'
@@ -102,8 +102,8 @@ describe('field-content enumeration against a brute-force oracle', () => {
         const frac = (g: number) => counts.reduce((t, n, i) => t + n * Number(model.species[i]!.u1[model.u1[g]!.name]!.num) * (42 / Number(model.species[i]!.u1[model.u1[g]!.name]!.den)), 0)
         const zn = counts.reduce((t, n, i) => t + n * model.species[i]!.zn[model.zn[0]!.name]!, 0) % 3
         const tri = counts.reduce((t, n, i) => t + n * (model.species[i]!.reps[model.su[0]!.name]![0]! + 2 * model.species[i]!.reps[model.su[0]!.name]![1]!), 0) % 3
-        const left = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'L' ? n : 0), 0)
-        const right = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'R' ? n : 0), 0)
+        const left = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'left-weyl' ? n : 0), 0)
+        const right = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'right-weyl' ? n : 0), 0)
         if (frac(0) !== 0 || frac(1) !== 0 || zn !== 0 || tri !== 0 || (left - right) % 2 !== 0) return
         const ks: number[] = []
         for (let k = left % 2; used + 2 * k <= 18; k += 2) if (used + 2 * k >= 10) ks.push(k)
@@ -171,13 +171,13 @@ describe('Lorentz integral against the group engine (independent oracle: full ch
 
 describe('SU(n) factor of one cycle type', () => {
   it('∫ χ(g^2) is the Frobenius–Schur indicator: +1 real (SU(3) adjoint), −1 pseudoreal (SU(2) doublet), 0 complex (SU(3) triplet) (Fulton & Harris, Representation Theory, Ex. 3.38)', () => {
-    expect(new GroupIntegrator(3).integrate([{ rep: '1,1', cycle: 2 }])).toBe(1)
-    expect(new GroupIntegrator(2).integrate([{ rep: '1', cycle: 2 }])).toBe(-1)
-    expect(new GroupIntegrator(3).integrate([{ rep: '1,0', cycle: 2 }])).toBe(0)
+    expect(new GroupIntegrator(suScheme(3)).integrate([{ rep: '1,1', cycle: 2 }])).toBe(1)
+    expect(new GroupIntegrator(suScheme(2)).integrate([{ rep: '1', cycle: 2 }])).toBe(-1)
+    expect(new GroupIntegrator(suScheme(3)).integrate([{ rep: '1,0', cycle: 2 }])).toBe(0)
   })
 
   it('3 × 3 × 3 ∋ one singlet, 8 × 8 ∋ one singlet, and entry order does not matter (common practice)', () => {
-    const g = new GroupIntegrator(3)
+    const g = new GroupIntegrator(suScheme(3))
     expect(g.integrate([{ rep: '1,0', cycle: 1 }, { rep: '1,0', cycle: 1 }, { rep: '1,0', cycle: 1 }])).toBe(1)
     expect(g.integrate([{ rep: '1,1', cycle: 1 }, { rep: '1,1', cycle: 1 }])).toBe(1)
     expect(g.integrate([{ rep: '0,1', cycle: 1 }, { rep: '1,0', cycle: 2 }])).toBe(g.integrate([{ rep: '1,0', cycle: 2 }, { rep: '0,1', cycle: 1 }]))

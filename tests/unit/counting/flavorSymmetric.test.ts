@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { findPreset } from '../../../shared/presets/index'
-import { parseTheory, type Theory } from '../../../shared/schemas/theory'
+import type { Theory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { countOperators } from '../../../server/engine/counting/countOperators'
 import { COUNT_WORK_BUDGET, estimateCountWork } from '../../../server/engine/counting/budget'
 import { enumerateFieldContents } from '../../../server/engine/counting/classes'

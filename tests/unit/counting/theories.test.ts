@@ -132,7 +132,7 @@ describe('discrete and global symmetries', () => {
     const t = parseTheory({
       name: 'custodial', frame: 'relativistic',
       groups: [{ name: 'SU2L', type: 'SU', n: 2, gauge: false }, { name: 'SU2R', type: 'SU', n: 2, gauge: false }],
-      fields: [{ name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [1] } }],
+      fields: [{ name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1] } }],
     })
     const r = countOperators(t, { maxDim: 8 })
     expect(r.byDimension[1]!.classes).toEqual({ 'D^2 Phi^4': 1, 'Phi^6': 1 })

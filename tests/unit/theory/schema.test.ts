@@ -70,17 +70,17 @@ describe('theory schema', () => {
     const custodial = {
       name: 'custodial', frame: 'relativistic',
       groups: [{ name: 'SU2L', type: 'SU', n: 2, gauge: true }, { name: 'SU2R', type: 'SU', n: 2, gauge: false }, { name: 'SU3c', type: 'SU', n: 3, gauge: true }],
-      fields: [{ name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [1] } } as Record<string, unknown>],
+      fields: [{ name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1] } } as Record<string, unknown>],
     }
     // (2,2): pseudoreal × pseudoreal = real, the custodial-symmetric Higgs bidoublet
     expect(parseTheory(custodial).fields[0]!.real).toBe(true)
     // (2,3): pseudoreal × real = pseudoreal
-    custodial.fields[0] = { name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [2] } }
+    custodial.fields[0] = { name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [2] } }
     expect(errorOf(custodial)).toBe('Field 1 "Phi", representation under SU2L: a real scalar must sit in a real representation, but [1] is pseudoreal')
     // (2,2,8): still real; (2,2,3): complex
-    custodial.fields[0] = { name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [1], SU3c: [1, 1] } }
+    custodial.fields[0] = { name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1], SU3c: [1, 1] } }
     expect(() => parseTheory(custodial)).not.toThrow()
-    custodial.fields[0] = { name: 'Phi', lorentz: 'S', real: true, reps: { SU2L: [1], SU2R: [1], SU3c: [1, 0] } }
+    custodial.fields[0] = { name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1], SU3c: [1, 0] } }
     expect(errorOf(custodial)).toContain('but [1,0] is complex')
   })
 

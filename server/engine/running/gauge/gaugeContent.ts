@@ -57,7 +57,8 @@ function multiplet(f: TheoryField, kind: MatterKind, groups: GaugeGroupInfo[], m
   const reps: Record<string, readonly number[]> = {}
   const charges: Record<string, Rational> = {}
   for (const g of groups) {
-    if (!g.abelian && f.reps?.[g.name]) reps[g.name] = f.reps[g.name]!
+    const rep = f.reps?.[g.name]
+    if (!g.abelian && rep && typeof rep !== 'string') reps[g.name] = rep
     if (g.abelian && f.charges?.[g.name] !== undefined) charges[g.name] = parseRational(String(f.charges[g.name]))
   }
   return { name: f.name, kind, flavors: f.flavors ?? 1, reps, charges, massGeV, theory }
