@@ -8,7 +8,8 @@
  * heavy-frame theory needs --max-order and lists each class's operators (text, LaTeX, real parameters).
  * Prints only JSON: {"theory","note","byDimension":[{"dimension","operators" (real
  * parameters),"tallyOk","classes":[{"key","conjugateKey","rank","hilbert","tallyOk",
- * "message"?,"operators":[{"text","latex","latex4","cp","hermitian","realParameters","flavorComponents",…}]}]}]}.
+ * "message"?,"cpEven","cpOdd","operators":[{"text","latex","latex4","cp" ("even", "odd", or "both" for a
+ * non-Hermitian operator: one CP-even and one CP-odd parameter),"hermitian","realParameters","flavorComponents",…}]}]}]}.
  * With flavors (--nf > 1 or "flavors" in the theory) a class lists one operator per
  * (structure, Young symmetry) pair with its number of flavor components.
  * Exit code 1 with a message on stderr for bad input.
@@ -35,7 +36,7 @@ function intArg(args: string[], name: string): number | undefined {
 }
 
 function classJson(c: ClassReport) {
-  const base = { key: c.key, conjugateKey: c.conjugateKey, selfConjugate: c.selfConjugate, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, ...(c.message ? { message: c.message } : {}) }
+  const base = { key: c.key, conjugateKey: c.conjugateKey, selfConjugate: c.selfConjugate, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, ...(c.message ? { message: c.message } : {}), cpEven: c.cpEven, cpOdd: c.cpOdd }
   if (c.flavor) {
     return {
       ...base, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,

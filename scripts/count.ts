@@ -3,7 +3,9 @@
  *   npm run --silent count -- THEORY.json --max-dim N [--min-dim M] [--nf K]
  *   npm run --silent count -- THEORY.json --max-order N    (order = dimension − 4; heavy frame: power of 1/m)
  * THEORY.json may also be a preset id (e.g. `smeft`). Prints only JSON on stdout:
- *   {"theory": "…", "byDimension": [{"dimension": d, "operators": n, "classes": {"<key>": n}}]}
+ *   {"theory": "…", "byDimension": [{"dimension": d, "operators": n, "classes": {"<key>": n},
+ *    "cpEven": e, "cpOdd": o, "cp": {"<key>": {"even": e, "odd": o, "conjugate"?: "<key>"}}}],
+ *    "cpConvention": "…"}  (or "cpUnavailable": "why", and no cp fields, where CP is not counted)
  *   with --max-order: {"theory", "byOrder": [{"order", "operators", "classes": [{"key", "count", …}]}]}
  *   (a heavy-frame theory enumerates its operators, so its classes also give real parameters).
  * --nf K overrides the flavor number of every field that declares "flavors".
@@ -65,7 +67,14 @@ function main(): void {
     const maxDim = args.maxDim ?? massRatioDimension(args.maxOrder!)
     const result = countOperators(theory, { maxDim, minDim: args.minDim, nf: args.nf })
     const plain = args.maxOrder === undefined
-      ? { theory: result.theory, byDimension: result.byDimension.map((d) => ({ dimension: d.dimension, operators: d.operators, classes: d.classes })) }
+      ? {
+          theory: result.theory,
+          byDimension: result.byDimension.map((d) => ({
+            dimension: d.dimension, operators: d.operators, classes: d.classes,
+            ...(d.cp ? { cpEven: d.cpEven, cpOdd: d.cpOdd, cp: d.cp } : {}),
+          })),
+          ...(result.cpConvention ? { cpConvention: result.cpConvention } : { cpUnavailable: result.cpUnavailable }),
+        }
       : {
           theory: result.theory,
           byOrder: result.byDimension.map((d) => ({

@@ -60,9 +60,9 @@ async function writeBasis(trx: Knex.Transaction, run: { id: number, theory_id: n
     order: d.order, dimension: d.dimension, key: c.key, conjugateKey: c.conjugateKey, rank: c.rank, hilbert: c.hilbert,
     tallyOk: c.tallyOk, message: c.message ?? null, realParameters: c.flavor?.realParameters ?? c.realParameters, flavor: c.flavor ?? null,
     // Discrete symmetries in real parameters (null where undefined), so the board can impose them.
-    // With several flavors P and CP also act on flavor indices: not counted here.
+    // With several flavors P also acts on flavor indices (not counted); CP comes from the CP-twisted count.
     ...(c.flavor
-      ? { cpEven: null, cpOdd: null, pEven: null, pOdd: null, parityReason: 'with several flavors, P and CP also act on flavor indices (not counted)' }
+      ? { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: null, pOdd: null, parityReason: 'with several flavors, P also acts on flavor indices (not counted)' }
       : { cpEven: c.cpEven ?? null, cpOdd: c.cpOdd ?? null, pEven: c.pEven ?? null, pOdd: c.pOdd ?? null, parityReason: c.parityReason ?? null }),
   })))
   const zeroClasses = report.orderZero ? orderZeroClassRows(report.orderZero) : []

@@ -14,6 +14,7 @@ import { describeOperators, describeAlternative, type BasisOperator } from './de
 import { flavorDecomposition, type FlavorSummary } from './flavor'
 import { massRatioOrder } from '../rules/defaultWeights'
 import { orderZero, type OrderZeroReport } from './orderZero'
+import { applyCpTally } from './cpTally'
 
 export interface BuildOptions {
   maxDim: number
@@ -43,9 +44,10 @@ export interface ClassReport {
   /** A few redundant candidates with fingerprints: set-aside material with exact rewrites. */
   alternatives?: BasisOperator[]
   /**
-   * CP-even / CP-odd real parameters (one flavor): a non-Hermitian operator gives one of
-   * each (O + h.c. and i(O − h.c.)); Hermitian ones are counted from their CP; null when
-   * not determined (self-conjugate classes with fermions).
+   * CP-even / CP-odd real parameters (convention of counting/cpCount.ts): a non-Hermitian
+   * operator gives one of each (O + h.c. and i(O − h.c.)); Hermitian ones are counted from
+   * their CP and checked against the CP-twisted Hilbert series (cpTally.ts); with several
+   * flavors, the Hilbert-series split. Null where neither is available.
    */
   cpEven: number | null
   cpOdd: number | null
@@ -121,7 +123,9 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
     const b = classBasis(theory, cls, { priorities: opts.priorities, signal: opts.signal })
     done.add(b.key).add(b.conjugateKey)
     const report = classReport(b, hOf(b.key, counts), hOf(b.conjugateKey, counts))
-    if (flavored && b.class.legs.some((p) => p.flavored)) {
+    const flavoredClass = flavored && b.class.legs.some((p) => p.flavored)
+    applyCpTally(report, (flavoredClass ? countsNf : counts).byDimension.find((x) => x.dimension === d), flavoredClass)
+    if (flavoredClass) {
       report.flavor = flavorDecomposition(theory, b, nf, hOf(b.key, countsNf), opts.signal)
       flavorParity(b, report, report.flavor)
       const hc = hOf(b.conjugateKey, countsNf)
@@ -164,7 +168,7 @@ function twoFieldMismatch(key: string, hilbert: number): ClassReport {
 
 function cpCounts(b: ClassBasis, ops: BasisOperator[]): { cpEven: number | null; cpOdd: number | null } {
   if (!b.selfConjugate) return { cpEven: b.rank, cpOdd: b.rank }
-  if (ops.some((o) => o.cp === null)) return { cpEven: null, cpOdd: null }
+  if (ops.some((o) => o.cp !== 'even' && o.cp !== 'odd')) return { cpEven: null, cpOdd: null }
   return { cpEven: ops.filter((o) => o.cp === 'even').length, cpOdd: ops.filter((o) => o.cp === 'odd').length }
 }
 

@@ -29,11 +29,15 @@ export interface BasisOperator {
   /** Flavor components (filled by the flavor decomposition; 1 for one flavor). */
   flavorComponents: number
   /**
-   * CP of a Hermitian operator of a self-conjugate class without fermions ("even"/"odd"),
-   * with the convention ⟨ij⟩* = [ji], δ and ε real; null where not determined (fermions,
-   * non-Hermitian operators: those give one CP-even and one CP-odd real parameter).
+   * CP (convention of counting/cpCount.ts: CP maps each field to its conjugate with parity on
+   * its indices; every Hermitian operator without ε^{μνρσ} is CP-even): "even"/"odd" for a
+   * Hermitian combination of a self-conjugate class, "both" for an operator whose conjugate
+   * lies in the conjugate class (its complex coefficient is one CP-even and one CP-odd real
+   * parameter), null where not a CP eigenvector (operators kept as typed by the user).
+   * In amplitudes: CP(O) = (−1)^{F/2} × the structural conjugate with ⟨ij⟩* = [ji], F the number
+   * of fermion legs (Hermitian conjugation reverses the order of the F Grassmann fields).
    */
-  cp: 'even' | 'odd' | null
+  cp: 'even' | 'odd' | 'both' | null
   /**
    * Parity eigenvalue where the class is mapped to itself by P and the operator is a P
    * eigenvector (conventions in parity.ts: ⟨ij⟩ ↔ [π(i)π(j)], legs to parity partners,
@@ -82,20 +86,29 @@ export function describeAlternative(b: ClassBasis, col: Column): BasisOperator {
   return describeColumn(b, col, b.selfConjugate && col.source === 'hermitian')
 }
 
+/** CP label of a column (see BasisOperator.cp). */
+function cpOf(b: ClassBasis, col: Column): BasisOperator['cp'] {
+  if (!b.selfConjugate) return 'both'
+  if (col.source !== 'hermitian' || col.conjSign === undefined) return null
+  const t = col.terms[0]!
+  const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
+  const fermions = b.class.legs.filter((p) => p.fermion).length
+  const reorder = (fermions / 2) % 2 === 0 ? 1 : -1
+  return col.conjSign * brackets * reorder > 0 ? 'even' : 'odd'
+}
+
 function describeColumn(b: ClassBasis, col: Column, hermitian: boolean): BasisOperator {
-  const bosonic = b.class.legs.every((p) => !p.fermion)
   const t = col.terms[0]!
   const herm1 = col.source === 'hermitian'
   const single = col.terms.length === 1 || herm1
   const base = col.source === 'kept' ? keptLatex(b, col.text) : operatorLatex(b.class.legs, t.lorentz, t.gauge)
   const hc = herm1 && !col.selfHermitian ? (col.conjSign === 1 ? ' + \\text{h.c.}' : ' - \\text{h.c.}') : ''
-  const brackets = (t.lorentz.angle.length + t.lorentz.square.length) % 2 === 0 ? 1 : -1
   const pSign = col.paritySign === undefined ? '' : col.paritySign === 1 ? ' + \\mathcal{P}' : ' - \\mathcal{P}'
   return {
     text: col.text,
     latex: pSign ? `\\big(${base + hc}\\big)${pSign}` : base + hc,
     latex4: pSign ? null : fourOf(b, col, hc),
-    cp: herm1 && bosonic ? (col.conjSign! * brackets > 0 ? 'even' : 'odd') : null,
+    cp: cpOf(b, col),
     parity: null,
     source: col.source,
     fields: b.class.legs.map((p) => p.label),

@@ -21,6 +21,8 @@ import { enumerateFieldContents } from './classes'
 import { classKeyOfCounts } from '../theory/classKey'
 import { CountContext, countFieldContent } from './contentCount'
 import { checkCountBudget } from './budget'
+import { CP_CONVENTION, CpContext, conjugateCounts, cpSplit, cpTrace, cpUnavailable, isSelfConjugate } from './cpCount'
+import type { FieldContent } from './classes'
 
 export interface CountOptions {
   maxDim: number
@@ -37,6 +39,8 @@ export interface CountOptions {
   signal?: { aborted: boolean }
   /** Work budget in estimated cycle-index terms (default COUNT_WORK_BUDGET, see budget.ts). */
   workBudget?: number
+  /** Also split the real parameters into CP-even and CP-odd ones (default true; cpCount.ts). */
+  cp?: boolean
 }
 
 export interface DimensionCount {
@@ -44,11 +48,30 @@ export interface DimensionCount {
   operators: number
   classes: Record<string, number>
   flavorPolynomials?: Record<string, string[]>
+  /** CP-even and CP-odd real parameters of the dimension (cpEven + cpOdd = operators). */
+  cpEven?: number
+  cpOdd?: number
+  /**
+   * Per class: a self-conjugate class lists its own split; a class with a distinct conjugate
+   * class is listed once (under the first of the two) with the split of both together, n + n.
+   */
+  cp?: Record<string, CpEntry>
+}
+
+export interface CpEntry {
+  even: number
+  odd: number
+  /** Key of the conjugate class counted in this entry (classes with a distinct conjugate). */
+  conjugate?: string
 }
 
 export interface CountResult {
   theory: string
   byDimension: DimensionCount[]
+  /** The CP convention of the cp fields (cpCount.ts). */
+  cpConvention?: string
+  /** Why the cp fields are absent, when they are. */
+  cpUnavailable?: string
 }
 
 /** Highest mass dimension accepted (keeps class sizes n!/z and memory bounded). */
@@ -77,9 +100,14 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
   const contents = enumerateFieldContents(model, minDim, maxDim)
   checkCountBudget(model, contents, maxDim, options.workBudget)
   const ctx = new CountContext(model, maxDim)
+  const cpReason = options.cp === false ? null : cpUnavailable(model)
+  const cpCtx = options.cp === false || cpReason !== null ? null : new CpContext(model)
   const byDimension: DimensionCount[] = []
   for (let d = minDim; d <= maxDim; d++) {
-    byDimension.push({ dimension: d, operators: 0, classes: {}, ...(options.flavorPolynomials ? { flavorPolynomials: {} } : {}) })
+    byDimension.push({
+      dimension: d, operators: 0, classes: {},
+      ...(options.flavorPolynomials ? { flavorPolynomials: {} } : {}), ...(cpCtx ? { cpEven: 0, cpOdd: 0, cp: {} } : {}),
+    })
   }
   const total = contents.length
   for (let i = 0; i < total; i++) {
@@ -97,10 +125,27 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
       entry.classes[key] = safeNumber(count, key)
       entry.operators = safeNumber(BigInt(entry.operators) + count, `dimension ${dim}`)
       if (entry.flavorPolynomials) entry.flavorPolynomials[key] = result.polynomials[j]!
+      if (cpCtx) recordCp(cpCtx, entry, content, j, count, key)
     }
   }
   options.onProgress?.(1, 'done')
-  return { theory: theory.name, byDimension }
+  const cpFields = cpCtx ? { cpConvention: CP_CONVENTION } : cpReason ? { cpUnavailable: cpReason } : {}
+  return { theory: theory.name, byDimension, ...cpFields }
+}
+
+/** Add one class's CP split to its dimension (a conjugate pair once, under its first class). */
+function recordCp(ctx: CpContext, entry: DimensionCount, content: FieldContent, j: number, count: bigint, key: string): void {
+  const k = content.derivatives[j]!
+  let split: CpEntry
+  if (isSelfConjugate(ctx.model, content.counts)) split = cpSplit(count, cpTrace(ctx, content)[j]!, key)
+  else {
+    const conjugate = classKey(ctx.model, conjugateCounts(ctx.model, content.counts), k)
+    if (entry.cp![conjugate]) return
+    split = { even: Number(count), odd: Number(count), conjugate }
+  }
+  entry.cp![key] = split
+  entry.cpEven! += split.even
+  entry.cpOdd! += split.odd
 }
 
 function safeNumber(v: bigint, what: string): number {

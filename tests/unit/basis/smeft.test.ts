@@ -105,6 +105,14 @@ describe('Hermiticity and CP (Grzadkowski et al., JHEP 10 (2010) 085, Tables 2â€
     expect(sum((c) => shape(c).psi === 0 && shape(c).X === 0, 'cpEven')).toBe(3) // Q_H, Q_Hâ–¡, Q_HD
     expect(sum((c) => shape(c).psi === 0 && shape(c).X === 0, 'cpOdd')).toBe(0)
   })
+  it('fermionic operators carry CP labels too: every Hermitian one of SMEFT is CP-even, every non-Hermitian one gives one CP-even and one CP-odd parameter; 84 = 57 + 27 as the CP-twisted count (Alonso, Jenkins, Manohar, Trott, JHEP 04 (2014) 159: 53 + 23 without the 4 + 4 baryon-number violating)', () => {
+    for (const c of d6.classes) {
+      expect(c.tallyOk, c.message).toBe(true) // includes the CP tally against the Hilbert series
+      for (const o of c.operators) expect(o.cp, `${c.key} ${o.text}`).toBe(!c.selfConjugate ? 'both' : shape(c).psi > 0 ? 'even' : o.cp)
+    }
+    expect([sum(() => true, 'cpEven'), sum(() => true, 'cpOdd')]).toEqual([57, 27])
+    expect([sum((c) => shape(c).baryon === 0, 'cpEven'), sum((c) => shape(c).baryon === 0, 'cpOdd')]).toEqual([53, 23])
+  })
   it('self-conjugate classes get Hermitian operators (one real parameter each); others are non-Hermitian', () => {
     for (const c of d6.classes) {
       for (const o of c.operators) {

@@ -16,7 +16,10 @@ describe('count CLI', () => {
     expect(out.theory).toBe('SMEFT')
     expect(out.byDimension.map((d: { operators: number }) => d.operators)).toEqual([2, 84])
     expect(out.byDimension[1].classes['H^3 H*^3']).toBe(1)
-    expect(Object.keys(out.byDimension[0]).sort()).toEqual(['classes', 'dimension', 'operators'])
+    expect(Object.keys(out.byDimension[0]).sort()).toEqual(['classes', 'cp', 'cpEven', 'cpOdd', 'dimension', 'operators'])
+    // CP split (Alonso, Jenkins, Manohar, Trott, JHEP 04 (2014) 159: 53 + 23, plus 4 + 4 baryon-number violating)
+    expect([out.byDimension[1].cpEven, out.byDimension[1].cpOdd]).toEqual([57, 27])
+    expect(out.cpConvention).toMatch(/^CP maps each field to its conjugate/)
   })
 
   it('reads a theory file: photons only, dim 8 → 3 (Heisenberg & Euler, Z. Phys. 98 (1936) 714)', () => {
