@@ -7,7 +7,7 @@ export interface BoardOperator {
   details?: {
     antiHermitian: boolean
     parity: 'even' | 'odd' | null
-    cp: 'even' | 'odd' | null
+    cp: 'even' | 'odd' | 'both' | null
     relations: { coefficient: string, relation: string, source: string }[]
     publishedRewrite: { id: string, coefficient: string }[] | null
     gaugeEomNote: string | null
