@@ -8,6 +8,8 @@ import type { Theory } from '../../../shared/schemas/theory'
 import type { OperatorClass } from './classKey'
 import { lorentzStructures, type LorentzStructure } from './lorentzStructures'
 import { suStructures, type SuStructure } from './gaugeStructures'
+import { speciesShape } from './species'
+import { loopPlan } from './tensorLoops'
 
 export interface Candidate {
   lorentz: LorentzStructure
@@ -42,7 +44,8 @@ export function gaugeFactorLists(t: Theory, c: OperatorClass): SuStructure[][] {
     if (g.type !== 'SU') continue
     const kinds = c.legs.map((p) => p.suKind[g.name] ?? 'singlet')
     if (kinds.every((k) => k === 'singlet')) continue
-    lists.push(suStructures(g.name, g.n ?? 0, kinds))
+    const shapes = c.legs.map((p) => speciesShape(p, g.name, g.n ?? 0))
+    lists.push(suStructures(g.name, g.n ?? 0, kinds, shapes))
   }
   return lists
 }
@@ -59,5 +62,29 @@ export function classCandidates(t: Theory, c: OperatorClass): { lorentz: Lorentz
   const lorentz = gauge.length === 0 ? [] : lorentzStructures(c.legs.map((p) => p.angles), c.legs.map((p) => p.squares), c.k)
   const candidates: Candidate[] = []
   for (const l of lorentz) for (const g of gauge) candidates.push({ lorentz: l, gauge: g })
+  checkTensorBudget(c, candidates)
   return { lorentz, gauge, candidates }
+}
+
+/** Index-loop terms (about 2 µs each) allowed for one class with tensor legs: about 20 s. */
+const TENSOR_BUDGET = 1e7
+
+/**
+ * Refuse classes with higher-representation (tensor) legs whose evaluation would take too
+ * long: work ≈ candidates (columns) × candidates (points) × leg permutations × loop terms.
+ */
+function checkTensorBudget(c: OperatorClass, candidates: Candidate[]): void {
+  if (!c.legs.some((p) => Object.values(p.suKind).includes('other')) || candidates.length === 0) return
+  const leaves = Math.max(...candidates.map((k) => k.gauge.reduce((x, s) => x * loopPlan(s).leaves, 1)))
+  const counts = new Map<string, number>()
+  for (const p of c.legs) counts.set(p.label, (counts.get(p.label) ?? 0) + 1)
+  const perms = [...counts.values()].reduce((x, m) => x * factorial(m), 1)
+  const work = candidates.length ** 2 * perms * leaves
+  if (work > TENSOR_BUDGET) {
+    throw new EngineInputError('classCandidates', `class ${c.key}: writing it out needs about ${work.toExponential(1)} index-loop terms (${candidates.length} candidate operators, ${perms} permutations of identical fields, ${leaves} terms per contraction), beyond the budget of ${TENSOR_BUDGET.toExponential(0)} for fields in higher representations; its count is given by the Hilbert series`)
+  }
+}
+
+function factorial(m: number): number {
+  return m <= 1 ? 1 : m * factorial(m - 1)
 }

@@ -44,10 +44,10 @@ export function conjugateLorentz(l: LorentzStructure, pi: number[]): LorentzStru
  * @example conjugateSu(δ(H^i, H*_i), [1, 0]) // δ(H^i, H*_i) again
  */
 export function conjugateSu(s: SuStructure, pi: number[]): SuStructure {
-  const find = (leg: number, upper: boolean): number => s.slots.findIndex((x) => x.leg === leg && x.upper === upper)
+  const find = (leg: number, upper: boolean, box: number | undefined): number => s.slots.findIndex((x) => x.leg === leg && x.upper === upper && x.box === box)
   const mapSlot = (si: number): number => {
     const sl = s.slots[si]!
-    const j = find(pi[sl.leg]!, !sl.upper)
+    const j = find(pi[sl.leg]!, !sl.upper, sl.box)
     if (j < 0) throw new EngineConsistencyError('conjugateSu', `no conjugate slot for leg ${sl.leg} in ${s.group}`)
     return j
   }

@@ -11,6 +11,7 @@ import type { OperatorClass } from './classKey'
 import { randomKinematics, type KinematicPoint } from './kinematics'
 import { evaluateSu, randomSuWave, type SuStructure, type SuWave } from './gaugeStructures'
 import type { LorentzStructure } from './lorentzStructures'
+import { speciesShape } from './species'
 import type { LegPermutation } from './symmetry'
 
 export interface SamplePoint {
@@ -30,7 +31,7 @@ export function samplePoints(F: PrimeField, t: Theory, c: OperatorClass, count: 
   const out: SamplePoint[] = []
   for (let r = 0; r < count; r++) {
     const kin = randomKinematics(F, rng, c.legs.length, c.legs.length === 3 && r % 2 === 1 ? 'square' : 'angle')
-    const waves = groups.map((g) => c.legs.map((p) => randomSuWave(F, g.n ?? 0, p.suKind[g.name] ?? 'singlet', draw)))
+    const waves = groups.map((g) => c.legs.map((p) => randomSuWave(F, g.n ?? 0, p.suKind[g.name] ?? 'singlet', draw, speciesShape(p, g.name, g.n ?? 0))))
     out.push({ kin, waves })
   }
   return out

@@ -10,11 +10,15 @@ import { EngineInputError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import type { SuKind } from '../theory/model'
 import { evaluateSuChains } from './suFastPath'
+import { type TensorShape, boxColumns, boxes } from './tensorShape'
+import { type TensorWave, randomTensorWave } from './tensorWaves'
+import { evaluateSuTensor } from './tensorContraction'
 
-/** A slot is one SU(N) index of one leg. */
+/** A slot is one SU(N) index of one leg: box `box` of the leg's upper or lower Young shape (row by row). */
 export interface Slot {
   leg: number
   upper: boolean
+  box?: number
 }
 
 export interface SuStructure {
@@ -36,6 +40,20 @@ export function suSlots(kinds: SuKind[]): Slot[] {
   kinds.forEach((k, leg) => {
     if (k === 'fund' || k === 'adj') slots.push({ leg, upper: true })
     if (k === 'anti' || k === 'adj') slots.push({ leg, upper: false })
+  })
+  return slots
+}
+
+/**
+ * Slots of legs written as tensors [α; β]: the upper boxes then the lower boxes of each leg.
+ * For the fundamental, antifundamental and adjoint this is suSlots' order (box 0).
+ * @example shapeSlots([{ upper: [2], lower: [1] }]) // three slots of leg 0: upper 0, upper 1, lower 0
+ */
+export function shapeSlots(shapes: TensorShape[]): Slot[] {
+  const slots: Slot[] = []
+  shapes.forEach((sh, leg) => {
+    for (let b = 0; b < boxes(sh.upper); b++) slots.push({ leg, upper: true, box: b })
+    for (let b = 0; b < boxes(sh.lower); b++) slots.push({ leg, upper: false, box: b })
   })
   return slots
 }
@@ -70,12 +88,14 @@ function combinations(xs: number[], r: number): number[][] {
 
 /**
  * All δ/ε contractions of the given legs' SU(N) indices (trace-zero self-contractions of
- * one adjoint leg are dropped).
+ * one adjoint leg are dropped). Legs of kind 'other' (tensors) need their shapes (tensorShape.ts).
  * @example suStructures('SU3', 3, ['adj','adj','adj']).length // 2: tr(X1X2X3), tr(X1X3X2)
  * Method: first fundamental theorem for SL(N) (Weyl, The Classical Groups, 1939, ch. II).
  */
-export function suStructures(group: string, n: number, kinds: SuKind[]): SuStructure[] {
-  const slots = suSlots(kinds)
+export function suStructures(group: string, n: number, kinds: SuKind[], shapes?: TensorShape[]): SuStructure[] {
+  const tensor = kinds.includes('other')
+  if (tensor && !shapes) throw new EngineInputError('suStructures', `${group}: tensor legs need their shapes`)
+  const slots = tensor ? shapeSlots(shapes!) : suSlots(kinds)
   const ups = slots.map((s, i) => (s.upper ? i : -1)).filter((i) => i >= 0)
   const lows = slots.map((s, i) => (s.upper ? -1 : i)).filter((i) => i >= 0)
   const diff = ups.length - lows.length
@@ -84,12 +104,19 @@ export function suStructures(group: string, n: number, kinds: SuKind[]): SuStruc
   const m = Math.abs(diff) / n
   if (many.length > 12) throw new EngineInputError('suStructures', `A class with ${many.length} ${group} indices of one kind is beyond what explicit bases support (at most 12); lower the maximum dimension`)
   const out: SuStructure[] = []
+  const seen = new Set<string>()
+  const slotClass = tensor ? columnClasses(slots, shapes!) : []
   for (const chosen of combinations(many, m * n)) {
     const rest = many.filter((x) => !chosen.includes(x))
     for (const eps of blockPartitions(chosen, n)) {
       for (const perm of permutations(rest)) {
         const deltas = perm.map((r, i) => (diff >= 0 ? [r, few[i]!] : [few[i]!, r]) as [number, number])
         if (deltas.some(([u, l]) => slots[u]!.leg === slots[l]!.leg)) continue
+        if (tensor) {
+          const key = structureKey(slotClass, deltas, eps)
+          if (seen.has(key)) continue
+          seen.add(key)
+        }
         out.push({ group, n, deltas, eps, slots })
       }
     }
@@ -97,15 +124,43 @@ export function suStructures(group: string, n: number, kinds: SuKind[]): SuStruc
   return out
 }
 
-/** Random wave-function of one leg for one SU(N): vector (fund/anti) or traceless matrix (adj). */
-export type SuWave = number[] | number[][] | null
+/**
+ * Class of each slot: leg, upper/lower and Young column (the indices of one column are
+ * antisymmetric); all indices of a one-row shape form one class (they are symmetric).
+ */
+function columnClasses(slots: Slot[], shapes: TensorShape[]): string[] {
+  return slots.map((sl) => {
+    const part = sl.upper ? shapes[sl.leg]!.upper : shapes[sl.leg]!.lower
+    const column = part.length === 1 ? 0 : boxColumns(part)[sl.box ?? 0]
+    return `${sl.leg}${sl.upper ? 'u' : 'l'}${column}`
+  })
+}
+
+/**
+ * Contractions with equal keys differ by permutations of indices within one slot class, so
+ * they are equal up to a sign: one of them is kept.
+ */
+function structureKey(slotClass: string[], deltas: [number, number][], eps: number[][]): string {
+  const edges = [
+    ...deltas.map(([u, l]) => `d${slotClass[u]}:${slotClass[l]}`),
+    ...eps.map((b) => `e${b.map((x) => slotClass[x]!).sort().join(':')}`),
+  ]
+  return edges.sort().join('|')
+}
+
+/** Random wave-function of one leg for one SU(N): vector (fund/anti), traceless matrix (adj) or tensor. */
+export type SuWave = number[] | number[][] | TensorWave | null
 
 /**
  * Draw a random wave-function mod p for a leg of the given kind.
  * @example randomSuWave(F, 2, "adj", draw) // 2×2 matrix with zero trace
  */
-export function randomSuWave(F: PrimeField, n: number, kind: SuKind, draw: () => number): SuWave {
+export function randomSuWave(F: PrimeField, n: number, kind: SuKind, draw: () => number, shape?: TensorShape): SuWave {
   if (kind === 'singlet') return null
+  if (kind === 'other') {
+    if (!shape) throw new EngineInputError('randomSuWave', 'a tensor leg needs its shape')
+    return randomTensorWave(F, n, shape, draw)
+  }
   if (kind !== 'adj') return Array.from({ length: n }, draw)
   const x = Array.from({ length: n }, () => Array.from({ length: n }, draw))
   let tr = 0
@@ -129,6 +184,7 @@ const leviCache = new Map<number, { perm: number[]; sign: number }[]>()
  * Method: explicit index sums. Reference: common practice.
  */
 export function evaluateSu(F: PrimeField, s: SuStructure, waves: SuWave[]): number {
+  if (s.slots.some((sl) => sl.box !== undefined && sl.box > 0) || waves.some((w) => w !== null && !Array.isArray(w))) return evaluateSuTensor(F, s, waves)
   if (s.eps.length === 0) return evaluateSuChains(F, s, waves)
   return evaluateSuBrute(F, s, waves)
 }
@@ -148,6 +204,7 @@ export function evaluateSuBrute(F: PrimeField, s: SuStructure, waves: SuWave[]):
     let si = 0
     while (si < s.slots.length) {
       const w = waves[s.slots[si]!.leg]!
+      if (!Array.isArray(w)) throw new EngineInputError('evaluateSuBrute', 'tensor legs are evaluated by evaluateSuTensor')
       if (Array.isArray(w[0])) {
         v = F.mul(v, (w as number[][])[idx[si]!]![idx[si + 1]!]!)
         si += 2

@@ -84,7 +84,7 @@ export function parityLorentz(l: LorentzStructure, pi: number[]): { lorentz: Lor
 export function paritySu(s: SuStructure, pi: number[]): SuStructure {
   const mapSlot = (si: number): number => {
     const sl = s.slots[si]!
-    const j = s.slots.findIndex((x) => x.leg === pi[sl.leg] && x.upper === sl.upper)
+    const j = s.slots.findIndex((x) => x.leg === pi[sl.leg] && x.upper === sl.upper && x.box === sl.box)
     if (j < 0) throw new EngineConsistencyError('paritySu', `no parity slot for leg ${sl.leg} in ${s.group}`)
     return j
   }

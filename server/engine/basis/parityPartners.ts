@@ -19,7 +19,7 @@ import { makeClass, type OperatorClass } from './classKey'
 
 /** Same SU(N) kinds and charges under every group (species of one model list every group). */
 function sameCharges(p: Species, q: Species): boolean {
-  if (Object.entries(p.suKind).some(([g, k]) => q.suKind[g] !== k)) return false
+  if (Object.entries(p.suKind).some(([g, k]) => q.suKind[g] !== k || p.reps[g]?.join(',') !== q.reps[g]?.join(','))) return false
   if (Object.entries(p.u1).some(([g, r]) => q.u1[g]!.num * r.den !== r.num * q.u1[g]!.den)) return false
   return Object.entries(p.zn).every(([g, z]) => q.zn[g] === z)
 }

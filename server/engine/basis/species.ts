@@ -1,12 +1,16 @@
 /**
  * The legs of the on-shell basis: the species of the theory model (theory/model.ts), for a
- * relativistic theory whose SU(N) representations the basis can build (fundamental,
- * antifundamental, adjoint, singlet). Helicities in the all-outgoing convention of the model.
+ * relativistic theory. SU(N) representations: fundamental (a vector with one upper index),
+ * antifundamental, adjoint (a traceless matrix X^i_j), singlet, or any other irrep as a
+ * traceless tensor of Young shapes [α; β] (kind 'other'; tensorShape.ts). A real field needs
+ * α = β (real fields in a product of pseudoreal representations, such as a real bidoublet,
+ * are counted but not written out). Helicities in the all-outgoing convention of the model.
  */
 import { EngineInputError } from '../errors'
 import type { Theory } from '../../../shared/schemas/theory'
 import { groupKindLabel } from '../../../shared/schemas/groupKinds'
 import { buildTheoryModel, type Species } from '../theory/model'
+import { type TensorShape, SINGLET_SHAPE, conjugateShape, irrepShape, isSelfConjugateShape } from './tensorShape'
 
 /**
  * All species of a theory, each field followed by its conjugate when that differs.
@@ -24,9 +28,21 @@ export function basisSpecies(t: Theory): Species[] {
   }
   for (const s of model.species) {
     for (const g of model.su) {
-      if (s.suKind[g.name] !== 'other') continue
-      throw new EngineInputError('basisSpecies', `Field ${s.field} sits in the representation [${s.reps[g.name]!.join(',')}] of ${g.name} = SU(${g.n}); explicit bases support the fundamental, antifundamental, adjoint and singlet only (counts support any)`)
+      if (s.suKind[g.name] !== 'other' || s.kind !== 'scalar' || s.partner !== model.species.indexOf(s)) continue
+      if (isSelfConjugateShape(speciesShape(s, g.name, g.n))) continue
+      throw new EngineInputError('basisSpecies', `field ${s.field}: a real field in ${g.name} = SU(${g.n}) [${s.reps[g.name]!.join(',')}] is not written as a tensor with equal upper and lower index shapes (a product of pseudoreal representations, e.g. a real bidoublet); it is counted but its explicit basis is not written out — declare it complex to write one`)
     }
   }
   return model.species
+}
+
+/**
+ * Tensor form of a species' SU(N) representation (tensorShape.ts); a conjugate takes the
+ * conjugate shape of its field's, so a field and its conjugate always match box for box.
+ * @example speciesShape(sextet, 'colour', 3) // { upper: [2], lower: [] }
+ */
+export function speciesShape(s: Species, group: string, n: number): TensorShape {
+  const labels = s.reps[group]
+  if (!labels || labels.every((a) => a === 0)) return SINGLET_SHAPE
+  return s.conj ? conjugateShape(irrepShape(n, labels.slice().reverse())) : irrepShape(n, labels)
 }

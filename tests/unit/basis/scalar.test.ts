@@ -47,10 +47,8 @@ describe('one real scalar', () => {
     expect(() => classBasis(phi, 'psi^4')).toThrow('The class "psi^4" names "psi", which is not a field of this theory')
     expect(() => classBasis(phi, 'phi^2')).toThrow('The class "phi^2" has fewer than 3 fields')
   })
-  it('input errors for the theory: frame and unsupported representations', () => {
+  it('input errors for the theory: frame and maxDim', () => {
     expect(() => classBasis({ ...phi, frame: 'heavy' as const }, 'phi^6')).toThrow('Explicit bases from contact amplitudes need the relativistic frame, but this theory uses the heavy frame')
-    const bad = { name: 'x', frame: 'relativistic' as const, groups: [{ name: 'SU3', type: 'SU' as const, n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar' as const, reps: { SU3: [2, 0] } }] }
-    expect(() => classBasis(bad, 'S6^3')).toThrow('Field S6 sits in the representation [2,0] of SU3 = SU(3); explicit bases support the fundamental, antifundamental, adjoint and singlet only')
     expect(() => buildBasis(phi, { maxDim: 13 })).toThrow('The maximum dimension of an explicit basis must be a whole number from 5 to 12, not 13')
   })
   it('is cancellable', () => {
