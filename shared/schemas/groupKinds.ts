@@ -7,7 +7,7 @@
  * - finite non-abelian flavour groups S3, A4, S4, Q8, Tprime (T′), Delta27 (Δ(27)) —
  *   representations are irrep names (server/engine/group/finite/tables.ts).
  */
-import { FINITE_GROUPS, FINITE_KINDS, type FiniteKind } from '../../server/engine/group/finite/tables'
+import { FINITE_GROUPS, FINITE_KINDS, type FiniteKind } from '../physics/finite/tables'
 
 export const LIE_KINDS = ['SU', 'SO', 'Sp', 'G2', 'F4', 'E6', 'E7', 'E8'] as const
 export type LieKind = typeof LIE_KINDS[number]

@@ -3,7 +3,7 @@
  * representation under it (Dynkin labels of the right length, or an irrep name of a finite
  * group), the dimension limit, and the reality of a real scalar's representation.
  */
-import { type RepValue, repDimension, repReality } from '../../server/engine/group/representation'
+import { type RepValue, repDimensionOf, repRealityOf } from '../physics/groupReps'
 import { finiteIrrepNames, groupKindLabel, isFiniteKind, isLieKind, lieRank, N_RANGE, validN } from './groupKinds'
 
 export const MAX_REP_DIMENSION = 1000
@@ -54,8 +54,8 @@ export function checkRep(g: GroupLike, rep: RepValue, bad: Bad): boolean {
     bad('reps', `${at} takes ${rank} Dynkin label${rank === 1 ? '' : 's'}, but ${typeof rep === 'string' ? `got ${repText(rep)}` : `${repText(rep)} has ${rep.length}`}`, g.name)
     return false
   }
-  const dim = repDimension(g.type, g.n, rep)
-  if (dim > MAX_REP_DIMENSION) {
+  const dim = repDimensionOf(g.type, g.n, rep)
+  if (dim > BigInt(MAX_REP_DIMENSION)) {
     bad('reps', `representations are limited to dimension ${MAX_REP_DIMENSION}, but [${rep.join(',')}] has dimension ${dim}`, g.name)
     return false
   }
@@ -68,7 +68,7 @@ export function checkRep(g: GroupLike, rep: RepValue, bad: Bad): boolean {
  * Reference: Slansky, Phys. Rep. 79 (1981) 1, §4 (indicators multiply on outer products).
  */
 export function checkRealRepresentation(reps: [GroupLike, RepValue][], bad: Bad): void {
-  const factors = reps.map(([g, rep]) => ({ g, rep, reality: repReality(g.type, g.n, rep) }))
+  const factors = reps.map(([g, rep]) => ({ g, rep, reality: repRealityOf(g.type, g.n, rep) }))
   const complex = factors.find((x) => x.reality === 'complex')
   const pseudo = factors.filter((x) => x.reality === 'pseudoreal')
   if (complex) bad('reps', `a real scalar must sit in a real representation, but ${repText(complex.rep)} is complex`, complex.g.name)

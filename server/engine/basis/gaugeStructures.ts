@@ -6,7 +6,7 @@
  * ε suffices. Relations (tracelessness, Schouten-like identities, f/d relations) are left
  * to the numerical rank.
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import type { SuKind } from '../theory/model'
 import { evaluateSuChains } from './suFastPath'
@@ -94,7 +94,7 @@ function combinations(xs: number[], r: number): number[][] {
  */
 export function suStructures(group: string, n: number, kinds: SuKind[], shapes?: TensorShape[]): SuStructure[] {
   const tensor = kinds.includes('other')
-  if (tensor && !shapes) throw new EngineInputError('suStructures', `${group}: tensor legs need their shapes`)
+  if (tensor && !shapes) throw new EngineConsistencyError('suStructures', `${group}: tensor legs need their shapes`)
   const slots = tensor ? shapeSlots(shapes!) : suSlots(kinds)
   const ups = slots.map((s, i) => (s.upper ? i : -1)).filter((i) => i >= 0)
   const lows = slots.map((s, i) => (s.upper ? -1 : i)).filter((i) => i >= 0)
@@ -158,7 +158,7 @@ export type SuWave = number[] | number[][] | TensorWave | null
 export function randomSuWave(F: PrimeField, n: number, kind: SuKind, draw: () => number, shape?: TensorShape): SuWave {
   if (kind === 'singlet') return null
   if (kind === 'other') {
-    if (!shape) throw new EngineInputError('randomSuWave', 'a tensor leg needs its shape')
+    if (!shape) throw new EngineConsistencyError('randomSuWave', 'a tensor leg needs its shape')
     return randomTensorWave(F, n, shape, draw)
   }
   if (kind !== 'adj') return Array.from({ length: n }, draw)
@@ -204,7 +204,7 @@ export function evaluateSuBrute(F: PrimeField, s: SuStructure, waves: SuWave[]):
     let si = 0
     while (si < s.slots.length) {
       const w = waves[s.slots[si]!.leg]!
-      if (!Array.isArray(w)) throw new EngineInputError('evaluateSuBrute', 'tensor legs are evaluated by evaluateSuTensor')
+      if (!Array.isArray(w)) throw new EngineConsistencyError('evaluateSuBrute', 'tensor legs are evaluated by evaluateSuTensor')
       if (Array.isArray(w[0])) {
         v = F.mul(v, (w as number[][])[idx[si]!]![idx[si + 1]!]!)
         si += 2

@@ -28,7 +28,7 @@ export function basisSpecies(t: Theory): Species[] {
   }
   for (const s of model.species) {
     for (const g of model.su) {
-      if (s.suKind[g.name] !== 'other' || s.kind !== 'scalar' || s.partner !== model.species.indexOf(s)) continue
+      if (s.suKind[g.name] === 'singlet' || s.kind !== 'scalar' || s.partner !== model.species.indexOf(s)) continue
       if (isSelfConjugateShape(speciesShape(s, g.name, g.n))) continue
       throw new EngineInputError('basisSpecies', `field ${s.field}: a real field in ${g.name} = SU(${g.n}) [${s.reps[g.name]!.join(',')}] is not written as a tensor with equal upper and lower index shapes (a product of pseudoreal representations, e.g. a real bidoublet); it is counted but its explicit basis is not written out — declare it complex to write one`)
     }

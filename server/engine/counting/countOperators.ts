@@ -139,7 +139,7 @@ function recordCp(ctx: CpContext, entry: DimensionCount, content: FieldContent, 
   let split: CpEntry
   if (isSelfConjugate(ctx.model, content.counts)) split = cpSplit(count, cpTrace(ctx, content)[j]!, key)
   else {
-    const conjugate = classKey(ctx.model, conjugateCounts(ctx.model, content.counts), k)
+    const conjugate = classKeyOfCounts(ctx.model, conjugateCounts(ctx.model, content.counts), k)
     if (entry.cp![conjugate]) return
     split = { even: Number(count), odd: Number(count), conjugate }
   }

@@ -11,11 +11,11 @@
 import { characterAdams } from '../group/character'
 import { suWeights } from '../group/weights'
 import type { Character } from '../group/types'
-import type { RootSystem } from '../group/lie/rootSystem'
+import type { RootSystem } from '../../../shared/physics/lie/rootSystem'
 import { lieWeights } from '../group/lie/lieWeights'
 import { lieChamber } from '../group/lie/lieIrrep'
 import { type Chamber, multiplyIrrepsIn, suChamber } from '../group/brauer'
-import type { FiniteGroupTable } from '../group/finite/tables'
+import type { FiniteGroupTable } from '../../../shared/physics/finite/tables'
 import { type ClassFunction, adamsClass, classAverage, classProduct } from '../group/finite/finiteGroup'
 
 export interface GroupEntry {

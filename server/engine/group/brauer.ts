@@ -47,7 +47,7 @@ export function multiplyIrrepsIn(c: Chamber, irreps: Map<string, number>, x: Cha
   for (const [key, q] of irreps) {
     const lambda = parseWeightKey('multiplyIrreps', key)
     for (const [nu, m] of weights) {
-      if (nu.length !== c.rank) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${c.rank} labels of a ${c.label} weight`)
+      if (nu.length !== c.rank) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${c.rank} labels of ${/^[AEFHILMNORSX]/.test(c.label) ? 'an' : 'a'} ${c.label} weight`)
       const r = c.reflect(nu, lambda)
       if (!r) continue
       const k = r.labels.join(',')

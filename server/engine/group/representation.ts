@@ -10,8 +10,9 @@ import { suDimension } from './weights'
 import { lieDimension } from './lie/lieWeights'
 import { lieIndex, lieReality } from './lie/lieIrrep'
 import { rootSystemOf, type SimpleKind } from './lie/simpleGroups'
-import { FINITE_GROUPS, type FiniteKind } from './finite/tables'
-import { finiteGroup, finiteReality, irrepIndex } from './finite/finiteGroup'
+import { FINITE_GROUPS, type FiniteKind } from '../../../shared/physics/finite/tables'
+import { finiteConjugate, finiteGroup, finiteReality, irrepIndex } from './finite/finiteGroup'
+import { lieConjugate } from './lie/lieIrrep'
 
 export type RepValue = readonly number[] | string
 
@@ -53,6 +54,20 @@ export function repIndex(kind: string, n: number | undefined, rep: RepValue): Ra
   if (isFinite(kind)) return ZERO
   if (kind === 'SU') return suIndex(n!, labels(kind, rep))
   return lieIndex(rootSystemOf(kind as SimpleKind, n), labels(kind, rep))
+}
+
+/**
+ * The conjugate representation (reversed labels for SU(n), −w0 for the other Lie groups, the
+ * complex-conjugate character for finite groups).
+ * @example conjugateRep('A4', undefined, "1'") // "1''"
+ */
+export function conjugateRep(kind: string, n: number | undefined, rep: RepValue): RepValue {
+  if (isFinite(kind)) {
+    const t = finiteGroup(kind)
+    return t.irreps[finiteConjugate(t, irrepIndex(t, String(rep)))]!.name
+  }
+  if (kind === 'SU') return labels(kind, rep).slice().reverse()
+  return lieConjugate(rootSystemOf(kind as SimpleKind, n), labels(kind, rep))
 }
 
 /** True for the trivial representation (all labels 0, or the first irrep of a finite group). */

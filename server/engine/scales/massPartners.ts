@@ -11,7 +11,7 @@
  * the theory below keeps the anomaly conditions of the theory above (common practice).
  */
 import type { Theory, TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
-import { suReality } from '../group/irrep'
+import { conjugateRep, isTrivialRep, repReality } from '../group/representation'
 import { type Rational, neg, parseRational, toString as ratText } from '../exact/rational'
 
 export type Reality = 'real' | 'pseudoreal' | 'complex'
@@ -28,9 +28,12 @@ function chargeText(q: Rational, g: TheoryGroup): string {
 }
 
 function keyOf(g: TheoryGroup, f: TheoryField, conjugate: boolean): string {
-  if (g.type === 'SU') {
-    const labels = f.reps?.[g.name] ?? new Array<number>((g.n ?? 2) - 1).fill(0)
-    return `${g.name}[${(conjugate ? [...labels].reverse() : labels).join(',')}]`
+  if (g.type !== 'U1' && g.type !== 'Z') {
+    // SU(n) labels as written (zeros for a singlet); another Lie group's labels, a finite irrep's name
+    const rep = f.reps?.[g.name] ?? (g.type === 'SU' ? new Array<number>((g.n ?? 2) - 1).fill(0) : undefined)
+    if (rep === undefined) return `${g.name}[trivial]`
+    const r = conjugate && !isTrivialRep(g.type, rep) ? conjugateRep(g.type, g.n, rep) : rep
+    return typeof r === 'string' ? `${g.name}(${r})` : `${g.name}[${r.join(',')}]`
   }
   const q = parseRational(String(f.charges?.[g.name] ?? '0'))
   return `${g.name}(${chargeText(conjugate ? neg(q) : q, g)})`
@@ -39,8 +42,9 @@ function keyOf(g: TheoryGroup, f: TheoryField, conjugate: boolean): string {
 function realityOf(f: TheoryField, groups: readonly TheoryGroup[]): Reality {
   let pseudo = 0
   for (const g of groups) {
-    if (g.type === 'SU') {
-      const r = suReality(g.n ?? 2, f.reps?.[g.name] ?? new Array<number>((g.n ?? 2) - 1).fill(0))
+    if (g.type !== 'U1' && g.type !== 'Z') {
+      const rep = f.reps?.[g.name]
+      const r = isTrivialRep(g.type, rep) ? 'real' : repReality(g.type, g.n, rep!)
       if (r === 'complex') return 'complex'
       if (r === 'pseudoreal') pseudo++
     } else if (keyOf(g, f, false) !== keyOf(g, f, true)) return 'complex'

@@ -6,7 +6,7 @@ import { EngineInputError } from '../errors'
 import { add, mul, parseRational, rat, ZERO, toString as ratText, type Rational } from '../exact/rational'
 import { isTrivialRep, repDimension, repIndex } from '../group/representation'
 import type { TheoryField, TheoryGroup } from '../../../shared/schemas/theory'
-import { FINITE_KINDS, type FiniteKind } from '../group/finite/tables'
+import { FINITE_KINDS, type FiniteKind } from '../../../shared/physics/finite/tables'
 
 export interface ThresholdShift {
   group: string

@@ -9,18 +9,19 @@
  * each other's conjugates. A left-handed Weyl fermion is (1/2,0), its conjugate (0,1/2); a
  * right-handed one the reverse. On-shell legs are all outgoing: a (j_L, j_R) species has
  * 2j_L angle spinors λ and 2j_R square spinors λ̃, helicity j_R − j_L (so ψ of a left-weyl
- * field has helicity −1/2, G_L −1). Conjugation reverses SU(n) Dynkin labels and negates
- * U(1) and Z_n charges.
+ * field has helicity −1/2, G_L −1). Conjugation reverses SU(n) Dynkin labels, maps the labels
+ * of another Lie group to −w0 of them and a finite-group irrep to its complex conjugate, and
+ * negates U(1) and Z_n charges.
  */
 import type { Theory, TheoryField } from '../../../shared/schemas/theory'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
 import { isFiniteKind, isLieKind, type LieKind } from '../../../shared/schemas/groupKinds'
-import type { RootSystem } from '../group/lie/rootSystem'
+import type { RootSystem } from '../../../shared/physics/lie/rootSystem'
 import { adjointLabels, rootSystemOf } from '../group/lie/simpleGroups'
 import { lieConjugate } from '../group/lie/lieIrrep'
-import type { FiniteGroupTable } from '../group/finite/tables'
+import type { FiniteGroupTable } from '../../../shared/physics/finite/tables'
 import { finiteConjugate, finiteGroup, irrepIndex } from '../group/finite/finiteGroup'
 
 /** Lorentz irrep of a species: (0,0), (1/2,0), (0,1/2), (1,0), (0,1). */

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { findPreset } from '../../../shared/presets/index'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { buildBasis, classBasis } from '../../../server/engine/basis/index'
 import { describeOperators } from '../../../server/engine/basis/describe'
 import { countOperators } from '../../../server/engine/counting/countOperators'

@@ -102,8 +102,8 @@ describe('field-content enumeration against a brute-force oracle', () => {
         const frac = (g: number) => counts.reduce((t, n, i) => t + n * Number(model.species[i]!.u1[model.u1[g]!.name]!.num) * (42 / Number(model.species[i]!.u1[model.u1[g]!.name]!.den)), 0)
         const zn = counts.reduce((t, n, i) => t + n * model.species[i]!.zn[model.zn[0]!.name]!, 0) % 3
         const tri = counts.reduce((t, n, i) => t + n * (model.species[i]!.reps[model.su[0]!.name]![0]! + 2 * model.species[i]!.reps[model.su[0]!.name]![1]!), 0) % 3
-        const left = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'left-weyl' ? n : 0), 0)
-        const right = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'right-weyl' ? n : 0), 0)
+        const left = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'L' ? n : 0), 0)
+        const right = counts.reduce((t, n, i) => t + (model.species[i]!.lorentz === 'R' ? n : 0), 0)
         if (frac(0) !== 0 || frac(1) !== 0 || zn !== 0 || tri !== 0 || (left - right) % 2 !== 0) return
         const ks: number[] = []
         for (let k = left % 2; used + 2 * k <= 18; k += 2) if (used + 2 * k >= 10) ks.push(k)

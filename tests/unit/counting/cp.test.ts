@@ -3,7 +3,7 @@
  */
 import { describe, expect, it } from 'vitest'
 import { PRESETS, findPreset } from '../../../shared/presets/index'
-import { parseTheory } from '../../../shared/schemas/theory'
+import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { countOperators, type DimensionCount } from '../../../server/engine/counting/countOperators'
 
 const preset = (id: string) => parseTheory(findPreset(id)!.theory)
@@ -85,14 +85,14 @@ describe('bookkeeping', () => {
   })
 
   it('theories without a defined CP of this kind say why, and still count', () => {
-    const a4 = parseTheory({ name: 'a4', frame: 'relativistic', groups: [{ name: 'F', type: 'A4', gauge: false }], fields: [{ name: 'phi', lorentz: 'S', real: true, reps: { F: '3' } }] })
+    const a4 = parseTheory({ name: 'a4', frame: 'relativistic', groups: [{ name: 'F', type: 'A4', gauge: false }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, reps: { F: '3' } }] })
     const r = countOperators(a4, { maxDim: 6 })
     expect(r.cpUnavailable).toMatch(/finite flavour group \(A4\)/)
     expect(r.byDimension[1]!.cpEven).toBeUndefined()
     expect(r.byDimension[1]!.operators).toBe(5)
-    const so10 = parseTheory({ name: 'so10', frame: 'relativistic', groups: [{ name: 'G', type: 'SO', n: 10, gauge: true }], fields: [{ name: 'psi', lorentz: 'L', reps: { G: [0, 0, 0, 0, 1] } }] })
+    const so10 = parseTheory({ name: 'so10', frame: 'relativistic', groups: [{ name: 'G', type: 'SO', n: 10, gauge: true }], fields: [{ name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 0, 0, 0, 1] } }] })
     expect(countOperators(so10, { maxDim: 6 }).cpUnavailable).toBe('CP counts are not given for G = SO(10): complex conjugation is an outer automorphism of it')
-    const six = parseTheory({ name: 'six', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', n: 4, gauge: false }], fields: [{ name: 's', lorentz: 'S', real: true, reps: { G: [0, 1, 0] } }] })
+    const six = parseTheory({ name: 'six', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', n: 4, gauge: false }], fields: [{ name: 's', lorentz: 'scalar', real: true, reps: { G: [0, 1, 0] } }] })
     expect(countOperators(six, { maxDim: 6 }).cpUnavailable).toMatch(/real field s in SU\(4\) \[0,1,0\]/)
   })
 
@@ -100,7 +100,7 @@ describe('bookkeeping', () => {
     const t = parseTheory({
       name: 'real multiplets', frame: 'relativistic',
       groups: [{ name: 'C', type: 'SU', n: 3, gauge: false }, { name: 'W', type: 'SU', n: 2, gauge: false }, { name: 'Y', type: 'U1', gauge: false }],
-      fields: [{ name: 'S', lorentz: 'S', real: true, reps: { C: [1, 1] } }, { name: 'T', lorentz: 'S', real: true, reps: { W: [2] } }, { name: 'H', lorentz: 'S', reps: { W: [1] }, charges: { Y: '1/2' } }],
+      fields: [{ name: 'S', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }, { name: 'T', lorentz: 'scalar', real: true, reps: { W: [2] } }, { name: 'H', lorentz: 'scalar', reps: { W: [1] }, charges: { Y: '1/2' } }],
     })
     const d5 = countOperators(t, { maxDim: 5 }).byDimension[0]!
     // Hermitian monomials without ε^{μνρσ}, all CP-even: (H†TH)(H†H), (T·T)(H†TH), tr(S²)(H†TH),

@@ -1,6 +1,14 @@
 // Known bad inputs of the engine, one or more per place that throws an input error
 // (engineMessages.test.ts checks that every such place is reached and that every message
 // passes the forbidden list). `says` pins the part of the message a user acts on.
+import { repDimension } from '../../../server/engine/group/representation'
+import { rootSystemOf } from '../../../server/engine/group/lie/simpleGroups'
+import { lieDimension, lieWeights } from '../../../server/engine/group/lie/lieWeights'
+import { liePlethysm, lieSingletCount } from '../../../server/engine/group/lie/lieIrrep'
+import { adamsClass, finiteGroup, irrepIndex } from '../../../server/engine/group/finite/finiteGroup'
+import type { FiniteKind } from '../../../shared/physics/finite/tables'
+import { cpLorentzSeries } from '../../../server/engine/counting/cpLorentz'
+import { mixedTensorShape } from '../../../server/engine/counting/twining'
 import type { Theory } from '../../../shared/schemas/theory'
 import { parseTheory } from '../../../server/engine/theory/parseTheory'
 import { findPreset } from '../../../shared/presets/index'
@@ -42,7 +50,7 @@ const qcd = { alphaS: 0.118, muFrom: 91.1876, muTo: 10, loops: 2 as const, thres
 const sm = { frame: 'relativistic' as const, species: buildTheoryModel({ name: 'one scalar', frame: 'relativistic', groups: [], fields: [{ name: 'H', lorentz: 'scalar' }] }).species }
 const twoPrimes = workingPrimes(2)
 const print = (values: (p: number) => number[]): Fingerprint => ({ primes: twoPrimes, values: twoPrimes.map(values) })
-const sextet: Theory = parseTheory({ name: 'sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar', reps: { C: [2, 0] } }] })
+const bidoublet: Theory = parseTheory({ name: 'bidoublet', frame: 'relativistic', groups: [{ name: 'A', type: 'SU', n: 2, gauge: false }, { name: 'B', type: 'SU', n: 2, gauge: false }], fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }] })
 
 const theoryCases: BadInput[] = [
   { name: 'a theory file that is not JSON', run: () => parseTheory('{ "name": '), says: /^The theory file is not valid JSON/ },
@@ -64,7 +72,7 @@ const basisCases: BadInput[] = [
   { name: 'an explicit basis beyond dimension 12', run: () => buildBasis(phi, { maxDim: 13 }) },
   { name: 'an explicit basis with seven flavors', run: () => buildBasis(phi, { maxDim: 6, nf: 7 }) },
   { name: 'an explicit basis of a heavy-frame theory', run: () => classBasis({ ...phi, frame: 'heavy' }, 'phi^6') },
-  { name: 'an explicit basis with a sextet', run: () => classBasis(sextet, 'S6^3'), says: /fundamental, antifundamental, adjoint and singlet/ },
+  { name: 'an explicit basis of a real bidoublet', run: () => classBasis(bidoublet, 'P^4'), says: /equal upper and lower index shapes/ },
   { name: 'a class naming an unknown field (basis)', run: () => classBasis(phi, 'psi^4') },
   { name: 'a class of two fields', run: () => classBasis(phi, 'phi^2') },
   { name: 'a class of thirteen fields', run: () => classBasis(phi, 'phi^13'), says: /at most 12/ },
@@ -205,4 +213,19 @@ const gaugeRunningCases: BadInput[] = [
   { name: 'a gauge running report over a reversed range', run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }), says: /lower to a higher/ },
 ]
 
-export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...libraryCases]
+// Group data of SO, Sp, the exceptional and the finite groups, called directly (the schema stops these first).
+const groupCases: BadInput[] = [
+  { name: 'an irrep name for a Lie group', run: () => repDimension('SO', 10, '3') },
+  { name: 'an SO(4) group', run: () => rootSystemOf('SO', 4) },
+  { name: 'an E8 irrep beyond exact arithmetic', run: () => lieDimension(rootSystemOf('E8'), [12, 12, 12, 12, 12, 12, 12, 12]) },
+  { name: 'weights of an E8 irrep too large to list', run: () => lieWeights(rootSystemOf('E8'), [1, 1, 0, 0, 0, 0, 0, 0]) },
+  { name: 'a plethysm with a bad partition', run: () => liePlethysm(rootSystemOf('G2'), [1, 0], [1, 2]) },
+  { name: 'a G2 character with a one-label weight', run: () => lieSingletCount(rootSystemOf('G2'), new Map([['1', 1]])) },
+  { name: 'an unknown finite group', run: () => finiteGroup('A5' as FiniteKind) },
+  { name: 'an unknown irrep of A4', run: () => irrepIndex(finiteGroup('A4'), '4') },
+  { name: 'an Adams power of 0', run: () => adamsClass(finiteGroup('A4'), finiteGroup('A4').irreps[3]!.chi, 0) },
+  { name: 'a CP-twisted Lorentz series to 41 derivatives', run: () => cpLorentzSeries([], 41) },
+  { name: 'a real SU(2) irrep with an odd middle label', run: () => mixedTensorShape(2, [1]) },
+]
+
+export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...libraryCases, ...groupCases]

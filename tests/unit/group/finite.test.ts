@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest'
-import { FINITE_GROUPS, FINITE_KINDS } from '../../../server/engine/group/finite/tables'
+import { FINITE_GROUPS, FINITE_KINDS } from '../../../shared/physics/finite/tables'
 import {
   adamsClass, classAverage, classProduct, finiteConjugate, finiteGroup, finiteReality, finiteTensorProduct, irrepMultiplicity,
 } from '../../../server/engine/group/finite/finiteGroup'
-import { eConj } from '../../../server/engine/group/finite/eisenstein'
+import { eConj } from '../../../shared/physics/finite/eisenstein'
 import { EngineInputError } from '../../../server/engine/errors'
 
 describe('character tables of the finite flavour groups (orthogonality checks; James & Liebeck, Thms 14.12 and 16.4)', () => {
@@ -85,6 +85,6 @@ describe('tensor products and reality (Ishimori et al., Prog. Theor. Phys. Suppl
 
   it('an unknown irrep names the group and its irreps', () => {
     expect(() => finiteTensorProduct('A4', '4', '3')).toThrow(EngineInputError)
-    expect(() => finiteTensorProduct('A4', '4', '3')).toThrow(`irrepIndex: A4 has no irrep "4"; its irreps are 1, 1', 1'', 3`)
+    expect(() => finiteTensorProduct('A4', '4', '3')).toThrow(`A4 has no irrep "4"; its irreps are 1, 1', 1'', 3`)
   })
 })

@@ -7,8 +7,8 @@ import { dirname, join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
 import type { LieSimpleCase } from '../../fixtures/lie/generate-simple'
-import { RootSystem } from '../../../server/engine/group/lie/rootSystem'
-import type { LieType } from '../../../server/engine/group/lie/cartan'
+import { RootSystem } from '../../../shared/physics/lie/rootSystem'
+import type { LieType } from '../../../shared/physics/lie/cartan'
 import { dominantWeights, lieDimension, lieWeights } from '../../../server/engine/group/lie/lieWeights'
 import {
   lieAlternatingPower, lieConjugate, liePlethysm, lieReality, lieSingletCount, lieSymmetricPower, lieTensorProduct,
@@ -110,8 +110,8 @@ describe('group data of the simple groups', () => {
   })
 
   it('bad input names the algebra and the labels', () => {
-    expect(() => lieDimension(rootSystemOf('G2'), [1, 0, 0])).toThrow('lieDimension: G2 needs 2 non-negative Dynkin labels, got [1,0,0]')
-    expect(() => rootSystemOf('SO', 4)).toThrow('rootSystemOf: SO(n) needs an integer n from 5 to 18, got n = 4')
+    expect(() => lieDimension(rootSystemOf('G2'), [1, 0, 0])).toThrow('G2 needs 2 non-negative Dynkin labels, got [1,0,0]')
+    expect(() => rootSystemOf('SO', 4)).toThrow('SO(n) needs an integer n from 5 to 18, got n = 4')
     expect(() => rootSystemOf('Sp', 5)).toThrow(EngineInputError)
   })
 })

@@ -31,16 +31,16 @@ describe('group kinds in the theory file', () => {
 
   it('per-kind checks name the group, the kind and the fix', () => {
     const cases: [G[], Record<string, unknown>[], string][] = [
-      [[{ name: 'G', type: 'SO', n: 4, gauge: true }], [], 'groups[0] "G": SO(n) needs n from 5 to 18, but n = 4'],
-      [[{ name: 'G', type: 'Sp', n: 5, gauge: true }], [], 'groups[0] "G": Sp(n) needs n from 4 to 16 (even: Sp(n) acts on n = 2k dimensions), but n = 5'],
-      [[{ name: 'G', type: 'E6', n: 6, gauge: true }], [], 'groups[0] "G": E6 takes no n, but n = 6'],
-      [[{ name: 'G', type: 'A4', gauge: true }], [], 'groups[0] "G": A4 is a finite group; declare it global (gauge false)'],
-      [[{ name: 'G', type: 'SO', n: 10, gauge: true }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0] } }], 'fields[0] "p": G = SO(10) needs 5 Dynkin labels, but got [1,0,0]'],
-      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: '4' } }], `fields[0] "p": G = A4 takes an irrep name (one of 1, 1', 1'', 3), but got "4"`],
-      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1] } }], `fields[0] "p": G = A4 takes an irrep name (one of 1, 1', 1'', 3), but got [1]`],
-      [[{ name: 'G', type: 'E6', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', charges: { G: '1' } }], 'fields[0] "p": G is E6: give Dynkin labels in reps, not a charge'],
-      [[{ name: 'G', type: 'S4', gauge: false }], [{ name: 'X', lorentz: 'field-strength', gaugeOf: 'G' }], 'fields[0] "X": G is a global symmetry (gauge false) and has no field strength'],
-      [[{ name: 'G', type: 'E8', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0, 0, 0, 0, 0, 0] } }], 'representations are limited to dimension 1000, but G = [1,0,0,0,0,0,0,0] has dimension 3875'],
+      [[{ name: 'G', type: 'SO', n: 4, gauge: true }], [], 'Symmetry 1 "G", n: SO(n) needs n from 5 to 18, but n = 4'],
+      [[{ name: 'G', type: 'Sp', n: 5, gauge: true }], [], 'Symmetry 1 "G", n: Sp(n) needs n from 4 to 16 (even: Sp(n) acts on n = 2k dimensions), but n = 5'],
+      [[{ name: 'G', type: 'E6', n: 6, gauge: true }], [], 'Symmetry 1 "G", n: E6 takes no n; remove n = 6'],
+      [[{ name: 'G', type: 'A4', gauge: true }], [], 'Symmetry 1 "G", gauge: A4 is a finite group; declare it global (not gauged)'],
+      [[{ name: 'G', type: 'SO', n: 10, gauge: true }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0] } }], 'Field 1 "p", representation under G: SO(10) takes 5 Dynkin labels, but [1,0,0] has 3'],
+      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: '4' } }], `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got "4"`],
+      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1] } }], `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got [1]`],
+      [[{ name: 'G', type: 'E6', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', charges: { G: '1' } }], 'Field 1 "p", charge under G: G is E6, which takes Dynkin labels, not a charge'],
+      [[{ name: 'G', type: 'S4', gauge: false }], [{ name: 'X', lorentz: 'field-strength', gaugeOf: 'G' }], 'Field 1 "X", gauge group of the field strength: G is a global symmetry (not gauged) and has no field strength'],
+      [[{ name: 'G', type: 'E8', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0, 0, 0, 0, 0, 0] } }], 'Field 1 "p", representation under G: representations are limited to dimension 1000, but [1,0,0,0,0,0,0,0] has dimension 3875'],
     ]
     for (const [groups, fields, message] of cases) expect(errorOf(file(groups, fields))).toContain(message)
   })
@@ -50,9 +50,9 @@ describe('group kinds in the theory file', () => {
     const real = (reps: Record<string, unknown>) => file(groups, [{ name: 's', lorentz: 'scalar', real: true, reps }])
     expect(() => parseTheory(real({ G: [1, 0, 0, 0, 0], A: '3' }))).not.toThrow()
     expect(() => parseTheory(real({ S: [1, 0], T: '2' }))).not.toThrow() // pseudoreal × pseudoreal
-    expect(errorOf(real({ G: [0, 0, 0, 0, 1] }))).toContain('G = [0,0,0,0,1] is complex')
-    expect(errorOf(real({ S: [1, 0] }))).toContain('the product of the reality indicators is −1: S = [1,0] is pseudoreal')
-    expect(errorOf(real({ A: "1'" }))).toContain(`A = "1'" is complex`)
+    expect(errorOf(real({ G: [0, 0, 0, 0, 1] }))).toContain('a real scalar must sit in a real representation, but [0,0,0,0,1] is complex')
+    expect(errorOf(real({ S: [1, 0] }))).toContain('a real scalar must sit in a real representation, but [1,0] is pseudoreal')
+    expect(errorOf(real({ A: "1'" }))).toContain(`a real scalar must sit in a real representation, but "1'" is complex`)
   })
 })
 

@@ -53,9 +53,11 @@ describe('the theory model', () => {
     expect(() => buildTheoryModel(theory, { nf: 0 })).toThrow('The number of flavors must be a whole number from 1 to 6, not 0')
   })
 
-  it('the on-shell basis refuses a representation it does not build, naming it', () => {
+  it('the on-shell basis writes any SU(N) irrep as a tensor (kind other) and refuses, naming it, a real field it cannot write', () => {
     const sextet: Theory = { ...theory, fields: [{ name: 'S6', lorentz: 'scalar', reps: { colour: [2, 0] } }] }
     expect(buildTheoryModel(sextet).species[0]!.suKind.colour).toBe('other')
-    expect(() => basisSpecies(sextet)).toThrow('Field S6 sits in the representation [2,0] of colour = SU(3); explicit bases support the fundamental, antifundamental, adjoint and singlet only (counts support any)')
+    expect(basisSpecies(sextet).map((s) => s.label)).toEqual(['S6', 'S6*'])
+    const bi: Theory = { ...theory, groups: [{ name: 'A', type: 'SU', n: 2, gauge: false }, { name: 'B', type: 'SU', n: 2, gauge: false }], fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }] }
+    expect(() => basisSpecies(bi)).toThrow('field P: a real field in A = SU(2) [1] is not written as a tensor with equal upper and lower index shapes')
   })
 })

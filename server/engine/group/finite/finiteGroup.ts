@@ -4,8 +4,9 @@
  * tensor-product decompositions. Exact (Eisenstein integers).
  */
 import { EngineConsistencyError, EngineInputError } from '../../errors'
-import { type Eis, E0, eAdd, eConj, eEqual, eMul, eScale, eText } from './eisenstein'
-import { FINITE_GROUPS, type FiniteGroupTable, type FiniteKind } from './tables'
+import { type Eis, E0, eAdd, eConj, eEqual, eMul, eScale, eText } from '../../../../shared/physics/finite/eisenstein'
+import { FINITE_GROUPS, type FiniteGroupTable, type FiniteKind } from '../../../../shared/physics/finite/tables'
+import { irrepIndicator } from '../../../../shared/physics/groupReps'
 
 /** A class function: one value per conjugacy class (order of table.classes). */
 export type ClassFunction = Eis[]
@@ -81,8 +82,7 @@ export function finiteTensorProduct(kind: FiniteKind, a: string, b: string): Map
  */
 export function finiteReality(kind: FiniteKind, name: string): 'real' | 'pseudoreal' | 'complex' {
   const t = finiteGroup(kind)
-  const nu = classAverage(t, adamsClass(t, t.irreps[irrepIndex(t, name)]!.chi, 2))
-  return nu === 1 ? 'real' : nu === -1 ? 'pseudoreal' : 'complex'
+  return irrepIndicator(t, irrepIndex(t, name))
 }
 
 /**

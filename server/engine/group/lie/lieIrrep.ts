@@ -9,7 +9,8 @@ import type { PlethysmOptions } from '../plethysm'
 import { MAX_PLETHYSM_DEGREE } from '../plethysm'
 import { parseWeightKey } from '../labels'
 import { type Rational, rat } from '../../exact/rational'
-import type { RootSystem } from './rootSystem'
+import type { RootSystem } from '../../../../shared/physics/lie/rootSystem'
+import { conjugateLabels, labelsReality } from '../../../../shared/physics/groupReps'
 import { checkLabels, lieDimension, lieWeights } from './lieWeights'
 
 /** The Weyl chamber of a root system (for the Brauer–Klimyk products of brauer.ts). */
@@ -24,7 +25,7 @@ export function lieChamber(rs: RootSystem): Chamber {
  */
 export function lieConjugate(rs: RootSystem, labels: readonly number[]): number[] {
   checkLabels('lieConjugate', rs, labels)
-  return rs.antidominantOf(labels).map((x) => 0 - x)
+  return conjugateLabels(rs, labels)
 }
 
 /**
@@ -34,16 +35,8 @@ export function lieConjugate(rs: RootSystem, labels: readonly number[]): number[
  * Reference: Bourbaki, Lie Groups and Lie Algebras, ch. VIII §7.5 Prop. 12; Slansky, Table 11.
  */
 export function lieReality(rs: RootSystem, labels: readonly number[]): 'real' | 'pseudoreal' | 'complex' {
-  const conj = lieConjugate(rs, labels)
-  if (conj.some((x, i) => x !== labels[i])) return 'complex'
-  // ⟨λ, α^∨⟩ = Σ_i c_i (d_i / d_α) λ_i summed over the positive roots α = Σ c_i α_i.
-  let twice = 0
-  for (const a of rs.positive) {
-    let s = 0
-    a.coeffs.forEach((c, i) => { s += c * rs.half[i]! * labels[i]! })
-    twice += s / a.half
-  }
-  return Math.round(twice) % 2 === 0 ? 'real' : 'pseudoreal'
+  checkLabels('lieReality', rs, labels)
+  return labelsReality(rs, labels)
 }
 
 /**

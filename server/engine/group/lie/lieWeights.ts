@@ -3,7 +3,8 @@
  */
 import { EngineInputError } from '../../errors'
 import type { Character } from '../types'
-import { RootSystem } from './rootSystem'
+import { RootSystem } from '../../../../shared/physics/lie/rootSystem'
+import { weylDimensionOf } from '../../../../shared/physics/groupReps'
 
 /** Largest irrep (dimension) whose weights are listed. */
 export const MAX_LIE_WEIGHT_DIMENSION = 5_000_000
@@ -24,20 +25,7 @@ export function checkLabels(fn: string, rs: RootSystem, labels: readonly number[
  */
 export function lieDimension(rs: RootSystem, labels: readonly number[]): number {
   checkLabels('lieDimension', rs, labels)
-  let num = 1n
-  let den = 1n
-  for (const a of rs.positive) {
-    // (λ, α^∨) = Σ_i c_i (d_i / d_α) λ_i with α = Σ c_i α_i; the factor 1/d_α cancels in the ratio.
-    let top = 0
-    let bottom = 0
-    a.coeffs.forEach((c, i) => {
-      top += c * rs.half[i]! * (labels[i]! + 1)
-      bottom += c * rs.half[i]!
-    })
-    num *= BigInt(top)
-    den *= BigInt(bottom)
-  }
-  const d = num / den
+  const d = weylDimensionOf(rs, labels)
   if (d > BigInt(Number.MAX_SAFE_INTEGER)) throw new EngineInputError('lieDimension', `dimension of ${rs.type}${rs.rank} [${labels.join(',')}] exceeds 2^53: ${d}`)
   return Number(d)
 }

@@ -6,10 +6,10 @@
  * Reference: Slansky, Phys. Rep. 79 (1981) 1, Tables 2 and 6; Yamatsu, arXiv:1511.08771.
  */
 import { EngineInputError } from '../../errors'
-import type { LieType } from './cartan'
-import { RootSystem } from './rootSystem'
+import type { RootSystem } from '../../../../shared/physics/lie/rootSystem'
+import { type SimpleKind, simpleRootSystem } from '../../../../shared/physics/groupReps'
 
-export type SimpleKind = 'SU' | 'SO' | 'Sp' | 'G2' | 'F4' | 'E6' | 'E7' | 'E8'
+export type { SimpleKind }
 
 /** Ranges of n per kind (SO(n), Sp(n) with n the size of the defining matrices). */
 export const SIMPLE_N_RANGE: Record<'SU' | 'SO' | 'Sp', readonly [number, number]> = { SU: [2, 8], SO: [5, 18], Sp: [4, 16] }
@@ -19,16 +19,12 @@ export const SIMPLE_N_RANGE: Record<'SU' | 'SO' | 'Sp', readonly [number, number
  * @example rootSystemOf('SO', 10).type // 'D' (rank 5)
  */
 export function rootSystemOf(kind: SimpleKind, n?: number): RootSystem {
-  if (kind === 'G2' || kind === 'F4' || kind === 'E6' || kind === 'E7' || kind === 'E8') {
-    return RootSystem.of(kind[0] as LieType, Number(kind[1]))
-  }
+  if (kind === 'G2' || kind === 'F4' || kind === 'E6' || kind === 'E7' || kind === 'E8') return simpleRootSystem(kind)
   const [lo, hi] = SIMPLE_N_RANGE[kind]
   if (n === undefined || !Number.isInteger(n) || n < lo || n > hi || (kind === 'Sp' && n % 2 !== 0)) {
     throw new EngineInputError('rootSystemOf', `${kind}(n) needs ${kind === 'Sp' ? 'an even' : 'an integer'} n from ${lo} to ${hi}, got n = ${n}`)
   }
-  if (kind === 'SU') return RootSystem.of('A', n - 1)
-  if (kind === 'Sp') return RootSystem.of('C', n / 2)
-  return n % 2 === 1 ? RootSystem.of('B', (n - 1) / 2) : RootSystem.of('D', n / 2)
+  return simpleRootSystem(kind, n)
 }
 
 /** Readable name, e.g. "SO(10)", "Sp(4)", "E6". */

@@ -3,7 +3,6 @@
  * finite flavour groups we ship (all lie in Z[ω]).
  * Reference: Ireland & Rosen, A Classical Introduction to Modern Number Theory, ch. 9.1.
  */
-import { EngineConsistencyError } from '../../errors'
 
 /** [a, b] stands for a + bω. */
 export type Eis = readonly [number, number]
@@ -14,7 +13,8 @@ export const OMEGA: Eis = [0, 1]
 export const OMEGA2: Eis = [-1, -1]
 
 function safe(x: number): number {
-  if (!Number.isSafeInteger(x)) throw new EngineConsistencyError('eisenstein', `value ${x} beyond 2^53`)
+  // Character values of the shipped tables are tiny: overflow would be a programming error.
+  if (!Number.isSafeInteger(x)) throw new RangeError(`eisenstein: value ${x} beyond 2^53`)
   return x
 }
 

@@ -7,7 +7,6 @@
  * Reference: Bourbaki, Lie Groups and Lie Algebras, ch. VI, Plates I–IX; Slansky,
  * Phys. Rep. 79 (1981) 1, Table 2.
  */
-import { EngineInputError } from '../../errors'
 
 export type LieType = 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | 'G'
 
@@ -19,7 +18,8 @@ export const RANK_LIMITS: Record<LieType, readonly [number, number]> = {
 function checkRank(type: LieType, rank: number): void {
   const [lo, hi] = RANK_LIMITS[type] ?? [1, 0]
   if (!Number.isInteger(rank) || rank < lo || rank > hi) {
-    throw new EngineInputError('cartanMatrix', `${type}_n needs a rank from ${lo} to ${hi}, got ${rank}`)
+    // Unreachable from a validated theory file (group sizes are checked first): a programming error.
+    throw new RangeError(`cartanMatrix: ${type}_n needs a rank from ${lo} to ${hi}, got ${rank}`)
   }
 }
 
