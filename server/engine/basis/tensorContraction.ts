@@ -5,7 +5,7 @@
  * by one, each time the one whose merged factor is smallest (variable elimination).
  * Reference: common practice (tensor-network contraction by greedy elimination).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import type { SuStructure, SuWave } from './gaugeStructures'
 import type { TensorWave } from './tensorWaves'
@@ -22,6 +22,15 @@ const MAX_LOOP_LEAVES = 20_000
 /** Largest dense factor (entries) formed while contracting. */
 const MAX_FACTOR = 4_000_000
 
+/**
+ * Index loops of any contraction that needs a larger factor (an ε of SU(8) alone has 8^8
+ * entries): classCandidates keeps every class with tensor legs within 1e7 loop terms.
+ */
+const MAX_FALLBACK_LEAVES = 10_000_000
+
+/** Thrown inside the network when a factor would exceed MAX_FACTOR; caught below. */
+class FactorTooLarge extends Error {}
+
 function asTensor(w: SuWave, n: number): TensorWave | null {
   if (w === null) return null
   if (!Array.isArray(w)) return w
@@ -36,7 +45,7 @@ function asTensor(w: SuWave, n: number): TensorWave | null {
 
 function epsilonFactor(F: PrimeField, n: number, vars: number[]): Factor {
   const size = n ** n
-  if (size > MAX_FACTOR) throw new EngineInputError('evaluateSuTensor', `an ε of SU(${n}) on tensor legs is too large to evaluate (${size} entries)`)
+  if (size > MAX_FACTOR) throw new FactorTooLarge()
   const data = new Array<number>(size).fill(0)
   const perm = Array.from({ length: n }, (_, i) => i)
   const rec = (k: number, sign: number): void => {
@@ -60,7 +69,7 @@ function epsilonFactor(F: PrimeField, n: number, vars: number[]): Factor {
 function eliminate(F: PrimeField, n: number, factors: Factor[], v: number): Factor {
   const vars = [...new Set(factors.flatMap((f) => f.vars))].filter((x) => x !== v)
   const all = [...vars, v]
-  if (n ** all.length > MAX_FACTOR) throw new EngineInputError('evaluateSuTensor', `gauge contraction too large to evaluate (${all.length} open SU(${n}) indices)`)
+  if (n ** all.length > MAX_FACTOR) throw new FactorTooLarge()
   const pos = new Map(all.map((x, i) => [x, i]))
   const strides = factors.map((f) => {
     const s = new Array<number>(all.length).fill(0)
@@ -94,9 +103,21 @@ function eliminate(F: PrimeField, n: number, factors: Factor[], v: number): Fact
  * @example evaluateSuTensor(F, structure of (quartet, quartet*), waves) // Σ T^{ij}_k T*_{ij}^k
  */
 export function evaluateSuTensor(F: PrimeField, s: SuStructure, waves: SuWave[]): number {
-  const n = s.n
   const plan = loopPlan(s)
-  if (plan.leaves <= MAX_LOOP_LEAVES) return runLoops(F, plan, waves.map((w) => asTensor(w, n)?.data))
+  const data = (): (number[] | undefined)[] => waves.map((w) => asTensor(w, s.n)?.data)
+  if (plan.leaves <= MAX_LOOP_LEAVES) return runLoops(F, plan, data())
+  try {
+    return evaluateNetwork(F, s, waves)
+  } catch (e) {
+    if (!(e instanceof FactorTooLarge)) throw e
+    if (plan.leaves > MAX_FALLBACK_LEAVES) throw new EngineConsistencyError('evaluateSuTensor', `an SU(${s.n}) contraction of ${plan.leaves} loop terms passed the class budget`)
+    return runLoops(F, plan, data())
+  }
+}
+
+/** The contraction by greedy variable elimination; FactorTooLarge when a factor would be too big. */
+function evaluateNetwork(F: PrimeField, s: SuStructure, waves: SuWave[]): number {
+  const n = s.n
   const slotVar = new Array<number>(s.slots.length).fill(-1)
   s.deltas.forEach(([u, l], k) => { slotVar[u] = k; slotVar[l] = k })
   let next = s.deltas.length
@@ -105,7 +126,7 @@ export function evaluateSuTensor(F: PrimeField, s: SuStructure, waves: SuWave[])
   const legs = [...new Set(s.slots.map((sl) => sl.leg))]
   for (const leg of legs) {
     const t = asTensor(waves[leg] ?? null, n)
-    if (!t) throw new EngineInputError('evaluateSuTensor', `leg ${leg} has SU(${n}) indices but no wave-function`)
+    if (!t) throw new EngineConsistencyError('evaluateSuTensor', `leg ${leg} has SU(${n}) indices but no wave-function`)
     const vars = s.slots.map((sl, i) => (sl.leg === leg ? slotVar[i]! : -1)).filter((x) => x >= 0)
     factors.push({ vars, data: t.data })
   }

@@ -10,7 +10,7 @@
  * Reference: Koike, Adv. Math. 74 (1989) 57 (mixed tensor decomposition of V_α ⊗ V̄_β);
  * Fulton & Harris, Representation Theory, §6.1 (Littlewood–Richardson coefficients).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import { characterSum, trivialCharacter } from '../group/character'
 import { tensorProduct } from '../group/products'
 import { suWeights } from '../group/weights'
@@ -58,13 +58,19 @@ function partitionsOfSize(k: number, maxPart: number): number[][] {
   return out
 }
 
-/** Littlewood–Richardson coefficient c^α_{γδ}, from an SU(M) tensor product with M > ℓ(γ) + ℓ(δ). */
+/**
+ * Littlewood–Richardson coefficient c^α_{γδ} (|γ| + |δ| = |α|), from an SU(M) tensor product
+ * with M = ℓ(α) + 1: it vanishes unless γ, δ ⊆ α, and in SU(M) only α plus whole columns of
+ * length M shares α's Dynkin labels, which has more boxes than γ ⊗ δ; so the SU(M) multiplicity
+ * is the GL one. Real irreps of SU(n ≤ 8) have ℓ(α) ≤ 4, so M ≤ 5.
+ * Reference: Fulton & Harris, Representation Theory, §15.3 (SL(M) irreps as partitions modulo columns).
+ */
 function lr(alpha: number[], gamma: number[], delta: number[]): number {
   if (gamma.length === 0) return delta.join() === alpha.join() ? 1 : 0
   if (delta.length === 0) return gamma.join() === alpha.join() ? 1 : 0
-  const m = gamma.length + delta.length + 1
-  if (m > MAX_N) throw new EngineInputError('twiningCharacter', `shape [${alpha.join(',')}] is too long for the CP twining character (needs SU(${m}))`)
-  if (alpha.length >= m) return 0
+  if (gamma.length > alpha.length || delta.length > alpha.length) return 0
+  const m = alpha.length + 1
+  if (m > MAX_N) throw new EngineConsistencyError('twiningCharacter', `shape [${alpha.join(',')}] of a real irrep is longer than SU(8) allows`)
   return tensorProduct(m, dynkinOf(gamma, m), dynkinOf(delta, m)).get(dynkinOf(alpha, m).join(',')) ?? 0
 }
 

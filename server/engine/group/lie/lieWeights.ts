@@ -1,7 +1,7 @@
 /**
  * Weight systems and dimensions of irreps of any simple Lie algebra (exact integers).
  */
-import { EngineInputError } from '../../errors'
+import { EngineConsistencyError, EngineInputError } from '../../errors'
 import type { Character } from '../types'
 import { RootSystem } from '../../../../shared/physics/lie/rootSystem'
 import { weylDimensionOf } from '../../../../shared/physics/groupReps'
@@ -61,7 +61,7 @@ export function dominantWeights(rs: RootSystem, labels: readonly number[]): Map<
     }
     const denom = top - rs.inner(shifted(mu), shifted(mu))
     const m = (2 * sum) / denom
-    if (!Number.isSafeInteger(m)) throw new EngineInputError('dominantWeights', `non-integer multiplicity ${m} at ${mu.join(',')} in ${rs.type}${rs.rank} [${labels.join(',')}]`)
+    if (!Number.isSafeInteger(m)) throw new EngineConsistencyError('dominantWeights', `non-integer multiplicity ${m} at ${mu.join(',')} in ${rs.type}${rs.rank} [${labels.join(',')}]`)
     mult.set(mu.join(','), m)
   }
   if (dominantCache.size > 2000) dominantCache.clear()
