@@ -13,6 +13,7 @@ import { evaluateSu, randomSuWave, type SuStructure, type SuWave } from './gauge
 import type { LorentzStructure } from './lorentzStructures'
 import { speciesShape } from './species'
 import type { LegPermutation } from './symmetry'
+import { symmetrisationPlan, type Pair } from './pairOrbits'
 
 export interface SamplePoint {
   kin: KinematicPoint
@@ -113,12 +114,36 @@ export function combinationValues(F: PrimeField, terms: EvalTerm[], points: Samp
 }
 
 /**
- * Symmetrised values of individual (lorentz, gauge) pairs: rows[r][k] for pair k, sharing
- * the evaluation of repeated Lorentz and gauge factors.
+ * Symmetrised values of individual (lorentz, gauge) pairs: rows[r][k] for pair k, from the
+ * class's symmetrisation plan (pairOrbits.ts: each relabelled structure evaluated once per
+ * point), or by the direct sum over permutations when there is no plan.
  * @example pairRows(F, [{lorentz: φ^4, gauge: []}], points, perms)[0] // [24]
  */
 export function pairRows(
-  F: PrimeField, pairs: { lorentz: LorentzStructure; gauge: SuStructure[] }[], points: SamplePoint[], perms: LegPermutation[],
+  F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[],
+  signal?: { aborted: boolean },
+): number[][] {
+  const plan = symmetrisationPlan(pairs, perms)
+  if (!plan) return directPairRows(F, pairs, points, perms, signal)
+  const identity = pairs[0] ? pairs[0].lorentz.derivs.map((_, i) => i) : []
+  return points.map((pt) => {
+    if (signal?.aborted) throw new EngineCancelledError('basis evaluation')
+    const L = plan.lorentz.map((l) => lorentzValue(F, l, pt.kin, identity))
+    const G = plan.gauge.map((g) => gaugeValue(F, g, pt.waves, identity))
+    const row = new Array<number>(pairs.length).fill(0)
+    for (const [k, terms] of plan.terms) {
+      let v = 0
+      for (const { l, g, coeff } of terms) v = F.add(v, F.mul(F.from(coeff), F.mul(L[l]!, G[g]!)))
+      row[k] = v
+    }
+    plan.links.forEach((link, k) => { if (link.rep !== k) row[k] = link.sign === 1 ? row[link.rep]! : F.neg(row[link.rep]!) })
+    return row
+  })
+}
+
+/** pairRows by the sum over permutations at every point (the reference for the plan). */
+export function directPairRows(
+  F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[],
   signal?: { aborted: boolean },
 ): number[][] {
   const uniqL = [...new Set(pairs.map((p) => p.lorentz))]
