@@ -11,7 +11,8 @@
  * "message"?,"cpEven","cpOdd","operators":[{"text","latex","latex4","cp" ("even", "odd", or "both" for a
  * non-Hermitian operator: one CP-even and one CP-odd parameter),"hermitian","realParameters","flavorComponents",…}]}]}]}.
  * With flavors (--nf > 1 or "flavors" in the theory) a class lists one operator per
- * (structure, Young symmetry) pair with its number of flavor components.
+ * (structure, Young symmetry) pair with its number of flavor components; "youngConvention" says
+ * which Young symmetrizer a shape means (flavor.ts, YOUNG_CONVENTION).
  * Exit code 1 with a message on stderr for bad input.
  */
 import { readFileSync } from 'node:fs'
@@ -39,7 +40,7 @@ function classJson(c: ClassReport) {
   const base = { key: c.key, conjugateKey: c.conjugateKey, selfConjugate: c.selfConjugate, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, ...(c.message ? { message: c.message } : {}), cpEven: c.cpEven, cpOdd: c.cpOdd }
   if (c.flavor) {
     return {
-      ...base, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,
+      ...base, youngConvention: c.flavor.convention, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,
       operators: c.flavor.operators.map((o) => ({ text: o.text, latex: o.latex, latex4: o.latex4, hermitian: c.selfConjugate, young: o.young, flavorComponents: o.flavorComponents })),
     }
   }

@@ -29,7 +29,16 @@ export interface FlavorOperator {
   flavorComponents: number
 }
 
+/**
+ * Which symmetrizer a Young shape means, for every flavoured operator (shown with the basis).
+ * Reference: Fulton & Harris, Representation Theory, §4.1 and §6.1 (Y_T = b_T a_T acting on
+ * the tensor slots: row symmetrizer after column antisymmetrizer); dim Y_T·V^{⊗m} = dim_GL(N)(λ).
+ */
+export const YOUNG_CONVENTION = 'A flavoured operator with Young shape λ on m identical fields has the flavour tensor C′ = Y_T C: T is the tableau of λ filled row by row with those fields in class order, and Y_T = (sum of the permutations within the rows of T) × (signed sum of the permutations within its columns): antisymmetrize the columns, then symmetrize the rows. Its flavour components, dim_GL(N_f)(λ), are those of this one image; the whole λ-part of the flavour tensor (all standard tableaux) has f^λ times as many and repeats the same operator f^λ times.'
+
 export interface FlavorSummary {
+  /** YOUNG_CONVENTION: which symmetrizer `young` means. */
+  convention: string
   nf: number
   /** Flavor number per block of identical fields, with the block's particle label. */
   blocks: { label: string; size: number; flavors: number }[]
@@ -103,6 +112,7 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
   const count = decomposition.reduce((s, d) => s + d.multiplicity * d.componentsEach, 0)
   const ok = count === hilbert
   return {
+    convention: YOUNG_CONVENTION,
     nf: nf ?? Math.max(...blocks.map((bl) => bl.flavors)),
     blocks: blocks.map((bl) => ({ label: bl.label, size: bl.legs.length, flavors: bl.flavors })),
     count, hilbert, realParameters: b.selfConjugate ? count : 2 * count, tallyOk: ok,

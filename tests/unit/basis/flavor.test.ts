@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest'
 import { buildBasis, classBasis } from '../../../server/engine/basis/index'
-import { flavorDecomposition } from '../../../server/engine/basis/flavor'
+import { flavorDecomposition, YOUNG_CONVENTION } from '../../../server/engine/basis/flavor'
+import { PrimeField, workingPrimes } from '../../../server/engine/finite/primeField'
+import { rank } from '../../../server/engine/finite/matrix'
 import { glDimension, standardTableaux, youngSymmetrizer } from '../../../server/engine/basis/young'
 import smeft3Json from './fixtures/smeft3.json'
 import type { Theory } from '../../../shared/schemas/theory'
@@ -22,6 +24,40 @@ describe('Young symmetrizers and GL(N) dimensions', () => {
     expect(youngSymmetrizer([1, 1], [0, 1], 2, false).map((t) => t.sign).sort()).toEqual([-1, 1])
     expect(youngSymmetrizer([2], [0, 1], 2, true).map((t) => t.sign).sort()).toEqual([-1, 1])
     expect(youngSymmetrizer([2, 1], [0, 1, 2], 3, false)).toHaveLength(4)
+  })
+})
+
+/** Rank of Y_T on (F^N)^{⊗m}: the image of every basis tensor, as rows. */
+function youngImageRank(lambda: number[], N: number): number {
+  const F = new PrimeField(workingPrimes(1)[0]!)
+  const m = lambda.reduce((a, b) => a + b, 0)
+  const legs = Array.from({ length: m }, (_, i) => i)
+  const y = youngSymmetrizer(lambda, legs, m, false)
+  const size = N ** m
+  const digits = (x: number) => legs.map((k) => Math.floor(x / N ** k) % N)
+  const rows = Array.from({ length: size }, (_, e) => {
+    const out = new Array<number>(size).fill(0)
+    const idx = digits(e)
+    for (const t of y) {
+      const moved = legs.reduce((acc, k) => acc + idx[t.map[k]!]! * N ** k, 0)
+      out[moved] = F.add(out[moved]!, F.from(t.sign))
+    }
+    return out
+  })
+  return rank(F, rows)
+}
+
+describe('the flavour components of one Young symmetrizer (the stated convention)', () => {
+  // Fulton & Harris, Representation Theory, §6.1: Y_T V^{⊗m} is the GL(N) irrep of shape λ,
+  // so one listed operator has dim_GL(N)(λ) components, not f^λ times as many.
+  const cases: [number[], number][] = [[[2, 1], 3], [[2, 1], 2], [[2, 2], 3], [[3, 1], 2], [[1, 1, 1], 3], [[2], 3]]
+  it.each(cases)('Y_T for λ = %j on (C^%i)^⊗m has rank dim_GL(N)(λ)', (lambda, N) => {
+    expect(youngImageRank(lambda, N)).toBe(glDimension(lambda, N))
+  })
+  it('every flavoured class states the convention', () => {
+    const b = classBasis(smeft3, 'L^2 H^2')
+    expect(flavorDecomposition(smeft3, b, 3, 6).convention).toBe(YOUNG_CONVENTION)
+    expect(YOUNG_CONVENTION).toMatch(/antisymmetrize the columns, then symmetrize the rows/)
   })
 })
 
