@@ -33,7 +33,10 @@ export interface SymmetrisationPlan {
   terms: Map<number, { l: number; g: number; coeff: number }[]>
 }
 
-/** Key work (pairs × permutations) beyond which no plan is made (the caller sums directly). */
+/**
+ * Relabellings (one per pair, one per permutation for each orbit representative) beyond which
+ * the planning stops and the caller sums directly.
+ */
 const MAX_KEY_WORK = 2_000_000
 
 interface Image<T> {
@@ -108,11 +111,18 @@ function intern<T>(index: Map<string, number>, list: T[], img: Image<T>): number
  * @example symmetrisationPlan(pairs of Ξ⁶, 720 permutations)!.terms.size // a few representatives
  */
 export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): SymmetrisationPlan | null {
-  if (perms.length < 2 || pairs.length * perms.length > MAX_KEY_WORK || perms.some((p) => Math.abs(p.sign) !== 1)) return null
+  if (perms.length < 2 || perms.some((p) => Math.abs(p.sign) !== 1)) return null
+  // Conjugated structures carry their own slot arrays: share the maps by layout.
+  const byLayout = new Map<string, number[][]>()
   const moveCache = new Map<SuStructure['slots'], number[][]>()
   const movesOf = (g: SuStructure[], t: number): number[][] => g.map((s) => {
     let m = moveCache.get(s.slots)
-    if (!m) moveCache.set(s.slots, (m = perms.map((p) => slotMap(s.slots, p.map))))
+    if (!m) {
+      const layout = s.slots.map((sl) => `${sl.leg}${sl.upper ? 'u' : 'l'}${sl.box ?? ''}`).join(',')
+      m = byLayout.get(layout) ?? perms.map((p) => slotMap(s.slots, p.map))
+      byLayout.set(layout, m)
+      moveCache.set(s.slots, m)
+    }
     return m[t]!
   })
   const plan: SymmetrisationPlan = { links: [], lorentz: [], gauge: [], terms: new Map() }
@@ -121,11 +131,15 @@ export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): Symm
   const orbit = new Map<string, OrbitLink>()
   const identity = perms.findIndex((q) => q.map.every((x, i) => x === i))
   if (identity < 0) return null
-  pairs.forEach((p, k) => {
+  let work = 0
+  for (let k = 0; k < pairs.length; k++) {
+    const p = pairs[k]!
     const self = lorentzImage(p.lorentz, perms[identity]!.map)
     const selfG = gaugeImage(p.gauge, movesOf(p.gauge, identity))
     const seen = orbit.get(`${self.key}#${selfG.key}`)
-    if (seen) { plan.links.push({ rep: seen.rep, sign: self.sign * selfG.sign * seen.sign }); return }
+    if (seen) { plan.links.push({ rep: seen.rep, sign: self.sign * selfG.sign * seen.sign }); continue }
+    work += perms.length
+    if (work > MAX_KEY_WORK) return null
     plan.links.push({ rep: k, sign: 1 })
     const acc = new Map<string, { l: number; g: number; coeff: number }>()
     imagesOf(p, perms, movesOf).forEach((img, t) => {
@@ -138,7 +152,7 @@ export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): Symm
       acc.set(`${l},${g}`, term)
     })
     plan.terms.set(k, [...acc.values()].filter((x) => x.coeff !== 0))
-  })
+  }
   return plan
 }
 
