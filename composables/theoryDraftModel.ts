@@ -8,8 +8,9 @@ import { GROUP_KINDS, type GroupKind, groupKindLabel, takesN } from '../shared/s
 import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
 import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heavyBlock'
 import { type DraftGoldstone, goldstoneToDraft, goldstoneToTheory } from './theoryDraft/goldstoneBlock'
+import { type DraftCoupling, type DraftMass, couplingToDraft, couplingToTheory, massToDraft, massToTheory } from './theoryDraft/couplingsBlock'
 
-export type { DraftHeavy }
+export type { DraftHeavy, DraftCoupling, DraftMass }
 
 export type { GroupKind }
 export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
@@ -23,6 +24,8 @@ export interface DraftField extends DraftLabels {
   /** uid of a group of the draft, or "?NAME" for a group name the file names but does not declare. */
   gaugeOf: string
   flavors: string
+  /** The mass symbol (and value) used when the field is integrated out. */
+  mass?: DraftMass
   description?: string
 }
 export interface DraftWeight { uid: string, block: string, value: string }
@@ -44,6 +47,8 @@ export interface TheoryDraft {
   heavy?: DraftHeavy
   /** The Goldstone block; written to the file only while the frame is "goldstone". */
   goldstone?: DraftGoldstone
+  /** Symbols (and values) of order-0 operators; written when there is at least one. */
+  couplings: DraftCoupling[]
 }
 
 /** A problem found while reading the typed text, at the theory-file path of its input. */
@@ -56,7 +61,7 @@ export function newUid(prefix = 'u'): string {
 }
 
 export function emptyDraft(): TheoryDraft {
-  return { name: '', description: '', frame: 'relativistic', maxOrder: '', groups: [], fields: [], countingRules: [], hasRules: false }
+  return { name: '', description: '', frame: 'relativistic', maxOrder: '', groups: [], fields: [], countingRules: [], hasRules: false, couplings: [] }
 }
 
 export function newGroup(): DraftGroup {
@@ -65,6 +70,10 @@ export function newGroup(): DraftGroup {
 
 export function newField(): DraftField {
   return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+}
+
+export function newCoupling(): DraftCoupling {
+  return { uid: newUid('c'), class: '', operator: '', symbol: '', number: '', unit: '' }
 }
 
 export function newRule(): DraftRule {
@@ -93,6 +102,7 @@ export function theoryToDraft(input: unknown): TheoryDraft {
     groups, fields, countingRules: rules, hasRules: Array.isArray(input.countingRules),
     ...(input.heavy !== undefined ? { heavy: heavyToDraft(input.heavy, byName) } : {}),
     ...(input.goldstone !== undefined ? { goldstone: goldstoneToDraft(input.goldstone) } : {}),
+    couplings: list(input.couplings).map((c) => couplingToDraft(c, newUid('c'))),
   }
 }
 
@@ -104,6 +114,8 @@ function fieldToDraft(f: Record<string, unknown>, byName: Map<string, string>): 
   out.flavors = text(f.flavors)
   if (f.gaugeOf !== undefined) out.gaugeOf = byName.get(text(f.gaugeOf)) ?? `?${text(f.gaugeOf)}`
   Object.assign(out, labelsToDraft(f.reps, f.charges, byName))
+  const mass = massToDraft(f.mass)
+  if (mass) out.mass = mass
   if (f.description !== undefined) out.description = text(f.description)
   return out
 }
@@ -145,6 +157,7 @@ export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>
   if (d.hasRules || d.countingRules.length) theory.countingRules = d.countingRules.map(ruleToTheory)
   if (d.heavy !== undefined && d.frame === 'heavy') theory.heavy = heavyToTheory(d.heavy, d.groups, issues)
   if (d.goldstone !== undefined && d.frame === 'goldstone') theory.goldstone = goldstoneToTheory(d.goldstone, issues)
+  if (d.couplings.length) theory.couplings = d.couplings.map(couplingToTheory)
   return { theory, issues }
 }
 
@@ -158,6 +171,8 @@ function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Ma
     const g = f.gaugeOf.startsWith('?') ? f.gaugeOf.slice(1) : names.get(f.gaugeOf)
     if (g !== undefined && f.lorentz === 'field-strength') out.gaugeOf = g
   }
+  const mass = massToTheory(f.mass)
+  if (mass) out.mass = mass
   if (f.description !== undefined) out.description = f.description
   return out
 }
@@ -189,7 +204,7 @@ export function issueKey(path: readonly PropertyKey[]): string {
   }
   const depth = path[0] === 'fields' && (path[2] === 'reps' || path[2] === 'charges') ? 4
     : path[0] === 'countingRules' && path[2] === 'weights' ? 4
-      : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' ? 3 : 1
+      : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' || path[0] === 'couplings' ? 3 : 1
   return path.slice(0, depth).map(String).join('.')
 }
 

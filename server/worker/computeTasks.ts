@@ -10,6 +10,7 @@ import { goldstoneTypedFingerprints, type GoldstoneTypedInput } from '../engine/
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { parseTheory } from '../engine/theory/parseTheory'
+import { resolveCouplings } from '../engine/basis/orderZeroCouplings'
 import type { Theory } from '../../shared/schemas/theory'
 import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
 import type { Priorities } from '../engine/basis/classBasis'
@@ -29,6 +30,7 @@ export const COMPUTE_TASKS = {
   qcdRunning: (req: RunningQcdRequest) => qcdRunning(req),
   qedRunning: (req: RunningQedRequest) => qedRunning(req),
   anomalies: (theory: Theory) => anomalyConditions(theory),
+  couplings: (theory: Theory) => resolveCouplings(theory),
   integrateOut: (a: { parent: Theory, fields: string[], scale: Parameters<typeof integrateOut>[2] }) => integrateOut(a.parent, a.fields, a.scale),
   quickCount,
   goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput, texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),

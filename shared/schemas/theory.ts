@@ -7,6 +7,7 @@ import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
 import { GoldstoneFrameSchema, checkGoldstoneFrame, type GoldstoneFrame } from './goldstoneFrame'
 import { GROUP_KINDS, groupKindLabel, isFiniteKind, isLieKind } from './groupKinds'
 import { MAX_REP_DIMENSION, type RepValue, checkRealRepresentation, checkRep, groupNProblem } from './theoryGroups'
+import { CouplingSchema, MassSchema, MAX_COUPLINGS, checkCouplingSymbols, type Coupling } from './couplings'
 
 /**
  * Theory file of Scalewright (JSON, uploaded by users and built by the editor).
@@ -53,6 +54,8 @@ export const FieldSchema = z.object({
   real: z.boolean().optional(),
   flavors: z.number().int().min(1).max(MAX_FLAVORS).optional(),
   gaugeOf: NameSchema.optional(),
+  /** The mass symbol (and value) used when the field is integrated out; see ./couplings.ts. */
+  mass: MassSchema.optional(),
   description: z.string().max(200).optional(),
 })
 
@@ -67,6 +70,8 @@ export const TheorySchema = z
     countingRules: z.array(CountingRuleSchema).optional(),
     heavy: HeavyFrameSchema.optional(),
     goldstone: GoldstoneFrameSchema.optional(),
+    /** Symbols (and values) of kept order-0 operators; see ./couplings.ts. */
+    couplings: z.array(CouplingSchema).max(MAX_COUPLINGS).optional(),
   })
   .superRefine((t, ctx) => checkTheory(t, (path, message) => ctx.addIssue({ code: 'custom', path, message })))
 
@@ -76,7 +81,7 @@ export type TheoryField = z.infer<typeof FieldSchema>
 
 type Report = (path: (string | number)[], message: string) => void
 
-function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame; goldstone?: GoldstoneFrame }, report: Report): void {
+function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryField[]; heavy?: HeavyFrame; goldstone?: GoldstoneFrame; couplings?: Coupling[] }, report: Report): void {
   if (t.heavy !== undefined && t.frame !== 'heavy') report(['heavy'], 'a heavy particle needs the heavy-particle frame; choose that frame, or remove the heavy particle')
   checkGoldstoneFrame(t.frame, t.goldstone, report)
   const groups = new Map<string, TheoryGroup>()
@@ -102,6 +107,9 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
     if (f.real && f.lorentz === 'scalar') checkRealScalar(f, groups, bad)
   })
   if (t.heavy) checkHeavy(t.heavy, groups, names, report)
+  if (t.couplings?.length && t.frame === 'goldstone') report(['couplings'], 'couplings name order-0 operators of the relativistic or heavy-particle frame; remove them, or change the frame')
+  t.fields.forEach((f, i) => { if (f.mass && f.lorentz === 'field-strength') report(['fields', i, 'mass'], 'a gauge field strength has no mass of its own here; remove the mass') })
+  checkCouplingSymbols(t, report)
 }
 
 /** The heavy block names declared groups, couples to a continuous gauge group, and its fields are new names. */

@@ -45,7 +45,13 @@ function childTheory(theory: Theory, removed: Set<string>, scaleText: string): T
     description: theory.description ? `${theory.description}\n${note}`.slice(0, 2000) : note,
     fields: theory.fields.filter(f => !removed.has(f.name)),
     ...(rules ? { countingRules: rules } : {}),
+    ...(theory.couplings ? { couplings: theory.couplings.filter(c => !mentionsRemoved(c.class, removed)) } : {}),
   }
+}
+
+/** A coupling's class names a removed field ("S", "S*", "S^2"): the operator is gone below the threshold. */
+function mentionsRemoved(classText: string, removed: Set<string>): boolean {
+  return classText.trim().split(/\s+/).some(t => removed.has(t.replace(/\^\d+$/, '').replace(/\*$/, '')))
 }
 
 /**

@@ -22,6 +22,7 @@ const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES, budgetMs: n
   qcdRunning: { lane: 'light', budgetMs: 5_000, what: 'This α_s running' },
   qedRunning: { lane: 'light', budgetMs: 5_000, what: 'This α running' },
   anomalies: { lane: 'light', budgetMs: 5_000, what: 'The anomaly check of this theory' },
+  couplings: { lane: 'count', budgetMs: 20_000, what: 'Checking the couplings against the order-0 basis' },
   integrateOut: { lane: 'light', budgetMs: 5_000, what: 'Integrating out these fields' },
   quickCount: { lane: 'count', budgetMs: 10_000, what: 'This count (a quick count is for up to 10 s; start a background run instead)' },
   typedFingerprints: { lane: 'count', budgetMs: 20_000, what: 'Placing this typed operator' },

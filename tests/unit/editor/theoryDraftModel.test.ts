@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest'
-import { theoryToDraft, draftToTheory, issueKey, newField } from '../../../composables/theoryDraftModel'
+import { theoryToDraft, draftToTheory, issueKey, newField, newCoupling } from '../../../composables/theoryDraftModel'
 import { newHeavy } from '../../../composables/theoryDraft/heavyBlock'
 import { newGoldstone } from '../../../composables/theoryDraft/goldstoneBlock'
 import { TheorySchema } from '../../../shared/schemas/theory'
@@ -191,5 +191,36 @@ describe('the Goldstone block in the form (common practice: lossless form model)
     d.goldstone!.maxOrder = '6'
     const r = TheorySchema.safeParse(draftToTheory(d).theory)
     expect(r.error!.issues.map((i) => [issueKey(i.path), i.message])).toEqual([['goldstone.N', 'Goldstone frame: N must be from 2 to 12 (or "general") for the chiral coset, but N = 1']])
+  })
+})
+
+// Couplings and mass symbols (shared/schemas/couplings.ts) pass through the form unchanged
+// (common practice: lossless round trip of the file); an empty mass row writes nothing.
+describe('couplings and masses in the draft', () => {
+  const file = {
+    name: 'singlet', frame: 'relativistic', groups: [],
+    fields: [{ name: 'H', lorentz: 'scalar' }, { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M', value: { number: '2', unit: 'TeV' } } }],
+    couplings: [
+      { class: 'S H H*', symbol: 'kappa', value: { number: '1.5', unit: 'TeV' } },
+      { class: 'H H*', operator: 'mass H H*', symbol: 'm2', description: 'the light mass term' },
+    ],
+  }
+
+  it('file → draft → file is the same file, and the schema accepts it', () => {
+    const { theory, issues } = draftToTheory(theoryToDraft(file))
+    expect(issues).toEqual([])
+    expect(theory).toEqual(file)
+    expect(TheorySchema.safeParse(theory).success).toBe(true)
+  })
+
+  it('a new coupling row and an emptied mass leave no trace; a bad value is keyed to its coupling', () => {
+    const draft = theoryToDraft(file)
+    draft.fields[1]!.mass = { symbol: '', number: '', unit: '' }
+    draft.couplings.push({ ...newCoupling(), class: 'H^2 H*^2', symbol: 'lambda', number: 'one' })
+    const { theory } = draftToTheory(draft)
+    expect((theory.fields as { mass?: unknown }[])[1]!.mass).toBeUndefined()
+    const r = TheorySchema.safeParse(theory)
+    expect(r.success).toBe(false)
+    expect(r.error!.issues.map((i) => issueKey(i.path))).toEqual(['couplings.2.value'])
   })
 })

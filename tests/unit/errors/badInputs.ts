@@ -39,6 +39,7 @@ import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningRe
 import { goldstoneCases } from './goldstoneBadInputs'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
+import { resolveCouplings } from '../../../server/engine/basis/orderZeroCouplings'
 
 export interface BadInput { name: string, run: () => unknown, says?: RegExp }
 
@@ -150,6 +151,8 @@ const scaleCases: BadInput[] = [
   { name: 'integrating out half of a Dirac fermion', run: () => integrateOut(preset('qed'), ['eL'], { value: 1, unit: 'TeV' }), says: /eL cannot be integrated out without a partner.*Integrate out eL, eR together/ },
   { name: 'order 0 of a heavy-frame theory as if relativistic', run: () => orderZero(preset('heavy-vexonium')), says: /uses the heavy frame/ },
   { name: 'heavy order 0 of a theory without a heavy particle', run: () => orderZeroHeavy(preset('qed')), says: /has no heavy particle/ },
+  { name: 'a coupling on a class order 0 does not have', run: () => resolveCouplings({ ...phi, couplings: [{ class: 'phi^5', symbol: 'c5' }] }), says: /has no class "phi\^5"/ },
+  { name: 'couplings in the Goldstone frame', run: () => resolveCouplings({ ...preset('umbral-pions'), couplings: [{ class: 'phi^4', symbol: 'c' }] }), says: /relativistic or heavy-particle frame/ },
 ]
 
 const runningCases: BadInput[] = [
