@@ -24,8 +24,8 @@ export interface DraftField extends DraftLabels {
   /** uid of a group of the draft, or "?NAME" for a group name the file names but does not declare. */
   gaugeOf: string
   flavors: string
-  /** The mass symbol (and value) used when the field is integrated out. */
-  mass?: DraftMass
+  /** The mass symbol (and value) used when the field is integrated out; all empty = none. */
+  mass: DraftMass
   description?: string
 }
 export interface DraftWeight { uid: string, block: string, value: string }
@@ -69,7 +69,7 @@ export function newGroup(): DraftGroup {
 }
 
 export function newField(): DraftField {
-  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', mass: { symbol: '', number: '', unit: '' }, reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
 }
 
 export function newCoupling(): DraftCoupling {

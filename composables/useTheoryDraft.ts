@@ -4,7 +4,7 @@ import { describeIssue, inputMessage } from '#shared/schemas/describeZodError'
 import type { TheoryCheckReply } from '#shared/schemas/theoryCheck'
 import {
   type TheoryDraft, type DraftGroup, type DraftField, type DraftRule,
-  emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newUid,
+  emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newCoupling, newUid,
 } from './theoryDraftModel'
 import { newHeavy } from './theoryDraft/heavyBlock'
 import { newGoldstone } from './theoryDraft/goldstoneBlock'
@@ -74,6 +74,8 @@ export function useTheoryDraft(initial?: unknown) {
     removeField: (i: number) => draft.value.fields.splice(i, 1),
     moveField: (i: number, delta: number) => move<DraftField>(draft.value.fields, i, delta),
     addRule: () => draft.value.countingRules.push(newRule()),
+    addCoupling: () => draft.value.couplings.push(newCoupling()),
+    removeCoupling: (i: number) => draft.value.couplings.splice(i, 1),
     removeRule: (i: number) => draft.value.countingRules.splice(i, 1),
     moveRule: (i: number, delta: number) => move<DraftRule>(draft.value.countingRules, i, delta),
     addWeight: (r: number) => draft.value.countingRules[r]!.weights.push({ uid: newUid('w'), block: '', value: '' }),

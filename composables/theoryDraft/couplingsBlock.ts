@@ -33,8 +33,8 @@ export function massToDraft(m: unknown): DraftMass | undefined {
 }
 
 /** A mass with no symbol typed is left out (the form's empty row). */
-export function massToTheory(m: DraftMass | undefined): Record<string, unknown> | undefined {
-  if (!m || (!m.symbol.trim() && !m.number.trim())) return undefined
+export function massToTheory(m: DraftMass): Record<string, unknown> | undefined {
+  if (!m.symbol.trim() && !m.number.trim() && !m.unit.trim()) return undefined
   const value = valueToTheory(m)
   return { symbol: m.symbol.trim(), ...(value ? { value } : {}) }
 }

@@ -78,3 +78,26 @@ describe('POST /api/theory-check', () => {
     expect(messageOf(res)).toBe('Sign in to continue')
   })
 })
+
+// Couplings name kept order-0 operators (shared/schemas/couplings.ts); the check resolves them
+// against the order-0 basis and refuses one the basis does not have, naming it.
+describe('POST /api/theory-check with couplings', () => {
+  const toy = {
+    name: 'singlet', frame: 'relativistic', groups: [],
+    fields: [{ name: 'H', lorentz: 'scalar' }, { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M' } }],
+    couplings: [{ class: 'S H H*', symbol: 'kappa' }],
+  }
+
+  it('couplings on kept operators pass', async () => {
+    const res = await client.post('/api/theory-check', { theory: toy })
+    expect(res.status, JSON.stringify(res.body)).toBe(200)
+  })
+
+  it('a coupling on an operator the basis does not have is refused with 422 naming it, and writes nothing', async () => {
+    const before = await rowCounts()
+    const res = await client.post('/api/theory-check', { theory: { ...toy, couplings: [{ class: 'H H*', operator: 'mass S S', symbol: 'm2' }] } })
+    expect(res.status).toBe(422)
+    expect(messageOf(res)).toBe('Coupling "m2": "mass S S" is not an operator of this class; the class "H H*" keeps mass H H*')
+    expect(await rowCounts()).toEqual(before)
+  })
+})
