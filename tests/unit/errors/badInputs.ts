@@ -40,6 +40,7 @@ import { goldstoneCases } from './goldstoneBadInputs'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 import { resolveCouplings } from '../../../server/engine/basis/orderZeroCouplings'
+import { matchHeavyScalar } from '../../../server/engine/matching/treeScalarExchange'
 
 export interface BadInput { name: string, run: () => unknown, says?: RegExp }
 
@@ -152,6 +153,7 @@ const scaleCases: BadInput[] = [
   { name: 'order 0 of a heavy-frame theory as if relativistic', run: () => orderZero(preset('heavy-vexonium')), says: /uses the heavy frame/ },
   { name: 'heavy order 0 of a theory without a heavy particle', run: () => orderZeroHeavy(preset('qed')), says: /has no heavy particle/ },
   { name: 'a coupling on a class order 0 does not have', run: () => resolveCouplings({ ...phi, couplings: [{ class: 'phi^5', symbol: 'c5' }] }), says: /has no class "phi\^5"/ },
+  { name: 'matching a field that is not a heavy real scalar', run: () => matchHeavyScalar(preset('scalar-qed'), 'phi'), says: /"phi" is not a real scalar singlet/ },
   { name: 'couplings in the Goldstone frame', run: () => resolveCouplings({ ...preset('umbral-pions'), couplings: [{ class: 'phi^4', symbol: 'c' }] }), says: /relativistic or heavy-particle frame/ },
 ]
 
