@@ -27,6 +27,7 @@ import { expressIn, type Fingerprint } from '../board/fingerprints'
 import { readClassKey } from '../theory/classKey'
 import { toString as ratText, rat, type Rational } from '../exact/rational'
 import type { Species } from '../theory/model'
+import { childTheory } from '../scales/integrateOut'
 
 /** One cubic coupling c·S·a·b with its light legs (species labels) and the factor A_O/c. */
 interface Vertex { symbol: string, light: string[], factor: number }
@@ -34,11 +35,14 @@ interface Vertex { symbol: string, light: string[], factor: number }
 export interface OrderZeroShift {
   classKey: string
   operator: string
+  latex: string
   /** nerdamer-parsable: the change of the coefficient (not the new total). */
   coefficient: string
 }
 
 export interface ScalarMatchResult {
+  /** The light theory below the heavy field's mass (its couplings kept, those of S dropped). */
+  child: Theory
   shifts: OrderZeroShift[]
   assumptions: string
   /** What this version does not compute, in words (never silently omitted). */
@@ -52,7 +56,7 @@ const NOT_COMPUTED = [
 
 export const SCALAR_MATCH_ASSUMPTIONS = 'Tree level only. L contains +c·O with O exactly as printed, and −½M²S² for the heavy real scalar S. '
   + 'Coefficients are changes of the order-0 couplings, not new totals. Operators without a coupling symbol are taken as absent. '
-  + 'This version computes order 0 (the quartic shifts) from one S exchange between cubic couplings S·a·b; higher dimensions are not computed.'
+  + 'This version computes order 0 (the quartic shifts) from one S exchange between cubic couplings S·a·b of light scalars that are singlets of every SU(n) (U(1) and Z_n charges allowed); other couplings and higher dimensions are listed as not computed.'
 
 const factorial = (n: number): number => (n <= 1 ? 1 : n * factorial(n - 1))
 
@@ -75,7 +79,9 @@ function verticesOf(couplings: ResolvedCoupling[], heavy: string, species: Map<s
     if (s === 0 || s === legs) continue
     if (legs === 2) throw new EngineInputError('matchHeavyScalar', `Coupling "${c.symbol}" mixes ${heavy} with a light field; diagonalise the masses first (this version needs no mass mixing)`)
     const light = blocks.filter((b) => b.label !== heavy).flatMap((b) => Array<string>(b.power).fill(b.label))
-    if (legs !== 3 || s !== 1 || derivatives > 0 || light.some((l) => species.get(l)?.lorentz !== 'S')) {
+    // SU(n)-charged light legs need the exchange's gauge contraction written out: not in this version.
+    const charged = light.some((l) => Object.values(species.get(l)?.reps ?? {}).some((labels) => labels.some((a) => a !== 0)))
+    if (legs !== 3 || s !== 1 || derivatives > 0 || charged || light.some((l) => species.get(l)?.lorentz !== 'S')) {
       skipped.push(`the operators generated through coupling "${c.symbol}" (${c.classKey}): not computed at tree level by this version`)
       continue
     }
@@ -114,7 +120,8 @@ function termText(r: Rational, mono: string): string {
  */
 export function matchHeavyScalar(theory: Theory, heavy: string): ScalarMatchResult {
   const mass = heavyScalar(theory, heavy)
-  const child: Theory = { ...theory, fields: theory.fields.filter((f) => f.name !== heavy), couplings: [] }
+  const value = theory.fields.find((f) => f.name === heavy)!.mass!.value
+  const child = childTheory(theory, new Set([heavy]), value ? `${mass} = ${value.number.trim()} ${value.unit ?? ''}`.trim() : mass)
   const particles = basisSpecies(child)
   const species = new Map(particles.map((p) => [p.label, p]))
   const notComputed = [...NOT_COMPUTED]
@@ -134,7 +141,7 @@ export function matchHeavyScalar(theory: Theory, heavy: string): ScalarMatchResu
       if (!solved) throw new EngineConsistencyError('matchHeavyScalar', `the exchange amplitude of class ${cls.key} is outside the span of its kept operators`)
       solved.coefficients.forEach((r, k) => { if (r.num !== 0n) terms[k]!.push(termText(r, monomial(v1, v2, mass))) })
     }))
-    cls.operators.forEach((op, k) => { if (terms[k]!.length) shifts.push({ classKey: cls.key, operator: op.text, coefficient: terms[k]!.join(' + ') }) })
+    cls.operators.forEach((op, k) => { if (terms[k]!.length) shifts.push({ classKey: cls.key, operator: op.text, latex: op.latex, coefficient: terms[k]!.join(' + ') }) })
   }
-  return { shifts, assumptions: SCALAR_MATCH_ASSUMPTIONS, notComputed }
+  return { child, shifts, assumptions: SCALAR_MATCH_ASSUMPTIONS, notComputed }
 }

@@ -32,7 +32,8 @@ function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[
   })
 }
 
-function childTheory(theory: Theory, removed: Set<string>, scaleText: string): Theory {
+/** The theory below the threshold: the removed fields, their couplings and counting-rule blocks gone. */
+export function childTheory(theory: Theory, removed: Set<string>, scaleText: string): Theory {
   const dropBlock = (k: string) => removed.has(k.replace(/\*$/, ''))
   const rules = theory.countingRules?.map(r => (r.weights
     ? { ...r, weights: Object.fromEntries(Object.entries(r.weights).filter(([k]) => !dropBlock(k))) }

@@ -56,4 +56,17 @@ describe('tree-level matching of a heavy real scalar, order 0', () => {
     expect(() => matchHeavyScalar(noMass, 'S')).toThrow(/"S" has no mass symbol/)
     expect(() => matchHeavyScalar(theory([{ class: 'phi S', symbol: 'm' }]), 'S')).toThrow(/Coupling "m" mixes S with a light field/)
   })
+
+  // The gauge contraction of an SU(2) doublet pair at the vertex is not written out by this
+  // version: the coupling is listed, and no shift is given for it (never a silent guess).
+  it('a coupling to an SU(2) doublet is listed as not computed', () => {
+    const t = TheorySchema.parse({
+      name: 'doublet', frame: 'relativistic', groups: [{ name: 'weak', type: 'SU', n: 2, gauge: true }],
+      fields: [{ name: 'H', lorentz: 'scalar', reps: { weak: [1] } }, { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M' } }],
+      couplings: [{ class: 'S H H*', symbol: 'k' }],
+    })
+    const r = matchHeavyScalar(t, 'S')
+    expect(r.shifts).toEqual([])
+    expect(r.notComputed.filter((n) => /^the operators generated through coupling "k" \(.+\): not computed at tree level by this version$/.test(n))).toHaveLength(1)
+  })
 })
