@@ -28,6 +28,7 @@ import { readClassKey } from '../theory/classKey'
 import { toString as ratText, rat, type Rational } from '../exact/rational'
 import type { Species } from '../theory/model'
 import { childTheory } from '../scales/integrateOut'
+import { isTrivialRep } from '../group/representation'
 
 /** One cubic coupling c·S·a·b with its light legs (species labels) and the factor A_O/c. */
 interface Vertex { symbol: string, light: string[], factor: number }
@@ -63,7 +64,7 @@ const factorial = (n: number): number => (n <= 1 ? 1 : n * factorial(n - 1))
 function heavyScalar(theory: Theory, name: string) {
   const f = theory.fields.find((x) => x.name === name)
   if (!f) throw new EngineInputError('matchHeavyScalar', `Theory "${theory.name}" has no field "${name}"; choose a field of its roster`)
-  const charged = Object.values(f.reps ?? {}).some((l) => l.some((a) => a !== 0))
+  const charged = theory.groups.some((g) => g.type !== 'U1' && g.type !== 'Z' && !isTrivialRep(g.type, f.reps?.[g.name]))
   if (f.lorentz !== 'scalar' || !f.real || charged) throw new EngineInputError('matchHeavyScalar', `"${name}" is not a real scalar singlet; this version matches a heavy real singlet scalar only`)
   if (!f.mass) throw new EngineInputError('matchHeavyScalar', `"${name}" has no mass symbol; give it one in the theory (fields → mass → symbol, e.g. "M")`)
   return f.mass.symbol
