@@ -17,6 +17,7 @@ import { identicalLegPermutations, type LegPermutation } from './symmetry'
 import { formatLorentz } from './inputSyntax'
 import { writtenTerms } from './writtenOperator'
 import { combinationText } from './combinationText'
+import { looksPrinted, notationColumnTerms } from '../notation/written'
 import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
@@ -109,12 +110,13 @@ function derivativeScore(c: Candidate, legs: Species[], preferred: Set<string>):
   return c.lorentz.derivs.reduce((s, d, i) => s + (preferred.has(legs[i]!.label) ? 0 : d), 0)
 }
 
-function buildColumns(particles: Species[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
+function buildColumns(theory: Theory, particles: Species[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
   const pref = new Set(pr?.derivativesOn ?? [])
   const keptTexts = pr?.keep?.[cls.key] ?? []
   const primes = PrimeSet.working()
   const kept: Column[] = keptTexts.map((text) => {
-    // A kept text may be a Hermitian or parity combination as an earlier basis wrote it.
+    // A kept text may be a Hermitian or parity combination as an earlier basis wrote it, or printed notation.
+    if (looksPrinted(text)) return { text, source: 'kept', terms: notationColumnTerms(theory, cls, text) }
     const terms = writtenTerms(particles, cls, text, gauge)
     return { text, source: 'kept', terms: terms.map((t) => ({ coeff: primes.image(t.coeff), lorentz: t.lorentz, gauge: t.gauge })) }
   })
@@ -168,7 +170,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
   const { candidates, gauge } = classCandidates(theory, cls)
   const perms = identicalLegPermutations(cls.legs)
-  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(particles, cls, candidates, gauge, opts.priorities)
+  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(theory, particles, cls, candidates, gauge, opts.priorities)
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
   const hermCols = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
   const selfParity = opts.priorities?.preferParity !== false && parityImage(particles, cls).image?.key === cls.key

@@ -1,5 +1,6 @@
 /**
- * The fingerprint of an operator a user types (in the input syntax of basis/inputSyntax.ts)
+ * The fingerprint of an operator a user types (in the input syntax of basis/inputSyntax.ts, or
+ * printed as in papers, notation/)
  * at the same sample points as the stored operators of its class, so that the board can
  * rewrite it onto whatever the group currently keeps.
  */
@@ -9,6 +10,7 @@ import { writtenTerms } from '../basis/writtenOperator'
 import { basisSpecies } from '../basis/species'
 import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
+import { looksPrinted, notationValues } from '../notation/written'
 
 /**
  * The fingerprints of several operators of one class (typed ones, or kept operators by their
@@ -19,10 +21,15 @@ import type { Fingerprint } from './fingerprints'
  * candidate (amplitude–operator correspondence; Shadmi & Weiss, JHEP 02 (2019) 165).
  * `priorities` must be the run's own: they fix how many sample points the class uses.
  */
-export function typedFingerprints(theory: Theory, classKey: string, texts: readonly string[], priorities?: Priorities): Fingerprint[] {
+export function typedFingerprints(theory: Theory, classKey: string, texts: readonly string[], priorities?: Priorities): (Fingerprint & { timesI?: boolean })[] {
   const b = classBasis(theory, classKey, { priorities })
   const particles = basisSpecies(theory)
   return texts.map((text) => {
+    if (looksPrinted(text)) {
+      // Printed notation (notation/): its amplitude at the same points; a factor i is reported apart.
+      const { values, timesI } = notationValues(theory, b, text)
+      return { primes: b.primes.map((pd) => pd.F.p), values, ...(timesI ? { timesI } : {}) }
+    }
     // Input syntax, or a Hermitian / parity combination as the board writes it.
     const terms = writtenTerms(particles, b.class, text, b.gaugeStructures)
     return {

@@ -16,7 +16,7 @@ import { classBasis, type ClassBasis } from '../basis/classBasis'
 import { conjugateClass, parseClassKey } from '../basis/classKey'
 import { basisSpecies } from '../basis/species'
 import { rewriteOperator } from '../basis/rewrite'
-import { neg, toString as ratString, ZERO, type Rational } from '../exact/rational'
+import { neg, toString as ratString, ONE, ZERO, type Rational } from '../exact/rational'
 import type { ParsedOperator } from './ast'
 import { parseNotation, parseOptions } from './parse'
 import { lowerOperator } from './lower'
@@ -85,50 +85,77 @@ function coordinates(theory: Theory, bases: ClassBasis[], op: ParsedOperator): {
   return { values, timesI }
 }
 
+/** The expensive half of a check: every listed operator (and its conjugate) in the kept operators. */
+export interface ListCoordinates {
+  columns: Column[]
+  classes: { key: string; rank: number }[]
+  entries: { line: string; own: Rational[]; conj: Rational[]; hermitian: boolean; timesI: boolean }[]
+}
+
 /**
- * Check a list of printed operators against the basis of one dimension.
- * @example checkOperatorList(smeft, 6, warsawTable).complete // true
+ * Lower and rewrite every listed operator (one per entry; blank lines and lines starting
+ * with % or # are skipped).
  * Throws EngineInputError for an operator that cannot be read (naming it and the position).
  */
-export function checkOperatorList(theory: Theory, dimension: number, texts: string[], opts: CheckOptions = {}): CheckReport {
+export function listCoordinates(theory: Theory, dimension: number, texts: string[], opts: CheckOptions = {}): ListCoordinates {
   const lines = texts.map((t) => t.trim()).filter((t) => t !== '' && !t.startsWith('%') && !t.startsWith('#'))
   if (lines.length === 0) throw new EngineInputError('checkBasis', 'The list is empty; give one operator per line')
   const model = buildTheoryModel(theory)
   const bases = orderBases(theory, dimension, opts.signal)
   const columns: Column[] = bases.flatMap((b) => b.kept.map((k) => ({ cls: b.key, operator: k.text })))
-  const span = new RationalSpan(columns.length)
-  const rowNames: string[] = []
-  const report: CheckReport = { complete: false, independent: true, rank: 0, required: columns.length, missing: [], redundant: [], translation: [], classes: [] }
-  const rows: Rational[][] = []
-  for (const line of lines) {
+  const entries = lines.map((line) => {
     if (opts.signal?.aborted) throw new EngineCancelledError('basis check')
     const op = parseNotation(line, parseOptions(model, opts.aliases))
     const own = coordinates(theory, bases, op)
     if (own.timesI === null) throw new EngineInputError('checkBasis', `"${line}" has no part in any class of dimension ${dimension}; check its fields and derivatives`)
     const conj = coordinates(theory, bases, conjugateOperator(op))
     const pair = new RationalSpan(columns.length); pair.add(own.values)
-    const hermitian = pair.add(conj.values) !== null
-    report.translation.push({ operator: line, timesI: own.timesI, hermitian, terms: own.values.map((c, j) => ({ class: columns[j]!.cls, operator: columns[j]!.operator, coefficient: ratString(c) })).filter((t) => t.coefficient !== '0') })
-    for (const [v, name] of hermitian ? [[own.values, line] as const] : [[own.values, line] as const, [conj.values, `(${line})^†`] as const]) {
+    return { line, own: own.values, conj: conj.values, hermitian: pair.add(conj.values) !== null, timesI: own.timesI }
+  })
+  return { columns, classes: bases.map((b) => ({ key: b.key, rank: b.rank })), entries }
+}
+
+/**
+ * Judge a list from its coordinates (all entries, or those at `keep`).
+ * @example judgeList(listCoordinates(smeft, 6, warsaw)).complete // true
+ */
+export function judgeList(data: ListCoordinates, keep?: number[]): CheckReport {
+  const { columns } = data
+  const entries = keep ? keep.map((i) => data.entries[i]!) : data.entries
+  const span = new RationalSpan(columns.length)
+  const rowNames: string[] = []
+  const rows: Rational[][] = []
+  const report: CheckReport = { complete: false, independent: true, rank: 0, required: columns.length, missing: [], redundant: [], translation: [], classes: [] }
+  for (const e of entries) {
+    report.translation.push({ operator: e.line, timesI: e.timesI, hermitian: e.hermitian, terms: e.own.map((c, j) => ({ class: columns[j]!.cls, operator: columns[j]!.operator, coefficient: ratString(c) })).filter((t) => t.coefficient !== '0') })
+    const own: [Rational[], string][] = e.hermitian ? [[e.own, e.line]] : [[e.own, e.line], [e.conj, `(${e.line})^†`]]
+    for (const [v, name] of own) {
       const rel = span.add(v)
       rowNames.push(name); rows.push(v)
-      if (rel !== null) {
-        report.independent = false
-        report.redundant.push({ operator: name, relation: [...rel].map(([k, c]) => ({ operator: rowNames[k]!, coefficient: ratString(c) })) })
-      }
+      if (rel === null) continue
+      report.independent = false
+      report.redundant.push({ operator: name, relation: [...rel].map(([k, c]) => ({ operator: rowNames[k]!, coefficient: ratString(c) })) })
     }
   }
   report.rank = span.rank
   report.complete = span.rank === columns.length
-  columns.forEach((c, j) => {
-    const unit = columns.map((_, i) => (i === j ? { num: 1n, den: 1n } : ZERO))
-    if (!span.contains(unit) && span.add(unit) === null) report.missing.push({ class: c.cls, operator: c.operator })
-  })
-  report.classes = bases.map((b) => {
-    const idx = columns.map((c, j) => (c.cls === b.key ? j : -1)).filter((j) => j >= 0)
+  report.classes = data.classes.map((c) => {
+    const idx = columns.map((col, j) => (col.cls === c.key ? j : -1)).filter((j) => j >= 0)
     const s = new RationalSpan(idx.length)
     for (const r of rows) s.add(idx.map((j) => r[j]!))
-    return { key: b.key, required: b.rank, rank: s.rank }
+    return { key: c.key, required: c.rank, rank: s.rank }
+  })
+  columns.forEach((c, j) => {
+    const unit = columns.map((_, i) => (i === j ? ONE : ZERO))
+    if (span.add(unit) === null) report.missing.push({ class: c.cls, operator: c.operator })
   })
   return report
+}
+
+/**
+ * Check a list of printed operators against the basis of one dimension.
+ * @example checkOperatorList(smeft, 6, warsawTable).complete // true
+ */
+export function checkOperatorList(theory: Theory, dimension: number, texts: string[], opts: CheckOptions = {}): CheckReport {
+  return judgeList(listCoordinates(theory, dimension, texts, opts))
 }

@@ -11,7 +11,7 @@ import { lowerOperator } from './lower'
 import type { ParsedOperator } from './ast'
 
 export { parseNotation, parseOptions } from './parse'
-export { checkOperatorList, type CheckReport } from './checkList'
+export { checkOperatorList, listCoordinates, judgeList, type CheckReport, type ListCoordinates } from './checkList'
 export { lowerOperator } from './lower'
 
 /** A typed operator ready for the rewrite: its amplitude, and whether it is i times that. */

@@ -27,5 +27,6 @@ export default defineApiHandler(async (event) => {
   if (!combo) return { rewrite: null, message: 'Not a combination of the kept operators: the kept set does not cover it (coverage incomplete)' }
   const terms = combo.coefficients.map((c, i) => ({ c, k: kept[i]! })).filter(({ c }) => !isZero(c))
     .map(({ c, k }) => ({ operatorId: k.id, latex: k.latex, coefficient: ratString(c) }))
-  return { rewrite: { vanishes: terms.length === 0, terms } }
+  // timesI: the typed operator's amplitude is i times the combination (a dual, σ^{μν} or an explicit i).
+  return { rewrite: { vanishes: terms.length === 0, terms, timesI: (prints.typed as { timesI?: boolean }).timesI === true } }
 })
