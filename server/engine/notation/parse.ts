@@ -36,6 +36,7 @@ class Parser {
   private sign = 1
   private pendingDerivs: { idx: Index }[] = []
   constructor(readonly text: string, readonly opts: ParseOptions) {
+    this.opts = { ...opts, aliases: normaliseAliases(opts.aliases) }
     this.toks = splitWords(tokenize(text), (w) => this.resolve(w) !== null)
   }
 
@@ -310,6 +311,18 @@ class Parser {
   run(): ParsedOperator {
     return expandBoth(expandBox(this.parseSum()))
   }
+}
+
+/** Alias names as the tokenizer reads them ("\\varphi", "varphi" and "φ" all become "phi"). */
+function normaliseAliases(aliases?: Record<string, string>): Record<string, string> | undefined {
+  if (!aliases) return undefined
+  const out: Record<string, string> = {}
+  for (const [k, v] of Object.entries(aliases)) {
+    const words = tokenize(k.startsWith('\\') || !/^[A-Za-z]+$/.test(k) ? k : `\\${k}`).filter((t) => t.kind === 'word')
+    out[k] = v
+    if (words.length === 1) out[words[0]!.text] = v
+  }
+  return out
 }
 
 /** Split letter runs ("qbar", "HH", "Imunu") into names the parser knows. */
