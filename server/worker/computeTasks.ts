@@ -11,6 +11,8 @@ import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
 import { parseTheory } from '../engine/theory/parseTheory'
 import { resolveCouplings } from '../engine/basis/orderZeroCouplings'
+import { checkOperatorList } from '../engine/notation/checkList'
+import { translationCsv, translationLatex } from '../engine/notation/exportCheck'
 import type { Theory } from '../../shared/schemas/theory'
 import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
 import type { Priorities } from '../engine/basis/classBasis'
@@ -36,6 +38,10 @@ export const COMPUTE_TASKS = {
   goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput, texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),
   typedFingerprints: (a: { theory: unknown, classKey: string, texts: string[], priorities?: Priorities }) =>
     typedFingerprints(parseTheory(a.theory), a.classKey, a.texts, a.priorities),
+  checkOperatorList: (a: { theory: unknown, dimension: number, texts: string[], aliases?: Record<string, string>, priorities?: Priorities }) => {
+    const report = checkOperatorList(parseTheory(a.theory), a.dimension, a.texts, { aliases: a.aliases, priorities: a.priorities })
+    return { report, csv: translationCsv(report), latex: translationLatex(report) }
+  },
 }
 
 export type ComputeKind = keyof typeof COMPUTE_TASKS

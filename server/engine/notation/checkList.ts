@@ -6,13 +6,14 @@
  * the complex numbers has the dimension of the whole order (= the number of real
  * parameters), independent when every operator adds its own real parameters (one for a
  * Hermitian operator, two for a non-Hermitian one).
- * Assumes: one flavor; the kept basis of each class is the default one (no priorities).
+ * Assumes: one flavor; the kept operators of each class are those the given priorities choose
+ * (the run's, on the board), not later moves on the board.
  */
 import { EngineCancelledError, EngineInputError } from '../errors'
 import type { Theory } from '../../../shared/schemas/theory'
 import { buildTheoryModel } from '../theory/model'
 import { enumerateClasses } from '../counting/classes'
-import { classBasis, type ClassBasis } from '../basis/classBasis'
+import { classBasis, type ClassBasis, type Priorities } from '../basis/classBasis'
 import { conjugateClass, parseClassKey } from '../basis/classKey'
 import { basisSpecies } from '../basis/species'
 import { rewriteOperator } from '../basis/rewrite'
@@ -23,7 +24,7 @@ import { lowerOperator } from './lower'
 import { conjugateItems } from './conjugate'
 import { RationalSpan } from './span'
 
-export interface CheckOptions { aliases?: Record<string, string>; signal?: { aborted: boolean } }
+export interface CheckOptions { aliases?: Record<string, string>; signal?: { aborted: boolean }; priorities?: Priorities }
 
 export interface Coordinate { class: string; operator: string; coefficient: string }
 
@@ -48,7 +49,7 @@ function conjugateOperator(op: ParsedOperator): ParsedOperator {
 }
 
 /** The class bases of one dimension, every class and its conjugate. */
-function orderBases(theory: Theory, dimension: number, signal?: { aborted: boolean }): ClassBasis[] {
+function orderBases(theory: Theory, dimension: number, signal?: { aborted: boolean }, priorities?: Priorities): ClassBasis[] {
   const particles = basisSpecies(theory)
   const model = buildTheoryModel(theory, { nf: 1 })
   const out: ClassBasis[] = []
@@ -60,7 +61,7 @@ function orderBases(theory: Theory, dimension: number, signal?: { aborted: boole
     for (const cls of [parsed, conjugateClass(particles, parsed)]) {
       if (seen.has(cls.key)) continue
       seen.add(cls.key)
-      const b = classBasis(theory, cls, { signal })
+      const b = classBasis(theory, cls, { signal, priorities })
       if (b.rank > 0) out.push(b)
     }
   }
@@ -101,7 +102,7 @@ export function listCoordinates(theory: Theory, dimension: number, texts: string
   const lines = texts.map((t) => t.trim()).filter((t) => t !== '' && !t.startsWith('%') && !t.startsWith('#'))
   if (lines.length === 0) throw new EngineInputError('checkBasis', 'The list is empty; give one operator per line')
   const model = buildTheoryModel(theory)
-  const bases = orderBases(theory, dimension, opts.signal)
+  const bases = orderBases(theory, dimension, opts.signal, opts.priorities)
   const columns: Column[] = bases.flatMap((b) => b.kept.map((k) => ({ cls: b.key, operator: k.text })))
   const entries = lines.map((line) => {
     if (opts.signal?.aborted) throw new EngineCancelledError('basis check')

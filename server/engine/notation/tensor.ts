@@ -61,6 +61,7 @@ export function contractPair(F: PrimeField, a: Tensor, b: Tensor): Tensor {
  */
 export function contractAll(F: PrimeField, tensors: Tensor[]): number {
   const ts = tensors.slice()
+  if (ts.length === 0) return 1 // no index at all: a product of scalars
   while (ts.length > 1) {
     let best: [number, number] = [0, 1]; let bestCost = Infinity
     for (let i = 0; i < ts.length; i++) {

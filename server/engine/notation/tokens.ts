@@ -39,7 +39,9 @@ const SYMBOLS = new Set(['^', '_', '{', '}', '(', ')', '[', ']', '+', '-', '*', 
  * @example tokenize("H^\\dagger H").map(t => t.text) // ["H", "^", "dagger", "H", "end"]
  * Throws EngineInputError at a character no operator uses.
  */
-export function tokenize(text: string): Token[] {
+export function tokenize(typed: string): Token[] {
+  // Decompose accented letters (Ã → A + combining tilde, ē → e + combining macron).
+  const text = typed.normalize('NFD')
   const out: Token[] = []
   let i = 0
   const push = (kind: TokenKind, t: string, pos: number, raw: string): void => { out.push({ kind, text: t, pos, raw }) }

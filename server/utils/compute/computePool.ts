@@ -27,6 +27,8 @@ const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES, budgetMs: n
   quickCount: { lane: 'count', budgetMs: 10_000, what: 'This count (a quick count is for up to 10 s; start a background run instead)' },
   typedFingerprints: { lane: 'count', budgetMs: 20_000, what: 'Placing this typed operator' },
   goldstoneTypedFingerprints: { lane: 'count', budgetMs: 20_000, what: 'Placing this typed operator' },
+  // Rebuilds every class of one order (SMEFT dimension 6: about 20 s on an idle core).
+  checkOperatorList: { lane: 'count', budgetMs: 180_000, what: 'Checking this operator list' },
 }
 
 const cache = new ResultCache(500, 32 * 1024 * 1024)
