@@ -103,6 +103,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     },
   },
   'POST /api/bases/[id]/rewrite': { access: { kind: 'group', min: 'viewer' }, body: 'required', prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/rewrite`, body: { classKey: 'D^2 phi^2 phi*^2', text: '<13>[13]' } }) },
+  'POST /api/bases/[id]/check-list': { access: { kind: 'group', min: 'viewer' }, body: 'required', prepare: async (w) => ({ path: `/api/bases/${(await basisOf(w)).basisId}/check-list`, body: { order: 2, operators: '(\\phi^\\dagger\\phi)^3' } }) },
   'POST /api/operators/[id]/tags': { access: { kind: 'group', min: 'commenter' }, body: 'required', prepare: async (w) => ({ path: `/api/operators/${(await basisOf(w)).operatorIds.photon}/tags`, body: { kind: 'custom', label: `tag ${fresh()}` } }) },
   // Tags, like notes, are deleted by their author (or an owner): the tag is the actor's own when they may write.
   'DELETE /api/tags/[id]': {
