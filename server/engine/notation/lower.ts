@@ -12,7 +12,7 @@
  * one power i^e; terms whose powers differ by an odd number cannot be compared over Q and
  * are refused, and an overall odd power is reported (the amplitude is i times the value).
  */
-import { EngineInputError } from '../errors'
+import { EngineConsistencyError, EngineInputError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
 import type { Species, TheoryModel } from '../theory/model'
 import type { OperatorClass } from '../basis/classKey'
@@ -162,7 +162,7 @@ function fieldTensors(F: PrimeField, model: TheoryModel, f: FieldObject, s: Spec
 
 function gaugeTensors(F: PrimeField, model: TheoryModel, g: string, wave: SuWave, label: string, tilde: boolean): Tensor[] {
   const n = model.su.find((x) => x.name === g)!.n
-  if (wave === null) throw new EngineInputError('readOperator', `internal: no ${g} wave-function for a charged field`)
+  if (wave === null) throw new EngineConsistencyError('lowerOperator', `no ${g} wave-function for a charged leg`)
   if (Array.isArray(wave[0])) return [build([label], [n * n], ([a]) => (wave as number[][])[Math.floor(a! / n)]![a! % n]!)]
   if (!tilde) return [build([label], [n], ([a]) => (wave as number[])[a!]!)]
   const inner = `${label}~t`

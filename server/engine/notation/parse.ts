@@ -209,7 +209,8 @@ class Parser {
   indexLists(flags?: { dagger?: boolean; transpose?: boolean }): Index[] {
     const out: Index[] = []
     while (this.isSym('^') || this.isSym('_')) {
-      if (this.isSym('^') && this.peek(1).kind === 'number' && !flags) return out
+      // ^2 or ^{2} after a field or a derivative is a power, not an index.
+      if (this.isSym('^') && (this.peek(1).kind === 'number' || (this.isSym('{', 1) && this.peek(2).kind === 'number' && this.isSym('}', 3)))) return out
       const sup = this.next().text === '^'
       const braced = this.isSym('{')
       if (braced) this.next()

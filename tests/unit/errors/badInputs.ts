@@ -37,6 +37,7 @@ import { orderOf, orderOfOperator, resolveRule, blocksFromClassKey } from '../..
 import { alphaQedAtZ, decouplingCoefficients, decouplingFactor, alphaSAboveThreshold, qcdBeta, runAlphaQED, runAlphaS, leptonicShiftOneLoop } from '../../../server/engine/running/index'
 import { gaugeBetaCoefficients, gaugeContentOf, gaugeCouplingsAt, gaugeRunningReport, runGaugeCouplings, simpleGroupFactors, towerGaugeContent } from '../../../server/engine/running/gauge/index'
 import { goldstoneCases } from './goldstoneBadInputs'
+import { notationCases } from './notationBadInputs'
 import { buildScaleLadder, fromMeV, integrateOut, parseDecimal, thresholdShifts, toMeV } from '../../../server/engine/scales/index'
 import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZero'
 import { resolveCouplings } from '../../../server/engine/basis/orderZeroCouplings'
@@ -233,4 +234,4 @@ const groupCases: BadInput[] = [
   { name: 'a real SU(2) irrep with an odd middle label', run: () => mixedTensorShape(2, [1]) },
 ]
 
-export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...libraryCases, ...groupCases]
+export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...notationCases, ...libraryCases, ...groupCases]
