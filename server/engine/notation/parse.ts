@@ -13,14 +13,14 @@
  *   postfix := ^\dagger | ^* | ^T | ^{indices} | _{indices} | combining bar or tilde
  */
 import { EngineInputError } from '../errors'
-import { mul, neg, rat, type Rational } from '../exact/rational'
+import { neg, rat, type Rational } from '../exact/rational'
 import { tokenize, type Token } from './tokens'
+import { KEYWORDS, normaliseAliases, splitIndexWord, splitWords } from './words'
+import { expandBox, expandBoth, markTransposed } from './expand'
 import type { TheoryModel } from '../theory/model'
 import type { FieldItem, Index, Item, MatrixItem, ParsedOperator, Term } from './ast'
 import { conjugateItems } from './conjugate'
 
-const GREEK_INDEX = new Set(['mu', 'nu', 'rho', 'sigma', 'lambda', 'kappa', 'alpha', 'beta', 'gamma', 'delta', 'eta', 'xi', 'omega', 'zeta', 'theta'])
-const KEYWORDS = ['D', 'partial', 'gamma', 'sigma', 'tau', 'lambda', 'T', 'epsilon', 'delta', 'f', 'd', 'P', 'PL', 'PR', 'C', 'i', 'bar', 'dagger', 'tilde', 'Dboth', 'Box', 'square', 'langle', 'rangle', 'frac', 'tr', 'Tr', 'h', 'c', 'sqrt']
 
 export interface ParseOptions {
   /** Field names of the theory. */
@@ -314,122 +314,6 @@ class Parser {
   }
 }
 
-/** Alias names as the tokenizer reads them ("\\varphi", "varphi" and "φ" all become "phi"). */
-function normaliseAliases(aliases?: Record<string, string>): Record<string, string> | undefined {
-  if (!aliases) return undefined
-  const out: Record<string, string> = {}
-  for (const [k, v] of Object.entries(aliases)) {
-    const words = tokenize(k.startsWith('\\') || !/^[A-Za-z]+$/.test(k) ? k : `\\${k}`).filter((t) => t.kind === 'word')
-    out[k] = v
-    if (words.length === 1) out[words[0]!.text] = v
-  }
-  return out
-}
-
-/** Split letter runs ("qbar", "HH", "Imunu") into names the parser knows. */
-function splitWords(toks: Token[], isField: (w: string) => boolean): Token[] {
-  const out: Token[] = []
-  for (const t of toks) {
-    if (t.kind !== 'word' || isField(t.text) || KEYWORDS.includes(t.text) || GREEK_INDEX.has(t.text) || t.text.startsWith('post-') || t.text.length === 1) { out.push(t); continue }
-    let rest = t.text; let pos = t.pos
-    const parts: Token[] = []
-    while (rest.length > 0) {
-      let len = rest.length
-      while (len > 1 && !(isField(rest.slice(0, len)) || KEYWORDS.includes(rest.slice(0, len)) || GREEK_INDEX.has(rest.slice(0, len)))) len--
-      parts.push({ kind: 'word', text: rest.slice(0, len), pos, raw: rest.slice(0, len) })
-      rest = rest.slice(len); pos += len
-    }
-    out.push(...parts)
-  }
-  return out
-}
-
-function splitIndexWord(w: string): string[] {
-  if (GREEK_INDEX.has(w) || w.length === 1) return [w]
-  const out: string[] = []
-  let rest = w
-  while (rest.length > 0) {
-    const g = [...GREEK_INDEX].find((x) => rest.startsWith(x))
-    const take = g ?? rest[0]!
-    out.push(take); rest = rest.slice(take.length)
-  }
-  return out
-}
-
-/**
- * Expand two-sided derivatives: A D↔_μ B = A (D_μ B) − (D_μ A) B, with a generator written
- * on it (D↔^I) standing between the fields. Marked while parsing by a derivative item.
- */
-/** □(f_1 … f_n) = Σ_i (□f_i) Π_{j≠i} f_j + 2 Σ_{i<j} (D_μ f_i)(D^μ f_j) …, the product rule. */
-function expandBox(op: ParsedOperator): ParsedOperator {
-  const out: Term[] = []
-  const queue = op.terms.slice()
-  while (queue.length > 0) {
-    const t = queue.shift()!
-    if (!findBoth(t.items, 'Box')) { out.push(t); continue }
-    const { list, i } = findBoth(t.items, 'Box')!
-    const group = list[i + 1]
-    const n = group?.kind === 'group' ? group.items.filter((x) => x.kind === 'field').length : 0
-    for (let a = 0; a < n; a++) {
-      for (let b = a; b < n; b++) {
-        const copy = structuredClone(t)
-        const at = findBoth(copy.items, 'Box')!
-        const fields = (at.list[at.i + 1] as { items: Item[] }).items.filter((x): x is FieldItem => x.kind === 'field')
-        const name = `\u0001box${list[i]!.pos}`
-        fields[a]!.derivs.push({ name, pos: list[i]!.pos }); fields[b]!.derivs.push({ name, pos: list[i]!.pos })
-        at.list.splice(at.i, 1)
-        queue.push(a === b ? copy : { ...copy, coeff: mul(copy.coeff, rat(2)) })
-      }
-    }
-  }
-  return { ...op, terms: out }
-}
-
-function expandBoth(op: ParsedOperator): ParsedOperator {
-  const out: Term[] = []
-  const queue = op.terms.slice()
-  while (queue.length > 0) {
-    const t = queue.shift()!
-    const at = findBoth(t.items)
-    if (!at) { out.push(t); continue }
-    for (const side of [1, -1] as const) {
-      const copy = structuredClone(t)
-      const { list, i } = findBoth(copy.items)!
-      const marker = list[i] as MatrixItem
-      const field = neighbour(list, i, side)
-      if (!field) throw new EngineInputError('readOperator', `At position ${marker.pos + 1} of "${op.text}": a two-sided derivative needs a field on each side, e.g. H^\\dagger \\overleftrightarrow{D}_\\mu H`)
-      field.derivs.push(marker.indices[0]!)
-      const gen = marker.indices.slice(1)
-      list.splice(i, 1, ...(gen.length > 0 ? [{ kind: 'matrix', which: 'gen', symbol: 'tau', indices: gen, pos: marker.pos } as MatrixItem] : []))
-      queue.push(side === 1 ? copy : { ...copy, coeff: neg(copy.coeff) })
-    }
-  }
-  return { ...op, terms: out }
-}
-
-/** (…)^T: every field inside is read transposed (only fermions care: they start a chain as a row). */
-function markTransposed(items: Item[]): void {
-  for (const it of items) {
-    if (it.kind === 'field') it.transpose = true
-    if (it.kind === 'group') markTransposed(it.items)
-  }
-}
-
-function findBoth(items: Item[], which: 'Dboth' | 'Box' = 'Dboth'): { list: Item[]; i: number } | null {
-  for (let i = 0; i < items.length; i++) {
-    const it = items[i]!
-    if (it.kind === 'matrix' && it.which === which) return { list: items, i }
-    if (it.kind === 'group') { const f = findBoth(it.items, which); if (f) return f }
-  }
-  return null
-}
-
-function neighbour(list: Item[], i: number, dir: 1 | -1): FieldItem | null {
-  for (let j = i + dir; j >= 0 && j < list.length; j += dir) if (list[j]!.kind === 'field') return list[j] as FieldItem
-  return null
-}
-
-/** Field names of a theory model and the caller's aliases, as the parser takes them. */
 export function parseOptions(model: TheoryModel, aliases?: Record<string, string>): ParseOptions {
   return { fields: [...new Set(model.species.map((s) => s.field))], aliases }
 }
