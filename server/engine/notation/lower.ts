@@ -163,6 +163,7 @@ function fieldTensors(F: PrimeField, model: TheoryModel, f: FieldObject, s: Spec
 function gaugeTensors(F: PrimeField, model: TheoryModel, g: string, wave: SuWave, label: string, tilde: boolean): Tensor[] {
   const n = model.su.find((x) => x.name === g)!.n
   if (wave === null) throw new EngineConsistencyError('lowerOperator', `no ${g} wave-function for a charged leg`)
+  if (!Array.isArray(wave)) throw new EngineInputError('readOperator', `A field of ${g} in a representation other than the fundamental, its conjugate or the adjoint cannot be typed in printed notation yet; type it in the bracket syntax (legs, brackets and {g:K} contractions)`)
   if (Array.isArray(wave[0])) return [build([label], [n * n], ([a]) => (wave as number[][])[Math.floor(a! / n)]![a! % n]!)]
   if (!tilde) return [build([label], [n], ([a]) => (wave as number[])[a!]!)]
   const inner = `${label}~t`
