@@ -26,6 +26,8 @@ export interface DraftField extends DraftLabels {
   flavors: string
   /** The mass symbol (and value) used when the field is integrated out; all empty = none. */
   mass: DraftMass
+  /** How papers print the field (φ, \bar{N}); empty = the plain name. */
+  display: string
   description?: string
 }
 export interface DraftWeight { uid: string, block: string, value: string }
@@ -69,7 +71,7 @@ export function newGroup(): DraftGroup {
 }
 
 export function newField(): DraftField {
-  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', mass: { symbol: '', number: '', unit: '' }, reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', mass: { symbol: '', number: '', unit: '' }, display: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
 }
 
 export function newCoupling(): DraftCoupling {
@@ -112,6 +114,7 @@ function fieldToDraft(f: Record<string, unknown>, byName: Map<string, string>): 
   out.lorentz = LORENTZ_KINDS.find((k) => k === f.lorentz) ?? 'scalar'
   out.real = f.real === true
   out.flavors = text(f.flavors)
+  out.display = text(f.display)
   if (f.gaugeOf !== undefined) out.gaugeOf = byName.get(text(f.gaugeOf)) ?? `?${text(f.gaugeOf)}`
   Object.assign(out, labelsToDraft(f.reps, f.charges, byName))
   const mass = massToDraft(f.mass)
@@ -173,6 +176,7 @@ function fieldToTheory(f: DraftField, i: number, groups: DraftGroup[], names: Ma
   }
   const mass = massToTheory(f.mass)
   if (mass) out.mass = mass
+  if (f.display.trim()) out.display = f.display.trim()
   if (f.description !== undefined) out.description = f.description
   return out
 }

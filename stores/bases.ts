@@ -1,3 +1,4 @@
+import { fieldTexTable } from '~~/server/engine/theory/classKey'
 // The basis on the board: operators in kept / set-aside columns per order, coverage per
 // class, tags and notes. Moves are optimistic: the list changes at once, the server confirms
 // (new version, coverage, rewrite) or the board reloads and says why.
@@ -44,6 +45,8 @@ export const useBasesStore = defineStore('bases', () => {
   // Imposing P or CP (one at a time) keeps only the even real parameters of each class.
   const impose = ref<'' | 'p' | 'cp'>('')
   const readonly = computed(() => !['editor', 'owner'].includes(role.value))
+  // Each field's TeX (display form, else the upright name) for class labels.
+  const fieldTex = computed(() => fieldTexTable(basis.value))
   // Counting-rule view: the orders of every operator under another rule of the theory.
   const rules = ref<{ name: string, kind: string }[]>([])
   const ruleName = ref('')
@@ -142,5 +145,5 @@ export const useBasesStore = defineStore('bases', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, addNote, remove, editNote, matches }
+  return { fieldTex, impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, addNote, remove, editNote, matches }
 })

@@ -10,7 +10,7 @@ export const KEY_WORDS: Record<string, string> = {
   // theory files
   definition: 'theory', theory: 'theory', version: 'version you edited', frame: 'frame', maxOrder: 'maximum order',
   groups: 'symmetries', fields: 'fields', countingRules: 'counting rules', heavy: 'heavy particle',
-  lorentz: 'Lorentz kind', reps: 'representations', charges: 'charges', real: 'real', flavors: 'flavors',
+  lorentz: 'Lorentz kind', reps: 'representations', charges: 'charges', real: 'real', flavors: 'flavors', display: 'display form',
   gaugeOf: 'gauge group of the field strength', type: 'kind', n: 'n', gauge: 'gauge', kind: 'kind',
   weights: 'weights', offset: 'offset', parameter: 'expansion parameter', symbol: 'symbol',
   particle: 'particle field', antiparticle: 'antiparticle field', gaugeGroup: 'gauge group',

@@ -4,6 +4,7 @@ import { CountingRuleSchema } from './countingRules'
 import { describeIssue, type IssueLike } from './describeZodError'
 import { HeavyFrameSchema, type HeavyFrame } from './heavyFrame'
 import { LORENTZ_KINDS, lorentzKindMessage } from './lorentzKind'
+import { displayProblem } from './fieldDisplay'
 import { GoldstoneFrameSchema, checkGoldstoneFrame, type GoldstoneFrame } from './goldstoneFrame'
 import { GROUP_KINDS, groupKindLabel, isFiniteKind, isLieKind } from './groupKinds'
 import { MAX_REP_DIMENSION, type RepValue, checkRealRepresentation, checkRep, groupNProblem } from './theoryGroups'
@@ -57,6 +58,8 @@ export const FieldSchema = z.object({
   /** The mass symbol (and value) used when the field is integrated out; see ./couplings.ts. */
   mass: MassSchema.optional(),
   description: z.string().max(200).optional(),
+  /** How papers print the field (φ, χ_L, \bar{N}); the name stays the plain form. See ./fieldDisplay.ts. */
+  display: z.string().max(200).optional(),
 })
 
 export const TheorySchema = z
@@ -99,6 +102,8 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
     if (names.has(f.name)) bad('name', 'is already the name of another field; give each field its own name')
     if (f.name === 'D') bad('name', RESERVED_D)
     names.add(f.name)
+    const displayIssue = f.display === undefined ? null : displayProblem(f.display)
+    if (displayIssue) bad('display', displayIssue)
     checkReps(f, groups, bad)
     checkCharges(f, groups, bad)
     if (f.lorentz === 'field-strength') checkStrength(f, groups, strengths, bad)

@@ -82,12 +82,12 @@ export function fourComponentLatex(legs: Species[], l: LorentzStructure, gauge: 
   const psi = (i: number, bar: boolean): string => {
     const p = legs[i]!
     const cc = p.conj !== bar // unbarred slot holding a conjugate leg, or barred slot holding a field
-    const core = bar ? (cc ? `\\overline{${p.field}^{c}}` : `\\bar{${p.field}}`) : cc ? `${p.field}^{c}` : p.field
+    const core = bar ? (cc ? `\\overline{${p.tex}^{c}}` : `\\bar{${p.tex}}`) : cc ? `${p.tex}^{c}` : p.tex
     return `{${core}}${idx(i)}`
   }
   const strength = (i: number, lorentzIdx: string): string => {
     const up = gUp[i]!.join('')
-    return `{${legs[i]!.field}}${up ? `^{${up}}{}` : ''}_{${gLow[i]!.join('')}${lorentzIdx}}`
+    return `{${legs[i]!.tex}}${up ? `^{${up}}{}` : ''}_{${gLow[i]!.join('')}${lorentzIdx}}`
   }
   let g = 0
   const parts: string[] = [...epsText]
@@ -97,10 +97,10 @@ export function fourComponentLatex(legs: Species[], l: LorentzStructure, gauge: 
   }
   for (const b of bils) {
     if (b.kind === 'S') parts.push(bilinear(b.a, b.b, ''))
-    else if (b.kind === 'V') { const m = GREEK[g++ % GREEK.length]!; parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), `(D_{${m}}${legs[b.x!]!.conj ? `{${legs[b.x!]!.field}^{\\dagger}}` : legs[b.x!]!.field})${idx(b.x!)}`) }
+    else if (b.kind === 'V') { const m = GREEK[g++ % GREEK.length]!; parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), `(D_{${m}}${legs[b.x!]!.conj ? `{${legs[b.x!]!.tex}^{\\dagger}}` : legs[b.x!]!.tex})${idx(b.x!)}`) }
     else if (b.kind === 'VV') { const m = GREEK[g++ % GREEK.length]!; parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), bilinear(b.c!, b.d!, `\\gamma_{${m}}`)) }
     else { const [m, n] = [GREEK[g++ % GREEK.length]!, GREEK[g++ % GREEK.length]!]; parts.push(bilinear(b.a, b.b, `\\sigma^{${m}${n}}`), strength(b.x!, `${m}${n}`)) }
   }
-  legs.forEach((p, i) => { if (!used.has(i)) parts.push(`${p.conj ? `{${p.field}^{\\dagger}}` : p.field}${idx(i)}`) })
+  legs.forEach((p, i) => { if (!used.has(i)) parts.push(`${p.conj ? `{${p.tex}^{\\dagger}}` : p.tex}${idx(i)}`) })
   return parts.join('\\,')
 }

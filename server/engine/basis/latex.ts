@@ -17,7 +17,7 @@ export function letter(list: string[], i: number): string {
 }
 
 export function fieldSymbol(p: Species): string {
-  const base = p.kind === 'field-strength' ? `{${p.field}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.field
+  const base = p.kind === 'field-strength' ? `{${p.tex}_{${p.label.endsWith('_L') ? 'L' : 'R'}}}` : p.tex
   return p.conj && p.kind !== 'field-strength' ? `{${base}^{\\dagger}}` : base
 }
 
@@ -40,7 +40,26 @@ export function operatorLatex(legs: Species[], l: LorentzStructure, gauge: SuStr
     const core = d ? `(${d}${fieldSymbol(p)})` : fieldSymbol(p)
     return `${core}${sup ? `^{${sup}}` : ''}${sub ? `_{${sub}}` : ''}`
   })
-  return [...epsText, ...factors].join('\\,')
+  return [...epsText, ...asPowers(factors, legs)].join('\\,')
+}
+
+/**
+ * Equal neighbouring factors that carry no index written as one power (φ^5, not φφφφφ); a
+ * factor with an index or a derivative stays apart, since its indices tell the copies apart.
+ * @example asPowers(['\\mathrm{phi}', '\\mathrm{phi}'], legs) // ['\\mathrm{phi}^{2}']
+ */
+function asPowers(factors: string[], legs: Species[]): string[] {
+  const out: string[] = []
+  for (let i = 0; i < factors.length;) {
+    let j = i + 1
+    const bare = factors[i] === fieldSymbol(legs[i]!)
+    while (bare && j < factors.length && factors[j] === factors[i]) j++
+    // A field symbol is one letter, one \mathrm{…} or one braced group: it takes a power as it is.
+    const power = /^[A-Za-z]$|^\\mathrm\{[^{}]*\}$|^\{.*\}$/.test(factors[i]!) ? factors[i]! : `{${factors[i]!}}`
+    out.push(j - i > 1 ? `${power}^{${j - i}}` : factors[i]!)
+    i = j
+  }
+  return out
 }
 
 /**

@@ -29,9 +29,9 @@ export interface OrderZeroTerm {
   note?: string
 }
 
-// Field names as the engine's LaTeX writes them (latex.ts): the name itself, {X^{\dagger}} conjugated.
-const tex = (name: string) => name
-const dagger = (name: string) => `{${name}^{\\dagger}}`
+// Fields as the engine's LaTeX writes them (latex.ts): the species' TeX, {X^{\dagger}} conjugated.
+const tex = (model: TheoryModel, name: string) => model.species.find(s => s.field === name)?.tex ?? name
+const dagger = (model: TheoryModel, name: string) => `{${tex(model, name)}^{\\dagger}}`
 
 function keyFor(model: TheoryModel, labels: string[], derivatives: number): string {
   const counts = model.species.map(() => 0)
@@ -45,12 +45,12 @@ function kineticTerm(model: TheoryModel, f: TheoryField): OrderZeroTerm {
   const base = { dimension: 4, role: 'kinetic' as const, hermitian: true, realParameters: 0, flavorParameters: 0 }
   if (f.lorentz === 'scalar' && f.real) {
     const key = keyFor(model, [f.name, f.name], 2)
-    return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex: `\\tfrac12 (D_\\mu ${tex(f.name)})(D^\\mu ${tex(f.name)})` }
+    return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex: `\\tfrac12 (D_\\mu ${tex(model, f.name)})(D^\\mu ${tex(model, f.name)})` }
   }
   const key = keyFor(model, [f.name, `${f.name}*`], f.lorentz === 'scalar' ? 2 : 1)
   const latex = f.lorentz === 'scalar'
-    ? `(D_\\mu ${tex(f.name)})^\\dagger (D^\\mu ${tex(f.name)})`
-    : `i\\,${dagger(f.name)}\\,${f.lorentz === 'left-weyl' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(f.name)}`
+    ? `(D_\\mu ${tex(model, f.name)})^\\dagger (D^\\mu ${tex(model, f.name)})`
+    : `i\\,${dagger(model, f.name)}\\,${f.lorentz === 'left-weyl' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(model, f.name)}`
   return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex }
 }
 
@@ -62,9 +62,9 @@ function gaugeTerms(model: TheoryModel, f: TheoryField, group: TheoryGroup | und
   const base = { key, conjugateKey, dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
   const abelian = group?.type !== 'SU'
   return [
-    { ...base, role: 'gauge kinetic', text: `kinetic ${f.name}`, latex: `-\\tfrac{1}{4g^2} ${tex(f.name)}${a}_{\\mu\\nu} ${tex(f.name)}^{${a.slice(1)}\\mu\\nu}`, note: 'the coefficient 1/g² is the gauge coupling (fields normalised with g in the field strength)' },
+    { ...base, role: 'gauge kinetic', text: `kinetic ${f.name}`, latex: `-\\tfrac{1}{4g^2} ${tex(model, f.name)}${a}_{\\mu\\nu} ${tex(model, f.name)}^{${a.slice(1)}\\mu\\nu}`, note: 'the coefficient 1/g² is the gauge coupling (fields normalised with g in the field strength)' },
     {
-      ...base, role: 'theta', text: `theta ${f.name}`, latex: `\\tfrac{\\theta}{32\\pi^2} ${tex(f.name)}${a}_{\\mu\\nu} \\tilde ${tex(f.name)}^{${a.slice(1)}\\mu\\nu}`,
+      ...base, role: 'theta', text: `theta ${f.name}`, latex: `\\tfrac{\\theta}{32\\pi^2} ${tex(model, f.name)}${a}_{\\mu\\nu} \\tilde{${tex(model, f.name)}}^{${a.slice(1)}\\mu\\nu}`,
       note: abelian
         ? 'a total derivative kept as a topological term; for an abelian group it has no effect in perturbation theory'
         : 'a total derivative kept as a topological term (instantons); it can be rotated into the fermion mass phases by an anomalous chiral rotation',
@@ -83,8 +83,8 @@ function abelianMixing(model: TheoryModel, strengths: TheoryField[], groups: Map
     const key = keyFor(model, [`${x.name}_L`, `${y.name}_L`], 0)
     const base = { key, conjugateKey: keyFor(model, [`${x.name}_R`, `${y.name}_R`], 0), dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
     return [
-      { ...base, role: 'gauge kinetic', text: `mixing ${x.name} ${y.name}`, latex: `${x.name}_{\\mu\\nu} ${y.name}^{\\mu\\nu}`, note: 'kinetic mixing of two abelian gauge fields' },
-      { ...base, role: 'theta', text: `theta mixing ${x.name} ${y.name}`, latex: `${x.name}_{\\mu\\nu} \\tilde ${y.name}^{\\mu\\nu}`, note: 'a total derivative kept as a topological term; no effect in perturbation theory' },
+      { ...base, role: 'gauge kinetic', text: `mixing ${x.name} ${y.name}`, latex: `${tex(model, x.name)}_{\\mu\\nu} ${tex(model, y.name)}^{\\mu\\nu}`, note: 'kinetic mixing of two abelian gauge fields' },
+      { ...base, role: 'theta', text: `theta mixing ${x.name} ${y.name}`, latex: `${tex(model, x.name)}_{\\mu\\nu} \\tilde{${tex(model, y.name)}}^{\\mu\\nu}`, note: 'a total derivative kept as a topological term; no effect in perturbation theory' },
     ]
   }))
 }
@@ -119,7 +119,7 @@ function massTerm(model: TheoryModel, a: Form, b: Form, bConjugated: boolean): O
     if (!sym && a.n < 2) return null
   }
   const text = `mass ${labels.join(' ')}`
-  const factor = (l: string) => (l.endsWith('*') ? dagger(l.slice(0, -1)) : tex(l))
+  const factor = (l: string) => (l.endsWith('*') ? dagger(model, l.slice(0, -1)) : tex(model, l))
   const latex = `${labels.map(factor).join(' ')}${hermitian ? '' : ' + \\text{h.c.}'}`
   return { key, conjugateKey, dimension, role: 'mass', text, latex, hermitian, realParameters, flavorParameters, ...(note ? { note } : {}) }
 }

@@ -1,5 +1,5 @@
 import type { BoardExport } from './boardExport'
-import { classKeyTex } from '../theory/classKey'
+import { classKeyTex, fieldTexTable } from '../theory/classKey'
 import { latexText } from './latexText'
 
 /** Class keys as math, e.g. "D^2 H^2 H*^2" → "D^{2}\\,H^{2}\\,H^{*2}". */
@@ -36,13 +36,14 @@ export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): stri
 }
 
 function orderTable(data: BoardExport, order: BoardExport['orders'][number], opts: { dirac?: boolean }): string[] {
+  const names = fieldTexTable(data.theory.definition as Parameters<typeof fieldTexTable>[0])
   const kept = order.classes.flatMap((c) => c.operators.filter((o) => o.column === 'kept').map((o) => ({ c, o })))
   if (!kept.length) return []
   const lines = ['\\begin{table}[ht]', '\\centering', '\\begin{tabular}{llcl}', '\\hline', 'class & operator & real par. & tags \\\\', '\\hline']
   for (const { c, o } of kept) {
     const tags = o.tags.map((t) => latexText(t.label ? `${t.kind}: ${t.label}` : t.kind)).join(', ')
     const body = opts.dirac && o.latexDirac ? o.latexDirac : o.latex
-    lines.push(`$${classKeyLatex(c.key)}$ & $${body}$ & ${o.realParameters} & ${tags} \\\\`)
+    lines.push(`$${classKeyLatex(c.key, names)}$ & $${body}$ & ${o.realParameters} & ${tags} \\\\`)
   }
   const lagrangian = order.order === 0 && data.countingRule !== '1/m' ? ' (the renormalizable Lagrangian, mass dimension at most 4)' : ''
   const dimension = order.dimension === null ? lagrangian : ` (mass dimension ${order.dimension})`

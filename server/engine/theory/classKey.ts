@@ -6,6 +6,7 @@
  * single spaces: "D^2 H^2 H*^2", "G_L^3", "Q Q* u u*". Pure: safe to import in the app.
  */
 import { EngineInputError } from '../errors'
+import { fieldTex } from '../../../shared/schemas/fieldDisplay'
 import type { TheoryModel } from './model'
 
 /** One building block of a key: a species label (or "D") and its power. */
@@ -88,13 +89,25 @@ export function countsOfClassKey(model: TheoryModel, key: string): { counts: num
  * conjugation and powers as superscripts; text it cannot read (a heavy-frame key) escaped.
  * @example classKeyTex('D^2 H^2 H*^2') // "D^{2}\\,H^{2}\\,H^{*2}"
  */
-export function classKeyTex(key: string): string {
+export function classKeyTex(key: string, fieldTex: Readonly<Record<string, string>> = {}): string {
   return key.split(' ').map((part) => {
-    const m = /^([A-Za-z][A-Za-z0-9]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
+    const m = /^([A-Za-z][A-Za-z0-9_]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
     if (!m) return part.replace(/([&%$#_{}])/g, '\\$1')
     const [, name, chiral, star, power] = m
     const sub = chiral ? `_{${chiral.slice(1)}}` : ''
     const sup = [star ? '*' : '', power ?? ''].join('')
-    return `${name!.length > 1 ? `\\mathrm{${name}}` : name}${sub}${sup ? `^{${sup}}` : ''}`
+    const whole = chiral ? fieldTex[name! + chiral] : undefined // a field named "chi_L", not a field strength's half
+    const symbol = whole ?? fieldTex[name!] ?? (name!.length > 1 ? `\\mathrm{${name!.replace(/_/g, '\\_')}}` : name!)
+    const atom = /^([A-Za-z]|\\mathrm\{[^{}]*\}|\{.*\})$/.test(symbol) ? symbol : `{${symbol}}`
+    return `${atom}${whole ? '' : sub}${sup ? `^{${sup}}` : ''}`
   }).join('\\,')
+}
+
+/**
+ * Field name → TeX (display form or upright name) for every field of a theory file, for
+ * classKeyTex; a file without fields (or not yet valid) gives an empty table.
+ * @example fieldTexTable({ fields: [{ name: 'phi', display: 'φ' }] }) // { phi: "{\\phi}" }
+ */
+export function fieldTexTable(theory: { fields?: readonly { name: string; display?: string }[] } | null | undefined): Record<string, string> {
+  return Object.fromEntries((theory?.fields ?? []).map((f) => [f.name, fieldTex(f.name, f.display)]))
 }

@@ -15,6 +15,7 @@
  */
 import type { Theory, TheoryField } from '../../../shared/schemas/theory'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
+import { fieldTex } from '../../../shared/schemas/fieldDisplay'
 import { EngineInputError } from '../errors'
 import { neg, parseRational, type Rational, ZERO } from '../exact/rational'
 import { isFiniteKind, isLieKind, type LieKind } from '../../../shared/schemas/groupKinds'
@@ -35,6 +36,8 @@ export interface Species {
   label: string
   /** Name of the theory-file field it comes from, and that field's index. */
   field: string
+  /** The field's TeX as papers print it (its display form, else its name; shared/schemas/fieldDisplay.ts). */
+  tex: string
   fieldIndex: number
   /** True for a conjugate (and for the (0,1) half of a field strength). */
   conj: boolean
@@ -167,7 +170,7 @@ function conjugateCharges(model: TheoryModel, s: SpeciesParts): Charges {
 function makeSpecies(f: TheoryField, fieldIndex: number, flavors: number, s: SpeciesParts, partner: { label: string; index: number }): Species {
   const { angles, squares, dim2 } = IRREP[s.lorentz]
   return {
-    label: s.label, field: f.name, fieldIndex, conj: s.conj, conjugate: partner.label, partner: partner.index,
+    label: s.label, field: f.name, tex: fieldTex(f.name, f.display), fieldIndex, conj: s.conj, conjugate: partner.label, partner: partner.index,
     kind: f.lorentz, lorentz: s.lorentz, angles, squares, helicity2: squares - angles, fermion: s.lorentz === 'L' || s.lorentz === 'R', dim2,
     reps: s.reps, suKind: s.suKind, lie: s.lie, finite: s.finite, u1: s.u1, zn: s.zn, flavors, flavored: f.flavors !== undefined,
   }

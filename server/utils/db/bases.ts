@@ -35,10 +35,13 @@ export async function boardData(basisId: number) {
   const tags = ids.length ? await tagsOfOperators(ids) : []
   const notes = await annotationsOfTheory(basis.theory_id)
   const thresholdTags = await db('threshold_tags').where({ theory_id: basis.theory_id }).select('id', 'term', 'field', 'text', 'details')
+  const frozen = await theoryOfBasis(basisId)
   return {
     basis: {
       id: basis.id, theoryId: basis.theory_id, theoryName: basis.theory_name, theoryVersion: basis.theory_version,
-      countingRule: basis.counting_rule, maxOrder: basis.max_order, classes: basis.classes, note: basis.note, createdAt: basis.created_at,
+      countingRule: basis.counting_rule as string, maxOrder: basis.max_order, classes: basis.classes, note: basis.note as string, createdAt: basis.created_at,
+      // The fields as the basis's theory file wrote them (name and display form), so labels print them as papers do.
+      fields: ((frozen?.fields ?? []) as { name: string, display?: string }[]).map((f) => ({ name: f.name, display: f.display })),
     },
     operators: operators.map(({ structure, ...o }) => ({
       ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1,
