@@ -36,7 +36,7 @@ export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): stri
 }
 
 function orderTable(data: BoardExport, order: BoardExport['orders'][number], opts: { dirac?: boolean }): string[] {
-  const names = fieldTexTable(data.theory.definition as Parameters<typeof fieldTexTable>[0])
+  const names = fieldTexTable(data.theory.definition)
   const kept = order.classes.flatMap((c) => c.operators.filter((o) => o.column === 'kept').map((o) => ({ c, o })))
   if (!kept.length) return []
   const lines = ['\\begin{table}[ht]', '\\centering', '\\begin{tabular}{llcl}', '\\hline', 'class & operator & real par. & tags \\\\', '\\hline']

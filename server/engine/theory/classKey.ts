@@ -108,6 +108,10 @@ export function classKeyTex(key: string, fieldTex: Readonly<Record<string, strin
  * classKeyTex; a file without fields (or not yet valid) gives an empty table.
  * @example fieldTexTable({ fields: [{ name: 'phi', display: 'φ' }] }) // { phi: "{\\phi}" }
  */
-export function fieldTexTable(theory: { fields?: readonly { name: string; display?: string }[] } | null | undefined): Record<string, string> {
-  return Object.fromEntries((theory?.fields ?? []).map((f) => [f.name, fieldTex(f.name, f.display)]))
+export function fieldTexTable(theory: unknown): Record<string, string> {
+  const fields = (theory as { fields?: unknown } | null | undefined)?.fields
+  if (!Array.isArray(fields)) return {}
+  return Object.fromEntries(fields.flatMap((f: { name?: unknown; display?: unknown }) => (typeof f?.name === 'string'
+    ? [[f.name, fieldTex(f.name, typeof f.display === 'string' ? f.display : undefined)]]
+    : [])))
 }
