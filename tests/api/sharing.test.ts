@@ -27,7 +27,7 @@ describe('read-only share links', () => {
     expect(res.body.role).toBe('share')
     const tex = await new ApiClient().get(`/api/share/${token}/export?format=latex`)
     expect(tex.status).toBe(200)
-    expect(String(tex.body)).toContain('\\begin{tabular}')
+    expect(String(tex.body)).toContain('\\begin{longtable}')
   })
 
   it('stores only a hash of the token', async () => {

@@ -26,9 +26,9 @@ describe('exports', () => {
     expect(data.orders[0]!.classes[0]!.operators[0]!.tags).toHaveLength(2)
   })
 
-  it('LaTeX has one table per order with only kept operators, a legend, and escaped text', () => {
+  it('LaTeX has one longtable per order with only kept operators, a legend, and escaped text', () => {
     const tex = toLatex(data)
-    expect(tex.match(/\\begin\{tabular\}/g)).toHaveLength(1)
+    expect(tex.match(/\\begin\{longtable\}/g)).toHaveLength(1)
     expect(tex).toContain('modulo equations of motion and integration by parts')
     expect(tex).toContain('Photons \\& friends')
     expect(tex).not.toContain("F_L^4{}'")
