@@ -1,4 +1,4 @@
-import { fieldTexTable } from '~~/server/engine/theory/classKey'
+import { fieldTexTable } from '#shared/schemas/fieldDisplay'
 // The basis on the board: operators in kept / set-aside columns per order, coverage per
 // class, tags and notes. Moves are optimistic: the list changes at once, the server confirms
 // (new version, coverage, rewrite) or the board reloads and says why.

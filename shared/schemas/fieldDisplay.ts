@@ -75,3 +75,16 @@ export function fieldTex(name: string, display?: string): string {
   const upright = (part: string) => `\\mathrm{${part}}`
   return rest.length ? `{${upright(head!)}_{${rest.map(upright).join('')}}}` : upright(head!)
 }
+
+/**
+ * Field name → TeX (display form or upright name) for every field of a theory file, for
+ * classKeyTex; a file without fields (or not yet valid) gives an empty table.
+ * @example fieldTexTable({ fields: [{ name: 'phi', display: 'φ' }] }) // { phi: "{\\phi}" }
+ */
+export function fieldTexTable(theory: unknown): Record<string, string> {
+  const fields = (theory as { fields?: unknown } | null | undefined)?.fields
+  if (!Array.isArray(fields)) return {}
+  return Object.fromEntries(fields.flatMap((f: { name?: unknown; display?: unknown }) => (typeof f?.name === 'string'
+    ? [[f.name, fieldTex(f.name, typeof f.display === 'string' ? f.display : undefined)]]
+    : [])))
+}

@@ -1,5 +1,6 @@
 import type { BoardExport } from './boardExport'
-import { classKeyTex, fieldTexTable } from '../theory/classKey'
+import { classKeyTex } from '../theory/classKey'
+import { fieldTexTable } from '../../../shared/schemas/fieldDisplay'
 import { latexText } from './latexText'
 import { commentText } from './commentText'
 

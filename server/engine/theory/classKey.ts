@@ -6,7 +6,6 @@
  * single spaces: "D^2 H^2 H*^2", "G_L^3", "Q Q* u u*". Pure: safe to import in the app.
  */
 import { EngineInputError } from '../errors'
-import { fieldTex } from '../../../shared/schemas/fieldDisplay'
 import type { TheoryModel } from './model'
 
 /** One building block of a key: a species label (or "D") and its power. */
@@ -101,17 +100,4 @@ export function classKeyTex(key: string, fieldTex: Readonly<Record<string, strin
     const atom = /^([A-Za-z]|\\mathrm\{[^{}]*\}|\{.*\})$/.test(symbol) ? symbol : `{${symbol}}`
     return `${atom}${whole ? '' : sub}${sup ? `^{${sup}}` : ''}`
   }).join('\\,')
-}
-
-/**
- * Field name → TeX (display form or upright name) for every field of a theory file, for
- * classKeyTex; a file without fields (or not yet valid) gives an empty table.
- * @example fieldTexTable({ fields: [{ name: 'phi', display: 'φ' }] }) // { phi: "{\\phi}" }
- */
-export function fieldTexTable(theory: unknown): Record<string, string> {
-  const fields = (theory as { fields?: unknown } | null | undefined)?.fields
-  if (!Array.isArray(fields)) return {}
-  return Object.fromEntries(fields.flatMap((f: { name?: unknown; display?: unknown }) => (typeof f?.name === 'string'
-    ? [[f.name, fieldTex(f.name, typeof f.display === 'string' ? f.display : undefined)]]
-    : [])))
 }
