@@ -13,9 +13,12 @@ import { parseTheory } from '../engine/theory/parseTheory'
 import { resolveCouplings } from '../engine/basis/orderZeroCouplings'
 import { checkOperatorList } from '../engine/notation/checkList'
 import { translationCsv, translationLatex } from '../engine/notation/exportCheck'
-import type { Theory } from '../../shared/schemas/theory'
-import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
+import { BOARD_TASKS } from './boardTasks'
+import { SCALE_TASKS } from './scaleTasks'
+import { TheorySchema, formatTheoryIssues, type Theory } from '../../shared/schemas/theory'
+import { EngineInputError } from '../engine/errors'
 import type { Priorities } from '../engine/basis/classBasis'
+import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
 
 interface QuickCount { theory: unknown, maxDim: number, nf?: number }
 
@@ -26,6 +29,14 @@ function quickCount({ theory, maxDim, nf }: QuickCount) {
   return countOperators(parsed, { maxDim, nf, flavorPolynomials: true })
 }
 
+/** Integrate fields out of a stored theory file; the theory left below must itself be valid. */
+function integrateOutChecked(a: { parent: unknown, fields: string[], scale: Parameters<typeof integrateOut>[2] }) {
+  const step = integrateOut(parseTheory(a.parent), a.fields, a.scale)
+  const check = TheorySchema.safeParse(step.child)
+  if (!check.success) throw new EngineInputError('integrateOut', `The theory left below the threshold would not be valid:\n${formatTheoryIssues(step.child, check.error.issues)}`)
+  return step
+}
+
 export const COMPUTE_TASKS = {
   ladder: (a: { doc: LadderDocument, frame: string }) => computeLadder(a.doc, a.frame),
   ordersBelowTarget: (a: { doc: LadderDocument, orders: number[], target: number, frame: string }) => ordersBelowTarget(a.doc, a.orders, a.target, a.frame),
@@ -33,7 +44,7 @@ export const COMPUTE_TASKS = {
   qedRunning: (req: RunningQedRequest) => qedRunning(req),
   anomalies: (theory: Theory) => anomalyConditions(theory),
   couplings: (theory: Theory) => resolveCouplings(theory),
-  integrateOut: (a: { parent: Theory, fields: string[], scale: Parameters<typeof integrateOut>[2] }) => integrateOut(a.parent, a.fields, a.scale),
+  integrateOut: integrateOutChecked,
   quickCount,
   goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput, texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),
   typedFingerprints: (a: { theory: unknown, classKey: string, texts: string[], priorities?: Priorities }) =>
@@ -42,6 +53,8 @@ export const COMPUTE_TASKS = {
     const report = checkOperatorList(parseTheory(a.theory), a.dimension, a.texts, { aliases: a.aliases, priorities: a.priorities })
     return { report, csv: translationCsv(report), latex: translationLatex(report) }
   },
+  ...BOARD_TASKS,
+  ...SCALE_TASKS,
 }
 
 export type ComputeKind = keyof typeof COMPUTE_TASKS

@@ -4,7 +4,6 @@ import { pathToFileURL } from 'node:url'
 import { EngineCancelledError } from '../engine/errors'
 import { fromThreadError } from './threadError'
 import type { Priorities } from '../engine/basis/classBasis'
-import type { GaugeReportRequest } from '../engine/running/gauge/report'
 
 /**
  * The thread runs the engine from its TypeScript source through tsx: beside the source when we
@@ -19,7 +18,6 @@ function threadEntry(): URL {
 export type EngineTask =
   | { kind: 'count' | 'basis', theory: unknown, maxDim?: number, maxOrder?: number, nf?: number, priorities?: Priorities }
   | { kind: 'fingerprint', theory: unknown, classKey: string, texts: string[], priorities?: Priorities }
-  | { kind: 'gauge-running', steps: { theory: unknown, thresholdGeV: number | null }[], request: GaugeReportRequest }
 export interface TaskHandle<T> { result: Promise<T>, cancel: () => void }
 
 /**

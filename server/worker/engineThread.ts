@@ -7,8 +7,6 @@ import { orderZeroHeavy } from '../engine/basis/orderZero'
 import { typedFingerprints } from '../engine/board/typedOperator'
 import { enumerateHeavyTheory } from '../engine/heavy/enumerate'
 import { heavyReport } from '../engine/heavy/report'
-import { towerGaugeContent } from '../engine/running/gauge/gaugeContent'
-import { gaugeRunningReport } from '../engine/running/gauge/report'
 import { goldstoneTask } from '../engine/goldstone/task'
 import { parseTheory } from '../engine/theory/parseTheory'
 import type { EngineTask } from './engineTask'
@@ -25,10 +23,6 @@ function onProgress(fraction: number, label: string) {
 }
 
 function run(t: EngineTask): unknown {
-  if (t.kind === 'gauge-running') {
-    const steps = t.steps.map((s) => ({ theory: parseTheory(s.theory), thresholdGeV: s.thresholdGeV }))
-    return gaugeRunningReport(towerGaugeContent(steps), t.request, signal)
-  }
   const theory = parseTheory(t.theory)
   if (theory.frame === 'goldstone') return goldstoneTask(theory, t, { onProgress, signal })
   if (t.kind === 'fingerprint') return typedFingerprints(theory, t.classKey, t.texts, t.priorities)

@@ -1,9 +1,13 @@
 import type { Knex } from 'knex'
 import { useDb } from './connection'
 import { withBoardLock } from './boardLock'
-import { coverageOf, rewriteOnto, type ClassOperator, type Rewrite } from '../../engine/board/keptSet'
+import { compute } from '../compute/computePool'
+import type { ClassOperator, Rewrite } from '../../engine/board/keptSet'
+import type { CoverageMap } from '../../worker/boardTasks'
 
-export type { Rewrite }
+export type { Rewrite, CoverageMap }
+/** Who asks for board math (counted against their limits in the compute pool); a share link asks as `share:<theory id>`. */
+export interface BoardCaller { user: string | number, group: number }
 export interface BoardOperatorRow extends ClassOperator { class_key: string, order: number, position: number, version: number }
 
 const COLUMNS = ['id', 'latex', 'text', 'column', 'fingerprint', 'class_key', 'order', 'position', 'version']
@@ -24,23 +28,22 @@ export async function requiredRank(db: Knex, basisId: number, classKey: string):
   return rows[0]?.rank ?? 0
 }
 
-/** The operator written in terms of the kept operators of its class (a read; see keptSet.ts). */
-export async function rewriteOntoKept(basisId: number, classKey: string, operatorId: number): Promise<Rewrite | null> {
-  return rewriteOnto(await classOperators(useDb(), basisId, classKey), operatorId)
+/** The operator written in terms of the kept operators of its class (a read; see keptSet.ts), computed in the compute pool. */
+export async function rewriteOntoKept(basisId: number, classKey: string, operatorId: number, caller: BoardCaller): Promise<Rewrite | null> {
+  const ops = await classOperators(useDb(), basisId, classKey)
+  return compute('rewriteOnto', { ops, operatorId }, caller.user, caller.group)
 }
 
 /** A class as bases.classes stores it (the parts the board's math reads). */
 /** A class as stored with its basis: every class carries its order (migration 021 added it to old ones). */
 export interface StoredClass { key: string, rank: number, order: number, dimension?: number | null }
 
-export type CoverageMap = Record<string, { rank: number, required: number, complete: boolean }>
-
-/** Coverage of every class of a basis, keyed by class key: stored, or computed and stored. */
-export async function coverageOfClasses(basisId: number, classes: StoredClass[]): Promise<CoverageMap> {
+/** Coverage of every class of a basis, keyed by class key: stored, or computed (compute pool) and stored. */
+export async function coverageOfClasses(basisId: number, classes: StoredClass[], caller: BoardCaller): Promise<CoverageMap> {
   const row = await useDb()('bases').where({ id: basisId }).first('coverage')
   const stored = (row?.coverage ?? {}) as CoverageMap
   if (classes.every((c) => stored[c.key])) return stored
-  return withBoardLock(basisId, ordersOfClasses(classes), (trx) => recomputeCoverage(trx, basisId, classes))
+  return withBoardLock(basisId, ordersOfClasses(classes), (trx) => recomputeCoverage(trx, basisId, classes, caller))
 }
 
 /** The distinct orders of the given classes (stored with their order, or a mass dimension). */
@@ -48,21 +51,12 @@ export function ordersOfClasses(classes: StoredClass[]): number[] {
   return [...new Set(classes.map((c) => c.order))]
 }
 
-/** Coverage of the given classes from the operators as stored now (one read for all). */
-export function coverageFrom(ops: BoardOperatorRow[], classes: { key: string, rank: number }[]): CoverageMap {
-  const byClass = new Map<string, BoardOperatorRow[]>()
-  for (const o of ops) byClass.set(o.class_key, [...(byClass.get(o.class_key) ?? []), o])
-  const out: CoverageMap = {}
-  for (const c of classes) {
-    const { rank, required, complete } = coverageOf(c.key, byClass.get(c.key) ?? [], c.rank)
-    out[c.key] = { rank, required, complete }
-  }
-  return out
-}
-
-/** Recompute and store the coverage of the given classes (inside the caller's transaction). */
-export async function recomputeCoverage(db: Knex, basisId: number, classes: { key: string, rank: number }[]): Promise<CoverageMap> {
-  const out = coverageFrom(await basisOperators(db, basisId), classes)
+/**
+ * Recompute (compute pool) and store the coverage of the given classes, inside the caller's
+ * transaction under the board lock: the math runs before the write, off the event loop.
+ */
+export async function recomputeCoverage(db: Knex, basisId: number, classes: { key: string, rank: number }[], caller: BoardCaller): Promise<CoverageMap> {
+  const out = await compute('coverage', { ops: await basisOperators(db, basisId), classes }, caller.user, caller.group)
   await storeCoverage(db, basisId, out)
   return out
 }

@@ -3,14 +3,17 @@ import { getQuery, setResponseHeader } from 'h3'
 import { boardData } from './bases'
 import { theoryOr404 } from './theories'
 import { fail } from '../http/apiHandler'
-import { assembleExport, type BoardExport } from '../../engine/export/boardExport'
-import { toLatex } from '../../engine/export/toLatex'
-import { toCsv } from '../../engine/export/toCsv'
+import { compute } from '../compute/computePool'
+import type { ExportInput } from '../../worker/boardTasks'
 
-export async function exportOfBasis(basisId: number): Promise<BoardExport> {
+const TYPES = { latex: ['application/x-tex', 'tex'], csv: ['text/csv; charset=utf-8', 'csv'], json: ['application/json', 'json'] } as const
+type Format = keyof typeof TYPES
+
+/** What an export of a basis is made from, read from the database (the file itself is assembled in the compute pool). */
+export async function exportInputOf(basisId: number): Promise<{ data: ExportInput, groupId: number }> {
   const d = await boardData(basisId)
   const theory = await theoryOr404(d.basis.theoryId)
-  return assembleExport({
+  return { groupId: theory.group_id, data: {
     theory: { name: d.basis.theoryName, definition: theory.definition },
     countingRule: d.basis.countingRule,
     note: d.basis.note || 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes',
@@ -19,20 +22,23 @@ export async function exportOfBasis(basisId: number): Promise<BoardExport> {
     operators: d.operators as never,
     tags: d.tags,
     notes: d.notes,
-  })
+  } }
 }
 
-/** Answer with the export in the format asked for (?format=latex|csv|json), as a download. */
-export function sendExport(event: H3Event, data: BoardExport) {
+/**
+ * Answer with the export of a basis in the format asked for (?format=latex|csv|json), as a
+ * download. The format is checked before anything is read; the file is written in the
+ * compute pool (a large basis with many notes is megabytes of text), asked for by `user`
+ * (a share link asks as `share:<theory id>`) and counted against the basis's group.
+ */
+export async function sendExport(event: H3Event, basisId: number, user: string | number) {
   const format = String(getQuery(event).format ?? 'json')
-  const dirac = getQuery(event).notation === 'dirac'
+  if (!(format in TYPES)) fail(400, `format must be latex, csv or json, not "${format}"`)
+  const { data, groupId } = await exportInputOf(basisId)
+  const text = await compute('boardExport', { data, format: format as Format, dirac: getQuery(event).notation === 'dirac' }, user, groupId)
+  const [type, ext] = TYPES[format as Format]
   const base = data.theory.name.replace(/[^A-Za-z0-9_-]+/g, '-').toLowerCase() || 'basis'
-  const types = { latex: ['application/x-tex', 'tex'], csv: ['text/csv; charset=utf-8', 'csv'], json: ['application/json', 'json'] } as const
-  if (!(format in types)) fail(400, `format must be latex, csv or json, not "${format}"`)
-  const [type, ext] = types[format as keyof typeof types]
   setResponseHeader(event, 'content-type', type)
   setResponseHeader(event, 'content-disposition', `attachment; filename="${base}-basis.${ext}"`)
-  if (format === 'latex') return toLatex(data, { dirac })
-  if (format === 'csv') return toCsv(data)
-  return JSON.stringify(data, null, 2)
+  return text
 }

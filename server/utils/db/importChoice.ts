@@ -1,10 +1,10 @@
 import type { Knex } from 'knex'
 import { fail } from '../http/apiHandler'
 import { withBoardLock } from './boardLock'
-import { basisOperators, coverageFrom, ordersOfClasses, storeCoverage, type BoardOperatorRow, type StoredClass } from './boardMath'
+import { basisOperators, ordersOfClasses, storeCoverage, type BoardOperatorRow, type StoredClass } from './boardMath'
 import { addTag } from './tags'
-import { firstRedundant } from '../../engine/board/keptSet'
-import { planImport, describeOperator, type Placement, type FileEntry } from '../board/importPlan'
+import { compute } from '../compute/computePool'
+import { planImport, type Placement, type FileEntry } from '../board/importPlan'
 import { planAnnotations, type PlannedNote } from '../board/importAnnotations'
 import type { ImportChoice } from '../../../shared/schemas/importChoice'
 
@@ -15,6 +15,7 @@ interface BasisRef { id: number, theory_id: number, group_id: number, classes: u
  * columns and places as the file gives them, its tags and notes with their authors and dates.
  * Refused (422, nothing changed) when the file names operators the basis does not have, repeats
  * one, or would make any class's kept set redundant. Answers what changed and what was left out.
+ * The kept sets are judged in the compute pool (board lane), under the locks and before any write.
  */
 export function importChoice(basis: BasisRef, file: ImportChoice, userId: number) {
   const classes = basis.classes as StoredClass[]
@@ -23,27 +24,13 @@ export function importChoice(basis: BasisRef, file: ImportChoice, userId: number
     const plan = planImport(rows, file)
     if ('refused' in plan) fail(422, plan.refused)
     const after = rows.map((r) => ({ ...r, ...plan.final.get(r.id)! }))
-    refuseRedundant(after, classes)
+    const math = await compute('importMath', { after, classes }, userId, basis.group_id)
+    if (math.refusal !== null) fail(422, math.refusal)
     await writePlacements(trx, rows, plan.final, userId)
     const annotations = await writeAnnotations(trx, basis, plan.entries)
-    await storeCoverage(trx, basis.id, coverageFrom(after, classes))
+    await storeCoverage(trx, basis.id, math.coverage)
     return { matched: plan.entries.length, changed: plan.columnChanges + plan.reordered, columnChanges: plan.columnChanges, reordered: plan.reordered, notInFile: plan.notInFile, ...annotations }
   })
-}
-
-/** 422 naming, per class, the first kept operator that depends on those before it in the file. */
-function refuseRedundant(after: BoardOperatorRow[], classes: StoredClass[]) {
-  const problems: string[] = []
-  for (const c of classes) {
-    const kept = after.filter((o) => o.class_key === c.key && o.column === 'kept').sort((a, b) => a.position - b.position)
-    const index = firstRedundant(kept, c.rank)
-    if (index === null) continue
-    const why = kept.every((o) => o.fingerprint) ? 'is a combination of the kept operators before it' : `is one more than the ${c.rank} the class needs`
-    problems.push(`${describeOperator(kept[index]!)} ${why} (the class needs ${c.rank} independent operator${c.rank === 1 ? '' : 's'}, the file keeps ${kept.length})`)
-  }
-  if (!problems.length) return
-  const shown = problems.slice(0, 3).join('; ') + (problems.length > 3 ? `; and ${problems.length - 3} more classes` : '')
-  fail(422, `This file would make the kept set of ${problems.length} class${problems.length === 1 ? '' : 'es'} redundant: ${shown}. Set those operators aside in the file (or keep fewer); nothing was changed.`)
 }
 
 /** Write the new columns and places (one statement); operators whose column or place changed get a new version. */

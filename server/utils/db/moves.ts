@@ -1,21 +1,24 @@
 import type { Knex } from 'knex'
 import { fail } from '../http/apiHandler'
 import { withBoardLock } from './boardLock'
-import { classOperators, requiredRank, storeCoverage, type BoardOperatorRow } from './boardMath'
-import { coverageOf, keptRank, rewriteOnto } from '../../engine/board/keptSet'
+import { classOperators, requiredRank, storeCoverage, type BoardCaller } from './boardMath'
+import { compute } from '../compute/computePool'
 
 type Column = 'kept' | 'set_aside'
 interface MoveRequest { column: Column, position: number, version: number }
-interface OperatorRef { id: number, basis_id: number, order: number, class_key: string }
+interface OperatorRef { id: number, basis_id: number, order: number, class_key: string, group_id: number }
 
 /**
  * Move an operator within its order, under the order's board lock (boardLock.ts): the version
  * check, the rank check of a keep, the new positions, the class's coverage and the set-aside
  * rewrite are all computed on the same stored state, before anything is committed. A
  * collaborator's move of the same operator is a reported conflict; moves of other operators
- * merge, since positions are recomputed from what is stored now.
+ * merge, since positions are recomputed from what is stored now. The rank check, coverage and
+ * rewrite run in the compute pool (its board lane) while the lock is held and before the first
+ * write, so the event loop stays free and a refusal (409, or 429/422 from the pool) changes nothing.
  */
 export function moveOperator(op: OperatorRef, body: MoveRequest, userId: number) {
+  const caller: BoardCaller = { user: userId, group: op.group_id }
   return withBoardLock(op.basis_id, [op.order], async (trx) => {
     const current = await trx('operators as o').leftJoin('users as u', 'u.id', 'o.moved_by').where('o.id', op.id).first('o.column', 'o.version', 'u.display_name as mover')
     if (current.version !== body.version) {
@@ -23,26 +26,15 @@ export function moveOperator(op: OperatorRef, body: MoveRequest, userId: number)
     }
     const ops = (await classOperators(trx, op.basis_id, op.class_key)).map((o) => (o.id === op.id ? { ...o, column: body.column } : o))
     const required = await requiredRank(trx, op.basis_id, op.class_key)
-    if (body.column === 'kept' && current.column !== 'kept') refuseRedundantKeep(ops, op, required)
     // Everything that can fail is computed before the first write: an error never follows a saved move.
-    const coverage = coverageOf(op.class_key, ops, required)
-    const rewrite = body.column === 'set_aside' ? rewriteOnto(ops, op.id) : null
+    const keeping = body.column === 'kept' && current.column !== 'kept'
+    const math = await compute('moveMath', { classKey: op.class_key, ops, movedId: op.id, keeping, settingAside: body.column === 'set_aside', required }, caller.user, caller.group)
+    if (math.refusal !== null) fail(409, math.refusal)
+    const { coverage, rewrite } = math
     const moved = await placeOperator(trx, op, current.column, body, userId)
     await storeCoverage(trx, op.basis_id, { [op.class_key]: { rank: coverage.rank, required, complete: coverage.complete } })
     return { operator: moved, coverage, rewrite }
   })
-}
-
-/** 409 when the operator depends on the class's other kept operators (or the class has enough); says why. */
-function refuseRedundantKeep(ops: BoardOperatorRow[], op: OperatorRef, required: number) {
-  const others = ops.filter((o) => o.column === 'kept' && o.id !== op.id)
-  const withIt = [...others, ops.find((o) => o.id === op.id)!]
-  const printed = withIt.every((o) => o.fingerprint)
-  if (printed ? keptRank(withIt) > keptRank(others) : others.length < required) return
-  const named = others.slice(0, 3).map((o) => o.text || `#${o.id}`).join(', ') + (others.length > 3 ? ', …' : '')
-  const why = !printed ? `the class needs ${required} kept operator${required === 1 ? '' : 's'} and has ${others.length} already`
-    : others.length ? `it is a combination of the kept operator${others.length === 1 ? '' : 's'} ${named}` : 'it vanishes modulo equations of motion and integration by parts'
-  fail(409, `Keeping this operator would make the kept set of class ${op.class_key} redundant: ${why}. Set one of them aside first.`)
 }
 
 /**

@@ -1,6 +1,6 @@
 import { useDb } from './connection'
 import { withBoardLock } from './boardLock'
-import { recomputeCoverage, type StoredClass } from './boardMath'
+import { storeCoverage, type CoverageMap, type StoredClass } from './boardMath'
 
 /** The distinct orders that have operators in a basis, ascending. */
 export async function ordersOfBasis(basisId: number): Promise<number[]> {
@@ -28,9 +28,14 @@ export async function setAsideOrders(basisId: number, orders: number[], userId: 
       })
       await trx.raw(`update operators o set "column" = 'set_aside', position = x.pos, version = o.version + 1, moved_by = ?, moved_at = now()
         from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id`, [userId, kept.map((k) => k.id), positions])
-      await recomputeCoverage(trx, basisId, classes.filter((c) => orders.includes(c.order)))
+      await storeCoverage(trx, basisId, emptyCoverage(classes.filter((c) => orders.includes(c.order))))
     }
     const basis = await trx('bases').where({ id: basisId }).first('version')
     return { count: kept.length, basisVersion: basis.version as number }
   })
+}
+
+/** Coverage of classes that keep no operator: rank 0, complete only where the class needs none (no engine call needed). */
+function emptyCoverage(classes: StoredClass[]): CoverageMap {
+  return Object.fromEntries(classes.map((c) => [c.key, { rank: 0, required: c.rank, complete: c.rank === 0 }]))
 }

@@ -7,7 +7,7 @@ const LADDER = { doc: { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name
 
 describe('compute lane (real threads)', () => {
   it('computes in a thread; over the time budget the thread is ended and the message says so; the next task still runs', async () => {
-    const lane = new ComputeLane('computations', { threads: 1, queue: 4, perUser: 4, idleMs: 1000 })
+    const lane = new ComputeLane('computations', { threads: 1, queue: 4, perUser: 4, perGroup: 8, idleMs: 1000 })
     // 1 ms cannot even start the thread: the budget must fire.
     await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(ComputeBudgetError)
     await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(/takes longer than its budget of 0.001 s/)
@@ -18,13 +18,35 @@ describe('compute lane (real threads)', () => {
   }, 60_000)
 
   it('refuses past the per-user and the queue limits with ComputeBusyError', async () => {
-    const lane = new ComputeLane('quick counts', { threads: 1, queue: 1, perUser: 2, idleMs: 1000 })
+    const lane = new ComputeLane('quick counts', { threads: 1, queue: 1, perUser: 2, perGroup: 8, idleMs: 1000 })
     const opts = (user: string) => ({ user, budgetMs: 30_000, what: 'x' })
     const a = lane.run('ladder', LADDER, opts('u'))
     const b = lane.run('ladder', LADDER, opts('u'))
     expect(() => lane.run('ladder', LADDER, opts('u'))).toThrow(/You already have 2 quick counts in progress \(the limit is 2 at a time\)/)
     expect(() => lane.run('ladder', LADDER, opts('v'))).toThrow(ComputeBusyError)
     await Promise.all([a, b])
+  }, 60_000)
+
+  it('refuses past the per-group limit whoever in the group asks, and counts the group off again when its tasks end', async () => {
+    const lane = new ComputeLane('computations', { threads: 1, queue: 8, perUser: 4, perGroup: 3, idleMs: 1000 })
+    const opts = (user: string, group: string) => ({ user, group, budgetMs: 30_000, what: 'x' })
+    const mine = [lane.run('ladder', LADDER, opts('u', 'g')), lane.run('ladder', LADDER, opts('v', 'g')), lane.run('ladder', LADDER, opts('w', 'g'))]
+    expect(() => lane.run('ladder', LADDER, opts('x', 'g'))).toThrow(/Your group already has 3 computations in progress \(the limit is 3 per group at a time\)/)
+    // Another group is not held up by the first group's limit.
+    const other = lane.run('ladder', LADDER, opts('y', 'h'))
+    await Promise.all([...mine, other])
+    await expect(lane.run('ladder', LADDER, opts('x', 'g'))).resolves.toBeDefined()
+  }, 60_000)
+
+  it('groups take turns: a task of another group starts before the waiting burst of a group already computing', async () => {
+    const lane = new ComputeLane('computations', { threads: 1, queue: 8, perUser: 8, perGroup: 8, idleMs: 1000 })
+    const order: string[] = []
+    const run = (group: string, i: number) => lane.run('ladder', LADDER, { user: `${group}${i}`, group, budgetMs: 30_000, what: 'x' }).then(() => order.push(`${group}${i}`))
+    const burst = [0, 1, 2, 3].map((i) => run('g', i))
+    const other = run('h', 0)
+    await Promise.all([...burst, other])
+    // g0 took the one thread at once; h0 arrived last but goes next, ahead of g1–g3.
+    expect(order.slice(0, 2)).toEqual(['g0', 'h0'])
   }, 60_000)
 })
 

@@ -22,7 +22,7 @@ export default defineApiHandler(async (event) => {
   let bytes = cachedBoard(id, version, access.role)
   if (!bytes) {
     const { groupId: _g, ...data } = await boardData(id)
-    storeBoard(id, version, JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as StoredClass[]) }))
+    storeBoard(id, version, JSON.stringify({ ...data, coverage: await coverageOfClasses(id, data.basis.classes as StoredClass[], { user: access.user.id, group: access.row.group_id as number }) }))
     bytes = cachedBoard(id, version, access.role)!
   }
   setResponseHeader(event, 'content-type', 'application/json; charset=utf-8')

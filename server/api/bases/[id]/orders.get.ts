@@ -8,7 +8,7 @@ import { ordersUnderRule } from '../../../utils/db/ruleView'
 // Orders of every operator under a counting rule of the theory (?rule=NAME), for the board's switch.
 export default defineApiHandler(async (event) => {
   const basis = await basisOr404(intParam(event, 'id'))
-  await requireGroupRole(event, basis.group_id, 'viewer')
+  const { user } = await requireGroupRole(event, basis.group_id, 'viewer')
   const rule = getQuery(event).rule
-  return ordersUnderRule(basis.id, typeof rule === 'string' && rule ? rule : undefined)
+  return ordersUnderRule(basis.id, typeof rule === 'string' && rule ? rule : undefined, user.id)
 })

@@ -12,7 +12,8 @@ export default defineApiHandler(async (event) => {
   const theory = publicTheory(await theoryOr404(theoryId))
   const latest = await latestBasisOf(theoryId)
   const board = latest ? await boardData(latest.id) : null
+  const caller = { user: `share:${theoryId}`, group: theory.groupId }
   if (board) delete (board as { groupId?: number }).groupId
-  const coverage = board ? await coverageOfClasses(board.basis.id, board.basis.classes as StoredClass[]) : {}
+  const coverage = board ? await coverageOfClasses(board.basis.id, board.basis.classes as StoredClass[], caller) : {}
   return { theory, board: board && { ...board, coverage }, role: 'share' }
 })

@@ -9,5 +9,5 @@ export default defineApiHandler(async (event) => {
   const latest = await latestBasisOf(theoryId)
   if (!latest) fail(404, 'This theory has no basis yet')
   const rule = getQuery(event).rule
-  return ordersUnderRule(latest.id, typeof rule === 'string' && rule ? rule : undefined)
+  return ordersUnderRule(latest.id, typeof rule === 'string' && rule ? rule : undefined, `share:${theoryId}`)
 })
