@@ -3,13 +3,13 @@
 // threads (computeTasks.ts), never on the event loop.
 import { partnerMap } from '../engine/scales/massPartners'
 import { generatedClassHints } from '../engine/scales/generatedClasses'
-import { towerGaugeContent } from '../engine/running/gauge/gaugeContent'
+import { towerGaugeContent, type TowerStep } from '../engine/running/gauge/gaugeContent'
 import { gaugeRunningReport, type GaugeReportRequest } from '../engine/running/gauge/report'
 import { EngineError, EngineInputError } from '../engine/errors'
 import { parseTheory } from '../engine/theory/parseTheory'
 import { applicableMatching } from '../utils/scales/applicableMatching'
 import { gaugeRunningInputs } from '../utils/scales/gaugeInputs'
-import { parsedSteps, type StoredTowerStep } from '../utils/scales/gaugeTower'
+import type { StoredTowerStep } from '../utils/scales/gaugeTower'
 
 /**
  * For each fermion of a stored theory file, the fields that can give it a mass. A file the
@@ -41,6 +41,11 @@ function towerHints(steps: TowerStepHintInput[]) {
       generatedClasses: theory.fields.filter((f) => removed.includes(f.name)).flatMap((f) => generatedClassHints(f, theory.groups)),
     }
   })
+}
+
+/** Parse the stored theory files of a path (they were validated when stored). */
+function parsedSteps(steps: readonly StoredTowerStep[]): TowerStep[] {
+  return steps.map((s) => ({ theory: parseTheory(s.theory), thresholdGeV: s.thresholdGeV }))
 }
 
 /** The gauge running's inputs, or the engine's words for why the tower cannot run (shown by the page). */

@@ -1,6 +1,6 @@
 import { defineApiHandler } from '../../utils/http/apiHandler'
 import { requireUser } from '../../utils/auth/currentUser'
-import { ALPHA_S_MZ, BOTTOM_MSBAR_MASS_GEV, CHARM_MSBAR_MASS_GEV, TOP_POLE_MASS_GEV, Z_MASS_GEV } from '../../utils/scales/runningCurves'
+import { ALPHA_S_MZ, BOTTOM_MSBAR_MASS_GEV, CHARM_MSBAR_MASS_GEV, TOP_POLE_MASS_GEV, Z_MASS_GEV } from '../../engine/scales/pdg2024'
 
 // The inputs the couplings page starts from, with their sources (signed in).
 export default defineApiHandler(async (event) => {

@@ -16,7 +16,7 @@ export const COMPUTE_LANES = {
   light: new ComputeLane('computations', { threads: threads(2), queue: 32, perUser: 4, perGroup: 8, idleMs: 300_000 }),
   count: new ComputeLane('quick counts', { threads: threads(2), queue: 4, perUser: 2, perGroup: 3, idleMs: 300_000 }),
   board: new ComputeLane('board computations', { threads: threads(1), queue: 64, perUser: 8, perGroup: 16, idleMs: 300_000 }),
-  running: new ComputeLane('gauge runnings', { threads: 1, queue: 8, perUser: 1, perGroup: 2, idleMs: 300_000 }),
+  running: new ComputeLane('gauge-coupling calculations', { threads: threads(1), queue: 8, perUser: 1, perGroup: 2, idleMs: 300_000 }),
 }
 
 /**

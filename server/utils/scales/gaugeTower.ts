@@ -1,6 +1,4 @@
 import type { TowerNode } from '../db/towers'
-import type { TowerStep } from '../../engine/running/gauge/gaugeContent'
-import { parseTheory } from '../../engine/theory/parseTheory'
 
 /** A tower step as the engine thread receives it: the stored theory file, not yet parsed. */
 export interface StoredTowerStep { id: number, name: string, theory: unknown, thresholdGeV: number | null }
@@ -26,9 +24,4 @@ export function gaugeTowerPath(nodes: readonly TowerNode[], id: number): { steps
   }
   const steps = path.map((n, i) => ({ id: n.id, name: n.name, theory: n.definition, thresholdGeV: i === 0 || !n.threshold ? null : n.threshold.valueMeV / 1000 }))
   return { steps, note }
-}
-
-/** Parse the stored theory files of a path (they were validated when stored). */
-export function parsedSteps(steps: readonly StoredTowerStep[]): TowerStep[] {
-  return steps.map((s) => ({ theory: parseTheory(s.theory), thresholdGeV: s.thresholdGeV }))
 }
