@@ -1,4 +1,5 @@
 import { COMPUTE_LANES } from '../utils/compute/computePool'
+import { longestStallSinceLastReading } from '../utils/compute/eventLoopStalls'
 
 // Boot the first compute thread at start-up, not during a user's request: loading the engine
 // in a thread takes seconds of CPU, which requests would otherwise feel. The board lane's thread
@@ -6,4 +7,5 @@ import { COMPUTE_LANES } from '../utils/compute/computePool'
 export default defineNitroPlugin(() => {
   COMPUTE_LANES.light.warm()
   COMPUTE_LANES.board.warm()
+  longestStallSinceLastReading() // starts watching the event loop
 })

@@ -5,9 +5,13 @@ import { hostileLadder, p95, timed } from '../../support/hostile'
 
 // Attack suite, issue 12 item 1, for every route whose engine work moved into the compute pool:
 // a burst of that route (export, rule view, rewrites, tower, ladder page, gauge running, board
-// moves and imports) while 20 board reads of another group run. The reads must stay fast (p95
-// within 200 ms of the same reads alone: the machine is shared), and the burst is answered
-// (200, or 429 naming a limit), never left hanging or failed.
+// moves and imports) while 20 board reads of another group run. Asserted: the server's event
+// loop never stalls (its longest stall, read from /api/health, stays within 200 ms of the longer
+// one of the same 20 reads alone, just before and just after), and the burst is answered (200,
+// or 429 naming a limit). The reads' p95 is printed for the report but not asserted: on this
+// shared machine (load averages of 20–30 on 2 cores were seen) it swings by a second between two
+// runs of the same reads, from the CPU the pool's threads take, while a stall of the event loop
+// is what a computation on the request thread would cause.
 let world: World
 let other: World
 let basisId: number
@@ -16,16 +20,24 @@ let token: string
 let otherBasis: number
 
 const otherRead = () => other.byRole.viewer.client.get(`/api/bases/${otherBasis}`)
-const aloneP95 = async () => p95(await Promise.all(Array.from({ length: 20 }, () => timed(otherRead))))
+const twentyReads = () => Promise.all(Array.from({ length: 20 }, () => timed(otherRead)))
+/** The event loop's longest stall (ms) since the previous reading. */
+const longestStall = async () => (await new ApiClient().get('/api/health')).body.longestStallMs as number
 
-/** Run `burst` while 20 board reads of the other group run; the reads' p95 must stay within 200 ms of alone. */
+/** Run `burst` while 20 board reads of the other group run; the event loop must not stall (see above). */
 async function readsStayFast(name: string, burst: () => Promise<Reply[]>) {
-  const alone = await aloneP95()
+  await longestStall()
+  const alone = await twentyReads()
+  const stallBefore = await longestStall()
   const pending = burst()
-  const reads = await Promise.all(Array.from({ length: 20 }, () => timed(otherRead)))
+  const reads = await twentyReads()
   const replies = await pending
-  console.log(`[attack] ${name}: board reads p95 ${Math.round(alone)} ms alone, ${Math.round(p95(reads))} ms beside`)
-  expect(p95(reads)).toBeLessThan(200 + alone)
+  const stall = await longestStall()
+  // The same reads alone once more after the burst: the machine's own stalls, on both sides of it.
+  await twentyReads()
+  const aloneStall = Math.max(stallBefore, await longestStall())
+  console.log(`[attack] ${name}: board reads p95 ${Math.round(p95(alone))} ms alone, ${Math.round(p95(reads))} ms beside; longest event-loop stall ${aloneStall} ms alone, ${stall} ms beside`)
+  expect(stall).toBeLessThan(200 + aloneStall)
   for (const r of replies) {
     expect([200, 429], `${name}: ${r.status} ${messageOf(r)}`).toContain(r.status)
     if (r.status === 429) expect(messageOf(r)).toMatch(/the limit is \d+/)
@@ -101,10 +113,12 @@ describe('board writes whose math runs in the compute pool (under the board lock
   })
 
   it('a hostile ladder save beside 20 board reads of another group is refused by the size budget', async () => {
-    const alone = await aloneP95()
-    const save = world.byRole.editor.client.request('PUT', `/api/theories/${world.theoryId}/scales`, { ladder: hostileLadder(), version: 0 })
-    const reads = await Promise.all(Array.from({ length: 20 }, () => timed(otherRead)))
-    expect((await save).status).toBe(400)
-    expect(p95(reads)).toBeLessThan(200 + alone)
+    let saved: Reply | undefined
+    await readsStayFast('hostile ladder save', async () => {
+      saved = await world.byRole.editor.client.request('PUT', `/api/theories/${world.theoryId}/scales`, { ladder: hostileLadder(), version: 0 })
+      return [await world.byRole.viewer.client.get(`/api/theories/${world.theoryId}/scales`)]
+    })
+    expect(saved!.status).toBe(400)
+    expect(messageOf(saved!)).toMatch(/the limit is 2,000/)
   })
 })
