@@ -6,26 +6,17 @@
  */
 import { readFileSync } from 'node:fs'
 import { createServer, request } from 'node:http'
-import { monitorEventLoopDelay } from 'node:perf_hooks'
 import { createApp, defineEventHandler, readRawBody, toNodeListener } from 'h3'
 import { compute } from '../server/utils/compute/computePool'
 import { startEngineTask } from '../server/worker/engineTask'
 import { readCappedText } from '../server/utils/http/cappedBody'
 import { SMALL_THEORY } from '../tests/support/fixtures'
 import { hostileLadder } from '../tests/support/hostile'
+import { longestStallDuring } from './support/timing'
 
 const threads = () => Number(/Threads:\s+(\d+)/.exec(readFileSync('/proc/self/status', 'utf8'))![1])
 const mb = (bytes: number) => Math.round(bytes / 2 ** 20)
 
-/** Longest event-loop stall (ms) while `work` runs. */
-async function blockOf(work: () => Promise<unknown>): Promise<number> {
-  const h = monitorEventLoopDelay({ resolution: 10 })
-  h.enable()
-  await work().catch(() => undefined)
-  await new Promise((r) => setTimeout(r, 50))
-  h.disable()
-  return Math.round(h.max / 1e6)
-}
 
 /** Peak threads and RSS growth while `work` runs (sampled every 20 ms). */
 async function peakOf(work: () => Promise<unknown>) {
@@ -41,7 +32,7 @@ async function peakOf(work: () => Promise<unknown>) {
 /** The tester's ladder through the route's path (the compute pool). Before the fix it ran on the loop: 4.6 s per order here, see the report. */
 async function ladderBlock() {
   const doc = hostileLadder()
-  const after = await blockOf(() => compute('ladder', doc as never, 'bench'))
+  const after = await longestStallDuring(() => compute('ladder', doc as never, 'bench'))
   const refusal = await compute('ladder', doc as never, 'bench').then(() => '', (e: Error) => e.message.slice(0, 90))
   return { after_block_ms: after, refusal }
 }

@@ -1,3 +1,5 @@
+import { monitorEventLoopDelay } from 'node:perf_hooks'
+
 // Timing helpers shared by the benchmark scripts: figures are medians (the machines are shared
 // and noisy, so a mean would follow the slowest outlier).
 
@@ -18,4 +20,14 @@ export function medianTime(repeats: number, fn: () => unknown): number {
     ts.push(performance.now() - t0)
   }
   return Number(median(ts).toFixed(3))
+}
+
+/** The event loop's longest stall (ms) while `work` runs (its failure is ignored: a refusal is a figure too). */
+export async function longestStallDuring(work: () => Promise<unknown>): Promise<number> {
+  const h = monitorEventLoopDelay({ resolution: 10 })
+  h.enable()
+  await work().catch(() => undefined)
+  await new Promise((r) => setTimeout(r, 50))
+  h.disable()
+  return Math.round(h.max / 1e6)
 }
