@@ -3,16 +3,7 @@ import type { OrderSpec } from '../../../shared/schemas/scaleLadder'
 import type { LadderDocument } from '../../../shared/schemas/scaleRequests'
 import { leadingOrderOf } from '../../../shared/physics/leadingOrder'
 
-/** The frame of a stored theory definition (relativistic when it names none). */
-export function frameOfDefinition(definition: unknown): string {
-  const frame = (definition as { frame?: unknown } | null)?.frame
-  return typeof frame === 'string' ? frame : 'relativistic'
-}
-
-/** The frame of a stored basis: a Goldstone-frame basis marks its classes (as the board reads it). */
-export function frameOfBasisClasses(classes: unknown): string {
-  return Array.isArray(classes) && classes.some((c) => (c as { frame?: unknown }).frame === 'goldstone') ? 'goldstone' : 'relativistic'
-}
+export { frameOfDefinition, frameOfBasisClasses } from './ladderFrame'
 
 /**
  * The computed ladder (sorted scales, derived scales, parameters, per-order estimates) of a stored

@@ -4,7 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { ladderOf } from '../../../utils/db/scaleLadders'
 import { compute } from '../../../utils/compute/computePool'
-import { frameOfDefinition } from '../../../utils/scales/ladderEstimates'
+import { frameOfDefinition } from '../../../utils/scales/ladderFrame'
 import { EngineInputError } from '../../../engine/errors'
 import { SCALE_UNITS } from '../../../../shared/physics/scaleUnits'
 

@@ -4,7 +4,7 @@ import { requireGroupRole } from '../../../utils/auth/currentUser'
 import { theoryOr404 } from '../../../utils/db/theories'
 import { saveLadder } from '../../../utils/db/scaleLadders'
 import { compute } from '../../../utils/compute/computePool'
-import { frameOfDefinition } from '../../../utils/scales/ladderEstimates'
+import { frameOfDefinition } from '../../../utils/scales/ladderFrame'
 import { LadderSaveSchema } from '../../../../shared/schemas/scaleRequests'
 import { once } from '../../../utils/http/requestKeys'
 
