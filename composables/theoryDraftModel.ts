@@ -3,6 +3,7 @@
 // half-typed value is never lost, and converts to the theory file that TheorySchema validates.
 // Groups carry a stable `uid`, so that renaming a group keeps the field roster's labels on it.
 import type { Theory } from '../shared/schemas/theory'
+import type { DraftGroup, DraftIssue } from './theoryDraft/draftTypes'
 import { LORENTZ_KINDS, type LorentzKind } from '../shared/schemas/lorentzKind'
 import { GROUP_KINDS, type GroupKind, groupKindLabel, takesN } from '../shared/schemas/groupKinds'
 import { type DraftLabels, asText as text, isRecord, labelsToDraft, labelsToTheory } from './theoryDraft/labels'
@@ -10,12 +11,10 @@ import { type DraftHeavy, heavyToDraft, heavyToTheory } from './theoryDraft/heav
 import { type DraftGoldstone, goldstoneToDraft, goldstoneToTheory } from './theoryDraft/goldstoneBlock'
 import { type DraftCoupling, type DraftMass, couplingToDraft, couplingToTheory, massToDraft, massToTheory } from './theoryDraft/couplingsBlock'
 
-export type { DraftHeavy, DraftCoupling, DraftMass }
+export type { DraftHeavy, DraftGroup, DraftIssue, GroupKind, DraftCoupling, DraftMass }
 
-export type { GroupKind }
 export type CountingKind = 'massRatio' | 'velocity' | 'momentumRatio' | 'custom'
 
-export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
 export interface DraftField extends DraftLabels {
   uid: string
   name: string
@@ -52,9 +51,6 @@ export interface TheoryDraft {
   /** Symbols (and values) of order-0 operators; written when there is at least one. */
   couplings: DraftCoupling[]
 }
-
-/** A problem found while reading the typed text, at the theory-file path of its input. */
-export interface DraftIssue { path: (string | number)[], message: string }
 
 let counter = 0
 export function newUid(prefix = 'u'): string {

@@ -1,6 +1,6 @@
 // The Goldstone block of a theory file ("frame": "goldstone") as editor inputs, and back.
 // (Outside composables/' top level, so Nuxt does not auto-import it.)
-import type { DraftIssue } from '../theoryDraftModel'
+import type { DraftIssue } from './draftTypes'
 import { asText, isRecord } from './labels'
 
 export interface DraftGoldstone {

@@ -1,6 +1,6 @@
 // The heavy-particle block of a theory file ("frame": "heavy") as editor text, and back.
 // (Outside composables/' top level, so Nuxt does not auto-import it.)
-import type { DraftGroup, DraftIssue } from '../theoryDraftModel'
+import type { DraftGroup, DraftIssue } from './draftTypes'
 import { type DraftLabels, asText, emptyLabels, isRecord, labelsToDraft, labelsToTheory } from './labels'
 
 export interface DraftHeavy extends DraftLabels {

@@ -1,6 +1,6 @@
 // Representations and charges of one field as editor text per group uid, and back: shared by the
 // field roster and the heavy particle. (Outside composables/' top level: not auto-imported.)
-import type { DraftGroup, DraftIssue } from '../theoryDraftModel'
+import type { DraftGroup, DraftIssue } from './draftTypes'
 import { groupInputKind } from '../../shared/schemas/groupKinds'
 
 export interface DraftLabels {

@@ -1,6 +1,7 @@
 import type { Knex } from 'knex'
 import { startEngineTask } from './engineTask'
-import { persistRunResult, type RunParams } from './persistRun'
+import { persistRunResult } from './persistRun'
+import type { RunParams } from './runParams'
 import { claimRun, heldRun, startLease, RunLostError } from './runLease'
 import { RUN_LEASE, type SendRun } from '../utils/jobs/orphans'
 import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../engine/errors'

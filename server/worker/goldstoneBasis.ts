@@ -1,6 +1,6 @@
 import type { Knex } from 'knex'
 import type { GoldstoneBasisResult, GoldstoneOperator } from '../engine/goldstone/explicit/goldstoneBasis'
-import type { RunParams } from './persistRun'
+import type { RunParams } from './runParams'
 
 /** A finished explicit-basis run of a Goldstone-frame theory. */
 export function isGoldstoneBasis(result: unknown): result is GoldstoneBasisResult {

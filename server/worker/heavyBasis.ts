@@ -1,6 +1,6 @@
 import type { Knex } from 'knex'
 import type { HeavyEnumeration, HeavyOperator } from '../engine/heavy/enumerate'
-import type { RunParams } from './persistRun'
+import type { RunParams } from './runParams'
 import type { OrderZeroReport } from '../engine/basis/orderZero'
 import { orderZeroClassRows, orderZeroOperators, orderZeroRow } from './orderZeroBasis'
 

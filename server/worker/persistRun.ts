@@ -4,9 +4,9 @@ import type { BasisReport } from '../engine/basis/buildBasis'
 import type { BasisOperator } from '../engine/basis/describe'
 import type { HeavyEnumeration } from '../engine/heavy/enumerate'
 import { writeHeavyBasis } from './heavyBasis'
+import type { RunParams } from './runParams'
 import { isGoldstoneBasis, writeGoldstoneBasis } from './goldstoneBasis'
 import { heavyReport } from '../engine/heavy/report'
-import type { Priorities } from '../engine/basis/classBasis'
 import { FINGERPRINT_VERSION } from '../engine/board/fingerprintVersion'
 import { heldRun, RunLostError } from './runLease'
 import { massRatioOrder } from '../engine/rules/defaultWeights'
@@ -43,7 +43,6 @@ function isHeavy(result: unknown): result is HeavyEnumeration {
 async function finish(trx: Knex.Transaction, runId: number, summary: unknown) {
   await trx('runs').where({ id: runId }).update({ status: 'done', progress: 1, current_label: 'done', summary: JSON.stringify(summary), finished_at: trx.fn.now() })
 }
-export interface RunParams { maxDim?: number, maxOrder?: number, nf?: number, theory: unknown, theoryVersion: number, priorities?: Priorities }
 
 function basisSummary(report: BasisReport) {
   return {

@@ -24,6 +24,9 @@ import type { LorentzStructure } from './lorentzStructures'
 import { classParity, type ClassParity } from './parity'
 import { parityImage, parityLegMap } from './parityPartners'
 import { parityColumns, reduceParityColumn, scaleRows } from './parityColumns'
+import type { ClassBasis, Column, PrimeData } from './classBasisTypes'
+
+export type { ClassBasis, Column, PrimeData }
 
 export const BASIS_NOTE = 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes'
 
@@ -43,58 +46,6 @@ export interface ClassOptions {
   signal?: { aborted: boolean }
   /** Extra random rows beyond the number of candidate columns (default 12 + 25 %). */
   margin?: number
-}
-
-/** One column of the selection: a candidate, or an operator the user asked to keep. */
-export interface Column {
-  text: string
-  source: 'candidate' | 'kept' | 'hermitian'
-  terms: { coeff: number[]; lorentz: LorentzStructure; gauge: SuStructure[] }[]
-  candidate?: Candidate
-  /** For 'hermitian' columns: +1 for O + h.c., −1 for O − h.c. */
-  conjSign?: 1 | -1
-  /** For 'hermitian' columns: the text of O. */
-  hermitianBase?: string
-  /** For 'hermitian' columns: the partner combination vanishes, so O itself is Hermitian (up to a phase). */
-  selfHermitian?: boolean
-  /** P-eigen columns (classes mapped to themselves by parity): +1 for c + P(c), −1 for c − P(c). */
-  paritySign?: 1 | -1
-  /** Text of c for a column c ± P(c). */
-  parityBase?: string
-  /** The chosen c ± P(c) equals 2c: c itself has definite parity. */
-  selfParity?: boolean
-  /** Parity eigenvalue known by construction (P(c ± P(c)) = ±(c ± P(c)), P² = 1). */
-  parityEigen?: 1 | -1
-}
-
-export interface PrimeData {
-  F: PrimeField
-  points: SamplePoint[]
-  /** Values of the chosen (pivot) columns at every point: rows × rank. */
-  keptRows: number[][]
-}
-
-export interface ClassBasis {
-  key: string
-  class: OperatorClass
-  conjugateKey: string
-  selfConjugate: boolean
-  dimension: number
-  candidates: number
-  rank: number
-  /** Column texts of the kept operators, in selection order. */
-  kept: Column[]
-  gaugeStructures: SuStructure[][]
-  perms: LegPermutation[]
-  primes: PrimeData[]
-  /**
-   * A few redundant candidates (non-pivot columns) with their values at the sample points
-   * (rows[primeIndex][point]); the board offers them as set-aside operators with rewrites.
-   */
-  alternatives: { column: Column; rows: number[][] }[]
-  /** Parity of the class and of each kept operator (conventions in parity.ts). */
-  parity: ClassParity
-  note: string
 }
 
 /** How many redundant candidates per class are kept as alternatives for the board. */

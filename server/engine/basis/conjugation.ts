@@ -2,7 +2,7 @@
  * Structural conjugation of candidate operators within a self-conjugate class.
  */
 import { EngineConsistencyError, EngineInputError } from '../errors'
-import type { ClassBasis } from './classBasis'
+import type { ClassBasis } from './classBasisTypes'
 import type { OperatorClass } from './classKey'
 import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'

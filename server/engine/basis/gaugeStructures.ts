@@ -14,22 +14,9 @@ import { type TensorShape, boxColumns, boxes } from './tensorShape'
 import { type TensorWave, randomTensorWave } from './tensorWaves'
 import { evaluateSuTensor } from './tensorContraction'
 
-/** A slot is one SU(N) index of one leg: box `box` of the leg's upper or lower Young shape (row by row). */
-export interface Slot {
-  leg: number
-  upper: boolean
-  box?: number
-}
+import type { Slot, SuStructure, SuWave } from './suStructure'
 
-export interface SuStructure {
-  group: string
-  n: number
-  /** δ contractions: [upper slot, lower slot] (indices into `slots`). */
-  deltas: [number, number][]
-  /** ε tensors, each contracting N slots of the same kind (upper slots for ε_{…}). */
-  eps: number[][]
-  slots: Slot[]
-}
+export type { Slot, SuStructure, SuWave }
 
 /**
  * Slots of the legs for one SU(N) group, in leg order (upper before lower for adjoints).
@@ -147,9 +134,6 @@ function structureKey(slotClass: string[], deltas: [number, number][], eps: numb
   ]
   return edges.sort().join('|')
 }
-
-/** Random wave-function of one leg for one SU(N): vector (fund/anti), traceless matrix (adj) or tensor. */
-export type SuWave = number[] | number[][] | TensorWave | null
 
 /**
  * Draw a random wave-function mod p for a leg of the given kind.

@@ -7,7 +7,7 @@
  */
 import type { PrimeField } from '../finite/primeField'
 import { PrimeSet } from '../finite/primeSet'
-import type { Column } from './classBasis'
+import type { Column } from './classBasisTypes'
 import { parityLorentz, paritySu } from './parity'
 import { formatLorentz } from './inputSyntax'
 import { combinationText } from './combinationText'

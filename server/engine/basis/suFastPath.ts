@@ -4,7 +4,7 @@
  * tr(X…X), evaluated by matrix–vector products instead of explicit index sums.
  */
 import type { PrimeField } from '../finite/primeField'
-import type { SuStructure, SuWave } from './gaugeStructures'
+import type { SuStructure, SuWave } from './suStructure'
 
 type Step = { kind: 'chain'; start: number; mids: number[]; end: number } | { kind: 'trace'; mids: number[] }
 

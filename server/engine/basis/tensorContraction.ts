@@ -7,7 +7,7 @@
  */
 import { EngineConsistencyError } from '../errors'
 import type { PrimeField } from '../finite/primeField'
-import type { SuStructure, SuWave } from './gaugeStructures'
+import type { SuStructure, SuWave } from './suStructure'
 import type { TensorWave } from './tensorWaves'
 import { loopPlan, runLoops } from './tensorLoops'
 

@@ -3,12 +3,11 @@
  * without ever listing the weights of the left factor.
  */
 import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
-import type { Character } from './types'
+import type { Character, PlethysmOptions } from './types'
 import { reflectToDominant } from './decompose'
 import { parseWeightKey } from './labels'
 import { characterAdams } from './character'
 import { classSize, factorial, partitionsOf, symmetricCharacter } from './symmetricGroup'
-import type { PlethysmOptions } from './plethysm'
 
 /** A Weyl chamber: reflect μ + shift + ρ to the dominant chamber (null on a wall). */
 export interface Chamber {

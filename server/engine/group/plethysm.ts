@@ -2,20 +2,17 @@
  * Schur functors (plethysms) of SU(n) characters by the cycle index of S_k.
  */
 import { EngineCancelledError, EngineConsistencyError, EngineInputError } from '../errors'
-import type { Character, Dynkin } from './types'
+import type { Character, Dynkin, PlethysmOptions } from './types'
 import { characterPower, characterProduct, trivialCharacter } from './character'
 import { schurFunctorIrreps } from './brauer'
 import { checkDynkin, checkN, fmt, parseWeightKey } from './labels'
 import { classSize, factorial, partitionsOf, symmetricCharacter } from './symmetricGroup'
 import { suWeights } from './weights'
 
+export type { PlethysmOptions }
+
 /** Largest k = |partition| accepted (p(12) = 77 cycle types). */
 export const MAX_PLETHYSM_DEGREE = 12
-
-export interface PlethysmOptions {
-  onProgress?: (fraction: number, label: string) => void
-  signal?: { aborted: boolean }
-}
 
 function checkPartition(fn: string, partition: readonly number[]): number {
   const ok = Array.isArray(partition) && partition.length > 0 &&

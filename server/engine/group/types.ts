@@ -9,3 +9,9 @@
 export type Dynkin = readonly number[]
 export type WeightKey = string
 export type Character = Map<WeightKey, number>
+
+/** Progress and cancel for the plethysm and its Brauer step. */
+export interface PlethysmOptions {
+  onProgress?: (fraction: number, label: string) => void
+  signal?: { aborted: boolean }
+}

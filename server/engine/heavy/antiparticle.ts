@@ -11,7 +11,7 @@
  * χ's expansion with the opposite sign. When P or T is not imposed the relation comes from
  * CPT instead and picks up the operator's P and T signs.
  */
-import type { HeavyOperator } from './enumerate'
+import type { HeavyOperator } from './heavyOperator'
 import { fieldTex } from './fieldTex'
 
 /** The same printed bilinear between the antiparticle's fields: f^†\, … \, f → a^†\, … \, a. */

@@ -15,7 +15,7 @@ import { EngineCancelledError, EngineInputError } from '../errors'
 import type { CancelFlag } from '../finite'
 import type { Rational } from '../exact/rational'
 import type { HeavyFrame } from '../../../shared/schemas/heavyFrame'
-import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, NONABELIAN_OPERATORS, printedLatex, type CoefficientRelation } from './conventional'
+import { CONVENTIONAL_OPERATORS, LEADING_OPERATOR, NONABELIAN_OPERATORS, printedLatex } from './conventional'
 import { comboLatex, structureBlocks } from './display'
 import { orderSpace, orderSpaceFor, type SpaceConfig } from './orderSpace'
 import { heavyGaugeSetup, type HeavyGauge } from './gaugeSetup'
@@ -24,36 +24,11 @@ import { expandCombo, type Combo } from './structure'
 import { antiparticleCopy, ANTIPARTICLE_CONVENTION } from './antiparticle'
 import { publishedOperators } from './published'
 import { enumerateFourFermion, FOUR_FERMION_NOTE, type FourFermionOrder } from './fourFermion'
-import type { FourCombo } from './fourStructure'
-import type { LightCombo } from './lightStructure'
 import { enumerateHeavyLight, HEAVY_LIGHT_NOTE, type HeavyLightClass } from './heavyLight'
 import { lorentzKind, type TheoryFieldLike } from './lightFields'
+import type { HeavyOperator } from './heavyOperator'
 
-export interface HeavyOperator {
-  id: string
-  order: number
-  sector: 'leading' | 'bilinear' | 'fourFermion' | 'heavyLight' | 'heavyHeavy'
-  latex: string
-  /** Building-block counts of each term (for counting rules; the order is the lowest term). */
-  terms: Array<Record<string, number>>
-  combo?: Combo
-  /** Four-fermion operators: the combination of contact structures (see fourStructure.ts). */
-  fourCombo?: FourCombo
-  /** Heavy–light operators: the combination of contact structures (see lightStructure.ts). */
-  lightCombo?: LightCombo
-  antiHermitian?: boolean
-  coefficient?: string
-  relations: CoefficientRelation[]
-  gaugeEomNote?: string
-  source?: string
-  /** Published forms: the printed operator on the enumerated basis as displayed. */
-  rewrite?: Array<{ id: string; coefficient: string }>
-  /** χ copies: the ψ-operator whose coefficient fixes this one, and the factor. */
-  fixedBy?: { id: string; factor: number }
-  /** Parity and time-reversal signs (absent = even). */
-  parityOdd?: boolean
-  timeOdd?: boolean
-}
+export type { HeavyOperator }
 
 export interface HeavyOrder {
   order: number

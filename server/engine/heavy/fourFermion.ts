@@ -5,7 +5,7 @@
  */
 import { EngineCancelledError, EngineInputError } from '../errors'
 import type { CancelFlag } from '../finite'
-import type { HeavyOperator } from './enumerate'
+import type { HeavyOperator } from './heavyOperator'
 import { conventionalFour } from './fourConventional'
 import { fourComboLatex, fourTerms } from './fourDisplay'
 import { fourFermionSpace } from './fourSpace'

@@ -19,7 +19,7 @@ import { contractions } from './candidates'
 import { pointTables, randomFourPoint, conjugatePoint, type FourPoint } from './fourVertex'
 import { levi } from './algebra'
 import { fieldTex } from './fieldTex'
-import type { HeavyOperator } from './enumerate'
+import type { HeavyOperator } from './heavyOperator'
 
 type Slot = 's1' | 's2' | 'b'
 export interface FieldStructure {

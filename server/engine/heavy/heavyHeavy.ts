@@ -15,7 +15,7 @@ import { symmetricFourCandidates } from './fourSpace'
 import { evalFourCombo, pointTables, randomFourPoint, type FourPoint } from './fourVertex'
 import { fourComboLatex, fourTerms } from './fourDisplay'
 import type { FourCombo } from './fourStructure'
-import type { HeavyOperator } from './enumerate'
+import type { HeavyOperator } from './heavyOperator'
 
 export interface HeavyHeavyOrder {
   order: number

@@ -13,7 +13,7 @@ import { conjugationPermutation, daggerLight, lightKey, lightStructures, lightTi
 import { identicalPermutations, lightComboValue, lightTables, randomLightPoint, type LightPoint, type LightTables } from './lightVertex'
 import { contactRank } from './contactSpace'
 import { lightComboLatex, lightTerms } from './lightDisplay'
-import type { HeavyOperator } from './enumerate'
+import type { HeavyOperator } from './heavyOperator'
 
 export interface HeavyLightClass {
   key: string

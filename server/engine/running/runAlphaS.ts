@@ -7,24 +7,10 @@ import { integrateOde, OdeRangeError, type CancelSignal } from './odeStepper'
 import { qcdBeta } from './qcdBeta'
 import { alphaSBelowThreshold, alphaSAboveThreshold, type DecouplingLoops, type HeavyMassKind } from './qcdDecoupling'
 import { RUNNING_CAUTION } from './caution'
-import { validateRunAlphaS } from './runAlphaSInput'
+import { validateRunAlphaS, type QcdThreshold, type RunAlphaSInput } from './runAlphaSInput'
 
-export interface QcdThreshold { name: string, mass: number, kind: HeavyMassKind }
-export interface RunAlphaSInput {
-  alphaS: number
-  muFrom: number
-  muTo: number
-  loops: 1 | 2 | 3 | 4
-  thresholds?: QcdThreshold[]
-  /** Powers of α_s/π kept in the decoupling relation: 1 or 2 (default: 2 when loops ≥ 3, else 1). */
-  decouplingLoops?: DecouplingLoops
-  /** Quarks lighter than every threshold (default 3: u, d, s; required when no thresholds are listed). */
-  lightFlavours?: number
-  /** Flavours at muFrom; only needed when muFrom sits exactly on a threshold mass. */
-  nfFrom?: number
-  onProgress?: (fraction: number, label: string) => void
-  signal?: CancelSignal
-}
+export type { QcdThreshold, RunAlphaSInput }
+
 export interface AlphaSTracePoint { mu: number, alphaS: number, nf: number }
 export interface ThresholdCrossing { name: string, mass: number, kind: HeavyMassKind, direction: 'down' | 'up', nfAbove: number, alphaAbove: number, alphaBelow: number }
 export interface RunAlphaSResult {

@@ -3,8 +3,25 @@
  * (which thresholds are crossed, in which order, and n_f at the start).
  */
 import { EngineInputError } from '../errors'
-import type { DecouplingLoops } from './qcdDecoupling'
-import type { QcdThreshold, RunAlphaSInput } from './runAlphaS'
+import type { DecouplingLoops, HeavyMassKind } from './qcdDecoupling'
+import type { CancelSignal } from './odeStepper'
+
+export interface QcdThreshold { name: string, mass: number, kind: HeavyMassKind }
+export interface RunAlphaSInput {
+  alphaS: number
+  muFrom: number
+  muTo: number
+  loops: 1 | 2 | 3 | 4
+  thresholds?: QcdThreshold[]
+  /** Powers of α_s/π kept in the decoupling relation: 1 or 2 (default: 2 when loops ≥ 3, else 1). */
+  decouplingLoops?: DecouplingLoops
+  /** Quarks lighter than every threshold (default 3: u, d, s; required when no thresholds are listed). */
+  lightFlavours?: number
+  /** Flavours at muFrom; only needed when muFrom sits exactly on a threshold mass. */
+  nfFrom?: number
+  onProgress?: (fraction: number, label: string) => void
+  signal?: CancelSignal
+}
 
 export interface ValidatedRun { nfFrom: number, down: boolean, crossed: QcdThreshold[], decouplingLoops: DecouplingLoops }
 
