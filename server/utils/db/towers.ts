@@ -55,9 +55,12 @@ export async function towerOf(theory: TheoryRow): Promise<TowerNode[]> {
 }
 
 /** Threshold tags of the given theories, by theory id. */
+/** What a threshold tag stores beside its text (written by the integrate-out step above). */
+export interface ThresholdTagDetails { group: string, betaShift: string, loop: string, scale: number, unit: string, valueMeV: number, parentTheoryId: number }
+
 export async function thresholdTagsOf(theoryIds: number[]) {
   const rows = theoryIds.length ? await useDb()('threshold_tags').whereIn('theory_id', theoryIds).orderBy('id').select('id', 'theory_id', 'term', 'field', 'text', 'details') : []
-  const out: Record<number, { id: number, term: string, field: string, text: string, details: unknown }[]> = {}
+  const out: Record<number, { id: number, term: string, field: string, text: string, details: ThresholdTagDetails | null }[]> = {}
   for (const r of rows) (out[r.theory_id] ??= []).push({ id: r.id, term: r.term, field: r.field, text: r.text, details: r.details })
   return out
 }

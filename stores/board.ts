@@ -30,12 +30,20 @@ export interface Rewrite { exact?: boolean, message?: string, vanishes: boolean,
 export interface BoardTag { id: number, operatorId: number, kind: string, label: string, authorId?: number | null, authorName?: string | null, authorImported?: boolean }
 export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null, authorImported?: boolean }
 type KeyHeaders = Record<string, string>
+export interface ClassCoverage { rank: number, required: number, complete: boolean }
+/** The basis itself, as GET /api/bases/:id sends it (server/utils/db/bases.ts boardData). */
+export interface BoardBasis {
+  id: number, theoryId: number, theoryName: string, theoryVersion: number, countingRule: string, maxOrder: number | null
+  classes: BoardClass[], note: string, createdAt: string
+}
+export interface BoardData { basis: BoardBasis, role: string, coverage?: Record<string, ClassCoverage>, tags: BoardTag[], notes: BoardNote[], operators: BoardOperator[] }
+interface MoveAnswer { operator: { version: number }, coverage: ClassCoverage, rewrite: Rewrite | null }
 
-export const useBasesStore = defineStore('bases', () => {
-  const basis = ref<any>(null)
+export const useBoardStore = defineStore('board', () => {
+  const basis = ref<BoardBasis | null>(null)
   const role = ref<string>('viewer')
   const columns = ref<Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }>>({})
-  const coverage = ref<Record<string, { rank: number, required: number, complete: boolean }>>({})
+  const coverage = ref<Record<string, ClassCoverage>>({})
   const tags = ref<BoardTag[]>([])
   const notes = ref<BoardNote[]>([])
   const rewrites = ref<Record<number, Rewrite | null>>({})
@@ -66,26 +74,26 @@ export const useBasesStore = defineStore('bases', () => {
     return o !== undefined && o !== String(op.order) ? o : null
   }
 
-  function setData(data: any) {
+  function setData(data: BoardData) {
     basis.value = data.basis
     role.value = data.role
     coverage.value = data.coverage ?? {}
     tags.value = data.tags
     notes.value = data.notes
     const cols: Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }> = {}
-    for (const c of data.basis.classes as BoardClass[]) cols[c.order] ??= { kept: [], set_aside: [] }
-    for (const op of data.operators as BoardOperator[]) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
+    for (const c of data.basis.classes) cols[c.order] ??= { kept: [], set_aside: [] }
+    for (const op of data.operators) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
     columns.value = cols
   }
   async function load(id: number) {
-    setData(await useRequestFetch()(`/api/bases/${id}`))
+    setData(await useRequestFetch()<BoardData>(`/api/bases/${id}`))
   }
 
   /** Called after vuedraggable already placed `op` at `index` of `column` (optimistic). */
   async function confirmMove(op: BoardOperator, column: 'kept' | 'set_aside', index: number) {
     message.value = ''
     try {
-      const res: any = await $fetch(`/api/operators/${op.id}/move`, { method: 'POST', body: { column, position: index, version: op.version } })
+      const res = await $fetch<MoveAnswer>(`/api/operators/${op.id}/move`, { method: 'POST', body: { column, position: index, version: op.version } })
       Object.assign(op, { column, version: res.operator.version })
       coverage.value[op.classKey] = res.coverage
       // Rewrites of this class referred to the old kept set: drop them (reloaded on demand).
@@ -95,7 +103,7 @@ export const useBasesStore = defineStore('bases', () => {
       if (column === 'set_aside') rewrites.value[op.id] = res.rewrite
     } catch (e) {
       message.value = apiMessage(e)
-      await load(basis.value.id)
+      await load(basis.value!.id)
     }
   }
   /** Keyboard alternative to dragging: move to the end of the other column. */
@@ -115,7 +123,7 @@ export const useBasesStore = defineStore('bases', () => {
     if (!tags.value.some((t) => t.id === tag.id)) tags.value.push(tag)
   }
   async function addNote(opId: number, body: string, headers: KeyHeaders) {
-    const { annotation } = await $fetch<{ annotation: BoardNote }>(`/api/theories/${basis.value.theoryId}/annotations`, { method: 'POST', headers, body: { operatorId: opId, body } })
+    const { annotation } = await $fetch<{ annotation: BoardNote }>(`/api/theories/${basis.value!.theoryId}/annotations`, { method: 'POST', headers, body: { operatorId: opId, body } })
     if (!notes.value.some((n) => n.id === annotation.id)) notes.value.push(annotation)
   }
   /** Delete a tag or a note; the undo toast offers its restore route, after which the board reloads. */
@@ -123,7 +131,7 @@ export const useBasesStore = defineStore('bases', () => {
     const res = await $fetch<{ undo: string }>(kind === 'tag' ? `/api/tags/${id}` : `/api/annotations/${id}`, { method: 'DELETE' })
     if (kind === 'tag') tags.value = tags.value.filter((t) => t.id !== id)
     else notes.value = notes.value.filter((n) => n.id !== id)
-    const basisId = basis.value.id
+    const basisId = basis.value!.id
     useUndoStore().offer(kind === 'tag' ? 'Tag removed.' : 'Note deleted.', async () => {
       await $fetch(res.undo, { method: 'POST' })
       if (basis.value?.id === basisId) await load(basisId)
