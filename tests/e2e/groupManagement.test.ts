@@ -1,5 +1,5 @@
 import { describe, it, expect, beforeAll, afterAll, inject } from 'vitest'
-import type { Browser, Page } from 'playwright-core'
+import type { Browser } from 'playwright-core'
 import { launchBrowser, newPage, screenshot, hydrated } from '../support/browser'
 import { uniqueEmail, signedUpClient } from '../support/client'
 import { signUpInBrowser } from '../support/signUp'

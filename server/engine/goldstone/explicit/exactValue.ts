@@ -247,7 +247,7 @@ export class ExactEvaluator {
     const inv = F.inv(fact)
     for (let a = 0; a < out.length; a++) {
       ext.forEach((x, i) => { vals[x] = Math.floor(a / 4 ** i) % 4 })
-      let sum = sp.zeroScalar()
+      const sum = sp.zeroScalar()
       for (let b = 0; b < 4 ** internal.length; b++) {
         let w = 1
         internal.forEach((x, i) => { const v = Math.floor(b / 4 ** i) % 4; vals[x] = v; w *= METRIC[v]! })

@@ -5,7 +5,6 @@
  */
 import { EngineInputError } from '../../errors'
 import { integrateOdeSystem } from '../odeSystem'
-import type { GaugeContent } from './gaugeContent'
 import { gaugeFlow, perturbativeMargins, slotLayout, type SlotLayout } from './gaugeFlow'
 import { readCouplings, startState, type GaugeCouplingValues, type GaugeRunInput } from './gaugeRunInput'
 import type { GaugeRunPoint, GaugeRunStop } from '../../../../shared/types/gaugeRunning'
