@@ -9,6 +9,7 @@ import { buildIfStale } from './lib/build.mjs'
 import { ensureDebianPackages, TEST_PACKAGES } from './lib/debian.mjs'
 import { root } from './lib/run.mjs'
 import { runVitest } from './lib/vitestRun.mjs'
+import { runCodeChecks, CODE_CHECKS } from './lib/codeChecks.mjs'
 
 const extra = process.argv.slice(2)
 const projects = extra.flatMap((a, i) => (a === '--project' ? [extra[i + 1]] : a.startsWith('--project=') ? [a.slice(10)] : []))
@@ -18,6 +19,9 @@ if (runs('api') || runs('e2e')) {
   if (!process.env.DATABASE_URL) await ensureLocalPostgres([])
   buildIfStale()
 }
+// On a full run (as CI does it) the code checks (import circles, ESLint, Prettier's layout) run
+// first and count as one test each.
+const checksFailed = extra.length > 0 ? null : runCodeChecks()
 // On a full run (as CI does it) the type check of app, server, shared code and tests counts as
 // one test: a type error fails the run. `npm run typecheck` runs it alone.
 const typecheck = extra.length > 0 ? null : spawnSync(process.execPath, [join(root, 'node_modules/vue-tsc/bin/vue-tsc.js'), '-b', '--noEmit'], { cwd: root, stdio: 'inherit' })
@@ -25,6 +29,11 @@ let { passed, failed } = runVitest(extra)
 if (typecheck) {
   if (typecheck.status === 0) passed += 1
   else { failed += 1; console.log('\ntype check failed (see the errors above)') }
+}
+if (checksFailed) {
+  passed += CODE_CHECKS.length - checksFailed.length
+  failed += checksFailed.length
+  for (const name of checksFailed) console.log(`\ncode check failed: ${name} (see the output above)`)
 }
 console.log(`\n${passed} passed, ${failed} failed`)
 process.exit(failed > 0 ? 1 : 0)
