@@ -84,7 +84,7 @@ export function labelsReality(rs: RootSystem, labels: readonly number[]): Realit
 export function irrepIndicator(t: FiniteGroupTable, i: number): Reality {
   const chi = t.irreps[i]!.chi
   let s: Eis = E0
-  t.classes.forEach((cl, c) => { s = eAdd(s, eScale(cl.size, chi[cl.powers[2 % cl.order]!]!)) })
+  t.classes.forEach((cl) => { s = eAdd(s, eScale(cl.size, chi[cl.powers[2 % cl.order]!]!)) })
   if (s[1] !== 0 || s[0] % t.order !== 0) throw new Error(`irrepIndicator: ${t.label}: class sum is not a multiple of the order ${t.order}`)
   const nu = s[0] / t.order
   return nu === 1 ? 'real' : nu === -1 ? 'pseudoreal' : 'complex'

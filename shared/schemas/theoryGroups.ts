@@ -13,7 +13,6 @@ export interface GroupLike { name: string; type: string; n?: number; gauge: bool
 export type { RepValue }
 
 type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void
-type Reality = 'real' | 'pseudoreal' | 'complex'
 
 /** Message for a bad n of the group kind, or undefined when n is fine. */
 export function groupNProblem(g: GroupLike): string | undefined {

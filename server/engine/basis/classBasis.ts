@@ -17,7 +17,8 @@ import { identicalLegPermutations, type LegPermutation } from './symmetry'
 import { formatLorentz } from './inputSyntax'
 import { writtenTerms } from './writtenOperator'
 import { combinationText } from './combinationText'
-import { looksPrinted, notationColumnTerms } from '../notation/written'
+import { looksPrinted } from './printedText'
+import { EngineConsistencyError } from '../errors'
 import type { SuStructure } from './gaugeStructures'
 import { conjugateLegMap, conjugateLorentz, conjugateSu } from './conjugation'
 import type { LorentzStructure } from './lorentzStructures'
@@ -46,7 +47,16 @@ export interface ClassOptions {
   signal?: { aborted: boolean }
   /** Extra random rows beyond the number of candidate columns (default 12 + 25 %). */
   margin?: number
+  /**
+   * Reads an operator to keep that is typed in printed notation (notation/written.ts
+   * `notationColumnTerms`); passed in by the callers so this module does not import the notation
+   * engine, which builds class bases itself.
+   */
+  printed?: PrintedReader
 }
+
+/** Column terms of a printed operator to keep in a class. */
+export type PrintedReader = (theory: Theory, cls: OperatorClass, text: string) => Column['terms']
 
 /** How many redundant candidates per class are kept as alternatives for the board. */
 export const MAX_ALTERNATIVES = 4
@@ -61,13 +71,16 @@ function derivativeScore(c: Candidate, legs: Species[], preferred: Set<string>):
   return c.lorentz.derivs.reduce((s, d, i) => s + (preferred.has(legs[i]!.label) ? 0 : d), 0)
 }
 
-function buildColumns(theory: Theory, particles: Species[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined): Column[] {
+function buildColumns(theory: Theory, particles: Species[], cls: OperatorClass, cands: Candidate[], gauge: SuStructure[][], pr: Priorities | undefined, printed?: PrintedReader): Column[] {
   const pref = new Set(pr?.derivativesOn ?? [])
   const keptTexts = pr?.keep?.[cls.key] ?? []
   const primes = PrimeSet.working()
   const kept: Column[] = keptTexts.map((text) => {
     // A kept text may be a Hermitian or parity combination as an earlier basis wrote it, or printed notation.
-    if (looksPrinted(text)) return { text, source: 'kept', terms: notationColumnTerms(theory, cls, text) }
+    if (looksPrinted(text)) {
+      if (!printed) throw new EngineConsistencyError('classBasis', `a printed operator to keep ("${text}") reached a class basis without a reader for printed notation`)
+      return { text, source: 'kept', terms: printed(theory, cls, text) }
+    }
     const terms = writtenTerms(particles, cls, text, gauge)
     return { text, source: 'kept', terms: terms.map((t) => ({ coeff: primes.image(t.coeff), lorentz: t.lorentz, gauge: t.gauge })) }
   })
@@ -121,7 +134,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
   const { candidates, gauge } = classCandidates(theory, cls)
   const perms = identicalLegPermutations(cls.legs)
-  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(theory, particles, cls, candidates, gauge, opts.priorities)
+  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(theory, particles, cls, candidates, gauge, opts.priorities, opts.printed)
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
   const hermCols = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
   const selfParity = opts.priorities?.preferParity !== false && parityImage(particles, cls).image?.key === cls.key

@@ -5,7 +5,7 @@
  * not CP eigenvectors (kept as typed), the class takes the count's split.
  */
 import type { DimensionCount } from '../counting/countOperators'
-import type { ClassReport } from './buildBasis'
+import type { ClassReport } from './classReport'
 
 /**
  * Compare or fill report.cpEven / cpOdd from the count of the same dimension.

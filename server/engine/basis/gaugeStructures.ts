@@ -11,7 +11,7 @@ import type { PrimeField } from '../finite/primeField'
 import type { SuKind } from '../theory/model'
 import { evaluateSuChains } from './suFastPath'
 import { type TensorShape, boxColumns, boxes } from './tensorShape'
-import { type TensorWave, randomTensorWave } from './tensorWaves'
+import { randomTensorWave } from './tensorWaves'
 import { evaluateSuTensor } from './tensorContraction'
 
 import type { Slot, SuStructure, SuWave } from './suStructure'

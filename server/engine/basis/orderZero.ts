@@ -14,6 +14,7 @@ import { basisSpecies } from './species'
 import { conjugateClass, parseClassKey, type OperatorClass } from './classKey'
 import { describeOperators, describeAlternative, type BasisOperator } from './describe'
 import { orderZeroBilinears, type OrderZeroRole, type OrderZeroTerm } from './orderZeroBilinears'
+import { notationColumnTerms } from '../notation/written'
 
 export const ORDER_ZERO_NOTE = 'Order 0 is the renormalizable Lagrangian (mass dimension ≤ 4). The equations of motion are not used here: '
   + 'the kinetic terms define them. Assumed: matter kinetic terms canonical (mixing of fields with equal quantum numbers removed by field redefinitions, so they carry no free parameter); '
@@ -78,7 +79,7 @@ function contactClasses(theory: Theory, opts: { priorities?: Priorities, signal?
       if (parsed.legs.length < 3) continue
       const conj = conjugateClass(particles, parsed)
       const cls = conj.legs.filter(p => p.conj).length < parsed.legs.filter(p => p.conj).length ? conj : parsed
-      const b = classBasis(theory, cls, opts)
+      const b = classBasis(theory, cls, { ...opts, printed: notationColumnTerms })
       done.add(b.key).add(b.conjugateKey)
       if (b.rank === 0) continue
       const primes = b.primes.map(pd => pd.F.p)

@@ -6,7 +6,7 @@
  * evaluation (tensorContraction.ts). Reference: common practice (index sums).
  */
 import type { PrimeField } from '../finite/primeField'
-import type { SuStructure } from './gaugeStructures'
+import type { SuStructure } from './suStructure'
 
 interface Choice {
   sign: number

@@ -11,6 +11,7 @@ import { basisSpecies } from '../basis/species'
 import { combinationValues } from '../basis/evaluation'
 import type { Fingerprint } from './fingerprints'
 import { looksPrinted, notationValues } from '../notation/written'
+import { notationColumnTerms } from '../notation/written'
 
 /**
  * The fingerprints of several operators of one class (typed ones, or kept operators by their
@@ -22,7 +23,7 @@ import { looksPrinted, notationValues } from '../notation/written'
  * `priorities` must be the run's own: they fix how many sample points the class uses.
  */
 export function typedFingerprints(theory: Theory, classKey: string, texts: readonly string[], priorities?: Priorities): (Fingerprint & { timesI?: boolean })[] {
-  const b = classBasis(theory, classKey, { priorities })
+  const b = classBasis(theory, classKey, { priorities, printed: notationColumnTerms })
   const particles = basisSpecies(theory)
   return texts.map((text) => {
     if (looksPrinted(text)) {

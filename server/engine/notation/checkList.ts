@@ -23,6 +23,7 @@ import { parseNotation, parseOptions } from './parse'
 import { lowerOperator } from './lower'
 import { conjugateItems } from './conjugate'
 import { RationalSpan } from './span'
+import { notationColumnTerms } from './written'
 
 export interface CheckOptions { aliases?: Record<string, string>; signal?: { aborted: boolean }; priorities?: Priorities }
 
@@ -61,7 +62,7 @@ function orderBases(theory: Theory, dimension: number, signal?: { aborted: boole
     for (const cls of [parsed, conjugateClass(particles, parsed)]) {
       if (seen.has(cls.key)) continue
       seen.add(cls.key)
-      const b = classBasis(theory, cls, { signal, priorities })
+      const b = classBasis(theory, cls, { signal, priorities, printed: notationColumnTerms })
       if (b.rank > 0) out.push(b)
     }
   }

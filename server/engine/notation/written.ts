@@ -12,12 +12,10 @@ import type { OperatorClass } from '../basis/classKey'
 import { rewriteOperator } from '../basis/rewrite'
 import { PrimeSet } from '../finite/primeSet'
 import { isZero } from '../exact/rational'
-import { notationTarget, type NotationTarget } from './index'
+import { notationTarget, type NotationTarget } from './target'
 
 /** True when a text is meant as printed notation rather than the bracket syntax. */
-export function looksPrinted(text: string): boolean {
-  return /[A-Za-z\\]/.test(text.replace(/\{\s*g\s*:\s*\d+\s*\}/g, '').replace(/\bs\s*\d\d/g, '').replace(/h\.c\./g, '').replace(/\bP\b/g, ''))
-}
+export { looksPrinted } from '../basis/printedText'
 
 /**
  * Symmetrised values of a printed operator at a class basis's points, per prime.
