@@ -25,7 +25,11 @@ const base = `http://127.0.0.1:${PORT}`
 
 async function waitHealthy() {
   for (let i = 0; i < 300; i++) {
-    try { if ((await fetch(`${base}/api/health`)).ok) return } catch { /* starting */ }
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return
+    } catch {
+      /* starting */
+    }
     await new Promise((r) => setTimeout(r, 200))
   }
   throw new Error('bench server did not start')
@@ -45,7 +49,9 @@ async function seed(db: ReturnType<typeof knexFactory>) {
   const theory = findPreset('smeft')!.theory
   const { theory: t } = await post('/api/groups/bench-group/theories', { definition: { ...theory, name: 'SMEFT bench' } })
   const params = { maxDim: 6, nf: 1, theory, theoryVersion: 1 }
-  const [run] = await db('runs').insert({ theory_id: t.id, kind: 'basis', params: JSON.stringify(params), status: 'running' }).returning('*')
+  const [run] = await db('runs')
+    .insert({ theory_id: t.id, kind: 'basis', params: JSON.stringify(params), status: 'running' })
+    .returning('*')
   await persistRunResult(db, { ...run, params }, buildBasis(theory, { maxDim: 6, nf: 1 }))
   const basis = await db('bases').where({ run_id: run.id }).first('id')
   return { cookie, basisId: basis.id as number, theoryId: t.id as number }
@@ -65,7 +71,7 @@ async function latency(url: string, headers: Record<string, string>) {
   await autocannon({ url, connections: 50, duration: 5, headers })
   const times: number[] = []
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const run = autocannon({ url, connections: 50, duration: 8, headers }, (error, res) => error ? reject(error) : resolve(res))
+    const run = autocannon({ url, connections: 50, duration: 8, headers }, (error, res) => (error ? reject(error) : resolve(res)))
     run.on('response', (_client, _status, _bytes, ms) => times.push(ms))
   })
   times.sort((a, b) => a - b)
@@ -87,7 +93,13 @@ async function boardInteractive(cookie: string, basisId: number) {
       await page.waitForFunction(() => !!(document.querySelector('#__nuxt') as any)?.__vue_app__, undefined, { timeout: 30_000 })
       await page.locator('[data-operator] button').first().waitFor({ state: 'visible' })
       if (i > 0) times.push(performance.now() - t0) // the first visit warms the server
-      if (process.env.BENCH_DEBUG) console.error(Math.round(performance.now() - t0), await page.evaluate(() => JSON.stringify((performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming).toJSON(), ['responseStart', 'responseEnd', 'domContentLoadedEventEnd', 'loadEventEnd'])))
+      if (process.env.BENCH_DEBUG)
+        console.error(
+          Math.round(performance.now() - t0),
+          await page.evaluate(() =>
+            JSON.stringify((performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming).toJSON(), ['responseStart', 'responseEnd', 'domContentLoadedEventEnd', 'loadEventEnd']),
+          ),
+        )
     }
   } finally {
     await browser.close()
@@ -103,7 +115,8 @@ export default async function bench() {
   const db = knexFactory({ client: 'pg', connection: url })
   await db.migrate.latest({ migrationSource })
   const server = spawn(process.execPath, ['.output/server/index.mjs'], {
-    cwd: root, stdio: ['ignore', 'ignore', 'inherit'],
+    cwd: root,
+    stdio: ['ignore', 'ignore', 'inherit'],
     env: { ...process.env, DATABASE_URL: url, PORT: String(PORT), HOST: '127.0.0.1', NUXT_SESSION_PASSWORD: randomBytes(32).toString('hex'), NODE_ENV: 'production', DB_POOL_MAX: '20' },
   })
   try {

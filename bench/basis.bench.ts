@@ -20,7 +20,14 @@ function measure(maxDim: number, nf: number, repeats: number, target: number) {
   let events = 0
   for (let i = 0; i < repeats; i++) {
     const t0 = performance.now()
-    const r = buildBasis(smeft, { minDim: maxDim, maxDim, nf, onProgress: () => { events++ } })
+    const r = buildBasis(smeft, {
+      minDim: maxDim,
+      maxDim,
+      nf,
+      onProgress: () => {
+        events++
+      },
+    })
     times.push(performance.now() - t0)
     top = r.byDimension.at(-1)!.operators
     ok &&= r.byDimension.every((d) => d.tallyOk)
@@ -34,9 +41,18 @@ function cancelLatency() {
   let abortedAt = 0
   const t0 = performance.now()
   try {
-    buildBasis(smeft, { maxDim: 8, minDim: 8, nf: 1, signal, onProgress: () => {
-      if (!signal.aborted && performance.now() - t0 > 500) { signal.aborted = true; abortedAt = performance.now() }
-    } })
+    buildBasis(smeft, {
+      maxDim: 8,
+      minDim: 8,
+      nf: 1,
+      signal,
+      onProgress: () => {
+        if (!signal.aborted && performance.now() - t0 > 500) {
+          signal.aborted = true
+          abortedAt = performance.now()
+        }
+      },
+    })
   } catch (e) {
     if ((e as Error).name !== 'EngineCancelledError') throw e
   }

@@ -34,8 +34,12 @@ function measure(maxDim: number, nf: number, repeats: number, target: number, ex
     top = r.byDimension.at(-1)!.operators
   }
   return {
-    median_ms: round(median(times)), cold_ms: round(cold), repeats,
-    top_dimension_operators: top, expected_operators: expected, target_ms: target,
+    median_ms: round(median(times)),
+    cold_ms: round(cold),
+    repeats,
+    top_dimension_operators: top,
+    expected_operators: expected,
+    target_ms: target,
   }
 }
 

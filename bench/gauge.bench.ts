@@ -15,7 +15,10 @@ const SM = parseTheory(smeft)
 const SM_ALPHA = { colour: ALPHA_S_MZ, weak: 0.0338, hypercharge: 0.0102 }
 
 function qcd(quarks: string[]): Theory {
-  const fields: TheoryField[] = quarks.flatMap((q) => [{ name: q, lorentz: 'left-weyl', reps: { colour: [1, 0] } }, { name: `${q}R`, lorentz: 'right-weyl', reps: { colour: [1, 0] } }])
+  const fields: TheoryField[] = quarks.flatMap((q) => [
+    { name: q, lorentz: 'left-weyl', reps: { colour: [1, 0] } },
+    { name: `${q}R`, lorentz: 'right-weyl', reps: { colour: [1, 0] } },
+  ])
   return parseTheory({ name: `QCD${quarks.length}`, frame: 'relativistic', groups: [{ name: 'colour', type: 'SU', n: 3, gauge: true }], fields })
 }
 
@@ -24,13 +27,16 @@ function threeU1s(): Theory {
   const bl: Record<string, string> = { Q: '1/3', u: '1/3', d: '1/3', L: '-1', e: '-1' }
   const fields = SM.fields.map((f) => (bl[f.name] ? { ...f, charges: { ...f.charges, BL: bl[f.name]! } } : f))
   return parseTheory({
-    name: 'SM x U(1)BL x U(1)D', frame: 'relativistic',
+    name: 'SM x U(1)BL x U(1)D',
+    frame: 'relativistic',
     groups: [...SM.groups, { name: 'BL', type: 'U1', gauge: true }, { name: 'D', type: 'U1', gauge: true }],
-    fields: [...fields,
+    fields: [
+      ...fields,
       { name: 'nu', lorentz: 'right-weyl', charges: { BL: '-1' }, flavors: 3 },
       { name: 'Phi', lorentz: 'scalar', charges: { BL: '2', D: '1' } },
       { name: 'psi', lorentz: 'left-weyl', reps: { weak: [1] }, charges: { hypercharge: '1/2', D: '1' } },
-      { name: 'psiR', lorentz: 'right-weyl', reps: { weak: [1] }, charges: { hypercharge: '1/2', D: '1' } }],
+      { name: 'psiR', lorentz: 'right-weyl', reps: { weak: [1] }, charges: { hypercharge: '1/2', D: '1' } },
+    ],
   })
 }
 
@@ -39,13 +45,22 @@ export default async function gaugeBench(): Promise<Record<string, number | Reco
   const report = (loops: 1 | 2) => gaugeRunningReport(sm, { loops, muFromGeV: Z_MASS_GEV, alpha: SM_ALPHA, plotFromGeV: 1, plotToGeV: 1e19, muToGeV: 1e16 })
   const names = ['u', 'd', 's', 'c', 'b', 't']
   const tower = towerGaugeContent([
-    { theory: qcd(names), thresholdGeV: null }, { theory: qcd(names.slice(0, 5)), thresholdGeV: 172.57 },
-    { theory: qcd(names.slice(0, 4)), thresholdGeV: 4.183 }, { theory: qcd(names.slice(0, 3)), thresholdGeV: 1.273 },
+    { theory: qcd(names), thresholdGeV: null },
+    { theory: qcd(names.slice(0, 5)), thresholdGeV: 172.57 },
+    { theory: qcd(names.slice(0, 4)), thresholdGeV: 4.183 },
+    { theory: qcd(names.slice(0, 3)), thresholdGeV: 1.273 },
   ])
   const mixed = gaugeContentOf(threeU1s())
   let points = 0
   const mixedRun = medianTime(5, () => {
-    const r = runGaugeCouplings({ content: mixed, loops: 2, muFromGeV: 1e3, muToGeV: 1e-3 * 1e22, alpha: { ...SM_ALPHA, BL: 0.005, D: 0.005 }, mixing: [{ groups: ['hypercharge', 'D'], epsilon: 0.01 }] })
+    const r = runGaugeCouplings({
+      content: mixed,
+      loops: 2,
+      muFromGeV: 1e3,
+      muToGeV: 1e-3 * 1e22,
+      alpha: { ...SM_ALPHA, BL: 0.005, D: 0.005 },
+      mixing: [{ groups: ['hypercharge', 'D'], epsilon: 0.01 }],
+    })
     points = r.points.length
   })
   return {

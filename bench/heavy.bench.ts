@@ -17,7 +17,12 @@ import { enumerateHeavyHeavy } from '../server/engine/heavy/heavyHeavy'
 import { enumerateFourField } from '../server/engine/heavy/fourField'
 import { median } from './support/timing'
 
-interface Figure { median_ms: number, repeats: number, count: number, expected: number | null }
+interface Figure {
+  median_ms: number
+  repeats: number
+  count: number
+  expected: number | null
+}
 
 function time(repeats: number, expected: number | null, f: () => number): Figure {
   const times: number[] = []
@@ -37,12 +42,24 @@ function fromWords(N: number): number {
   const els = seeds.flatMap((b) => {
     const sym = simplifyCombo([...b, ...thetaCombo(b)])
     if (!sym.length) return []
-    return [false, true].map((anti) => simplifyCombo([...sym, ...daggerCombo(sym).map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))])).filter((c) => c.length).map((c) => expandCombo(c))
+    return [false, true]
+      .map((anti) => simplifyCombo([...sym, ...daggerCombo(sym).map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))]))
+      .filter((c) => c.length)
+      .map((c) => expandCombo(c))
   })
-  return new QuotientSpace(els, relationStructures(5).map((s) => expandStructure(s)).filter((e) => e.size > 0), { colorN: N }).dimension
+  return new QuotientSpace(
+    els,
+    relationStructures(5)
+      .map((s) => expandStructure(s))
+      .filter((e) => e.size > 0),
+    { colorN: N },
+  ).dimension
 }
 
-const electron: TheoryFieldLike[] = [{ name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }]
+const electron: TheoryFieldLike[] = [
+  { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } },
+  { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } },
+]
 
 export default async function heavyBench(): Promise<Record<string, Figure>> {
   return {
@@ -50,11 +67,33 @@ export default async function heavyBench(): Promise<Record<string, Figure>> {
     'SU(3) bilinears 1/m^4': time(3, 25, () => orderSpaceFor(4, defaultConfig(3)).space.dimension),
     'SU(3) 1/m^4 from D/T words (check)': time(1, 25, () => fromWords(3)),
     'SU(3) bilinears 1/m^4 without P and T': time(1, 88, () => orderSpaceFor(4, { ...defaultConfig(3), parity: false, timeReversal: false }).space.dimension),
-    'SU(3)xU(1) bilinears 1/m^3': time(3, 19, () => orderSpaceFor(3, { setup: { colorN: 3, factors: [{ kind: 'su', coupled: true }, { kind: 'u1', coupled: true }] }, parity: true, timeReversal: true }).space.dimension),
-    'heavy-light lepton + electron to 1/m^4': time(3, null, () => enumerateHeavyLight({
-      particle: 'mu', heavy: { reps: {}, charges: { QED: '-1' } }, fields: electron, groups: [{ name: 'QED', type: 'U1', gauge: true }],
-      maxOrder: 4, parity: true, timeReversal: true,
-    }).classes.reduce((s, c) => s + c.count, 0)),
+    'SU(3)xU(1) bilinears 1/m^3': time(
+      3,
+      19,
+      () =>
+        orderSpaceFor(3, {
+          setup: {
+            colorN: 3,
+            factors: [
+              { kind: 'su', coupled: true },
+              { kind: 'u1', coupled: true },
+            ],
+          },
+          parity: true,
+          timeReversal: true,
+        }).space.dimension,
+    ),
+    'heavy-light lepton + electron to 1/m^4': time(3, null, () =>
+      enumerateHeavyLight({
+        particle: 'mu',
+        heavy: { reps: {}, charges: { QED: '-1' } },
+        fields: electron,
+        groups: [{ name: 'QED', type: 'U1', gauge: true }],
+        maxOrder: 4,
+        parity: true,
+        timeReversal: true,
+      }).classes.reduce((s, c) => s + c.count, 0),
+    ),
     'heavy-heavy SU(2) 1/m^4': time(3, 12, () => enumerateHeavyHeavy(4, 2, 'N', true).count),
     'four-fermion with B, SU(3)': time(3, 4, () => enumerateFourField(3, 'psi', 'chi').basis.length),
   }

@@ -17,13 +17,15 @@ import { longestStallDuring } from './support/timing'
 const threads = () => Number(/Threads:\s+(\d+)/.exec(readFileSync('/proc/self/status', 'utf8'))![1])
 const mb = (bytes: number) => Math.round(bytes / 2 ** 20)
 
-
 /** Peak threads and RSS growth while `work` runs (sampled every 20 ms). */
 async function peakOf(work: () => Promise<unknown>) {
   const rss0 = process.memoryUsage().rss
   let peakThreads = threads()
   let peakRss = rss0
-  const timer = setInterval(() => { peakThreads = Math.max(peakThreads, threads()); peakRss = Math.max(peakRss, process.memoryUsage().rss) }, 20)
+  const timer = setInterval(() => {
+    peakThreads = Math.max(peakThreads, threads())
+    peakRss = Math.max(peakRss, process.memoryUsage().rss)
+  }, 20)
   await work()
   clearInterval(timer)
   return { peakThreads, rssGrowthMB: mb(peakRss - rss0) }
@@ -33,7 +35,10 @@ async function peakOf(work: () => Promise<unknown>) {
 async function ladderBlock() {
   const doc = hostileLadder()
   const after = await longestStallDuring(() => compute('ladder', doc as never, 'bench'))
-  const refusal = await compute('ladder', doc as never, 'bench').then(() => '', (e: Error) => e.message.slice(0, 90))
+  const refusal = await compute('ladder', doc as never, 'bench').then(
+    () => '',
+    (e: Error) => e.message.slice(0, 90),
+  )
   return { after_block_ms: after, refusal }
 }
 
@@ -48,18 +53,39 @@ async function quickCounts() {
 }
 
 async function chunkedBodies(read: (event: never) => Promise<unknown>) {
-  const app = createApp().use('/', defineEventHandler(async (event) => { await read(event as never).catch(() => undefined); return 'done' }))
+  const app = createApp().use(
+    '/',
+    defineEventHandler(async (event) => {
+      await read(event as never).catch(() => undefined)
+      return 'done'
+    }),
+  )
   const server = createServer(toNodeListener(app)).listen(0)
   const port = (server.address() as { port: number }).port
-  const one = () => new Promise<void>((resolve) => {
-    const chunk = Buffer.alloc(64 * 1024, 0x20)
-    let sent = 0
-    let done = false
-    const req = request({ port, method: 'POST', headers: { 'transfer-encoding': 'chunked' } }, (res) => { done = true; res.resume(); req.destroy(); resolve() })
-    req.on('error', () => { done = true; resolve() })
-    const pump = () => { while (!done && sent < 50 * 2 ** 20) { sent += chunk.length; if (!req.write(chunk)) return void req.once('drain', pump) } if (!done) req.end() }
-    pump()
-  })
+  const one = () =>
+    new Promise<void>((resolve) => {
+      const chunk = Buffer.alloc(64 * 1024, 0x20)
+      let sent = 0
+      let done = false
+      const req = request({ port, method: 'POST', headers: { 'transfer-encoding': 'chunked' } }, (res) => {
+        done = true
+        res.resume()
+        req.destroy()
+        resolve()
+      })
+      req.on('error', () => {
+        done = true
+        resolve()
+      })
+      const pump = () => {
+        while (!done && sent < 50 * 2 ** 20) {
+          sent += chunk.length
+          if (!req.write(chunk)) return void req.once('drain', pump)
+        }
+        if (!done) req.end()
+      }
+      pump()
+    })
   const figures = await peakOf(() => Promise.all(Array.from({ length: 10 }, one)))
   server.close()
   return figures

@@ -14,7 +14,6 @@ import { SMALL_THEORY } from '../tests/support/fixtures'
 const STEPS = [{ id: 1, name: 'Two scalars', theory: SMALL_THEORY, thresholdGeV: null }]
 const RUNNING = (i: number) => ({ steps: STEPS, request: { loops: 2 as const, muFromGeV: 91.1876, alpha: { U: 0.01 + i / 1e4 }, plotFromGeV: 1, plotToGeV: 1e30 } })
 
-
 /** The gauge running of a 30-decade range, on the loop and through the pool (5 different inputs each, medians). */
 async function gaugeRunningBlock() {
   await compute('gaugeRunning', RUNNING(99), 'bench') // boot the running lane's thread

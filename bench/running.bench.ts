@@ -28,11 +28,23 @@ export default async function runningBench(): Promise<Record<string, number | Re
     alphaS_1loop_MZ_to_1GeV: medianTime(15, () => runAlphaS({ alphaS: ALPHA_S_MZ, muFrom: Z_MASS_GEV, muTo: 1, loops: 1, thresholds: BC })),
     alphaQED_1loop_all_fermions_to_MZ: medianTime(50, () => runAlphaQED({ muTo: Z_MASS_GEV })),
     alphaQED_at_MZ_onshell_and_msbar: medianTime(50, () => alphaQedAtZ({ deltaAlphaHad5: 0.02766 })),
-    scale_ladder_hydrogen_exact: medianTime(50, () => buildScaleLadder({
-      scales: [{ name: 'me', value: '0.51099895000', unit: 'MeV' }, { name: 'mp', value: '938.27208816', unit: 'MeV' }, { name: 'mb', value: '4.18', unit: 'GeV' }],
-      parameters: [{ name: 'alpha', numerator: '1', denominator: '137.035999084' }, { name: 'r', numerator: 'me', denominator: 'mb' }],
-      derived: [{ name: 'Ry', from: 'me', factor: '1/2', powers: { alpha: 2 }, unit: 'eV' }],
-      precisionTarget: 1e-6,
-    }, [0, 1, 2, 3, 4, 5, 6, 7, 8, { order: 'b', powers: { r: 2 } }])),
+    scale_ladder_hydrogen_exact: medianTime(50, () =>
+      buildScaleLadder(
+        {
+          scales: [
+            { name: 'me', value: '0.51099895000', unit: 'MeV' },
+            { name: 'mp', value: '938.27208816', unit: 'MeV' },
+            { name: 'mb', value: '4.18', unit: 'GeV' },
+          ],
+          parameters: [
+            { name: 'alpha', numerator: '1', denominator: '137.035999084' },
+            { name: 'r', numerator: 'me', denominator: 'mb' },
+          ],
+          derived: [{ name: 'Ry', from: 'me', factor: '1/2', powers: { alpha: 2 }, unit: 'eV' }],
+          precisionTarget: 1e-6,
+        },
+        [0, 1, 2, 3, 4, 5, 6, 7, 8, { order: 'b', powers: { r: 2 } }],
+      ),
+    ),
   }
 }

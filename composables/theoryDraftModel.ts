@@ -29,10 +29,19 @@ export interface DraftField extends DraftLabels {
   display: string
   description?: string
 }
-export interface DraftWeight { uid: string, block: string, value: string }
+export interface DraftWeight {
+  uid: string
+  block: string
+  value: string
+}
 export interface DraftRule {
-  uid: string, name: string, kind: CountingKind, weights: DraftWeight[], offset: string
-  parameter?: unknown, description?: string
+  uid: string
+  name: string
+  kind: CountingKind
+  weights: DraftWeight[]
+  offset: string
+  parameter?: unknown
+  description?: string
 }
 export interface TheoryDraft {
   name: string
@@ -67,7 +76,20 @@ export function newGroup(): DraftGroup {
 }
 
 export function newField(): DraftField {
-  return { uid: newUid('f'), name: '', lorentz: 'scalar', real: false, gaugeOf: '', flavors: '', mass: { symbol: '', number: '', unit: '' }, display: '', reps: {}, charges: {}, strayReps: {}, strayCharges: {} }
+  return {
+    uid: newUid('f'),
+    name: '',
+    lorentz: 'scalar',
+    real: false,
+    gaugeOf: '',
+    flavors: '',
+    mass: { symbol: '', number: '', unit: '' },
+    display: '',
+    reps: {},
+    charges: {},
+    strayReps: {},
+    strayCharges: {},
+  }
 }
 
 export function newCoupling(): DraftCoupling {
@@ -96,8 +118,14 @@ export function theoryToDraft(input: unknown): TheoryDraft {
   const rules = list(input.countingRules).map((r) => ruleToDraft(isRecord(r) ? r : {}))
   const frame = input.frame === 'heavy' || input.frame === 'goldstone' ? input.frame : 'relativistic'
   return {
-    name: text(input.name), description: text(input.description), frame, maxOrder: text(input.maxOrder),
-    groups, fields, countingRules: rules, hasRules: Array.isArray(input.countingRules),
+    name: text(input.name),
+    description: text(input.description),
+    frame,
+    maxOrder: text(input.maxOrder),
+    groups,
+    fields,
+    countingRules: rules,
+    hasRules: Array.isArray(input.countingRules),
     ...(input.heavy !== undefined ? { heavy: heavyToDraft(input.heavy, byName) } : {}),
     ...(input.goldstone !== undefined ? { goldstone: goldstoneToDraft(input.goldstone) } : {}),
     couplings: list(input.couplings).map((c) => couplingToDraft(c, newUid('c'))),
@@ -123,8 +151,11 @@ function ruleToDraft(r: Record<string, unknown>): DraftRule {
   const kinds = ['massRatio', 'velocity', 'momentumRatio', 'custom']
   const weights = Object.entries(isRecord(r.weights) ? r.weights : {}).map(([block, value]) => ({ uid: newUid('w'), block, value: text(value) }))
   return {
-    uid: newUid('r'), name: text(r.name), kind: (kinds.includes(String(r.kind)) ? r.kind : 'massRatio') as CountingKind,
-    weights, offset: text(r.offset),
+    uid: newUid('r'),
+    name: text(r.name),
+    kind: (kinds.includes(String(r.kind)) ? r.kind : 'massRatio') as CountingKind,
+    weights,
+    offset: text(r.offset),
     ...(r.parameter !== undefined ? { parameter: r.parameter } : {}),
     ...(r.description !== undefined ? { description: text(r.description) } : {}),
   }
@@ -134,7 +165,7 @@ function ruleToDraft(r: Record<string, unknown>): DraftRule {
  * The theory file of a draft (to be validated by TheorySchema), with the problems found while
  * reading typed numbers (those values are left out of the file and reported at their path).
  */
-export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>, issues: DraftIssue[] } {
+export function draftToTheory(d: TheoryDraft): { theory: Record<string, unknown>; issues: DraftIssue[] } {
   const issues: DraftIssue[] = []
   const names = new Map(d.groups.map((g) => [g.uid, g.name]))
   const theory: Record<string, unknown> = { name: d.name.trim() }
@@ -196,15 +227,23 @@ function readInt(raw: string, path: (string | number)[], issues: DraftIssue[], m
 
 /** Where an issue is shown: its path cut to the depth of one input ("fields.4.charges.Y"). */
 export function issueKey(path: readonly PropertyKey[]): string {
-  if (path[0] === 'goldstone') return path.slice(0, path[1] === 'sources' ? 3 : 2).map(String).join('.')
+  if (path[0] === 'goldstone')
+    return path
+      .slice(0, path[1] === 'sources' ? 3 : 2)
+      .map(String)
+      .join('.')
   if (path[0] === 'heavy') {
-    const depth = path[1] === 'particle' && (path[2] === 'reps' || path[2] === 'charges') ? 4
-      : path[1] === 'particle' || path[1] === 'antiparticle' ? 3 : 2
+    const depth = path[1] === 'particle' && (path[2] === 'reps' || path[2] === 'charges') ? 4 : path[1] === 'particle' || path[1] === 'antiparticle' ? 3 : 2
     return path.slice(0, depth).map(String).join('.')
   }
-  const depth = path[0] === 'fields' && (path[2] === 'reps' || path[2] === 'charges') ? 4
-    : path[0] === 'countingRules' && path[2] === 'weights' ? 4
-      : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' || path[0] === 'couplings' ? 3 : 1
+  const depth =
+    path[0] === 'fields' && (path[2] === 'reps' || path[2] === 'charges')
+      ? 4
+      : path[0] === 'countingRules' && path[2] === 'weights'
+        ? 4
+        : path[0] === 'groups' || path[0] === 'fields' || path[0] === 'countingRules' || path[0] === 'couplings'
+          ? 3
+          : 1
   return path.slice(0, depth).map(String).join('.')
 }
 

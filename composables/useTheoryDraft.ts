@@ -3,8 +3,19 @@ import { TheorySchema, formatTheoryIssues, type Theory } from '#shared/schemas/t
 import { describeIssue, inputMessage } from '#shared/schemas/describeZodError'
 import type { TheoryCheckReply } from '#shared/schemas/theoryCheck'
 import {
-  type TheoryDraft, type DraftGroup, type DraftField, type DraftRule,
-  emptyDraft, theoryToDraft, draftToTheory, issueKey, newGroup, newField, newRule, newCoupling, newUid,
+  type TheoryDraft,
+  type DraftGroup,
+  type DraftField,
+  type DraftRule,
+  emptyDraft,
+  theoryToDraft,
+  draftToTheory,
+  issueKey,
+  newGroup,
+  newField,
+  newRule,
+  newCoupling,
+  newUid,
 } from './theoryDraftModel'
 import { newHeavy } from './theoryDraft/heavyBlock'
 import { newGoldstone } from './theoryDraft/goldstoneBlock'
@@ -59,12 +70,15 @@ export function useTheoryDraft(initial?: unknown) {
     if ((key === 'groups' || key === 'fields' || key === 'countingRules') && typeof i === 'number') return draft.value[key][i]?.uid ?? ''
     return String(key)
   }
-  const error = (...path: (string | number)[]) =>
-    (revealed.value || edited.has(entryOf(path)) ? checked.value.errors[path.map(String).join('.')] : undefined)
+  const error = (...path: (string | number)[]) => (revealed.value || edited.has(entryOf(path)) ? checked.value.errors[path.map(String).join('.')] : undefined)
   /** The user typed into the entry `entry` (a row's uid, or "name", "maxOrder", "heavy"). */
-  const markEdited = (entry: string) => { edited.add(entry) }
+  const markEdited = (entry: string) => {
+    edited.add(entry)
+  }
   /** Show every message (a save attempt, or a file the user loaded). */
-  const reveal = () => { revealed.value = true }
+  const reveal = () => {
+    revealed.value = true
+  }
 
   const ops = {
     addGroup: () => draft.value.groups.push(newGroup()),
@@ -80,10 +94,18 @@ export function useTheoryDraft(initial?: unknown) {
     moveRule: (i: number, delta: number) => move<DraftRule>(draft.value.countingRules, i, delta),
     addWeight: (r: number) => draft.value.countingRules[r]!.weights.push({ uid: newUid('w'), block: '', value: '' }),
     removeWeight: (r: number, w: number) => draft.value.countingRules[r]!.weights.splice(w, 1),
-    addHeavy: () => { draft.value.heavy = newHeavy(draft.value.groups) },
-    removeHeavy: () => { delete draft.value.heavy },
-    addGoldstone: () => { draft.value.goldstone = newGoldstone() },
-    removeGoldstone: () => { delete draft.value.goldstone },
+    addHeavy: () => {
+      draft.value.heavy = newHeavy(draft.value.groups)
+    },
+    removeHeavy: () => {
+      delete draft.value.heavy
+    },
+    addGoldstone: () => {
+      draft.value.goldstone = newGoldstone()
+    },
+    removeGoldstone: () => {
+      delete draft.value.goldstone
+    },
   }
 
   return { draft, checked, dirty, load, markClean, error, markEdited, reveal, ...ops }
@@ -104,21 +126,36 @@ export function useAnomalyCheck(definition: Ref<Theory | null>, delayMs = 500) {
     const mine = ++sequence
     try {
       const r = await $fetch<TheoryCheckReply>('/api/theory-check', { method: 'POST', body: { theory } })
-      if (mine === sequence) { reply.value = r; failure.value = '' }
+      if (mine === sequence) {
+        reply.value = r
+        failure.value = ''
+      }
     } catch (e) {
-      if (mine === sequence) { reply.value = null; failure.value = apiMessage(e) }
+      if (mine === sequence) {
+        reply.value = null
+        failure.value = apiMessage(e)
+      }
     } finally {
       if (mine === sequence) pending.value = false
     }
   }
 
-  watch(() => JSON.stringify(definition.value), () => {
-    clearTimeout(timer)
-    const theory = definition.value
-    if (!theory) { sequence++; pending.value = false; reply.value = null; return }
-    pending.value = true
-    timer = setTimeout(() => run(theory), delayMs)
-  }, { immediate: true })
+  watch(
+    () => JSON.stringify(definition.value),
+    () => {
+      clearTimeout(timer)
+      const theory = definition.value
+      if (!theory) {
+        sequence++
+        pending.value = false
+        reply.value = null
+        return
+      }
+      pending.value = true
+      timer = setTimeout(() => run(theory), delayMs)
+    },
+    { immediate: true },
+  )
   onBeforeUnmount(() => clearTimeout(timer))
 
   return { reply, pending, failure }

@@ -45,7 +45,7 @@ export function useValidatedForm<T extends Record<string, unknown>>(schema: ZodT
  * ("[POST] /api/…: 502 …") never reaches the screen.
  */
 export function apiMessage(error: unknown): string {
-  const e = error as { data?: { message?: unknown, data?: { message?: unknown } }, statusCode?: number, status?: number } | null
+  const e = error as { data?: { message?: unknown; data?: { message?: unknown } }; statusCode?: number; status?: number } | null
   const text = e?.data?.data?.message ?? e?.data?.message
   if (typeof text === 'string' && text.trim()) return text
   const status = e?.statusCode ?? e?.status

@@ -37,24 +37,56 @@ function intArg(args: string[], name: string): number | undefined {
 }
 
 function classJson(c: ClassReport) {
-  const base = { key: c.key, conjugateKey: c.conjugateKey, selfConjugate: c.selfConjugate, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk, ...(c.message ? { message: c.message } : {}), cpEven: c.cpEven, cpOdd: c.cpOdd }
+  const base = {
+    key: c.key,
+    conjugateKey: c.conjugateKey,
+    selfConjugate: c.selfConjugate,
+    rank: c.rank,
+    hilbert: c.hilbert,
+    tallyOk: c.tallyOk,
+    ...(c.message ? { message: c.message } : {}),
+    cpEven: c.cpEven,
+    cpOdd: c.cpOdd,
+  }
   if (c.flavor) {
     return {
-      ...base, youngConvention: c.flavor.convention, flavorCount: c.flavor.count, flavorHilbert: c.flavor.hilbert, realParameters: c.flavor.realParameters,
+      ...base,
+      youngConvention: c.flavor.convention,
+      flavorCount: c.flavor.count,
+      flavorHilbert: c.flavor.hilbert,
+      realParameters: c.flavor.realParameters,
       operators: c.flavor.operators.map((o) => ({ text: o.text, latex: o.latex, latex4: o.latex4, hermitian: c.selfConjugate, young: o.young, flavorComponents: o.flavorComponents })),
     }
   }
   return {
-    ...base, realParameters: c.realParameters,
-    operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, latex4: o.latex4, cp: o.cp, hermitian: o.hermitian, realParameters: o.realParameters, flavorComponents: o.flavorComponents, fields: o.fields, derivatives: o.derivatives })),
+    ...base,
+    realParameters: c.realParameters,
+    operators: c.operators.map((o) => ({
+      text: o.text,
+      latex: o.latex,
+      latex4: o.latex4,
+      cp: o.cp,
+      hermitian: o.hermitian,
+      realParameters: o.realParameters,
+      flavorComponents: o.flavorComponents,
+      fields: o.fields,
+      derivatives: o.derivatives,
+    })),
   }
 }
 
 function orderZeroJson(z: OrderZeroReport) {
   return {
-    note: z.note, realParameters: z.realParameters, flavorParameters: z.flavorParameters,
+    note: z.note,
+    realParameters: z.realParameters,
+    flavorParameters: z.flavorParameters,
     classes: z.classes.map((c) => ({
-      key: c.key, role: c.role, dimension: c.dimension, rank: c.rank, realParameters: c.realParameters, flavorParameters: c.flavorParameters,
+      key: c.key,
+      role: c.role,
+      dimension: c.dimension,
+      rank: c.rank,
+      realParameters: c.realParameters,
+      flavorParameters: c.flavorParameters,
       operators: c.operators.map((o) => ({ text: o.text, latex: o.latex, hermitian: o.hermitian, realParameters: o.realParameters })),
     })),
   }
@@ -86,7 +118,9 @@ function main(): void {
     const r = buildBasis(theory, { maxDim, minDim: intArg(args, '--min-dim'), nf: intArg(args, '--nf'), orderZero: maxOrder !== undefined })
     const entry = (d: (typeof r.byDimension)[number]) => ({ operators: d.operators, tallyOk: d.tallyOk, ...(d.message ? { message: d.message } : {}), classes: d.classes.map(classJson) })
     const out = {
-      theory: r.theory, note: r.note, ...(r.nf ? { nf: r.nf } : {}),
+      theory: r.theory,
+      note: r.note,
+      ...(r.nf ? { nf: r.nf } : {}),
       ...(maxOrder === undefined
         ? { byDimension: r.byDimension.map((d) => ({ dimension: d.dimension, ...entry(d) })) }
         : { byOrder: r.byDimension.map((d) => ({ order: d.order, dimension: d.dimension, ...entry(d) })), orderZero: orderZeroJson(r.orderZero!) }),

@@ -29,14 +29,19 @@ function valueOf(args: string[], name: string): string | undefined {
 }
 
 function readText(path: string, what: string): string {
-  try { return readFileSync(path, 'utf8') } catch { usage(`cannot read the ${what} file ${path}`) }
+  try {
+    return readFileSync(path, 'utf8')
+  } catch {
+    usage(`cannot read the ${what} file ${path}`)
+  }
 }
 
 function main(): void {
   const args = process.argv.slice(2)
   const file = args.find((a, i) => !a.startsWith('--') && (i === 0 || !args[i - 1]!.startsWith('--')))
   if (!file) usage('missing THEORY.json')
-  const order = valueOf(args, '--order'); const dim = valueOf(args, '--dim')
+  const order = valueOf(args, '--order')
+  const dim = valueOf(args, '--dim')
   if ((order === undefined) === (dim === undefined)) usage('give --order N or --dim D')
   const n = Number(order ?? dim)
   if (!Number.isInteger(n) || n < 0) usage(`the order or dimension must be a whole number, not ${order ?? dim}`)
@@ -51,7 +56,11 @@ function main(): void {
     aliases[m[1]!] = m[2]!
   })
   let theoryJson: unknown
-  try { theoryJson = JSON.parse(readText(file, 'theory')) } catch (e) { usage(e instanceof SyntaxError ? `${file} is not JSON: ${e.message}` : String(e)) }
+  try {
+    theoryJson = JSON.parse(readText(file, 'theory'))
+  } catch (e) {
+    usage(e instanceof SyntaxError ? `${file} is not JSON: ${e.message}` : String(e))
+  }
   try {
     const theory = parseTheory(theoryJson)
     const dimension = dim !== undefined ? n : massRatioDimension(n)

@@ -66,22 +66,27 @@ function main(): void {
     }
     const maxDim = args.maxDim ?? massRatioDimension(args.maxOrder!)
     const result = countOperators(theory, { maxDim, minDim: args.minDim, nf: args.nf })
-    const plain = args.maxOrder === undefined
-      ? {
-          theory: result.theory,
-          byDimension: result.byDimension.map((d) => ({
-            dimension: d.dimension, operators: d.operators, classes: d.classes,
-            ...(d.cp ? { cpEven: d.cpEven, cpOdd: d.cpOdd, cp: d.cp } : {}),
-          })),
-          ...(result.cpConvention ? { cpConvention: result.cpConvention } : { cpUnavailable: result.cpUnavailable }),
-        }
-      : {
-          theory: result.theory,
-          byOrder: result.byDimension.map((d) => ({
-            order: massRatioOrder(d.dimension), dimension: d.dimension, operators: d.operators,
-            classes: Object.entries(d.classes).map(([key, count]) => ({ key, count })),
-          })),
-        }
+    const plain =
+      args.maxOrder === undefined
+        ? {
+            theory: result.theory,
+            byDimension: result.byDimension.map((d) => ({
+              dimension: d.dimension,
+              operators: d.operators,
+              classes: d.classes,
+              ...(d.cp ? { cpEven: d.cpEven, cpOdd: d.cpOdd, cp: d.cp } : {}),
+            })),
+            ...(result.cpConvention ? { cpConvention: result.cpConvention } : { cpUnavailable: result.cpUnavailable }),
+          }
+        : {
+            theory: result.theory,
+            byOrder: result.byDimension.map((d) => ({
+              order: massRatioOrder(d.dimension),
+              dimension: d.dimension,
+              operators: d.operators,
+              classes: Object.entries(d.classes).map(([key, count]) => ({ key, count })),
+            })),
+          }
     process.stdout.write(`${JSON.stringify(plain)}\n`)
   } catch (e) {
     process.stderr.write(`count: ${(e as Error).message}\n`)

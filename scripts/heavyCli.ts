@@ -18,7 +18,7 @@ export function heavyOutput(theory: Theory, maxOrder: number, withOperators: boo
   return {
     theory: theory.name,
     frame: 'heavy',
-    orderMeaning: 'power of 1/m (m = the heavy particle\'s mass)',
+    orderMeaning: "power of 1/m (m = the heavy particle's mass)",
     symmetries: e.symmetries,
     notes: [e.eomNote, e.antiparticleNote, e.fourFermionNote, e.heavyHeavyNote, e.heavyLightNote].filter(Boolean),
     byOrder: heavyReport(e, withOperators),

@@ -18,13 +18,17 @@ class UsageError extends Error {}
 
 const USAGE = 'usage: match UV.json --heavy NAME[,NAME...] --max-dim N'
 
-function parseArgs(argv: string[]): { source: string, heavy: string[], maxDim: number } {
+function parseArgs(argv: string[]): { source: string; heavy: string[]; maxDim: number } {
   let source: string | undefined
   let heavy: string[] | undefined
   let maxDim: number | undefined
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!
-    if (a === '--heavy') heavy = (argv[++i] ?? '').split(',').map((s) => s.trim()).filter(Boolean)
+    if (a === '--heavy')
+      heavy = (argv[++i] ?? '')
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean)
     else if (a === '--max-dim') {
       const v = argv[++i]
       if (v === undefined || !/^\d+$/.test(v) || Number(v) < 4) throw new UsageError(`--max-dim needs a whole number of at least 4, got ${v ?? 'nothing'}\n${USAGE}`)

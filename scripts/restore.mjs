@@ -29,7 +29,9 @@ try {
   if (others[0].n > 0) stop(`${others[0].n} connection(s) to ${name} are open: stop npm start and every worker, then restore again (nothing was changed)`)
   await admin.query(`DROP DATABASE IF EXISTS ${quoteIdent(staging)}`)
   await admin.query(`CREATE DATABASE ${quoteIdent(staging)}`)
-  const r = spawnSync(pgTool('pg_restore'), ['--no-owner', '--no-privileges', '--exit-on-error', '--single-transaction', `--dbname=${withDatabase(url, staging)}`, file], { stdio: ['ignore', 'inherit', 'inherit'] })
+  const r = spawnSync(pgTool('pg_restore'), ['--no-owner', '--no-privileges', '--exit-on-error', '--single-transaction', `--dbname=${withDatabase(url, staging)}`, file], {
+    stdio: ['ignore', 'inherit', 'inherit'],
+  })
   if (r.status !== 0) {
     await admin.query(`DROP DATABASE IF EXISTS ${quoteIdent(staging)}`)
     stop(`pg_restore failed (exit ${r.status ?? r.signal}); ${name} is unchanged`)

@@ -28,9 +28,14 @@ const server = startServer(env)
 // machine that reaches the database adds more.
 const worker = supervise('worker', () => startWorker(env))
 for (const signal of ['SIGINT', 'SIGTERM']) {
-  process.on(signal, () => { server.kill(signal); void worker.stop(signal) })
+  process.on(signal, () => {
+    server.kill(signal)
+    void worker.stop(signal)
+  })
 }
-server.on('exit', (code) => { void worker.stop().then(() => process.exit(code ?? 0)) })
+server.on('exit', (code) => {
+  void worker.stop().then(() => process.exit(code ?? 0))
+})
 await waitForHealth(env.NUXT_PUBLIC_APP_URL, { demo: env.SCALEWRIGHT_DEMO === '1' })
 console.log(`\nScalewright is running at ${env.NUXT_PUBLIC_APP_URL}`)
 console.log(`Demo accounts (password "${DEMO_PASSWORD}"): ${[DEMO_ADMIN, ...DEMO_MEMBERS].map((u) => u.email).join(', ')}\n`)

@@ -28,7 +28,10 @@ const typecheck = extra.length > 0 ? null : spawnSync(process.execPath, [join(ro
 let { passed, failed } = runVitest(extra)
 if (typecheck) {
   if (typecheck.status === 0) passed += 1
-  else { failed += 1; console.log('\ntype check failed (see the errors above)') }
+  else {
+    failed += 1
+    console.log('\ntype check failed (see the errors above)')
+  }
 }
 if (checksFailed) {
   passed += CODE_CHECKS.length - checksFailed.length

@@ -36,7 +36,9 @@ async function enqueueDemoRuns(db: Knex, enqueue: (runId: number) => Promise<str
   for (const r of DEMO_RUNS) {
     const theory = await db('theories').where({ name: r.theory }).first('id', 'definition', 'version', 'created_by')
     const params = { maxDim: r.maxDim, nf: 'nf' in r ? r.nf : undefined, theory: theory.definition, theoryVersion: theory.version }
-    const [run] = await db('runs').insert({ theory_id: theory.id, kind: r.kind, params: JSON.stringify(params), created_by: theory.created_by }).returning('id')
+    const [run] = await db('runs')
+      .insert({ theory_id: theory.id, kind: r.kind, params: JSON.stringify(params), created_by: theory.created_by })
+      .returning('id')
     const jobId = await enqueue(run.id)
     await db('runs').where({ id: run.id }).update({ job_id: jobId })
   }

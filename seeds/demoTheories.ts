@@ -43,11 +43,14 @@ export const DEMO_RUNS = [
 export const DEMO_LADDER = {
   theory: 'Hidden photon with tarnion',
   ladder: {
-    scales: [{ name: 'M_T', value: '40', unit: 'GeV' }, { name: 'E', value: '2', unit: 'GeV' }, { name: 'R', value: '0.5', unit: 'fm' }],
+    scales: [
+      { name: 'M_T', value: '40', unit: 'GeV' },
+      { name: 'E', value: '2', unit: 'GeV' },
+      { name: 'R', value: '0.5', unit: 'fm' },
+    ],
     parameters: [{ name: 'eps', numerator: 'E', denominator: 'M_T' }],
     precisionTarget: 1e-4,
     countingParameter: 'eps',
     orders: [0, 1, 2, 3, 4],
   },
 }
-

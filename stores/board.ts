@@ -3,46 +3,113 @@ import { fieldTexTable } from '#shared/schemas/fieldDisplay'
 // class, tags and notes. Moves are optimistic: the list changes at once, the server confirms
 // (new version, coverage, rewrite) or the board reloads and says why.
 export interface BoardOperator {
-  id: number, order: number, classKey: string, column: 'kept' | 'set_aside', position: number, latex: string
-  latexDirac: string | null, hermitian: boolean, realParameters: number, text: string, version: number, flavorComponents: number
+  id: number
+  order: number
+  classKey: string
+  column: 'kept' | 'set_aside'
+  position: number
+  latex: string
+  latexDirac: string | null
+  hermitian: boolean
+  realParameters: number
+  text: string
+  version: number
+  flavorComponents: number
   details?: {
     antiHermitian: boolean
     parity: 'even' | 'odd' | null
     cp: 'even' | 'odd' | 'both' | null
-    relations: { coefficient: string, relation: string, source: string }[]
-    publishedRewrite: { id: string, coefficient: string }[] | null
+    relations: { coefficient: string; relation: string; source: string }[]
+    publishedRewrite: { id: string; coefficient: string }[] | null
     gaugeEomNote: string | null
     source: string | null
   }
 }
 /** Heavy-frame classes have an order in 1/m and no mass dimension, no Hilbert series (null). */
 export interface BoardClass {
-  order: number, dimension: number | null, key: string, rank: number, hilbert: number | null, tallyOk: boolean | null, message?: string | null
-  realParameters?: number, cpEven?: number | null, cpOdd?: number | null, pEven?: number | null, pOdd?: number | null, parityReason?: string | null
+  order: number
+  dimension: number | null
+  key: string
+  rank: number
+  hilbert: number | null
+  tallyOk: boolean | null
+  message?: string | null
+  realParameters?: number
+  cpEven?: number | null
+  cpOdd?: number | null
+  pEven?: number | null
+  pOdd?: number | null
+  parityReason?: string | null
   /** Goldstone frame: one class per chiral order, with the Hilbert-series classes it holds. */
-  frame?: 'goldstone', hilbertClasses?: { key: string, hilbert: number, rank: number, tallyOk: boolean }[]
-  contact?: { hilbert: number, rank: number, kept: number }, evaluatedAtN?: number
+  frame?: 'goldstone'
+  hilbertClasses?: { key: string; hilbert: number; rank: number; tallyOk: boolean }[]
+  contact?: { hilbert: number; rank: number; kept: number }
+  evaluatedAtN?: number
 }
 
 /** A rewrite onto the kept operators; `exact: false` when the coefficients are beyond what the fingerprints give exactly. */
-export interface Rewrite { exact?: boolean, message?: string, vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
+export interface Rewrite {
+  exact?: boolean
+  message?: string
+  vanishes: boolean
+  terms: { operatorId: number; latex: string; coefficient: string }[]
+}
 /** Tags and notes carry their author: an account, or a name kept as text from an imported file (`authorImported`). */
-export interface BoardTag { id: number, operatorId: number, kind: string, label: string, authorId?: number | null, authorName?: string | null, authorImported?: boolean }
-export interface BoardNote { id: number, operatorId: number | null, body: string, createdAt: string, updatedAt: string, authorId: number | null, authorName: string | null, authorImported?: boolean }
+export interface BoardTag {
+  id: number
+  operatorId: number
+  kind: string
+  label: string
+  authorId?: number | null
+  authorName?: string | null
+  authorImported?: boolean
+}
+export interface BoardNote {
+  id: number
+  operatorId: number | null
+  body: string
+  createdAt: string
+  updatedAt: string
+  authorId: number | null
+  authorName: string | null
+  authorImported?: boolean
+}
 type KeyHeaders = Record<string, string>
-export interface ClassCoverage { rank: number, required: number, complete: boolean }
+export interface ClassCoverage {
+  rank: number
+  required: number
+  complete: boolean
+}
 /** The basis itself, as GET /api/bases/:id sends it (server/utils/db/bases.ts boardData). */
 export interface BoardBasis {
-  id: number, theoryId: number, theoryName: string, theoryVersion: number, countingRule: string, maxOrder: number | null
-  classes: BoardClass[], note: string, createdAt: string
+  id: number
+  theoryId: number
+  theoryName: string
+  theoryVersion: number
+  countingRule: string
+  maxOrder: number | null
+  classes: BoardClass[]
+  note: string
+  createdAt: string
 }
-export interface BoardData { basis: BoardBasis, role: string, coverage?: Record<string, ClassCoverage>, tags: BoardTag[], notes: BoardNote[], operators: BoardOperator[] }
-interface MoveAnswer { operator: { version: number }, coverage: ClassCoverage, rewrite: Rewrite | null }
+export interface BoardData {
+  basis: BoardBasis
+  role: string
+  coverage?: Record<string, ClassCoverage>
+  tags: BoardTag[]
+  notes: BoardNote[]
+  operators: BoardOperator[]
+}
+interface MoveAnswer {
+  operator: { version: number }
+  coverage: ClassCoverage
+  rewrite: Rewrite | null
+}
 
 export const useBoardStore = defineStore('board', () => {
   const basis = ref<BoardBasis | null>(null)
   const role = ref<string>('viewer')
-  const columns = ref<Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }>>({})
+  const columns = ref<Record<number, { kept: BoardOperator[]; set_aside: BoardOperator[] }>>({})
   const coverage = ref<Record<string, ClassCoverage>>({})
   const tags = ref<BoardTag[]>([])
   const notes = ref<BoardNote[]>([])
@@ -56,13 +123,13 @@ export const useBoardStore = defineStore('board', () => {
   // Each field's TeX (display form, else the upright name) for class labels.
   const fieldTex = computed(() => fieldTexTable(basis.value))
   // Counting-rule view: the orders of every operator under another rule of the theory.
-  const rules = ref<{ name: string, kind: string }[]>([])
+  const rules = ref<{ name: string; kind: string }[]>([])
   const ruleName = ref('')
   const ruleOrders = ref<Record<number, string>>({})
   const ordersBase = ref('')
   async function loadRules(base: string) {
     ordersBase.value = base
-    rules.value = (await useRequestFetch()<{ rules: { name: string, kind: string }[] }>(base)).rules
+    rules.value = (await useRequestFetch()<{ rules: { name: string; kind: string }[] }>(base)).rules
   }
   async function selectRule(name: string) {
     ruleName.value = name
@@ -80,7 +147,7 @@ export const useBoardStore = defineStore('board', () => {
     coverage.value = data.coverage ?? {}
     tags.value = data.tags
     notes.value = data.notes
-    const cols: Record<number, { kept: BoardOperator[], set_aside: BoardOperator[] }> = {}
+    const cols: Record<number, { kept: BoardOperator[]; set_aside: BoardOperator[] }> = {}
     for (const c of data.basis.classes) cols[c.order] ??= { kept: [], set_aside: [] }
     for (const op of data.operators) (cols[op.order] ??= { kept: [], set_aside: [] })[op.column].push(op)
     columns.value = cols
@@ -153,5 +220,37 @@ export const useBoardStore = defineStore('board', () => {
     return true
   }
   const filtering = computed(() => !!(filter.tag || filter.text))
-  return { fieldTex, impose, rules, ruleName, ruleOrders, ordersBase, loadRules, selectRule, changedOrder, basis, role, columns, coverage, tags, notes, rewrites, message, notation, filter, readonly, filtering, setData, load, confirmMove, toggleColumn, loadRewrite, addTag, addNote, remove, editNote, matches }
+  return {
+    fieldTex,
+    impose,
+    rules,
+    ruleName,
+    ruleOrders,
+    ordersBase,
+    loadRules,
+    selectRule,
+    changedOrder,
+    basis,
+    role,
+    columns,
+    coverage,
+    tags,
+    notes,
+    rewrites,
+    message,
+    notation,
+    filter,
+    readonly,
+    filtering,
+    setData,
+    load,
+    confirmMove,
+    toggleColumn,
+    loadRewrite,
+    addTag,
+    addNote,
+    remove,
+    editNote,
+    matches,
+  }
 })

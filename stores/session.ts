@@ -1,5 +1,10 @@
 // Who is signed in. The sealed cookie is read through nuxt-auth-utils' session endpoint.
-export interface SessionUser { id: number, email: string, displayName: string, siteRole: 'admin' | 'member' }
+export interface SessionUser {
+  id: number
+  email: string
+  displayName: string
+  siteRole: 'admin' | 'member'
+}
 
 export const useSessionStore = defineStore('session', () => {
   const session = useUserSession()
@@ -8,13 +13,13 @@ export const useSessionStore = defineStore('session', () => {
   async function refresh() {
     await session.fetch()
   }
-  async function signIn(body: { email: string, password: string }) {
+  async function signIn(body: { email: string; password: string }) {
     await $fetch('/api/auth/signin', { method: 'POST', body })
     await session.fetch()
   }
   /** Sign up: with an invitation the account is made and signed in at once; without, a link is mailed (the answer's message says so). */
-  async function signUp(body: { email: string, password: string, displayName: string, invitation?: string }): Promise<{ signedIn: boolean, message: string }> {
-    const res = await $fetch<{ user?: SessionUser, message?: string }>('/api/auth/signup', { method: 'POST', body })
+  async function signUp(body: { email: string; password: string; displayName: string; invitation?: string }): Promise<{ signedIn: boolean; message: string }> {
+    const res = await $fetch<{ user?: SessionUser; message?: string }>('/api/auth/signup', { method: 'POST', body })
     await session.fetch()
     return { signedIn: !!res.user, message: res.message ?? '' }
   }

@@ -6,8 +6,20 @@ import { ref } from 'vue'
 import type { Theory } from '#shared/schemas/theory'
 import type { GroupRole } from '#shared/types/roles'
 
-export interface SavedTheory { id: number, groupId: number, name: string, definition: Theory, version: number, updatedAt?: string }
-export interface PresetEntry { id: string, title: string, description: string, theory: Theory }
+export interface SavedTheory {
+  id: number
+  groupId: number
+  name: string
+  definition: Theory
+  version: number
+  updatedAt?: string
+}
+export interface PresetEntry {
+  id: string
+  title: string
+  description: string
+  theory: Theory
+}
 
 export const useTheoriesStore = defineStore('theories', () => {
   const current = ref<SavedTheory | null>(null)
@@ -27,7 +39,7 @@ export const useTheoriesStore = defineStore('theories', () => {
   }
 
   async function load(id: number | string) {
-    const r = await useRequestFetch()<{ theory: SavedTheory, role: GroupRole }>(`/api/theories/${id}`)
+    const r = await useRequestFetch()<{ theory: SavedTheory; role: GroupRole }>(`/api/theories/${id}`)
     current.value = r.theory
     role.value = r.role
     conflict.value = ''
@@ -53,7 +65,7 @@ export const useTheoriesStore = defineStore('theories', () => {
       savedAt.value = Date.now()
       return current.value
     } catch (error) {
-      const status = (error as { statusCode?: number, status?: number }).statusCode ?? (error as { status?: number }).status
+      const status = (error as { statusCode?: number; status?: number }).statusCode ?? (error as { status?: number }).status
       if (status === 409 && current.value) conflict.value = apiMessage(error)
       else saveError.value = apiMessage(error)
       return null

@@ -26,7 +26,11 @@ export function quantile(sorted: number[], q: number) {
 
 export async function waitHealthy(base: string) {
   for (let i = 0; i < 300; i++) {
-    try { if ((await fetch(`${base}/api/health`)).ok) return } catch { /* starting */ }
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return
+    } catch {
+      /* starting */
+    }
     await new Promise((r) => setTimeout(r, 200))
   }
   throw new Error('bench server did not start')
@@ -41,16 +45,24 @@ export async function startApp(database: string, env: Record<string, string> = {
   await db.migrate.latest({ migrationSource })
   const port = await freePortFrom(3601, 100, 3601)
   const server = spawn(process.execPath, ['.output/server/index.mjs'], {
-    cwd: root, stdio: ['ignore', 'ignore', 'inherit'],
+    cwd: root,
+    stdio: ['ignore', 'ignore', 'inherit'],
     env: { ...process.env, DATABASE_URL: url, PORT: String(port), HOST: '127.0.0.1', NUXT_SESSION_PASSWORD: randomBytes(32).toString('hex'), NODE_ENV: 'production', SCALEWRIGHT_DEMO: '0', ...env },
   })
   const base = `http://127.0.0.1:${port}`
   await waitHealthy(base)
-  return { base, db, stop: async () => { server.kill('SIGTERM'); await db.destroy() } }
+  return {
+    base,
+    db,
+    stop: async () => {
+      server.kill('SIGTERM')
+      await db.destroy()
+    },
+  }
 }
 
 /** A new account's session cookie (sign-up answered at once, or finished through the mailed link). */
-export async function benchAccount(base: string, db: Knex, name: string): Promise<{ cookie: string, id: number }> {
+export async function benchAccount(base: string, db: Knex, name: string): Promise<{ cookie: string; id: number }> {
   const email = `${name}-${randomBytes(4).toString('hex')}@example.test`
   const json = { 'content-type': 'application/json' }
   let res = await fetch(`${base}/api/auth/signup`, { method: 'POST', headers: json, body: JSON.stringify({ email, password: 'bench password 1', displayName: name }) })

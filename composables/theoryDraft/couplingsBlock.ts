@@ -3,8 +3,13 @@
 // shared/schemas/couplings.ts for the file's format; the schema and the engine check the rest.
 import { asText as text, isRecord } from './labels'
 
-export interface DraftValue { number: string, unit: string }
-export interface DraftMass extends DraftValue { symbol: string }
+export interface DraftValue {
+  number: string
+  unit: string
+}
+export interface DraftMass extends DraftValue {
+  symbol: string
+}
 export interface DraftCoupling extends DraftValue {
   uid: string
   /** The order-0 class as the board prints it ("S H H*") and, optionally, the operator's text. */
@@ -42,7 +47,11 @@ export function massToTheory(m: DraftMass): Record<string, unknown> | undefined 
 export function couplingToDraft(c: unknown, uid: string): DraftCoupling {
   const r = isRecord(c) ? c : {}
   return {
-    uid, class: text(r.class), operator: text(r.operator), symbol: text(r.symbol), ...valueToDraft(r.value),
+    uid,
+    class: text(r.class),
+    operator: text(r.operator),
+    symbol: text(r.symbol),
+    ...valueToDraft(r.value),
     ...(r.description !== undefined ? { description: text(r.description) } : {}),
   }
 }
@@ -50,7 +59,10 @@ export function couplingToDraft(c: unknown, uid: string): DraftCoupling {
 export function couplingToTheory(c: DraftCoupling): Record<string, unknown> {
   const value = valueToTheory(c)
   return {
-    class: c.class.trim(), ...(c.operator.trim() ? { operator: c.operator.trim() } : {}), symbol: c.symbol.trim(),
-    ...(value ? { value } : {}), ...(c.description !== undefined ? { description: c.description } : {}),
+    class: c.class.trim(),
+    ...(c.operator.trim() ? { operator: c.operator.trim() } : {}),
+    symbol: c.symbol.trim(),
+    ...(value ? { value } : {}),
+    ...(c.description !== undefined ? { description: c.description } : {}),
   }
 }

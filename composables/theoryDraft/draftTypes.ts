@@ -5,7 +5,17 @@
 import type { GroupKind } from '../../shared/schemas/groupKinds'
 export type { GroupKind }
 
-export interface DraftGroup { uid: string, name: string, type: GroupKind, n: string, gauge: boolean, description?: string }
+export interface DraftGroup {
+  uid: string
+  name: string
+  type: GroupKind
+  n: string
+  gauge: boolean
+  description?: string
+}
 
 /** A problem found while reading the typed text, at the theory-file path of its input. */
-export interface DraftIssue { path: (string | number)[], message: string }
+export interface DraftIssue {
+  path: (string | number)[]
+  message: string
+}

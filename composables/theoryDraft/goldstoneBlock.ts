@@ -28,9 +28,15 @@ export function goldstoneToDraft(input: unknown): DraftGoldstone {
   const g = isRecord(input) ? input : {}
   const sources = isRecord(g.sources) ? g.sources : {}
   return {
-    coset: g.coset === 'orthogonal' ? 'orthogonal' : 'chiral', N: asText(g.N),
-    scalar: sources.scalar === true, vector: sources.vector === true, singletVector: sources.singletVector === true, theta: g.theta === true,
-    maxOrder: asText(g.maxOrder), decayConstant: asText(g.decayConstant), goldstoneName: asText(g.goldstoneName),
+    coset: g.coset === 'orthogonal' ? 'orthogonal' : 'chiral',
+    N: asText(g.N),
+    scalar: sources.scalar === true,
+    vector: sources.vector === true,
+    singletVector: sources.singletVector === true,
+    theta: g.theta === true,
+    maxOrder: asText(g.maxOrder),
+    decayConstant: asText(g.decayConstant),
+    goldstoneName: asText(g.goldstoneName),
     ...(g.description !== undefined ? { description: asText(g.description) } : {}),
   }
 }
@@ -45,7 +51,11 @@ export function goldstoneToTheory(d: DraftGoldstone, issues: DraftIssue[]): Reco
   if (d.theta) out.theta = true
   const k = d.maxOrder.trim()
   if (/^\d{1,3}$/.test(k)) out.maxOrder = Number(k)
-  else issues.push({ path: ['goldstone', 'maxOrder'], message: k ? `the highest chiral order is an even power of p (2 to 14), but got "${k}"` : 'choose the highest chiral order (an even power of p, 2 to 14)' })
+  else
+    issues.push({
+      path: ['goldstone', 'maxOrder'],
+      message: k ? `the highest chiral order is an even power of p (2 to 14), but got "${k}"` : 'choose the highest chiral order (an even power of p, 2 to 14)',
+    })
   if (d.decayConstant.trim()) out.decayConstant = d.decayConstant.trim()
   if (d.goldstoneName.trim()) out.goldstoneName = d.goldstoneName.trim()
   if (d.description !== undefined) out.description = d.description

@@ -29,7 +29,7 @@ export function heavyToDraft(input: unknown, byName: Map<string, string>): Draft
   return {
     particle: asText(particle.name),
     antiparticle: isRecord(h.antiparticle) ? asText(h.antiparticle.name) : '',
-    gaugeGroup: h.gaugeGroup === undefined ? '' : byName.get(asText(h.gaugeGroup)) ?? `?${asText(h.gaugeGroup)}`,
+    gaugeGroup: h.gaugeGroup === undefined ? '' : (byName.get(asText(h.gaugeGroup)) ?? `?${asText(h.gaugeGroup)}`),
     maxOrder: asText(h.maxOrder),
     parity: h.imposeParity !== false,
     timeReversal: h.imposeTimeReversal !== false,

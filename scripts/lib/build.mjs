@@ -4,7 +4,25 @@ import { existsSync, readdirSync, statSync } from 'node:fs'
 import { join, resolve } from 'node:path'
 
 const root = resolve(import.meta.dirname, '..', '..')
-const SOURCES = ['nuxt.config.ts', 'app.vue', 'package-lock.json', 'tailwind.config.ts', 'pages', 'components', 'layouts', 'stores', 'composables', 'server', 'shared', 'migrations', 'seeds', 'assets', 'public', 'middleware', 'plugins']
+const SOURCES = [
+  'nuxt.config.ts',
+  'app.vue',
+  'package-lock.json',
+  'tailwind.config.ts',
+  'pages',
+  'components',
+  'layouts',
+  'stores',
+  'composables',
+  'server',
+  'shared',
+  'migrations',
+  'seeds',
+  'assets',
+  'public',
+  'middleware',
+  'plugins',
+]
 
 function newestMtime(path) {
   if (!existsSync(path)) return 0

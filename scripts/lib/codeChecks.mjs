@@ -8,7 +8,28 @@ import { root } from './run.mjs'
 const bin = (pkg, file) => join(root, 'node_modules', pkg, file)
 
 export const CODE_CHECKS = [
-  { key: 'cycles', name: 'import circles (npm run lint:cycles)', args: [bin('madge', 'bin/cli.js'), '--circular', '--no-spinner', '--no-color', 'app.vue', 'pages', 'components', 'stores', 'composables', 'layouts', 'middleware', 'plugins', 'server', 'shared', 'scripts', 'bench'] },
+  {
+    key: 'cycles',
+    name: 'import circles (npm run lint:cycles)',
+    args: [
+      bin('madge', 'bin/cli.js'),
+      '--circular',
+      '--no-spinner',
+      '--no-color',
+      'app.vue',
+      'pages',
+      'components',
+      'stores',
+      'composables',
+      'layouts',
+      'middleware',
+      'plugins',
+      'server',
+      'shared',
+      'scripts',
+      'bench',
+    ],
+  },
   { key: 'eslint', name: 'ESLint (npm run lint)', args: [bin('eslint', 'bin/eslint.js'), '.'] },
   { key: 'prettier', name: 'Prettier layout (npm run format:check; npm run format fixes it)', args: [bin('prettier', 'bin/prettier.cjs'), '--check', '--log-level', 'warn', '.'] },
 ]

@@ -9,7 +9,7 @@ export const TEST_PACKAGES = [
   { pkg: 'lie', present: () => spawnSync('sh', ['-c', 'command -v lie']).status === 0, for: 'the LiE cross-checks' },
   { pkg: 'texlive-latex-base', present: () => existsSync('/usr/bin/pdflatex'), for: 'compiling the LaTeX export' },
   { pkg: 'texlive-latex-extra', present: () => existsSync('/usr/bin/pdflatex'), for: 'compiling the LaTeX export' },
-  { pkg: 'lmodern', present: () => spawnSync('sh', ['-c', 'kpsewhich lmodern.sty']).status === 0, for: 'the LaTeX export\'s T1 fonts' },
+  { pkg: 'lmodern', present: () => spawnSync('sh', ['-c', 'kpsewhich lmodern.sty']).status === 0, for: "the LaTeX export's T1 fonts" },
 ]
 
 /** apt-get install the packages whose program is missing; returns the names installed. */

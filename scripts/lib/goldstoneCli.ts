@@ -54,12 +54,13 @@ export function goldstoneCli(kind: 'count' | 'basis', argv: string[]): boolean {
   return true
 }
 
-type Common = { N: number | 'general', sources: { scalar: boolean, vector: boolean }, maxOrder: number, minOrder?: number }
+type Common = { N: number | 'general'; sources: { scalar: boolean; vector: boolean }; maxOrder: number; minOrder?: number }
 
 function countJson(name: string, g: NonNullable<Theory['goldstone']>, c: Common) {
   const r = countGoldstone({ coset: g.coset, theta: g.theta, ...c })
   return {
-    theory: name, coset: r.coset,
+    theory: name,
+    coset: r.coset,
     byOrder: r.byOrder.map((o) => ({ order: o.order, operators: o.operators, byParity: o.byParity, contact: o.contact, classes: o.classes, sectors: o.sectors })),
   }
 }
@@ -68,13 +69,21 @@ function basisJson(name: string, c: Common, coset: 'chiral' | 'orthogonal') {
   if (coset !== 'chiral') throw new Error('explicit bases are built for the SU(N)×SU(N)/SU(N) coset; use count for O(N+1)/O(N)')
   const r = goldstoneBasis(c)
   return {
-    theory: name, coset: r.coset, note: r.note, evaluatedAtN: r.evaluatedAtN,
+    theory: name,
+    coset: r.coset,
+    note: r.note,
+    evaluatedAtN: r.evaluatedAtN,
     byOrder: r.byOrder.map((o) => ({
-      order: o.order, operators: o.rank, hilbert: o.hilbert, tallyOk: o.tallyOk, ...(o.message ? { message: o.message } : {}),
+      order: o.order,
+      operators: o.rank,
+      hilbert: o.hilbert,
+      tallyOk: o.tallyOk,
+      ...(o.message ? { message: o.message } : {}),
       byParity: { even: o.kept.filter((k) => k.parity === 'even').length, odd: o.kept.filter((k) => k.parity === 'odd').length },
       contact: o.contact.kept,
       classes: [...(o.contact.hilbert ? [{ key: 'contact', hilbert: o.contact.hilbert, rank: o.contact.rank, tallyOk: o.contact.rank === o.contact.hilbert }] : []), ...o.classes].map((cl) => ({
-        ...cl, operators: o.kept.filter((k) => (cl.key === 'contact' ? k.contact : !k.contact && k.classKey === cl.key)).map((k) => ({ text: k.text, latex: k.latex, parity: k.parity })),
+        ...cl,
+        operators: o.kept.filter((k) => (cl.key === 'contact' ? k.contact : !k.contact && k.classKey === cl.key)).map((k) => ({ text: k.text, latex: k.latex, parity: k.parity })),
       })),
       alternatives: o.alternatives.map((a) => ({ text: a.text, latex: a.latex, classKey: a.classKey, rewrite: a.rewrite })),
     })),

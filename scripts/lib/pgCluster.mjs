@@ -33,7 +33,10 @@ function installServer() {
 /** Server binaries, installed from Debian's packages when missing. */
 export function serverBinDir() {
   let bin = findBinDir()
-  if (!bin) { installServer(); bin = findBinDir() }
+  if (!bin) {
+    installServer()
+    bin = findBinDir()
+  }
   if (!bin) throw new Error('PostgreSQL server binaries not found under /usr/lib/postgresql after install')
   return bin
 }
@@ -62,9 +65,15 @@ export class LocalCluster {
     this.lastPort = undefined
   }
 
-  get dataDir() { return (this._dataDir ??= dataDirFor(this.name)) }
-  get logFile() { return join(this.dataDir, 'server.log') }
-  get bin() { return (this._bin ??= serverBinDir()) }
+  get dataDir() {
+    return (this._dataDir ??= dataDirFor(this.name))
+  }
+  get logFile() {
+    return join(this.dataDir, 'server.log')
+  }
+  get bin() {
+    return (this._bin ??= serverBinDir())
+  }
 
   /** The running cluster's port; before it runs, the one it would most likely take. */
   port() {
@@ -105,7 +114,7 @@ export class LocalCluster {
   /** Start the server when it is not running; the port goes on the command line, never in a file. */
   // After a crash the old server processes may hold the shared memory for a moment: retry.
   async start() {
-    const port = this.lastPort ?? await portToStart(this.name)
+    const port = this.lastPort ?? (await portToStart(this.name))
     let r
     for (let attempt = 0; attempt < 5; attempt++) {
       r = await asServerUserAsync(join(this.bin, 'pg_ctl'), ['-D', this.dataDir, '-l', this.logFile, '-o', `-p ${port}`, '-w', '-t', '60', 'start'])

@@ -79,7 +79,9 @@ export async function freePortFrom(start, span = PORT_SPAN, base = PORT_BASE) {
 
 /** The port this checkout's cluster `name` prefers: derived from the checkout path. */
 export function derivedPort(name) {
-  const h = createHash('sha256').update(`${realpathSync(root)}\0${name}`).digest()
+  const h = createHash('sha256')
+    .update(`${realpathSync(root)}\0${name}`)
+    .digest()
   return PORT_BASE + (h.readUInt32BE(0) % PORT_SPAN)
 }
 

@@ -30,7 +30,10 @@ export function supervise(name, spawnChild, options = {}) {
       if (stopping) return
       if (Date.now() - startedAt >= healthyAfterMs) delay = firstDelayMs
       log(`[supervisor] the ${name} (pid ${child.pid}) stopped: ${describeExit(code, signal)}; restarting it in ${delay / 1000} s`)
-      timer = setTimeout(() => { state.restarts += 1; start() }, delay)
+      timer = setTimeout(() => {
+        state.restarts += 1
+        start()
+      }, delay)
       delay = Math.min(maxDelayMs, delay * 2)
     })
   }
@@ -38,13 +41,18 @@ export function supervise(name, spawnChild, options = {}) {
 
   return {
     state,
-    get pid() { return child?.pid },
+    get pid() {
+      return child?.pid
+    },
     /** Stop supervising and end the child with `signal`; resolves when it has exited. */
     stop(signal = 'SIGTERM') {
       stopping = true
       clearTimeout(timer)
       if (!child || child.exitCode !== null || child.signalCode !== null) return Promise.resolve()
-      return new Promise((resolve) => { child.once('exit', () => resolve()); child.kill(signal) })
+      return new Promise((resolve) => {
+        child.once('exit', () => resolve())
+        child.kill(signal)
+      })
     },
   }
 }

@@ -9,7 +9,11 @@ export function runVitest(args, reportName = 'vitest.json', env = process.env) {
   mkdirSync(join(root, 'test-results'), { recursive: true })
   const report = join(root, 'test-results', reportName)
   rmSync(report, { force: true })
-  const r = spawnSync(process.execPath, [join(root, 'node_modules/vitest/vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...args], { cwd: root, stdio: 'inherit', env })
+  const r = spawnSync(process.execPath, [join(root, 'node_modules/vitest/vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...args], {
+    cwd: root,
+    stdio: 'inherit',
+    env,
+  })
   let passed = 0
   let failed = 0
   if (existsSync(report)) {

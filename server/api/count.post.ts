@@ -11,5 +11,5 @@ import type { CountResult } from '../engine/counting/countOperators'
 export default defineApiHandler(async (event) => {
   const user = await requireUser(event)
   const body = await readJson(event, QuickCountSchema)
-  return await compute('quickCount', { theory: body.theory, maxDim: body.maxDim, nf: body.nf }, user.id) as CountResult
+  return (await compute('quickCount', { theory: body.theory, maxDim: body.maxDim, nf: body.nf }, user.id)) as CountResult
 })

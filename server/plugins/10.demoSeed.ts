@@ -10,7 +10,9 @@ export default defineNitroPlugin(() => {
   demoState.status = 'seeding'
   const enqueue = async (runId: number) => (await useQueue()).send(RUN_QUEUE, { runId })
   seedDemo(useDb(), (password) => hashPassword(password), enqueue)
-    .then(() => { demoState.status = 'ready' })
+    .then(() => {
+      demoState.status = 'ready'
+    })
     .catch((error) => {
       demoState.status = 'failed'
       console.error('[demo] seeding failed', error)

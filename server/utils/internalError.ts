@@ -17,7 +17,7 @@ export function internalErrorText(ref: string): string {
  * Log an unexpected error (a bug, a failed consistency check, a crash) with a fresh reference
  * and the context it happened in, and return the reference and the text to show instead.
  */
-export function reportInternalError(error: unknown, context: string): { ref: string, text: string } {
+export function reportInternalError(error: unknown, context: string): { ref: string; text: string } {
   const ref = errorReference()
   const where = error instanceof Error && 'where' in error && error.where ? ` (raised in ${String(error.where)})` : ''
   console.error(`[scalewright] internal error ref ${ref} during ${context}${where}:`, error)

@@ -9,14 +9,16 @@ let transport: Transporter | undefined
 
 function useTransport(): Transporter {
   if (!transport) {
-    transport = process.env.SMTP_URL
-      ? nodemailer.createTransport(process.env.SMTP_URL)
-      : nodemailer.createTransport({ streamTransport: true, buffer: true, newline: 'unix' })
+    transport = process.env.SMTP_URL ? nodemailer.createTransport(process.env.SMTP_URL) : nodemailer.createTransport({ streamTransport: true, buffer: true, newline: 'unix' })
   }
   return transport
 }
 
-export interface Mail { to: string, subject: string, text: string }
+export interface Mail {
+  to: string
+  subject: string
+  text: string
+}
 
 // Subjects are one line and short: names in them (groups, people) may be long or hold line
 // breaks, and the outbox keeps at most 200 characters.
@@ -34,7 +36,7 @@ export function subjectLine(subject: string): string {
  * (503 with `failure` as its message), which rolls the transaction back — nothing is left
  * announced but unsent.
  */
-export async function sendMail(mail: Mail, opts: { db?: Knex, failure?: string } = {}): Promise<void> {
+export async function sendMail(mail: Mail, opts: { db?: Knex; failure?: string } = {}): Promise<void> {
   const from = process.env.MAIL_FROM || 'Scalewright <no-reply@scalewright.invalid>'
   const message = { ...mail, subject: subjectLine(mail.subject) }
   try {

@@ -20,7 +20,11 @@ import { EngineInputError } from '../engine/errors'
 import type { Priorities } from '../engine/basis/classBasis'
 import type { LadderDocument, RunningQcdRequest, RunningQedRequest } from '../../shared/schemas/scaleRequests'
 
-interface QuickCount { theory: unknown, maxDim: number, nf?: number }
+interface QuickCount {
+  theory: unknown
+  maxDim: number
+  nf?: number
+}
 
 /** A quick count (the editor's): light theories by dimension, heavy-frame theories by order. */
 function quickCount({ theory, maxDim, nf }: QuickCount) {
@@ -30,7 +34,7 @@ function quickCount({ theory, maxDim, nf }: QuickCount) {
 }
 
 /** Integrate fields out of a stored theory file; the theory left below must itself be valid. */
-function integrateOutChecked(a: { parent: unknown, fields: string[], scale: Parameters<typeof integrateOut>[2] }) {
+function integrateOutChecked(a: { parent: unknown; fields: string[]; scale: Parameters<typeof integrateOut>[2] }) {
   const step = integrateOut(parseTheory(a.parent), a.fields, a.scale)
   const check = TheorySchema.safeParse(step.child)
   if (!check.success) throw new EngineInputError('integrateOut', `The theory left below the threshold would not be valid:\n${formatTheoryIssues(step.child, check.error.issues)}`)
@@ -38,18 +42,17 @@ function integrateOutChecked(a: { parent: unknown, fields: string[], scale: Para
 }
 
 export const COMPUTE_TASKS = {
-  ladder: (a: { doc: LadderDocument, frame: string }) => computeLadder(a.doc, a.frame),
-  ordersBelowTarget: (a: { doc: LadderDocument, orders: number[], target: number, frame: string }) => ordersBelowTarget(a.doc, a.orders, a.target, a.frame),
+  ladder: (a: { doc: LadderDocument; frame: string }) => computeLadder(a.doc, a.frame),
+  ordersBelowTarget: (a: { doc: LadderDocument; orders: number[]; target: number; frame: string }) => ordersBelowTarget(a.doc, a.orders, a.target, a.frame),
   qcdRunning: (req: RunningQcdRequest) => qcdRunning(req),
   qedRunning: (req: RunningQedRequest) => qedRunning(req),
   anomalies: (theory: Theory) => anomalyConditions(theory),
   couplings: (theory: Theory) => resolveCouplings(theory),
   integrateOut: integrateOutChecked,
   quickCount,
-  goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput, texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),
-  typedFingerprints: (a: { theory: unknown, classKey: string, texts: string[], priorities?: Priorities }) =>
-    typedFingerprints(parseTheory(a.theory), a.classKey, a.texts, a.priorities),
-  checkOperatorList: (a: { theory: unknown, dimension: number, texts: string[], aliases?: Record<string, string>, priorities?: Priorities }) => {
+  goldstoneTypedFingerprints: (a: { input: GoldstoneTypedInput; texts: string[] }) => goldstoneTypedFingerprints(a.input, a.texts),
+  typedFingerprints: (a: { theory: unknown; classKey: string; texts: string[]; priorities?: Priorities }) => typedFingerprints(parseTheory(a.theory), a.classKey, a.texts, a.priorities),
+  checkOperatorList: (a: { theory: unknown; dimension: number; texts: string[]; aliases?: Record<string, string>; priorities?: Priorities }) => {
     const report = checkOperatorList(parseTheory(a.theory), a.dimension, a.texts, { aliases: a.aliases, priorities: a.priorities })
     return { report, csv: translationCsv(report), latex: translationLatex(report) }
   },

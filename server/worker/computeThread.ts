@@ -4,7 +4,7 @@ import { parentPort } from 'node:worker_threads'
 import { COMPUTE_TASKS, type ComputeKind } from './computeTasks'
 import { toThreadError } from './threadError'
 
-parentPort!.on('message', (msg: { id: number, kind: ComputeKind, input: unknown }) => {
+parentPort!.on('message', (msg: { id: number; kind: ComputeKind; input: unknown }) => {
   try {
     const task = COMPUTE_TASKS[msg.kind] as (input: unknown) => unknown
     parentPort!.postMessage({ id: msg.id, ok: true, result: task(msg.input) })

@@ -16,9 +16,12 @@ function threadEntry(): URL {
 }
 
 export type EngineTask =
-  | { kind: 'count' | 'basis', theory: unknown, maxDim?: number, maxOrder?: number, nf?: number, priorities?: Priorities }
-  | { kind: 'fingerprint', theory: unknown, classKey: string, texts: string[], priorities?: Priorities }
-export interface TaskHandle<T> { result: Promise<T>, cancel: () => void }
+  | { kind: 'count' | 'basis'; theory: unknown; maxDim?: number; maxOrder?: number; nf?: number; priorities?: Priorities }
+  | { kind: 'fingerprint'; theory: unknown; classKey: string; texts: string[]; priorities?: Priorities }
+export interface TaskHandle<T> {
+  result: Promise<T>
+  cancel: () => void
+}
 
 /**
  * Start an engine task in a worker thread. Progress arrives through `onProgress`; `cancel()`
@@ -41,13 +44,17 @@ export function startEngineTask<T>(task: EngineTask, onProgress: (fraction: numb
       if (cancelled) reject(new EngineCancelledError(task.kind))
       else if (code !== 0) reject(new Error(`the engine thread stopped with exit code ${code}`))
     })
-  }).finally(() => { void worker.terminate() })
+  }).finally(() => {
+    void worker.terminate()
+  })
   return {
     result,
     cancel() {
       cancelled = true
       Atomics.store(cancelFlag, 0, 1)
-      setTimeout(() => { void worker.terminate() }, 3000).unref()
+      setTimeout(() => {
+        void worker.terminate()
+      }, 3000).unref()
     },
   }
 }

@@ -12,8 +12,12 @@ import { parseTheory } from '../engine/theory/parseTheory'
 import type { EngineTask } from './engineTask'
 import { toThreadError } from './threadError'
 
-const { task, cancelFlag } = workerData as { task: EngineTask, cancelFlag: Int32Array }
-const signal = { get aborted() { return Atomics.load(cancelFlag, 0) === 1 } }
+const { task, cancelFlag } = workerData as { task: EngineTask; cancelFlag: Int32Array }
+const signal = {
+  get aborted() {
+    return Atomics.load(cancelFlag, 0) === 1
+  },
+}
 let lastPost = 0
 function onProgress(fraction: number, label: string) {
   const now = Date.now()

@@ -18,13 +18,30 @@ export async function executeRun(db: Knex, runId: number, send: SendRun, timeMin
   const run = await claimRun(db, runId)
   if (!run) return // done, cancelled, or held by another worker: a duplicate job
   const params = run.params as RunParams
-  let pending: { fraction: number, label: string } | undefined
-  const handle = startEngineTask({ kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, maxOrder: params.maxOrder, nf: params.nf, priorities: params.priorities }, (fraction, label) => { pending = { fraction, label } })
-  const lease = startLease(db, run, () => { const p = pending; pending = undefined; return p }, () => handle.cancel())
+  let pending: { fraction: number; label: string } | undefined
+  const handle = startEngineTask(
+    { kind: run.kind as 'count' | 'basis', theory: params.theory, maxDim: params.maxDim, maxOrder: params.maxOrder, nf: params.nf, priorities: params.priorities },
+    (fraction, label) => {
+      pending = { fraction, label }
+    },
+  )
+  const lease = startLease(
+    db,
+    run,
+    () => {
+      const p = pending
+      pending = undefined
+      return p
+    },
+    () => handle.cancel(),
+  )
   // The run-time limit of its kind: past it the engine is stopped and the run fails with a message.
   let overtime = false
   const minutes = timeMinutes[run.kind] ?? 15
-  const limit = setTimeout(() => { overtime = true; handle.cancel() }, minutes * 60_000)
+  const limit = setTimeout(() => {
+    overtime = true
+    handle.cancel()
+  }, minutes * 60_000)
   try {
     const result = await handle.result
     await persistRunResult(db, { ...run, theory_id: run.theory_id, kind: run.kind, params }, result)
@@ -43,7 +60,7 @@ export async function executeRun(db: Knex, runId: number, send: SendRun, timeMin
  * answer). Anything else is logged under a reference and retried once (a fresh job), then the
  * run fails with the reference of its retry. A run this worker lost is left to its new holder.
  */
-async function recordEnd(db: Knex, run: { id: number, attempts: number }, error: unknown, send: SendRun) {
+async function recordEnd(db: Knex, run: { id: number; attempts: number }, error: unknown, send: SendRun) {
   const fail = (text: string) => heldRun(db, run).update({ status: 'failed', error: text, finished_at: db.fn.now() })
   try {
     if (error instanceof RunLostError) {
@@ -57,7 +74,11 @@ async function recordEnd(db: Knex, run: { id: number, attempts: number }, error:
     } else {
       const { ref } = reportInternalError(error, `run ${run.id} (attempt ${run.attempts}; queued again once)`)
       const n = await heldRun(db, run).update({ status: 'queued', job_id: null, worker: null, progress: 0, current_label: `retrying after an internal error (ref ${ref})` })
-      if (n) await db('runs').where({ id: run.id, status: 'queued' }).whereNull('job_id').update({ job_id: await send(run.id) })
+      if (n)
+        await db('runs')
+          .where({ id: run.id, status: 'queued' })
+          .whereNull('job_id')
+          .update({ job_id: await send(run.id) })
     }
   } catch (writeError) {
     // The database is away: the heartbeat stops with us, and a sweep settles the run later.

@@ -30,7 +30,11 @@ function storedTheory(definition: unknown) {
   }
 }
 
-export interface TowerStepHintInput { parent: unknown, removed: string[], scaleText: string }
+export interface TowerStepHintInput {
+  parent: unknown
+  removed: string[]
+  scaleText: string
+}
 /** Per tower step below a threshold: the worked matching results that apply and the classes the removed fields generate. */
 function towerHints(steps: TowerStepHintInput[]) {
   return steps.map(({ parent, removed, scaleText }) => {
@@ -59,7 +63,7 @@ function gaugeInputs(steps: StoredTowerStep[]) {
 }
 
 /** The running of a tower's gauge couplings (curves, tables, exact coefficients per segment). */
-function gaugeRunning({ steps, request }: { steps: StoredTowerStep[], request: GaugeReportRequest }) {
+function gaugeRunning({ steps, request }: { steps: StoredTowerStep[]; request: GaugeReportRequest }) {
   return gaugeRunningReport(towerGaugeContent(parsedSteps(steps)), request)
 }
 

@@ -16,10 +16,7 @@ export interface ThreadErrorMessage {
 /** The plain-data form of an error thrown in the engine thread. */
 export function toThreadError(error: unknown): ThreadErrorMessage {
   const e = error instanceof Error ? error : new Error(String(error))
-  const kind: ThreadErrorKind = e instanceof EngineInputError ? 'input'
-    : e instanceof EngineConsistencyError ? 'consistency'
-      : e instanceof EngineCancelledError ? 'cancelled'
-        : 'other'
+  const kind: ThreadErrorKind = e instanceof EngineInputError ? 'input' : e instanceof EngineConsistencyError ? 'consistency' : e instanceof EngineCancelledError ? 'cancelled' : 'other'
   const where = 'where' in e && typeof e.where === 'string' ? e.where : ''
   return { type: 'error', kind, name: e.name, message: e.message, where, stack: e.stack }
 }

@@ -70,7 +70,9 @@ export function labelsReality(rs: RootSystem, labels: readonly number[]): Realit
   let twice = 0
   for (const a of rs.positive) {
     let s = 0
-    a.coeffs.forEach((c, i) => { s += c * rs.half[i]! * labels[i]! })
+    a.coeffs.forEach((c, i) => {
+      s += c * rs.half[i]! * labels[i]!
+    })
     twice += s / a.half
   }
   return Math.round(twice) % 2 === 0 ? 'real' : 'pseudoreal'
@@ -84,7 +86,9 @@ export function labelsReality(rs: RootSystem, labels: readonly number[]): Realit
 export function irrepIndicator(t: FiniteGroupTable, i: number): Reality {
   const chi = t.irreps[i]!.chi
   let s: Eis = E0
-  t.classes.forEach((cl) => { s = eAdd(s, eScale(cl.size, chi[cl.powers[2 % cl.order]!]!)) })
+  t.classes.forEach((cl) => {
+    s = eAdd(s, eScale(cl.size, chi[cl.powers[2 % cl.order]!]!))
+  })
   if (s[1] !== 0 || s[0] % t.order !== 0) throw new Error(`irrepIndicator: ${t.label}: class sum is not a multiple of the order ${t.order}`)
   const nu = s[0] / t.order
   return nu === 1 ? 'real' : nu === -1 ? 'pseudoreal' : 'complex'
@@ -111,7 +115,10 @@ export function repDimensionOf(kind: string, n: number | undefined, rep: RepValu
 export function repRealityOf(kind: string, n: number | undefined, rep: RepValue): Reality {
   if (isFinite(kind)) {
     const t = FINITE_GROUPS[kind]
-    return irrepIndicator(t, t.irreps.findIndex((r) => r.name === rep))
+    return irrepIndicator(
+      t,
+      t.irreps.findIndex((r) => r.name === rep),
+    )
   }
   const labels = rep as readonly number[]
   if (kind === 'SU') return irrepReality(n!, labels)

@@ -12,7 +12,15 @@ export type ScaleUnit = (typeof SCALE_UNITS)[number]
 
 /** Power of ten: 1 unit = 10^p MeV (energies) or 10^p fm (lengths). */
 export const UNIT_POWER_OF_TEN: Record<ScaleUnit, number> = {
-  eV: -6, keV: -3, MeV: 0, GeV: 3, TeV: 6, fm: 0, pm: 3, nm: 6, m: 15,
+  eV: -6,
+  keV: -3,
+  MeV: 0,
+  GeV: 3,
+  TeV: 6,
+  fm: 0,
+  pm: 3,
+  nm: 6,
+  m: 15,
 }
 
 export function isLengthUnit(unit: string): unit is LengthUnit {

@@ -28,11 +28,26 @@ export const PRESETS: readonly Preset[] = [
   { id: 'qed', title: 'QED', description: 'One Dirac fermion of charge −1 (two Weyl fields) and the photon.', theory: qed as Theory },
   { id: 'scalar-qed', title: 'Scalar QED', description: 'A complex scalar of charge 1 and the photon.', theory: scalarQed as Theory },
   { id: 'qcd-like', title: 'QCD-like', description: 'SU(3) gauge theory with 2 Dirac quark flavors and the gluon.', theory: qcdLike as Theory },
-  { id: 'smeft-u3-5', title: 'SMEFT with U(3)^5 flavour symmetry', description: 'One copy of each SM field; the flavour group U(3)^5 written as SU(3)^5 × U(1)^5 (13 groups in all).', theory: smeftU35 as Theory },
+  {
+    id: 'smeft-u3-5',
+    title: 'SMEFT with U(3)^5 flavour symmetry',
+    description: 'One copy of each SM field; the flavour group U(3)^5 written as SU(3)^5 × U(1)^5 (13 groups in all).',
+    theory: smeftU35 as Theory,
+  },
   // written by the heavy-particle helper; frame "heavy" (not counted by the Hilbert series)
-  { id: 'heavy-vexonium', title: 'Vexonium (heavy frame)', description: 'A heavy fermion and its antiparticle bound by a dark U(1), in the heavy-particle frame.', theory: heavyVexonium as unknown as Theory },
+  {
+    id: 'heavy-vexonium',
+    title: 'Vexonium (heavy frame)',
+    description: 'A heavy fermion and its antiparticle bound by a dark U(1), in the heavy-particle frame.',
+    theory: heavyVexonium as unknown as Theory,
+  },
   // frame "goldstone": counted and built per chiral order (server/engine/goldstone)
-  { id: 'umbral-pions', title: 'Umbral pions (Goldstone frame)', description: 'Eight light pions of a hidden confining sector with three light flavors, with scalar and vector sources, to p⁶.', theory: umbralPions as unknown as Theory },
+  {
+    id: 'umbral-pions',
+    title: 'Umbral pions (Goldstone frame)',
+    description: 'Eight light pions of a hidden confining sector with three light flavors, with scalar and vector sources, to p⁶.',
+    theory: umbralPions as unknown as Theory,
+  },
 ]
 
 /** The preset with this id, or undefined. */

@@ -17,18 +17,14 @@ import './zodMessages'
  *
  * Weights are exact rationals written as strings "p/q" (or integers "3", "-1").
  */
-export const RationalStringSchema = z
-  .string()
-  .regex(/^-?(0|[1-9]\d{0,8})(\/[1-9]\d{0,8})?$/, {
-    message: 'a weight must be an exact rational written "p/q" or an integer, e.g. "3/2"',
-  })
+export const RationalStringSchema = z.string().regex(/^-?(0|[1-9]\d{0,8})(\/[1-9]\d{0,8})?$/, {
+  message: 'a weight must be an exact rational written "p/q" or an integer, e.g. "3/2"',
+})
 
 /** Building-block key: a field name, "D", "D_t", "E", "B", "sigma", "m", a conjugate "psi*". */
-export const BlockNameSchema = z
-  .string()
-  .regex(/^[A-Za-z][A-Za-z0-9_]{0,23}\*?$/, {
-    message: 'a building-block name is a letter followed by letters, digits or "_" (optionally a trailing "*")',
-  })
+export const BlockNameSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]{0,23}\*?$/, {
+  message: 'a building-block name is a letter followed by letters, digits or "_" (optionally a trailing "*")',
+})
 
 export const CountingRuleKindSchema = z.enum(['massRatio', 'velocity', 'momentumRatio', 'custom'])
 

@@ -22,29 +22,36 @@ export const MAX_COUPLINGS = 200
 /** Names nerdamer reads as constants or functions, so a symbol cannot be one of them (common practice: its built-ins). */
 const RESERVED_SYMBOLS = new Set(['e', 'E', 'i', 'pi', 'PI', 'Infinity', 'sqrt', 'exp', 'log', 'ln', 'sin', 'cos', 'tan', 'abs', 'min', 'max', 'D'])
 
-const SymbolSchema = z.string()
+const SymbolSchema = z
+  .string()
   .regex(SYMBOL_PATTERN, { message: 'a coupling or mass symbol is a letter followed by up to 15 letters, digits or "_" (e.g. "lambda", "mu_S", "M")' })
   .refine((s) => !RESERVED_SYMBOLS.has(s), { message: 'is a reserved name (a constant, function or the covariant derivative); choose another symbol' })
 
 export const VALUE_PATTERN = /^\s*-?(\d{1,12}(\s*\/\s*\d{1,12})?|\d{0,12}\.?\d{1,12}([eE][-+]?\d{1,3})?)\s*$/
 
-export const CouplingValueSchema = z.object({
-  number: z.string().regex(VALUE_PATTERN, { message: 'a value is an exact rational ("1/3", "-2") or a decimal ("0.118", "1.5e3")' }),
-  unit: z.enum(SCALE_UNITS.filter((u) => u.endsWith('eV')) as [string, ...string[]], { error: 'a unit is one of eV, keV, MeV, GeV, TeV' }).optional(),
-}).strict()
+export const CouplingValueSchema = z
+  .object({
+    number: z.string().regex(VALUE_PATTERN, { message: 'a value is an exact rational ("1/3", "-2") or a decimal ("0.118", "1.5e3")' }),
+    unit: z.enum(SCALE_UNITS.filter((u) => u.endsWith('eV')) as [string, ...string[]], { error: 'a unit is one of eV, keV, MeV, GeV, TeV' }).optional(),
+  })
+  .strict()
 
-export const CouplingSchema = z.object({
-  class: z.string().min(1).max(200),
-  operator: z.string().min(1).max(400).optional(),
-  symbol: SymbolSchema,
-  value: CouplingValueSchema.optional(),
-  description: z.string().max(200).optional(),
-}).strict()
+export const CouplingSchema = z
+  .object({
+    class: z.string().min(1).max(200),
+    operator: z.string().min(1).max(400).optional(),
+    symbol: SymbolSchema,
+    value: CouplingValueSchema.optional(),
+    description: z.string().max(200).optional(),
+  })
+  .strict()
 
-export const MassSchema = z.object({
-  symbol: SymbolSchema,
-  value: CouplingValueSchema.optional(),
-}).strict()
+export const MassSchema = z
+  .object({
+    symbol: SymbolSchema,
+    value: CouplingValueSchema.optional(),
+  })
+  .strict()
 
 export type Coupling = z.infer<typeof CouplingSchema>
 export type CouplingValue = z.infer<typeof CouplingValueSchema>
@@ -56,7 +63,7 @@ type Report = (path: (string | number)[], message: string) => void
  * Symbols are distinct from each other and from the theory's field and group names (a
  * coefficient "y*H" would be ambiguous); one coupling per operator; a mass value has a unit.
  */
-export function checkCouplingSymbols(t: { couplings?: Coupling[], fields: { name: string, mass?: FieldMass }[], groups: { name: string }[] }, report: Report): void {
+export function checkCouplingSymbols(t: { couplings?: Coupling[]; fields: { name: string; mass?: FieldMass }[]; groups: { name: string }[] }, report: Report): void {
   const roster = new Set([...t.fields.map((f) => f.name), ...t.groups.map((g) => g.name)])
   const seen = new Map<string, string>()
   const claim = (symbol: string, owner: string, path: (string | number)[]) => {

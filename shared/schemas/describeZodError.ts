@@ -3,10 +3,12 @@ import { ENTRY_WORDS, KEY_WORDS, RECORD_WORDS, WRAPPER_KEYS } from './fieldWords
 import './zodMessages'
 
 /** One problem of a zod error: where it is (path inside the validated value) and its message. */
-export interface IssueLike { path: readonly PropertyKey[], message: string }
+export interface IssueLike {
+  path: readonly PropertyKey[]
+  message: string
+}
 
-const child = (node: unknown, key: PropertyKey): unknown =>
-  node !== null && typeof node === 'object' ? (node as Record<PropertyKey, unknown>)[key] : undefined
+const child = (node: unknown, key: PropertyKey): unknown => (node !== null && typeof node === 'object' ? (node as Record<PropertyKey, unknown>)[key] : undefined)
 
 function entryName(list: unknown, i: number): string {
   const name = child(child(list, i), 'name')

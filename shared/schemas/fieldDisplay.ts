@@ -18,17 +18,55 @@ function greekTable(names: string[], first: number): [string, string][] {
 const UNICODE_TEX: Record<string, string> = {
   ...Object.fromEntries(greekTable(GREEK_LOWER, 0x3b1)),
   ...Object.fromEntries(greekTable(GREEK_UPPER, 0x391)),
-  'ϕ': '\\phi', 'ϵ': '\\epsilon', 'ϑ': '\\vartheta', 'µ': '\\mu', '†': '\\dagger', '′': '\\prime', '∗': '*',
-  '⁰': '^{0}', '¹': '^{1}', '²': '^{2}', '³': '^{3}', '⁺': '^{+}', '⁻': '^{-}',
-  '₀': '_{0}', '₁': '_{1}', '₂': '_{2}', '₃': '_{3}', 'ᴸ': '^{L}', 'ᴿ': '^{R}',
+  ϕ: '\\phi',
+  ϵ: '\\epsilon',
+  ϑ: '\\vartheta',
+  µ: '\\mu',
+  '†': '\\dagger',
+  '′': '\\prime',
+  '∗': '*',
+  '⁰': '^{0}',
+  '¹': '^{1}',
+  '²': '^{2}',
+  '³': '^{3}',
+  '⁺': '^{+}',
+  '⁻': '^{-}',
+  '₀': '_{0}',
+  '₁': '_{1}',
+  '₂': '_{2}',
+  '₃': '_{3}',
+  ᴸ: '^{L}',
+  ᴿ: '^{R}',
 }
 
 /** Commands a display form may use: Greek letters, accents and upright/bold/calligraphic letters. */
 const COMMANDS = new Set([
-  ...GREEK_LOWER.filter((n) => n.length > 1), 'varepsilon', 'vartheta', 'varphi', 'varrho', 'varpi',
+  ...GREEK_LOWER.filter((n) => n.length > 1),
+  'varepsilon',
+  'vartheta',
+  'varphi',
+  'varrho',
+  'varpi',
   ...GREEK_UPPER.filter((n) => n.length > 1),
-  'bar', 'overline', 'tilde', 'widetilde', 'hat', 'widehat', 'check', 'dot', 'ddot', 'vec',
-  'mathrm', 'mathit', 'mathbf', 'mathcal', 'mathsf', 'bm', 'prime', 'dagger', 'ast',
+  'bar',
+  'overline',
+  'tilde',
+  'widetilde',
+  'hat',
+  'widehat',
+  'check',
+  'dot',
+  'ddot',
+  'vec',
+  'mathrm',
+  'mathit',
+  'mathbf',
+  'mathcal',
+  'mathsf',
+  'bm',
+  'prime',
+  'dagger',
+  'ast',
 ])
 
 const MAX_DISPLAY = 40
@@ -68,7 +106,10 @@ export function displayProblem(display: string): string | null {
  */
 export function fieldTex(name: string, display?: string): string {
   if (display !== undefined && displayProblem(display) === null) {
-    return `{${[...display].map((ch) => (UNICODE_TEX[ch] !== undefined ? `${UNICODE_TEX[ch]}${/^\\[A-Za-z]+$/.test(UNICODE_TEX[ch]) ? ' ' : ''}` : ch)).join('').trim()}}`
+    return `{${[...display]
+      .map((ch) => (UNICODE_TEX[ch] !== undefined ? `${UNICODE_TEX[ch]}${/^\\[A-Za-z]+$/.test(UNICODE_TEX[ch]) ? ' ' : ''}` : ch))
+      .join('')
+      .trim()}}`
   }
   if (name.length === 1) return name
   const [head, ...rest] = name.split('_').filter(Boolean)
@@ -84,7 +125,7 @@ export function fieldTex(name: string, display?: string): string {
 export function fieldTexTable(theory: unknown): Record<string, string> {
   const fields = (theory as { fields?: unknown } | null | undefined)?.fields
   if (!Array.isArray(fields)) return {}
-  return Object.fromEntries(fields.flatMap((f: { name?: unknown; display?: unknown }) => (typeof f?.name === 'string'
-    ? [[f.name, fieldTex(f.name, typeof f.display === 'string' ? f.display : undefined)]]
-    : [])))
+  return Object.fromEntries(
+    fields.flatMap((f: { name?: unknown; display?: unknown }) => (typeof f?.name === 'string' ? [[f.name, fieldTex(f.name, typeof f.display === 'string' ? f.display : undefined)]] : [])),
+  )
 }

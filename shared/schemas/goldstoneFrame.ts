@@ -28,11 +28,13 @@ export const GoldstoneFrameSchema = z
   .object({
     coset: z.enum(['chiral', 'orthogonal'], { message: 'coset must be "chiral" (SU(N)×SU(N)/SU(N)) or "orthogonal" (O(N+1)/O(N))' }),
     N: z.union([z.number().int({ message: 'N is a whole number or "general"' }), z.literal('general')], { message: 'N is a whole number or "general"' }),
-    sources: z.object({
-      scalar: z.boolean({ message: 'sources.scalar is true or false (the sources s, p)' }),
-      vector: z.boolean({ message: 'sources.vector is true or false (the sources l_μ, r_μ)' }),
-      singletVector: z.boolean({ message: 'sources.singletVector is true or false (the singlet vector source v_μ of U(1)_V)' }).optional(),
-    }).strict(),
+    sources: z
+      .object({
+        scalar: z.boolean({ message: 'sources.scalar is true or false (the sources s, p)' }),
+        vector: z.boolean({ message: 'sources.vector is true or false (the sources l_μ, r_μ)' }),
+        singletVector: z.boolean({ message: 'sources.singletVector is true or false (the singlet vector source v_μ of U(1)_V)' }).optional(),
+      })
+      .strict(),
     theta: z.boolean().optional(),
     maxOrder: z.number().int({ message: 'the highest chiral order is a whole number (a power of p)' }),
     decayConstant: NameSchema.optional(),

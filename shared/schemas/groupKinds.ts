@@ -10,7 +10,7 @@
 import { FINITE_GROUPS, FINITE_KINDS, type FiniteKind } from '../physics/finite/tables'
 
 export const LIE_KINDS = ['SU', 'SO', 'Sp', 'G2', 'F4', 'E6', 'E7', 'E8'] as const
-export type LieKind = typeof LIE_KINDS[number]
+export type LieKind = (typeof LIE_KINDS)[number]
 export const GROUP_KINDS = ['SU', 'U1', 'Z', 'SO', 'Sp', 'G2', 'F4', 'E6', 'E7', 'E8', ...FINITE_KINDS] as const
 export type GroupKind = 'U1' | 'Z' | LieKind | FiniteKind
 
@@ -74,8 +74,15 @@ export function groupInputKind(kind: string): 'labels' | 'irrep' | 'charge' {
 
 /** The kinds offered by the editor, with their readable names, in menu order. */
 export const GROUP_KIND_MENU: readonly { kind: GroupKind; label: string }[] = [
-  { kind: 'SU', label: 'SU(n)' }, { kind: 'SO', label: 'SO(n)' }, { kind: 'Sp', label: 'Sp(n)' },
-  { kind: 'G2', label: 'G2' }, { kind: 'F4', label: 'F4' }, { kind: 'E6', label: 'E6' }, { kind: 'E7', label: 'E7' }, { kind: 'E8', label: 'E8' },
-  { kind: 'U1', label: 'U(1)' }, { kind: 'Z', label: 'Z_n' },
+  { kind: 'SU', label: 'SU(n)' },
+  { kind: 'SO', label: 'SO(n)' },
+  { kind: 'Sp', label: 'Sp(n)' },
+  { kind: 'G2', label: 'G2' },
+  { kind: 'F4', label: 'F4' },
+  { kind: 'E6', label: 'E6' },
+  { kind: 'E7', label: 'E7' },
+  { kind: 'E8', label: 'E8' },
+  { kind: 'U1', label: 'U(1)' },
+  { kind: 'Z', label: 'Z_n' },
   ...FINITE_KINDS.map((kind) => ({ kind, label: FINITE_GROUPS[kind].label })),
 ]

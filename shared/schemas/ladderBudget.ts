@@ -6,10 +6,10 @@
 
 /** The parts of a ladder (input and orders) the budget reads. */
 export interface LadderDocumentShape {
-  scales: { name: string, value: number | string }[]
-  parameters: { name: string, numerator: number | string, denominator: number | string }[]
-  derived?: { name: string, from: string, factor?: number | string, powers: Record<string, number> }[]
-  orders: (number | { order: number | string, powers: Record<string, number> })[]
+  scales: { name: string; value: number | string }[]
+  parameters: { name: string; numerator: number | string; denominator: number | string }[]
+  derived?: { name: string; from: string; factor?: number | string; powers: Record<string, number> }[]
+  orders: (number | { order: number | string; powers: Record<string, number> })[]
   countingParameter?: string
 }
 
@@ -31,7 +31,11 @@ export function literalDigits(v: number | string): number {
 }
 
 /** One exact number over budget: where it is and about how many digits it would have. */
-export interface OverBudget { path: (string | number)[], what: string, digits: number }
+export interface OverBudget {
+  path: (string | number)[]
+  what: string
+  digits: number
+}
 
 function powersDigits(powers: Record<string, number>, params: Map<string, number>) {
   return Object.entries(powers).reduce((sum, [name, k]) => sum + Math.abs(k) * (params.get(name) ?? 0), 0)
@@ -48,19 +52,27 @@ export function ladderOverBudget(doc: LadderDocumentShape): OverBudget[] {
   const counting = doc.countingParameter ?? doc.parameters[0]?.name
   const out: OverBudget[] = []
   doc.parameters.forEach((p, i) => out.push({ path: ['parameters', i], what: `parameter "${p.name}"`, digits: params.get(p.name)! }))
-  ;(doc.derived ?? []).forEach((d, i) => out.push({
-    path: ['derived', i], what: `derived scale "${d.name}"`,
-    digits: (scales.get(d.from) ?? 0) + literalDigits(d.factor ?? 1) + powersDigits(d.powers, params),
-  }))
-  doc.orders.forEach((o, i) => out.push({
-    path: ['orders', i], what: `order ${typeof o === 'object' ? o.order : o}`,
-    digits: typeof o === 'object' ? powersDigits(o.powers, params) : o * (counting ? params.get(counting) ?? 0 : 0),
-  }))
+  ;(doc.derived ?? []).forEach((d, i) =>
+    out.push({
+      path: ['derived', i],
+      what: `derived scale "${d.name}"`,
+      digits: (scales.get(d.from) ?? 0) + literalDigits(d.factor ?? 1) + powersDigits(d.powers, params),
+    }),
+  )
+  doc.orders.forEach((o, i) =>
+    out.push({
+      path: ['orders', i],
+      what: `order ${typeof o === 'object' ? o.order : o}`,
+      digits: typeof o === 'object' ? powersDigits(o.powers, params) : o * (counting ? (params.get(counting) ?? 0) : 0),
+    }),
+  )
   return out.filter((o) => o.digits > MAX_EXACT_DIGITS)
 }
 
 /** The message for a number over budget, in the user's terms. */
 export function overBudgetMessage(o: OverBudget): string {
-  return `${o.what} would be an exact number of about ${o.digits.toLocaleString('en')} digits; the limit is ${MAX_EXACT_DIGITS.toLocaleString('en')}. `
-    + 'Write the numbers with fewer digits, use smaller powers, or give the values as plain numbers (not text) for a floating-point estimate'
+  return (
+    `${o.what} would be an exact number of about ${o.digits.toLocaleString('en')} digits; the limit is ${MAX_EXACT_DIGITS.toLocaleString('en')}. ` +
+    'Write the numbers with fewer digits, use smaller powers, or give the values as plain numbers (not text) for a floating-point estimate'
+  )
 }

@@ -12,7 +12,7 @@ export type LorentzKind = (typeof LORENTZ_KINDS)[number]
 
 /** A short description of each kind for forms and the roster. */
 export const LORENTZ_KIND_TITLES: Record<LorentzKind, string> = {
-  'scalar': 'scalar (0,0)',
+  scalar: 'scalar (0,0)',
   'left-weyl': 'left-handed Weyl fermion (1/2,0)',
   'right-weyl': 'right-handed Weyl fermion (0,1/2)',
   'field-strength': 'gauge field strength (1,0)+(0,1)',
@@ -29,7 +29,9 @@ const OLD_LETTERS: Readonly<Record<string, LorentzKind>> = { S: 'scalar', L: 'le
 export function lorentzKindMessage(value: unknown): string {
   const word = typeof value === 'string' ? OLD_LETTERS[value] : undefined
   if (word !== undefined) {
-    const others = LORENTZ_KINDS.filter((k) => k !== word).map((k) => `"${k}"`).join(', ')
+    const others = LORENTZ_KINDS.filter((k) => k !== word)
+      .map((k) => `"${k}"`)
+      .join(', ')
     return `"${value}" is the old one-letter spelling; write "${word}" (the other Lorentz kinds are ${others})`
   }
   const all = LORENTZ_KINDS.map((k) => `"${k}"`).join(', ')

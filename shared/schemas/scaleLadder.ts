@@ -41,13 +41,16 @@ export const DerivedScaleSchema = z.object({
   unit: z.enum(SCALE_UNITS, { message: `must be one of ${SCALE_UNITS.join(', ')}` }).optional(),
 })
 
-export const OrderSpecSchema = z.union([
-  z.number().int().min(0).max(40),
-  z.object({
-    order: z.union([z.number().int(), z.string().min(1).max(24)]),
-    powers: z.record(NameSchema, z.number().int().min(-40).max(40)),
-  }),
-], { error: 'must be a whole number from 0 to 40, e.g. 2' })
+export const OrderSpecSchema = z.union(
+  [
+    z.number().int().min(0).max(40),
+    z.object({
+      order: z.union([z.number().int(), z.string().min(1).max(24)]),
+      powers: z.record(NameSchema, z.number().int().min(-40).max(40)),
+    }),
+  ],
+  { error: 'must be a whole number from 0 to 40, e.g. 2' },
+)
 
 export const ScaleLadderInputSchema = z.object({
   scales: z.array(ScaleSchema).max(30, { message: 'may list at most 30 scales' }),

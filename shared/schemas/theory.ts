@@ -113,7 +113,9 @@ function checkTheory(t: { frame: string; groups: TheoryGroup[]; fields: TheoryFi
   })
   if (t.heavy) checkHeavy(t.heavy, groups, names, report)
   if (t.couplings?.length && t.frame === 'goldstone') report(['couplings'], 'couplings name order-0 operators of the relativistic or heavy-particle frame; remove them, or change the frame')
-  t.fields.forEach((f, i) => { if (f.mass && f.lorentz === 'field-strength') report(['fields', i, 'mass'], 'a gauge field strength has no mass of its own here; remove the mass') })
+  t.fields.forEach((f, i) => {
+    if (f.mass && f.lorentz === 'field-strength') report(['fields', i, 'mass'], 'a gauge field strength has no mass of its own here; remove the mass')
+  })
   checkCouplingSymbols(t, report)
 }
 
@@ -129,7 +131,10 @@ function checkHeavy(h: HeavyFrame, groups: Map<string, TheoryGroup>, fieldNames:
   const bad: Bad = (key, message, ...more) => report(['heavy', 'particle', key, ...more], message)
   checkReps(particle, groups, bad)
   checkCharges(particle, groups, bad)
-  for (const [key, name] of [['particle', h.particle.name], ['antiparticle', h.antiparticle?.name]] as const) {
+  for (const [key, name] of [
+    ['particle', h.particle.name],
+    ['antiparticle', h.antiparticle?.name],
+  ] as const) {
     if (name === undefined) continue
     if (fieldNames.has(name)) report(['heavy', key, 'name'], `is already the name of a field of the roster; choose another name than "${name}"`)
     if (name === 'D') report(['heavy', key, 'name'], RESERVED_D)
@@ -144,19 +149,32 @@ type Bad = (key: string | number, message: string, ...more: (string | number)[])
 function checkReps(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
   for (const [gname, rep] of Object.entries(f.reps ?? {})) {
     const g = groups.get(gname)
-    if (!g) { bad('reps', NO_SUCH_GROUP(gname), gname); continue }
-    if (!isLieKind(g.type) && !isFiniteKind(g.type)) { bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname); continue }
+    if (!g) {
+      bad('reps', NO_SUCH_GROUP(gname), gname)
+      continue
+    }
+    if (!isLieKind(g.type) && !isFiniteKind(g.type)) {
+      bad('reps', `${gname} is ${g.type === 'U1' ? 'a U(1)' : `Z_${g.n}`} group, which takes a charge, not Dynkin labels`, gname)
+      continue
+    }
     if (groupNProblem(g)) continue // the symmetry's own n is reported there
     const ok = checkRep(g, rep, bad)
-    if (ok && f.lorentz === 'field-strength' && (typeof rep === 'string' || rep.some((a) => a !== 0))) bad('reps', `a field strength takes its representation from its gauge group; remove ${typeof rep === 'string' ? `"${rep}"` : `[${rep.join(',')}]`}`, gname)
+    if (ok && f.lorentz === 'field-strength' && (typeof rep === 'string' || rep.some((a) => a !== 0)))
+      bad('reps', `a field strength takes its representation from its gauge group; remove ${typeof rep === 'string' ? `"${rep}"` : `[${rep.join(',')}]`}`, gname)
   }
 }
 
 function checkCharges(f: TheoryField, groups: Map<string, TheoryGroup>, bad: Bad): void {
   for (const [gname, q] of Object.entries(f.charges ?? {})) {
     const g = groups.get(gname)
-    if (!g) { bad('charges', NO_SUCH_GROUP(gname), gname); continue }
-    if (g.type !== 'U1' && g.type !== 'Z') { bad('charges', `${gname} is ${groupKindLabel(g.type, g.n)}, which takes ${isFiniteKind(g.type) ? 'an irrep name' : 'Dynkin labels'}, not a charge`, gname); continue }
+    if (!g) {
+      bad('charges', NO_SUCH_GROUP(gname), gname)
+      continue
+    }
+    if (g.type !== 'U1' && g.type !== 'Z') {
+      bad('charges', `${gname} is ${groupKindLabel(g.type, g.n)}, which takes ${isFiniteKind(g.type) ? 'an irrep name' : 'Dynkin labels'}, not a charge`, gname)
+      continue
+    }
     if (g.type === 'Z' && !/^\s*-?\d+\s*$/.test(String(q))) bad('charges', `a Z_${g.n ?? 'n'} charge is a whole number (counted mod ${g.n ?? 'n'}), but got ${q}`, gname)
     if (/\/\s*0+\s*$/.test(String(q))) bad('charges', `the charge ${q} has a zero denominator`, gname)
     if (f.lorentz === 'field-strength' && !isZeroCharge(q)) bad('charges', `a field strength carries no charge; remove ${q}`, gname)

@@ -6,9 +6,11 @@ import './zodMessages'
  * TheorySchema (400 naming the field at fault) and answers the failed gauge-anomaly conditions.
  * The theory is checked as a whole inside the route, so that its message lists every problem.
  */
-export const TheoryCheckSchema = z.object({
-  theory: z.record(z.string(), z.unknown(), { error: 'is required: a theory file (a JSON object)' }),
-}).strict()
+export const TheoryCheckSchema = z
+  .object({
+    theory: z.record(z.string(), z.unknown(), { error: 'is required: a theory file (a JSON object)' }),
+  })
+  .strict()
 
 export interface AnomalyFailure {
   /** e.g. "Y^3", "weak^2 Y", "gravity^2 Y", "weak Witten". */

@@ -9,7 +9,12 @@ import { finiteIrrepNames, groupKindLabel, isFiniteKind, isLieKind, lieRank, N_R
 export const MAX_REP_DIMENSION = 1000
 
 /** The group fields the checks read (a TheoryGroup). */
-export interface GroupLike { name: string; type: string; n?: number; gauge: boolean }
+export interface GroupLike {
+  name: string
+  type: string
+  n?: number
+  gauge: boolean
+}
 export type { RepValue }
 
 type Bad = (key: string | number, message: string, ...more: (string | number)[]) => void
@@ -74,6 +79,10 @@ export function checkRealRepresentation(reps: [GroupLike, RepValue][], bad: Bad)
   else if (pseudo.length === 1) bad('reps', `a real scalar must sit in a real representation, but ${repText(pseudo[0]!.rep)} is pseudoreal`, pseudo[0]!.g.name)
   else if (pseudo.length % 2 === 1) {
     const list = pseudo.map((x) => `${x.g.name} = ${repText(x.rep)}`).join(', ')
-    bad('reps', `a real scalar must sit in a real representation, but the product of the reality indicators is −1: ${list} are pseudoreal (an even number of pseudoreal factors is real)`, pseudo[0]!.g.name)
+    bad(
+      'reps',
+      `a real scalar must sit in a real representation, but the product of the reality indicators is −1: ${list} are pseudoreal (an even number of pseudoreal factors is real)`,
+      pseudo[0]!.g.name,
+    )
   }
 }

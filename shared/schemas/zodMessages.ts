@@ -9,9 +9,21 @@ import { z } from 'zod'
 type Issue = z.core.$ZodRawIssue
 
 const KINDS: Record<string, string> = {
-  string: 'text', number: 'a number', int: 'a whole number', bigint: 'a whole number', nan: 'a number',
-  boolean: 'true or false', array: 'a list', tuple: 'a list', object: 'an object { … }', record: 'an object { … }',
-  map: 'an object { … }', set: 'a list', date: 'a date', null: 'empty (null)', literal: 'a fixed value',
+  string: 'text',
+  number: 'a number',
+  int: 'a whole number',
+  bigint: 'a whole number',
+  nan: 'a number',
+  boolean: 'true or false',
+  array: 'a list',
+  tuple: 'a list',
+  object: 'an object { … }',
+  record: 'an object { … }',
+  map: 'an object { … }',
+  set: 'a list',
+  date: 'a date',
+  null: 'empty (null)',
+  literal: 'a fixed value',
 }
 
 const quoted = (v: unknown) => (typeof v === 'string' ? `"${v}"` : String(v))
@@ -45,27 +57,42 @@ function union(iss: Extract<Issue, { code: 'invalid_union' }>): string {
 }
 
 function nestedMessage(issues: readonly { message?: string }[] | undefined): string {
-  return issues?.map((i) => i.message).filter(Boolean).join('; ') || 'not accepted here'
+  return (
+    issues
+      ?.map((i) => i.message)
+      .filter(Boolean)
+      .join('; ') || 'not accepted here'
+  )
 }
 
 /** The message for an issue no schema wrote a text for. */
 export function defaultMessage(iss: Issue): string {
   switch (iss.code) {
-    case 'invalid_type': return missing(iss.input) ? 'is required' : `must be ${kindOf(iss.expected)}`
-    case 'too_small': return tooSmall(iss)
-    case 'too_big': return tooBig(iss)
-    case 'invalid_format': return iss.format === 'email' ? 'must be a valid e-mail address' : 'does not have the expected form'
-    case 'not_multiple_of': return `must be a multiple of ${iss.divisor}`
+    case 'invalid_type':
+      return missing(iss.input) ? 'is required' : `must be ${kindOf(iss.expected)}`
+    case 'too_small':
+      return tooSmall(iss)
+    case 'too_big':
+      return tooBig(iss)
+    case 'invalid_format':
+      return iss.format === 'email' ? 'must be a valid e-mail address' : 'does not have the expected form'
+    case 'not_multiple_of':
+      return `must be a multiple of ${iss.divisor}`
     case 'unrecognized_keys': {
       const one = iss.keys.length === 1
       return `has ${one ? 'an unknown key' : 'unknown keys'} ${iss.keys.map(quoted).join(', ')}; check the spelling or remove ${one ? 'it' : 'them'}`
     }
-    case 'invalid_union': return union(iss)
+    case 'invalid_union':
+      return union(iss)
     // The key is already named by the place (e.g. 'representation under 1bad').
-    case 'invalid_key': return `is not allowed here (${nestedMessage(iss.issues)})`
-    case 'invalid_element': return `has an entry that is not allowed (${nestedMessage(iss.issues)})`
-    case 'invalid_value': return iss.values.length === 1 ? `must be ${quoted(iss.values[0])}` : `must be one of ${iss.values.map(quoted).join(', ')}`
-    default: return 'is not valid'
+    case 'invalid_key':
+      return `is not allowed here (${nestedMessage(iss.issues)})`
+    case 'invalid_element':
+      return `has an entry that is not allowed (${nestedMessage(iss.issues)})`
+    case 'invalid_value':
+      return iss.values.length === 1 ? `must be ${quoted(iss.values[0])}` : `must be one of ${iss.values.map(quoted).join(', ')}`
+    default:
+      return 'is not valid'
   }
 }
 

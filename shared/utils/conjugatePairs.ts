@@ -8,14 +8,26 @@
  * @example pairConjugateClasses({ 'G_L^3': 1, 'G_R^3': 1, 'D^2 H^2 H*^2': 2 })
  *   // [{ key: 'G_L^3', conjugate: 'G_R^3', count: 2 }, { key: 'D^2 H^2 H*^2', conjugate: null, count: 2 }]
  */
-export interface ClassPair { key: string, conjugate: string | null, count: number }
+export interface ClassPair {
+  key: string
+  conjugate: string | null
+  count: number
+}
 
 const PART = /^([A-Za-z][A-Za-z0-9_]*?)(_[LR])?(\*)?(?:\^(\d+))?$/
 
 export function pairConjugateClasses(classes: Readonly<Record<string, number>>): ClassPair[] {
   const keys = Object.keys(classes)
   // A field is complex when some class holds its conjugate; a real scalar never carries "*".
-  const complex = new Set(keys.flatMap((k) => k.split(' ').map((p) => PART.exec(p)).filter((m) => m?.[3]).map((m) => m![1]!)))
+  const complex = new Set(
+    keys.flatMap((k) =>
+      k
+        .split(' ')
+        .map((p) => PART.exec(p))
+        .filter((m) => m?.[3])
+        .map((m) => m![1]!),
+    ),
+  )
   const bySignature = new Map(keys.map((k) => [signature(k.split(' ')), k]))
   const done = new Set<string>()
   const out: ClassPair[] = []
@@ -43,4 +55,8 @@ function conjugatePart(part: string, complex: Set<string>): string {
 const signature = (parts: string[]) => [...parts].sort().join(' ')
 // Conjugated legs (a right-handed strength counts as one), with their powers; the board's rule
 // (server/engine/basis/buildBasis.ts, representative), ties going to the smaller key.
-const weight = (key: string) => key.split(' ').map((p) => PART.exec(p)).reduce((s, m) => s + (m && (m[3] || m[2] === '_R') ? Number(m[4] ?? 1) : 0), 0)
+const weight = (key: string) =>
+  key
+    .split(' ')
+    .map((p) => PART.exec(p))
+    .reduce((s, m) => s + (m && (m[3] || m[2] === '_R') ? Number(m[4] ?? 1) : 0), 0)

@@ -50,7 +50,9 @@ describe('accounts', () => {
     expect(messageOf(again)).toBe('This sign-up link is invalid, used or expired; sign up again')
     const late = uniqueEmail('late')
     await new ApiClient().post('/api/auth/signup', { email: late, password: TEST_PASSWORD, displayName: 'Late' })
-    await testDb()('sign_up_requests').where({ email: late }).update({ expires_at: new Date(Date.now() - 1000) })
+    await testDb()('sign_up_requests')
+      .where({ email: late })
+      .update({ expires_at: new Date(Date.now() - 1000) })
     expect((await new ApiClient().post('/api/auth/signup-confirm', { token: await mailedToken(late, 'welcome') })).status).toBe(400)
   })
 
@@ -124,7 +126,9 @@ describe('throttling of password guessing and reset mails', () => {
     // Another address from the same client is not affected.
     expect((await new ApiClient().post('/api/auth/signin', { email: other.email, password: TEST_PASSWORD })).status).toBe(200)
     // Once the failures are older than the window, the right password works and clears them.
-    await testDb()('sign_in_failures').where('key', 'like', `${email}|%`).update({ created_at: new Date(Date.now() - 16 * 60_000) })
+    await testDb()('sign_in_failures')
+      .where('key', 'like', `${email}|%`)
+      .update({ created_at: new Date(Date.now() - 16 * 60_000) })
     expect((await new ApiClient().post('/api/auth/signin', { email, password: TEST_PASSWORD })).status).toBe(200)
     expect(await testDb()('sign_in_failures').where('key', 'like', `${email}|%`).count('id as n').first()).toEqual({ n: '0' })
   })

@@ -61,7 +61,11 @@ describe('npm run backup and npm run restore', () => {
       expect(existsSync(`${first}.partial`)).toBe(false)
       const after = publicTables(await databaseState(inject('databaseUrl')))
       const changed = Object.keys(after).filter((t) => JSON.stringify(after[t]) !== JSON.stringify(before[t]))
-      if (changed.length) { moved.push(changed.join(', ')); await new Promise((r) => setTimeout(r, 2000)); continue }
+      if (changed.length) {
+        moved.push(changed.join(', '))
+        await new Promise((r) => setTimeout(r, 2000))
+        continue
+      }
       const r1 = script('restore', urlOf(COPY), first)
       expect(r1.status, r1.out).toBe(0)
       copy = await databaseState(urlOf(COPY))

@@ -41,7 +41,7 @@ const withBody = mutatingRoutes().filter((r) => ROUTE_CASES[r]?.body)
 
 describe.each(withBody)('%s', (route) => {
   const method = route.split(' ')[0]!
-  async function send(mutate: (body: Record<string, unknown>) => { body?: unknown, raw?: string }) {
+  async function send(mutate: (body: Record<string, unknown>) => { body?: unknown; raw?: string }) {
     const actor = actorFor(route)
     const req = await ROUTE_CASES[route]!.prepare(world, actor)
     const variant = mutate(req.body as Record<string, unknown>)
@@ -67,7 +67,7 @@ describe.each(withBody)('%s', (route) => {
       expect(messageOf(res)).toMatch(/\w+/)
     })
   }
-  it('each field with a wrong type → 400 naming it in the user\'s words', async () => {
+  it("each field with a wrong type → 400 naming it in the user's words", async () => {
     const actor = actorFor(route)
     const keys = Object.keys(((await ROUTE_CASES[route]!.prepare(world, actor)).body ?? {}) as object)
     for (const key of keys) {

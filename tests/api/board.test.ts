@@ -26,7 +26,7 @@ describe('the basis board API', () => {
     expect(res.body.coverage['D^2 phi^2 phi*^2']).toEqual({ rank: 1, required: 1, complete: true })
   })
 
-  it('moves an operator, and reports a collaborator\'s move of the same operator instead of losing it', async () => {
+  it("moves an operator, and reports a collaborator's move of the same operator instead of losing it", async () => {
     const id = basis.operatorIds.sextic
     const v = await version(id)
     const first = await world.byRole.editor.client.post(`/api/operators/${id}/move`, { column: 'set_aside', position: 0, version: v })
@@ -72,14 +72,14 @@ describe('the basis board API', () => {
     expect(messageOf(bad)).toMatch(/^Cannot read "<12" in "<12"; write brackets such as <12>/)
   })
 
-  it('rewrites typed operators with coefficients beyond one prime\'s reach (7001/3, 1/9000, 123457), on new and old bases alike', async () => {
+  it("rewrites typed operators with coefficients beyond one prime's reach (7001/3, 1/9000, 123457), on new and old bases alike", async () => {
     const fresh = await addBasis(world)
     const bases = () => testDb()('bases').where({ id: fresh.basisId })
     expect((await bases().first('fingerprint_version')).fingerprint_version).toBe(FINGERPRINT_VERSION)
     const ask = async (classKey: string, text: string) => {
       const res = await world.byRole.viewer.client.post(`/api/bases/${fresh.basisId}/rewrite`, { classKey, text })
       expect(res.status, JSON.stringify(res.body)).toBe(200)
-      return res.body.rewrite.terms.map((t: { operatorId: number, coefficient: string }) => [t.operatorId, t.coefficient])
+      return res.body.rewrite.terms.map((t: { operatorId: number; coefficient: string }) => [t.operatorId, t.coefficient])
     }
     const { derivative, photon } = fresh.operatorIds
     const all = async () => [await ask('D^2 phi^2 phi*^2', '7001/3 <12>[12]'), await ask('D^2 phi^2 phi*^2', '-1/9000 <12>[12]'), await ask('phi phi* A_L^2', '123457 <34>^2')]
@@ -92,7 +92,9 @@ describe('the basis board API', () => {
     // not used (spoiled here to prove it), the kept operators are fingerprinted from their texts.
     await bases().update({ fingerprint_version: FINGERPRINT_VERSION + 1000 })
     const spoiled = { primes: [67108837, 67108777], values: [new Array(20).fill(1), new Array(20).fill(1)] }
-    await testDb()('operators').whereIn('id', [derivative, photon]).update({ fingerprint: JSON.stringify(spoiled) })
+    await testDb()('operators')
+      .whereIn('id', [derivative, photon])
+      .update({ fingerprint: JSON.stringify(spoiled) })
     expect(await all()).toEqual(expected)
   }, 180_000) // nine rewrites through the engine thread: ~30 s on a shared machine, past the 60 s default under heavy load
 
@@ -168,7 +170,7 @@ describe('the basis board API', () => {
 })
 
 /** A GET through node:http, which (unlike fetch) leaves the body as the server encoded it. */
-function rawGet(path: string, headers: Record<string, string>): Promise<{ headers: Record<string, string | string[] | undefined>, body: Buffer }> {
+function rawGet(path: string, headers: Record<string, string>): Promise<{ headers: Record<string, string | string[] | undefined>; body: Buffer }> {
   return new Promise((resolve, reject) => {
     const req = httpGet(`${world.owner.client.baseUrl}${path}`, { headers }, (res) => {
       const chunks: Buffer[] = []
@@ -179,4 +181,3 @@ function rawGet(path: string, headers: Record<string, string>): Promise<{ header
     req.on('error', reject)
   })
 }
-

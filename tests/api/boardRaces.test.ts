@@ -50,10 +50,7 @@ describe('concurrent moves on the board', () => {
     expect(kept.length).toBeGreaterThanOrEqual(2)
     for (let trial = 0; trial < 40; trial++) {
       const [x, y] = [kept[trial % kept.length]!.id, kept[(trial + 1) % kept.length]!.id]
-      const replies = await Promise.all([
-        move(world.byRole.editor.client, x, 'kept', 0, await operatorVersion(x)),
-        move(world.owner.client, y, 'kept', 2, await operatorVersion(y)),
-      ])
+      const replies = await Promise.all([move(world.byRole.editor.client, x, 'kept', 0, await operatorVersion(x)), move(world.owner.client, y, 'kept', 2, await operatorVersion(y))])
       expect(statuses(replies), JSON.stringify(replies.map((r) => r.body))).toEqual([200, 200])
     }
     const positions = await testDb()('operators').where({ basis_id: basis.basisId, order: 2, column: 'kept' }).orderBy('position').pluck('position')
@@ -63,11 +60,13 @@ describe('concurrent moves on the board', () => {
   it('a flood of 60 moves and reorders from three editors: no 5xx, no redundant kept set, coverage as stored', async () => {
     const ops = await testDb()('operators').where({ basis_id: basis.basisId, order: 2 }).select('id')
     const clients = [world.byRole.editor.client, world.owner.client, world.byRole.editor.client]
-    const replies = await Promise.all(Array.from({ length: 60 }, async (_, i) => {
-      const id = ops[(i * 7) % ops.length]!.id
-      const column = i % 3 === 0 ? 'set_aside' : 'kept'
-      return move(clients[i % 3]!, id, column, i % 5, await operatorVersion(id))
-    }))
+    const replies = await Promise.all(
+      Array.from({ length: 60 }, async (_, i) => {
+        const id = ops[(i * 7) % ops.length]!.id
+        const column = i % 3 === 0 ? 'set_aside' : 'kept'
+        return move(clients[i % 3]!, id, column, i % 5, await operatorVersion(id))
+      }),
+    )
     const bad = replies.filter((r) => r.status >= 500 || (r.status !== 200 && r.status !== 409))
     expect(bad.map((r) => `${r.status} ${messageOf(r)}`)).toEqual([])
     for (const r of replies.filter((x) => x.status === 409)) expect(messageOf(r)).toMatch(/redundant|meanwhile|busy|kept set/)
@@ -80,14 +79,16 @@ describe('concurrent moves on the board', () => {
 })
 
 describe('a move answers only after everything that can fail', () => {
-  it('a set-aside rewrite beyond the exact lift\'s reach: 200 with the move and the rewrite marked, never an error after the write', async () => {
+  it("a set-aside rewrite beyond the exact lift's reach: 200 with the move and the rewrite marked, never an error after the write", async () => {
     const fresh = await addBasis(world)
     const { derivative, alternative } = fresh.operatorIds
     // The alternative's fingerprint made 123456789012 times the kept one's: a coefficient no
     // two-prime lift can give exactly (|n| ≤ 47 453 092, DEVELOPERS.md).
     const keptPrint = (await testDb()('operators').where({ id: derivative }).first('fingerprint')).fingerprint
     const scaled = { primes: keptPrint.primes, values: keptPrint.values.map((row: number[], i: number) => row.map((v) => Number((BigInt(v) * 123456789012n) % BigInt(keptPrint.primes[i])))) }
-    await testDb()('operators').where({ id: alternative }).update({ fingerprint: JSON.stringify(scaled) })
+    await testDb()('operators')
+      .where({ id: alternative })
+      .update({ fingerprint: JSON.stringify(scaled) })
     const version = await operatorVersion(alternative)
     const res = await move(world.byRole.editor.client, alternative, 'set_aside', 0, version)
     expect(res.status, JSON.stringify(res.body)).toBe(200)

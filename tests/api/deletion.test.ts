@@ -35,8 +35,8 @@ describe('notes and tags', () => {
     expect(await boardNotes()).toContain('soon gone')
   })
 
-  it('an editor may delete another member\'s note, a commenter may not', async () => {
-    const note = (await world.owner.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'the owner\'s note' })).body.annotation
+  it("an editor may delete another member's note, a commenter may not", async () => {
+    const note = (await world.owner.client.post(`/api/theories/${world.theoryId}/annotations`, { body: "the owner's note" })).body.annotation
     const refused = await world.byRole.commenter.client.delete(`/api/annotations/${note.id}`)
     expect(refused.status).toBe(403)
     expect(messageOf(refused)).toBe('Only the author or an editor may delete this note')

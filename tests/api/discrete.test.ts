@@ -3,7 +3,9 @@ import { buildWorld, type World } from '../support/fixtures'
 import { findPreset } from '../../shared/presets/index'
 
 let world: World
-beforeAll(async () => { world = await buildWorld() })
+beforeAll(async () => {
+  world = await buildWorld()
+})
 
 async function basisOf(definition: unknown, body: Record<string, unknown>) {
   const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition })

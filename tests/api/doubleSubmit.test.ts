@@ -13,10 +13,17 @@ beforeAll(async () => {
 })
 
 const ONCE_ROUTES = [
-  'POST /api/theories/[id]/annotations', 'POST /api/operators/[id]/tags', 'POST /api/theories/[id]/share-links',
-  'POST /api/theories/[id]/runs', 'PATCH /api/theories/[id]', 'POST /api/groups/[slug]/theories',
-  'POST /api/theories/[id]/integrate-out', 'POST /api/groups/[slug]/invitations', 'POST /api/groups',
-  'POST /api/groups/[slug]/members', 'PUT /api/theories/[id]/scales',
+  'POST /api/theories/[id]/annotations',
+  'POST /api/operators/[id]/tags',
+  'POST /api/theories/[id]/share-links',
+  'POST /api/theories/[id]/runs',
+  'PATCH /api/theories/[id]',
+  'POST /api/groups/[slug]/theories',
+  'POST /api/theories/[id]/integrate-out',
+  'POST /api/groups/[slug]/invitations',
+  'POST /api/groups',
+  'POST /api/groups/[slug]/members',
+  'PUT /api/theories/[id]/scales',
 ]
 const newKey = () => randomBytes(12).toString('base64url')
 
@@ -33,7 +40,11 @@ async function sendAtOnce(route: string, times: number, key = newKey()) {
   const before = await rowCounts()
   const replies = await Promise.all(Array.from({ length: times }, () => actor.client.request(method, req.path, req.body, { headers: { 'idempotency-key': key } })))
   const after = await rowCounts()
-  const written = Object.fromEntries(Object.keys(after).filter((t) => t !== 'request_keys' && after[t] !== before[t]).map((t) => [t, after[t]! - before[t]!]))
+  const written = Object.fromEntries(
+    Object.keys(after)
+      .filter((t) => t !== 'request_keys' && after[t] !== before[t])
+      .map((t) => [t, after[t]! - before[t]!]),
+  )
   return { replies, written }
 }
 const summary = (r: Reply) => `${r.status} ${JSON.stringify(r.body).slice(0, 300)}`

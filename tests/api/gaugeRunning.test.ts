@@ -9,11 +9,13 @@ let world: World
 
 /** A dark U(1) X with a complex scalar S of charge 1 and a Dirac fermion chi of charge 1. */
 const DARK = {
-  name: 'Dark sector', frame: 'relativistic',
+  name: 'Dark sector',
+  frame: 'relativistic',
   groups: [{ name: 'X', type: 'U1', gauge: true }],
   fields: [
     { name: 'S', lorentz: 'scalar', charges: { X: '1' } },
-    { name: 'chi', lorentz: 'left-weyl', charges: { X: '1' } }, { name: 'chiR', lorentz: 'right-weyl', charges: { X: '1' } },
+    { name: 'chi', lorentz: 'left-weyl', charges: { X: '1' } },
+    { name: 'chiR', lorentz: 'right-weyl', charges: { X: '1' } },
     { name: 'Ad', lorentz: 'field-strength', gaugeOf: 'X' },
   ],
 }
@@ -34,7 +36,7 @@ beforeAll(async () => {
   world = await buildWorld()
 })
 
-describe('the running of a tower\'s gauge couplings', () => {
+describe("the running of a tower's gauge couplings", () => {
   let parent: number
   let child: number
   beforeAll(async () => {
@@ -45,9 +47,16 @@ describe('the running of a tower\'s gauge couplings', () => {
   it('GET: the chain through the tower, the matter with its masses and placeholder inputs, for every member', async () => {
     const r = await world.byRole.viewer.client.get(`/api/theories/${child}/gauge-running`)
     expect(r.status, JSON.stringify(r.body)).toBe(200)
-    expect(r.body.chain).toEqual([{ id: parent, name: 'Dark sector', thresholdGeV: null }, { id: child, name: r.body.chain[1].name, thresholdGeV: 1000 }])
+    expect(r.body.chain).toEqual([
+      { id: parent, name: 'Dark sector', thresholdGeV: null },
+      { id: child, name: r.body.chain[1].name, thresholdGeV: 1000 },
+    ])
     expect(r.body.groups).toEqual([{ name: 'X', label: 'U(1)', abelian: true }])
-    expect(r.body.multiplets.map((m: { name: string, massGeV: number }) => [m.name, m.massGeV])).toEqual([['chi', 0], ['chiR', 0], ['S', 1000]])
+    expect(r.body.multiplets.map((m: { name: string; massGeV: number }) => [m.name, m.massGeV])).toEqual([
+      ['chi', 0],
+      ['chiR', 0],
+      ['S', 1000],
+    ])
     expect(r.body.defaults.alpha).toEqual({ X: 0.01 })
     expect(r.body.defaults.source).toMatch(/^Placeholder inputs/)
     expect(r.body.problem).toBeNull()
@@ -59,15 +68,18 @@ describe('the running of a tower\'s gauge couplings', () => {
   it('POST: one segment per range with exact b (4/3 below the scalar, 5/3 above: by hand from Machacek & Vaughn 1983), the threshold in the table', async () => {
     const r = await world.byRole.viewer.client.post(`/api/theories/${child}/gauge-running`, RUN)
     expect(r.status, JSON.stringify(r.body)).toBe(200)
-    expect(r.body.segments.map((s: { lowGeV: number | null, highGeV: number | null, oneLoop: string[] }) => [s.lowGeV, s.highGeV, s.oneLoop[0]])).toEqual([[null, 1000, '4/3'], [1000, null, '5/3']])
+    expect(r.body.segments.map((s: { lowGeV: number | null; highGeV: number | null; oneLoop: string[] }) => [s.lowGeV, s.highGeV, s.oneLoop[0]])).toEqual([
+      [null, 1000, '4/3'],
+      [1000, null, '5/3'],
+    ])
     const row = r.body.table.find((t: { label: string }) => t.label === 'threshold of S')
     // One loop: α⁻¹(1 TeV) = 100 − (4/3) ln(1000)/2π.
-    expect(row.alphaInverse[0]).toBeCloseTo(100 - (4 / 3) * Math.log(1000) / (2 * Math.PI), 9)
+    expect(row.alphaInverse[0]).toBeCloseTo(100 - ((4 / 3) * Math.log(1000)) / (2 * Math.PI), 9)
     expect(r.body.stops).toEqual([])
     expect(r.body.curve.length).toBeGreaterThan(50)
   })
 
-  it('POST: a Landau pole inside the range is named in the physicist\'s words', async () => {
+  it("POST: a Landau pole inside the range is named in the physicist's words", async () => {
     const r = await world.byRole.viewer.client.post(`/api/theories/${child}/gauge-running`, { ...RUN, alpha: { X: 0.3 }, plotToGeV: 1e30 })
     expect(r.status).toBe(200)
     expect(r.body.stops).toHaveLength(1)
@@ -80,7 +92,11 @@ describe('the running of a tower\'s gauge couplings', () => {
     expect(r.body.chain.map((c: { id: number }) => c.id)).toEqual([parent])
     expect(r.body.note).toMatch(/^“Dark sector” has 2 theories below it .*; open the couplings page of the one whose thresholds the running should cross\.$/)
     const down = await world.byRole.viewer.client.get(`/api/theories/${other}/gauge-running`)
-    expect(down.body.multiplets.map((m: { name: string, massGeV: number }) => [m.name, m.massGeV])).toEqual([['S', 0], ['chi', 5000], ['chiR', 5000]])
+    expect(down.body.multiplets.map((m: { name: string; massGeV: number }) => [m.name, m.massGeV])).toEqual([
+      ['S', 0],
+      ['chi', 5000],
+      ['chiR', 5000],
+    ])
   })
 })
 

@@ -17,17 +17,24 @@ beforeAll(async () => {
 describe('the group page read', () => {
   it('gives every member the group, their role, the members and the theories', async () => {
     const db = testDb()
-    const members = await db('memberships as m').join('users as u', 'u.id', 'm.user_id').where('m.group_id', world.groupId)
-      .orderBy('u.display_name').select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
-    const theories = (await db('theories').where({ group_id: world.groupId }).orderBy('name').select('id', 'name', 'version', 'parent_id as parentId', 'updated_at as updatedAt'))
-      .map((t) => ({ ...t, updatedAt: t.updatedAt.toISOString() }))
+    const members = await db('memberships as m')
+      .join('users as u', 'u.id', 'm.user_id')
+      .where('m.group_id', world.groupId)
+      .orderBy('u.display_name')
+      .select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
+    const theories = (await db('theories').where({ group_id: world.groupId }).orderBy('name').select('id', 'name', 'version', 'parent_id as parentId', 'updated_at as updatedAt')).map((t) => ({
+      ...t,
+      updatedAt: t.updatedAt.toISOString(),
+    }))
     expect(theories.map((t) => t.name)[0]).toBe('A first by name')
     for (const role of GROUP_ROLES) {
       const res = await world.byRole[role].client.get(`/api/groups/${world.slug}`)
       expect(res.status).toBe(200)
       expect(res.body).toEqual({
         group: await db('groups').where({ id: world.groupId }).first('id', 'slug', 'name', 'description'),
-        role, members, theories,
+        role,
+        members,
+        theories,
       })
     }
     expect((await world.owner.client.get(`/api/groups/${world.slug.toUpperCase()}`)).body.group.id).toBe(world.groupId)

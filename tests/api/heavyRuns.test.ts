@@ -4,7 +4,9 @@ import { messageOf } from '../support/client'
 import { findPreset } from '../../shared/presets/index'
 
 let world: World
-beforeAll(async () => { world = await buildWorld() })
+beforeAll(async () => {
+  world = await buildWorld()
+})
 
 async function finishedRun(definition: unknown, body: Record<string, unknown>): Promise<any> {
   const t = await world.owner.client.post(`/api/groups/${world.slug}/theories`, { definition })
@@ -26,7 +28,7 @@ describe('heavy-particle frame through the run pipeline', () => {
   it('stores the 1/m expansion with the published operators set aside, and the velocity rule moves the kinetic term to leading order', async () => {
     const basisId = await runToBasis({ ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium test' }, { kind: 'basis', maxDim: 5 })
     const { body } = await world.byRole.viewer.client.get(`/api/bases/${basisId}`)
-    const classes = body.basis.classes as { key: string, rank: number, message: string }[]
+    const classes = body.basis.classes as { key: string; rank: number; message: string }[]
     // Counts 2, 2, 7 at 1/m, 1/m², 1/m³ with the published lists spanning them (Caswell and Lepage,
     // Phys. Lett. B 167 (1986) 437; Manohar, Phys. Rev. D 56 (1997) 230; Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017).
     expect(['psi* psi (1/m^1)', 'psi* psi (1/m^2)', 'psi* psi (1/m^3)'].map((k) => classes.find((c) => c.key === k)!.rank)).toEqual([2, 2, 7])
@@ -56,7 +58,7 @@ describe('heavy-particle frame through the run pipeline', () => {
     for (const op of body.operators.filter((o: any) => o.order === 0)) expect(view.body.orders[op.id]).toBeUndefined()
   })
 
-  it('a heavy run to 1/m² (maxOrder): one antiparticle convention on the basis, χ classes with no free parameter, published cards in the theory\'s names with exact rewrites', async () => {
+  it("a heavy run to 1/m² (maxOrder): one antiparticle convention on the basis, χ classes with no free parameter, published cards in the theory's names with exact rewrites", async () => {
     const theory = { ...findPreset('heavy-vexonium')!.theory, name: 'Vexonium 1/m² test' }
     const run = await finishedRun(theory, { kind: 'basis', maxOrder: 2 })
     expect([run.maxOrder, run.maxDim]).toEqual([2, null])

@@ -127,7 +127,9 @@ describe('fair, bounded runs', () => {
     const { executeRun } = await import('../../server/worker/executeRun')
     const theory = (await testDb()('theories').where({ id: world.theoryId }).first('definition')).definition
     const params = { maxDim: 16, nf: 3, theory, theoryVersion: 1 }
-    const [run] = await testDb()('runs').insert({ theory_id: world.theoryId, kind: 'count', params: JSON.stringify(params), status: 'queued', job_id: 'test-overtime' }).returning('*')
+    const [run] = await testDb()('runs')
+      .insert({ theory_id: world.theoryId, kind: 'count', params: JSON.stringify(params), status: 'queued', job_id: 'test-overtime' })
+      .returning('*')
     await executeRun(testDb(), run.id, async () => null, { count: 0.001, basis: 0.001 })
     const after = await testDb()('runs').where({ id: run.id }).first()
     expect(after.status).toBe('failed')

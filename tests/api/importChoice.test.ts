@@ -13,7 +13,7 @@ beforeAll(async () => {
   world = await buildWorld()
 })
 
-type ExportFile = { orders: { order: number, classes: { key: string, operators: { text: string, column: string, position: number, tags: any[], notes: any[] }[] }[] }[] }
+type ExportFile = { orders: { order: number; classes: { key: string; operators: { text: string; column: string; position: number; tags: any[]; notes: any[] }[] }[] }[] }
 const allOps = (file: ExportFile) => file.orders.flatMap((o) => o.classes.flatMap((c) => c.operators))
 
 async function exportOf(basisId: number): Promise<ExportFile> {
@@ -123,7 +123,8 @@ describe('imports racing moves', () => {
     const file = await exportOf(basisId)
     const ops = await testDb()('operators').where({ basis_id: basisId }).select('id')
     const replies = await Promise.all([
-      importInto(basisId, file), importInto(basisId, file),
+      importInto(basisId, file),
+      importInto(basisId, file),
       ...ops.slice(0, 8).map(async (o, i) => world.owner.client.post(`/api/operators/${o.id}/move`, { column: i % 2 ? 'kept' : 'set_aside', position: 0, version: await operatorVersion(o.id) })),
     ])
     expect(replies.filter((r) => r.status >= 500 || ![200, 409].includes(r.status)).map((r) => `${r.status} ${messageOf(r)}`)).toEqual([])

@@ -8,13 +8,19 @@ import * as classOrders from '../../migrations/20261203_021_class_orders'
 // Migrations that rewrite stored data, on the real test database. Each case runs inside a
 // transaction that is rolled back, so the rows of other tests are left as they were.
 let world: World
-beforeAll(async () => { world = await buildWorld() })
+beforeAll(async () => {
+  world = await buildWorld()
+})
 
 const OLD = {
-  name: 'Old letters', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }],
+  name: 'Old letters',
+  frame: 'relativistic',
+  groups: [{ name: 'U', type: 'U1', gauge: true }],
   fields: [
-    { name: 'h', lorentz: 'S', charges: { U: '1' } }, { name: 'l', lorentz: 'L', charges: { U: '1' } },
-    { name: 'r', lorentz: 'R', charges: { U: '1' } }, { name: 'A', lorentz: 'F', gaugeOf: 'U' },
+    { name: 'h', lorentz: 'S', charges: { U: '1' } },
+    { name: 'l', lorentz: 'L', charges: { U: '1' } },
+    { name: 'r', lorentz: 'R', charges: { U: '1' } },
+    { name: 'A', lorentz: 'F', gaugeOf: 'U' },
   ],
 }
 const NEW_WORDS = ['scalar', 'left-weyl', 'right-weyl', 'field-strength']
@@ -23,10 +29,14 @@ class Rollback extends Error {}
 
 /** Run `body` in a transaction that is always rolled back. */
 async function inRolledBackTransaction(body: (trx: import('knex').Knex.Transaction) => Promise<void>) {
-  await testDb().transaction(async (trx) => {
-    await body(trx)
-    throw new Rollback()
-  }).catch((e) => { if (!(e instanceof Rollback)) throw e })
+  await testDb()
+    .transaction(async (trx) => {
+      await body(trx)
+      throw new Rollback()
+    })
+    .catch((e) => {
+      if (!(e instanceof Rollback)) throw e
+    })
 }
 
 const lorentzOf = (file: { fields: { lorentz: string }[] }) => file.fields.map((f) => f.lorentz)
@@ -34,10 +44,16 @@ const lorentzOf = (file: { fields: { lorentz: string }[] }) => file.fields.map((
 describe('migration 20261203_020: Lorentz kinds in words', () => {
   it('rewrites stored theories and the theory files frozen into runs, and down restores the letters', async () => {
     await inRolledBackTransaction(async (trx) => {
-      await trx('theories').where({ id: world.theoryId }).update({ definition: JSON.stringify(OLD) })
-      const [run] = await trx('runs').insert({ theory_id: world.theoryId, kind: 'count', status: 'done', params: JSON.stringify({ theory: OLD, maxDim: 6 }) }).returning('id')
+      await trx('theories')
+        .where({ id: world.theoryId })
+        .update({ definition: JSON.stringify(OLD) })
+      const [run] = await trx('runs')
+        .insert({ theory_id: world.theoryId, kind: 'count', status: 'done', params: JSON.stringify({ theory: OLD, maxDim: 6 }) })
+        .returning('id')
       const heavy = { name: 'No fields array', frame: 'heavy', groups: [] }
-      const [other] = await trx('runs').insert({ theory_id: world.theoryId, kind: 'count', status: 'done', params: JSON.stringify({ theory: heavy, maxDim: 6 }) }).returning('id')
+      const [other] = await trx('runs')
+        .insert({ theory_id: world.theoryId, kind: 'count', status: 'done', params: JSON.stringify({ theory: heavy, maxDim: 6 }) })
+        .returning('id')
       await lorentzWords.up(trx)
       const theory = await trx('theories').where({ id: world.theoryId }).first('definition')
       expect(lorentzOf(theory.definition)).toEqual(NEW_WORDS)
@@ -74,7 +90,9 @@ describe('migration 20261203_021: every stored class carries its order', () => {
         { order: 2, dimension: null, key: 'psi* psi (1/m^2)', rank: 3 },
         { order: 4, dimension: 8, key: 'F_L^4', rank: 1 },
       ]
-      const [basis] = await trx('bases').insert({ theory_id: world.theoryId, theory_version: 1, max_order: 4, classes: JSON.stringify(classes) }).returning('id')
+      const [basis] = await trx('bases')
+        .insert({ theory_id: world.theoryId, theory_version: 1, max_order: 4, classes: JSON.stringify(classes) })
+        .returning('id')
       await classOrders.up(trx)
       const stored = (await trx('bases').where({ id: basis.id }).first('classes')).classes
       expect(stored).toEqual([{ ...classes[0], order: 2 }, classes[1], classes[2]])

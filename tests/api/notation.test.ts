@@ -4,7 +4,10 @@ import { buildWorld, addBasis, type World, DIRAC_AND_SCALAR } from '../support/f
 // Operators typed as papers print them, on the board: the typed rewrite and the list check.
 let world: World
 let basisId: number
-beforeAll(async () => { world = await buildWorld(); basisId = (await addBasis(world)).basisId })
+beforeAll(async () => {
+  world = await buildWorld()
+  basisId = (await addBasis(world)).basisId
+})
 
 describe('printed operators on the board (scalar QED, dimension 6)', () => {
   it('the typed rewrite reads printed notation: (φ†φ)□(φ†φ) is a combination of the kept φ⁴D² operators', async () => {
@@ -21,7 +24,12 @@ describe('printed operators on the board (scalar QED, dimension 6)', () => {
     expect(JSON.stringify(res.body)).toMatch(/position 15 .*\\"X\\" is not a field of this theory/)
   })
   it('the list check: complete, the redundant one with its relation, the missing directions, exports', async () => {
-    const list = ['(\\phi^\\dagger\\phi)\\Box(\\phi^\\dagger\\phi)', '(\\phi^\\dagger D^\\mu\\phi)^*(\\phi^\\dagger D_\\mu\\phi)', '\\phi^\\dagger\\phi A_{\\mu\\nu}A^{\\mu\\nu}', '\\phi^\\dagger\\phi \\tilde A_{\\mu\\nu}A^{\\mu\\nu}']
+    const list = [
+      '(\\phi^\\dagger\\phi)\\Box(\\phi^\\dagger\\phi)',
+      '(\\phi^\\dagger D^\\mu\\phi)^*(\\phi^\\dagger D_\\mu\\phi)',
+      '\\phi^\\dagger\\phi A_{\\mu\\nu}A^{\\mu\\nu}',
+      '\\phi^\\dagger\\phi \\tilde A_{\\mu\\nu}A^{\\mu\\nu}',
+    ]
     const res = await world.byRole.viewer.client.post(`/api/bases/${basisId}/check-list`, { order: 2, operators: list.join('\n') })
     expect(res.status, JSON.stringify(res.body)).toBe(200)
     const r = res.body.report

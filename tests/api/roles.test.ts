@@ -98,7 +98,7 @@ describe('reads are guarded too', () => {
 })
 
 describe('notes belong to their authors', () => {
-  it('a commenter cannot edit or delete another member\'s note; an editor may edit, only an owner may delete', async () => {
+  it("a commenter cannot edit or delete another member's note; an editor may edit, only an owner may delete", async () => {
     const other = await world.byRole.editor.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'editor note' })
     const id = other.body.annotation.id
     const before = await rowCounts()

@@ -9,16 +9,27 @@ import { settleRuns, RUN_LEASE } from '../../server/utils/jobs/orphans'
 // Runs whose worker vanished, made by writing the runs row as a killed worker leaves it (the
 // fault suite, npm run test:faults, kills real workers). The test worker finishes requeued runs.
 let world: World
-beforeAll(async () => { world = await buildWorld() })
+beforeAll(async () => {
+  world = await buildWorld()
+})
 
 const PARAMS = JSON.stringify({ maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1 })
-async function orphan(fields: { attempts: number, heartbeatSecondsAgo: number, cancel?: boolean, progress?: number, label?: string }) {
-  const [run] = await testDb()('runs').insert({
-    theory_id: world.theoryId, kind: 'count', params: PARAMS, status: 'running', attempts: fields.attempts,
-    progress: fields.progress ?? 0.24, current_label: fields.label ?? 'dimension 6', cancel_requested: fields.cancel ?? false,
-    started_at: testDb().raw(`now() - interval '5 minutes'`), heartbeat_at: testDb().raw(`now() - make_interval(secs => ?)`, [fields.heartbeatSecondsAgo]),
-  }).returning('*')
-  return run as { id: number, attempts: number }
+async function orphan(fields: { attempts: number; heartbeatSecondsAgo: number; cancel?: boolean; progress?: number; label?: string }) {
+  const [run] = await testDb()('runs')
+    .insert({
+      theory_id: world.theoryId,
+      kind: 'count',
+      params: PARAMS,
+      status: 'running',
+      attempts: fields.attempts,
+      progress: fields.progress ?? 0.24,
+      current_label: fields.label ?? 'dimension 6',
+      cancel_requested: fields.cancel ?? false,
+      started_at: testDb().raw(`now() - interval '5 minutes'`),
+      heartbeat_at: testDb().raw(`now() - make_interval(secs => ?)`, [fields.heartbeatSecondsAgo]),
+    })
+    .returning('*')
+  return run as { id: number; attempts: number }
 }
 
 async function poll(id: number, until: (run: any) => boolean, timeoutMs = 30_000) {
@@ -56,8 +67,10 @@ describe('a run whose worker stopped', () => {
     const run = await orphan({ attempts: 2, heartbeatSecondsAgo: RUN_LEASE.staleSeconds + 1, progress: 0.24, label: 'dimension 6' })
     const res = await world.byRole.viewer.client.get(`/api/runs/${run.id}`)
     expect(res.body.run.status).toBe('failed')
-    expect(res.body.run.error).toBe('The worker stopped while computing this run (at 24 %, "dimension 6") and stopped again on the retry, so the run was not finished and nothing of it was saved. '
-      + 'Start it again; if it keeps stopping, it may need more memory than the worker has (the worker\'s log says why it stopped).')
+    expect(res.body.run.error).toBe(
+      'The worker stopped while computing this run (at 24 %, "dimension 6") and stopped again on the retry, so the run was not finished and nothing of it was saved. ' +
+        "Start it again; if it keeps stopping, it may need more memory than the worker has (the worker's log says why it stopped).",
+    )
     expect(res.body.run.finishedAt).not.toBeNull()
   })
 
@@ -78,7 +91,9 @@ describe('a run whose worker stopped', () => {
   })
 
   it('a queued run whose job was lost gets a new one and finishes', async () => {
-    const [run] = await testDb()('runs').insert({ theory_id: world.theoryId, kind: 'count', params: PARAMS, created_at: testDb().raw(`now() - interval '1 minute'`) }).returning('*')
+    const [run] = await testDb()('runs')
+      .insert({ theory_id: world.theoryId, kind: 'count', params: PARAMS, created_at: testDb().raw(`now() - interval '1 minute'`) })
+      .returning('*')
     const done = await poll(run.id, (r) => r.status === 'done')
     expect(done.progress).toBe(1)
   })

@@ -8,7 +8,9 @@ import { executeRun } from '../../server/worker/executeRun'
 import { up as rewriteOldRunErrors } from '../../migrations/20261203_030_run_error_texts'
 
 let world: World
-beforeAll(async () => { world = await buildWorld() })
+beforeAll(async () => {
+  world = await buildWorld()
+})
 
 async function waitFor(runId: number, until: (run: any) => boolean, timeoutMs = 60_000) {
   const seen: any[] = []
@@ -60,7 +62,9 @@ describe('background runs through the PostgreSQL queue', () => {
 
   it('an engine input error fails the run with its message', async () => {
     const theoryId = await smeftTheoryId()
-    await testDb()('theories').where({ id: theoryId }).update({ definition: JSON.stringify({ name: 'broken', frame: 'relativistic', groups: [], fields: [{ name: 'x', lorentz: 'Q' }] }) })
+    await testDb()('theories')
+      .where({ id: theoryId })
+      .update({ definition: JSON.stringify({ name: 'broken', frame: 'relativistic', groups: [], fields: [{ name: 'x', lorentz: 'Q' }] }) })
     const start = await world.owner.client.post(`/api/theories/${theoryId}/runs`, { kind: 'count', maxDim: 6 })
     const { run } = await waitFor(start.body.run.id, (r) => ['done', 'failed'].includes(r.status))
     expect(run.status).toBe('failed')
@@ -71,9 +75,14 @@ describe('background runs through the PostgreSQL queue', () => {
     // A frozen run the routes would never write (priorities.derivativesOn is not a list): a
     // TypeError inside the engine thread. Carried out here; the retry job is not sent.
     const params = { maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1, priorities: { derivativesOn: 7 } }
-    const [row] = await testDb()('runs').insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params) }).returning('id')
+    const [row] = await testDb()('runs')
+      .insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params) })
+      .returning('id')
     const sent: number[] = []
-    const send = async (id: number) => { sent.push(id); return null }
+    const send = async (id: number) => {
+      sent.push(id)
+      return null
+    }
     const log = vi.spyOn(console, 'error').mockImplementation(() => {})
     const loggedWith = (ref: string | undefined) => log.mock.calls.find((c) => String(c[0]).includes(`internal error ref ${ref} during run ${row.id}`))
     try {
@@ -99,10 +108,24 @@ describe('background runs through the PostgreSQL queue', () => {
 describe('failed runs stored before errors were written for users', () => {
   it('lose the function-name prefix, or say that an internal error happened (migration 030)', async () => {
     const params = JSON.stringify({ maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1 })
-    const texts = ['parseTheory: fields[0] "x": duplicate field name', 'QuotientSpace.rewrite: the operator is not in the span', "Cannot read properties of undefined (reading 'legs')", 'engine thread exited with code 1', 'The class is empty']
-    const rows = await testDb()('runs').insert(texts.map((error) => ({ theory_id: world.theoryId, kind: 'count', params, status: 'failed', error }))).returning('id')
+    const texts = [
+      'parseTheory: fields[0] "x": duplicate field name',
+      'QuotientSpace.rewrite: the operator is not in the span',
+      "Cannot read properties of undefined (reading 'legs')",
+      'engine thread exited with code 1',
+      'The class is empty',
+    ]
+    const rows = await testDb()('runs')
+      .insert(texts.map((error) => ({ theory_id: world.theoryId, kind: 'count', params, status: 'failed', error })))
+      .returning('id')
     await rewriteOldRunErrors(testDb())
-    const after = await testDb()('runs').whereIn('id', rows.map((r: { id: number }) => r.id)).orderBy('id').pluck('error')
+    const after = await testDb()('runs')
+      .whereIn(
+        'id',
+        rows.map((r: { id: number }) => r.id),
+      )
+      .orderBy('id')
+      .pluck('error')
     expect(after.slice(0, 2)).toEqual(['fields[0] "x": duplicate field name', 'the operator is not in the span'])
     expect(after[2]).toMatch(/^This run failed with an internal error/)
     expect(after[3]).toBe(after[2])

@@ -8,7 +8,11 @@ import { messageOf } from '../support/client'
 let world: World
 
 const LADDER = {
-  scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }, { name: 'R', value: '1', unit: 'fm' }],
+  scales: [
+    { name: 'E', value: '10', unit: 'GeV' },
+    { name: 'M', value: '1', unit: 'TeV' },
+    { name: 'R', value: '1', unit: 'fm' },
+  ],
   parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }],
   precisionTarget: 1e-3,
   orders: [0, 1, 2, 3],
@@ -44,7 +48,12 @@ describe('scale ladder: save, read, version conflict', () => {
     expect(c.scales.map((s: any) => s.name)).toEqual(['M', 'E', 'R']) // highest energy first
     // ε = E/M = 10 GeV / 1 TeV = 1/100 exactly; order n is estimated as ε^n (common practice, naive dimensional analysis).
     expect(c.parameters[0]).toMatchObject({ name: 'eps', exact: '1/100' })
-    expect(c.orders.map((o: any) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([[0, '1', false], [1, '1/100', false], [2, '1/10000', true], [3, '1/1000000', true]])
+    expect(c.orders.map((o: any) => [o.order, o.exactEstimate, o.belowTarget])).toEqual([
+      [0, '1', false],
+      [1, '1/100', false],
+      [2, '1/10000', true],
+      [3, '1/1000000', true],
+    ])
   })
 
   it('derived scales: the Rydberg energy ½ m_e α² is 13.605693122994 eV (CODATA 2018)', async () => {
@@ -103,14 +112,20 @@ describe('integrate out: towers', () => {
     expect(child.threshold).toMatchObject({ name: 'me', scale: 0.51099895, unit: 'MeV', removedFields: ['eL', 'eR'] })
     expect(res.body.generatedClasses.some((g: any) => g.loop === 'one-loop' && /Euler–Heisenberg/.test(g.description))).toBe(true)
     const rows = await testDb()('threshold_tags').where({ theory_id: child.id }).orderBy('field')
-    expect(rows.map((r) => [r.term, r.field])).toEqual([['kinetic term of QED', 'eL'], ['kinetic term of QED', 'eR']])
+    expect(rows.map((r) => [r.term, r.field])).toEqual([
+      ['kinetic term of QED', 'eL'],
+      ['kinetic term of QED', 'eR'],
+    ])
     // Each Weyl fermion of charge Q adds (2/3) Q² to b in μ de/dμ = b e³/16π² (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83);
     // a Dirac electron gives 4/3, i.e. β(e) = e³/12π² (Peskin & Schroeder 1995, §12.2).
     expect(rows.map((r) => r.details.betaShift)).toEqual(['2/3', '2/3'])
 
     const tower = await world.byRole.viewer.client.get(`/api/theories/${child.id}/tower`)
     expect(tower.status).toBe(200)
-    expect(tower.body.nodes.map((n: any) => [n.id, n.depth])).toEqual([[parentId, 0], [child.id, 1]])
+    expect(tower.body.nodes.map((n: any) => [n.id, n.depth])).toEqual([
+      [parentId, 0],
+      [child.id, 1],
+    ])
     const node = tower.body.nodes[1]
     expect(node.thresholdTags).toHaveLength(2)
     // Euler–Heisenberg: (2α²/45m⁴)[(E²−B²)² + 7(E·B)²] (Heisenberg & Euler, Z. Phys. 98 (1936) 714).
@@ -161,10 +176,29 @@ describe('integrate out: towers', () => {
 
 describe('set aside the orders below the precision target', () => {
   it('moves exactly the kept operators of the orders whose estimate is below the target, in one step', async () => {
-    const theoryId = await newTheory({ name: 'Board for targets', frame: 'relativistic', groups: [{ name: 'U', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', charges: { U: '1' } }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' }] })
+    const theoryId = await newTheory({
+      name: 'Board for targets',
+      frame: 'relativistic',
+      groups: [{ name: 'U', type: 'U1', gauge: true }],
+      fields: [
+        { name: 'phi', lorentz: 'scalar', charges: { U: '1' } },
+        { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' },
+      ],
+    })
     const { basisId } = await addBasis({ ...world, theoryId }) // order 2: the engine's kept operators and alternatives
     const db = testDb()
-    const extra = [1, 1, 3].map((order, i) => ({ basis_id: basisId, order, class_key: `X${order}`, column: 'kept', position: i, text: `O${order}_${i}`, latex: 'O', structure: '{}', hermitian: true, real_parameters: 1 }))
+    const extra = [1, 1, 3].map((order, i) => ({
+      basis_id: basisId,
+      order,
+      class_key: `X${order}`,
+      column: 'kept',
+      position: i,
+      text: `O${order}_${i}`,
+      latex: 'O',
+      structure: '{}',
+      hermitian: true,
+      real_parameters: 1,
+    }))
     await db('operators').insert(extra)
     const basisBefore = await db('bases').where({ id: basisId }).first('version')
     const before2 = await db('operators').where({ basis_id: basisId, order: 2 }).orderBy(['column', 'position'])
@@ -182,12 +216,12 @@ describe('set aside the orders below the precision target', () => {
     expect(res.body.count).toBe(kept2.length + 1)
     const ops = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'column', 'position'])
     const byOrder = (o: number) => ops.filter((x) => x.order === o).map((x) => [x.text, x.column, x.position, x.version])
-    expect(byOrder(1)).toEqual([['O1_0', 'kept', 0, 1], ['O1_1', 'kept', 1, 1]])
-    // Already set aside: unchanged, first; then the formerly kept ones in their order, versions bumped.
-    expect(byOrder(2)).toEqual([
-      ...aside2.map((o, i) => [o.text, 'set_aside', i, o.version]),
-      ...kept2.map((o, i) => [o.text, 'set_aside', aside2.length + i, o.version + 1]),
+    expect(byOrder(1)).toEqual([
+      ['O1_0', 'kept', 0, 1],
+      ['O1_1', 'kept', 1, 1],
     ])
+    // Already set aside: unchanged, first; then the formerly kept ones in their order, versions bumped.
+    expect(byOrder(2)).toEqual([...aside2.map((o, i) => [o.text, 'set_aside', i, o.version]), ...kept2.map((o, i) => [o.text, 'set_aside', aside2.length + i, o.version + 1])])
     expect(byOrder(3)).toEqual([['O3_2', 'set_aside', 0, 2]])
     expect((await db('bases').where({ id: basisId }).first('version')).version).toBeGreaterThan(basisBefore.version)
     const board = await world.byRole.viewer.client.get(`/api/bases/${basisId}`)
@@ -201,7 +235,11 @@ describe('set aside the orders below the precision target', () => {
 })
 
 describe('running couplings', () => {
-  const BC = [{ name: 'c', mass: 1.273, kind: 'msbar' }, { name: 'b', mass: 4.183, kind: 'msbar' }, { name: 't', mass: 172.57, kind: 'pole' }]
+  const BC = [
+    { name: 'c', mass: 1.273, kind: 'msbar' },
+    { name: 'b', mass: 4.183, kind: 'msbar' },
+    { name: 't', mass: 172.57, kind: 'pole' },
+  ]
 
   it('α_s(m_τ) from α_s(M_Z) = 0.1180 lies within the τ-decay value 0.314 ± 0.014 (PDG 2024 QCD review; from memory, as the engine tests cite)', async () => {
     // Inputs: α_s(M_Z) = 0.1180, M_Z = 91.188 GeV, m_c(m_c) = 1.273, m_b(m_b) = 4.183 GeV (PDG 2024); m_τ = 1.77693 GeV (PDG 2024).
@@ -237,7 +275,9 @@ describe('running couplings', () => {
     expect(messageOf(loops)).toBe('Loops in β must be 1, 2, 3 or 4')
     const pole = await world.stranger.client.post('/api/running/qcd', { alphaS: 0.5, muFrom: 2, muTo: 0.5, loops: 1, thresholds: [], lightFlavours: 3 })
     expect(pole.status).toBe(422)
-    expect(messageOf(pole)).toMatch(/^α_s grows beyond the perturbative range below μ = [\d.]+ GeV \(running from μ = 2 GeV to 0\.5 GeV with 3 active flavours, towards the Landau pole\); choose a higher scale, or a smaller α_s$/)
+    expect(messageOf(pole)).toMatch(
+      /^α_s grows beyond the perturbative range below μ = [\d.]+ GeV \(running from μ = 2 GeV to 0\.5 GeV with 3 active flavours, towards the Landau pole\); choose a higher scale, or a smaller α_s$/,
+    )
     expect((await world.anonymous.post('/api/running/qed', { muTo: 91.188 })).status).toBe(401)
     expect((await world.anonymous.get('/api/running/defaults')).status).toBe(401)
   })

@@ -38,8 +38,12 @@ describe('session cookies', () => {
     for (const path of reads()) expect((await viewer.get(path)).status).toBe(200)
   })
 
-  it('lasts 30 days in the browser (the cookie\'s Expires)', async () => {
-    const res = await fetch(`${world.owner.client.baseUrl}/api/auth/signin`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: world.owner.email, password: TEST_PASSWORD }) })
+  it("lasts 30 days in the browser (the cookie's Expires)", async () => {
+    const res = await fetch(`${world.owner.client.baseUrl}/api/auth/signin`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: world.owner.email, password: TEST_PASSWORD }),
+    })
     expect(res.status).toBe(200)
     const expires = /Expires=([^;]+)/i.exec(res.headers.getSetCookie()[0]!)![1]!
     const days = (Date.parse(expires) - Date.now()) / 86_400_000

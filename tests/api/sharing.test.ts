@@ -67,7 +67,9 @@ describe('read-only share links', () => {
     expect(messageOf(gone)).toBe('This share link does not exist, was revoked or has expired')
 
     const third = await world.owner.client.post(`/api/theories/${world.theoryId}/share-links`, { expiresInDays: 1 })
-    await testDb()('share_links').where({ id: third.body.link.id }).update({ expires_at: new Date(Date.now() - 1000) })
+    await testDb()('share_links')
+      .where({ id: third.body.link.id })
+      .update({ expires_at: new Date(Date.now() - 1000) })
     expect((await new ApiClient().get(`/api/share/${third.body.link.token}`)).status).toBe(404)
     expect((await new ApiClient().get('/api/share/not-a-token')).status).toBe(404)
   })

@@ -83,8 +83,13 @@ describe('POST /api/theory-check', () => {
 // against the order-0 basis and refuses one the basis does not have, naming it.
 describe('POST /api/theory-check with couplings', () => {
   const toy = {
-    name: 'singlet', frame: 'relativistic', groups: [],
-    fields: [{ name: 'H', lorentz: 'scalar' }, { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M' } }],
+    name: 'singlet',
+    frame: 'relativistic',
+    groups: [],
+    fields: [
+      { name: 'H', lorentz: 'scalar' },
+      { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M' } },
+    ],
     couplings: [{ class: 'S H H*', symbol: 'kappa' }],
   }
 

@@ -5,8 +5,12 @@ import { uniqueEmail } from '../support/client'
 import { signUpInBrowser } from '../support/signUp'
 
 let browser: Browser
-beforeAll(async () => { browser = await launchBrowser() })
-afterAll(async () => { await browser?.close() })
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
 
 describe('accounts in a real browser', () => {
   it('shows field errors from the shared schema, then signs up and founds a group', async () => {
@@ -48,10 +52,24 @@ describe('accounts in a real browser', () => {
     await here.getByLabel('Current password').fill('not the password')
     await here.getByLabel(/^New password/).fill('second long password')
     await here.getByRole('button', { name: 'Change the password' }).click()
-    await expect.poll(() => here.getByRole('alert').innerText().catch(() => '')).toBe('The current password is wrong')
+    await expect
+      .poll(() =>
+        here
+          .getByRole('alert')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toBe('The current password is wrong')
     await here.getByLabel('Current password').fill('first long password')
     await here.getByRole('button', { name: 'Change the password' }).click()
-    await expect.poll(() => here.getByRole('status').innerText().catch(() => '')).toBe('Password changed; you stay signed in here and are signed out everywhere else.')
+    await expect
+      .poll(() =>
+        here
+          .getByRole('status')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toBe('Password changed; you stay signed in here and are signed out everywhere else.')
     await screenshot(here, 'account-page')
     expect((await here.request.get('/api/auth/me')).status()).toBe(200)
     expect((await laptop.request.get('/api/auth/me')).status()).toBe(401)

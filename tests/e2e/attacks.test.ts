@@ -50,7 +50,7 @@ async function victimContext(cookie: string): Promise<BrowserContext> {
 }
 
 describe('a hostile page of the same site', () => {
-  it('cannot post a note with the victim\'s cookie, by form or by fetch; the app\'s own page can', async () => {
+  it("cannot post a note with the victim's cookie, by form or by fetch; the app's own page can", async () => {
     const victim = await signedUpClient('victim')
     const slug = `csrf-${Date.now().toString(36)}`
     expect((await victim.client.post('/api/groups', { slug, name: 'Victim group' })).status).toBe(201)
@@ -59,7 +59,9 @@ describe('a hostile page of the same site', () => {
     const context = await victimContext(victim.client.cookie)
     const page = await context.newPage()
     const sent: number[] = []
-    page.on('response', (r) => { if (r.url().includes('/annotations')) sent.push(r.status()) })
+    page.on('response', (r) => {
+      if (r.url().includes('/annotations')) sent.push(r.status())
+    })
     await page.goto(`${attackerUrl}/?theory=${theoryId}`)
     await expect.poll(() => sent.length, { timeout: 15_000 }).toBeGreaterThanOrEqual(1)
     await page.waitForLoadState('load')
@@ -70,7 +72,10 @@ describe('a hostile page of the same site', () => {
     const own = await context.newPage()
     await own.goto(`/groups/${slug}`)
     await hydrated(own)
-    const status = await own.evaluate(async (id) => (await fetch(`/api/theories/${id}/annotations`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ body: 'from our own page' }) })).status, theoryId)
+    const status = await own.evaluate(
+      async (id) => (await fetch(`/api/theories/${id}/annotations`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ body: 'from our own page' }) })).status,
+      theoryId,
+    )
     expect(status).toBe(201)
     await context.close()
   })
@@ -91,7 +96,7 @@ describe('signing out in the browser', () => {
   })
 })
 
-describe('the pages\' Content-Security-Policy', () => {
+describe("the pages' Content-Security-Policy", () => {
   it('stops a script injected into a page, and the e2e check reports the violation', async () => {
     const own = await launchBrowser() // its own browser: the violation is expected here
     const page = await newPage(own, base())

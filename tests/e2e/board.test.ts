@@ -6,8 +6,12 @@ import { uniqueEmail } from '../support/client'
 import { signUpInBrowser } from '../support/signUp'
 
 let browser: Browser
-beforeAll(async () => { browser = await launchBrowser() })
-afterAll(async () => { await browser?.close() })
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
 
 const byTest = (page: Page, id: string) => page.locator(`[data-test="${id}"]`)
 
@@ -107,7 +111,11 @@ describe('the basis board in a real browser', () => {
     expect(await visitor.getByText('Generated at tree level by a heavy singlet fermion.').count()).toBe(1)
     expect(await visitor.getByRole('button', { name: 'Add tag' }).count()).toBe(0)
     expect(await visitor.getByLabel('Add a note').count()).toBe(0)
-    const attempt = await visitor.evaluate(async (id) => (await fetch(`/api/operators/${id}/move`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ column: 'kept', position: 0, version: 1 }) })).status, keptId)
+    const attempt = await visitor.evaluate(
+      async (id) =>
+        (await fetch(`/api/operators/${id}/move`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ column: 'kept', position: 0, version: 1 }) })).status,
+      keptId,
+    )
     expect(attempt).toBe(401)
     await screenshot(visitor, 'board-shared-read-only')
     expect(basisUrl).toMatch(/\/bases\//)

@@ -55,12 +55,16 @@ beforeAll(async () => {
   theoryId = t.body.theory.id
   basisId = (await addBasis({ theoryId } as World)).basisId
   // A sextet scalar: counted, but its S6^4 S6* class is beyond the explicit-basis evaluation budget.
-  const s = await o.client.post(`/api/groups/${slug}/theories`, { definition: { name: 'Sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar', reps: { C: [2, 0] } }] } })
+  const s = await o.client.post(`/api/groups/${slug}/theories`, {
+    definition: { name: 'Sextet', frame: 'relativistic', groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S6', lorentz: 'scalar', reps: { C: [2, 0] } }] },
+  })
   sextetId = s.body.theory.id
   signedIn = await browser.newContext({ baseURL: inject('baseUrl'), viewport: { width: 1280, height: 900 } })
   expect((await signedIn.request.post('/api/auth/signin', { data: { email: owner.email, password: TEST_PASSWORD } })).status()).toBe(200)
 })
-afterAll(async () => { await browser?.close() })
+afterAll(async () => {
+  await browser?.close()
+})
 
 describe('every form, with bad input, shows only messages written for its user', () => {
   it('sign-up, sign-in, forgotten password, reset link and invitation link', async () => {
@@ -162,7 +166,18 @@ describe('every form, with bad input, shows only messages written for its user',
     const shapes = { name: '', frame: 'flat', groups: [{ name: 'Y', type: 'U2', gauge: 'yes' }], fields: [{ name: 'phi', lorentz: 'Q', reps: { '1bad': [1] }, sneaky: 1 }] }
     await page.locator('#theory-upload').setInputFiles({ name: 'shapes.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(shapes)) })
     await expectReadable(page, 'a theory file of the wrong shape', /Field 1 "phi", representation under 1bad is not allowed here \(a name is a letter/)
-    const rules = { name: 'x', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true, n: 3 }, { name: 'G', type: 'SU', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3', Q: '1' }, reps: { G: [1] } }, { name: 'D', lorentz: 'field-strength' }] }
+    const rules = {
+      name: 'x',
+      frame: 'relativistic',
+      groups: [
+        { name: 'Y', type: 'U1', gauge: true, n: 3 },
+        { name: 'G', type: 'SU', gauge: true },
+      ],
+      fields: [
+        { name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3', Q: '1' }, reps: { G: [1] } },
+        { name: 'D', lorentz: 'field-strength' },
+      ],
+    }
     await page.locator('#theory-upload').setInputFiles({ name: 'rules.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(rules)) })
     await expectReadable(page, 'a theory file breaking the rules', /Field 1 "phi", charge under Y: a real scalar must have zero U\(1\) charges/)
     // Loaded with its problems marked: every input shows its message at once.
@@ -261,4 +276,3 @@ describe('an unknown address', () => {
     await expectReadable(page, 'a theory that does not exist', /^No theory with id 999999$/)
   })
 })
-

@@ -6,8 +6,12 @@ import { signUpInBrowser } from '../support/signUp'
 import { testDb } from '../support/db'
 
 let browser: Browser
-beforeAll(async () => { browser = await launchBrowser() })
-afterAll(async () => { await browser?.close() })
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
 
 /** The invitation token of the last mail to `email` (the outbox stands in for SMTP in tests). */
 async function invitationToken(email: string): Promise<string> {

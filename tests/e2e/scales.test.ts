@@ -14,13 +14,16 @@ const DEMO_LIKE = DIRAC_AND_SCALAR
 
 /** True when the chart canvas has drawn pixels (not a blank canvas). */
 async function canvasDrawn(page: Page, index = 0): Promise<boolean> {
-  return page.locator('canvas[data-test="chart"]').nth(index).evaluate((c: HTMLCanvasElement) => {
-    if (!c.width || !c.height) return false
-    const d = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data
-    let painted = 0
-    for (let i = 3; i < d.length; i += 4) if (d[i]! > 0) painted++
-    return painted > 500
-  })
+  return page
+    .locator('canvas[data-test="chart"]')
+    .nth(index)
+    .evaluate((c: HTMLCanvasElement) => {
+      if (!c.width || !c.height) return false
+      const d = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data
+      let painted = 0
+      for (let i = 3; i < d.length; i += 4) if (d[i]! > 0) painted++
+      return painted > 500
+    })
 }
 
 let signedIn: Page | undefined
@@ -49,7 +52,9 @@ beforeAll(async () => {
   theoryId = t.body.theory.id
   await addBasis({ theoryId } as World) // order 2: three kept operators, one set aside (rows written directly)
 })
-afterAll(async () => { await browser?.close() })
+afterAll(async () => {
+  await browser?.close()
+})
 
 describe('scales in a real browser', () => {
   it('edits a scale ladder, saves it and draws the size-per-order chart', async () => {
@@ -111,7 +116,7 @@ describe('scales in a real browser', () => {
     await screenshot(page, 'couplings-tablet')
   })
 
-  it('runs the theory\'s own U(1) through the electron threshold of its tower, lists b exactly and names a Landau pole', async () => {
+  it("runs the theory's own U(1) through the electron threshold of its tower, lists b exactly and names a Landau pole", async () => {
     const page = await signedInPage()
     await page.goto(`/theories/${theoryId}/couplings`)
     await hydrated(page)

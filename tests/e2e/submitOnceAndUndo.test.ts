@@ -9,8 +9,12 @@ import { signUpInBrowser } from '../support/signUp'
 // Double submission and deletion in the browser: create buttons are disabled while their
 // request runs (a second submit sends nothing), and deletions ask first and can be undone.
 let browser: Browser
-beforeAll(async () => { browser = await launchBrowser() })
-afterAll(async () => { await browser?.close() })
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
 
 const byTest = (page: Page, id: string) => page.locator(`[data-test="${id}"]`)
 // Polls wait for the server's answer (held 1.5 s on purpose below) on a shared machine; vitest's default is 1 s.
@@ -40,10 +44,13 @@ describe('submitting once and undoing deletions', () => {
     const errors: string[] = []
     page.on('pageerror', (e) => errors.push(e.message))
     const slug = await signUpWithGroup(page)
-    const theory = await page.evaluate(async ([s, definition]) => {
-      const r = await fetch(`/api/groups/${s}/theories`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ definition }) })
-      return (await r.json()).theory as { id: number }
-    }, [slug, { ...SMALL_THEORY, name: 'Undo theory' }] as const)
+    const theory = await page.evaluate(
+      async ([s, definition]) => {
+        const r = await fetch(`/api/groups/${s}/theories`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ definition }) })
+        return (await r.json()).theory as { id: number }
+      },
+      [slug, { ...SMALL_THEORY, name: 'Undo theory' }] as const,
+    )
 
     // Start run: pending → disabled; a second submit meanwhile starts nothing.
     await page.goto(`/theories/${theory.id}`)

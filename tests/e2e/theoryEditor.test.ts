@@ -7,8 +7,12 @@ import { signUpInBrowser } from '../support/signUp'
 import smeft from '../../shared/presets/smeft.json'
 
 let browser: Browser
-beforeAll(async () => { browser = await launchBrowser() })
-afterAll(async () => { await browser?.close() })
+beforeAll(async () => {
+  browser = await launchBrowser()
+})
+afterAll(async () => {
+  await browser?.close()
+})
 
 async function signUpAndFoundGroup(page: Page, name: string) {
   await signUpInBrowser(page, name, uniqueEmail('editor-e2e'))
@@ -36,7 +40,9 @@ describe('the theory editor in a real browser', () => {
     const page = await newPage(browser, inject('baseUrl'))
     const problems: string[] = []
     page.on('pageerror', (e) => problems.push(e.message))
-    page.on('console', (m) => { if (m.type() === 'error' && !/status of 409/.test(m.text())) problems.push(m.text()) })
+    page.on('console', (m) => {
+      if (m.type() === 'error' && !/status of 409/.test(m.text())) problems.push(m.text())
+    })
     const slug = await signUpAndFoundGroup(page, 'Editor Tester')
     await page.getByRole('link', { name: 'New theory' }).click()
     await page.waitForURL(`**/groups/${slug}/new-theory`)
@@ -80,7 +86,15 @@ describe('the theory editor in a real browser', () => {
 
     await page.reload()
     await hydrated(page)
-    await expect.poll(() => byTest(page, 'save-state').innerText().catch(() => ''), { timeout: 15_000 }).toBe('Saved as version 1.')
+    await expect
+      .poll(
+        () =>
+          byTest(page, 'save-state')
+            .innerText()
+            .catch(() => ''),
+        { timeout: 15_000 },
+      )
+      .toBe('Saved as version 1.')
     expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT')
 
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download theory file' }).click()])
@@ -89,14 +103,32 @@ describe('the theory editor in a real browser', () => {
 
     const upload = page.locator('#theory-upload')
     await upload.setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from('{"name": "half a file", ') })
-    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toMatch(/^broken\.json is not valid JSON/)
+    await expect
+      .poll(() =>
+        byTest(page, 'upload-error')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toMatch(/^broken\.json is not valid JSON/)
     const bad = { name: 'Bad', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'field-strength' }] }
     await upload.setInputFiles({ name: 'bad.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bad)) })
-    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('Field 1 "phi", gauge group of the field strength is required: choose the gauge group whose field strength this is')
+    await expect
+      .poll(() =>
+        byTest(page, 'upload-error')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toContain('Field 1 "phi", gauge group of the field strength is required: choose the gauge group whose field strength this is')
     expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT') // nothing replaced
     const oldLetters = { name: 'Old', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'S', real: true }] }
     await upload.setInputFiles({ name: 'old.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(oldLetters)) })
-    await expect.poll(() => byTest(page, 'upload-error').innerText().catch(() => '')).toContain('"S" is the old one-letter spelling; write "scalar" (the other Lorentz kinds are "left-weyl", "right-weyl", "field-strength")')
+    await expect
+      .poll(() =>
+        byTest(page, 'upload-error')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toContain('"S" is the old one-letter spelling; write "scalar" (the other Lorentz kinds are "left-weyl", "right-weyl", "field-strength")')
     expect(await page.locator('#theory-name').inputValue()).toBe('SMEFT')
     await screenshot(page, 'theory-editor-upload-error')
     await page.setViewportSize({ width: 800, height: 1000 })
@@ -108,7 +140,13 @@ describe('the theory editor in a real browser', () => {
     expect(other.status()).toBe(200)
     await page.locator('#theory-description').fill('my change')
     await page.getByRole('button', { name: 'Save theory' }).click()
-    await expect.poll(() => byTest(page, 'conflict').innerText().catch(() => '')).toContain('now version 2, you edited version 1')
+    await expect
+      .poll(() =>
+        byTest(page, 'conflict')
+          .innerText()
+          .catch(() => ''),
+      )
+      .toContain('now version 2, you edited version 1')
     await page.getByRole('button', { name: 'Reload the saved version' }).click()
     await expect.poll(() => page.locator('#theory-description').inputValue()).toBe('changed elsewhere')
     expect(await byTest(page, 'save-state').innerText()).toBe('Saved as version 2.')
@@ -142,7 +180,10 @@ describe('the theory editor in a real browser', () => {
     // Leaving with unsaved changes asks first; declining keeps the editor and the change.
     await page.locator('#theory-description').fill('unsaved words')
     const dialogs: string[] = []
-    page.once('dialog', (d) => { dialogs.push(d.message()); void d.dismiss() })
+    page.once('dialog', (d) => {
+      dialogs.push(d.message())
+      void d.dismiss()
+    })
     await page.getByRole('link', { name: '← SMEFT' }).click()
     await expect.poll(() => dialogs).toEqual(['Leave the editor? Your unsaved changes will be lost.'])
     expect(page.url()).toMatch(/\/theories\/\d+\/edit$/)

@@ -41,25 +41,45 @@ beforeAll(async () => {
     clients.push(c)
   }
 })
-afterAll(async () => { await stack?.stop() })
+afterAll(async () => {
+  await stack?.stop()
+})
 
-interface Outcome { acknowledged: string[], statuses: Map<number, number>, retryAfter: Set<string>, messages: Set<string> }
+interface Outcome {
+  acknowledged: string[]
+  statuses: Map<number, number>
+  retryAfter: Set<string>
+  messages: Set<string>
+}
 
 /** One client adding notes until `until` resolves; records what was acknowledged. */
 async function writer(client: ApiClient, trial: number, index: number, stopAt: () => boolean, out: Outcome) {
   let theoryId = await freshTheory(world.owner, world.slug)
   let onTheory = 0
   for (let n = 0; !stopAt(); n++) {
-    if (onTheory >= NOTES_PER_THEORY) { theoryId = await freshTheory(world.owner, world.slug); onTheory = 0 }
+    if (onTheory >= NOTES_PER_THEORY) {
+      theoryId = await freshTheory(world.owner, world.slug)
+      onTheory = 0
+    }
     const body = `trial ${trial} client ${index} note ${n}`
     const res = await fetch(`${stack.baseUrl}/api/theories/${theoryId}/annotations`, {
-      method: 'POST', headers: { 'content-type': 'application/json', accept: 'application/json', cookie: client.cookie }, body: JSON.stringify({ body }),
-    }).catch((e: Error) => { out.messages.add(`no answer: ${e.message} ${String((e as { cause?: unknown }).cause)}`); return null })
-    if (!res) { out.statuses.set(0, (out.statuses.get(0) ?? 0) + 1); continue }
+      method: 'POST',
+      headers: { 'content-type': 'application/json', accept: 'application/json', cookie: client.cookie },
+      body: JSON.stringify({ body }),
+    }).catch((e: Error) => {
+      out.messages.add(`no answer: ${e.message} ${String((e as { cause?: unknown }).cause)}`)
+      return null
+    })
+    if (!res) {
+      out.statuses.set(0, (out.statuses.get(0) ?? 0) + 1)
+      continue
+    }
     out.statuses.set(res.status, (out.statuses.get(res.status) ?? 0) + 1)
     const json = await res.json().catch(() => ({}))
-    if (res.status === 201) { out.acknowledged.push(body); onTheory++ }
-    else {
+    if (res.status === 201) {
+      out.acknowledged.push(body)
+      onTheory++
+    } else {
       out.retryAfter.add(res.headers.get('retry-after') ?? 'none')
       out.messages.add(json?.data?.message ?? json?.message ?? '')
       await new Promise((r) => setTimeout(r, 100))
@@ -80,7 +100,11 @@ describe('PostgreSQL killed (kill -9) during acknowledged writes', () => {
       await stack.cluster.start()
       // The app reconnects by itself: writes succeed again without restarting anything.
       const ackedBefore = out.acknowledged.length
-      await waitUntil(() => out.acknowledged.length > ackedBefore + 8, 60_000, () => `no acknowledged write after the restart (statuses ${JSON.stringify([...out.statuses])})`)
+      await waitUntil(
+        () => out.acknowledged.length > ackedBefore + 8,
+        60_000,
+        () => `no acknowledged write after the restart (statuses ${JSON.stringify([...out.statuses])})`,
+      )
       stopping = true
       await Promise.all(writers)
       const rows = await stack.db('annotations').whereIn('theory_id', theoryIds).andWhere('body', 'like', `trial ${trial} %`).select('body')
@@ -90,7 +114,10 @@ describe('PostgreSQL killed (kill -9) during acknowledged writes', () => {
       console.log(`[faults] crash trial ${trial}: ${out.acknowledged.length} acknowledged, ${missing.length} lost; answers ${JSON.stringify(Object.fromEntries(out.statuses))}`)
       // While the database was away the app said so: 503 with Retry-After, never a 500.
       const failures = [...out.statuses.keys()].filter((s) => s !== 201)
-      expect(failures.every((s) => s === 503), `statuses ${JSON.stringify([...out.statuses])} ${[...out.messages].join(' | ')}\n${stack.log().slice(-3000)}`).toBe(true)
+      expect(
+        failures.every((s) => s === 503),
+        `statuses ${JSON.stringify([...out.statuses])} ${[...out.messages].join(' | ')}\n${stack.log().slice(-3000)}`,
+      ).toBe(true)
       if (failures.length) {
         expect([...out.retryAfter]).toEqual(['5'])
         expect([...out.messages]).toEqual(['The database is unavailable at the moment (it may be restarting); retrying. This request may not have been saved: check, and try again in a few seconds.'])

@@ -14,13 +14,19 @@ beforeAll(async () => {
   stack = await startStack('restart')
   ;({ owner, theoryId, slug } = await groupWithTheory(stack))
 })
-afterAll(async () => { await stack?.stop() })
+afterAll(async () => {
+  await stack?.stop()
+})
 
 async function raw(path: string, init: RequestInit = {}) {
   const res = await fetch(`${stack.baseUrl}${path}`, { ...init, headers: { accept: 'application/json', 'content-type': 'application/json', cookie: owner.cookie, ...init.headers } })
   const text = await res.text()
   let body: any = text
-  try { body = JSON.parse(text) } catch { /* a page */ }
+  try {
+    body = JSON.parse(text)
+  } catch {
+    /* a page */
+  }
   return { status: res.status, retryAfter: res.headers.get('retry-after'), body, text }
 }
 
@@ -43,7 +49,11 @@ describe('PostgreSQL stopped while the app serves', () => {
   it('recovers by itself once PostgreSQL is back: same server process, reads and writes work', async () => {
     const pid = stack.app.pid
     await stack.cluster.start()
-    await waitUntil(async () => (await raw('/api/health')).status === 200, 30_000, () => 'health did not recover')
+    await waitUntil(
+      async () => (await raw('/api/health')).status === 200,
+      30_000,
+      () => 'health did not recover',
+    )
     expect((await raw(`/api/theories/${theoryId}`)).status).toBe(200)
     const note = await raw(`/api/theories/${theoryId}/annotations`, { method: 'POST', body: JSON.stringify({ body: 'written after the restart' }) })
     expect(note.status).toBe(201)
@@ -55,6 +65,13 @@ describe('PostgreSQL stopped while the app serves', () => {
     const start = await raw(`/api/theories/${theoryId}/runs`, { method: 'POST', body: JSON.stringify({ kind: 'count', maxDim: 6 }) })
     expect(start.status).toBe(201)
     let last: any
-    await waitUntil(async () => { last = (await raw(`/api/runs/${start.body.run.id}`)).body.run; return last.status === 'done' }, 60_000, () => `run did not finish: ${JSON.stringify(last)}`)
+    await waitUntil(
+      async () => {
+        last = (await raw(`/api/runs/${start.body.run.id}`)).body.run
+        return last.status === 'done'
+      },
+      60_000,
+      () => `run did not finish: ${JSON.stringify(last)}`,
+    )
   })
 })

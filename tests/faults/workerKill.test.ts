@@ -20,7 +20,9 @@ beforeAll(async () => {
   expect(t.status).toBe(201)
   smeftId = t.body.theory.id
 })
-afterAll(async () => { await stack?.stop() })
+afterAll(async () => {
+  await stack?.stop()
+})
 
 async function run(id: number) {
   const res = await owner.get(`/api/runs/${id}`)
@@ -37,11 +39,19 @@ const LONG = { kind: 'count', maxDim: 16, nf: 3 }
 /** The worker process computing the run, once it has made progress (from runs.worker, host:pid). */
 async function workerOf(runId: number, notPid?: number) {
   let pid = 0
-  await waitUntil(async () => {
-    const row = await stack.db('runs').where({ id: runId }).first('status', 'progress', 'worker')
-    pid = Number(String(row.worker ?? '').split(':').pop())
-    return row.status === 'running' && row.progress > 0 && pid > 0 && pid !== notPid
-  }, 90_000, () => `run ${runId} was not taken by a worker`)
+  await waitUntil(
+    async () => {
+      const row = await stack.db('runs').where({ id: runId }).first('status', 'progress', 'worker')
+      pid = Number(
+        String(row.worker ?? '')
+          .split(':')
+          .pop(),
+      )
+      return row.status === 'running' && row.progress > 0 && pid > 0 && pid !== notPid
+    },
+    90_000,
+    () => `run ${runId} was not taken by a worker`,
+  )
   return pid
 }
 
@@ -50,7 +60,14 @@ async function killAndTime(runId: number, pid: number) {
   process.kill(pid, 'SIGKILL')
   const t0 = Date.now()
   let now: any
-  await waitUntil(async () => { now = await run(runId); return now.status !== 'running' }, 90_000, () => `run ${runId} still running: ${JSON.stringify(now)}`)
+  await waitUntil(
+    async () => {
+      now = await run(runId)
+      return now.status !== 'running'
+    },
+    90_000,
+    () => `run ${runId} still running: ${JSON.stringify(now)}`,
+  )
   return { seconds: (Date.now() - t0) / 1000, run: now }
 }
 
@@ -61,7 +78,11 @@ describe('the worker killed (kill -9) mid-run', () => {
     const killed = killAndTime(id, first)
     // While the orphan waits, npm start has restarted the worker and a new run goes through.
     const small = await startRun(smallId, { kind: 'count', maxDim: 6 })
-    await waitUntil(async () => (await run(small)).status === 'done', 60_000, () => 'a new run queued behind the orphan')
+    await waitUntil(
+      async () => (await run(small)).status === 'done',
+      60_000,
+      () => 'a new run queued behind the orphan',
+    )
     const retry = await killed
     console.log(`[faults] orphaned run noticed after ${retry.seconds.toFixed(1)} s (first kill): ${retry.run.status}`)
     expect(retry.seconds).toBeLessThan(60)
@@ -84,9 +105,13 @@ describe('the worker killed (kill -9) mid-run', () => {
     const cancel = await owner.post(`/api/runs/${id}/cancel`)
     expect(cancel.status).toBe(200)
     const t0 = Date.now()
-    await waitUntil(async () => (await run(id)).status === 'cancelled', 15_000, () => 'cancel did not end the orphaned run')
+    await waitUntil(
+      async () => (await run(id)).status === 'cancelled',
+      15_000,
+      () => 'cancel did not end the orphaned run',
+    )
     console.log(`[faults] cancel of an orphaned run took effect after ${((Date.now() - t0) / 1000).toFixed(1)} s`)
-    await new Promise((r) => setTimeout(r, (RUN_LEASE.sweepMs) + 1000))
+    await new Promise((r) => setTimeout(r, RUN_LEASE.sweepMs + 1000))
     expect((await run(id)).status).toBe('cancelled')
   })
 })

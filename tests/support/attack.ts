@@ -25,13 +25,23 @@ export async function rawRequest(method: string, path: string, opts: RawOptions 
   const res = await fetch(`${inject('baseUrl')}${path}`, { method, headers, body, redirect: 'manual' })
   const text = await res.text()
   let parsed: unknown = text
-  try { parsed = JSON.parse(text) } catch { /* not JSON */ }
+  try {
+    parsed = JSON.parse(text)
+  } catch {
+    /* not JSON */
+  }
   return { status: res.status, body: parsed }
 }
 
 /** A client's request as another origin's page would send it (same cookie, foreign Origin). */
 export function asForeignPage(client: ApiClient, method: string, path: string, body: unknown, origin = FOREIGN_ORIGIN) {
-  return rawRequest(method, path, { cookie: client.cookie, origin, fetchSite: 'same-site', body: body === undefined ? undefined : JSON.stringify(body), contentType: body === undefined ? undefined : 'application/json' })
+  return rawRequest(method, path, {
+    cookie: client.cookie,
+    origin,
+    fetchSite: 'same-site',
+    body: body === undefined ? undefined : JSON.stringify(body),
+    contentType: body === undefined ? undefined : 'application/json',
+  })
 }
 
 /** Another port of the same host: same-site for SameSite=Lax cookies, but not the same origin. */
@@ -43,7 +53,7 @@ export function median(xs: number[]): number {
 }
 
 /** Wall time of one call in milliseconds (with its result). */
-export async function timed<T>(call: () => Promise<T>): Promise<{ ms: number, result: T }> {
+export async function timed<T>(call: () => Promise<T>): Promise<{ ms: number; result: T }> {
   const start = performance.now()
   const result = await call()
   return { ms: performance.now() - start, result }
@@ -56,10 +66,10 @@ export async function timed<T>(call: () => Promise<T>): Promise<{ ms: number, re
 export async function pairedMedians<T>(tries: number, a: (i: number) => Promise<T>, b: (i: number) => Promise<T>) {
   const ta: number[] = []
   const tb: number[] = []
-  const answers: { a: T[], b: T[] } = { a: [], b: [] }
+  const answers: { a: T[]; b: T[] } = { a: [], b: [] }
   for (let i = 0; i < tries; i++) {
     const first = i % 2 === 0
-    for (const which of first ? ['a', 'b'] as const : ['b', 'a'] as const) {
+    for (const which of first ? (['a', 'b'] as const) : (['b', 'a'] as const)) {
       const { ms, result } = await timed(() => (which === 'a' ? a(i) : b(i)))
       ;(which === 'a' ? ta : tb).push(ms)
       answers[which].push(result)

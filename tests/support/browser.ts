@@ -3,8 +3,7 @@ import { mkdirSync } from 'node:fs'
 import { join, resolve } from 'node:path'
 
 // Debian's Chromium driven by playwright-core; never a downloaded browser.
-const FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-  '--disable-background-networking', '--disable-component-update', '--disable-sync']
+const FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync']
 export const SCREENSHOTS = resolve(import.meta.dirname, '..', '..', 'test-results', 'screenshots')
 
 // Content-Security-Policy violations that Chromium logged in any page of a browser launched
@@ -40,5 +39,7 @@ export async function screenshot(page: Page, name: string) {
 
 /** Wait until Nuxt has hydrated the page, so that clicks reach Vue handlers. */
 export async function hydrated(page: Page) {
-  await page.waitForFunction(() => (window as unknown as { useNuxtApp?: unknown }).useNuxtApp !== undefined || document.querySelector('#__nuxt')?.getAttribute('data-v-app') !== null, undefined, { timeout: 15_000 })
+  await page.waitForFunction(() => (window as unknown as { useNuxtApp?: unknown }).useNuxtApp !== undefined || document.querySelector('#__nuxt')?.getAttribute('data-v-app') !== null, undefined, {
+    timeout: 15_000,
+  })
 }

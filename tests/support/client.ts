@@ -1,14 +1,17 @@
 import { inject } from 'vitest'
 import { randomBytes } from 'node:crypto'
 
-export interface Reply { status: number, body: any }
+export interface Reply {
+  status: number
+  body: any
+}
 
 /** A tiny HTTP client that keeps the session cookie, like a browser tab. */
 export class ApiClient {
   cookie = ''
   constructor(readonly baseUrl = inject('baseUrl')) {}
 
-  async request(method: string, path: string, body?: unknown, opts: { raw?: string, headers?: Record<string, string> } = {}): Promise<Reply> {
+  async request(method: string, path: string, body?: unknown, opts: { raw?: string; headers?: Record<string, string> } = {}): Promise<Reply> {
     const headers: Record<string, string> = { accept: 'application/json', ...opts.headers }
     if (this.cookie) headers.cookie = this.cookie
     let payload: string | undefined
@@ -23,14 +26,26 @@ export class ApiClient {
     }
     const text = await res.text()
     let parsed: unknown = text
-    try { parsed = JSON.parse(text) } catch { /* not JSON */ }
+    try {
+      parsed = JSON.parse(text)
+    } catch {
+      /* not JSON */
+    }
     return { status: res.status, body: parsed }
   }
 
-  get(path: string) { return this.request('GET', path) }
-  post(path: string, body?: unknown) { return this.request('POST', path, body) }
-  patch(path: string, body?: unknown) { return this.request('PATCH', path, body) }
-  delete(path: string) { return this.request('DELETE', path) }
+  get(path: string) {
+    return this.request('GET', path)
+  }
+  post(path: string, body?: unknown) {
+    return this.request('POST', path, body)
+  }
+  patch(path: string, body?: unknown) {
+    return this.request('PATCH', path, body)
+  }
+  delete(path: string) {
+    return this.request('DELETE', path)
+  }
 }
 
 export function uniqueEmail(prefix = 'user'): string {
@@ -48,7 +63,7 @@ export async function mailedToken(email: string, page: 'welcome' | 'reset' | 'jo
 }
 
 /** Sign a fresh account up (the e-mailed link opened, as its owner would) and return a client signed in as it. */
-export async function signedUpClient(prefix = 'user'): Promise<{ client: ApiClient, email: string, id: number }> {
+export async function signedUpClient(prefix = 'user'): Promise<{ client: ApiClient; email: string; id: number }> {
   const client = new ApiClient()
   const email = uniqueEmail(prefix)
   const asked = await client.post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: prefix })

@@ -7,7 +7,28 @@ export function testDb(): Knex {
   return db
 }
 
-export const ALL_TABLES = ['users', 'password_resets', 'groups', 'memberships', 'invitations', 'outbox', 'theories', 'runs', 'bases', 'operators', 'annotations', 'annotation_revisions', 'tags', 'share_links', 'threshold_tags', 'scale_ladders', 'sessions', 'sign_up_requests', 'account_mails', 'request_keys']
+export const ALL_TABLES = [
+  'users',
+  'password_resets',
+  'groups',
+  'memberships',
+  'invitations',
+  'outbox',
+  'theories',
+  'runs',
+  'bases',
+  'operators',
+  'annotations',
+  'annotation_revisions',
+  'tags',
+  'share_links',
+  'threshold_tags',
+  'scale_ladders',
+  'sessions',
+  'sign_up_requests',
+  'account_mails',
+  'request_keys',
+]
 
 const MARKS = { annotations: 'deleted_at', tags: 'deleted_at', theories: 'deleted_at', bases: 'deleted_at', groups: 'deleted_at', share_links: 'revoked_at' }
 

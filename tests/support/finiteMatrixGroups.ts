@@ -16,7 +16,11 @@ function matMul(a: M, b: M): M {
   return a.map((row) => b[0]!.map((_, j) => row.reduce((s, x, k) => cadd(s, cmul(x, b[k]![j]!)), re(0))))
 }
 
-const keyOf = (m: M): string => m.flat().map(([x, y]) => `${Math.round(x * 1e6)},${Math.round(y * 1e6)}`).join(';')
+const keyOf = (m: M): string =>
+  m
+    .flat()
+    .map(([x, y]) => `${Math.round(x * 1e6)},${Math.round(y * 1e6)}`)
+    .join(';')
 
 function closure(gens: M[]): M[] {
   const seen = new Map<string, M>(gens.map((g) => [keyOf(g), g]))
@@ -26,7 +30,10 @@ function closure(gens: M[]): M[] {
     for (const h of gens) {
       const p = matMul(g, h)
       const k = keyOf(p)
-      if (!seen.has(k)) { seen.set(k, p); queue.push(p) }
+      if (!seen.has(k)) {
+        seen.set(k, p)
+        queue.push(p)
+      }
     }
   }
   return [...seen.values()]
@@ -38,19 +45,106 @@ const Z: C = [0, 0]
 const I1: C = [1, 0]
 const c3 = Math.cos((2 * Math.PI) / 3)
 const s3 = Math.sin((2 * Math.PI) / 3)
-const perm3: M = [[Z, Z, I1], [I1, Z, Z], [Z, I1, Z]]
+const perm3: M = [
+  [Z, Z, I1],
+  [I1, Z, Z],
+  [Z, I1, Z],
+]
 const h = 1 / 2
 
 /** Generators of one faithful irrep per group, and that irrep's name in our tables. */
 export const FINITE_MATRIX_GROUPS = {
-  S3: { irrep: '2', order: 6, gens: [[[re(c3), re(-s3)], [re(s3), re(c3)]], [[I1, Z], [Z, re(-1)]]] as M[] },
-  A4: { irrep: '3', order: 12, gens: [perm3, [[I1, Z, Z], [Z, re(-1), Z], [Z, Z, re(-1)]]] as M[] },
+  S3: {
+    irrep: '2',
+    order: 6,
+    gens: [
+      [
+        [re(c3), re(-s3)],
+        [re(s3), re(c3)],
+      ],
+      [
+        [I1, Z],
+        [Z, re(-1)],
+      ],
+    ] as M[],
+  },
+  A4: {
+    irrep: '3',
+    order: 12,
+    gens: [
+      perm3,
+      [
+        [I1, Z, Z],
+        [Z, re(-1), Z],
+        [Z, Z, re(-1)],
+      ],
+    ] as M[],
+  },
   // the full tetrahedral group T_d (a reflection has trace +1: the irrep "3" of our S4 table)
-  S4: { irrep: '3', order: 24, gens: [perm3, [[I1, Z, Z], [Z, re(-1), Z], [Z, Z, re(-1)]], [[Z, I1, Z], [I1, Z, Z], [Z, Z, I1]]] as M[] },
-  Q8: { irrep: '2', order: 8, gens: [[[[0, 1], Z], [Z, [0, -1]]], [[Z, I1], [re(-1), Z]]] as M[] },
+  S4: {
+    irrep: '3',
+    order: 24,
+    gens: [
+      perm3,
+      [
+        [I1, Z, Z],
+        [Z, re(-1), Z],
+        [Z, Z, re(-1)],
+      ],
+      [
+        [Z, I1, Z],
+        [I1, Z, Z],
+        [Z, Z, I1],
+      ],
+    ] as M[],
+  },
+  Q8: {
+    irrep: '2',
+    order: 8,
+    gens: [
+      [
+        [[0, 1], Z],
+        [Z, [0, -1]],
+      ],
+      [
+        [Z, I1],
+        [re(-1), Z],
+      ],
+    ] as M[],
+  },
   // binary tetrahedral group in SU(2): the unit quaternions (1+i+j+k)/2 and i
-  Tprime: { irrep: '2', order: 24, gens: [[[[h, h], [h, h]], [[-h, h], [h, -h]]], [[[0, 1], Z], [Z, [0, -1]]]] as M[] },
-  Delta27: { irrep: '3', order: 27, gens: [perm3, [[I1, Z, Z], [Z, w, Z], [Z, Z, w2]]] as M[] },
+  Tprime: {
+    irrep: '2',
+    order: 24,
+    gens: [
+      [
+        [
+          [h, h],
+          [h, h],
+        ],
+        [
+          [-h, h],
+          [h, -h],
+        ],
+      ],
+      [
+        [[0, 1], Z],
+        [Z, [0, -1]],
+      ],
+    ] as M[],
+  },
+  Delta27: {
+    irrep: '3',
+    order: 27,
+    gens: [
+      perm3,
+      [
+        [I1, Z, Z],
+        [Z, w, Z],
+        [Z, Z, w2],
+      ],
+    ] as M[],
+  },
 } as const
 
 const cache = new Map<string, M[]>()

@@ -6,20 +6,30 @@ export const SMALL_THEORY = {
   name: 'Two scalars',
   frame: 'relativistic',
   groups: [{ name: 'U', type: 'U1', gauge: true }],
-  fields: [{ name: 'phi', lorentz: 'scalar', charges: { U: '1' } }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' }],
+  fields: [
+    { name: 'phi', lorentz: 'scalar', charges: { U: '1' } },
+    { name: 'A', lorentz: 'field-strength', gaugeOf: 'U' },
+  ],
 }
 
 /** U(1) gauge theory with a charged Dirac fermion (two Weyl fields) and a real scalar: integrate-out cases. */
 export const DIRAC_AND_SCALAR = {
-  name: 'Heavy electron and a scalar', frame: 'relativistic',
+  name: 'Heavy electron and a scalar',
+  frame: 'relativistic',
   groups: [{ name: 'QED', type: 'U1', gauge: true }],
   fields: [
-    { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } },
-    { name: 'S', lorentz: 'scalar', real: true }, { name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' },
+    { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } },
+    { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } },
+    { name: 'S', lorentz: 'scalar', real: true },
+    { name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' },
   ],
 }
 
-export interface Actor { client: ApiClient, id: number, email: string }
+export interface Actor {
+  client: ApiClient
+  id: number
+  email: string
+}
 export interface World {
   /** The editor's client (runs and edits). */
   editorClient: () => ApiClient
@@ -76,7 +86,9 @@ export async function addBasis(world: World) {
   const { persistRunResult } = await import('../../server/worker/persistRun')
   const db = testDb()
   const params = { maxDim: 6, theory: SMALL_THEORY, theoryVersion: 1 }
-  const [run] = await db('runs').insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params), status: 'running' }).returning('*')
+  const [run] = await db('runs')
+    .insert({ theory_id: world.theoryId, kind: 'basis', params: JSON.stringify(params), status: 'running' })
+    .returning('*')
   const report = buildBasis(SMALL_THEORY as never, { maxDim: 6, minDim: 6 })
   await persistRunResult(db, { ...run, params }, report)
   const basis = await db('bases').where({ run_id: run.id }).first('id')

@@ -41,24 +41,52 @@ const looksLikeCode = (word: string) => /[a-z][A-Z]|_|\.|\[/.test(word) || codeI
 const camelCase = (word: string) => /^[a-z]+[A-Z]\w*$/.test(word)
 const withoutQuoted = (message: string) => message.replace(/"[^"]*"|“[^”]*”|'[^']*'|`[^`]*`/g, '""')
 
-interface Rule { name: string, breaks: (message: string) => boolean }
+interface Rule {
+  name: string
+  breaks: (message: string) => boolean
+}
 
 const RULES: Rule[] = [
-  { name: 'a code name as prefix ("parseOperatorText: …")', breaks: (m) => { const w = /^\s*([A-Za-z_][\w.]*(?:\[\d+\])*)\s*:\s/.exec(m)?.[1]; return w !== undefined && looksLikeCode(w) } },
+  {
+    name: 'a code name as prefix ("parseOperatorText: …")',
+    breaks: (m) => {
+      const w = /^\s*([A-Za-z_][\w.]*(?:\[\d+\])*)\s*:\s/.exec(m)?.[1]
+      return w !== undefined && looksLikeCode(w)
+    },
+  },
   { name: 'a function name of the code followed by ":"', breaks: (m) => [...withoutQuoted(m).matchAll(/\b([a-z]+[A-Z]\w*)\s*:/g)].some((x) => codeIdentifiers().has(x[1]!)) },
   { name: 'a doubled prefix ("label: label: …")', breaks: (m) => /^\s*([^:]{1,60}):\s*\1\s*:/i.test(m) },
   { name: 'a path into a JSON document ("fields[0]")', breaks: (m) => /\b\w+\[\d+\]/.test(withoutQuoted(m)) },
   { name: '"undefined"', breaks: (m) => /\bundefined\b/.test(m) },
   { name: '"NaN"', breaks: (m) => /\bNaN\b/.test(m) },
-  { name: 'zod\'s own text', breaks: (m) => /Invalid key|Invalid input|Invalid option|Invalid element|Unrecognized key|expected (string|number|object|array|boolean|int|bigint|date|record|map|set)\b|Too small|Too big/i.test(m) },
+  {
+    name: "zod's own text",
+    breaks: (m) =>
+      /Invalid key|Invalid input|Invalid option|Invalid element|Unrecognized key|expected (string|number|object|array|boolean|int|bigint|date|record|map|set)\b|Too small|Too big/i.test(m),
+  },
   { name: '"[object …]"', breaks: (m) => /\[object /.test(m) },
   { name: 'a stack trace', breaks: (m) => /\n\s*at \S|\bat \S+ \(.*:\d+:\d+\)|\.(ts|js|mjs|cjs|vue):\d+/.test(m) },
-  { name: 'SQL or a database error', breaks: (m) => /\bselect\b.+\bfrom\b|\binsert into\b|\bupdate\s+\w+\s+set\b|\bdelete from\b|violates .*constraint|duplicate key value|relation ".*" does not exist|syntax error at or near|\bknex\b|ECONNREFUSED/i.test(m) },
+  {
+    name: 'SQL or a database error',
+    breaks: (m) =>
+      /\bselect\b.+\bfrom\b|\binsert into\b|\bupdate\s+\w+\s+set\b|\bdelete from\b|violates .*constraint|duplicate key value|relation ".*" does not exist|syntax error at or near|\bknex\b|ECONNREFUSED/i.test(
+        m,
+      ),
+  },
   { name: 'an internal key (snake_case)', breaks: (m) => /\b[a-z]+_[a-z_]+\b/.test(withoutQuoted(m)) },
-  { name: 'a camelCase key outside quotes', breaks: (m) => withoutQuoted(m).split(/[^A-Za-z0-9_]+/).some((w) => camelCase(w) && codeIdentifiers().has(w)) },
+  {
+    name: 'a camelCase key outside quotes',
+    breaks: (m) =>
+      withoutQuoted(m)
+        .split(/[^A-Za-z0-9_]+/)
+        .some((w) => camelCase(w) && codeIdentifiers().has(w)),
+  },
   { name: 'an error class name', breaks: (m) => /\b(TypeError|RangeError|ReferenceError|SyntaxError|ZodError|H3Error|FetchError|Engine\w*Error)\b|^Error:/.test(m) },
-  { name: 'the runtime\'s own text', breaks: (m) => /Cannot read propert|is not a function|is not iterable|Maximum call stack|\[(GET|POST|PUT|PATCH|DELETE)\]|Failed to fetch|<no response>/.test(m) },
-  { name: 'a bare status text or a vague message', breaks: (m) => /^(Internal Server Error|Server Error|Bad Request|Unprocessable Entity|Not Found|Something went wrong|Error|Invalid)\.?$/i.test(m.trim()) },
+  { name: "the runtime's own text", breaks: (m) => /Cannot read propert|is not a function|is not iterable|Maximum call stack|\[(GET|POST|PUT|PATCH|DELETE)\]|Failed to fetch|<no response>/.test(m) },
+  {
+    name: 'a bare status text or a vague message',
+    breaks: (m) => /^(Internal Server Error|Server Error|Bad Request|Unprocessable Entity|Not Found|Something went wrong|Error|Invalid)\.?$/i.test(m.trim()),
+  },
 ]
 
 /** The rules `message` breaks (empty when it may be shown to a user). */

@@ -16,7 +16,10 @@ const OFFSETS: Record<string, number> = { api: 0, e2e: 1 }
 const root = resolve(import.meta.dirname, '..', '..')
 
 declare module 'vitest' {
-  export interface ProvidedContext { baseUrl: string, databaseUrl: string }
+  export interface ProvidedContext {
+    baseUrl: string
+    databaseUrl: string
+  }
 }
 
 async function waitHealthy(url: string, server: ChildProcess) {
@@ -25,7 +28,9 @@ async function waitHealthy(url: string, server: ChildProcess) {
     if (server.exitCode !== null) throw new Error(`test server exited with ${server.exitCode}`)
     try {
       if ((await fetch(`${url}/api/health`)).ok) return
-    } catch { /* not yet listening */ }
+    } catch {
+      /* not yet listening */
+    }
     await new Promise((r) => setTimeout(r, 200))
   }
   throw new Error('test server did not become healthy within 60 s')
@@ -47,13 +52,24 @@ export default async function setup(project: TestProject) {
   const baseUrl = `http://127.0.0.1:${port}`
   const server = spawn(process.execPath, ['.output/server/index.mjs'], {
     cwd: root,
-    env: { ...process.env, DATABASE_URL: databaseUrl, HOST: '127.0.0.1', PORT: String(port), NUXT_PUBLIC_APP_URL: baseUrl,
-      NUXT_SESSION_PASSWORD: randomBytes(32).toString('hex'), SCALEWRIGHT_DEMO: '0', SMTP_URL: '', NODE_ENV: 'production' },
+    env: {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      NUXT_PUBLIC_APP_URL: baseUrl,
+      NUXT_SESSION_PASSWORD: randomBytes(32).toString('hex'),
+      SCALEWRIGHT_DEMO: '0',
+      SMTP_URL: '',
+      NODE_ENV: 'production',
+    },
     stdio: ['ignore', 'ignore', 'inherit'],
   })
   await waitHealthy(baseUrl, server)
   const worker = spawn(process.execPath, ['--import', 'tsx', 'scripts/worker.ts'], {
-    cwd: root, env: { ...process.env, DATABASE_URL: databaseUrl }, stdio: ['ignore', 'ignore', 'inherit'],
+    cwd: root,
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    stdio: ['ignore', 'ignore', 'inherit'],
   })
   project.provide('baseUrl', baseUrl)
   project.provide('databaseUrl', databaseUrl)

@@ -28,7 +28,7 @@ export async function timed(run: () => Promise<unknown>): Promise<number> {
  * POST a chunked body (no Content-Length) of `totalBytes`, produced only as fast as the server
  * reads it; resolves with the status and how many bytes the server had taken when it answered.
  */
-export function chunkedPost(baseUrl: string, path: string, totalBytes: number): Promise<{ status: number, sentBytes: number }> {
+export function chunkedPost(baseUrl: string, path: string, totalBytes: number): Promise<{ status: number; sentBytes: number }> {
   const url = new URL(path, baseUrl)
   const chunk = Buffer.alloc(64 * 1024, 0x20)
   return new Promise((resolve, reject) => {
@@ -40,7 +40,9 @@ export function chunkedPost(baseUrl: string, path: string, totalBytes: number): 
       resolve({ status: res.statusCode ?? 0, sentBytes: sent })
       req.destroy()
     })
-    req.on('error', (e) => { if (!answered) reject(new Error(`no answer after ${sent} bytes: ${e.message}`)) })
+    req.on('error', (e) => {
+      if (!answered) reject(new Error(`no answer after ${sent} bytes: ${e.message}`))
+    })
     const pump = () => {
       while (!answered && sent < totalBytes) {
         sent += chunk.length

@@ -8,7 +8,11 @@ import { join } from 'node:path'
 // through would show in the log as a refused command rather than run.
 export const PDFLATEX = '/usr/bin/pdflatex'
 
-export interface Compiled { ok: boolean, log: string, pdfBytes: number }
+export interface Compiled {
+  ok: boolean
+  log: string
+  pdfBytes: number
+}
 
 /** Compile a whole LaTeX document in a fresh folder; the log and whether a PDF came out. */
 export function compileLatex(tex: string): Compiled {

@@ -14,10 +14,12 @@ export function sourceFiles(dir: string): string[] {
 }
 
 /** Every module a file imports or re-exports, as written; `typeOnly` for `import type …`. */
-export function importStatementsOf(file: string): { spec: string, typeOnly: boolean }[] {
+export function importStatementsOf(file: string): { spec: string; typeOnly: boolean }[] {
   const text = readFileSync(join(root, file), 'utf8')
-  return [...text.matchAll(/(?:^|\n)\s*((?:import|export)\b[^'"]*?)\bfrom\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)]
-    .map((m) => ({ spec: (m[2] ?? m[3])!, typeOnly: /^(?:import|export)\s+type\b/.test(m[1] ?? '') }))
+  return [...text.matchAll(/(?:^|\n)\s*((?:import|export)\b[^'"]*?)\bfrom\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)/g)].map((m) => ({
+    spec: (m[2] ?? m[3])!,
+    typeOnly: /^(?:import|export)\s+type\b/.test(m[1] ?? ''),
+  }))
 }
 
 /** Every module a file imports or re-exports, as written. */

@@ -12,7 +12,10 @@ export default defineApiHandler(async (event) => {
   const body = await readJson(event, ResetSchema)
   const passwordHash = await hashPassword(body.password)
   await useDb().transaction(async (trx) => {
-    const reset = await trx('password_resets').where({ token_hash: hashToken(body.token) }).forUpdate().first()
+    const reset = await trx('password_resets')
+      .where({ token_hash: hashToken(body.token) })
+      .forUpdate()
+      .first()
     if (!reset || reset.used_at || new Date(reset.expires_at) < new Date()) fail(400, 'This reset link is invalid, used or expired; ask for a new one')
     await setPassword(trx, reset.user_id, passwordHash, null)
   })

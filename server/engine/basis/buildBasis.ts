@@ -89,7 +89,11 @@ export function buildBasis(theory: Theory, opts: BuildOptions): BasisReport {
     done.add(b.key).add(b.conjugateKey)
     const report = classReport(b, hOf(b.key, counts), hOf(b.conjugateKey, counts))
     const flavoredClass = flavored && b.class.legs.some((p) => p.flavored)
-    applyCpTally(report, (flavoredClass ? countsNf : counts).byDimension.find((x) => x.dimension === d), flavoredClass)
+    applyCpTally(
+      report,
+      (flavoredClass ? countsNf : counts).byDimension.find((x) => x.dimension === d),
+      flavoredClass,
+    )
     if (flavoredClass) {
       report.flavor = flavorDecomposition(theory, b, nf, hOf(b.key, countsNf), opts.signal)
       flavorParity(b, report, report.flavor)
@@ -125,9 +129,22 @@ function representative(a: OperatorClass, b: OperatorClass): OperatorClass {
 
 function twoFieldMismatch(key: string, hilbert: number): ClassReport {
   return {
-    key, conjugateKey: key, selfConjugate: false, rank: 0, hilbert, hilbertConjugate: hilbert, realParameters: 0, tallyOk: false,
+    key,
+    conjugateKey: key,
+    selfConjugate: false,
+    rank: 0,
+    hilbert,
+    hilbertConjugate: hilbert,
+    realParameters: 0,
+    tallyOk: false,
     message: `class ${key}: fewer than three fields has no contact amplitude (rank 0) but the Hilbert-series count is ${hilbert}`,
-    candidates: 0, operators: [], cpEven: 0, cpOdd: 0, pEven: 0, pOdd: 0, parityImageKey: null,
+    candidates: 0,
+    operators: [],
+    cpEven: 0,
+    cpOdd: 0,
+    pEven: 0,
+    pOdd: 0,
+    parityImageKey: null,
   }
 }
 
@@ -143,15 +160,22 @@ function classReport(b: ClassBasis, hilbert: number, hilbertConjugate: number): 
   const alternatives = b.alternatives.map(({ column, rows }) => ({ ...describeAlternative(b, column), fingerprint: { primes, values: rows } }))
   const ok = b.rank === hilbert && b.rank === hilbertConjugate
   return {
-    key: b.key, conjugateKey: b.conjugateKey, selfConjugate: b.selfConjugate, rank: b.rank,
-    hilbert, hilbertConjugate, realParameters: b.selfConjugate ? b.rank : 2 * b.rank,
+    key: b.key,
+    conjugateKey: b.conjugateKey,
+    selfConjugate: b.selfConjugate,
+    rank: b.rank,
+    hilbert,
+    hilbertConjugate,
+    realParameters: b.selfConjugate ? b.rank : 2 * b.rank,
     tallyOk: ok,
     ...(ok ? {} : { message: `class ${b.key}: amplitude rank ${b.rank} differs from Hilbert-series count ${hilbert} (conjugate class ${b.conjugateKey}: ${hilbertConjugate})` }),
     candidates: b.candidates,
     operators: ops,
     alternatives,
     ...cpCounts(b, ops),
-    pEven: b.parity.pEven, pOdd: b.parity.pOdd, parityImageKey: b.parity.imageKey,
+    pEven: b.parity.pEven,
+    pOdd: b.parity.pOdd,
+    parityImageKey: b.parity.imageKey,
     ...(b.parity.reason ? { parityReason: b.parity.reason } : {}),
   }
 }

@@ -59,7 +59,14 @@ export function classCandidates(t: Theory, c: OperatorClass): { lorentz: Lorentz
   if (c.legs.length > 12) throw new EngineInputError('classCandidates', `The class ${c.key} has ${c.legs.length} fields; explicit bases support at most 12; lower the maximum dimension`)
   let gauge: SuStructure[][] = chargesConserved(t, c) ? [[]] : []
   for (const list of gauge.length ? gaugeFactorLists(t, c) : []) gauge = gauge.flatMap((g) => list.map((s) => [...g, s]))
-  const lorentz = gauge.length === 0 ? [] : lorentzStructures(c.legs.map((p) => p.angles), c.legs.map((p) => p.squares), c.k)
+  const lorentz =
+    gauge.length === 0
+      ? []
+      : lorentzStructures(
+          c.legs.map((p) => p.angles),
+          c.legs.map((p) => p.squares),
+          c.k,
+        )
   const candidates: Candidate[] = []
   for (const l of lorentz) for (const g of gauge) candidates.push({ lorentz: l, gauge: g })
   checkTensorBudget(c, candidates)
@@ -81,7 +88,10 @@ function checkTensorBudget(c: OperatorClass, candidates: Candidate[]): void {
   const perms = [...counts.values()].reduce((x, m) => x * factorial(m), 1)
   const work = candidates.length ** 2 * perms * leaves
   if (work > TENSOR_BUDGET) {
-    throw new EngineInputError('classCandidates', `class ${c.key}: writing it out needs about ${work.toExponential(1)} index-loop terms (${candidates.length} candidate operators, ${perms} permutations of identical fields, ${leaves} terms per contraction), beyond the budget of ${TENSOR_BUDGET.toExponential(0)} for fields in higher representations; its count is given by the Hilbert series`)
+    throw new EngineInputError(
+      'classCandidates',
+      `class ${c.key}: writing it out needs about ${work.toExponential(1)} index-loop terms (${candidates.length} candidate operators, ${perms} permutations of identical fields, ${leaves} terms per contraction), beyond the budget of ${TENSOR_BUDGET.toExponential(0)} for fields in higher representations; its count is given by the Hilbert series`,
+    )
   }
 }
 

@@ -110,13 +110,27 @@ function hermitianColumns(cls: OperatorClass, cols: Column[]): Column[] {
     if (!cache.has(k)) cache.set(k, x)
     return cache.get(k)!
   }
-  for (const c of cols) for (const t of c.terms) { t.lorentz = share(cacheL, t.lorentz); t.gauge = share(cacheG, t.gauge) }
+  for (const c of cols)
+    for (const t of c.terms) {
+      t.lorentz = share(cacheL, t.lorentz)
+      t.gauge = share(cacheG, t.gauge)
+    }
   return cols.flatMap((c) => {
     if (c.source !== 'candidate') return [c]
     const t = c.terms[0]!
-    const bar = { lorentz: share(cacheL, conjugateLorentz(t.lorentz, pi)), gauge: share(cacheG, t.gauge.map((s) => conjugateSu(s, pi))) }
+    const bar = {
+      lorentz: share(cacheL, conjugateLorentz(t.lorentz, pi)),
+      gauge: share(
+        cacheG,
+        t.gauge.map((s) => conjugateSu(s, pi)),
+      ),
+    }
     return ([1, -1] as const).map((sg) => ({
-      text: combinationText(c.text, 'h.c.', sg), hermitianBase: c.text, source: 'hermitian' as const, candidate: c.candidate, conjSign: sg,
+      text: combinationText(c.text, 'h.c.', sg),
+      hermitianBase: c.text,
+      source: 'hermitian' as const,
+      candidate: c.candidate,
+      conjSign: sg,
       terms: [t, { ...bar, coeff: PrimeSet.working().image(sg) }],
     }))
   })
@@ -134,7 +148,7 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
   const cls = typeof classKey === 'string' ? parseClassKey(particles, classKey) : classKey
   const { candidates, gauge } = classCandidates(theory, cls)
   const perms = identicalLegPermutations(cls.legs)
-  const base = candidates.length === 0 && !(opts.priorities?.keep?.[cls.key]?.length) ? [] : buildColumns(theory, particles, cls, candidates, gauge, opts.priorities, opts.printed)
+  const base = candidates.length === 0 && !opts.priorities?.keep?.[cls.key]?.length ? [] : buildColumns(theory, particles, cls, candidates, gauge, opts.priorities, opts.printed)
   const selfConjugate = conjugateClass(particles, cls).key === cls.key
   const hermCols = selfConjugate && opts.priorities?.preferHermitian !== false ? hermitianColumns(cls, base) : base
   const selfParity = opts.priorities?.preferParity !== false && parityImage(particles, cls).image?.key === cls.key
@@ -147,20 +161,44 @@ export function classBasis(theory: Theory, classKey: string | OperatorClass, opt
     return { F, points, matrix: columnMatrix(F, pi, columns, points, perms, opts.signal) }
   })
   const ctx = { fn: 'classBasis', about: `class ${cls.key}` }
-  const { pivots } = set.echelon(samples.map((s) => s.matrix), ctx, opts.signal)
+  const { pivots } = set.echelon(
+    samples.map((s) => s.matrix),
+    ctx,
+    opts.signal,
+  )
   const zeros = samples.map(({ matrix }) => columns.map((_, j) => matrix.every((row) => row[j] === 0)))
-  set.agree(zeros.map((z) => z.map(Number).join('')), ctx, 'vanishing columns')
+  set.agree(
+    zeros.map((z) => z.map(Number).join('')),
+    ctx,
+    'vanishing columns',
+  )
   const results = samples.map((s) => ({ ...s, keptRows: s.matrix.map((row) => pivots.map((c) => row[c]!)) }))
   const zero = zeros[0]!
   const conj = conjugateClass(particles, cls)
   const reduced = pivots.map((c) => (columns[c]!.paritySign ? reduceParityColumn(columns, c, zero) : markSelfHermitian(columns, c, zero)))
   const kept = reduced.map((r) => r.column)
-  const primes = results.map(({ F, points, keptRows }) => ({ F, points, keptRows: scaleRows(F, keptRows, reduced.map((r) => r.halvings)) }))
+  const primes = results.map(({ F, points, keptRows }) => ({
+    F,
+    points,
+    keptRows: scaleRows(
+      F,
+      keptRows,
+      reduced.map((r) => r.halvings),
+    ),
+  }))
   const self = conj.key === cls.key
   return {
-    key: cls.key, class: cls, conjugateKey: conj.key, selfConjugate: self,
-    dimension: cls.dim2 / 2, candidates: candidates.length, rank: pivots.length,
-    kept, gaugeStructures: gauge, perms, primes,
+    key: cls.key,
+    class: cls,
+    conjugateKey: conj.key,
+    selfConjugate: self,
+    dimension: cls.dim2 / 2,
+    candidates: candidates.length,
+    rank: pivots.length,
+    kept,
+    gaugeStructures: gauge,
+    perms,
+    primes,
     alternatives: alternativesOf(columns, results, pivots, zero),
     parity: classParity(particles, { cls, selfConjugate: self, rank: pivots.length, kept, primes, perms }),
     note: BASIS_NOTE,
@@ -193,13 +231,19 @@ function markSelfHermitian(columns: Column[], j: number, zero: boolean[]): { col
 function columnMatrix(F: PrimeField, pi: number, columns: Column[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {
   const pairIndex = new Map<LorentzStructure, Map<SuStructure[], number>>()
   const pairs: { lorentz: LorentzStructure; gauge: SuStructure[] }[] = []
-  const refs = columns.map((c) => c.terms.map((t) => {
-    let inner = pairIndex.get(t.lorentz)
-    if (!inner) pairIndex.set(t.lorentz, (inner = new Map()))
-    let k = inner.get(t.gauge)
-    if (k === undefined) { k = pairs.length; inner.set(t.gauge, k); pairs.push({ lorentz: t.lorentz, gauge: t.gauge }) }
-    return { k, coeff: t.coeff[pi]! }
-  }))
+  const refs = columns.map((c) =>
+    c.terms.map((t) => {
+      let inner = pairIndex.get(t.lorentz)
+      if (!inner) pairIndex.set(t.lorentz, (inner = new Map()))
+      let k = inner.get(t.gauge)
+      if (k === undefined) {
+        k = pairs.length
+        inner.set(t.gauge, k)
+        pairs.push({ lorentz: t.lorentz, gauge: t.gauge })
+      }
+      return { k, coeff: t.coeff[pi]! }
+    }),
+  )
   const table = pairRows(F, pairs, points, perms, signal)
   return table.map((row) => refs.map((terms) => terms.reduce((s, { k, coeff }) => F.add(s, F.mul(coeff, row[k]!)), 0)))
 }

@@ -61,5 +61,9 @@ export function parseClassKey(particles: Species[], key: string, minLegs = 3): O
  * @example conjugateClass(ps, class "L^2 H^2").key // "L*^2 H*^2"
  */
 export function conjugateClass(particles: Species[], c: OperatorClass): OperatorClass {
-  return makeClass(particles, c.k, c.legs.map((p) => particles[p.partner]!))
+  return makeClass(
+    particles,
+    c.k,
+    c.legs.map((p) => particles[p.partner]!),
+  )
 }

@@ -31,7 +31,9 @@ const ord = (i: number, j: number): [number, number] => (i < j ? [i, j] : [j, i]
  */
 export function conjugateLorentz(l: LorentzStructure, pi: number[]): LorentzStructure {
   const derivs = l.derivs.slice()
-  l.derivs.forEach((d, i) => { derivs[pi[i]!] = d })
+  l.derivs.forEach((d, i) => {
+    derivs[pi[i]!] = d
+  })
   return {
     derivs,
     angle: l.square.map(([i, j]) => ord(pi[i]!, pi[j]!)),

@@ -60,13 +60,15 @@ function fourOf(b: ClassBasis, col: Column, hc: string): string | null {
 /** LaTeX of a user-kept operator: Σ (rational) · term, terms as in operatorLatex. */
 function keptLatex(b: ClassBasis, text: string): string {
   const terms = parseOperatorText(b.class, text, b.gaugeStructures.length)
-  return terms.map((t, i) => {
-    const neg = t.coeff.num < 0n
-    const mag = neg ? -t.coeff.num : t.coeff.num
-    const c = t.coeff.den === 1n ? (mag === 1n ? '' : `${mag}\\,`) : `\\tfrac{${mag}}{${t.coeff.den}}\\,`
-    const sign = neg ? '-' : i === 0 ? '' : '+'
-    return `${sign}${c}${operatorLatex(b.class.legs, t.lorentz, b.gaugeStructures[t.gaugeIndex]!)}`
-  }).join(' ')
+  return terms
+    .map((t, i) => {
+      const neg = t.coeff.num < 0n
+      const mag = neg ? -t.coeff.num : t.coeff.num
+      const c = t.coeff.den === 1n ? (mag === 1n ? '' : `${mag}\\,`) : `\\tfrac{${mag}}{${t.coeff.den}}\\,`
+      const sign = neg ? '-' : i === 0 ? '' : '+'
+      return `${sign}${c}${operatorLatex(b.class.legs, t.lorentz, b.gaugeStructures[t.gaugeIndex]!)}`
+    })
+    .join(' ')
 }
 
 /**

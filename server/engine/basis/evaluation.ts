@@ -75,10 +75,7 @@ export interface EvalTerm {
  * Weiss, JHEP 10 (2020) 175, §2).
  * @example amplitudeRows(F, [φ^4 structure], [[]], points, perms)[0][0] // 24 (4! permutations of a constant)
  */
-export function amplitudeRows(
-  F: PrimeField, lorentz: LorentzStructure[], gauge: SuStructure[][], points: SamplePoint[], perms: LegPermutation[],
-  signal?: { aborted: boolean },
-): number[][] {
+export function amplitudeRows(F: PrimeField, lorentz: LorentzStructure[], gauge: SuStructure[][], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {
   const nG = gauge.length
   return points.map((pt) => {
     if (signal?.aborted) throw new EngineCancelledError('basis evaluation')
@@ -119,10 +116,7 @@ export function combinationValues(F: PrimeField, terms: EvalTerm[], points: Samp
  * point), or by the direct sum over permutations when there is no plan.
  * @example pairRows(F, [{lorentz: φ^4, gauge: []}], points, perms)[0] // [24]
  */
-export function pairRows(
-  F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[],
-  signal?: { aborted: boolean },
-): number[][] {
+export function pairRows(F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {
   const plan = symmetrisationPlan(pairs, perms)
   if (!plan) return directPairRows(F, pairs, points, perms, signal)
   const identity = pairs[0] ? pairs[0].lorentz.derivs.map((_, i) => i) : []
@@ -136,16 +130,15 @@ export function pairRows(
       for (const { l, g, coeff } of terms) v = F.add(v, F.mul(F.from(coeff), F.mul(L[l]!, G[g]!)))
       row[k] = v
     }
-    plan.links.forEach((link, k) => { if (link.rep !== k) row[k] = link.sign === 1 ? row[link.rep]! : F.neg(row[link.rep]!) })
+    plan.links.forEach((link, k) => {
+      if (link.rep !== k) row[k] = link.sign === 1 ? row[link.rep]! : F.neg(row[link.rep]!)
+    })
     return row
   })
 }
 
 /** pairRows by the sum over permutations at every point (the reference for the plan). */
-export function directPairRows(
-  F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[],
-  signal?: { aborted: boolean },
-): number[][] {
+export function directPairRows(F: PrimeField, pairs: Pair[], points: SamplePoint[], perms: LegPermutation[], signal?: { aborted: boolean }): number[][] {
   const uniqL = [...new Set(pairs.map((p) => p.lorentz))]
   const uniqG = [...new Set(pairs.map((p) => p.gauge))]
   const posL = new Map(uniqL.map((l, i) => [l, i]))

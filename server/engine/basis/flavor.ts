@@ -34,7 +34,8 @@ export interface FlavorOperator {
  * Reference: Fulton & Harris, Representation Theory, §4.1 and §6.1 (Y_T = b_T a_T acting on
  * the tensor slots: row symmetrizer after column antisymmetrizer); dim Y_T·V^{⊗m} = dim_GL(N)(λ).
  */
-export const YOUNG_CONVENTION = 'A flavoured operator with Young shape λ on m identical fields has the flavour tensor C′ = Y_T C: T is the tableau of λ filled row by row with those fields in class order, and Y_T = (sum of the permutations within the rows of T) × (signed sum of the permutations within its columns): antisymmetrize the columns, then symmetrize the rows. Its flavour components, dim_GL(N_f)(λ), are those of this one image; the whole λ-part of the flavour tensor (all standard tableaux) has f^λ times as many and repeats the same operator f^λ times.'
+export const YOUNG_CONVENTION =
+  'A flavoured operator with Young shape λ on m identical fields has the flavour tensor C′ = Y_T C: T is the tableau of λ filled row by row with those fields in class order, and Y_T = (sum of the permutations within the rows of T) × (signed sum of the permutations within its columns): antisymmetrize the columns, then symmetrize the rows. Its flavour components, dim_GL(N_f)(λ), are those of this one image; the whole λ-part of the flavour tensor (all standard tableaux) has f^λ times as many and repeats the same operator f^λ times.'
 
 export interface FlavorSummary {
   /** YOUNG_CONVENTION: which symmetrizer `young` means. */
@@ -57,7 +58,7 @@ function blocksOf(b: ClassBasis, nf: number | undefined): { legs: number[]; labe
   b.class.legs.forEach((p, i) => {
     const last = out[out.length - 1]
     if (last && last.label === p.label) last.legs.push(i)
-    else out.push({ legs: [i], label: p.label, flavors: p.flavored ? nf ?? p.flavors : 1, fermion: p.fermion })
+    else out.push({ legs: [i], label: p.label, flavors: p.flavored ? (nf ?? p.flavors) : 1, fermion: p.fermion })
   })
   return out
 }
@@ -100,12 +101,17 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
         text: formatLorentz(cand.lorentz, nG > 1 ? c % nG : null),
         latex: operatorLatex(b.class.legs, cand.lorentz, cand.gauge),
         latex4: fourComponentLatex(b.class.legs, cand.lorentz, cand.gauge),
-        young, flavorComponents: each,
+        young,
+        flavorComponents: each,
       })
     }
   }
   const identity = [{ map: Array.from({ length: n }, (_, i) => i), sign: 1 }]
-  const full = set.rank(set.fields.map((F, pi) => amplitudeRows(F, lorentz, gauge, points[pi]!, identity, signal)), { fn: 'flavorDecomposition', about: `class ${b.key}` }, signal)
+  const full = set.rank(
+    set.fields.map((F, pi) => amplitudeRows(F, lorentz, gauge, points[pi]!, identity, signal)),
+    { fn: 'flavorDecomposition', about: `class ${b.key}` },
+    signal,
+  )
   if (full !== dimV) {
     throw new EngineConsistencyError('flavorDecomposition', `class ${b.key}: Σ m_λ f^λ = ${dimV} differs from the unsymmetrised rank ${full}`)
   }
@@ -115,8 +121,12 @@ export function flavorDecomposition(t: Theory, b: ClassBasis, nf: number | undef
     convention: YOUNG_CONVENTION,
     nf: nf ?? Math.max(...blocks.map((bl) => bl.flavors)),
     blocks: blocks.map((bl) => ({ label: bl.label, size: bl.legs.length, flavors: bl.flavors })),
-    count, hilbert, realParameters: b.selfConjugate ? count : 2 * count, tallyOk: ok,
+    count,
+    hilbert,
+    realParameters: b.selfConjugate ? count : 2 * count,
+    tallyOk: ok,
     ...(ok ? {} : { message: `class ${b.key}: flavor count ${count} differs from Hilbert-series count ${hilbert}` }),
-    decomposition, operators,
+    decomposition,
+    operators,
   }
 }

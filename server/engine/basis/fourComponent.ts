@@ -24,8 +24,14 @@ const GREEK = ['\\mu', '\\nu', '\\rho', '\\sigma', '\\kappa', '\\lambda', '\\tau
 function partners(l: LorentzStructure, n: number): { angle: number[][]; square: number[][] } {
   const angle: number[][] = Array.from({ length: n }, () => [])
   const square: number[][] = Array.from({ length: n }, () => [])
-  for (const [i, j] of l.angle) { angle[i]!.push(j); angle[j]!.push(i) }
-  for (const [i, j] of l.square) { square[i]!.push(j); square[j]!.push(i) }
+  for (const [i, j] of l.angle) {
+    angle[i]!.push(j)
+    angle[j]!.push(i)
+  }
+  for (const [i, j] of l.square) {
+    square[i]!.push(j)
+    square[j]!.push(i)
+  }
   return { angle, square }
 }
 
@@ -57,7 +63,10 @@ function match(legs: Species[], l: LorentzStructure, left: Set<number>): Bil[] |
     const inner = new Set(rest.filter((h) => h !== g))
     const bil = classify(legs, l, f, g, inner)
     if (!bil) continue
-    if (bil.kind === 'VV') { inner.delete(bil.c!); inner.delete(bil.d!) }
+    if (bil.kind === 'VV') {
+      inner.delete(bil.c!)
+      inner.delete(bil.d!)
+    }
     const more = match(legs, l, inner)
     if (more) return [bil, ...more]
   }
@@ -97,10 +106,19 @@ export function fourComponentLatex(legs: Species[], l: LorentzStructure, gauge: 
   }
   for (const b of bils) {
     if (b.kind === 'S') parts.push(bilinear(b.a, b.b, ''))
-    else if (b.kind === 'V') { const m = GREEK[g++ % GREEK.length]!; parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), `(D_{${m}}${legs[b.x!]!.conj ? `{${legs[b.x!]!.tex}^{\\dagger}}` : legs[b.x!]!.tex})${idx(b.x!)}`) }
-    else if (b.kind === 'VV') { const m = GREEK[g++ % GREEK.length]!; parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), bilinear(b.c!, b.d!, `\\gamma_{${m}}`)) }
-    else { const [m, n] = [GREEK[g++ % GREEK.length]!, GREEK[g++ % GREEK.length]!]; parts.push(bilinear(b.a, b.b, `\\sigma^{${m}${n}}`), strength(b.x!, `${m}${n}`)) }
+    else if (b.kind === 'V') {
+      const m = GREEK[g++ % GREEK.length]!
+      parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), `(D_{${m}}${legs[b.x!]!.conj ? `{${legs[b.x!]!.tex}^{\\dagger}}` : legs[b.x!]!.tex})${idx(b.x!)}`)
+    } else if (b.kind === 'VV') {
+      const m = GREEK[g++ % GREEK.length]!
+      parts.push(bilinear(b.a, b.b, `\\gamma^{${m}}`), bilinear(b.c!, b.d!, `\\gamma_{${m}}`))
+    } else {
+      const [m, n] = [GREEK[g++ % GREEK.length]!, GREEK[g++ % GREEK.length]!]
+      parts.push(bilinear(b.a, b.b, `\\sigma^{${m}${n}}`), strength(b.x!, `${m}${n}`))
+    }
   }
-  legs.forEach((p, i) => { if (!used.has(i)) parts.push(`${p.conj ? `{${p.tex}^{\\dagger}}` : p.tex}${idx(i)}`) })
+  legs.forEach((p, i) => {
+    if (!used.has(i)) parts.push(`${p.conj ? `{${p.tex}^{\\dagger}}` : p.tex}${idx(i)}`)
+  })
   return parts.join('\\,')
 }

@@ -89,7 +89,8 @@ export function suStructures(group: string, n: number, kinds: SuKind[], shapes?:
   if (diff % n !== 0) return []
   const [many, few] = diff >= 0 ? [ups, lows] : [lows, ups]
   const m = Math.abs(diff) / n
-  if (many.length > 12) throw new EngineInputError('suStructures', `A class with ${many.length} ${group} indices of one kind is beyond what explicit bases support (at most 12); lower the maximum dimension`)
+  if (many.length > 12)
+    throw new EngineInputError('suStructures', `A class with ${many.length} ${group} indices of one kind is beyond what explicit bases support (at most 12); lower the maximum dimension`)
   const out: SuStructure[] = []
   const seen = new Set<string>()
   const slotClass = tensor ? columnClasses(slots, shapes!) : []
@@ -130,7 +131,13 @@ function columnClasses(slots: Slot[], shapes: TensorShape[]): string[] {
 function structureKey(slotClass: string[], deltas: [number, number][], eps: number[][]): string {
   const edges = [
     ...deltas.map(([u, l]) => `d${slotClass[u]}:${slotClass[l]}`),
-    ...eps.map((b) => `e${b.map((x) => slotClass[x]!).sort().join(':')}`),
+    ...eps.map(
+      (b) =>
+        `e${b
+          .map((x) => slotClass[x]!)
+          .sort()
+          .join(':')}`,
+    ),
   ]
   return edges.sort().join('|')
 }
@@ -201,16 +208,28 @@ export function evaluateSuBrute(F: PrimeField, s: SuStructure, waves: SuWave[]):
     total = F.add(total, v)
   }
   const recEps = (e: number, sign: number): void => {
-    if (e === s.eps.length) { leaf(sign); return }
+    if (e === s.eps.length) {
+      leaf(sign)
+      return
+    }
     for (const { perm, sign: sg } of lc) {
-      s.eps[e]!.forEach((slot, i) => { idx[slot] = perm[i]! })
+      s.eps[e]!.forEach((slot, i) => {
+        idx[slot] = perm[i]!
+      })
       recEps(e + 1, sign * sg)
     }
   }
   const recDelta = (d: number): void => {
-    if (d === s.deltas.length) { recEps(0, 1); return }
+    if (d === s.deltas.length) {
+      recEps(0, 1)
+      return
+    }
     const [u, l] = s.deltas[d]!
-    for (let i = 0; i < n; i++) { idx[u] = i; idx[l] = i; recDelta(d + 1) }
+    for (let i = 0; i < n; i++) {
+      idx[u] = i
+      idx[l] = i
+      recDelta(d + 1)
+    }
   }
   recDelta(0)
   return total

@@ -24,7 +24,10 @@ export function hermiticityOf(b: ClassBasis): boolean[] {
     for (let r = 0; r < vals.length; r++) {
       const a = pd.keptRows[r]![i]!
       const v = vals[r]!
-      if (a === 0) { if (v !== 0) return false; continue }
+      if (a === 0) {
+        if (v !== 0) return false
+        continue
+      }
       const q = pd.F.div(v, a)
       if (c === null) c = q
       else if (c !== q) return false

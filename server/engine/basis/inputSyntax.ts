@@ -59,15 +59,24 @@ function parseTerm(text: string, body: string, n: number, nGauge: number): { coe
   while (TOKEN.lastIndex < body.length) {
     const at = TOKEN.lastIndex
     const m = TOKEN.exec(body)
-    if (!m || m.index !== at) throw new EngineInputError('parseOperatorText', `Cannot read "${body.slice(at).trim()}" in "${text}"; write brackets such as <12>, [34] or s13, powers such as ^2, fractions such as 1/2 and gauge contractions such as {g:0}`)
+    if (!m || m.index !== at)
+      throw new EngineInputError(
+        'parseOperatorText',
+        `Cannot read "${body.slice(at).trim()}" in "${text}"; write brackets such as <12>, [34] or s13, powers such as ^2, fractions such as 1/2 and gauge contractions such as {g:0}`,
+      )
     if (m[1] !== undefined || m[5] !== undefined) {
       const isS = m[5] !== undefined
       let [a, b] = isS ? [m[5]!, m[6]!] : [m[2]!, m[3]]
-      if (b === undefined) { if (a.length !== 2) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two legs, e.g. <12> or <1,12>`); [a, b] = [a[0]!, a[1]!] }
+      if (b === undefined) {
+        if (a.length !== 2) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two legs, e.g. <12> or <1,12>`)
+        ;[a, b] = [a[0]!, a[1]!]
+      }
       const i = Number(a) - 1
       const j = Number(b) - 1
-      if (i === j || i < 0 || j < 0 || i >= n || j >= n) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two different legs from 1 to ${n} (the class has ${n} fields)`)
-      if (!isS && (m[1] === '<') !== (m[4] === '>')) throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" mixes angle and square brackets; close < with > and [ with ]`)
+      if (i === j || i < 0 || j < 0 || i >= n || j >= n)
+        throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" needs two different legs from 1 to ${n} (the class has ${n} fields)`)
+      if (!isS && (m[1] === '<') !== (m[4] === '>'))
+        throw new EngineInputError('parseOperatorText', `The bracket "${m[0].trim()}" in "${text}" mixes angle and square brackets; close < with > and [ with ]`)
       const pair: [number, number] = i < j ? [i, j] : [j, i]
       const flip = i < j ? rat(1) : rat(-1)
       // s_ij = ⟨ij⟩[ji] = −⟨ij⟩[ij]
@@ -83,12 +92,16 @@ function parseTerm(text: string, body: string, n: number, nGauge: number): { coe
       coeff = ratMul(coeff, parseRational(m[8].replace(/\s+/g, '')))
     } else if (m[10] !== undefined) {
       if (!last) throw new EngineInputError('parseOperatorText', `In "${text}", a power "^" must follow a bracket, e.g. <12>^2`)
-      for (let r = 1; r < Number(m[11]); r++) { for (const l of last.lists) l.push(last.pair); coeff = ratMul(coeff, last.sgn) }
+      for (let r = 1; r < Number(m[11]); r++) {
+        for (const l of last.lists) l.push(last.pair)
+        coeff = ratMul(coeff, last.sgn)
+      }
       last = null
     }
   }
   if (gaugeIndex < 0) {
-    if (nGauge !== 1) throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" in "${text}" needs a gauge contraction: this class has ${nGauge}, so add one of {g:0} … {g:${nGauge - 1}}`)
+    if (nGauge !== 1)
+      throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" in "${text}" needs a gauge contraction: this class has ${nGauge}, so add one of {g:0} … {g:${nGauge - 1}}`)
     gaugeIndex = 0
   }
   return { coeff, angle, square, gaugeIndex }
@@ -108,7 +121,11 @@ export function parseOperatorText(c: OperatorClass, text: string, nGauge: number
     const derivs = c.legs.map((p, i) => {
       const a = t.angle.filter((e) => e.includes(i)).length - p.angles
       const s = t.square.filter((e) => e.includes(i)).length - p.squares
-      if (a !== s || a < 0) throw new EngineInputError('parseOperatorText', `The term "${body.trim()}" gives leg ${i + 1} (${p.label}) ${a + p.angles} angle and ${s + p.squares} square spinors; this field needs ${p.angles} and ${p.squares}, plus one of each per derivative on it`)
+      if (a !== s || a < 0)
+        throw new EngineInputError(
+          'parseOperatorText',
+          `The term "${body.trim()}" gives leg ${i + 1} (${p.label}) ${a + p.angles} angle and ${s + p.squares} square spinors; this field needs ${p.angles} and ${p.squares}, plus one of each per derivative on it`,
+        )
       return a
     })
     const k = derivs.reduce((x, y) => x + y, 0)
@@ -133,5 +150,5 @@ export function formatLorentz(l: LorentzStructure, gaugeIndex: number | null): s
   }
   const s = [...part(l.angle, '<', '>'), ...part(l.square, '[', ']')].join('')
   const g = gaugeIndex === null ? '' : `{g:${gaugeIndex}}`
-  return (s + g) || '1'
+  return s + g || '1'
 }

@@ -55,13 +55,23 @@ export function randomKinematics(F: PrimeField, rng: SeededRandom, n: number, br
   const solved = free === lam ? lamt : lam
   for (let i = 0; i < n; i++) free.push(rnd())
   for (let i = 0; i < n - 2; i++) solved.push(rnd())
-  const K = [[0, 0], [0, 0]]
+  const K = [
+    [0, 0],
+    [0, 0],
+  ]
   for (let i = 0; i < n - 2; i++) {
-    for (const a of [0, 1]) for (const b of [0, 1]) {
-      K[a]![b] = F.sub(K[a]![b]!, F.mul(lam[i]![a]!, lamt[i]![b]!))
-    }
+    for (const a of [0, 1])
+      for (const b of [0, 1]) {
+        K[a]![b] = F.sub(K[a]![b]!, F.mul(lam[i]![a]!, lamt[i]![b]!))
+      }
   }
-  const Kt = free === lam ? K : [[K[0]![0]!, K[1]![0]!], [K[0]![1]!, K[1]![1]!]]
+  const Kt =
+    free === lam
+      ? K
+      : [
+          [K[0]![0]!, K[1]![0]!],
+          [K[0]![1]!, K[1]![1]!],
+        ]
   const [xu, xv] = solvePair(F, free[n - 2]!, free[n - 1]!, Kt)
   solved.push(xu, xv)
   return { n, lam, lamt, angle: bracketTable(F, lam), square: bracketTable(F, lamt) }

@@ -10,7 +10,11 @@ import type { LorentzStructure } from './lorentzStructures'
 import type { SuStructure } from './gaugeStructures'
 
 const UNDOTTED = ['\\alpha', '\\beta', '\\gamma', '\\delta', '\\epsilon', '\\zeta', '\\eta', '\\theta', '\\iota', '\\kappa', '\\lambda', '\\mu', '\\nu', '\\xi', '\\rho', '\\sigma']
-const GROUP_LETTERS = [['i', 'j', 'k', 'l', 'm', 'n', 'p', 'q', 'r', 's', 't', 'v'], ['I', 'J', 'K', 'L', 'M', 'N', 'P', 'R', 'S', 'T', 'U', 'V'], ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h', 'o', 'u', 'w', 'x']]
+const GROUP_LETTERS = [
+  ['i', 'j', 'k', 'l', 'm', 'n', 'p', 'q', 'r', 's', 't', 'v'],
+  ['I', 'J', 'K', 'L', 'M', 'N', 'P', 'R', 'S', 'T', 'U', 'V'],
+  ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h', 'o', 'u', 'w', 'x'],
+]
 
 export function letter(list: string[], i: number): string {
   return i < list.length ? list[i]! : `${list[i % list.length]!}_{${Math.floor(i / list.length)}}`
@@ -29,8 +33,16 @@ export function fieldSymbol(p: Species): string {
 export function operatorLatex(legs: Species[], l: LorentzStructure, gauge: SuStructure[]): string {
   const low: string[][] = legs.map(() => [])
   const up: string[][] = legs.map(() => [])
-  l.angle.forEach(([i, j], a) => { const x = letter(UNDOTTED, a); up[i]!.push(x); low[j]!.push(x) })
-  l.square.forEach(([i, j], a) => { const x = `\\dot${letter(UNDOTTED, a)}`; low[i]!.push(x); up[j]!.push(x) })
+  l.angle.forEach(([i, j], a) => {
+    const x = letter(UNDOTTED, a)
+    up[i]!.push(x)
+    low[j]!.push(x)
+  })
+  l.square.forEach(([i, j], a) => {
+    const x = `\\dot${letter(UNDOTTED, a)}`
+    low[i]!.push(x)
+    up[j]!.push(x)
+  })
   const { gUp, gLow, epsText } = gaugeIndexLetters(legs.length, gauge)
   const factors = legs.map((p, i) => {
     const k = l.derivs[i]!
@@ -74,9 +86,17 @@ export function gaugeIndexLetters(nLegs: number, gauge: SuStructure[]): { gUp: s
     const letters = GROUP_LETTERS[gi % GROUP_LETTERS.length]!
     let next = 0
     const slotLetter = new Map<number, string>()
-    for (const [u, lo] of s.deltas) { const x = letter(letters, next++); slotLetter.set(u, x); slotLetter.set(lo, x) }
+    for (const [u, lo] of s.deltas) {
+      const x = letter(letters, next++)
+      slotLetter.set(u, x)
+      slotLetter.set(lo, x)
+    }
     for (const block of s.eps) {
-      const xs = block.map((slot) => { const x = letter(letters, next++); slotLetter.set(slot, x); return x })
+      const xs = block.map((slot) => {
+        const x = letter(letters, next++)
+        slotLetter.set(slot, x)
+        return x
+      })
       const upperBlock = s.slots[block[0]!]!.upper
       epsText.push(`\\epsilon${upperBlock ? '_' : '^'}{${xs.join('')}}`)
     }

@@ -40,11 +40,20 @@ export function bracketGraphs(degrees: number[]): [number, number][][] {
   if (total % 2 !== 0) return out
   const rec = (i: number): void => {
     while (i < rem.length && rem[i] === 0) i++
-    if (i >= rem.length) { out.push(edges.slice()); return }
+    if (i >= rem.length) {
+      out.push(edges.slice())
+      return
+    }
     distribute(i, i + 1, rem[i]!, () => rec(i + 1))
   }
   const distribute = (i: number, j: number, left: number, done: () => void): void => {
-    if (left === 0) { const save = rem[i]!; rem[i] = 0; done(); rem[i] = save; return }
+    if (left === 0) {
+      const save = rem[i]!
+      rem[i] = 0
+      done()
+      rem[i] = save
+      return
+    }
     if (j >= rem.length) return
     const max = Math.min(left, rem[j]!)
     for (let m = max; m >= 0; m--) {

@@ -30,12 +30,12 @@ export interface OrderZeroTerm {
 }
 
 // Fields as the engine's LaTeX writes them (latex.ts): the species' TeX, {X^{\dagger}} conjugated.
-const tex = (model: TheoryModel, name: string) => model.species.find(s => s.field === name)?.tex ?? name
+const tex = (model: TheoryModel, name: string) => model.species.find((s) => s.field === name)?.tex ?? name
 const dagger = (model: TheoryModel, name: string) => `{${tex(model, name)}^{\\dagger}}`
 
 function keyFor(model: TheoryModel, labels: string[], derivatives: number): string {
   const counts = model.species.map(() => 0)
-  for (const l of labels) counts[model.species.findIndex(s => s.label === l)]! += 1
+  for (const l of labels) counts[model.species.findIndex((s) => s.label === l)]! += 1
   return classKeyOfCounts(model, counts, derivatives)
 }
 const conjLabel = (l: string) => (l.endsWith('*') ? l.slice(0, -1) : `${l}*`)
@@ -48,9 +48,10 @@ function kineticTerm(model: TheoryModel, f: TheoryField): OrderZeroTerm {
     return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex: `\\tfrac12 (D_\\mu ${tex(model, f.name)})(D^\\mu ${tex(model, f.name)})` }
   }
   const key = keyFor(model, [f.name, `${f.name}*`], f.lorentz === 'scalar' ? 2 : 1)
-  const latex = f.lorentz === 'scalar'
-    ? `(D_\\mu ${tex(model, f.name)})^\\dagger (D^\\mu ${tex(model, f.name)})`
-    : `i\\,${dagger(model, f.name)}\\,${f.lorentz === 'left-weyl' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(model, f.name)}`
+  const latex =
+    f.lorentz === 'scalar'
+      ? `(D_\\mu ${tex(model, f.name)})^\\dagger (D^\\mu ${tex(model, f.name)})`
+      : `i\\,${dagger(model, f.name)}\\,${f.lorentz === 'left-weyl' ? '\\bar\\sigma' : '\\sigma'}^\\mu D_\\mu ${tex(model, f.name)}`
   return { ...base, key, conjugateKey: key, text: `kinetic ${f.name}`, latex }
 }
 
@@ -62,9 +63,18 @@ function gaugeTerms(model: TheoryModel, f: TheoryField, group: TheoryGroup | und
   const base = { key, conjugateKey, dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
   const abelian = group?.type !== 'SU'
   return [
-    { ...base, role: 'gauge kinetic', text: `kinetic ${f.name}`, latex: `-\\tfrac{1}{4g^2} ${tex(model, f.name)}${a}_{\\mu\\nu} ${tex(model, f.name)}^{${a.slice(1)}\\mu\\nu}`, note: 'the coefficient 1/g² is the gauge coupling (fields normalised with g in the field strength)' },
     {
-      ...base, role: 'theta', text: `theta ${f.name}`, latex: `\\tfrac{\\theta}{32\\pi^2} ${tex(model, f.name)}${a}_{\\mu\\nu} \\tilde{${tex(model, f.name)}}^{${a.slice(1)}\\mu\\nu}`,
+      ...base,
+      role: 'gauge kinetic',
+      text: `kinetic ${f.name}`,
+      latex: `-\\tfrac{1}{4g^2} ${tex(model, f.name)}${a}_{\\mu\\nu} ${tex(model, f.name)}^{${a.slice(1)}\\mu\\nu}`,
+      note: 'the coefficient 1/g² is the gauge coupling (fields normalised with g in the field strength)',
+    },
+    {
+      ...base,
+      role: 'theta',
+      text: `theta ${f.name}`,
+      latex: `\\tfrac{\\theta}{32\\pi^2} ${tex(model, f.name)}${a}_{\\mu\\nu} \\tilde{${tex(model, f.name)}}^{${a.slice(1)}\\mu\\nu}`,
       note: abelian
         ? 'a total derivative kept as a topological term; for an abelian group it has no effect in perturbation theory'
         : 'a total derivative kept as a topological term (instantons); it can be rotated into the fermion mass phases by an anomalous chiral rotation',
@@ -78,18 +88,40 @@ function gaugeTerms(model: TheoryModel, f: TheoryField, group: TheoryGroup | und
  * own (Holdom, Phys. Lett. B 166 (1986) 196).
  */
 function abelianMixing(model: TheoryModel, strengths: TheoryField[], groups: Map<string, TheoryGroup>): OrderZeroTerm[] {
-  const abelian = strengths.filter(f => groups.get(f.gaugeOf ?? '')?.type === 'U1')
-  return abelian.flatMap((x, i) => abelian.slice(i + 1).flatMap((y): OrderZeroTerm[] => {
-    const key = keyFor(model, [`${x.name}_L`, `${y.name}_L`], 0)
-    const base = { key, conjugateKey: keyFor(model, [`${x.name}_R`, `${y.name}_R`], 0), dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
-    return [
-      { ...base, role: 'gauge kinetic', text: `mixing ${x.name} ${y.name}`, latex: `${tex(model, x.name)}_{\\mu\\nu} ${tex(model, y.name)}^{\\mu\\nu}`, note: 'kinetic mixing of two abelian gauge fields' },
-      { ...base, role: 'theta', text: `theta mixing ${x.name} ${y.name}`, latex: `${tex(model, x.name)}_{\\mu\\nu} \\tilde{${tex(model, y.name)}}^{\\mu\\nu}`, note: 'a total derivative kept as a topological term; no effect in perturbation theory' },
-    ]
-  }))
+  const abelian = strengths.filter((f) => groups.get(f.gaugeOf ?? '')?.type === 'U1')
+  return abelian.flatMap((x, i) =>
+    abelian.slice(i + 1).flatMap((y): OrderZeroTerm[] => {
+      const key = keyFor(model, [`${x.name}_L`, `${y.name}_L`], 0)
+      const base = { key, conjugateKey: keyFor(model, [`${x.name}_R`, `${y.name}_R`], 0), dimension: 4, hermitian: true, realParameters: 1, flavorParameters: 1 }
+      return [
+        {
+          ...base,
+          role: 'gauge kinetic',
+          text: `mixing ${x.name} ${y.name}`,
+          latex: `${tex(model, x.name)}_{\\mu\\nu} ${tex(model, y.name)}^{\\mu\\nu}`,
+          note: 'kinetic mixing of two abelian gauge fields',
+        },
+        {
+          ...base,
+          role: 'theta',
+          text: `theta mixing ${x.name} ${y.name}`,
+          latex: `${tex(model, x.name)}_{\\mu\\nu} \\tilde{${tex(model, y.name)}}^{\\mu\\nu}`,
+          note: 'a total derivative kept as a topological term; no effect in perturbation theory',
+        },
+      ]
+    }),
+  )
 }
 
-interface Form { field: TheoryField, label: string, key: string, conjugateKey: string, reality: string, n: number, fermion: boolean }
+interface Form {
+  field: TheoryField
+  label: string
+  key: string
+  conjugateKey: string
+  reality: string
+  n: number
+  fermion: boolean
+}
 
 /** Each matter field as it enters a mass term: scalars as written, fermions as left-handed Weyl fields. */
 function massForm(f: TheoryField, groups: readonly TheoryGroup[]): Form {
@@ -103,7 +135,11 @@ function massTerm(model: TheoryModel, a: Form, b: Form, bConjugated: boolean): O
   const same = a.field === b.field
   const labels = [a.label, bConjugated ? conjLabel(b.label) : b.label]
   const key = keyFor(model, labels, 0)
-  const conjugateKey = keyFor(model, labels.map(l => (model.species.find(s => s.label === conjLabel(l)) ? conjLabel(l) : l)), 0)
+  const conjugateKey = keyFor(
+    model,
+    labels.map((l) => (model.species.find((s) => s.label === conjLabel(l)) ? conjLabel(l) : l)),
+    0,
+  )
   const hermitian = key === conjugateKey
   const dimension = a.fermion ? 3 : 2
   let realParameters = hermitian ? 1 : 2
@@ -126,7 +162,7 @@ function massTerm(model: TheoryModel, a: Form, b: Form, bConjugated: boolean): O
 
 /** Every mass term allowed by the theory's symmetries (pairs in theory order). */
 function massTerms(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
-  const forms = theory.fields.filter(f => f.lorentz !== 'field-strength').map(f => massForm(f, theory.groups))
+  const forms = theory.fields.filter((f) => f.lorentz !== 'field-strength').map((f) => massForm(f, theory.groups))
   const out: OrderZeroTerm[] = []
   const seen = new Set<string>()
   const push = (t: OrderZeroTerm | null) => {
@@ -147,11 +183,15 @@ function massTerms(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
 
 /** Kinetic, gauge kinetic, θ and mass terms of a relativistic theory. */
 export function orderZeroBilinears(model: TheoryModel, theory: Theory): OrderZeroTerm[] {
-  const groups = new Map(theory.groups.map(g => [g.name, g]))
+  const groups = new Map(theory.groups.map((g) => [g.name, g]))
   return [
-    ...theory.fields.filter(f => f.lorentz !== 'field-strength').map(f => kineticTerm(model, f)),
-    ...theory.fields.filter(f => f.lorentz === 'field-strength').flatMap(f => gaugeTerms(model, f, groups.get(f.gaugeOf ?? ''))),
-    ...abelianMixing(model, theory.fields.filter(f => f.lorentz === 'field-strength'), groups),
+    ...theory.fields.filter((f) => f.lorentz !== 'field-strength').map((f) => kineticTerm(model, f)),
+    ...theory.fields.filter((f) => f.lorentz === 'field-strength').flatMap((f) => gaugeTerms(model, f, groups.get(f.gaugeOf ?? ''))),
+    ...abelianMixing(
+      model,
+      theory.fields.filter((f) => f.lorentz === 'field-strength'),
+      groups,
+    ),
     ...massTerms(model, theory),
   ]
 }

@@ -24,7 +24,10 @@ export interface ResolvedCoupling {
 function classSignature(key: string): string {
   try {
     const { derivatives, blocks } = readClassKey(key)
-    return `${derivatives}|${blocks.map((b) => `${b.label}^${b.power}`).sort().join(' ')}`
+    return `${derivatives}|${blocks
+      .map((b) => `${b.label}^${b.power}`)
+      .sort()
+      .join(' ')}`
   } catch {
     return normalizeSpaces(key)
   }

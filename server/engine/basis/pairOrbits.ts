@@ -61,7 +61,9 @@ function lorentzImage(l: LorentzStructure, tau: number[]): Image<LorentzStructur
   const angle = moveBrackets(l.angle, tau, acc)
   const square = moveBrackets(l.square, tau, acc)
   const derivs = l.derivs.slice()
-  l.derivs.forEach((d, i) => { derivs[tau[i]!] = d })
+  l.derivs.forEach((d, i) => {
+    derivs[tau[i]!] = d
+  })
   return { key: `${angle.join(';')}[${square.join(';')}]`, sign: acc.sign, value: { derivs, angle, square } }
 }
 
@@ -88,11 +90,13 @@ function gaugeImage(g: SuStructure[], moves: number[][]): Image<SuStructure[]> {
   const value = g.map((s, gi) => {
     const move = moves[gi]!
     const deltas = s.deltas.map(([u, l]): [number, number] => [move[u]!, move[l]!]).sort((x, y) => x[0] - y[0] || x[1] - y[1])
-    const eps = s.eps.map((block) => {
-      const moved = block.map((x) => move[x]!)
-      sign *= sortSign(moved)
-      return moved.sort((x, y) => x - y)
-    }).sort((x, y) => x[0]! - y[0]!)
+    const eps = s.eps
+      .map((block) => {
+        const moved = block.map((x) => move[x]!)
+        sign *= sortSign(moved)
+        return moved.sort((x, y) => x - y)
+      })
+      .sort((x, y) => x[0]! - y[0]!)
     return { ...s, deltas, eps }
   })
   return { key: value.map((s) => `${s.group}:${s.deltas.join(';')}|${s.eps.join(';')}`).join('/'), sign, value }
@@ -101,7 +105,11 @@ function gaugeImage(g: SuStructure[], moves: number[][]): Image<SuStructure[]> {
 /** Index of each distinct image (by key), adding new ones to `list`. */
 function intern<T>(index: Map<string, number>, list: T[], img: Image<T>): number {
   let i = index.get(img.key)
-  if (i === undefined) { i = list.length; index.set(img.key, i); list.push(img.value) }
+  if (i === undefined) {
+    i = list.length
+    index.set(img.key, i)
+    list.push(img.value)
+  }
   return i
 }
 
@@ -115,16 +123,17 @@ export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): Symm
   // Conjugated structures carry their own slot arrays: share the maps by layout.
   const byLayout = new Map<string, number[][]>()
   const moveCache = new Map<SuStructure['slots'], number[][]>()
-  const movesOf = (g: SuStructure[], t: number): number[][] => g.map((s) => {
-    let m = moveCache.get(s.slots)
-    if (!m) {
-      const layout = s.slots.map((sl) => `${sl.leg}${sl.upper ? 'u' : 'l'}${sl.box ?? ''}`).join(',')
-      m = byLayout.get(layout) ?? perms.map((p) => slotMap(s.slots, p.map))
-      byLayout.set(layout, m)
-      moveCache.set(s.slots, m)
-    }
-    return m[t]!
-  })
+  const movesOf = (g: SuStructure[], t: number): number[][] =>
+    g.map((s) => {
+      let m = moveCache.get(s.slots)
+      if (!m) {
+        const layout = s.slots.map((sl) => `${sl.leg}${sl.upper ? 'u' : 'l'}${sl.box ?? ''}`).join(',')
+        m = byLayout.get(layout) ?? perms.map((p) => slotMap(s.slots, p.map))
+        byLayout.set(layout, m)
+        moveCache.set(s.slots, m)
+      }
+      return m[t]!
+    })
   const plan: SymmetrisationPlan = { links: [], lorentz: [], gauge: [], terms: new Map() }
   const lIndex = new Map<string, number>()
   const gIndex = new Map<string, number>()
@@ -137,7 +146,10 @@ export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): Symm
     const self = lorentzImage(p.lorentz, perms[identity]!.map)
     const selfG = gaugeImage(p.gauge, movesOf(p.gauge, identity))
     const seen = orbit.get(`${self.key}#${selfG.key}`)
-    if (seen) { plan.links.push({ rep: seen.rep, sign: self.sign * selfG.sign * seen.sign }); continue }
+    if (seen) {
+      plan.links.push({ rep: seen.rep, sign: self.sign * selfG.sign * seen.sign })
+      continue
+    }
     work += perms.length
     if (work > MAX_KEY_WORK) return null
     plan.links.push({ rep: k, sign: 1 })
@@ -151,7 +163,10 @@ export function symmetrisationPlan(pairs: Pair[], perms: LegPermutation[]): Symm
       term.coeff += perms[t]!.sign * img.sign
       acc.set(`${l},${g}`, term)
     })
-    plan.terms.set(k, [...acc.values()].filter((x) => x.coeff !== 0))
+    plan.terms.set(
+      k,
+      [...acc.values()].filter((x) => x.coeff !== 0),
+    )
   }
   return plan
 }

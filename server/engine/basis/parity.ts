@@ -55,7 +55,11 @@ export interface ClassParity {
 }
 
 /** A term of a kept column: lorentz × gauge with a coefficient per prime. */
-export interface ParityTerm { coeff: number[]; lorentz: LorentzStructure; gauge: SuStructure[] }
+export interface ParityTerm {
+  coeff: number[]
+  lorentz: LorentzStructure
+  gauge: SuStructure[]
+}
 
 /**
  * Parity image of one bracket monomial: the mapped structure (pairs ordered i < j) and
@@ -72,7 +76,9 @@ export function parityLorentz(l: LorentzStructure, pi: number[]): { lorentz: Lor
     return a < b ? [a, b] : [b, a]
   }
   const derivs = l.derivs.slice()
-  l.derivs.forEach((d, i) => { derivs[pi[i]!] = d })
+  l.derivs.forEach((d, i) => {
+    derivs[pi[i]!] = d
+  })
   return { lorentz: { derivs, angle: l.square.map(map), square: l.angle.map(map) }, sign }
 }
 
@@ -131,19 +137,33 @@ export function classParity(particles: Species[], b: ParityInput): ClassParity {
     return { imageKey: image.key, kind: 'pair', operators: none, pEven: first ? real : 0, pOdd: first ? 0 : real, credit: first ? 'even' : 'odd' }
   }
   const pi = parityLegMap(particles, b.cls)
-  const mats = b.primes.map((pd, pIdx) => b.kept.map((col, i) => {
-    if (col.parityEigen) return b.kept.map((_, j) => (j !== i ? 0 : col.parityEigen === 1 ? 1 : pd.F.neg(1)))
-    const vals = imageValues(pd.F, pIdx, col.terms, pi, pd.points, b.perms)
-    try { return solve(pd.F, pd.keptRows, vals) } catch {
-      throw new EngineConsistencyError('classParity', `class ${b.cls.key}: the parity image of a kept operator is not in the span of the class`)
-    }
-  }))
+  const mats = b.primes.map((pd, pIdx) =>
+    b.kept.map((col, i) => {
+      if (col.parityEigen) return b.kept.map((_, j) => (j !== i ? 0 : col.parityEigen === 1 ? 1 : pd.F.neg(1)))
+      const vals = imageValues(pd.F, pIdx, col.terms, pi, pd.points, b.perms)
+      try {
+        return solve(pd.F, pd.keptRows, vals)
+      } catch {
+        throw new EngineConsistencyError('classParity', `class ${b.cls.key}: the parity image of a kept operator is not in the span of the class`)
+      }
+    }),
+  )
   const fields = b.primes.map((pd) => pd.F)
   const ctx = { fn: 'classParity', about: `class ${b.cls.key}` }
-  const trace = agreedValue(fields, mats.map((cols, k) => involutionTrace(fields[k]!, cols, b.cls.key)), ctx, 'parity trace')
+  const trace = agreedValue(
+    fields,
+    mats.map((cols, k) => involutionTrace(fields[k]!, cols, b.cls.key)),
+    ctx,
+    'parity trace',
+  )
   const f = b.selfConjugate ? 1 : 2
   const labels = mats.map((cols, k) => cols.map((col, i) => operatorParity(fields[k]!, col, i)))
-  agreedValue(fields, labels.map((l) => l.join()), ctx, 'parity of each kept operator')
+  agreedValue(
+    fields,
+    labels.map((l) => l.join()),
+    ctx,
+    'parity of each kept operator',
+  )
   const operators = labels[0]!
   return { imageKey: image.key, kind: 'self', operators, pEven: (f * (n + trace)) / 2, pOdd: (f * (n - trace)) / 2 }
 }

@@ -30,7 +30,11 @@ export function parityColumns(cols: Column[], pi: number[], oneGauge: boolean): 
     if (!shared.has(k)) shared.set(k, x)
     return shared.get(k) as T
   }
-  for (const c of cols) for (const t of c.terms) { share(t.lorentz); share(t.gauge) }
+  for (const c of cols)
+    for (const t of c.terms) {
+      share(t.lorentz)
+      share(t.gauge)
+    }
   const images = new Map<object, { lorentz: Column['terms'][number]['lorentz']; sign: number }>()
   const gaugeImages = new Map<object, Column['terms'][number]['gauge']>()
   const image = (t: Column['terms'][number]): Column['terms'][number] => {

@@ -40,13 +40,18 @@ export function parityPartners(particles: Species[]): Map<string, string> {
   const matched = new Set<string>()
   for (const p of particles) {
     if (!p.fermion || p.conj || matched.has(p.field)) continue
-    const q = particles.find((x) => x.fermion && x.field !== p.field && !matched.has(x.field) && x.helicity2 === -p.helicity2
-      && x.flavors === p.flavors && sameCharges(p, x))
+    const q = particles.find((x) => x.fermion && x.field !== p.field && !matched.has(x.field) && x.helicity2 === -p.helicity2 && x.flavors === p.flavors && sameCharges(p, x))
     if (!q) continue
     matched.add(p.field).add(q.field)
     const pc = byLabel.get(p.conjugate)!
     const qc = byLabel.get(q.conjugate)!
-    for (const [a, b] of [[p, q], [pc, qc]] as const) { map.set(a.label, b.label); map.set(b.label, a.label) }
+    for (const [a, b] of [
+      [p, q],
+      [pc, qc],
+    ] as const) {
+      map.set(a.label, b.label)
+      map.set(b.label, a.label)
+    }
   }
   return map
 }
@@ -88,7 +93,8 @@ export function parityLegMap(particles: Species[], c: OperatorClass): number[] {
     const start = q === undefined ? -1 : firstOf(q)
     const count = q === undefined ? 0 : c.legs.filter((x) => x.label === q).length
     const offset = i - firstOf(p.label)
-    if (start < 0 || offset >= count) throw new EngineInputError('parityLegMap', `Parity does not map the class ${c.key} to itself (${p.label} has no partner), so "(X) ± P" cannot be formed in it; write X alone`)
+    if (start < 0 || offset >= count)
+      throw new EngineInputError('parityLegMap', `Parity does not map the class ${c.key} to itself (${p.label} has no partner), so "(X) ± P" cannot be formed in it; write X alone`)
     return start + offset
   })
 }

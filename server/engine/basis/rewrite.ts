@@ -31,7 +31,12 @@ function targetValues(b: ClassBasis, pi: number, target: string | AmplitudeTarge
   const { F, points } = b.primes[pi]!
   if (typeof target === 'string') {
     const terms = parseOperatorText(b.class, target, b.gaugeStructures.length)
-    return combinationValues(F, terms.map((t) => ({ lorentz: t.lorentz, gauge: b.gaugeStructures[t.gaugeIndex]!, coeff: F.fromRational(t.coeff) })), points, b.perms)
+    return combinationValues(
+      F,
+      terms.map((t) => ({ lorentz: t.lorentz, gauge: b.gaugeStructures[t.gaugeIndex]!, coeff: F.fromRational(t.coeff) })),
+      points,
+      b.perms,
+    )
   }
   return points.map((pt) => {
     let total = 0
@@ -55,21 +60,32 @@ export function rewriteOperator(b: ClassBasis, target: string | AmplitudeTarget)
     throw new EngineConsistencyError('rewriteOperator', `class ${b.key} has rank 0 but the target does not vanish`)
   }
   const systems = b.primes.map((pd, pi) => ({ a: pd.keptRows, b: values[pi]! }))
-  const out = solveOverQ(b.primes.map((pd) => pd.F), systems, { fn: 'rewriteOperator', about: `class ${b.key}` })
+  const out = solveOverQ(
+    b.primes.map((pd) => pd.F),
+    systems,
+    { fn: 'rewriteOperator', about: `class ${b.key}` },
+  )
   if (out.status === 'outside-span') throw new EngineInputError('rewriteOperator', `The operator "${labelOf(target)}" is not a combination of the operators of the class ${b.key}`)
   if (out.status === 'not-liftable') {
     const { each, product } = liftReach(b.primes.map((pd) => pd.F.p))
-    throw new EngineInputError('rewriteOperator', `In the class ${b.key}, a coefficient of the rewrite is not a fraction with numerator and denominator up to ${each} (product up to ${product}); an operator with a factor i, or with very large coefficients, cannot be rewritten exactly`)
+    throw new EngineInputError(
+      'rewriteOperator',
+      `In the class ${b.key}, a coefficient of the rewrite is not a fraction with numerator and denominator up to ${each} (product up to ${product}); an operator with a factor i, or with very large coefficients, cannot be rewritten exactly`,
+    )
   }
   const coeffs = out.coefficients
   return {
     coefficients: coeffs.map((c, i) => ({ operator: b.kept[i]!.text, coefficient: c })),
     vanishes: coeffs.every(isZero),
-    text: coeffs.map((c, i) => (isZero(c) ? '' : `${ratString(c)}·(${b.kept[i]!.text})`)).filter(Boolean).join(' + ') || '0',
+    text:
+      coeffs
+        .map((c, i) => (isZero(c) ? '' : `${ratString(c)}·(${b.kept[i]!.text})`))
+        .filter(Boolean)
+        .join(' + ') || '0',
     note: b.note,
   }
 }
 
 function labelOf(t: string | AmplitudeTarget): string {
-  return typeof t === 'string' ? t : t.label ?? 'custom amplitude'
+  return typeof t === 'string' ? t : (t.label ?? 'custom amplitude')
 }

@@ -24,13 +24,19 @@ export function basisSpecies(t: Theory): Species[] {
   const other = [...model.lie, ...model.finite][0]
   if (other) {
     const g = t.groups.find((x) => x.name === other.name)!
-    throw new EngineInputError('basisSpecies', `group ${g.name} = ${groupKindLabel(g.type, g.n)}: explicit bases are written for SU(n), U(1) and Z_n groups; this group is counted (Hilbert series) but not written out`)
+    throw new EngineInputError(
+      'basisSpecies',
+      `group ${g.name} = ${groupKindLabel(g.type, g.n)}: explicit bases are written for SU(n), U(1) and Z_n groups; this group is counted (Hilbert series) but not written out`,
+    )
   }
   for (const s of model.species) {
     for (const g of model.su) {
       if (s.suKind[g.name] === 'singlet' || s.kind !== 'scalar' || s.partner !== model.species.indexOf(s)) continue
       if (isSelfConjugateShape(speciesShape(s, g.name, g.n))) continue
-      throw new EngineInputError('basisSpecies', `field ${s.field}: a real field in ${g.name} = SU(${g.n}) [${s.reps[g.name]!.join(',')}] is not written as a tensor with equal upper and lower index shapes (a product of pseudoreal representations, e.g. a real bidoublet); it is counted but its explicit basis is not written out — declare it complex to write one`)
+      throw new EngineInputError(
+        'basisSpecies',
+        `field ${s.field}: a real field in ${g.name} = SU(${g.n}) [${s.reps[g.name]!.join(',')}] is not written as a tensor with equal upper and lower index shapes (a product of pseudoreal representations, e.g. a real bidoublet); it is counted but its explicit basis is not written out — declare it complex to write one`,
+      )
     }
   }
   return model.species

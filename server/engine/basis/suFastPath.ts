@@ -19,7 +19,9 @@ export function suChains(s: SuStructure): Step[] {
   if (hit) return hit
   const lowerOfUpper = new Map<number, number>(s.deltas.map(([u, l]) => [u, l]))
   const upperSlotOfLeg = new Map<number, number>()
-  s.slots.forEach((sl, i) => { if (sl.upper) upperSlotOfLeg.set(sl.leg, i) })
+  s.slots.forEach((sl, i) => {
+    if (sl.upper) upperSlotOfLeg.set(sl.leg, i)
+  })
   const isAdj = (leg: number): boolean => s.slots.filter((x) => x.leg === leg).length === 2
   const seen = new Set<number>()
   const steps: Step[] = []
@@ -36,7 +38,10 @@ export function suChains(s: SuStructure): Step[] {
     }
   }
   s.slots.forEach((sl, i) => {
-    if (sl.upper && !isAdj(sl.leg)) { const r = follow(i); steps.push({ kind: 'chain', start: sl.leg, mids: r.mids, end: r.end }) }
+    if (sl.upper && !isAdj(sl.leg)) {
+      const r = follow(i)
+      steps.push({ kind: 'chain', start: sl.leg, mids: r.mids, end: r.end })
+    }
   })
   s.slots.forEach((sl, i) => {
     if (sl.upper && isAdj(sl.leg) && !seen.has(sl.leg)) {

@@ -46,7 +46,9 @@ export function identicalLegPermutations(legs: Species[]): LegPermutation[] {
     for (const base of out) {
       for (const p of perms(b)) {
         const map = base.map.slice()
-        b.forEach((leg, i) => { map[leg] = p[i]! })
+        b.forEach((leg, i) => {
+          map[leg] = p[i]!
+        })
         next.push({ map, sign: fermion ? base.sign * parity(p.map((x) => x - b[0]!)) : base.sign })
       }
     }

@@ -74,7 +74,10 @@ function eliminate(F: PrimeField, n: number, factors: Factor[], v: number): Fact
   const strides = factors.map((f) => {
     const s = new Array<number>(all.length).fill(0)
     let m = 1
-    for (const x of f.vars) { s[pos.get(x)!] = m; m *= n }
+    for (const x of f.vars) {
+      s[pos.get(x)!] = m
+      m *= n
+    }
     return s
   })
   const out = new Array<number>(n ** vars.length).fill(0)
@@ -82,7 +85,10 @@ function eliminate(F: PrimeField, n: number, factors: Factor[], v: number): Fact
   const total = n ** all.length
   for (let t = 0; t < total; t++) {
     let x = t
-    for (let k = 0; k < all.length; k++) { idx[k] = x % n; x = Math.floor(x / n) }
+    for (let k = 0; k < all.length; k++) {
+      idx[k] = x % n
+      x = Math.floor(x / n)
+    }
     let prod = 1
     for (let f = 0; f < factors.length && prod !== 0; f++) {
       let off = 0
@@ -119,10 +125,23 @@ export function evaluateSuTensor(F: PrimeField, s: SuStructure, waves: SuWave[])
 function evaluateNetwork(F: PrimeField, s: SuStructure, waves: SuWave[]): number {
   const n = s.n
   const slotVar = new Array<number>(s.slots.length).fill(-1)
-  s.deltas.forEach(([u, l], k) => { slotVar[u] = k; slotVar[l] = k })
+  s.deltas.forEach(([u, l], k) => {
+    slotVar[u] = k
+    slotVar[l] = k
+  })
   let next = s.deltas.length
-  s.eps.forEach((block) => block.forEach((slot) => { slotVar[slot] = next++ }))
-  let factors: Factor[] = s.eps.map((block) => epsilonFactor(F, n, block.map((slot) => slotVar[slot]!)))
+  s.eps.forEach((block) =>
+    block.forEach((slot) => {
+      slotVar[slot] = next++
+    }),
+  )
+  let factors: Factor[] = s.eps.map((block) =>
+    epsilonFactor(
+      F,
+      n,
+      block.map((slot) => slotVar[slot]!),
+    ),
+  )
   const legs = [...new Set(s.slots.map((sl) => sl.leg))]
   for (const leg of legs) {
     const t = asTensor(waves[leg] ?? null, n)
@@ -138,7 +157,10 @@ function evaluateNetwork(F: PrimeField, s: SuStructure, waves: SuWave[]): number
       const touching = factors.filter((f) => f.vars.includes(x))
       if (touching.length === 0) continue
       const size = new Set(touching.flatMap((f) => f.vars)).size
-      if (size < bestSize) { best = x; bestSize = size }
+      if (size < bestSize) {
+        best = x
+        bestSize = size
+      }
     }
     if (best < 0) break
     const touching = factors.filter((f) => f.vars.includes(best))

@@ -49,9 +49,15 @@ export function loopPlan(s: SuStructure): LoopPlan {
   if (cached) return cached
   const n = s.n
   const stride = slotStrides(s)
-  const loops: Choice[][] = s.deltas.map(([u, l]) => Array.from({ length: n }, (_, i) => ({
-    sign: 1, steps: [[s.slots[u]!.leg, i * stride[u]!], [s.slots[l]!.leg, i * stride[l]!]] as [number, number][],
-  })))
+  const loops: Choice[][] = s.deltas.map(([u, l]) =>
+    Array.from({ length: n }, (_, i) => ({
+      sign: 1,
+      steps: [
+        [s.slots[u]!.leg, i * stride[u]!],
+        [s.slots[l]!.leg, i * stride[l]!],
+      ] as [number, number][],
+    })),
+  )
   const perms = s.eps.length ? signedPermutations(n) : []
   for (const block of s.eps) {
     loops.push(perms.map(({ perm, sign }) => ({ sign, steps: block.map((slot, k) => [s.slots[slot]!.leg, perm[k]! * stride[slot]!] as [number, number]) })))

@@ -32,7 +32,10 @@ export function irrepShape(n: number, dynkin: readonly number[]): TensorShape {
   for (let c = 0; c <= lambda[0]!; c++) {
     const mu = lambda.map((x) => x - c)
     const upper = mu.filter((x) => x > 0)
-    const lower = mu.filter((x) => x < 0).map((x) => -x).reverse()
+    const lower = mu
+      .filter((x) => x < 0)
+      .map((x) => -x)
+      .reverse()
     const size = (p: number[]) => p.reduce((s, x) => s + x, 0)
     const cand = { cost: size(upper) + size(lower), skew: Math.abs(size(upper) - size(lower)), upper: size(upper), shape: { upper, lower } }
     if (!best || cand.cost < best.cost || (cand.cost === best.cost && (cand.skew < best.skew || (cand.skew === best.skew && cand.upper > best.upper)))) best = cand

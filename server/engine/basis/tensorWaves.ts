@@ -45,7 +45,13 @@ function youngComponent(F: PrimeField, shape: readonly number[], vectors: number
   for (let c = 0; c < (shape[0] ?? 0); c++) {
     const members = rows.map((_, b) => b).filter((b) => cols[b] === c)
     // det of the column: Σ_π sgn(π) Π_k vectors[row(π(k))][idx[k]]
-    v = F.mul(v, determinant(F, members.map((b) => members.map((b2) => vectors[rows[b2]!]![idx[b]!]!))))
+    v = F.mul(
+      v,
+      determinant(
+        F,
+        members.map((b) => members.map((b2) => vectors[rows[b2]!]![idx[b]!]!)),
+      ),
+    )
     if (v === 0) return 0
   }
   return v
@@ -58,7 +64,10 @@ function determinant(F: PrimeField, m: number[][]): number {
   for (let c = 0; c < n; c++) {
     const p = a.findIndex((row, r) => r >= c && row[c] !== 0)
     if (p < 0) return 0
-    if (p !== c) { [a[p], a[c]] = [a[c]!, a[p]!]; det = F.neg(det) }
+    if (p !== c) {
+      ;[a[p], a[c]] = [a[c]!, a[p]!]
+      det = F.neg(det)
+    }
     det = F.mul(det, a[c]![c]!)
     const inv = F.inv(a[c]![c]!)
     for (let r = c + 1; r < n; r++) {
@@ -90,7 +99,10 @@ export function randomTensorWave(F: PrimeField, n: number, shape: TensorShape, d
   const idx = new Array<number>(axes).fill(0)
   for (let off = 0; off < data.length; off++) {
     let x = off
-    for (let k = 0; k < axes; k++) { idx[k] = x % n; x = Math.floor(x / n) }
+    for (let k = 0; k < axes; k++) {
+      idx[k] = x % n
+      x = Math.floor(x / n)
+    }
     const u = a ? youngComponent(F, shape.upper, up, idx.slice(0, a)) : 1
     data[off] = u === 0 ? 0 : b ? F.mul(u, youngComponent(F, shape.lower, low, idx.slice(a))) : u
   }

@@ -16,7 +16,11 @@ import { parityLegMap } from './parityPartners'
 import { parityLorentz, paritySu } from './parity'
 import { mentionsCombination, readCombination } from './combinationText'
 
-export interface WrittenTerm { coeff: Rational, lorentz: LorentzStructure, gauge: SuStructure[] }
+export interface WrittenTerm {
+  coeff: Rational
+  lorentz: LorentzStructure
+  gauge: SuStructure[]
+}
 
 /**
  * The terms of a written operator of class `cls` (gauge: the class's gauge contractions).
@@ -30,19 +34,25 @@ export function writtenTerms(particles: Species[], cls: OperatorClass, text: str
   if (c?.kind === 'P') {
     const pi = parityLegMap(particles, cls)
     const inner = writtenTerms(particles, cls, c.inner, gauge)
-    return [...inner, ...inner.map((x) => {
-      const image = parityLorentz(x.lorentz, pi)
-      return { coeff: ratMul(x.coeff, rat(c.sign * image.sign)), lorentz: image.lorentz, gauge: x.gauge.map((s) => paritySu(s, pi)) }
-    })]
+    return [
+      ...inner,
+      ...inner.map((x) => {
+        const image = parityLorentz(x.lorentz, pi)
+        return { coeff: ratMul(x.coeff, rat(c.sign * image.sign)), lorentz: image.lorentz, gauge: x.gauge.map((s) => paritySu(s, pi)) }
+      }),
+    ]
   }
   if (c?.kind === 'h.c.') {
     const pi = conjugateLegMap(cls)
     const inner = writtenTerms(particles, cls, c.inner, gauge)
-    return [...inner, ...inner.map((x) => ({
-      coeff: c.sign === 1 ? x.coeff : ratMul(x.coeff, rat(-1)),
-      lorentz: conjugateLorentz(x.lorentz, pi),
-      gauge: x.gauge.map((s) => conjugateSu(s, pi)),
-    }))]
+    return [
+      ...inner,
+      ...inner.map((x) => ({
+        coeff: c.sign === 1 ? x.coeff : ratMul(x.coeff, rat(-1)),
+        lorentz: conjugateLorentz(x.lorentz, pi),
+        gauge: x.gauge.map((s) => conjugateSu(s, pi)),
+      })),
+    ]
   }
   if (mentionsCombination(t)) throw new EngineInputError('writtenTerms', `Cannot read "${t}": write a combination as "(X) + h.c." or "(X) - P", with X in the input syntax`)
   return parseOperatorText(cls, t, gauge.length).map((x) => ({ coeff: x.coeff, lorentz: x.lorentz, gauge: gauge[x.gaugeIndex]! }))

@@ -16,11 +16,12 @@ function groupElements(groups: number[][]): { map: Map<number, number>; sign: nu
   let out = [{ map: new Map<number, number>(), sign: 1 }]
   for (const g of groups) {
     const next: typeof out = []
-    for (const base of out) for (const p of perms(g)) {
-      const map = new Map(base.map)
-      g.forEach((leg, i) => map.set(leg, p[i]!))
-      next.push({ map, sign: base.sign * parity(p, g) })
-    }
+    for (const base of out)
+      for (const p of perms(g)) {
+        const map = new Map(base.map)
+        g.forEach((leg, i) => map.set(leg, p[i]!))
+        next.push({ map, sign: base.sign * parity(p, g) })
+      }
     out = next
   }
   return out
@@ -36,25 +37,32 @@ function groupElements(groups: number[][]): { map: Map<number, number>; sign: nu
 export function youngSymmetrizer(lambda: number[], legs: number[], n: number, fermion: boolean): LegPermutation[] {
   const rows: number[][] = []
   let at = 0
-  for (const len of lambda) { rows.push(legs.slice(at, at + len)); at += len }
+  for (const len of lambda) {
+    rows.push(legs.slice(at, at + len))
+    at += len
+  }
   const cols: number[][] = []
   for (let c = 0; c < (lambda[0] ?? 0); c++) cols.push(rows.filter((r) => r.length > c).map((r) => r[c]!))
   const acc = new Map<string, LegPermutation>()
-  for (const p of groupElements(rows)) for (const q of groupElements(cols)) {
-    const map = Array.from({ length: n }, (_, i) => i)
-    for (let i = 0; i < n; i++) map[i] = p.map.get(q.map.get(i) ?? i) ?? (q.map.get(i) ?? i)
-    const total = legs.length > 1 ? permSign(map, legs) : 1
-    const w = q.sign * (fermion ? total : 1)
-    const key = map.join(',')
-    const prev = acc.get(key)
-    if (prev) prev.sign += w
-    else acc.set(key, { map, sign: w })
-  }
+  for (const p of groupElements(rows))
+    for (const q of groupElements(cols)) {
+      const map = Array.from({ length: n }, (_, i) => i)
+      for (let i = 0; i < n; i++) map[i] = p.map.get(q.map.get(i) ?? i) ?? q.map.get(i) ?? i
+      const total = legs.length > 1 ? permSign(map, legs) : 1
+      const w = q.sign * (fermion ? total : 1)
+      const key = map.join(',')
+      const prev = acc.get(key)
+      if (prev) prev.sign += w
+      else acc.set(key, { map, sign: w })
+    }
   return [...acc.values()].filter((t) => t.sign !== 0)
 }
 
 function permSign(map: number[], legs: number[]): number {
-  return parity(legs.map((l) => map[l]!), legs)
+  return parity(
+    legs.map((l) => map[l]!),
+    legs,
+  )
 }
 
 /**
@@ -63,9 +71,10 @@ function permSign(map: number[], legs: number[]): number {
  */
 export function composeBlocks(a: LegPermutation[], b: LegPermutation[]): LegPermutation[] {
   const out: LegPermutation[] = []
-  for (const x of a) for (const y of b) {
-    out.push({ map: x.map.map((v, i) => (y.map[i] !== i ? y.map[i]! : v)), sign: x.sign * y.sign })
-  }
+  for (const x of a)
+    for (const y of b) {
+      out.push({ map: x.map.map((v, i) => (y.map[i] !== i ? y.map[i]! : v)), sign: x.sign * y.sign })
+    }
   return out
 }
 

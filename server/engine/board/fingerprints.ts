@@ -39,7 +39,10 @@ export function coverageRank(prints: Fingerprint[]): number {
   if (!prints.length) return 0
   checkAligned('coverageRank', prints)
   const set = new PrimeSet(prints[0]!.primes)
-  return set.rank(prints[0]!.values.map((row, i) => columns(prints, i, row.length)), { fn: 'coverageRank' })
+  return set.rank(
+    prints[0]!.values.map((row, i) => columns(prints, i, row.length)),
+    { fn: 'coverageRank' },
+  )
 }
 
 export interface Combination {
@@ -66,5 +69,8 @@ export function expressIn(basis: Fingerprint[], target: Fingerprint): Combinatio
 
 function tooLarge(set: PrimeSet, index: number): EngineInputError {
   const { each, product } = set.reach
-  return new EngineInputError('expressIn', `The coefficient of kept operator ${index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}), the most that the stored fingerprints determine; such a rewrite cannot be given exactly`)
+  return new EngineInputError(
+    'expressIn',
+    `The coefficient of kept operator ${index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}), the most that the stored fingerprints determine; such a rewrite cannot be given exactly`,
+  )
 }

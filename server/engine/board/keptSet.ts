@@ -8,17 +8,26 @@ import { coverageRank, expressIn, type Fingerprint } from './fingerprints'
 import { EngineInputError } from '../errors'
 import { toString as ratString, isZero } from '../exact/rational'
 
-export interface ClassOperator { id: number, column: 'kept' | 'set_aside', latex: string, text: string, fingerprint: Fingerprint | null }
+export interface ClassOperator {
+  id: number
+  column: 'kept' | 'set_aside'
+  latex: string
+  text: string
+  fingerprint: Fingerprint | null
+}
 
-export interface Coverage { classKey: string, rank: number, required: number, complete: boolean }
+export interface Coverage {
+  classKey: string
+  rank: number
+  required: number
+  complete: boolean
+}
 
 /** An exact rewrite, or the statement that the stored fingerprints cannot give one exactly. */
-export type Rewrite =
-  | { exact: true, vanishes: boolean, terms: { operatorId: number, latex: string, coefficient: string }[] }
-  | { exact: false, vanishes: false, terms: [], message: string }
+export type Rewrite = { exact: true; vanishes: boolean; terms: { operatorId: number; latex: string; coefficient: string }[] } | { exact: false; vanishes: false; terms: []; message: string }
 
-const NOT_EXACT = 'A combination of the kept operators whose coefficients are beyond what the stored fingerprints determine '
-  + '(a numerator or denominator too large): the rewrite cannot be given exactly.'
+const NOT_EXACT =
+  'A combination of the kept operators whose coefficients are beyond what the stored fingerprints determine ' + '(a numerator or denominator too large): the rewrite cannot be given exactly.'
 
 const hasPrint = (o: ClassOperator): o is ClassOperator & { fingerprint: Fingerprint } => o.fingerprint !== null
 
@@ -68,7 +77,10 @@ export function rewriteOnto(ops: ClassOperator[], targetId: number): Rewrite | n
   if (!target?.fingerprint || !kept.every(hasPrint)) return null
   let combination: ReturnType<typeof expressIn>
   try {
-    combination = expressIn(kept.map((o) => o.fingerprint!), target.fingerprint)
+    combination = expressIn(
+      kept.map((o) => o.fingerprint!),
+      target.fingerprint,
+    )
   } catch (error) {
     if (!(error instanceof EngineInputError)) throw error
     return { exact: false, vanishes: false, terms: [], message: NOT_EXACT }

@@ -17,7 +17,7 @@ export interface RuleTheory {
   frame?: string
   groups?: Theory['groups']
   fields?: Theory['fields']
-  heavy?: { particle: { name: string }, antiparticle?: { name: string } }
+  heavy?: { particle: { name: string }; antiparticle?: { name: string } }
   countingRules?: CountingRule[]
 }
 
@@ -44,7 +44,7 @@ function contextOf(theory: RuleTheory): RuleContext {
  * Exact order (as "p/q" text) of every operator under the named rule.
  * @example ruleOrders(smeft, 'mass ratio (E/M)', [{ id: 1, classKey: 'H^3 H*^3' }]) // { 1: '2' }
  */
-export function ruleOrders(theory: RuleTheory, ruleName: string, operators: { id: number, classKey: string, terms?: Record<string, number>[] }[]): Record<number, string> {
+export function ruleOrders(theory: RuleTheory, ruleName: string, operators: { id: number; classKey: string; terms?: Record<string, number>[] }[]): Record<number, string> {
   const rule = rulesOf(theory).find((r) => r.name === ruleName)
   if (!rule) throw new EngineInputError('ruleOrders', `The theory has no counting rule named "${ruleName}"; choose one of its rules`)
   const ctx = contextOf(theory)

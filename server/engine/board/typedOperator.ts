@@ -35,9 +35,18 @@ export function typedFingerprints(theory: Theory, classKey: string, texts: reado
     const terms = writtenTerms(particles, b.class, text, b.gaugeStructures)
     return {
       primes: b.primes.map((pd) => pd.F.p),
-      values: b.primes.map((pd) => combinationValues(pd.F, terms.map((t) => ({
-        lorentz: t.lorentz, gauge: t.gauge, coeff: pd.F.fromRational(t.coeff),
-      })), pd.points, b.perms)),
+      values: b.primes.map((pd) =>
+        combinationValues(
+          pd.F,
+          terms.map((t) => ({
+            lorentz: t.lorentz,
+            gauge: t.gauge,
+            coeff: pd.F.fromRational(t.coeff),
+          })),
+          pd.points,
+          b.perms,
+        ),
+      ),
     }
   })
 }

@@ -39,7 +39,9 @@ export function estimateCountWork(model: TheoryModel, contents: readonly FieldCo
     c.counts.forEach((n, s) => {
       if (n === 0) return
       visits *= partitionNumber(n)
-      speciesRepKeys(model, model.species[s]!).forEach((key, g) => { if (key !== null) acting.add(g) })
+      speciesRepKeys(model, model.species[s]!).forEach((key, g) => {
+        if (key !== null) acting.add(g)
+      })
     })
     terms += visits * (1 + acting.size)
   }
@@ -55,8 +57,8 @@ export function checkCountBudget(model: TheoryModel, contents: readonly FieldCon
   if (w.terms > budget) {
     throw new EngineInputError(
       'countOperators',
-      `theory "${model.name}" up to dimension ${maxDim} needs an estimated ${w.terms.toExponential(2)} cycle-index terms over ${w.contents} field contents, `
-      + `above the budget of ${budget.toExponential(1)}; lower the maximum dimension, or declare fewer fields or groups`,
+      `theory "${model.name}" up to dimension ${maxDim} needs an estimated ${w.terms.toExponential(2)} cycle-index terms over ${w.contents} field contents, ` +
+        `above the budget of ${budget.toExponential(1)}; lower the maximum dimension, or declare fewer fields or groups`,
     )
   }
   return w

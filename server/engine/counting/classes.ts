@@ -97,11 +97,7 @@ export function enumerateFieldContents(model: TheoryModel, minDim: number, maxDi
 function selectionCharges(model: TheoryModel): { moduli: number[]; perSpecies: number[][] } {
   const u1 = integerCharges(model)
   const moduli = [...model.u1.map(() => 0), ...model.zn.map((g) => g.n), ...model.su.map((g) => g.n)]
-  const perSpecies = model.species.map((sp, i) => [
-    ...u1.map((q) => q[i]!),
-    ...model.zn.map((g) => sp.zn[g.name]!),
-    ...model.su.map((g) => sp.reps[g.name]!.reduce((t, x, j) => t + x * (j + 1), 0)),
-  ])
+  const perSpecies = model.species.map((sp, i) => [...u1.map((q) => q[i]!), ...model.zn.map((g) => sp.zn[g.name]!), ...model.su.map((g) => sp.reps[g.name]!.reduce((t, x, j) => t + x * (j + 1), 0))])
   return { moduli, perSpecies }
 }
 
@@ -192,4 +188,3 @@ function lcm(a: bigint, b: bigint): bigint {
   while (y !== 0n) [x, y] = [y, x % y]
   return (a / x) * b
 }
-

@@ -37,12 +37,11 @@ export class CountContext {
   /** Scratch multisets of the Lorentz and non-abelian cycle data (empty between contents). */
   readonly lorentzCycles = new CycleMultiset(LORENTZ_CODES.length)
   readonly groupCycles: CycleMultiset[]
-  constructor(readonly model: TheoryModel, readonly maxDim: number) {
-    this.groups = [
-      ...model.su.map((g) => integrator(suScheme(g.n))),
-      ...model.lie.map((g) => integrator(lieScheme(g.rs))),
-      ...model.finite.map((g) => integrator(finiteScheme(g.table))),
-    ]
+  constructor(
+    readonly model: TheoryModel,
+    readonly maxDim: number,
+  ) {
+    this.groups = [...model.su.map((g) => integrator(suScheme(g.n))), ...model.lie.map((g) => integrator(lieScheme(g.rs))), ...model.finite.map((g) => integrator(finiteScheme(g.table)))]
     this.repList = this.groups.map(() => [])
     this.repIndex = model.species.map((sp) =>
       speciesRepKeys(model, sp).map((key, g) => {
@@ -168,7 +167,10 @@ function lorentzPart(ctx: CountContext, factors: CycleMultiset, K: number): numb
   const key = factors.key()
   let series = ctx.lorentz.get(key)
   if (!series || series.length <= K) {
-    series = lorentzSingletSeries(factors.list().map(([t, cycle]) => ({ type: LORENTZ_CODES[t]!, cycle })), K)
+    series = lorentzSingletSeries(
+      factors.list().map(([t, cycle]) => ({ type: LORENTZ_CODES[t]!, cycle })),
+      K,
+    )
     ctx.lorentz.set(key, series)
   }
   return series
@@ -176,10 +178,7 @@ function lorentzPart(ctx: CountContext, factors: CycleMultiset, K: number): numb
 
 function exactQuotient(total: bigint, den: bigint, content: FieldContent, j: number): bigint {
   if (total % den !== 0n || total < 0n) {
-    throw new EngineConsistencyError(
-      'countFieldContent',
-      `count ${total}/${den} is not a non-negative integer for content [${content.counts.join(',')}] with ${content.derivatives[j]} derivatives`,
-    )
+    throw new EngineConsistencyError('countFieldContent', `count ${total}/${den} is not a non-negative integer for content [${content.counts.join(',')}] with ${content.derivatives[j]} derivatives`)
   }
   return total / den
 }

@@ -105,8 +105,11 @@ export function countOperators(theory: Theory, options: CountOptions): CountResu
   const byDimension: DimensionCount[] = []
   for (let d = minDim; d <= maxDim; d++) {
     byDimension.push({
-      dimension: d, operators: 0, classes: {},
-      ...(options.flavorPolynomials ? { flavorPolynomials: {} } : {}), ...(cpCtx ? { cpEven: 0, cpOdd: 0, cp: {} } : {}),
+      dimension: d,
+      operators: 0,
+      classes: {},
+      ...(options.flavorPolynomials ? { flavorPolynomials: {} } : {}),
+      ...(cpCtx ? { cpEven: 0, cpOdd: 0, cp: {} } : {}),
     })
   }
   const total = contents.length
@@ -149,6 +152,7 @@ function recordCp(ctx: CpContext, entry: DimensionCount, content: FieldContent, 
 }
 
 function safeNumber(v: bigint, what: string): number {
-  if (v > BigInt(Number.MAX_SAFE_INTEGER)) throw new EngineInputError('countOperators', `The count for ${what} (${v}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
+  if (v > BigInt(Number.MAX_SAFE_INTEGER))
+    throw new EngineInputError('countOperators', `The count for ${what} (${v}) grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors`)
   return Number(v)
 }

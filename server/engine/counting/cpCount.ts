@@ -28,7 +28,8 @@ import { cpLorentzSeries, type TwistedLorentzFactor } from './cpLorentz'
 import { type TwistedGroup, type TwistedGroupEntry, conjugationIsInner, innerTwisted, suRealSupported, suTwisted } from './cpGroups'
 import { groupKindLabel } from '../../../shared/schemas/groupKinds'
 
-export const CP_CONVENTION = 'CP maps each field to its conjugate (parity on Lorentz indices, upper and lower SU(n) indices exchanged, real fields of other groups with intrinsic CP +1): a Hermitian operator is CP-even unless it carries ε^{μνρσ}; the n complex coefficients of a class with a distinct conjugate class give n CP-even and n CP-odd real parameters'
+export const CP_CONVENTION =
+  'CP maps each field to its conjugate (parity on Lorentz indices, upper and lower SU(n) indices exchanged, real fields of other groups with intrinsic CP +1): a Hermitian operator is CP-even unless it carries ε^{μνρσ}; the n complex coefficients of a class with a distinct conjugate class give n CP-even and n CP-odd real parameters'
 
 /** Why CP counts cannot be given for this theory, or null when they can. */
 export function cpUnavailable(model: TheoryModel): string | null {
@@ -40,7 +41,8 @@ export function cpUnavailable(model: TheoryModel): string | null {
   for (const sp of model.species) {
     if (sp.partner !== model.species.indexOf(sp)) continue
     const bad = model.su.find((g) => sp.reps[g.name]!.some((a) => a !== 0) && !suRealSupported(g.n, sp.reps[g.name]!))
-    if (bad) return `CP counts are not given for the real field ${sp.field} in SU(${bad.n}) [${sp.reps[bad.name]!.join(',')}]: only real representations of the form [α; α] (traceless tensors with equal upper and lower index shapes) have the index-swap CP used here`
+    if (bad)
+      return `CP counts are not given for the real field ${sp.field} in SU(${bad.n}) [${sp.reps[bad.name]!.join(',')}]: only real representations of the form [α; α] (traceless tensors with equal upper and lower index shapes) have the index-swap CP used here`
   }
   return null
 }
@@ -63,11 +65,17 @@ export function isSelfConjugate(model: TheoryModel, counts: readonly number[]): 
 /** The counts of the conjugate content. */
 export function conjugateCounts(model: TheoryModel, counts: readonly number[]): number[] {
   const out = new Array<number>(counts.length).fill(0)
-  model.species.forEach((sp, s) => { out[sp.partner] = counts[s]! })
+  model.species.forEach((sp, s) => {
+    out[sp.partner] = counts[s]!
+  })
   return out
 }
 
-interface Orbit { s: number; m: number; kind: 'pair' | 'self' }
+interface Orbit {
+  s: number
+  m: number
+  kind: 'pair' | 'self'
+}
 
 /**
  * tr(CP) on the operators of a self-conjugate content, per derivative number (content order).
@@ -94,7 +102,9 @@ export function cpTrace(ctx: CpContext, content: FieldContent): bigint[] {
       for (let k = 0; k < ctx.groups.length && g !== 0; k++) if (entries[k]!.length) g *= ctx.groups[k]!.integrate(entries[k]!)
       if (g === 0) return
       const series = lorentzSeries(ctx, lorentz, K)
-      content.derivatives.forEach((d, j) => { if (series[d]) sums[j]!.addProduct(w, g, flavors, series[d]!) })
+      content.derivatives.forEach((d, j) => {
+        if (series[d]) sums[j]!.addProduct(w, g, flavors, series[d]!)
+      })
       return
     }
     const o = orbits[i]!
@@ -104,12 +114,16 @@ export function cpTrace(ctx: CpContext, content: FieldContent): bigint[] {
       const sign = sp.fermion && o.kind === 'pair' ? (ct.length % 2 === 0 ? 1 : -1) : 1
       for (const c of ct.parts) {
         lorentz.push({ kind: o.kind, spins: BASE_SPINS[sp.lorentz], cycle: c })
-        reps.forEach((a, k) => { if (a.some((x) => x !== 0)) entries[k]!.push({ kind: o.kind, rep: a.join(','), cycle: c }) })
+        reps.forEach((a, k) => {
+          if (a.some((x) => x !== 0)) entries[k]!.push({ kind: o.kind, rep: a.join(','), cycle: c })
+        })
       }
       visit(i + 1, w * sign * ct.size, flavors * sp.flavors ** ct.length)
       for (const _ of ct.parts) {
         lorentz.pop()
-        reps.forEach((a, k) => { if (a.some((x) => x !== 0)) entries[k]!.pop() })
+        reps.forEach((a, k) => {
+          if (a.some((x) => x !== 0)) entries[k]!.pop()
+        })
       }
     }
   }
@@ -126,7 +140,10 @@ export function cpTrace(ctx: CpContext, content: FieldContent): bigint[] {
 }
 
 function lorentzSeries(ctx: CpContext, factors: TwistedLorentzFactor[], K: number): number[] {
-  const key = factors.map((f) => `${f.kind}${f.spins.join('.')}^${f.cycle}`).sort().join('|')
+  const key = factors
+    .map((f) => `${f.kind}${f.spins.join('.')}^${f.cycle}`)
+    .sort()
+    .join('|')
   let s = ctx.lorentz.get(key)
   if (!s || s.length <= K) {
     s = cpLorentzSeries(factors, K)

@@ -52,7 +52,10 @@ function cached(compute: (entries: readonly TwistedGroupEntry[]) => number): Twi
   const memo = new Map<string, number>()
   return {
     integrate(entries) {
-      const key = entries.map((e) => `${e.kind}:${e.rep}^${e.cycle}`).sort().join('|')
+      const key = entries
+        .map((e) => `${e.kind}:${e.rep}^${e.cycle}`)
+        .sort()
+        .join('|')
       let v = memo.get(key)
       if (v === undefined) memo.set(key, (v = compute(entries)))
       return v

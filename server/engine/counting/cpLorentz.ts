@@ -53,9 +53,7 @@ function factorSeries(f: TwistedLorentzFactor, K: number): Grid {
   for (let k = 0; ; k++) {
     const deg = f.kind === 'pair' ? 2 * c * k : c * k
     if (deg > K) break
-    const poly = f.kind === 'pair'
-      ? times(character(f.spins[0] + k, c), character(f.spins[1] + k, c))
-      : c % 2 === 1 ? character(k, c) : times(character(k, c / 2), character(k, c / 2))
+    const poly = f.kind === 'pair' ? times(character(f.spins[0] + k, c), character(f.spins[1] + k, c)) : c % 2 === 1 ? character(k, c) : times(character(k, c / 2), character(k, c / 2))
     for (const [e, v] of poly) add(g[deg]!, e, v)
   }
   return g
@@ -75,7 +73,14 @@ function multiply(a: Grid, b: Grid, K: number): Grid {
 /** (1 − Dy)(1 − D/y)(1 − D²): D^0: 1; D^1: −y − 1/y; D^2: 1 − 1 = 0 (y^0); D^3: y + 1/y; D^4: −1. */
 function momentum(K: number): Grid {
   const g: Grid = Array.from({ length: K + 1 }, () => new Map())
-  const terms: [number, number, number][] = [[0, 0, 1], [1, 1, -1], [1, -1, -1], [3, 1, 1], [3, -1, 1], [4, 0, -1]]
+  const terms: [number, number, number][] = [
+    [0, 0, 1],
+    [1, 1, -1],
+    [1, -1, -1],
+    [3, 1, 1],
+    [3, -1, 1],
+    [4, 0, -1],
+  ]
   for (const [d, e, v] of terms) if (d <= K) add(g[d]!, e, v)
   return g
 }

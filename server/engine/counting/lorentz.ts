@@ -39,7 +39,8 @@ const LIMIT = 2 ** 52
  * f(0,0) − f(2,0) − f(0,2) + f(2,2) (Weyl integration formula, Fulton & Harris §26.2).
  */
 export function lorentzSingletSeries(factors: readonly LorentzFactor[], K: number): number[] {
-  if (!Number.isInteger(K) || K < 0 || K > 40) throw new EngineInputError('lorentzSingletSeries', `Operators with more than 40 derivatives are beyond the counting engine (here ${K}); lower the maximum dimension`)
+  if (!Number.isInteger(K) || K < 0 || K > 40)
+    throw new EngineInputError('lorentzSingletSeries', `Operators with more than 40 derivatives are beyond the counting engine (here ${K}); lower the maximum dimension`)
   let reachL = K
   let reachR = K
   for (const f of factors) {
@@ -74,7 +75,11 @@ class Grid {
   readonly nl: number
   readonly nr: number
   readonly data: Float64Array
-  constructor(readonly K: number, readonly wl: number, readonly wr: number) {
+  constructor(
+    readonly K: number,
+    readonly wl: number,
+    readonly wr: number,
+  ) {
     this.nl = 2 * wl + 1
     this.nr = 2 * wr + 1
     this.data = new Float64Array((K + 1) * this.nl * this.nr)
@@ -143,12 +148,23 @@ function checkRange(a: Float64Array): void {
 
 /** Terms of 1/P = Π (1 − D x^{±1} y^{±1}): [degree, m_l, m_r, sign]. */
 const MOMENTUM_TERMS: ReadonlyArray<readonly [number, number, number, number]> = (() => {
-  const vecs = [[1, 1], [1, -1], [-1, 1], [-1, -1]] as const
+  const vecs = [
+    [1, 1],
+    [1, -1],
+    [-1, 1],
+    [-1, -1],
+  ] as const
   const out: [number, number, number, number][] = []
   for (let mask = 0; mask < 16; mask++) {
-    let deg = 0, ml = 0, mr = 0
+    let deg = 0,
+      ml = 0,
+      mr = 0
     for (let i = 0; i < 4; i++) {
-      if (mask & (1 << i)) { deg++; ml += vecs[i]![0]; mr += vecs[i]![1] }
+      if (mask & (1 << i)) {
+        deg++
+        ml += vecs[i]![0]
+        mr += vecs[i]![1]
+      }
     }
     out.push([deg, ml, mr, deg % 2 === 0 ? 1 : -1])
   }
@@ -156,7 +172,12 @@ const MOMENTUM_TERMS: ReadonlyArray<readonly [number, number, number, number]> =
 })()
 
 /** Haar weights of SU(2)×SU(2) on a Weyl-symmetric function: f00 − f20 − f02 + f22. */
-const HAAR: ReadonlyArray<readonly [number, number, number]> = [[0, 0, 1], [2, 0, -1], [0, 2, -1], [2, 2, 1]]
+const HAAR: ReadonlyArray<readonly [number, number, number]> = [
+  [0, 0, 1],
+  [2, 0, -1],
+  [0, 2, -1],
+  [2, 2, 1],
+]
 
 function contractWithMomentum(acc: Grid): number[] {
   const out: number[] = []

@@ -43,7 +43,10 @@ function dynkinOf(partition: readonly number[], n: number): number[] {
 function subpartitions(alpha: readonly number[]): number[][] {
   const out: number[][] = []
   const rec = (i: number, cur: number[]): void => {
-    if (i === alpha.length) { out.push(cur.filter((x) => x > 0)); return }
+    if (i === alpha.length) {
+      out.push(cur.filter((x) => x > 0))
+      return
+    }
     const max = Math.min(alpha[i]!, i === 0 ? alpha[0]! : cur[i - 1]!)
     for (let v = 0; v <= max; v++) rec(i + 1, [...cur, v])
   }

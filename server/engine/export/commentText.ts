@@ -6,7 +6,8 @@
  * @example commentText('χ† χ\n\\input{x}') // "χ† χ \\textbackslash{}input{x}"
  */
 export function commentText(text: string): string {
-  return text.normalize('NFC')
+  return text
+    .normalize('NFC')
     .replace(/[\t\n\v\f\r \u0085\u00a0\u1680\u2000-\u200a\u2028\u2029\u202f\u205f\u3000\ufeff]+/g, ' ')
     .replace(/[\u0000-\u001f\u007f-\u009f\u200b-\u200d\u2060]/g, '')
     .replace(/\\/g, '\\textbackslash{}')

@@ -24,9 +24,23 @@ export function toCsv(data: BoardExport): string {
   for (const order of data.orders) {
     for (const c of order.classes) {
       for (const o of c.operators) {
-        rows.push([order.order, order.dimension ?? '', c.key, o.column, o.text, o.latex, o.hermitian, o.realParameters, o.flavorComponents ?? 1,
-          o.tags.map((t) => (t.label ? `${t.kind}: ${t.label}` : t.kind)).join('; '),
-          o.notes.map((n) => `${n.author}: ${n.body}`).join(' | ')].map(csvField).join(','))
+        rows.push(
+          [
+            order.order,
+            order.dimension ?? '',
+            c.key,
+            o.column,
+            o.text,
+            o.latex,
+            o.hermitian,
+            o.realParameters,
+            o.flavorComponents ?? 1,
+            o.tags.map((t) => (t.label ? `${t.kind}: ${t.label}` : t.kind)).join('; '),
+            o.notes.map((n) => `${n.author}: ${n.body}`).join(' | '),
+          ]
+            .map(csvField)
+            .join(','),
+        )
       }
     }
   }

@@ -29,10 +29,17 @@ export function toLatex(data: BoardExport, opts: { dirac?: boolean } = {}): stri
   const out: string[] = [
     `% Scalewright basis export: ${latexText(data.theory.name)} (${commentText(data.exportedAt)})`,
     ...(data.countingRule === '1/m'
-      ? ['% Legend: heavy-frame operators in two-component Pauli notation; derivatives act to their right.',
-        ...(data.note || '').split('\n').filter(Boolean).map((line) => `% Conventions: ${commentText(line)}`)]
-      : ['% Legend: operators in two-component notation with spinor brackets; derivatives act on the',
-        `% field they follow. Independence holds ${commentText(data.note || 'modulo equations of motion and integration by parts')}.`]),
+      ? [
+          '% Legend: heavy-frame operators in two-component Pauli notation; derivatives act to their right.',
+          ...(data.note || '')
+            .split('\n')
+            .filter(Boolean)
+            .map((line) => `% Conventions: ${commentText(line)}`),
+        ]
+      : [
+          '% Legend: operators in two-component notation with spinor brackets; derivatives act on the',
+          `% field they follow. Independence holds ${commentText(data.note || 'modulo equations of motion and integration by parts')}.`,
+        ]),
     `% Counting rule: ${commentText(data.countingRule)}; ${rule}.`,
     '% "real par." counts real Wilson-coefficient parameters for one flavor (2 for a non-Hermitian operator and its conjugate).',
     '% To paste the tables into a paper, load there the packages loaded below.',
@@ -54,7 +61,12 @@ function orderTable(data: BoardExport, order: BoardExport['orders'][number], opt
     // Widths add up to less than the text (with the column gaps), so no row runs into the margin.
     '\\begin{longtable}{@{}>{\\raggedright\\arraybackslash$}p{0.2\\textwidth}<{$}>{\\raggedright\\arraybackslash$}p{0.42\\textwidth}<{$}c>{\\raggedright\\arraybackslash}p{0.15\\textwidth}@{}}',
     `\\caption{${latexText(data.theory.name)}: kept operators of order ${order.order}${dimension}.}\\\\`,
-    ...header, '\\endfirsthead', ...header, '\\endhead', '\\hline', '\\endfoot',
+    ...header,
+    '\\endfirsthead',
+    ...header,
+    '\\endhead',
+    '\\hline',
+    '\\endfoot',
   ]
   let last = ''
   for (const { c, o } of kept) {

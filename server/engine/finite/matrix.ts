@@ -38,7 +38,11 @@ export function rref(F: PrimeField, m: ModMatrix, signal?: CancelFlag): Echelon 
   for (let c = 0; c < nCols && rank < nRows; c++) {
     if (signal?.aborted) throw new EngineCancelledError('rref')
     let piv = -1
-    for (let r = rank; r < nRows; r++) if (rows[r]![c] !== 0) { piv = r; break }
+    for (let r = rank; r < nRows; r++)
+      if (rows[r]![c] !== 0) {
+        piv = r
+        break
+      }
     if (piv < 0) continue
     ;[rows[rank], rows[piv]] = [rows[piv]!, rows[rank]!]
     const pr = rows[rank]!
@@ -79,6 +83,8 @@ export function solve(F: PrimeField, a: ModMatrix, b: number[], signal?: CancelF
   const e = rref(F, aug, signal)
   if (e.pivots.includes(nCols)) throw new EngineInputError('solve', 'inconsistent system: right side is not in the column span')
   const x = new Array<number>(nCols).fill(0)
-  e.pivots.forEach((c, i) => { x[c] = e.rows[i]![nCols]! })
+  e.pivots.forEach((c, i) => {
+    x[c] = e.rows[i]![nCols]!
+  })
   return x
 }

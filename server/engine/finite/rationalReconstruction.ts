@@ -67,7 +67,7 @@ export function crt(residues: bigint[], moduli: bigint[]): { residue: bigint; mo
   for (let i = 1; i < moduli.length; i++) {
     const mi = moduli[i]!
     const ri = ((residues[i]! % mi) + mi) % mi
-    const k = (((ri - r) % mi) + mi) % mi * modInverse(m % mi, mi) % mi
+    const k = (((((ri - r) % mi) + mi) % mi) * modInverse(m % mi, mi)) % mi
     r = r + m * k
     m = m * mi
   }

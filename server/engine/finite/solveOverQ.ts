@@ -33,10 +33,16 @@ interface PrimeSolution {
 function solveModP(F: PrimeField, s: ModSystem, signal?: CancelFlag): PrimeSolution {
   if (s.a.length !== s.b.length) throw new EngineConsistencyError('solveOverQ', `${s.a.length} equations but ${s.b.length} right-hand values`)
   const n = s.a.length === 0 ? 0 : s.a[0]!.length
-  const e = rref(F, s.a.map((row, k) => [...row, s.b[k]!]), signal)
+  const e = rref(
+    F,
+    s.a.map((row, k) => [...row, s.b[k]!]),
+    signal,
+  )
   if (e.pivots.includes(n)) return { pivots: e.pivots, x: null }
   const x = new Array<number>(n).fill(0)
-  e.pivots.forEach((c, i) => { x[c] = e.rows[i]![n]! })
+  e.pivots.forEach((c, i) => {
+    x[c] = e.rows[i]![n]!
+  })
   return { pivots: e.pivots, x }
 }
 
@@ -48,15 +54,22 @@ function solveModP(F: PrimeField, s: ModSystem, signal?: CancelFlag): PrimeSolut
  * reconstruction checked against every prime (common practice of multi-modular linear
  * algebra; von zur Gathen & Gerhard, Modern Computer Algebra, §5.5 and §5.10).
  */
-export function solveOverQ(
-  fields: readonly PrimeField[], systems: readonly ModSystem[], ctx: AgreementContext,
-  opts: { lift?: readonly number[]; signal?: CancelFlag } = {},
-): SolveOutcome {
+export function solveOverQ(fields: readonly PrimeField[], systems: readonly ModSystem[], ctx: AgreementContext, opts: { lift?: readonly number[]; signal?: CancelFlag } = {}): SolveOutcome {
   if (fields.length !== systems.length) throw new EngineConsistencyError(ctx.fn, `${systems.length} systems for ${fields.length} primes`)
   const sols = fields.map((F, i) => solveModP(F, systems[i]!, opts.signal))
-  const inside = agreedValue(fields, sols.map((s) => s.x !== null), ctx, 'target being in the span')
+  const inside = agreedValue(
+    fields,
+    sols.map((s) => s.x !== null),
+    ctx,
+    'target being in the span',
+  )
   if (!inside) return { status: 'outside-span' }
-  agreedValue(fields, sols.map((s) => s.pivots.join(',')), ctx, 'independent columns')
+  agreedValue(
+    fields,
+    sols.map((s) => s.pivots.join(',')),
+    ctx,
+    'independent columns',
+  )
   const wanted = opts.lift ?? sols[0]!.x!.map((_, j) => j)
   const primes = fields.map((F) => F.p)
   const coefficients: Rational[] = []

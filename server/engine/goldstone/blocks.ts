@@ -44,7 +44,11 @@ export interface Block {
  * singlet with C = −1 (Ebertshäuser, Fearing, Scherer, Phys. Rev. D 65 (2002) 054033, the U(1)_V
  * extension; Bijnens, Girlanda, Talavera, Eur. Phys. J. C 23 (2002) 539).
  */
-export interface SourceSwitch { scalar: boolean, vector: boolean, singletVector?: boolean }
+export interface SourceSwitch {
+  scalar: boolean
+  vector: boolean
+  singletVector?: boolean
+}
 
 /** Normalize the sources option: true/false switches both. */
 export function sourceSwitch(s: boolean | SourceSwitch): SourceSwitch {

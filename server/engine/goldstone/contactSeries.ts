@@ -51,8 +51,15 @@ const str = (c: number): TowerCycle => ({ kind: 'strength', cycle: c })
 function eachCycleTuple(sizes: readonly number[], visit: (types: CycleType[], weight: number) => void): void {
   const types: CycleType[] = []
   const rec = (i: number, w: number): void => {
-    if (i === sizes.length) { visit(types, w); return }
-    for (const ct of cycleTypes(sizes[i]!)) { types.push(ct); rec(i + 1, w * ct.size); types.pop() }
+    if (i === sizes.length) {
+      visit(types, w)
+      return
+    }
+    for (const ct of cycleTypes(sizes[i]!)) {
+      types.push(ct)
+      rec(i + 1, w * ct.size)
+      types.pop()
+    }
   }
   rec(0, 1)
 }
@@ -105,7 +112,13 @@ function bothTwisted(ctx: CosetContext, N: number, [a, , c, d, e]: ContactConten
 export function contactTraces(ctx: CosetContext, N: number, content: ContactContent): Rational[][] {
   const [a, b, c, d, e] = content
   const members = new Map<string, ContactContent>()
-  for (const m of [[a, b, c, d, e], [b, a, d, c, e], [a, b, d, c, e], [b, a, c, d, e]] as const) members.set(m.join(','), m)
+  for (const m of [
+    [a, b, c, d, e],
+    [b, a, d, c, e],
+    [a, b, d, c, e],
+    [b, a, c, d, e],
+  ] as const)
+    members.set(m.join(','), m)
   const out = [0, 1, 2, 3].map(() => Array.from({ length: ctx.K + 1 }, () => rat(0)))
   for (const m of members.values()) {
     const acc = freshTraces(ctx.K)
@@ -116,7 +129,11 @@ export function contactTraces(ctx: CosetContext, N: number, content: ContactCont
     // The untwisted sum runs over S_a × S_b × S_c × S_d, a twisted one over the groups of its pairs.
     const f = factorial
     const dens = [f(m[0]) * f(m[1]) * f(m[2]) * f(m[3]), f(m[0]) * f(m[2]), f(m[0]) * f(m[1]) * f(m[2]), f(m[0]) * f(m[2]) * f(m[3])].map((x) => x * f(m[4]))
-    acc.forEach((row, t) => row.forEach((x, o) => { out[t]![o] = addRat(out[t]![o]!, rat(x.value(), dens[t]!)) }))
+    acc.forEach((row, t) =>
+      row.forEach((x, o) => {
+        out[t]![o] = addRat(out[t]![o]!, rat(x.value(), dens[t]!))
+      }),
+    )
   }
   return out
 }
@@ -126,7 +143,7 @@ export function contactTraces(ctx: CosetContext, N: number, content: ContactCont
  * in the orbit of (0, 0, 2, 0, 0), and ε^{μνρσ} v_μν v_ρσ (C-even P-odd) for (0, 0, 0, 0, 2), the sum C-even P-odd and the difference C-odd P-even (both total
  * derivatives of Chern–Simons currents, hence not operators).
  */
-export function contactTopological(content: ContactContent, order: number): { cEvenPOdd: number, cOddPEven: number } {
+export function contactTopological(content: ContactContent, order: number): { cEvenPOdd: number; cOddPEven: number } {
   const [a, b, c, d, e] = content
   if (order === 4 && a + b + c + d === 0 && e === 2) return { cEvenPOdd: -1, cOddPEven: 0 } // ε v_μν v_ρσ, abelian Chern–Simons
   const hit = order === 4 && a === 0 && b === 0 && e === 0 && c + d === 2 && c !== 1

@@ -35,11 +35,18 @@ export interface ContentTraces {
 export class CosetContext {
   readonly lorentz = new Map<string, number[]>()
   readonly twisted = new Map<string, number[]>()
-  constructor(readonly flavor: FlavorIntegrator, readonly K: number, readonly signal?: { aborted: boolean }) {}
+  constructor(
+    readonly flavor: FlavorIntegrator,
+    readonly K: number,
+    readonly signal?: { aborted: boolean },
+  ) {}
 
   lorentzOf(factors: readonly TowerCycle[], twist: boolean): number[] {
     if (this.signal?.aborted) throw new EngineCancelledError('operator count')
-    const key = factors.map((f) => `${f.kind}${f.cycle}`).sort().join(' ')
+    const key = factors
+      .map((f) => `${f.kind}${f.cycle}`)
+      .sort()
+      .join(' ')
     const map = twist ? this.twisted : this.lorentz
     let hit = map.get(key)
     if (!hit) {
@@ -50,7 +57,9 @@ export class CosetContext {
   }
 }
 
-interface Accumulators { traces: ExactSum[][] }
+interface Accumulators {
+  traces: ExactSum[][]
+}
 
 /**
  * Count one content: blocks[i] appears counts[i] times. Orders below the content's lowest order are zero.
@@ -61,9 +70,12 @@ export function contentTraces(ctx: CosetContext, blocks: readonly Block[], count
   if (letters === 1) return singleLetter(ctx, blocks[counts.indexOf(1)]!)
   const acc: Accumulators = { traces: [0, 1, 2, 3].map(() => Array.from({ length: ctx.K + 1 }, () => new ExactSum())) }
   const present = blocks.map((b, i) => ({ b, n: counts[i]! })).filter((x) => x.n > 0)
-  const cycles: { b: Block, c: number }[] = []
+  const cycles: { b: Block; c: number }[] = []
   const visit = (i: number, weight: number): void => {
-    if (i === present.length) { accumulate(ctx, cycles, weight, acc); return }
+    if (i === present.length) {
+      accumulate(ctx, cycles, weight, acc)
+      return
+    }
     const { b, n } = present[i]!
     for (const ct of cycleTypes(n)) {
       for (const c of ct.parts) cycles.push({ b, c })
@@ -76,13 +88,16 @@ export function contentTraces(ctx: CosetContext, blocks: readonly Block[], count
   return { traces: acc.traces.map((t) => t.map((x) => rat(x.value(), den))) }
 }
 
-function accumulate(ctx: CosetContext, cycles: readonly { b: Block, c: number }[], weight: number, acc: Accumulators): void {
+function accumulate(ctx: CosetContext, cycles: readonly { b: Block; c: number }[], weight: number, acc: Accumulators): void {
   const factors = cycles.map(({ b, c }) => ({ kind: b.tower, cycle: c }))
   const flavorCycles = cycles.map(({ b, c }) => ({ kind: b.flavor, cycle: c }))
   let signP = 1
   let signC = 1
   for (const { b, c } of cycles) {
-    if (c % 2 === 1) { signP *= b.parity; signC *= b.charge }
+    if (c % 2 === 1) {
+      signP *= b.parity
+      signC *= b.charge
+    }
   }
   const F = [ctx.flavor.singlets(flavorCycles, false), ctx.flavor.singlets(flavorCycles, true)]
   if (F[0] === 0 && F[1] === 0) return
@@ -99,7 +114,12 @@ function accumulate(ctx: CosetContext, cycles: readonly { b: Block, c: number }[
 }
 
 /** The four sector counts of a class at one order; each must be a non-negative integer. */
-export interface Sectors { cEvenPEven: number, cEvenPOdd: number, cOddPEven: number, cOddPOdd: number }
+export interface Sectors {
+  cEvenPEven: number
+  cEvenPOdd: number
+  cOddPEven: number
+  cOddPOdd: number
+}
 
 /**
  * Traces [1, P, C, CP] → the four sector counts n(C = σ, P = τ) = ¼ Σ σ^{tc} τ^{tp} H_{tc tp}.

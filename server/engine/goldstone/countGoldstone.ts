@@ -51,7 +51,7 @@ export interface GoldstoneOrderCount {
   order: number
   /** Independent terms of the kept symmetries (C- and P-even, or C-even with θ), both intrinsic parities. */
   operators: number
-  byParity: { even: number, odd: number }
+  byParity: { even: number; odd: number }
   /** Of those, terms of the sources alone (no Goldstone field). */
   contact: number
   /** All four C, P sectors (C-odd sectors are empty for O(N+1)/O(N)). */
@@ -140,15 +140,26 @@ function addSectors(a: Sectors, b: Sectors): void {
 export function enumerateContents(blocks: readonly Block[], K: number): number[][] {
   const out: number[][] = []
   const rec = (i: number, counts: number[], w: number): void => {
-    if (i === blocks.length) { if (counts.some((c) => c > 0)) out.push(counts.slice()); return }
+    if (i === blocks.length) {
+      if (counts.some((c) => c > 0)) out.push(counts.slice())
+      return
+    }
     const o = TOWER_ORDER[blocks[i]!.tower]
-    for (let n = 0; w + n * o <= K; n++) { counts.push(n); rec(i + 1, counts, w + n * o); counts.pop() }
+    for (let n = 0; w + n * o <= K; n++) {
+      counts.push(n)
+      rec(i + 1, counts, w + n * o)
+      counts.pop()
+    }
   }
   rec(0, [], 0)
   return out
 }
 
-interface ClassSeries { key: string, parity: 'even' | 'odd', sectors: Sectors[] }
+interface ClassSeries {
+  key: string
+  parity: 'even' | 'odd'
+  sectors: Sectors[]
+}
 
 /**
  * Sum the contents into the classes integration by parts keeps apart: in the free limit
@@ -158,21 +169,31 @@ interface ClassSeries { key: string, parity: 'even' | 'odd', sectors: Sectors[] 
  */
 function cosetClasses(ctx: CosetContext, blocks: readonly Block[], o: GoldstoneCountOptions): ClassSeries[] {
   const contents = enumerateContents(blocks, ctx.K)
-  const sums = new Map<string, { parity: 'even' | 'odd', traces: Rational[][] }>()
+  const sums = new Map<string, { parity: 'even' | 'odd'; traces: Rational[][] }>()
   contents.forEach((counts, i) => {
     if (o.signal?.aborted) throw new EngineCancelledError('operator count')
     if (i % 16 === 0) o.onProgress?.((0.9 * i) / contents.length, `class ${i + 1} of ${contents.length}`)
     const key = classKey(blocks, counts)
     const odd = blocks.reduce((n, b, j) => n + (b.parity === -1 ? counts[j]! : 0), 0)
-    const entry = sums.get(key) ?? { parity: odd % 2 === 0 ? 'even' as const : 'odd' as const, traces: zeroTraces(ctx.K) }
+    const entry = sums.get(key) ?? { parity: odd % 2 === 0 ? ('even' as const) : ('odd' as const), traces: zeroTraces(ctx.K) }
     const t = contentTraces(ctx, blocks, counts).traces
-    t.forEach((row, ti) => row.forEach((x, d) => { entry.traces[ti]![d] = add(entry.traces[ti]![d]!, x) }))
+    t.forEach((row, ti) =>
+      row.forEach((x, d) => {
+        entry.traces[ti]![d] = add(entry.traces[ti]![d]!, x)
+      }),
+    )
     sums.set(key, entry)
   })
   return [...sums].map(([key, e]) => ({
     key,
     parity: e.parity,
-    sectors: e.traces[0]!.map((_, d) => sectorCounts(e.traces.map((t) => t[d]!), `class ${key} at p^${d}`, deltaH(ctx, blocks, key, d))),
+    sectors: e.traces[0]!.map((_, d) =>
+      sectorCounts(
+        e.traces.map((t) => t[d]!),
+        `class ${key} at p^${d}`,
+        deltaH(ctx, blocks, key, d),
+      ),
+    ),
   }))
 }
 
@@ -197,7 +218,16 @@ function deltaH(ctx: CosetContext, blocks: readonly Block[], key: string, d: num
   if (key === 'v^2') return { cEvenPOdd: -1 } // ε^{μνρσ} v_μν v_ρσ: the abelian Chern–Simons density, a total derivative
   if (key === 'f+^2' && fPlus) {
     const kind = fPlus.flavor
-    const sym2 = (ctx.flavor.singlets([{ kind, cycle: 1 }, { kind, cycle: 1 }], false) + ctx.flavor.singlets([{ kind, cycle: 2 }], false)) / 2
+    const sym2 =
+      (ctx.flavor.singlets(
+        [
+          { kind, cycle: 1 },
+          { kind, cycle: 1 },
+        ],
+        false,
+      ) +
+        ctx.flavor.singlets([{ kind, cycle: 2 }], false)) /
+      2
     return { cEvenPOdd: -sym2 }
   }
   const content = classShape(key)
@@ -207,7 +237,7 @@ function deltaH(ctx: CosetContext, blocks: readonly Block[], key: string, d: num
 }
 
 /** Numbers of intrinsically odd and even letters of a class key. */
-function classShape(key: string): { odd: number, even: number } {
+function classShape(key: string): { odd: number; even: number } {
   let odd = 0
   let even = 0
   for (const part of key.split(' ').filter(Boolean)) {
@@ -225,7 +255,9 @@ function classKey(blocks: readonly Block[], counts: readonly number[]): string {
   const oddNames = blocks.filter((b) => b.parity === -1).map((b) => b.symbol)
   const parts: string[] = []
   if (odd > 0) parts.push(power(oddNames.length === 1 ? oddNames[0]! : `{${oddNames.join(',')}}`, odd))
-  blocks.forEach((b, j) => { if (b.parity === 1 && counts[j]! > 0) parts.push(power(b.symbol, counts[j]!)) })
+  blocks.forEach((b, j) => {
+    if (b.parity === 1 && counts[j]! > 0) parts.push(power(b.symbol, counts[j]!))
+  })
   return parts.join(' ')
 }
 
@@ -239,7 +271,15 @@ function contactCounts(o: GoldstoneCountOptions, sources: SourceSwitch, N: numbe
       if (counts.some((n, i) => n > 0 && !blockPresent(ORTHOGONAL_SOURCE_BLOCKS[i]!, sources))) continue
       const t = contentTraces(ctx, ORTHOGONAL_SOURCE_BLOCKS, counts).traces
       const topological = (d: number) => (d === 4 && counts[0] === 0 && counts[1] === 2 ? { cEvenPOdd: -1 } : {})
-      out.push(t[0]!.map((_, d) => sectorCounts(t.map((r) => r[d]!), `contact terms χ^${counts[0]} F^${counts[1]} at p^${d}`, topological(d))))
+      out.push(
+        t[0]!.map((_, d) =>
+          sectorCounts(
+            t.map((r) => r[d]!),
+            `contact terms χ^${counts[0]} F^${counts[1]} at p^${d}`,
+            topological(d),
+          ),
+        ),
+      )
     }
     return out
   }
@@ -255,7 +295,15 @@ function contactCounts(o: GoldstoneCountOptions, sources: SourceSwitch, N: numbe
             if (a + b + c + e + v === 0) continue
             const content = [a, b, c, e, v] as const
             const t = contactTraces(ctx, N, content)
-            out.push(t[0]!.map((_, d) => sectorCounts(t.map((r) => r[d]!), `contact terms (${content.join(',')}) at p^${d}`, contactTopological(content, d))))
+            out.push(
+              t[0]!.map((_, d) =>
+                sectorCounts(
+                  t.map((r) => r[d]!),
+                  `contact terms (${content.join(',')}) at p^${d}`,
+                  contactTopological(content, d),
+                ),
+              ),
+            )
           }
         }
       }

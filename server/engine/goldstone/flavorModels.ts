@@ -10,7 +10,10 @@ import { adjointSinglets, twistedAdjointSinglets, withTracesRemoved } from './un
 
 export type FlavorKind = 'sl' | 'gl' | 'vector' | 'adjoint' | 'singlet'
 
-export interface FlavorCycle { kind: FlavorKind, cycle: number }
+export interface FlavorCycle {
+  kind: FlavorKind
+  cycle: number
+}
 
 export interface FlavorIntegrator {
   /** ∫_H Π_i χ_{kind_i}(h^{c_i}) (chargeTwist: with C applied to every letter, signs excluded). */
@@ -22,8 +25,14 @@ export class UnitaryFlavor implements FlavorIntegrator {
   private readonly cache = new Map<string, number>()
   constructor(readonly N: number) {}
   singlets(cycles: readonly FlavorCycle[], chargeTwist: boolean): number {
-    const gl = cycles.filter((x) => x.kind === 'gl').map((x) => x.cycle).sort()
-    const sl = cycles.filter((x) => x.kind === 'sl').map((x) => x.cycle).sort()
+    const gl = cycles
+      .filter((x) => x.kind === 'gl')
+      .map((x) => x.cycle)
+      .sort()
+    const sl = cycles
+      .filter((x) => x.kind === 'sl')
+      .map((x) => x.cycle)
+      .sort()
     const key = `${chargeTwist ? 't' : 'u'}|${gl.join(',')}|${sl.join(',')}`
     let hit = this.cache.get(key)
     if (hit === undefined) {
@@ -41,7 +50,10 @@ export class OrthogonalFlavor implements FlavorIntegrator {
   constructor(readonly N: number) {}
   singlets(cycles: readonly FlavorCycle[]): number {
     const factors = cycles.filter((x) => x.kind !== 'singlet').map((x) => ({ rep: x.kind as OrthogonalRep, cycle: x.cycle }))
-    const key = factors.map((f) => `${f.rep}${f.cycle}`).sort().join(' ')
+    const key = factors
+      .map((f) => `${f.rep}${f.cycle}`)
+      .sort()
+      .join(' ')
     let hit = this.cache.get(key)
     if (hit === undefined) {
       hit = orthogonalSinglets(this.N, factors)

@@ -17,7 +17,10 @@ import { EngineConsistencyError, EngineInputError } from '../errors'
 import { TOWER_ORDER, towerCharacter, twistedTowerCharacter, type TowerKind } from './towers'
 
 /** One factor of the integrand: a tower raised as a cycle of length `cycle`. */
-export interface TowerCycle { kind: TowerKind, cycle: number }
+export interface TowerCycle {
+  kind: TowerKind
+  cycle: number
+}
 
 const LIMIT = 2 ** 52
 
@@ -37,7 +40,11 @@ export function lowestOrder(factors: readonly TowerCycle[]): number {
 function nonZero(data: Float64Array): [number[], number[]] {
   const idx: number[] = []
   const val: number[] = []
-  for (let i = 0; i < data.length; i++) if (data[i] !== 0) { idx.push(i); val.push(data[i]!) }
+  for (let i = 0; i < data.length; i++)
+    if (data[i] !== 0) {
+      idx.push(i)
+      val.push(data[i]!)
+    }
   return [idx, val]
 }
 
@@ -50,11 +57,23 @@ function checkRange(fn: string, data: Float64Array): void {
 
 /** 1/P = Π (1 − q x^{±1} y^{±1}): terms [degree, ml, mr, sign]. */
 const MOMENTUM_TERMS: readonly (readonly [number, number, number, number])[] = (() => {
-  const vecs = [[1, 1], [1, -1], [-1, 1], [-1, -1]] as const
+  const vecs = [
+    [1, 1],
+    [1, -1],
+    [-1, 1],
+    [-1, -1],
+  ] as const
   const out: [number, number, number, number][] = []
   for (let mask = 0; mask < 16; mask++) {
-    let d = 0, ml = 0, mr = 0
-    for (let i = 0; i < 4; i++) if (mask & (1 << i)) { d++; ml += vecs[i]![0]; mr += vecs[i]![1] }
+    let d = 0,
+      ml = 0,
+      mr = 0
+    for (let i = 0; i < 4; i++)
+      if (mask & (1 << i)) {
+        d++
+        ml += vecs[i]![0]
+        mr += vecs[i]![1]
+      }
     out.push([d, ml, mr, d % 2 === 0 ? 1 : -1])
   }
   return out
@@ -103,7 +122,12 @@ export function lorentzSeries(factors: readonly TowerCycle[], K: number): number
   const result: number[] = []
   for (let d = 0; d <= K; d++) {
     let s = 0
-    for (const [hl, hr, hs] of [[0, 0, 1], [2, 0, -1], [0, 2, -1], [2, 2, 1]] as const) {
+    for (const [hl, hr, hs] of [
+      [0, 0, 1],
+      [2, 0, -1],
+      [0, 2, -1],
+      [2, 2, 1],
+    ] as const) {
       for (const [deg, ml, mr, sign] of MOMENTUM_TERMS) s += hs * sign * get(d - deg, hl - ml, hr - mr)
     }
     if (!Number.isSafeInteger(s)) throw new EngineConsistencyError('lorentzSeries', `unsafe coefficient ${s} at q^${d}`)
@@ -114,10 +138,15 @@ export function lorentzSeries(factors: readonly TowerCycle[], K: number): number
 
 /** det(1 − qT) = 1 − q(z + 1/z) + q³(z + 1/z) − q⁴: terms [degree, m, coefficient]. */
 const TWISTED_MOMENTUM: readonly (readonly [number, number, number])[] = [
-  [0, 0, 1], [1, 1, -1], [1, -1, -1], [3, 1, 1], [3, -1, 1], [4, 0, -1],
+  [0, 0, 1],
+  [1, 1, -1],
+  [1, -1, -1],
+  [3, 1, 1],
+  [3, -1, 1],
+  [4, 0, -1],
 ]
 
-function twistedFactorTerms(f: TowerCycle, K: number): { d: number, m: number, c: number }[] {
+function twistedFactorTerms(f: TowerCycle, K: number): { d: number; m: number; c: number }[] {
   const c = f.cycle
   const budget = Math.floor(K / c)
   if (c % 2 === 1) return twistedTowerCharacter(f.kind, budget).map((t) => ({ d: c * t.d, m: c * t.m, c: t.c }))
@@ -158,7 +187,10 @@ export function twistedLorentzSeries(factors: readonly TowerCycle[], K: number):
   const result: number[] = []
   for (let d = 0; d <= K; d++) {
     let s = 0
-    for (const [hm, hs] of [[0, 1], [2, -1]] as const) {
+    for (const [hm, hs] of [
+      [0, 1],
+      [2, -1],
+    ] as const) {
       for (const [deg, m, c] of TWISTED_MOMENTUM) s += hs * c * get(d - deg, hm - m)
     }
     if (!Number.isSafeInteger(s)) throw new EngineConsistencyError('twistedLorentzSeries', `unsafe coefficient ${s} at q^${d}`)

@@ -21,10 +21,16 @@ export type OrthogonalRep = 'vector' | 'adjoint'
 const cache = new Map<string, number>()
 
 /** Power-sum expansion of 2^{#adjoints} Π χ_{R_i}(h^{c_i}): list of [integer coefficient, parts]. */
-function powerSums(factors: readonly { rep: OrthogonalRep, cycle: number }[]): [number, number[]][] {
+function powerSums(factors: readonly { rep: OrthogonalRep; cycle: number }[]): [number, number[]][] {
   let terms: [number, number[]][] = [[1, []]]
   for (const f of factors) {
-    const choices: [number, number[]][] = f.rep === 'vector' ? [[1, [f.cycle]]] : [[1, [f.cycle, f.cycle]], [-1, [2 * f.cycle]]]
+    const choices: [number, number[]][] =
+      f.rep === 'vector'
+        ? [[1, [f.cycle]]]
+        : [
+            [1, [f.cycle, f.cycle]],
+            [-1, [2 * f.cycle]],
+          ]
     terms = terms.flatMap(([c, p]) => choices.map(([c2, p2]) => [c * c2, [...p, ...p2]] as [number, number[]]))
   }
   return terms
@@ -34,7 +40,7 @@ function powerSums(factors: readonly { rep: OrthogonalRep, cycle: number }[]): [
  * ∫_{O(N)} Π χ_{R_i}(h^{c_i}) dh, exact.
  * @example orthogonalSinglets(3, [{rep:'vector',cycle:1},{rep:'vector',cycle:1}]) // 1 (δ_ab)
  */
-export function orthogonalSinglets(N: number, factors: readonly { rep: OrthogonalRep, cycle: number }[]): number {
+export function orthogonalSinglets(N: number, factors: readonly { rep: OrthogonalRep; cycle: number }[]): number {
   if (!Number.isInteger(N) || N < 1) throw new EngineInputError('orthogonalSinglets', `N must be a positive integer, got ${N}`)
   let s = 0
   for (const [c, parts] of powerSums(factors)) s += c * powerSumIntegral(N, parts)

@@ -23,7 +23,11 @@ export interface GoldstoneTaskInput {
  * Run the task; the theory must be in the Goldstone frame.
  * @example goldstoneTask(theory, { kind: 'count', maxOrder: 6 }, {}).byOrder.map(o => o.operators) // [2, 12, 117] for N = 3 with sources
  */
-export function goldstoneTask(theory: Theory, task: GoldstoneTaskInput, o: { onProgress?: (f: number, label: string) => void, signal?: { aborted: boolean } }): GoldstoneCountResult | GoldstoneBasisResult | Fingerprint[] {
+export function goldstoneTask(
+  theory: Theory,
+  task: GoldstoneTaskInput,
+  o: { onProgress?: (f: number, label: string) => void; signal?: { aborted: boolean } },
+): GoldstoneCountResult | GoldstoneBasisResult | Fingerprint[] {
   const g = theory.goldstone
   if (!g) throw new EngineInputError('goldstoneTask', 'a Goldstone-frame theory needs its "goldstone" block')
   if (task.kind === 'fingerprint') {

@@ -32,10 +32,19 @@ export const TOWER_KINDS: readonly TowerKind[] = ['goldstone', 'source', 'streng
 export const TOWER_ORDER: Record<TowerKind, number> = { goldstone: 1, source: 2, strength: 2 }
 
 /** A term c · q^d x^{ml} y^{mr} of an SO(4) character. */
-export interface WeightTerm { d: number, ml: number, mr: number, c: number }
+export interface WeightTerm {
+  d: number
+  ml: number
+  mr: number
+  c: number
+}
 
 /** A term c · q^d z^m of a character on O(4)⁻. */
-export interface TwistedTerm { d: number, m: number, c: number }
+export interface TwistedTerm {
+  d: number
+  m: number
+  c: number
+}
 
 /** Highest chiral order the towers are expanded to. */
 export const MAX_TOWER_ORDER = 24
@@ -80,7 +89,12 @@ class Dense3 {
   }
 }
 
-const VECTOR: readonly (readonly [number, number])[] = [[1, 1], [1, -1], [-1, 1], [-1, -1]]
+const VECTOR: readonly (readonly [number, number])[] = [
+  [1, 1],
+  [1, -1],
+  [-1, 1],
+  [-1, -1],
+]
 
 /** Weight terms of P = Π_vector 1/(1 − q x^{ml} y^{mr}) up to q^K. */
 function momentumSeries(K: number): WeightTerm[] {
@@ -101,8 +115,11 @@ function multiplyTerms(K: number, a: readonly WeightTerm[], b: readonly WeightTe
 
 /** Weight terms of Λ²V, Λ³V = V, Λ⁴V = 1 at q^2, q^3, q^4 with the signs of the de Rham complex. */
 const STRENGTH_NUMERATOR: readonly WeightTerm[] = [
-  { d: 2, ml: 2, mr: 0, c: 1 }, { d: 2, ml: 0, mr: 0, c: 2 }, { d: 2, ml: -2, mr: 0, c: 1 },
-  { d: 2, ml: 0, mr: 2, c: 1 }, { d: 2, ml: 0, mr: -2, c: 1 },
+  { d: 2, ml: 2, mr: 0, c: 1 },
+  { d: 2, ml: 0, mr: 0, c: 2 },
+  { d: 2, ml: -2, mr: 0, c: 1 },
+  { d: 2, ml: 0, mr: 2, c: 1 },
+  { d: 2, ml: 0, mr: -2, c: 1 },
   ...VECTOR.map(([ml, mr]) => ({ d: 3, ml, mr, c: -1 })),
   { d: 4, ml: 0, mr: 0, c: 1 },
 ]
@@ -186,7 +203,12 @@ export function twistedTowerCharacter(kind: TowerKind, K: number): readonly Twis
   let terms: TwistedTerm[]
   if (kind === 'goldstone') terms = rotation.filter((t) => t.d >= 1)
   else if (kind === 'source') terms = Ptw.filter((t) => t.d + 2 <= K).map((t) => ({ ...t, d: t.d + 2 }))
-  else terms = multiplyTwisted(K, Ptw, [{ d: 3, m: 1, c: 1 }, { d: 3, m: -1, c: 1 }, { d: 4, m: 0, c: -1 }])
+  else
+    terms = multiplyTwisted(K, Ptw, [
+      { d: 3, m: 1, c: 1 },
+      { d: 3, m: -1, c: 1 },
+      { d: 4, m: 0, c: -1 },
+    ])
   twistedCache.set(key, terms)
   return terms
 }

@@ -63,7 +63,10 @@ export function adjointSinglets(N: number, nu: readonly number[]): number {
   const p = sorted(nu)
   return memo(`a|${N}|${p.join(',')}`, () => {
     let s = 0
-    for (const l of irreps(total(p), N)) { const x = symmetricCharacter(l, p); s += x * x }
+    for (const l of irreps(total(p), N)) {
+      const x = symmetricCharacter(l, p)
+      s += x * x
+    }
     return s
   })
 }
@@ -106,7 +109,10 @@ export function conjugationSinglets(N: number, nu: readonly number[]): number {
 function reduced(l: readonly number[], N: number): string {
   if (N === GENERAL_N || l.length < N) return l.join(',')
   const k = l[N - 1]!
-  return l.map((x) => x - k).filter((x) => x > 0).join(',')
+  return l
+    .map((x) => x - k)
+    .filter((x) => x > 0)
+    .join(',')
 }
 
 /**
@@ -146,7 +152,10 @@ export function withTracesRemoved(kept: readonly number[], traceless: readonly n
   const lengths = [...counts.keys()]
   let s = 0
   const visit = (i: number, chosen: number[], coef: number): void => {
-    if (i === lengths.length) { s += coef * f([...kept, ...chosen]); return }
+    if (i === lengths.length) {
+      s += coef * f([...kept, ...chosen])
+      return
+    }
     const c = lengths[i]!
     const m = counts.get(c)!
     let binom = 1

@@ -46,7 +46,8 @@ export function multiplyIrrepsIn(c: Chamber, irreps: Map<string, number>, x: Cha
   for (const [key, q] of irreps) {
     const lambda = parseWeightKey('multiplyIrreps', key)
     for (const [nu, m] of weights) {
-      if (nu.length !== c.rank) throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${c.rank} labels of ${/^[AEFHILMNORSX]/.test(c.label) ? 'an' : 'a'} ${c.label} weight`)
+      if (nu.length !== c.rank)
+        throw new EngineInputError('multiplyIrreps', `The weight "${[...nu].join(',')}" does not have the ${c.rank} labels of ${/^[AEFHILMNORSX]/.test(c.label) ? 'an' : 'a'} ${c.label} weight`)
       const r = c.reflect(nu, lambda)
       if (!r) continue
       const k = r.labels.join(',')
@@ -65,16 +66,12 @@ export function multiplyIrrepsIn(c: Chamber, irreps: Map<string, number>, x: Cha
  * @example schurFunctorIrreps(3, suWeights(3, [1, 1]), [2]) // {"2,2":1,"1,1":1,"0,0":1}
  * Reference: Macdonald, Symmetric Functions, I.7–I.8; Fulton & Harris, §6.1 and §25.3.
  */
-export function schurFunctorIrreps(
-  n: number, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {},
-): Map<string, number> {
+export function schurFunctorIrreps(n: number, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {}): Map<string, number> {
   return schurFunctorIrrepsIn(suChamber(n), ch, partition, k, opts)
 }
 
 /** schurFunctorIrreps for any Weyl chamber. */
-export function schurFunctorIrrepsIn(
-  c: Chamber, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {},
-): Map<string, number> {
+export function schurFunctorIrrepsIn(c: Chamber, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions = {}): Map<string, number> {
   const zero = new Array<number>(c.rank).fill(0).join(',')
   const acc = new Map<string, bigint>()
   const adams = new Map<number, Character>()

@@ -10,7 +10,8 @@ import { fixedPackedProduct } from './packed'
 
 function addTo(fn: string, out: Character, key: string, m: number): void {
   const v = (out.get(key) ?? 0) + m
-  if (!Number.isSafeInteger(v)) throw new EngineInputError(fn, `A weight multiplicity grows beyond 2^53 (at weight ${key}), past exact arithmetic; lower the maximum dimension or the number of flavors`)
+  if (!Number.isSafeInteger(v))
+    throw new EngineInputError(fn, `A weight multiplicity grows beyond 2^53 (at weight ${key}), past exact arithmetic; lower the maximum dimension or the number of flavors`)
   if (v === 0) out.delete(key)
   else out.set(key, v)
 }

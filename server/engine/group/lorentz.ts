@@ -18,15 +18,19 @@ export type LorentzIrrep = readonly [number, number]
 
 /** Standard Lorentz irreps of the species (theory/model.ts: scalar, Weyl fermions) and field-strength halves. */
 export const LORENTZ_IRREPS = {
-  S: [0, 0], L: [1, 0], R: [0, 1], FL: [2, 0], FR: [0, 2], V: [1, 1],
+  S: [0, 0],
+  L: [1, 0],
+  R: [0, 1],
+  FL: [2, 0],
+  FR: [0, 2],
+  V: [1, 1],
 } as const satisfies Record<string, LorentzIrrep>
 
 /** Largest 2j accepted for either SU(2) factor (spin 20). */
 export const MAX_TWO_SPIN = 40
 
 function checkIrrep(fn: string, irrep: LorentzIrrep): void {
-  const ok = Array.isArray(irrep) && irrep.length === 2 &&
-    irrep.every((x) => Number.isSafeInteger(x) && x >= 0 && x <= MAX_TWO_SPIN)
+  const ok = Array.isArray(irrep) && irrep.length === 2 && irrep.every((x) => Number.isSafeInteger(x) && x >= 0 && x <= MAX_TWO_SPIN)
   if (!ok) throw new EngineInputError(fn, `A Lorentz representation is written [2j_L, 2j_R] with whole numbers from 0 to ${MAX_TWO_SPIN}, but it is ${JSON.stringify(irrep)}`)
 }
 

@@ -116,7 +116,8 @@ export function fixedPackedProduct(a: Character, b: Character): Character | null
     for (let j = 0; j < pb.length; j++) {
       const x = xa + pb[j]!
       const v = (acc.get(x) ?? 0) + m1 * mb[j]!
-      if (v > LIMIT || v < -LIMIT) throw new EngineInputError('characterProduct', 'A weight multiplicity grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors')
+      if (v > LIMIT || v < -LIMIT)
+        throw new EngineInputError('characterProduct', 'A weight multiplicity grows beyond 2^53, past exact arithmetic; lower the maximum dimension or the number of flavors')
       acc.set(x, v)
     }
   }

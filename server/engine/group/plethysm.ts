@@ -15,8 +15,7 @@ export type { PlethysmOptions }
 export const MAX_PLETHYSM_DEGREE = 12
 
 function checkPartition(fn: string, partition: readonly number[]): number {
-  const ok = Array.isArray(partition) && partition.length > 0 &&
-    partition.every((p, i) => Number.isSafeInteger(p) && p >= 1 && (i === 0 || p <= partition[i - 1]!))
+  const ok = Array.isArray(partition) && partition.length > 0 && partition.every((p, i) => Number.isSafeInteger(p) && p >= 1 && (i === 0 || p <= partition[i - 1]!))
   if (!ok) throw new EngineInputError(fn, `A partition must be a non-increasing list of positive whole numbers, but it is ${fmt(partition)}`)
   const k = partition.reduce((a, b) => a + b, 0)
   if (k > MAX_PLETHYSM_DEGREE) {
@@ -33,9 +32,7 @@ function checkPartition(fn: string, partition: readonly number[]): number {
  * in bigint and divided exactly (a non-integer quotient throws EngineConsistencyError).
  * Reference: Macdonald, Symmetric Functions, I.7 and I.8 (plethysm); Fulton & Harris, §6.1.
  */
-export function schurFunctorCharacter(
-  n: number, ch: Character, partition: readonly number[], opts: PlethysmOptions = {},
-): Character {
+export function schurFunctorCharacter(n: number, ch: Character, partition: readonly number[], opts: PlethysmOptions = {}): Character {
   checkN('schurFunctorCharacter', n)
   const k = checkPartition('schurFunctorCharacter', partition)
   for (const key of ch.keys()) {
@@ -55,9 +52,7 @@ export function schurFunctorCharacter(
 }
 
 /** Σ_μ χ^λ(μ) |C_μ| Π_i ψ^{μ_i}(χ) (= k! S_λ(χ)), weight key -> bigint. */
-function accumulateCycleIndex(
-  n: number, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions,
-): Map<string, bigint> {
+function accumulateCycleIndex(n: number, ch: Character, partition: readonly number[], k: number, opts: PlethysmOptions): Map<string, bigint> {
   const acc = new Map<string, bigint>()
   const prefixCache = new Map<string, Character>()
   const classes = partitionsOf(k)

@@ -55,11 +55,17 @@ export function symmetricCharacter(lambda: readonly number[], mu: readonly numbe
   const kl = lambda.reduce((a, b) => a + b, 0)
   const km = mu.reduce((a, b) => a + b, 0)
   if (kl !== km) {
-    throw new EngineInputError('symmetricCharacter', `The partitions ${JSON.stringify(lambda)} and ${JSON.stringify(mu)} have different sizes; a character of the symmetric group needs two partitions of the same number`)
+    throw new EngineInputError(
+      'symmetricCharacter',
+      `The partitions ${JSON.stringify(lambda)} and ${JSON.stringify(mu)} have different sizes; a character of the symmetric group needs two partitions of the same number`,
+    )
   }
   const len = lambda.length
   const beta = lambda.map((p, i) => p + len - 1 - i)
-  return mn(beta, [...mu].sort((a, b) => b - a))
+  return mn(
+    beta,
+    [...mu].sort((a, b) => b - a),
+  )
 }
 
 function mn(beta: number[], mu: number[]): number {

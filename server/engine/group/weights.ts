@@ -47,7 +47,10 @@ export function suWeights(n: number, dynkin: Dynkin): Character {
   if (hit) return hit
   const dim = suDimension(n, dynkin)
   if (dim > MAX_WEIGHT_DIMENSION) {
-    throw new EngineInputError('suWeights', `The SU(${n}) representation [${dynkinKey(dynkin)}] has dimension ${dim}, above the limit of ${MAX_WEIGHT_DIMENSION} weights; choose a smaller representation`)
+    throw new EngineInputError(
+      'suWeights',
+      `The SU(${n}) representation [${dynkinKey(dynkin)}] has dimension ${dim}, above the limit of ${MAX_WEIGHT_DIMENSION} weights; choose a smaller representation`,
+    )
   }
   const lambda = dynkinToPartition(dynkin)
   const ch: Character = new Map()

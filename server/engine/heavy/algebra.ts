@@ -95,7 +95,10 @@ export function decodeFieldLetter(ch: string): { g: number; which: 'E' | 'B'; i:
 export function wordAtoms(word: string): string[] {
   const out: string[] = []
   for (let i = 0; i < word.length; i++) {
-    if (word[i] !== '(') { out.push(word[i]!); continue }
+    if (word[i] !== '(') {
+      out.push(word[i]!)
+      continue
+    }
     const j = word.indexOf(')', i)
     if (j < 0) throw new EngineConsistencyError('wordAtoms', `unclosed trace in the word "${word}"`)
     out.push(word.slice(i, j + 1))
@@ -107,18 +110,26 @@ export function wordAtoms(word: string): string[] {
 /** The element of one letter with a concrete index (1..3) where it has one. */
 export function letterElement(letter: 'D' | 'T' | 'E' | 'B' | 's', index: number): Element {
   switch (letter) {
-    case 'T': return new Map([[termKey(0, '0'), 1]])
-    case 'D': return new Map([[termKey(0, `${index}`), 1]])
-    case 'E': return new Map([[termKey(0, `0${index}`), 1], [termKey(0, `${index}0`), -1]])
+    case 'T':
+      return new Map([[termKey(0, '0'), 1]])
+    case 'D':
+      return new Map([[termKey(0, `${index}`), 1]])
+    case 'E':
+      return new Map([
+        [termKey(0, `0${index}`), 1],
+        [termKey(0, `${index}0`), -1],
+      ])
     case 'B': {
       const out: Element = new Map()
-      for (let i = 1; i <= 3; i++) for (let j = 1; j <= 3; j++) {
-        const e = levi(index, i, j)
-        if (e !== 0) addTerm(out, termKey(0, `${i}${j}`), e)
-      }
+      for (let i = 1; i <= 3; i++)
+        for (let j = 1; j <= 3; j++) {
+          const e = levi(index, i, j)
+          if (e !== 0) addTerm(out, termKey(0, `${i}${j}`), e)
+        }
       return out
     }
-    case 's': return new Map([[termKey(index, ''), 1]])
+    case 's':
+      return new Map([[termKey(index, ''), 1]])
   }
 }
 

@@ -26,8 +26,8 @@ function renamedLatex(latex: string, field: string, anti: string): string {
 
 export const ANTIPARTICLE_CONVENTION =
   'Antiparticle field χ: the lower two components of the Dirac field (Bodwin, Braaten, Lepage convention): χ creates the ' +
-  'antiparticle and carries the particle\'s own gauge representation and charge, so E and B are the same fields in ψ†…ψ ' +
-  'and χ†…χ. Its bilinears repeat ψ\'s with coefficients fixed by charge conjugation: c(χ-copy) = (−1)^n c(ψ-operator) at ' +
+  "antiparticle and carries the particle's own gauge representation and charge, so E and B are the same fields in ψ†…ψ " +
+  "and χ†…χ. Its bilinears repeat ψ's with coefficients fixed by charge conjugation: c(χ-copy) = (−1)^n c(ψ-operator) at " +
   'order 1/m^n for P- and T-even operators (χ†(iD_t − D²/2m − σ·B/2m + …)χ), so they add no free coefficient.'
 
 /**
@@ -54,10 +54,12 @@ export function antiparticleCopy(op: HeavyOperator, field: string, anti: string)
     latex: renamedLatex(op.latex, field, anti),
     terms: op.terms.map((t) => renameTerms(t, field, anti)),
     fixedBy: { id: op.id, factor },
-    relations: [{
-      coefficient: `c(${op.id}.C)`,
-      relation: `c(${op.id}.C) = ${factor < 0 ? '−' : ''}c(${op.id})`,
-      source: op.parityOdd || op.timeOdd ? 'CPT (common practice)' : 'charge conjugation, Bodwin–Braaten–Lepage convention for χ (common practice)',
-    }],
+    relations: [
+      {
+        coefficient: `c(${op.id}.C)`,
+        relation: `c(${op.id}.C) = ${factor < 0 ? '−' : ''}c(${op.id})`,
+        source: op.parityOdd || op.timeOdd ? 'CPT (common practice)' : 'charge conjugation, Bodwin–Braaten–Lepage convention for χ (common practice)',
+      },
+    ],
   }
 }

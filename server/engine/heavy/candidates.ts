@@ -39,10 +39,12 @@ export function contractions(n: number): Array<{ pairs: Array<[number, number]>;
   const slots = Array.from({ length: n }, (_, i) => i)
   if (n % 2 === 0) return matchings(slots).map((pairs) => ({ pairs }))
   const out: Array<{ pairs: Array<[number, number]>; eps?: [number, number, number] }> = []
-  for (let a = 0; a < n; a++) for (let b = a + 1; b < n; b++) for (let c = b + 1; c < n; c++) {
-    const rest = slots.filter((s) => s !== a && s !== b && s !== c)
-    for (const pairs of matchings(rest)) out.push({ pairs, eps: [a, b, c] })
-  }
+  for (let a = 0; a < n; a++)
+    for (let b = a + 1; b < n; b++)
+      for (let c = b + 1; c < n; c++) {
+        const rest = slots.filter((s) => s !== a && s !== b && s !== c)
+        for (const pairs of matchings(rest)) out.push({ pairs, eps: [a, b, c] })
+      }
   return out
 }
 
@@ -73,7 +75,13 @@ export function candidateStructures(dim: number, fields: readonly Letter[] = ['E
     const nF = s.letters.filter((l) => fieldKind(l)).length
     return [nT, -nF, s.spin ? 1 : 0, s.eps ? 1 : 0]
   }
-  const all = [...structuresOn(nice, anyParity), ...structuresOn(words.filter((w) => w.includes('T')), anyParity)]
+  const all = [
+    ...structuresOn(nice, anyParity),
+    ...structuresOn(
+      words.filter((w) => w.includes('T')),
+      anyParity,
+    ),
+  ]
   return all
     .map((s, i) => ({ s, i, k: key(s) }))
     .sort((x, y) => {
@@ -112,14 +120,22 @@ export function tracedCombos(dim: number, fields: readonly Letter[], anyParity =
   if (dim === 4) return structuresOn(pairs, anyParity).map((s) => [{ coef: 1, s: { ...s, trace: [0, 2] } }])
   if (dim !== 5) return []
   const out: Combo[] = []
-  for (const s of structuresOn(pairs.map((p) => [...p, 'D' as Letter]), anyParity)) out.push([{ coef: 1, s: { ...s, trace: [0, 2] } }])
-  for (const d of ['D', 'T'] as const) for (const p of pairs) {
-    // tr([d, F1] F2) = tr(d F1 F2) − tr(F1 d F2), both acting on the constant 1
-    for (const s of structuresOn([[d, p[0]!, p[1]!]], anyParity)) {
-      const swapped = swapFirstTwo(s)
-      out.push([{ coef: 1, s: { ...s, trace: [0, 3] } }, { coef: -1, s: { ...swapped, trace: [0, 3] } }])
+  for (const s of structuresOn(
+    pairs.map((p) => [...p, 'D' as Letter]),
+    anyParity,
+  ))
+    out.push([{ coef: 1, s: { ...s, trace: [0, 2] } }])
+  for (const d of ['D', 'T'] as const)
+    for (const p of pairs) {
+      // tr([d, F1] F2) = tr(d F1 F2) − tr(F1 d F2), both acting on the constant 1
+      for (const s of structuresOn([[d, p[0]!, p[1]!]], anyParity)) {
+        const swapped = swapFirstTwo(s)
+        out.push([
+          { coef: 1, s: { ...s, trace: [0, 3] } },
+          { coef: -1, s: { ...swapped, trace: [0, 3] } },
+        ])
+      }
     }
-  }
   return out
 }
 
@@ -135,7 +151,8 @@ function swapFirstTwo(s: Structure): Structure {
     return r < a ? off + b + r : off + (r - a)
   }
   return {
-    letters: [s.letters[1]!, s.letters[0]!, ...s.letters.slice(2)], spin: s.spin,
+    letters: [s.letters[1]!, s.letters[0]!, ...s.letters.slice(2)],
+    spin: s.spin,
     pairs: s.pairs.map(([x, y]) => [map(x), map(y)] as [number, number]),
     eps: s.eps ? (s.eps.map(map) as [number, number, number]) : undefined,
   }

@@ -17,7 +17,10 @@ export function structureLatex(s: Structure, names?: readonly string[]): string 
   const label = new Array<string>(n).fill('?')
   let next = 0
   if (s.eps) for (const slot of s.eps) label[slot] = LABELS[next++]!
-  for (const [a, b] of s.pairs) { label[a] = LABELS[next]!; label[b] = LABELS[next++]! }
+  for (const [a, b] of s.pairs) {
+    label[a] = LABELS[next]!
+    label[b] = LABELS[next++]!
+  }
   const parts: string[] = []
   if (s.eps) parts.push(`\\epsilon^{${s.eps.map((x) => label[x]).join('')}}`)
   let slot = 0
@@ -68,7 +71,12 @@ export function phasedReal(a: Phased): Rational {
   throw new EngineConsistencyError('phasedReal', `expected a real factor, got an imaginary one (${toString(a.r)}·i)`)
 }
 
-interface Display { sign: number; imaginary: boolean; g: number; lead: number }
+interface Display {
+  sign: number
+  imaginary: boolean
+  g: number
+  lead: number
+}
 
 function displayOf(c: Combo, antiHermitian: boolean): Display {
   const g = c.reduce((acc, t) => gcd(acc, t.coef), 0)
@@ -115,8 +123,10 @@ export function comboLatex(c: Combo, antiHermitian: boolean, field: string, name
 /** Building-block counts of a structure for a heavy field named `field`. */
 export function structureBlocks(s: Structure, field: string): Record<string, number> {
   const b: Record<string, number> = { [field]: 1, [`${field}*`]: 1 }
-  const bump = (k: string): void => { b[k] = (b[k] ?? 0) + 1 }
-  for (const l of s.letters) bump(l === 'T' ? 'D_t' : fieldKind(l) ?? l)
+  const bump = (k: string): void => {
+    b[k] = (b[k] ?? 0) + 1
+  }
+  for (const l of s.letters) bump(l === 'T' ? 'D_t' : (fieldKind(l) ?? l))
   if (s.spin) bump('sigma')
   return b
 }

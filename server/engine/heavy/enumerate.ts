@@ -88,7 +88,7 @@ export interface HeavyOptions {
 const EOM_NOTE =
   'Removed by the heavy-field EOM iD_tψ = 0: every operator with D_t acting on ψ or (by parts) on ψ†; ' +
   'their effect is moved to higher orders by a field redefinition. Antisymmetric [D_i, D_j] is written as B ' +
-  'and [D_t, D_i] as E. The gauge field\'s own EOM is not used.'
+  "and [D_t, D_i] as E. The gauge field's own EOM is not used."
 
 function termsOf(c: Combo, field: string): Array<Record<string, number>> {
   const seen = new Map<string, Record<string, number>>()
@@ -145,7 +145,11 @@ export function enumerateHeavy(input: HeavyInput, opts: HeavyOptions = {}): Heav
     heavyHeavy: [2, 4].filter((n) => n <= heavy.maxOrder).map((n) => enumerateHeavyHeavy(n, colorN, field, config.timeReversal, opts.signal)),
     heavyHeavyNote: HEAVY_HEAVY_NOTE + (anti ? ' The antiparticle pair (χ†χ)(χ†χ) follows by charge conjugation and is not listed.' : '') + (config.parity ? '' : PARITY_ODD_CONTACT),
     ...heavyLightPart(input, opts.signal),
-    eomNote: EOM_NOTE + (gauge.unseen.length ? ` Field strengths of ${gauge.unseen.join(', ')} (non-abelian groups the heavy particle does not feel) would enter through colour traces of their own and are not included.` : ''),
+    eomNote:
+      EOM_NOTE +
+      (gauge.unseen.length
+        ? ` Field strengths of ${gauge.unseen.join(', ')} (non-abelian groups the heavy particle does not feel) would enter through colour traces of their own and are not included.`
+        : ''),
     antiparticleNote: anti ? ANTIPARTICLE_CONVENTION : undefined,
   }
 }
@@ -159,18 +163,30 @@ function bilinearOrder(n: number, input: HeavyInput, gauge: HeavyGauge, config: 
   const basis = os.space.basis.map((b, i): HeavyOperator => {
     const c = os.candidates[b]!
     return {
-      id: `m${n}.${i + 1}`, order: n, sector: 'bilinear', latex: comboLatex(c.combo, c.antiHermitian, field, names),
-      terms: termsOf(c.combo, field), combo: c.combo, antiHermitian: c.antiHermitian, relations: [],
-      ...(c.parityOdd ? { parityOdd: true } : {}), ...(c.timeOdd ? { timeOdd: true } : {}),
+      id: `m${n}.${i + 1}`,
+      order: n,
+      sector: 'bilinear',
+      latex: comboLatex(c.combo, c.antiHermitian, field, names),
+      terms: termsOf(c.combo, field),
+      combo: c.combo,
+      antiHermitian: c.antiHermitian,
+      relations: [],
+      ...(c.parityOdd ? { parityOdd: true } : {}),
+      ...(c.timeOdd ? { timeOdd: true } : {}),
     }
   })
   const single = gauge.setup.factors.length === 1 && config.parity && config.timeReversal
-  const published = gauge.charged && single
-    ? publishedOperators(n, field, basis, gauge.colorN > 1 ? NONABELIAN_OPERATORS : CONVENTIONAL_OPERATORS, gauge.colorN, signal)
-    : { cards: [], spans: null, redundant: 0 }
+  const published =
+    gauge.charged && single ? publishedOperators(n, field, basis, gauge.colorN > 1 ? NONABELIAN_OPERATORS : CONVENTIONAL_OPERATORS, gauge.colorN, signal) : { cards: [], spans: null, redundant: 0 }
   return {
-    order: n, count: basis.length, basis, conventional: published.cards, conventionalSpansBasis: published.spans, conventionalRedundant: published.redundant,
-    candidates: os.candidates.length, relationRank: os.space.relationRank,
+    order: n,
+    count: basis.length,
+    basis,
+    conventional: published.cards,
+    conventionalSpansBasis: published.spans,
+    conventionalRedundant: published.redundant,
+    candidates: os.candidates.length,
+    relationRank: os.space.relationRank,
     antiparticle: heavy.antiparticle ? basis.map((b) => antiparticleCopy(b, field, heavy.antiparticle!.name)) : [],
   }
 }
@@ -182,15 +198,23 @@ function heavyLightPart(input: HeavyInput, signal?: CancelFlag): { heavyLight: H
   const { heavy } = input
   const light = (input.fields ?? []).filter((f) => lorentzKind(f) !== 'strength')
   if (light.length === 0) return { heavyLight: [] }
-  const r = enumerateHeavyLight({
-    particle: heavy.particle.name, heavy: { reps: heavy.particle.reps ?? {}, charges: heavy.particle.charges ?? {} },
-    fields: light, groups: input.groups ?? [], maxOrder: heavy.maxOrder,
-    parity: heavy.imposeParity !== false, timeReversal: heavy.imposeTimeReversal !== false,
-  }, signal)
-  const left = r.unpaired.length
-    ? ` Left out: ${r.unpaired.join(', ')} (a Weyl fermion without a partner of opposite chirality and the same charges).`
-    : ''
-  return { heavyLight: r.classes, heavyLightNote: `${HEAVY_LIGHT_NOTE}${heavy.antiparticle ? ' Operators of the antiparticle field with light fields follow from CPT and are not listed.' : ''}${left}` }
+  const r = enumerateHeavyLight(
+    {
+      particle: heavy.particle.name,
+      heavy: { reps: heavy.particle.reps ?? {}, charges: heavy.particle.charges ?? {} },
+      fields: light,
+      groups: input.groups ?? [],
+      maxOrder: heavy.maxOrder,
+      parity: heavy.imposeParity !== false,
+      timeReversal: heavy.imposeTimeReversal !== false,
+    },
+    signal,
+  )
+  const left = r.unpaired.length ? ` Left out: ${r.unpaired.join(', ')} (a Weyl fermion without a partner of opposite chirality and the same charges).` : ''
+  return {
+    heavyLight: r.classes,
+    heavyLightNote: `${HEAVY_LIGHT_NOTE}${heavy.antiparticle ? ' Operators of the antiparticle field with light fields follow from CPT and are not listed.' : ''}${left}`,
+  }
 }
 
 /**
@@ -198,12 +222,13 @@ function heavyLightPart(input: HeavyInput, signal?: CancelFlag): { heavyLight: H
  * @example enumerateHeavyTheory(parseTheory(vexoniumPreset)).orders.map((o) => o.count) // [2, 2, 7]
  * Method/reference: as enumerateHeavy.
  */
-export function enumerateHeavyTheory(
-  theory: { frame: string; groups: HeavyInput['groups']; fields?: HeavyInput['fields']; heavy?: HeavyFrame },
-  opts: HeavyOptions = {},
-): HeavyEnumeration {
+export function enumerateHeavyTheory(theory: { frame: string; groups: HeavyInput['groups']; fields?: HeavyInput['fields']; heavy?: HeavyFrame }, opts: HeavyOptions = {}): HeavyEnumeration {
   if (theory.frame !== 'heavy') throw new EngineInputError('enumerateHeavyTheory', `This theory uses the ${theory.frame} frame; heavy-particle operators need the heavy-particle frame`)
-  if (!theory.heavy) throw new EngineInputError('enumerateHeavyTheory', 'A theory in the heavy-particle frame needs its heavy particle (the particle field, the gauge group it couples to and the highest power of 1/m); declare it in the editor')
+  if (!theory.heavy)
+    throw new EngineInputError(
+      'enumerateHeavyTheory',
+      'A theory in the heavy-particle frame needs its heavy particle (the particle field, the gauge group it couples to and the highest power of 1/m); declare it in the editor',
+    )
   return enumerateHeavy({ heavy: theory.heavy, groups: theory.groups, fields: theory.fields }, opts)
 }
 

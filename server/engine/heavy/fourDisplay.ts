@@ -15,7 +15,10 @@ export function fourStructureLatex(s: FourStructure, particle: string, anti: str
   const label = new Array<string>(s.slots.length).fill('?')
   let next = 0
   if (s.eps) for (const slot of s.eps) label[slot] = LABELS[next++]!
-  for (const [a, b] of s.pairs) { label[a] = LABELS[next]!; label[b] = LABELS[next++]! }
+  for (const [a, b] of s.pairs) {
+    label[a] = LABELS[next]!
+    label[b] = LABELS[next++]!
+  }
   const p = fieldTex(particle)
   const a = fieldTex(anti)
   const names = [`${p}^\\dagger`, p, `${a}^\\dagger`, a]

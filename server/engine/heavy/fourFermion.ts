@@ -50,8 +50,14 @@ function renameFields(tex: string, particle: string, anti: string): string {
 
 function toOperator(order: number, i: number, combo: HeavyOperator['fourCombo'] & object, anti: boolean, p: string, a: string): HeavyOperator {
   return {
-    id: `ff${order}.${i + 1}`, order, sector: 'fourFermion', latex: fourComboLatex(combo, anti, order, p, a),
-    terms: fourTerms(combo, p, a), fourCombo: combo, antiHermitian: anti, relations: [],
+    id: `ff${order}.${i + 1}`,
+    order,
+    sector: 'fourFermion',
+    latex: fourComboLatex(combo, anti, order, p, a),
+    terms: fourTerms(combo, p, a),
+    fourCombo: combo,
+    antiHermitian: anti,
+    relations: [],
     source: 'enumerated (contact-vertex rank); compare Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125',
   }
 }
@@ -75,11 +81,22 @@ export function enumerateFourFermion(order: number, colorN: number, particle: st
   const combos = conv.map((c) => c.combo)
   const conventionalRank = rest.rankOf(combos)
   return {
-    order, count: space.dimension, basis, restFrameCount: rest.dimension,
-    countWithoutC: noC.dimension, restFrameCountWithoutC: restNoC.dimension, candidates: space.candidates.length,
+    order,
+    count: space.dimension,
+    basis,
+    restFrameCount: rest.dimension,
+    countWithoutC: noC.dimension,
+    restFrameCountWithoutC: restNoC.dimension,
+    candidates: space.candidates.length,
     conventional: conv.map((c) => ({
-      id: c.id, order, sector: 'fourFermion', latex: `${renameFields(c.latex, particle, anti)}/m^{${order}}`, terms: fourTerms(c.combo, particle, anti),
-      fourCombo: c.combo, relations: [], source: c.source,
+      id: c.id,
+      order,
+      sector: 'fourFermion',
+      latex: `${renameFields(c.latex, particle, anti)}/m^{${order}}`,
+      terms: fourTerms(c.combo, particle, anti),
+      fourCombo: c.combo,
+      relations: [],
+      source: c.source,
     })),
     conventionalRank,
     conventionalInBasis: space.contains(combos),

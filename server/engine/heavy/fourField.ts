@@ -33,9 +33,22 @@ export interface FieldStructure {
 /** A term: coefficient, structure, and whether it is read at the charge-conjugate point. */
 export type FieldCombo = Array<{ coef: number; s: FieldStructure; conj: boolean }>
 
-export interface FieldPoint { pt: FourPoint; b: number[]; m: number[] }
+export interface FieldPoint {
+  pt: FourPoint
+  b: number[]
+  m: number[]
+}
 
-const LEGS = { direct: [[0, 1], [2, 3]], exchanged: [[0, 3], [2, 1]] } as const
+const LEGS = {
+  direct: [
+    [0, 1],
+    [2, 3],
+  ],
+  exchanged: [
+    [0, 3],
+    [2, 1],
+  ],
+} as const
 
 function randomMatrix(F: PrimeField, rng: SeededRandom, N: number): number[] {
   if (N === 1) return [1]
@@ -78,11 +91,17 @@ function value(F: PrimeField, s: FieldStructure, x: FieldPoint): number {
   for (let code = 0; code < 3 ** n; code++) {
     const idx: number[] = []
     let r = code
-    for (let j = 0; j < n; j++) { idx.push((r % 3) + 1); r = Math.floor(r / 3) }
+    for (let j = 0; j < n; j++) {
+      idx.push((r % 3) + 1)
+      r = Math.floor(r / 3)
+    }
     if (s.pairs.some(([a, b]) => idx[a] !== idx[b])) continue
     const w = s.eps ? levi(idx[s.eps[0]]!, idx[s.eps[1]]!, idx[s.eps[2]]!) : 1
     if (w === 0) continue
-    const at = (k: Slot) => { const j = s.slots.indexOf(k); return j < 0 ? 0 : idx[j]! }
+    const at = (k: Slot) => {
+      const j = s.slots.indexOf(k)
+      return j < 0 ? 0 : idx[j]!
+    }
     const term = F.mul(F.mul(spin[0]![at('s1')]!, spin[1]![at('s2')]!), x.b[at('b') - 1]!)
     total = w > 0 ? F.add(total, term) : F.sub(total, term)
   }
@@ -100,12 +119,13 @@ export function fieldComboValue(F: PrimeField, c: FieldCombo, x: FieldPoint): nu
 /** Every structure: σ's in either bilinear, the B index, δ/ε contractions, B's colour chain. */
 export function fieldStructures(colorN: number): FieldStructure[] {
   const out: FieldStructure[] = []
-  for (const ordering of ['exchanged', 'direct'] as const) for (const chain of colorN === 1 ? [1 as const] : [1 as const, 2 as const]) {
-    for (const spin of [['s1'], ['s2'], ['s1', 's2']] as Slot[][]) {
-      const slots: Slot[] = [...spin, 'b']
-      for (const c of contractions(slots.length)) out.push({ ordering, chain, slots, pairs: c.pairs, eps: c.eps })
+  for (const ordering of ['exchanged', 'direct'] as const)
+    for (const chain of colorN === 1 ? [1 as const] : [1 as const, 2 as const]) {
+      for (const spin of [['s1'], ['s2'], ['s1', 's2']] as Slot[][]) {
+        const slots: Slot[] = [...spin, 'b']
+        for (const c of contractions(slots.length)) out.push({ ordering, chain, slots, pairs: c.pairs, eps: c.eps })
+      }
     }
-  }
   return out
 }
 
@@ -123,10 +143,13 @@ export function daggerField(s: FieldStructure): FieldStructure {
 export function fieldCandidates(colorN: number, timeReversal: boolean, chargeConjugation: boolean): Array<{ combo: FieldCombo; imaginary: boolean }> {
   const out: Array<{ combo: FieldCombo; imaginary: boolean }> = []
   for (const s of fieldStructures(colorN)) {
-    const tSign = (s.slots.length % 2 === 0 ? 1 : -1) // σ's and B, each T-odd
+    const tSign = s.slots.length % 2 === 0 ? 1 : -1 // σ's and B, each T-odd
     for (const imaginary of [false, true]) {
       if (timeReversal && imaginary !== tSign < 0) continue
-      const herm: FieldCombo = [{ coef: 1, s, conj: false }, { coef: imaginary ? -1 : 1, s: daggerField(s), conj: false }]
+      const herm: FieldCombo = [
+        { coef: 1, s, conj: false },
+        { coef: imaginary ? -1 : 1, s: daggerField(s), conj: false },
+      ]
       const combo = chargeConjugation ? [...herm, ...herm.map((t) => ({ ...t, conj: true }))] : herm
       out.push({ combo, imaginary })
     }
@@ -139,12 +162,27 @@ function latexOf(s: FieldStructure, p: string, a: string, colorN: number): strin
   let next = 0
   const L = 'ijk'
   if (s.eps) for (const x of s.eps) lab[x] = L[next++]!
-  for (const [x, y] of s.pairs) { lab[x] = L[next]!; lab[y] = L[next++]! }
-  const at = (k: Slot) => { const j = s.slots.indexOf(k); return j < 0 ? '' : ` \\sigma^{${lab[j]}}` }
+  for (const [x, y] of s.pairs) {
+    lab[x] = L[next]!
+    lab[y] = L[next++]!
+  }
+  const at = (k: Slot) => {
+    const j = s.slots.indexOf(k)
+    return j < 0 ? '' : ` \\sigma^{${lab[j]}}`
+  }
   const B = ` B^{${lab[s.slots.indexOf('b')]}}`
   const [P, A] = [fieldTex(p), fieldTex(a)]
-  const legs = s.ordering === 'direct' ? [[`${P}^\\dagger`, P], [`${A}^\\dagger`, A]] : [[`${P}^\\dagger`, A], [`${A}^\\dagger`, P]]
-  const bil = (i: 0 | 1) => `(${legs[i]![0]}${at(i === 0 ? 's1' : 's2')}${s.chain === i + 1 || colorN === 1 && i === 0 ? B : ''} ${legs[i]![1]})`
+  const legs =
+    s.ordering === 'direct'
+      ? [
+          [`${P}^\\dagger`, P],
+          [`${A}^\\dagger`, A],
+        ]
+      : [
+          [`${P}^\\dagger`, A],
+          [`${A}^\\dagger`, P],
+        ]
+  const bil = (i: 0 | 1) => `(${legs[i]![0]}${at(i === 0 ? 's1' : 's2')}${s.chain === i + 1 || (colorN === 1 && i === 0) ? B : ''} ${legs[i]![1]})`
   return `${s.eps ? `\\epsilon^{${s.eps.map((x) => lab[x]).join('')}}\\,` : ''}${bil(0)}${bil(1)}`
 }
 
@@ -152,24 +190,35 @@ function latexOf(s: FieldStructure, p: string, a: string, colorN: number): strin
  * The four-fermion operators with one field strength at 1/m⁴, as a basis.
  * @example enumerateFourField(1, 'psi', 'chi').basis.length // 1: (ψ†σ·Bχ)(χ†ψ) + h.c. in QED
  */
-export function enumerateFourField(colorN: number, particle: string, anti: string, opts: { timeReversal?: boolean; chargeConjugation?: boolean; signal?: CancelFlag } = {}): { basis: HeavyOperator[]; combos: FieldCombo[] } {
+export function enumerateFourField(
+  colorN: number,
+  particle: string,
+  anti: string,
+  opts: { timeReversal?: boolean; chargeConjugation?: boolean; signal?: CancelFlag } = {},
+): { basis: HeavyOperator[]; combos: FieldCombo[] } {
   const cands = fieldCandidates(colorN, opts.timeReversal !== false, opts.chargeConjugation !== false)
-  const { basis } = contactRank({
-    size: cands.length,
-    sample: (F, rng) => sampleFieldPoint(F, rng, colorN),
-    values: (F, x) => cands.map((c) => fieldComboValue(F, c.combo, x)),
-  }, { signal: opts.signal, label: 'four-fermion operators with a field strength' })
+  const { basis } = contactRank(
+    {
+      size: cands.length,
+      sample: (F, rng) => sampleFieldPoint(F, rng, colorN),
+      values: (F, x) => cands.map((c) => fieldComboValue(F, c.combo, x)),
+    },
+    { signal: opts.signal, label: 'four-fermion operators with a field strength' },
+  )
   return {
     combos: basis.map((b) => cands[b]!.combo),
     basis: basis.map((b, i): HeavyOperator => {
       const c = cands[b]!
       const main = latexOf(c.combo[0]!.s, particle, anti, colorN)
       return {
-        id: `ffB4.${i + 1}`, order: 4, sector: 'fourFermion', latex: `${c.imaginary ? 'i' : ''}\\left[${main} + \\mathrm{h.c.}${opts.chargeConjugation !== false ? ' + \\mathrm{C}' : ''}\\right]/m^{4}`,
+        id: `ffB4.${i + 1}`,
+        order: 4,
+        sector: 'fourFermion',
+        latex: `${c.imaginary ? 'i' : ''}\\left[${main} + \\mathrm{h.c.}${opts.chargeConjugation !== false ? ' + \\mathrm{C}' : ''}\\right]/m^{4}`,
         terms: [{ [particle]: 1, [`${particle}*`]: 1, [anti]: 1, [`${anti}*`]: 1, B: 1, ...(c.combo[0]!.s.slots.length > 1 ? { sigma: c.combo[0]!.s.slots.length - 1 } : {}) }],
-        antiHermitian: c.imaginary, relations: [],
+        antiHermitian: c.imaginary,
+        relations: [],
       }
     }),
   }
 }
-

@@ -38,9 +38,7 @@ export interface FourSpaceOptions {
  * T-even Hermitian operator is O + O† (n even) or i(O − O†) (n odd). C-even: X + C(X).
  * @example symmetricFourCandidates(0, ['singlet']).length // 4
  */
-export function symmetricFourCandidates(
-  nDeriv: number, colours: readonly Colour[], sym: { timeReversal?: boolean; chargeConjugation?: boolean } = {},
-): FourCandidate[] {
+export function symmetricFourCandidates(nDeriv: number, colours: readonly Colour[], sym: { timeReversal?: boolean; chargeConjugation?: boolean } = {}): FourCandidate[] {
   const out: FourCandidate[] = []
   const seen = new Set<string>()
   for (const s of fourCandidates(nDeriv, colours)) {
@@ -83,9 +81,16 @@ export class FourSpace {
   private readonly data: PrimeData[]
   private readonly set = PrimeSet.working()
 
-  constructor(readonly candidates: readonly FourCandidate[], readonly opts: FourSpaceOptions = {}) {
+  constructor(
+    readonly candidates: readonly FourCandidate[],
+    readonly opts: FourSpaceOptions = {},
+  ) {
     this.data = this.set.fields.map((F, i) => this.sample(F, new SeededRandom((opts.seed ?? 20261202) + 104729 * i)))
-    this.basis = this.set.echelon(this.data.map((d) => d.rows), { fn: 'FourSpace' }, opts.signal).pivots
+    this.basis = this.set.echelon(
+      this.data.map((d) => d.rows),
+      { fn: 'FourSpace' },
+      opts.signal,
+    ).pivots
   }
 
   get dimension(): number {
@@ -105,13 +110,18 @@ export class FourSpace {
       while (d.points.length < want) {
         if (this.opts.signal?.aborted) throw new EngineCancelledError('four-fermion enumeration')
         const pt = randomFourPoint(F, rng, this.opts.colorN ?? 1, this.opts.restFrame)
-        d.points.push(pt); d.tables.push(pointTables(F, pt))
+        d.points.push(pt)
+        d.tables.push(pointTables(F, pt))
         const j = d.points.length - 1
         d.rows.push(this.candidates.map((c) => this.value(d, c.combo, j)))
       }
       const r = rref(F, d.rows, this.opts.signal).rank
       if (r <= d.points.length - 3) {
-        if (!extraDone && this.opts.extraPoints) { extraDone = true; want = d.points.length + this.opts.extraPoints; continue }
+        if (!extraDone && this.opts.extraPoints) {
+          extraDone = true
+          want = d.points.length + this.opts.extraPoints
+          continue
+        }
         return d
       }
       want *= 2
@@ -123,10 +133,7 @@ export class FourSpace {
    * with the enumerated basis; the primes must agree.
    */
   rankOf(combos: readonly FourCombo[], withBasis = false): number {
-    const matrices = this.data.map((d) => d.points.map((_, j) => [
-      ...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []),
-      ...combos.map((c) => this.value(d, c, j)),
-    ]))
+    const matrices = this.data.map((d) => d.points.map((_, j) => [...(withBasis ? this.basis.map((b) => d.rows[j]![b]!) : []), ...combos.map((c) => this.value(d, c, j))]))
     return this.set.rank(matrices, { fn: 'FourSpace.rankOf' }, this.opts.signal)
   }
 

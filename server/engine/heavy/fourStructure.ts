@@ -111,8 +111,14 @@ export function parseFour(text: string): FourStructure {
   const labels: string[] = []
   let epsLabels: string[] | undefined
   for (const tok of text.trim().split(/\s+/).filter(Boolean)) {
-    if (tok === 'ex') { ordering = 'exchanged'; continue }
-    if (tok === 'oct') { colour = 'octet'; continue }
+    if (tok === 'ex') {
+      ordering = 'exchanged'
+      continue
+    }
+    if (tok === 'oct') {
+      colour = 'octet'
+      continue
+    }
     const m = /^(s1|s2|d[0-3]|eps)_([a-z]+)$/.exec(tok)
     if (!m) throw new EngineConsistencyError('parseFour', `unknown token "${tok}" in "${text}"`)
     if (m[1] === 'eps') {
@@ -136,7 +142,10 @@ function contractionOf(labels: string[], epsLabels: string[] | undefined, text: 
     if (epsLabels?.includes(lab)) return
     const prev = open.get(lab)
     if (prev === undefined) open.set(lab, slot)
-    else { pairs.push([prev, slot]); open.delete(lab) }
+    else {
+      pairs.push([prev, slot])
+      open.delete(lab)
+    }
   })
   if (open.size > 0) throw new EngineConsistencyError('parseFour', `index ${[...open.keys()].join(',')} is not contracted in "${text}"`)
   if (!epsLabels) return { pairs }
@@ -169,11 +178,16 @@ function permutationsWithin(groups: number[][]): number[][] {
 export function canonicalFour(s: FourStructure): { sign: number; s: FourStructure; key: string } {
   const order = s.slots.map((x, i) => ({ r: KIND_RANK(x), i })).sort((a, b) => a.r - b.r || a.i - b.i)
   const groups: number[][] = []
-  order.forEach((o, j) => { if (j > 0 && order[j - 1]!.r === o.r) groups[groups.length - 1]!.push(o.i); else groups.push([o.i]) })
+  order.forEach((o, j) => {
+    if (j > 0 && order[j - 1]!.r === o.r) groups[groups.length - 1]!.push(o.i)
+    else groups.push([o.i])
+  })
   let best: { sign: number; s: FourStructure; key: string } | undefined
   for (const perm of permutationsWithin(groups)) {
     const pos = new Array<number>(perm.length)
-    perm.forEach((old, j) => { pos[old] = j })
+    perm.forEach((old, j) => {
+      pos[old] = j
+    })
     const pairs = s.pairs.map(([a, b]) => [Math.min(pos[a]!, pos[b]!), Math.max(pos[a]!, pos[b]!)] as [number, number]).sort((x, y) => x[0] - y[0])
     let sign = 1
     let eps: [number, number, number] | undefined
@@ -210,9 +224,15 @@ export function expandArrows(text: string): Array<[number, string]> {
   let out: Array<[number, string[]]> = [[1, []]]
   for (const tok of text.trim().split(/\s+/)) {
     const m = /^([LR])_([a-z])$/.exec(tok)
-    if (!m) { out = out.map(([c, t]) => [c, [...t, tok]]); continue }
+    if (!m) {
+      out = out.map(([c, t]) => [c, [...t, tok]])
+      continue
+    }
     const [plus, minus] = m[1] === 'L' ? ['d3', 'd0'] : ['d1', 'd2']
-    out = out.flatMap(([c, t]): Array<[number, string[]]> => [[c, [...t, `${plus}_${m[2]}`]], [-c, [...t, `${minus}_${m[2]}`]]])
+    out = out.flatMap(([c, t]): Array<[number, string[]]> => [
+      [c, [...t, `${plus}_${m[2]}`]],
+      [-c, [...t, `${minus}_${m[2]}`]],
+    ])
   }
   return out.map(([c, t]) => [c, t.join(' ')])
 }

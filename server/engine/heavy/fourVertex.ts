@@ -53,14 +53,25 @@ function pauli(F: PrimeField): number[][] {
   const hit = PAULI.get(F.p)
   if (hit) return hit
   const i = F.sqrtMinusOne()
-  const m = [[1, 0, 0, 1], [0, 1, 1, 0], [0, F.neg(i), i, 0], [1, 0, 0, F.p - 1]]
+  const m = [
+    [1, 0, 0, 1],
+    [0, 1, 1, 0],
+    [0, F.neg(i), i, 0],
+    [1, 0, 0, F.p - 1],
+  ]
   PAULI.set(F.p, m)
   return m
 }
 
 const BILINEAR_LEGS: Record<FourStructure['ordering'], [[number, number], [number, number]]> = {
-  direct: [[0, 1], [2, 3]],
-  exchanged: [[0, 3], [2, 1]],
+  direct: [
+    [0, 1],
+    [2, 3],
+  ],
+  exchanged: [
+    [0, 3],
+    [2, 1],
+  ],
 }
 
 function dot(F: PrimeField, a: number[], b: number[]): number {
@@ -86,11 +97,12 @@ export interface PointTables {
 
 export function pointTables(F: PrimeField, pt: FourPoint): PointTables {
   const sig = pauli(F)
-  const bil = (o: number, i: number): number[] => sig.map((m) => {
-    const [a, b] = pt.u[o]!
-    const [c, d] = pt.u[i]!
-    return F.add(F.mul(a!, F.add(F.mul(m[0]!, c!), F.mul(m[1]!, d!))), F.mul(b!, F.add(F.mul(m[2]!, c!), F.mul(m[3]!, d!))))
-  })
+  const bil = (o: number, i: number): number[] =>
+    sig.map((m) => {
+      const [a, b] = pt.u[o]!
+      const [c, d] = pt.u[i]!
+      return F.add(F.mul(a!, F.add(F.mul(m[0]!, c!), F.mul(m[1]!, d!))), F.mul(b!, F.add(F.mul(m[2]!, c!), F.mul(m[3]!, d!))))
+    })
   const spin = {} as PointTables['spin']
   for (const o of ['direct', 'exchanged'] as const) spin[o] = BILINEAR_LEGS[o].map(([x, y]) => bil(x, y))
   return { spin }
@@ -100,14 +112,31 @@ export function pointTables(F: PrimeField, pt: FourPoint): PointTables {
 function assignments(s: FourStructure): Array<[number[], number]> {
   let out: Array<[number[], number]> = [[new Array<number>(s.slots.length).fill(0), 1]]
   for (const [a, b] of s.pairs) {
-    out = out.flatMap(([v, w]) => [1, 2, 3].map((i): [number[], number] => { const x = v.slice(); x[a] = i; x[b] = i; return [x, w] }))
+    out = out.flatMap(([v, w]) =>
+      [1, 2, 3].map((i): [number[], number] => {
+        const x = v.slice()
+        x[a] = i
+        x[b] = i
+        return [x, w]
+      }),
+    )
   }
   if (s.eps) {
     const [a, b, c] = s.eps
     out = out.flatMap(([v, w]) => {
       const r: Array<[number[], number]> = []
-      for (const p of [[1, 2, 3], [2, 3, 1], [3, 1, 2], [2, 1, 3], [1, 3, 2], [3, 2, 1]]) {
-        const x = v.slice(); x[a] = p[0]!; x[b] = p[1]!; x[c] = p[2]!
+      for (const p of [
+        [1, 2, 3],
+        [2, 3, 1],
+        [3, 1, 2],
+        [2, 1, 3],
+        [1, 3, 2],
+        [3, 2, 1],
+      ]) {
+        const x = v.slice()
+        x[a] = p[0]!
+        x[b] = p[1]!
+        x[c] = p[2]!
         r.push([x, w * levi(p[0]!, p[1]!, p[2]!)])
       }
       return r

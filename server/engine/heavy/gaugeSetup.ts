@@ -42,7 +42,10 @@ export function heavyGaugeSetup(heavy: HeavyFrame, groups: readonly TheoryGroupL
   const primary = groups?.find((x) => x.name === heavy.gaugeGroup)
   if (groups && !primary) throw new EngineInputError('enumerateHeavy', `The heavy particle couples to "${heavy.gaugeGroup}", which is not a symmetry of the theory; choose one of its gauge groups`)
   if (primary && primary.type !== 'U1' && primary.type !== 'SU') {
-    throw new EngineInputError('enumerateHeavy', `The heavy particle couples to "${heavy.gaugeGroup}", a ${primary.type === 'Z' ? `discrete Z_${primary.n ?? 'n'}` : primary.type} group; it needs a U(1) or SU(N) gauge group`)
+    throw new EngineInputError(
+      'enumerateHeavy',
+      `The heavy particle couples to "${heavy.gaugeGroup}", a ${primary.type === 'Z' ? `discrete Z_${primary.n ?? 'n'}` : primary.type} group; it needs a U(1) or SU(N) gauge group`,
+    )
   }
   const all = groups ?? [{ name: heavy.gaugeGroup, type: 'U1', gauge: true }]
   const su: Array<{ name: string; n: number }> = []
@@ -53,7 +56,10 @@ export function heavyGaugeSetup(heavy: HeavyFrame, groups: readonly TheoryGroupL
     if (g.type === 'U1' && !isZeroCharge(heavy.particle.charges?.[g.name])) u1.push(g.name)
   }
   if (su.length > 1) {
-    throw new EngineInputError('enumerateHeavy', `The heavy particle is charged under two non-abelian groups (${su.map((s) => s.name).join(', ')}); one SU(N) together with any number of U(1) groups is supported`)
+    throw new EngineInputError(
+      'enumerateHeavy',
+      `The heavy particle is charged under two non-abelian groups (${su.map((s) => s.name).join(', ')}); one SU(N) together with any number of U(1) groups is supported`,
+    )
   }
   const strengths = fields.filter((f) => lorentzKind(f) === 'strength').map((f) => (f as { gaugeOf?: string }).gaugeOf)
   const external = all.filter((g) => g.type === 'U1' && !u1.includes(g.name) && strengths.includes(g.name)).map((g) => g.name)

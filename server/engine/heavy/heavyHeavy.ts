@@ -39,7 +39,12 @@ function heavyPairPoint(F: PrimeField, rng: SeededRandom, colorN: number, restFr
   return { ...pt, k: [pt.k[0]!, pt.k[1]!, neg(pt.k[0]!), neg(pt.k[1]!)] }
 }
 
-const PERMS: Array<[number[], number]> = [[[0, 1, 2, 3], 1], [[2, 1, 0, 3], -1], [[0, 3, 2, 1], -1], [[2, 3, 0, 1], 1]]
+const PERMS: Array<[number[], number]> = [
+  [[0, 1, 2, 3], 1],
+  [[2, 1, 0, 3], -1],
+  [[0, 3, 2, 1], -1],
+  [[2, 3, 0, 1], 1],
+]
 
 /** Antisymmetrised vertex of a combination (the operator's matrix element between identical particles). */
 function antisymmetrised(F: PrimeField, c: FourCombo, pt: FourPoint): number {
@@ -53,11 +58,14 @@ function antisymmetrised(F: PrimeField, c: FourCombo, pt: FourPoint): number {
 }
 
 function rankOf(combos: FourCombo[], colorN: number, restFrame: boolean, signal?: CancelFlag): number[] {
-  return contactRank({
-    size: combos.length,
-    sample: (F, rng) => heavyPairPoint(F, rng, colorN, restFrame),
-    values: (F, pt) => combos.map((c) => antisymmetrised(F, c, pt)),
-  }, { signal, label: 'heavy–heavy contact operators' }).basis
+  return contactRank(
+    {
+      size: combos.length,
+      sample: (F, rng) => heavyPairPoint(F, rng, colorN, restFrame),
+      values: (F, pt) => combos.map((c) => antisymmetrised(F, c, pt)),
+    },
+    { signal, label: 'heavy–heavy contact operators' },
+  ).basis
 }
 
 /**
@@ -70,15 +78,32 @@ function rankOf(combos: FourCombo[], colorN: number, restFrame: boolean, signal?
 export function enumerateHeavyHeavy(order: number, colorN: number, particle: string, timeReversal: boolean, signal?: CancelFlag): HeavyHeavyOrder {
   if (order !== 2 && order !== 4) throw new EngineInputError('enumerateHeavyHeavy', `Heavy–heavy contact operators (parity even) come at orders 2 and 4 in 1/m, not at order ${order}`)
   const colours = colorN === 1 ? (['singlet'] as const) : (['singlet', 'octet'] as const)
-  const cands = symmetricFourCandidates(order - 2, colours, { chargeConjugation: false, timeReversal })
-    .filter((c) => c.combo.every((t) => t.s.ordering === 'direct'))
-  const basis = rankOf(cands.map((c) => c.combo), colorN, false, signal)
-  const rest = rankOf(cands.map((c) => c.combo), colorN, true, signal)
+  const cands = symmetricFourCandidates(order - 2, colours, { chargeConjugation: false, timeReversal }).filter((c) => c.combo.every((t) => t.s.ordering === 'direct'))
+  const basis = rankOf(
+    cands.map((c) => c.combo),
+    colorN,
+    false,
+    signal,
+  )
+  const rest = rankOf(
+    cands.map((c) => c.combo),
+    colorN,
+    true,
+    signal,
+  )
   return {
-    order, count: basis.length, restFrameCount: rest.length,
+    order,
+    count: basis.length,
+    restFrameCount: rest.length,
     basis: basis.map((b, i): HeavyOperator => ({
-      id: `hh${order}.${i + 1}`, order, sector: 'heavyHeavy', latex: fourComboLatex(cands[b]!.combo, cands[b]!.antiHermitian, order, particle, particle),
-      terms: fourTerms(cands[b]!.combo, particle, particle), fourCombo: cands[b]!.combo, antiHermitian: cands[b]!.antiHermitian, relations: [],
+      id: `hh${order}.${i + 1}`,
+      order,
+      sector: 'heavyHeavy',
+      latex: fourComboLatex(cands[b]!.combo, cands[b]!.antiHermitian, order, particle, particle),
+      terms: fourTerms(cands[b]!.combo, particle, particle),
+      fourCombo: cands[b]!.combo,
+      antiHermitian: cands[b]!.antiHermitian,
+      relations: [],
     })),
   }
 }

@@ -37,7 +37,7 @@ export interface HeavyLightInput {
 
 export const HEAVY_LIGHT_NOTE =
   'Heavy–light contact operators (ψ†Γψ)(light fields), enumerated by the rank of their contact vertex: heavy legs static ' +
-  '(the heavy field\'s EOM), light legs massless and on shell (their own EOM), all momenta summing to zero (integration by ' +
+  "(the heavy field's EOM), light legs massless and on shell (their own EOM), all momenta summing to zero (integration by " +
   'parts). Light fermions enter as Dirac fermions (a left- and a right-handed field with the same charges); scalars are ' +
   'taken P-even. Gauge fields are absent at this vertex, so operators differing by field strengths are identified (the ' +
   'heavy–light operators with E or B start two orders higher and are not listed). Light flavors are counted for one flavor.'
@@ -72,11 +72,17 @@ function candidates(content: LightContent, structures: LightStructure[], timeRev
     if (!d) throw new EngineConsistencyError('heavyLight', `no conjugate colour structure in content ${content.key}`)
     for (const imaginary of [false, true]) {
       if (timeReversal && imaginary !== lightTimeSign(s) < 0) continue
-      const raw = simplify([{ coef: 1, s }, { coef: imaginary ? -d.coef : d.coef, s: d.s }])
+      const raw = simplify([
+        { coef: 1, s },
+        { coef: imaginary ? -d.coef : d.coef, s: d.s },
+      ])
       if (raw.length === 0) continue
       const g = raw.reduce((acc, t) => gcd(acc, t.coef), 0) * Math.sign(raw[0]!.coef)
       const combo = raw.map((t) => ({ coef: t.coef / g, s: t.s }))
-      const key = combo.map((t) => `${t.coef}:${lightKey(t.s)!.key}`).sort().join('+')
+      const key = combo
+        .map((t) => `${t.coef}:${lightKey(t.s)!.key}`)
+        .sort()
+        .join('+')
       if (seen.has(key)) continue
       seen.add(key)
       out.push({ combo, imaginary })
@@ -98,11 +104,21 @@ function model(content: LightContent, combos: LightCombo[], groupNs: number[], p
 
 function checkColour(content: LightContent, input: HeavyLightInput, groupNs: number[]): void {
   const expected = colourInvariantCount(content, input.groups, input.heavy)
-  const base = { heavySpin: false, tau: content.legs.some((l) => l.field!.kind === 'dirac') ? 3 : null, diracSpin: false, time: new Array<number>(content.legs.length + 2).fill(0), slots: [], pairs: [] }
+  const base = {
+    heavySpin: false,
+    tau: content.legs.some((l) => l.field!.kind === 'dirac') ? 3 : null,
+    diracSpin: false,
+    time: new Array<number>(content.legs.length + 2).fill(0),
+    slots: [],
+    pairs: [],
+  }
   const combos = content.colours.map((_, colour) => [{ coef: 1, s: { ...base, colour } }])
   const got = contactRank(model(content, combos, groupNs, [[0, 1, ...content.legs.map((_, i) => i + 2)]]), { label: 'heavy–light colour' }).basis.length
   if (got !== expected) {
-    throw new EngineInputError('heavyLight', `The light fields ${content.key} form ${expected} colour invariants with the heavy pair, but only ${got} can be built from δ and the ε of SU(2); heavy–light operators that need an ε of SU(N ≥ 3) are not supported`)
+    throw new EngineInputError(
+      'heavyLight',
+      `The light fields ${content.key} form ${expected} colour invariants with the heavy pair, but only ${got} can be built from δ and the ε of SU(2); heavy–light operators that need an ε of SU(N ≥ 3) are not supported`,
+    )
   }
 }
 
@@ -118,7 +134,10 @@ export function enumerateHeavyLight(input: HeavyLightInput, signal?: CancelFlag)
   const classes: HeavyLightClass[] = []
   for (const content of contents) {
     if (done.has(content.key)) continue
-    const conjKey = content.legs.map((l) => `${l.field!.name}${l.field!.kind !== 'realScalar' && !l.conj ? '*' : ''}`).sort().join(' ')
+    const conjKey = content.legs
+      .map((l) => `${l.field!.name}${l.field!.kind !== 'realScalar' && !l.conj ? '*' : ''}`)
+      .sort()
+      .join(' ')
     done.add(conjKey)
     checkColour(content, input, groupNs)
     const perms = identicalPermutations(content)
@@ -126,13 +145,26 @@ export function enumerateHeavyLight(input: HeavyLightInput, signal?: CancelFlag)
       if (signal?.aborted) throw new EngineCancelledError('heavy–light enumeration')
       const nd = order + 1 - content.dim2 / 2
       const cands = candidates(content, lightStructures(content, nd, input.parity), input.timeReversal)
-      const { basis } = contactRank(model(content, cands.map((c) => c.combo), groupNs, perms), { signal, label: 'heavy–light operators' })
+      const { basis } = contactRank(
+        model(
+          content,
+          cands.map((c) => c.combo),
+          groupNs,
+          perms,
+        ),
+        { signal, label: 'heavy–light operators' },
+      )
       if (basis.length === 0) continue
       const key = `${input.particle}* ${input.particle} ${content.key} (1/m^${order})`
       const ops = basis.map((b, i): HeavyOperator => ({
-        id: `hl${order}.${content.key.replace(/\s+/g, '.')}.${i + 1}`, order, sector: 'heavyLight',
+        id: `hl${order}.${content.key.replace(/\s+/g, '.')}.${i + 1}`,
+        order,
+        sector: 'heavyLight',
         latex: lightComboLatex(cands[b]!.combo, cands[b]!.imaginary, content, fieldTex(input.particle), order),
-        terms: lightTerms(cands[b]!.combo, content, input.particle), lightCombo: cands[b]!.combo, antiHermitian: cands[b]!.imaginary, relations: [],
+        terms: lightTerms(cands[b]!.combo, content, input.particle),
+        lightCombo: cands[b]!.combo,
+        antiHermitian: cands[b]!.imaginary,
+        relations: [],
       }))
       const perOp = content.selfConjugate || input.timeReversal ? 1 : 2
       classes.push({ key, order, content: content.key, count: ops.length, realParameters: perOp * ops.length, basis: ops })

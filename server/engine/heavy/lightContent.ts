@@ -10,11 +10,20 @@ import { characterProduct, singletCount, suConjugate, suWeights, trivialCharacte
 import { chargeOf, type LightField, type TheoryGroupLike } from './lightFields'
 
 /** One leg: the heavy field's conjugate (0), the heavy field (1), or a light field or its conjugate. */
-export interface Leg { field: LightField | null; conj: boolean }
+export interface Leg {
+  field: LightField | null
+  conj: boolean
+}
 
-export interface ColourPair { a: number; b: number; eps: boolean }
+export interface ColourPair {
+  a: number
+  b: number
+  eps: boolean
+}
 /** Per SU group with charged legs: the list of index pairings of one invariant tensor. */
-export interface ColourTensor { groups: Array<{ n: number; pairs: ColourPair[] }> }
+export interface ColourTensor {
+  groups: Array<{ n: number; pairs: ColourPair[] }>
+}
 
 export interface LightContent {
   /** Light legs (the heavy legs 0 = ψ†, 1 = ψ come first in every leg list). */
@@ -26,12 +35,22 @@ export interface LightContent {
   colours: ColourTensor[]
 }
 
-export interface HeavyQuantumNumbers { reps: Record<string, number[]>; charges: Record<string, string | number> }
+export interface HeavyQuantumNumbers {
+  reps: Record<string, number[]>
+  charges: Record<string, string | number>
+}
 
 const legName = (l: Leg): string => `${l.field!.name}${l.conj ? '*' : ''}`
 
 function legOptions(fields: readonly LightField[]): Leg[] {
-  return fields.flatMap((f) => (f.kind === 'realScalar' ? [{ field: f, conj: false }] : [{ field: f, conj: false }, { field: f, conj: true }]))
+  return fields.flatMap((f) =>
+    f.kind === 'realScalar'
+      ? [{ field: f, conj: false }]
+      : [
+          { field: f, conj: false },
+          { field: f, conj: true },
+        ],
+  )
 }
 
 /** Multisets of legs with total doubled dimension ≤ max2 (indices non-decreasing). */
@@ -72,7 +91,9 @@ function repOf(leg: Leg, i: number, group: TheoryGroupLike, heavy: HeavyQuantumN
 function singlets(all: readonly Leg[], group: TheoryGroupLike, heavy: HeavyQuantumNumbers): number {
   const n = group.n ?? 2
   let ch = trivialCharacter(n)
-  all.forEach((l, i) => { ch = characterProduct(ch, suWeights(n, repOf(l, i, group, heavy))) })
+  all.forEach((l, i) => {
+    ch = characterProduct(ch, suWeights(n, repOf(l, i, group, heavy)))
+  })
   return singletCount(n, ch)
 }
 
@@ -81,7 +102,10 @@ function indexType(labels: readonly number[], n: number, what: string, group: st
   const one = labels.reduce((s, x) => s + x, 0) === 1
   if (one && labels[0] === 1) return 'up'
   if (one && labels[n - 2] === 1) return 'down'
-  throw new EngineInputError('heavyLight', `${what.charAt(0).toUpperCase()}${what.slice(1)} sits in [${labels.join(',')}] of ${group}; heavy–light operators support only singlets, fundamentals and antifundamentals`)
+  throw new EngineInputError(
+    'heavyLight',
+    `${what.charAt(0).toUpperCase()}${what.slice(1)} sits in [${labels.join(',')}] of ${group}; heavy–light operators support only singlets, fundamentals and antifundamentals`,
+  )
 }
 
 function pairings(items: number[], types: Map<number, 'up' | 'down'>, n: number): ColourPair[][] {
@@ -121,7 +145,10 @@ function colourTensors(all: readonly Leg[], groups: readonly TheoryGroupLike[], 
  * @example lightContents(electronOnly, qedGroups, heavyQN, 6).map(c => c.key) // ["e e*"]
  */
 export function lightContents(fields: readonly LightField[], groups: readonly TheoryGroupLike[], heavy: HeavyQuantumNumbers, max2: number): LightContent[] {
-  const heavyLegs: Leg[] = [{ field: null, conj: true }, { field: null, conj: false }]
+  const heavyLegs: Leg[] = [
+    { field: null, conj: true },
+    { field: null, conj: false },
+  ]
   const out: LightContent[] = []
   for (const legs of multisets(legOptions(fields), max2)) {
     if (legs.length === 0 || !diracShapeOk(legs) || !neutral(legs, groups)) continue
@@ -132,8 +159,11 @@ export function lightContents(fields: readonly LightField[], groups: readonly Th
     const names = legs.map(legName)
     const conjNames = legs.map((l) => (l.field!.kind === 'realScalar' ? legName(l) : legName({ ...l, conj: !l.conj })))
     out.push({
-      legs, key: names.join(' '), dim2: legs.reduce((s, l) => s + l.field!.dim2, 0),
-      selfConjugate: [...names].sort().join(' ') === [...conjNames].sort().join(' '), colours,
+      legs,
+      key: names.join(' '),
+      dim2: legs.reduce((s, l) => s + l.field!.dim2, 0),
+      selfConjugate: [...names].sort().join(' ') === [...conjNames].sort().join(' '),
+      colours,
     })
   }
   return out
@@ -144,4 +174,3 @@ export function colourInvariantCount(content: LightContent, groups: readonly The
   const all: Leg[] = [{ field: null, conj: true }, { field: null, conj: false }, ...content.legs]
   return groups.filter((g) => g.type === 'SU').reduce((s, g) => s * singlets(all, g, heavy), 1)
 }
-

@@ -26,7 +26,10 @@ function labels(s: LightStructure): string[] {
   const out = new Array<string>(s.slots.length).fill('?')
   let next = 0
   if (s.eps) for (const x of s.eps) out[x] = LABELS[next++]!
-  for (const [a, b] of s.pairs) { out[a] = LABELS[next]!; out[b] = LABELS[next++]! }
+  for (const [a, b] of s.pairs) {
+    out[a] = LABELS[next]!
+    out[b] = LABELS[next++]!
+  }
   return out
 }
 
@@ -35,13 +38,14 @@ function colourIndices(s: LightStructure, content: LightContent, nLegs: number):
   if (content.colours.length < 2) return { up, eps: '' }
   let next = 0
   let eps = ''
-  for (const g of content.colours[s.colour]!.groups) for (const p of g.pairs) {
-    const c = COLOUR[next++ % COLOUR.length]!
-    const d = p.eps ? COLOUR[next++ % COLOUR.length]! : c
-    up[p.a] += c
-    up[p.b] += d
-    if (p.eps) eps += `\\epsilon^{${c}${d}}`
-  }
+  for (const g of content.colours[s.colour]!.groups)
+    for (const p of g.pairs) {
+      const c = COLOUR[next++ % COLOUR.length]!
+      const d = p.eps ? COLOUR[next++ % COLOUR.length]! : c
+      up[p.a] += c
+      up[p.b] += d
+      if (p.eps) eps += `\\epsilon^{${c}${d}}`
+    }
   return { up, eps }
 }
 
@@ -82,12 +86,14 @@ export function lightStructureLatex(s: LightStructure, content: LightContent, pa
 /** LaTeX of a Hermitian heavy–light operator over m^order ("+ h.c." for a non-self-conjugate content). */
 export function lightComboLatex(c: LightCombo, imaginary: boolean, content: LightContent, particle: string, order: number): string {
   const names = content.legs.map((l) => l.field!.tex)
-  const body = c.map((t, i) => {
-    const { tex, sign } = lightStructureLatex(t.s, content, particle, names)
-    const k = t.coef * sign
-    const mag = Math.abs(k) === 1 ? '' : `${Math.abs(k)}\\,`
-    return `${i === 0 ? (k < 0 ? '-' : '') : k < 0 ? ' - ' : ' + '}${mag}${tex}`
-  }).join('')
+  const body = c
+    .map((t, i) => {
+      const { tex, sign } = lightStructureLatex(t.s, content, particle, names)
+      const k = t.coef * sign
+      const mag = Math.abs(k) === 1 ? '' : `${Math.abs(k)}\\,`
+      return `${i === 0 ? (k < 0 ? '-' : '') : k < 0 ? ' - ' : ' + '}${mag}${tex}`
+    })
+    .join('')
   const hc = content.selfConjugate ? '' : ' + \\mathrm{h.c.}'
   const wrap = c.length > 1 || imaginary || hc
   return `${imaginary ? 'i' : ''}${wrap ? `\\left[${body}${hc}\\right]` : body}/m^{${order}}`

@@ -8,7 +8,12 @@ import { parseRational, isZero, add, neg, type Rational, ZERO } from '../exact/r
 import { fieldTex } from './fieldTex'
 import type { LorentzKind } from '../../../shared/schemas/lorentzKind'
 
-export interface TheoryGroupLike { name: string; type: string; n?: number; gauge?: boolean }
+export interface TheoryGroupLike {
+  name: string
+  type: string
+  n?: number
+  gauge?: boolean
+}
 export interface TheoryFieldLike {
   name: string
   lorentz: LorentzKind
@@ -86,7 +91,10 @@ export function lightFields(fields: readonly TheoryFieldLike[], groups: readonly
       out.push({ name: f.name, kind: f.real ? 'realScalar' : 'complexScalar', dim2: 2, tex: fieldTex(f.name), reps: dynkinReps(f.reps), charges: f.charges ?? {}, parts: [f.name] })
     } else if (kind === 'left') {
       const r = rights.find((x) => !used.has(x.name) && sameQuantumNumbers(f, x, groups))
-      if (!r) { unpaired.push(f.name); continue }
+      if (!r) {
+        unpaired.push(f.name)
+        continue
+      }
       used.add(r.name)
       const name = diracName(f.name, r.name)
       out.push({ name, kind: 'dirac', dim2: 3, tex: fieldTex(name), reps: dynkinReps(f.reps), charges: f.charges ?? {}, parts: [f.name, r.name] })

@@ -56,12 +56,17 @@ export function lightKey(s: LightStructure): { key: string; sign: number } | nul
 function placements(nLegs: number, nd: number): Array<{ space: number[]; time: number[] }> {
   const out: Array<{ space: number[]; time: number[] }> = []
   const rec = (leg: number, left: number, space: number[], time: number[]) => {
-    if (leg === nLegs) { if (left === 0) out.push({ space: space.slice(), time: time.slice() }); return }
+    if (leg === nLegs) {
+      if (left === 0) out.push({ space: space.slice(), time: time.slice() })
+      return
+    }
     for (let sp = 0; sp <= left; sp++) {
       for (let t = 0; t <= (leg < 2 ? 0 : left - sp); t++) {
-        space.push(sp); time.push(t)
+        space.push(sp)
+        time.push(t)
         rec(leg + 1, left - sp - t, space, time)
-        space.pop(); time.pop()
+        space.pop()
+        time.pop()
       }
     }
   }
@@ -80,19 +85,24 @@ export function lightStructures(content: LightContent, nd: number, parity: boole
   const seen = new Set<string>()
   const out: LightStructure[] = []
   for (const place of placements(nLegs, nd)) {
-    for (const heavySpin of [false, true]) for (const tau of dirac ? [0, 1, 2, 3] : [null]) for (const diracSpin of dirac ? [false, true] : [false]) {
-      const slots: Slot[] = [...(heavySpin ? [{ kind: 'hs' } as Slot] : []), ...(diracSpin ? [{ kind: 'ds' } as Slot] : [])]
-      place.space.forEach((n, leg) => { for (let k = 0; k < n; k++) slots.push({ kind: 'd', leg }) })
-      const spatial = place.space.reduce((a, b) => a + b, 0)
-      if (parity && paritySign(spatial, tau) < 0) continue
-      for (const c of contractions(slots.length)) for (let colour = 0; colour < content.colours.length; colour++) {
-        const s: LightStructure = { heavySpin, tau, diracSpin, time: place.time, slots, pairs: c.pairs, eps: c.eps, colour }
-        const k = lightKey(s)
-        if (!k || seen.has(k.key)) continue
-        seen.add(k.key)
-        out.push(s)
-      }
-    }
+    for (const heavySpin of [false, true])
+      for (const tau of dirac ? [0, 1, 2, 3] : [null])
+        for (const diracSpin of dirac ? [false, true] : [false]) {
+          const slots: Slot[] = [...(heavySpin ? [{ kind: 'hs' } as Slot] : []), ...(diracSpin ? [{ kind: 'ds' } as Slot] : [])]
+          place.space.forEach((n, leg) => {
+            for (let k = 0; k < n; k++) slots.push({ kind: 'd', leg })
+          })
+          const spatial = place.space.reduce((a, b) => a + b, 0)
+          if (parity && paritySign(spatial, tau) < 0) continue
+          for (const c of contractions(slots.length))
+            for (let colour = 0; colour < content.colours.length; colour++) {
+              const s: LightStructure = { heavySpin, tau, diracSpin, time: place.time, slots, pairs: c.pairs, eps: c.eps, colour }
+              const k = lightKey(s)
+              if (!k || seen.has(k.key)) continue
+              seen.add(k.key)
+              out.push(s)
+            }
+        }
   }
   return out
 }
@@ -113,7 +123,10 @@ export function lightTimeSign(s: LightStructure): number {
 }
 
 function colourKey(pairs: ReadonlyArray<{ a: number; b: number; eps: boolean }>): string {
-  return pairs.map((p) => `${p.a}${p.eps ? 'e' : 'd'}${p.b}`).sort().join(',')
+  return pairs
+    .map((p) => `${p.a}${p.eps ? 'e' : 'd'}${p.b}`)
+    .sort()
+    .join(',')
 }
 
 /**
@@ -126,12 +139,16 @@ export function daggerLight(s: LightStructure, perm: readonly number[], content:
   const slots = s.slots.map((x): Slot => (x.kind === 'd' ? { kind: 'd', leg: perm[x.leg]! } : x))
   const time = s.time.map((_, leg) => s.time[perm.indexOf(leg)]!)
   let sign = 1
-  const want = content.colours[s.colour]!.groups.map((g) => colourKey(g.pairs.map((p) => {
-    const a = perm[p.a]!
-    const b = perm[p.b]!
-    if (p.eps && a > b) sign = -sign
-    return { a: Math.min(a, b), b: Math.max(a, b), eps: p.eps }
-  }))).join('|')
+  const want = content.colours[s.colour]!.groups.map((g) =>
+    colourKey(
+      g.pairs.map((p) => {
+        const a = perm[p.a]!
+        const b = perm[p.b]!
+        if (p.eps && a > b) sign = -sign
+        return { a: Math.min(a, b), b: Math.max(a, b), eps: p.eps }
+      }),
+    ),
+  ).join('|')
   const colour = content.colours.findIndex((c) => c.groups.map((g) => colourKey(g.pairs)).join('|') === want)
   if (colour < 0) return null
   return { coef: sign, s: { ...s, slots, time, colour } }

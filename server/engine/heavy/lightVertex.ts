@@ -27,7 +27,24 @@ export interface LightPoint {
 
 function pauli(F: PrimeField): number[][][] {
   const i = F.sqrtMinusOne()
-  return [[[1, 0], [0, 1]], [[0, 1], [1, 0]], [[0, F.neg(i)], [i, 0]], [[1, 0], [0, F.p - 1]]]
+  return [
+    [
+      [1, 0],
+      [0, 1],
+    ],
+    [
+      [0, 1],
+      [1, 0],
+    ],
+    [
+      [0, F.neg(i)],
+      [i, 0],
+    ],
+    [
+      [1, 0],
+      [0, F.p - 1],
+    ],
+  ]
 }
 
 function nullVector(F: PrimeField, l: number[], lt: number[]): number[] {
@@ -35,12 +52,7 @@ function nullVector(F: PrimeField, l: number[], lt: number[]): number[] {
   const i = F.sqrtMinusOne()
   const [a, b] = l as [number, number]
   const [c, d] = lt as [number, number]
-  return [
-    F.mul(half, F.add(F.mul(a, c), F.mul(b, d))),
-    F.mul(half, F.add(F.mul(a, d), F.mul(b, c))),
-    F.div(F.sub(F.mul(b, c), F.mul(a, d)), F.mul(2, i)),
-    F.mul(half, F.sub(F.mul(a, c), F.mul(b, d))),
-  ]
+  return [F.mul(half, F.add(F.mul(a, c), F.mul(b, d))), F.mul(half, F.add(F.mul(a, d), F.mul(b, c))), F.div(F.sub(F.mul(b, c), F.mul(a, d)), F.mul(2, i)), F.mul(half, F.sub(F.mul(a, c), F.mul(b, d)))]
 }
 
 function diracSpinor(F: PrimeField, rng: SeededRandom, k: number[], bar: boolean): number[] {
@@ -78,7 +90,10 @@ export function randomLightPoint(F: PrimeField, rng: SeededRandom, content: Ligh
 }
 
 /** Per point: heavy bilinears H[a] = u0ᵀσ_a u1 and Dirac bilinears L[τ][b] = ū γ⁰ (τ⊗σ_b) u. */
-export interface LightTables { H: number[]; L: number[][] | null }
+export interface LightTables {
+  H: number[]
+  L: number[][] | null
+}
 
 export function lightTables(F: PrimeField, pt: LightPoint, content: LightContent): LightTables {
   const s = pauli(F)
@@ -91,16 +106,19 @@ export function lightTables(F: PrimeField, pt: LightPoint, content: LightContent
   const u = pt.spinor[un]!
   // v γ⁰ (τ⊗σ) u with γ⁰ = τ₃⊗1: blocks (v_up, v_dn) · τ₃τ · (u_up, u_dn)
   const tau = s // τ matrices have the same entries as the Pauli matrices
-  const L = tau.map((t) => s.map((m) => {
-    let total = 0
-    for (let r = 0; r < 2; r++) for (let c = 0; c < 2; c++) {
-      const g = F.mul(r === 0 ? 1 : F.p - 1, t[r]![c]!) // (τ₃τ)_{rc}
-      if (g === 0) continue
-      const block = bil(v.slice(2 * r, 2 * r + 2), m, u.slice(2 * c, 2 * c + 2))
-      total = F.add(total, F.mul(g, block))
-    }
-    return total
-  }))
+  const L = tau.map((t) =>
+    s.map((m) => {
+      let total = 0
+      for (let r = 0; r < 2; r++)
+        for (let c = 0; c < 2; c++) {
+          const g = F.mul(r === 0 ? 1 : F.p - 1, t[r]![c]!) // (τ₃τ)_{rc}
+          if (g === 0) continue
+          const block = bil(v.slice(2 * r, 2 * r + 2), m, u.slice(2 * c, 2 * c + 2))
+          total = F.add(total, F.mul(g, block))
+        }
+      return total
+    }),
+  )
   return { H, L }
 }
 
@@ -121,14 +139,19 @@ function colourFactor(F: PrimeField, s: LightStructure, pt: LightPoint, content:
 function structureValue(F: PrimeField, s: LightStructure, pt: LightPoint, tb: LightTables, content: LightContent, legOf: (i: number) => number): number {
   const mom = (leg: number, x: number) => (leg < 2 ? pt.q[leg]![x - 1]! : pt.k[legOf(leg) - 2]![x]!)
   let base = colourFactor(F, s, pt, content, legOf)
-  s.time.forEach((n, leg) => { for (let j = 0; j < n; j++) base = F.mul(base, mom(leg, 0)) })
+  s.time.forEach((n, leg) => {
+    for (let j = 0; j < n; j++) base = F.mul(base, mom(leg, 0))
+  })
   if (base === 0) return 0
   const n = s.slots.length
   let total = 0
   const idx = new Array<number>(n).fill(1)
   for (let code = 0; code < 3 ** n; code++) {
     let c = code
-    for (let j = 0; j < n; j++) { idx[j] = (c % 3) + 1; c = Math.floor(c / 3) }
+    for (let j = 0; j < n; j++) {
+      idx[j] = (c % 3) + 1
+      c = Math.floor(c / 3)
+    }
     if (s.pairs.some(([a, b]) => idx[a] !== idx[b])) continue
     const w = s.eps ? levi(idx[s.eps[0]]!, idx[s.eps[1]]!, idx[s.eps[2]]!) : 1
     if (w === 0) continue
@@ -159,7 +182,15 @@ export function identicalPermutations(content: LightContent): number[][] {
   for (const members of classes.values()) {
     if (members.length < 2) continue
     const orders = permutations(members)
-    perms = perms.flatMap((p) => orders.map((o) => { const q = p.slice(); members.forEach((m, j) => { q[m] = o[j]! }); return q }))
+    perms = perms.flatMap((p) =>
+      orders.map((o) => {
+        const q = p.slice()
+        members.forEach((m, j) => {
+          q[m] = o[j]!
+        })
+        return q
+      }),
+    )
   }
   return perms
 }

@@ -68,11 +68,7 @@ export function symmetricCandidates(order: number, signal?: CancelFlag, config: 
   const out: SymmetricCandidate[] = []
   const { all, traced } = fieldLetters(config.setup)
   const anyParity = !config.parity
-  const seeds: Combo[] = [
-    ...tracedCombos(order + 1, traced, anyParity),
-    ...candidateStructures(order + 1, all, anyParity).map((s): Combo => [{ coef: 1, s }]),
-    ...extraSeeds,
-  ]
+  const seeds: Combo[] = [...tracedCombos(order + 1, traced, anyParity), ...candidateStructures(order + 1, all, anyParity).map((s): Combo => [{ coef: 1, s }]), ...extraSeeds]
   for (const base of seeds) {
     if (signal?.aborted) throw new EngineCancelledError('heavy enumeration')
     for (const theta of config.timeReversal ? [1] : [1, -1]) {
@@ -116,12 +112,18 @@ export function orderSpaceFor(order: number, config: SpaceConfig, signal?: Cance
   const hit = cache.get(key)
   if (hit) return hit
   const candidates = symmetricCandidates(order, signal, config)
-  const relations = relationStructures(order + 1, !config.parity).map((s) => expandStructure(s)).filter((e) => e.size > 0)
-  const space = new QuotientSpace(candidates.map((c) => c.element), relations, {
-    sectors: config.setup.factors.length > 0 ? [0, 1, 2] : [0],
-    signal,
-    setup: config.setup,
-  })
+  const relations = relationStructures(order + 1, !config.parity)
+    .map((s) => expandStructure(s))
+    .filter((e) => e.size > 0)
+  const space = new QuotientSpace(
+    candidates.map((c) => c.element),
+    relations,
+    {
+      sectors: config.setup.factors.length > 0 ? [0, 1, 2] : [0],
+      signal,
+      setup: config.setup,
+    },
+  )
   const res: OrderSpace = { order, config, candidates, space }
   cache.set(key, res)
   return res

@@ -83,14 +83,29 @@ function annotateGaugeEom(basis: HeavyOperator[], inverse: ConventionalCheck['in
  * The published cards of one order and whether they span the enumerated basis (null when the
  * literature has no list for this case). Annotates the basis with gauge-EOM notes.
  */
-export function publishedOperators(order: number, field: string, basis: HeavyOperator[], list: readonly ConventionalOperator[], colorN: number, signal?: CancelFlag): { cards: HeavyOperator[]; spans: boolean | null; redundant: number } {
+export function publishedOperators(
+  order: number,
+  field: string,
+  basis: HeavyOperator[],
+  list: readonly ConventionalOperator[],
+  colorN: number,
+  signal?: CancelFlag,
+): { cards: HeavyOperator[]; spans: boolean | null; redundant: number } {
   const data = list.filter((c) => c.order === order)
   if (data.length === 0) return { cards: [], spans: null, redundant: 0 }
   const check = verifyConventional(order, signal, list, colorN)
   annotateGaugeEom(basis, check.inverse, list)
   const cards = data.map((c, i): HeavyOperator => ({
-    id: c.id, order, sector: 'bilinear', latex: printedLatex(c.latex, field), terms: termsOf(c, field), combo: c.combo,
-    coefficient: c.coefficient, relations: c.relations, gaugeEomNote: c.gaugeEomNote, source: c.source,
+    id: c.id,
+    order,
+    sector: 'bilinear',
+    latex: printedLatex(c.latex, field),
+    terms: termsOf(c, field),
+    combo: c.combo,
+    coefficient: c.coefficient,
+    relations: c.relations,
+    gaugeEomNote: c.gaugeEomNote,
+    source: c.source,
     rewrite: printedRewrite(c, check.rewrites[i]!.coefficients, basis),
   }))
   return { cards, spans: check.spans, redundant: data.length - check.rank }

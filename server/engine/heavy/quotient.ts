@@ -68,11 +68,12 @@ function primeData(F: PrimeField, index: number, cols: readonly Element[], opts:
   let points: KinematicPoint[] = []
   let rows: number[][] = []
   const setup = opts.setup ?? singleFactor(opts.colorN ?? 1)
-  for (const n of opts.sectors ?? [0, 1, 2]) for (const factors of factorTuples(n, setup.factors.length)) {
-    const s = samplePoints(F, rng, cols, factors, setup, opts.signal)
-    points = points.concat(s.pts)
-    rows = rows.concat(s.rows)
-  }
+  for (const n of opts.sectors ?? [0, 1, 2])
+    for (const factors of factorTuples(n, setup.factors.length)) {
+      const s = samplePoints(F, rng, cols, factors, setup, opts.signal)
+      points = points.concat(s.pts)
+      rows = rows.concat(s.rows)
+    }
   return { F, points, rows }
 }
 
@@ -91,11 +92,19 @@ export class QuotientSpace {
   private readonly cols: readonly Element[]
   private readonly nRel: number
 
-  constructor(readonly candidates: readonly Element[], readonly relations: readonly Element[], private readonly opts: QuotientOptions = {}) {
+  constructor(
+    readonly candidates: readonly Element[],
+    readonly relations: readonly Element[],
+    private readonly opts: QuotientOptions = {},
+  ) {
     this.cols = [...relations, ...candidates]
     this.nRel = relations.length
     this.data = this.set.fields.map((F, i) => primeData(F, i, this.cols, opts))
-    const piv = this.set.echelon(this.data.map((d) => d.rows), { fn: 'QuotientSpace' }, opts.signal).pivots
+    const piv = this.set.echelon(
+      this.data.map((d) => d.rows),
+      { fn: 'QuotientSpace' },
+      opts.signal,
+    ).pivots
     this.relationRank = piv.filter((c) => c < this.nRel).length
     this.basis = piv.filter((c) => c >= this.nRel).map((c) => c - this.nRel)
   }
@@ -117,10 +126,14 @@ export class QuotientSpace {
       this.addPrime()
       out = this.solve(target)
     }
-    if (out.status === 'outside-span') throw new EngineInputError('QuotientSpace.rewrite', 'This operator is not a combination of the enumerated operators (modulo equations of motion and integration by parts)')
+    if (out.status === 'outside-span')
+      throw new EngineInputError('QuotientSpace.rewrite', 'This operator is not a combination of the enumerated operators (modulo equations of motion and integration by parts)')
     if (out.status === 'not-liftable') {
       const { each, product } = this.set.reach
-      throw new EngineInputError('QuotientSpace.rewrite', `The coefficient of basis operator ${out.index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}); it cannot be given exactly`)
+      throw new EngineInputError(
+        'QuotientSpace.rewrite',
+        `The coefficient of basis operator ${out.index + 1} is not a fraction with numerator and denominator up to ${each} (product up to ${product}); it cannot be given exactly`,
+      )
     }
     return out.coefficients
   }
@@ -141,7 +154,10 @@ export class QuotientSpace {
   private addPrime(): void {
     const set = PrimeSet.working(this.set.size + 1)
     const data = [...this.data, primeData(set.fields[set.size - 1]!, set.size - 1, this.cols, { ...this.opts, signal: undefined })]
-    set.echelon(data.map((d) => d.rows), { fn: 'QuotientSpace' })
+    set.echelon(
+      data.map((d) => d.rows),
+      { fn: 'QuotientSpace' },
+    )
     this.set = set
     this.data = data
   }
@@ -154,7 +170,13 @@ export class QuotientSpace {
       return d.rows.map((r, i) => [...r.slice(0, this.nRel), t[i]!])
     })
     const withT = this.set.rank(rel, ctx)
-    const without = this.nRel === 0 ? 0 : this.set.rank(rel.map((m) => m.map((r) => r.slice(0, -1))), ctx)
+    const without =
+      this.nRel === 0
+        ? 0
+        : this.set.rank(
+            rel.map((m) => m.map((r) => r.slice(0, -1))),
+            ctx,
+          )
     return withT === without
   }
 }

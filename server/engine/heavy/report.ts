@@ -5,17 +5,42 @@
  */
 import type { HeavyEnumeration, HeavyOperator } from './enumerate'
 
-export interface ReportOperator { id: string; text: string; latex: string; realParameters: number; fixedBy?: { id: string; factor: number } }
-export interface ReportClass { key: string; count: number; realParameters: number; note?: string; operators?: ReportOperator[] }
-export interface ReportOrder { order: number; operators: number; realParameters: number; classes: ReportClass[] }
+export interface ReportOperator {
+  id: string
+  text: string
+  latex: string
+  realParameters: number
+  fixedBy?: { id: string; factor: number }
+}
+export interface ReportClass {
+  key: string
+  count: number
+  realParameters: number
+  note?: string
+  operators?: ReportOperator[]
+}
+export interface ReportOrder {
+  order: number
+  operators: number
+  realParameters: number
+  classes: ReportClass[]
+}
 
 /** Plain text of a LaTeX operator (for terminals and spreadsheets). */
 export function plainText(latex: string): string {
   return latex
     .replace(/\\left|\\right|\\,|\\mathrm/g, '')
-    .replace(/\\dagger/g, '†').replace(/\\bar\{([^}]*)\}/g, '$1bar').replace(/\\overline\{([^}]*)\}/g, '($1)bar')
-    .replace(/\\(psi|chi|sigma|epsilon|gamma|Sigma|phi|mu|nu|pi)/g, (_, g: string) => ({ psi: 'ψ', chi: 'χ', sigma: 'σ', epsilon: 'ε', gamma: 'γ', Sigma: 'Σ', phi: 'φ', mu: 'μ', nu: 'ν', pi: 'π' })[g] ?? g)
-    .replace(/[{}]/g, '').replace(/\\/g, '').replace(/\s+/g, ' ').trim()
+    .replace(/\\dagger/g, '†')
+    .replace(/\\bar\{([^}]*)\}/g, '$1bar')
+    .replace(/\\overline\{([^}]*)\}/g, '($1)bar')
+    .replace(
+      /\\(psi|chi|sigma|epsilon|gamma|Sigma|phi|mu|nu|pi)/g,
+      (_, g: string) => ({ psi: 'ψ', chi: 'χ', sigma: 'σ', epsilon: 'ε', gamma: 'γ', Sigma: 'Σ', phi: 'φ', mu: 'μ', nu: 'ν', pi: 'π' })[g] ?? g,
+    )
+    .replace(/[{}]/g, '')
+    .replace(/\\/g, '')
+    .replace(/\s+/g, ' ')
+    .trim()
 }
 
 function ops(list: readonly HeavyOperator[], perOp: (op: HeavyOperator) => number): ReportOperator[] {
@@ -48,10 +73,12 @@ export function heavyReport(e: HeavyEnumeration, withOperators: boolean): Report
   }
   for (const h of e.heavyHeavy) push(out, h.order, `${p}* ${p} ${p}* ${p} (1/m^${h.order})`, h.basis, h.count, withOperators)
   for (const c of e.heavyLight) push(out, c.order, c.key, c.basis, c.realParameters, withOperators)
-  return [...out.entries()].sort((x, y) => x[0] - y[0]).map(([order, classes]) => ({
-    order,
-    operators: classes.reduce((s, c) => s + c.count, 0),
-    realParameters: classes.reduce((s, c) => s + c.realParameters, 0),
-    classes,
-  }))
+  return [...out.entries()]
+    .sort((x, y) => x[0] - y[0])
+    .map(([order, classes]) => ({
+      order,
+      operators: classes.reduce((s, c) => s + c.count, 0),
+      realParameters: classes.reduce((s, c) => s + c.realParameters, 0),
+      classes,
+    }))
 }

@@ -129,21 +129,30 @@ function assignments(s: Structure): Array<{ values: number[]; weight: number }> 
   const n = slotCount(s)
   let out: Array<{ values: number[]; weight: number }> = [{ values: new Array<number>(n).fill(0), weight: 1 }]
   for (const [a, b] of s.pairs) {
-    out = out.flatMap((x) => [1, 2, 3].map((v) => {
-      const values = x.values.slice(); values[a] = v; values[b] = v
-      return { values, weight: x.weight }
-    }))
+    out = out.flatMap((x) =>
+      [1, 2, 3].map((v) => {
+        const values = x.values.slice()
+        values[a] = v
+        values[b] = v
+        return { values, weight: x.weight }
+      }),
+    )
   }
   if (s.eps) {
     const [a, b, c] = s.eps
     out = out.flatMap((x) => {
       const r: Array<{ values: number[]; weight: number }> = []
-      for (let i = 1; i <= 3; i++) for (let j = 1; j <= 3; j++) for (let k = 1; k <= 3; k++) {
-        const e = levi(i, j, k)
-        if (e === 0) continue
-        const values = x.values.slice(); values[a] = i; values[b] = j; values[c] = k
-        r.push({ values, weight: x.weight * e })
-      }
+      for (let i = 1; i <= 3; i++)
+        for (let j = 1; j <= 3; j++)
+          for (let k = 1; k <= 3; k++) {
+            const e = levi(i, j, k)
+            if (e === 0) continue
+            const values = x.values.slice()
+            values[a] = i
+            values[b] = j
+            values[c] = k
+            r.push({ values, weight: x.weight * e })
+          }
       return r
     })
   }
@@ -165,7 +174,9 @@ function letterOf(l: Letter, index: number, setup?: GaugeSetup): Element {
   const commutator = su >= 0 ? su : factors.findIndex((f) => f.coupled)
   if (g !== commutator) return fieldElement(g, which, index)
   let el = letterElement(which, index)
-  factors.forEach((f, h) => { if (h !== g && f.coupled) el = addScaled(el, fieldElement(h, which, index), -1) })
+  factors.forEach((f, h) => {
+    if (h !== g && f.coupled) el = addScaled(el, fieldElement(h, which, index), -1)
+  })
   return el
 }
 
@@ -177,7 +188,10 @@ function letterOf(l: Letter, index: number, setup?: GaugeSetup): Element {
 export function expandStructure(s: Structure, setup?: GaugeSetup): Element {
   const n = slotCount(s)
   const used = new Array<number>(n).fill(0)
-  for (const [a, b] of s.pairs) { used[a]!++; used[b]!++ }
+  for (const [a, b] of s.pairs) {
+    used[a]!++
+    used[b]!++
+  }
   if (s.eps) for (const a of s.eps) used[a]!++
   if (used.some((u) => u !== 1)) throw new EngineConsistencyError('expandStructure', `every index slot must be contracted once, got ${used.join(',')}`)
   const [t0, t1] = s.trace ?? [0, 0]
@@ -218,9 +232,18 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
   let trace: [number, number] | undefined
   let open = -1
   for (const tok of text.trim().split(/\s+/)) {
-    if (tok === 'tr') { trace = [0, -1]; continue }
-    if (tok === 'tr[') { open = letters.length; continue }
-    if (tok === ']') { trace = [open, letters.length]; continue }
+    if (tok === 'tr') {
+      trace = [0, -1]
+      continue
+    }
+    if (tok === 'tr[') {
+      open = letters.length
+      continue
+    }
+    if (tok === ']') {
+      trace = [open, letters.length]
+      continue
+    }
     const m = /^(D|T|E\d*|B\d*|s|eps)(?:_([a-z]+))?$/.exec(tok)
     if (!m) throw new EngineConsistencyError('parseStructure', `unknown token "${tok}" in "${text}"`)
     const [, name, idx] = m
@@ -245,7 +268,10 @@ export function parseStructure(text: string): { sign: number; s: Structure } {
     if (epsLabels?.includes(lab)) return
     const prev = seen.get(lab)
     if (prev === undefined) seen.set(lab, slot)
-    else { pairs.push([prev, slot]); seen.delete(lab) }
+    else {
+      pairs.push([prev, slot])
+      seen.delete(lab)
+    }
   })
   if (seen.size > 0) throw new EngineConsistencyError('parseStructure', `index ${[...seen.keys()].join(',')} is not contracted in "${text}"`)
   let eps: [number, number, number] | undefined

@@ -17,9 +17,15 @@ import type { PrimeField, SeededRandom } from '../finite'
 import { decodeFieldLetter, levi, splitKey, wordAtoms, type Element } from './algebra'
 
 /** One gauge factor as the symbol sees it: SU(N) (the heavy field in the fundamental) or U(1). */
-export interface GaugeFactor { kind: 'su' | 'u1'; coupled: boolean }
+export interface GaugeFactor {
+  kind: 'su' | 'u1'
+  coupled: boolean
+}
 /** The gauge factors of a heavy-frame computation and the colour dimension N (1 without SU(N)). */
-export interface GaugeSetup { colorN: number; factors: GaugeFactor[] }
+export interface GaugeSetup {
+  colorN: number
+  factors: GaugeFactor[]
+}
 
 /** One coupled factor: U(1) (colorN = 1) or SU(colorN). */
 export function singleFactor(colorN = 1): GaugeSetup {
@@ -58,7 +64,11 @@ export function randomPoint(F: PrimeField, rng: SeededRandom, factors: readonly 
   const vec = (): number[] => [0, 1, 2, 3].map(() => rng.nonZero(F.p))
   const N = setup.colorN
   return {
-    l: vec(), k: factors.map(vec), e: factors.map(vec), colorN: N, factor: [...factors],
+    l: vec(),
+    k: factors.map(vec),
+    e: factors.map(vec),
+    colorN: N,
+    factor: [...factors],
     mats: factors.map((g) => {
       const f = setup.factors[g]!
       if (!f.coupled) return null
@@ -68,11 +78,12 @@ export function randomPoint(F: PrimeField, rng: SeededRandom, factors: readonly 
 }
 
 function matMulInto(F: PrimeField, out: number[], a: number[], b: number[], f: number, N: number): void {
-  for (let i = 0; i < N; i++) for (let j = 0; j < N; j++) {
-    let s = 0
-    for (let k = 0; k < N; k++) s = F.add(s, F.mul(a[i * N + k]!, b[k * N + j]!))
-    out[i * N + j] = F.add(out[i * N + j]!, F.mul(s, f))
-  }
+  for (let i = 0; i < N; i++)
+    for (let j = 0; j < N; j++) {
+      let s = 0
+      for (let k = 0; k < N; k++) s = F.add(s, F.mul(a[i * N + k]!, b[k * N + j]!))
+      out[i * N + j] = F.add(out[i * N + j]!, F.mul(s, f))
+    }
 }
 
 function scaleInto(F: PrimeField, out: number[], v: number[], f: number): void {
@@ -85,10 +96,11 @@ function strength(F: PrimeField, pt: KinematicPoint, j: number, which: 'E' | 'B'
   const e = pt.e[j]!
   if (which === 'E') return F.sub(F.mul(k[0]!, e[i]!), F.mul(k[i]!, e[0]!))
   let s = 0
-  for (let a = 1; a <= 3; a++) for (let b = 1; b <= 3; b++) {
-    const c = levi(i, a, b)
-    if (c !== 0) s = c > 0 ? F.add(s, F.mul(k[a]!, e[b]!)) : F.sub(s, F.mul(k[a]!, e[b]!))
-  }
+  for (let a = 1; a <= 3; a++)
+    for (let b = 1; b <= 3; b++) {
+      const c = levi(i, a, b)
+      if (c !== 0) s = c > 0 ? F.add(s, F.mul(k[a]!, e[b]!)) : F.sub(s, F.mul(k[a]!, e[b]!))
+    }
   return s
 }
 
@@ -200,7 +212,10 @@ export function evaluationRows(F: PrimeField, elements: readonly Element[], poin
       for (const [key, c] of el) {
         const { spin, word } = splitKey(key)
         let w = cache.get(word)
-        if (w === undefined) { w = wordValue(F, word, pt); cache.set(word, w) }
+        if (w === undefined) {
+          w = wordValue(F, word, pt)
+          cache.set(word, w)
+        }
         const fc = F.from(c)
         for (let x = 0; x < N2; x++) {
           if (w[x] === 0) continue

@@ -48,14 +48,17 @@ export function lowerBoth(F: Tensor4): Tensor4 {
 /** F̃^{μν} = ½ ε^{μνρσ} F_{ρσ} with ε^{0123} = +1. @example dualUpper(F)[0][1] // −B_x (F̃ swaps E → B, B → −E) */
 export function dualUpper(F: Tensor4): Tensor4 {
   const Fl = lowerBoth(F)
-  return F.map((_, m) => F.map((__, n) => {
-    let s = ZERO
-    for (let r = 0; r < 4; r++) for (let t = 0; t < 4; t++) {
-      const e = levi(m, n, r, t)
-      if (e !== 0) s = add(s, mul(rat(e, 2), Fl[r]![t]!))
-    }
-    return s
-  }))
+  return F.map((_, m) =>
+    F.map((__, n) => {
+      let s = ZERO
+      for (let r = 0; r < 4; r++)
+        for (let t = 0; t < 4; t++) {
+          const e = levi(m, n, r, t)
+          if (e !== 0) s = add(s, mul(rat(e, 2), Fl[r]![t]!))
+        }
+      return s
+    }),
+  )
 }
 
 /** Full contraction X_{μν} Y^{μν} of two upper-index tensors (X lowered with the metric). @example contract(F, F) // 2(B² − E²) */
@@ -67,7 +70,12 @@ export function contract(X: Tensor4, Y: Tensor4): Rational {
 }
 
 /** The invariants used by the matching library, all computed exactly. */
-export interface FieldInvariants { E2minusB2: Rational, EdotB: Rational, FF: Rational, FFdual: Rational }
+export interface FieldInvariants {
+  E2minusB2: Rational
+  EdotB: Rational
+  FF: Rational
+  FFdual: Rational
+}
 export type InvariantKey = keyof FieldInvariants
 
 /**

@@ -25,36 +25,54 @@ export interface MatchingTerm {
   text: string
   coefficient: MatchingCoefficient
 }
-export interface MatchingForm { name: string, terms: MatchingTerm[], note?: string }
+export interface MatchingForm {
+  name: string
+  terms: MatchingTerm[]
+  note?: string
+}
 export interface MatchingEntry {
   id: string
   title: string
   source: string
-  appliesTo: { heavyField: string, mass: string, charge: string, lightFields: string[] }
+  appliesTo: { heavyField: string; mass: string; charge: string; lightFields: string[] }
   loops: number
   dimension: number
   forms: MatchingForm[]
 }
 
 const q = parseRational
-const c = (r: string, alphaPower: number, inverseMassPower: number, inversePiPower = 0): MatchingCoefficient =>
-  ({ rational: q(r), alphaPower, chargePower: 2 * alphaPower, inversePiPower, inverseMassPower })
+const c = (r: string, alphaPower: number, inverseMassPower: number, inversePiPower = 0): MatchingCoefficient => ({
+  rational: q(r),
+  alphaPower,
+  chargePower: 2 * alphaPower,
+  inversePiPower,
+  inverseMassPower,
+})
 const QED_FERMION = { heavyField: 'Dirac fermion', mass: 'm', charge: 'Q', lightFields: ['photon A_μ'] }
 
 const EULER_HEISENBERG: MatchingEntry = {
   id: 'euler-heisenberg',
   title: 'Euler–Heisenberg Lagrangian (light-by-light, weak-field limit)',
   source: 'W. Heisenberg, H. Euler, Z. Phys. 98 (1936) 714',
-  appliesTo: QED_FERMION, loops: 1, dimension: 8,
+  appliesTo: QED_FERMION,
+  loops: 1,
+  dimension: 8,
   forms: [
-    { name: 'E, B form', terms: [
-      { invariants: { E2minusB2: 2 }, latex: '(\\mathbf E^2-\\mathbf B^2)^2', text: '(E^2 - B^2)^2', coefficient: c('2/45', 2, 4) },
-      { invariants: { EdotB: 2 }, latex: '(\\mathbf E\\cdot\\mathbf B)^2', text: '(E.B)^2', coefficient: c('14/45', 2, 4) },
-    ] },
-    { name: 'covariant form', note: 'F F = 2(B² − E²), F F̃ = −4 E·B with ε^{0123} = +1', terms: [
-      { invariants: { FF: 2 }, latex: '(F_{\\mu\\nu}F^{\\mu\\nu})^2', text: '(F_{mu nu} F^{mu nu})^2', coefficient: c('1/90', 2, 4) },
-      { invariants: { FFdual: 2 }, latex: '(F_{\\mu\\nu}\\tilde F^{\\mu\\nu})^2', text: '(F_{mu nu} Ftilde^{mu nu})^2', coefficient: c('7/360', 2, 4) },
-    ] },
+    {
+      name: 'E, B form',
+      terms: [
+        { invariants: { E2minusB2: 2 }, latex: '(\\mathbf E^2-\\mathbf B^2)^2', text: '(E^2 - B^2)^2', coefficient: c('2/45', 2, 4) },
+        { invariants: { EdotB: 2 }, latex: '(\\mathbf E\\cdot\\mathbf B)^2', text: '(E.B)^2', coefficient: c('14/45', 2, 4) },
+      ],
+    },
+    {
+      name: 'covariant form',
+      note: 'F F = 2(B² − E²), F F̃ = −4 E·B with ε^{0123} = +1',
+      terms: [
+        { invariants: { FF: 2 }, latex: '(F_{\\mu\\nu}F^{\\mu\\nu})^2', text: '(F_{mu nu} F^{mu nu})^2', coefficient: c('1/90', 2, 4) },
+        { invariants: { FFdual: 2 }, latex: '(F_{\\mu\\nu}\\tilde F^{\\mu\\nu})^2', text: '(F_{mu nu} Ftilde^{mu nu})^2', coefficient: c('7/360', 2, 4) },
+      ],
+    },
   ],
 }
 
@@ -65,14 +83,22 @@ const UEHLING: MatchingEntry = {
   id: 'uehling',
   title: 'Leading vacuum-polarization operator (Uehling term)',
   source: 'E. A. Uehling, Phys. Rev. 48 (1935) 55; derivation from Π̂₂(q²) ≈ −(α/15π) q²/m² as in M. E. Peskin, D. V. Schroeder, An Introduction to QFT (1995), §7.5',
-  appliesTo: QED_FERMION, loops: 1, dimension: 6,
+  appliesTo: QED_FERMION,
+  loops: 1,
+  dimension: 6,
   forms: [
-    { name: 'box form', terms: [
-      { latex: 'F_{\\mu\\nu}\\,\\Box F^{\\mu\\nu}', text: 'F_{mu nu} Box F^{mu nu}', coefficient: c(ratText(UEHLING_FBOXF), 1, 2, 1) },
-    ] },
-    { name: 'current form', note: 'equal up to total derivatives (Bianchi identity); with ∂_μF^{μν} = e j^ν it is a contact current–current term', terms: [
-      { latex: '(\\partial_\\mu F^{\\mu\\nu})(\\partial^\\rho F_{\\rho\\nu})', text: '(d_mu F^{mu nu})(d^rho F_{rho nu})', coefficient: c(ratText({ num: -2n * UEHLING_FBOXF.num, den: UEHLING_FBOXF.den }), 1, 2, 1) },
-    ] },
+    { name: 'box form', terms: [{ latex: 'F_{\\mu\\nu}\\,\\Box F^{\\mu\\nu}', text: 'F_{mu nu} Box F^{mu nu}', coefficient: c(ratText(UEHLING_FBOXF), 1, 2, 1) }] },
+    {
+      name: 'current form',
+      note: 'equal up to total derivatives (Bianchi identity); with ∂_μF^{μν} = e j^ν it is a contact current–current term',
+      terms: [
+        {
+          latex: '(\\partial_\\mu F^{\\mu\\nu})(\\partial^\\rho F_{\\rho\\nu})',
+          text: '(d_mu F^{mu nu})(d^rho F_{rho nu})',
+          coefficient: c(ratText({ num: -2n * UEHLING_FBOXF.num, den: UEHLING_FBOXF.den }), 1, 2, 1),
+        },
+      ],
+    },
   ],
 }
 

@@ -31,7 +31,11 @@ import { childTheory } from '../scales/integrateOut'
 import { isTrivialRep } from '../group/representation'
 
 /** One cubic coupling c·S·a·b with its light legs (species labels) and the factor A_O/c. */
-interface Vertex { symbol: string, light: string[], factor: number }
+interface Vertex {
+  symbol: string
+  light: string[]
+  factor: number
+}
 
 export interface OrderZeroShift {
   classKey: string
@@ -55,9 +59,10 @@ const NOT_COMPUTED = [
   'classes with more than four legs (e.g. six scalars from two S exchanges, or from S³ and S² couplings): not computed at tree level by this version',
 ]
 
-export const SCALAR_MATCH_ASSUMPTIONS = 'Tree level only. L contains +c·O with O exactly as printed, and −½M²S² for the heavy real scalar S. '
-  + 'Coefficients are changes of the order-0 couplings, not new totals. Operators without a coupling symbol are taken as absent. '
-  + 'This version computes order 0 (the quartic shifts) from one S exchange between cubic couplings S·a·b of light scalars that are singlets of every SU(n) (U(1) and Z_n charges allowed); other couplings and higher dimensions are listed as not computed.'
+export const SCALAR_MATCH_ASSUMPTIONS =
+  'Tree level only. L contains +c·O with O exactly as printed, and −½M²S² for the heavy real scalar S. ' +
+  'Coefficients are changes of the order-0 couplings, not new totals. Operators without a coupling symbol are taken as absent. ' +
+  'This version computes order 0 (the quartic shifts) from one S exchange between cubic couplings S·a·b of light scalars that are singlets of every SU(n) (U(1) and Z_n charges allowed); other couplings and higher dimensions are listed as not computed.'
 
 const factorial = (n: number): number => (n <= 1 ? 1 : n * factorial(n - 1))
 
@@ -95,7 +100,20 @@ const sameMultiset = (a: string[], b: string[]) => [...a].sort().join(' ') === [
 
 /** Σ over the three pairings of the class's legs that put v1's legs at one vertex and v2's at the other. */
 function pairingWeight(legs: string[], v1: Vertex, v2: Vertex): number {
-  const pairings: [number[], number[]][] = [[[0, 1], [2, 3]], [[0, 2], [1, 3]], [[0, 3], [1, 2]]]
+  const pairings: [number[], number[]][] = [
+    [
+      [0, 1],
+      [2, 3],
+    ],
+    [
+      [0, 2],
+      [1, 3],
+    ],
+    [
+      [0, 3],
+      [1, 2],
+    ],
+  ]
   let count = 0
   for (const [a, b] of pairings) {
     const la = a.map((i) => legs[i]!)
@@ -134,15 +152,21 @@ export function matchHeavyScalar(theory: Theory, heavy: string): ScalarMatchResu
     const symmetry = [...new Set(legs)].reduce((p, l) => p * factorial(legs.filter((x) => x === l).length), 1)
     const kept = cls.operators.map((o) => o.fingerprint as Fingerprint)
     const terms: string[][] = cls.operators.map(() => [])
-    vertices.forEach((v1, i) => vertices.slice(i).forEach((v2) => {
-      const weight = pairingWeight(legs, v1, v2)
-      if (weight === 0) return
-      const target = typedFingerprint(child, cls.key, ratText(rat(BigInt(weight), BigInt(symmetry))))
-      const solved = expressIn(kept, target)
-      if (!solved) throw new EngineConsistencyError('matchHeavyScalar', `the exchange amplitude of class ${cls.key} is outside the span of its kept operators`)
-      solved.coefficients.forEach((r, k) => { if (r.num !== 0n) terms[k]!.push(termText(r, monomial(v1, v2, mass))) })
-    }))
-    cls.operators.forEach((op, k) => { if (terms[k]!.length) shifts.push({ classKey: cls.key, operator: op.text, latex: op.latex, coefficient: terms[k]!.join(' + ') }) })
+    vertices.forEach((v1, i) =>
+      vertices.slice(i).forEach((v2) => {
+        const weight = pairingWeight(legs, v1, v2)
+        if (weight === 0) return
+        const target = typedFingerprint(child, cls.key, ratText(rat(BigInt(weight), BigInt(symmetry))))
+        const solved = expressIn(kept, target)
+        if (!solved) throw new EngineConsistencyError('matchHeavyScalar', `the exchange amplitude of class ${cls.key} is outside the span of its kept operators`)
+        solved.coefficients.forEach((r, k) => {
+          if (r.num !== 0n) terms[k]!.push(termText(r, monomial(v1, v2, mass)))
+        })
+      }),
+    )
+    cls.operators.forEach((op, k) => {
+      if (terms[k]!.length) shifts.push({ classKey: cls.key, operator: op.text, latex: op.latex, coefficient: terms[k]!.join(' + ') })
+    })
   }
   return { child, shifts, assumptions: SCALAR_MATCH_ASSUMPTIONS, notComputed }
 }

@@ -44,7 +44,7 @@ export function vacuumPolarizationOneLoop(q2OverM2: number, alphaQ2: number): nu
   const n = 2000
   let s = f(0) + f(1)
   for (let i = 1; i < n; i++) s += (i % 2 === 1 ? 4 : 2) * f(i / n)
-  return (-2 * alphaQ2 / Math.PI) * (s / (3 * n))
+  return ((-2 * alphaQ2) / Math.PI) * (s / (3 * n))
 }
 
 /**

@@ -25,9 +25,17 @@ import { conjugateItems } from './conjugate'
 import { RationalSpan } from './span'
 import { notationColumnTerms } from './written'
 
-export interface CheckOptions { aliases?: Record<string, string>; signal?: { aborted: boolean }; priorities?: Priorities }
+export interface CheckOptions {
+  aliases?: Record<string, string>
+  signal?: { aborted: boolean }
+  priorities?: Priorities
+}
 
-export interface Coordinate { class: string; operator: string; coefficient: string }
+export interface Coordinate {
+  class: string
+  operator: string
+  coefficient: string
+}
 
 export interface CheckReport {
   complete: boolean
@@ -43,10 +51,19 @@ export interface CheckReport {
   classes: { key: string; required: number; rank: number }[]
 }
 
-interface Column { cls: string; operator: string }
+interface Column {
+  cls: string
+  operator: string
+}
 
 function conjugateOperator(op: ParsedOperator): ParsedOperator {
-  return { text: `(${op.text})^†`, terms: op.terms.map((t) => { const c = conjugateItems(t.items); return { ...t, iPower: -t.iPower, coeff: c.sign === 1 ? t.coeff : neg(t.coeff), items: c.items } }) }
+  return {
+    text: `(${op.text})^†`,
+    terms: op.terms.map((t) => {
+      const c = conjugateItems(t.items)
+      return { ...t, iPower: -t.iPower, coeff: c.sign === 1 ? t.coeff : neg(t.coeff), items: c.items }
+    }),
+  }
 }
 
 /** The class bases of one dimension, every class and its conjugate. */
@@ -76,11 +93,17 @@ function coordinates(theory: Theory, bases: ClassBasis[], op: ParsedOperator): {
   let timesI: boolean | null = null
   for (const b of bases) {
     let low
-    try { low = lowerOperator(model, b.class, op) } catch (e) {
-      if (e instanceof EngineInputError && /has no part in the class/.test(e.message)) { values.push(...b.kept.map(() => ZERO)); continue }
+    try {
+      low = lowerOperator(model, b.class, op)
+    } catch (e) {
+      if (e instanceof EngineInputError && /has no part in the class/.test(e.message)) {
+        values.push(...b.kept.map(() => ZERO))
+        continue
+      }
       throw e
     }
-    if (timesI !== null && timesI !== low.timesI) throw new EngineInputError('checkBasis', `"${op.text}" has parts with and without a factor i in different classes; list its Hermitian parts as separate operators`)
+    if (timesI !== null && timesI !== low.timesI)
+      throw new EngineInputError('checkBasis', `"${op.text}" has parts with and without a factor i in different classes; list its Hermitian parts as separate operators`)
     timesI = low.timesI
     values.push(...rewriteOperator(b, { evaluate: low.evaluate, label: op.text }).coefficients.map((c) => c.coefficient))
   }
@@ -111,7 +134,8 @@ export function listCoordinates(theory: Theory, dimension: number, texts: string
     const own = coordinates(theory, bases, op)
     if (own.timesI === null) throw new EngineInputError('checkBasis', `"${line}" has no part in any class of dimension ${dimension}; check its fields and derivatives`)
     const conj = coordinates(theory, bases, conjugateOperator(op))
-    const pair = new RationalSpan(columns.length); pair.add(own.values)
+    const pair = new RationalSpan(columns.length)
+    pair.add(own.values)
     return { line, own: own.values, conj: conj.values, hermitian: pair.add(conj.values) !== null, timesI: own.timesI }
   })
   return { columns, classes: bases.map((b) => ({ key: b.key, rank: b.rank })), entries }
@@ -129,11 +153,22 @@ export function judgeList(data: ListCoordinates, keep?: number[]): CheckReport {
   const rows: Rational[][] = []
   const report: CheckReport = { complete: false, independent: true, rank: 0, required: columns.length, missing: [], redundant: [], translation: [], classes: [] }
   for (const e of entries) {
-    report.translation.push({ operator: e.line, timesI: e.timesI, hermitian: e.hermitian, terms: e.own.map((c, j) => ({ class: columns[j]!.cls, operator: columns[j]!.operator, coefficient: ratString(c) })).filter((t) => t.coefficient !== '0') })
-    const own: [Rational[], string][] = e.hermitian ? [[e.own, e.line]] : [[e.own, e.line], [e.conj, `(${e.line})^†`]]
+    report.translation.push({
+      operator: e.line,
+      timesI: e.timesI,
+      hermitian: e.hermitian,
+      terms: e.own.map((c, j) => ({ class: columns[j]!.cls, operator: columns[j]!.operator, coefficient: ratString(c) })).filter((t) => t.coefficient !== '0'),
+    })
+    const own: [Rational[], string][] = e.hermitian
+      ? [[e.own, e.line]]
+      : [
+          [e.own, e.line],
+          [e.conj, `(${e.line})^†`],
+        ]
     for (const [v, name] of own) {
       const rel = span.add(v)
-      rowNames.push(name); rows.push(v)
+      rowNames.push(name)
+      rows.push(v)
       if (rel === null) continue
       report.independent = false
       report.redundant.push({ operator: name, relation: [...rel].map(([k, c]) => ({ operator: rowNames[k]!, coefficient: ratString(c) })) })

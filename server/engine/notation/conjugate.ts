@@ -16,22 +16,25 @@ import type { Item } from './ast'
 export function conjugateItems(items: Item[]): { items: Item[]; sign: 1 | -1 } {
   if (items.some((it) => it.kind === 'matrix' && it.which === 'C')) return { items: conjugateMajorana(items), sign: 1 }
   let sign: 1 | -1 = 1
-  const out = items.slice().reverse().map((it): Item => {
-    if (it.kind === 'field') {
-      if (it.transpose) throw new EngineInputError('readOperator', `At position ${it.pos + 1}: the conjugate of a transposed field (ψ^T C χ) is not read; write the conjugate term out`)
-      return { ...it, conj: !it.conj }
-    }
-    if (it.kind === 'group') {
-      const inner = conjugateItems(it.items)
-      if (inner.sign === -1) sign = sign === 1 ? -1 : 1
-      return { ...it, items: inner.items }
-    }
-    if (it.kind === 'matrix') {
-      if (it.which === 'gamma5') sign = sign === 1 ? -1 : 1
-      if (it.which === 'PL' || it.which === 'PR') return { ...it, which: it.which === 'PL' ? 'PR' : 'PL' }
-    }
-    return { ...it }
-  })
+  const out = items
+    .slice()
+    .reverse()
+    .map((it): Item => {
+      if (it.kind === 'field') {
+        if (it.transpose) throw new EngineInputError('readOperator', `At position ${it.pos + 1}: the conjugate of a transposed field (ψ^T C χ) is not read; write the conjugate term out`)
+        return { ...it, conj: !it.conj }
+      }
+      if (it.kind === 'group') {
+        const inner = conjugateItems(it.items)
+        if (inner.sign === -1) sign = sign === 1 ? -1 : 1
+        return { ...it, items: inner.items }
+      }
+      if (it.kind === 'matrix') {
+        if (it.which === 'gamma5') sign = sign === 1 ? -1 : 1
+        if (it.which === 'PL' || it.which === 'PR') return { ...it, which: it.which === 'PL' ? 'PR' : 'PL' }
+      }
+      return { ...it }
+    })
   return { items: out, sign }
 }
 

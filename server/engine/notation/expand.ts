@@ -17,7 +17,10 @@ export function expandBox(op: ParsedOperator): ParsedOperator {
   const queue = op.terms.slice()
   while (queue.length > 0) {
     const t = queue.shift()!
-    if (!findBoth(t.items, 'Box')) { out.push(t); continue }
+    if (!findBoth(t.items, 'Box')) {
+      out.push(t)
+      continue
+    }
     const { list, i } = findBoth(t.items, 'Box')!
     const group = list[i + 1]
     const n = group?.kind === 'group' ? group.items.filter((x) => x.kind === 'field').length : 0
@@ -27,7 +30,8 @@ export function expandBox(op: ParsedOperator): ParsedOperator {
         const at = findBoth(copy.items, 'Box')!
         const fields = (at.list[at.i + 1] as { items: Item[] }).items.filter((x): x is FieldItem => x.kind === 'field')
         const name = `\u0001box${list[i]!.pos}`
-        fields[a]!.derivs.push({ name, pos: list[i]!.pos }); fields[b]!.derivs.push({ name, pos: list[i]!.pos })
+        fields[a]!.derivs.push({ name, pos: list[i]!.pos })
+        fields[b]!.derivs.push({ name, pos: list[i]!.pos })
         at.list.splice(at.i, 1)
         queue.push(a === b ? copy : { ...copy, coeff: mul(copy.coeff, rat(2)) })
       }
@@ -42,13 +46,17 @@ export function expandBoth(op: ParsedOperator): ParsedOperator {
   while (queue.length > 0) {
     const t = queue.shift()!
     const at = findBoth(t.items)
-    if (!at) { out.push(t); continue }
+    if (!at) {
+      out.push(t)
+      continue
+    }
     for (const side of [1, -1] as const) {
       const copy = structuredClone(t)
       const { list, i } = findBoth(copy.items)!
       const marker = list[i] as MatrixItem
       const field = neighbour(list, i, side)
-      if (!field) throw new EngineInputError('readOperator', `At position ${marker.pos + 1} of "${op.text}": a two-sided derivative needs a field on each side, e.g. H^\\dagger \\overleftrightarrow{D}_\\mu H`)
+      if (!field)
+        throw new EngineInputError('readOperator', `At position ${marker.pos + 1} of "${op.text}": a two-sided derivative needs a field on each side, e.g. H^\\dagger \\overleftrightarrow{D}_\\mu H`)
       field.derivs.push(marker.indices[0]!)
       const gen = marker.indices.slice(1)
       list.splice(i, 1, ...(gen.length > 0 ? [{ kind: 'matrix', which: 'gen', symbol: 'tau', indices: gen, pos: marker.pos } as MatrixItem] : []))
@@ -70,7 +78,10 @@ function findBoth(items: Item[], which: 'Dboth' | 'Box' = 'Dboth'): { list: Item
   for (let i = 0; i < items.length; i++) {
     const it = items[i]!
     if (it.kind === 'matrix' && it.which === which) return { list: items, i }
-    if (it.kind === 'group') { const f = findBoth(it.items, which); if (f) return f }
+    if (it.kind === 'group') {
+      const f = findBoth(it.items, which)
+      if (f) return f
+    }
   }
   return null
 }

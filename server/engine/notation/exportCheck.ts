@@ -31,7 +31,12 @@ function texNumber(q: string): string {
   return m ? `${m[1]}\\tfrac{${m[2]}}{${m[3]}}` : q
 }
 
-const texText = (s: string): string => s.replace(/([#$%&_{}])/g, '\\$1').replace(/\^/g, '\\^{}').replace(/~/g, '\\~{}').replace(/\*/g, '$^*$')
+const texText = (s: string): string =>
+  s
+    .replace(/([#$%&_{}])/g, '\\$1')
+    .replace(/\^/g, '\\^{}')
+    .replace(/~/g, '\\~{}')
+    .replace(/\*/g, '$^*$')
 
 /**
  * A longtable: each listed operator (as typed, in math mode) = Σ coefficient × kept operator.
@@ -45,7 +50,11 @@ export function translationLatex(r: CheckReport): string {
     'Operator & In the kept basis (class: operator) \\\\ \\hline \\endhead',
   ]
   for (const t of r.translation) {
-    const sum = t.terms.map((c) => `${texNumber(c.coefficient)}\\,[\\text{${texText(c.class)}: ${texText(c.operator)}}]`).join(' + ').replace(/\+ -/g, '- ') || '0'
+    const sum =
+      t.terms
+        .map((c) => `${texNumber(c.coefficient)}\\,[\\text{${texText(c.class)}: ${texText(c.operator)}}]`)
+        .join(' + ')
+        .replace(/\+ -/g, '- ') || '0'
     out.push(`$${t.operator}$ & $${t.timesI ? `i\\,(${sum})` : sum}$ \\\\`)
   }
   out.push('\\end{longtable}')

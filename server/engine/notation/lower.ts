@@ -24,7 +24,14 @@ import { build, contractAll, type Tensor } from './tensor'
 import { adjointMetric, chargeEntry, EPS, diracWave, gamma5Entry, gammaEntry, generatorEntry, leviEntry, sigmaEntry, structureEntry, vectorMetric } from './spinors'
 
 /** One way a term lands in the class: a species per field and the resulting legs. */
-interface Placement { skeleton: Skeleton; coeff: { num: bigint; den: bigint }; species: Species[]; legs: number[]; phase: number; sign: number }
+interface Placement {
+  skeleton: Skeleton
+  coeff: { num: bigint; den: bigint }
+  species: Species[]
+  legs: number[]
+  phase: number
+  sign: number
+}
 
 export interface LoweredOperator {
   placements: Placement[]
@@ -47,7 +54,10 @@ function speciesChoices(model: TheoryModel, o: FieldObject): Species[] {
 }
 
 function* assignments(choices: Species[][]): Generator<Species[]> {
-  if (choices.length === 0) { yield []; return }
+  if (choices.length === 0) {
+    yield []
+    return
+  }
   for (const s of choices[0]!) for (const rest of assignments(choices.slice(1))) yield [s, ...rest]
 }
 
@@ -58,7 +68,8 @@ function legsFor(cls: OperatorClass, species: Species[]): number[] | null {
   for (const s of species) {
     const leg = cls.legs.findIndex((l, i) => l.label === s.label && !used.has(i))
     if (leg < 0) return null
-    used.add(leg); out.push(leg)
+    used.add(leg)
+    out.push(leg)
   }
   return used.size === cls.legs.length ? out : null
 }
@@ -87,9 +98,14 @@ export function lowerOperator(model: TheoryModel, cls: OperatorClass, op: Parsed
       placements.push({ skeleton: sk, coeff: term.coeff, species, legs, phase: termPhase(sk, species) + term.iPower, sign: permutationSign(fermionLegs) })
     }
   }
-  if (placements.length === 0) throw new EngineInputError('readOperator', `"${op.text}" has no part in the class ${cls.key}: its fields or its number of derivatives differ (the class has ${cls.k} derivatives)`)
+  if (placements.length === 0)
+    throw new EngineInputError('readOperator', `"${op.text}" has no part in the class ${cls.key}: its fields or its number of derivatives differ (the class has ${cls.k} derivatives)`)
   const parity = ((placements[0]!.phase % 2) + 2) % 2
-  if (placements.some((p) => ((p.phase % 2) + 2) % 2 !== parity)) throw new EngineInputError('readOperator', `"${op.text}" adds terms with and without a factor i in the class ${cls.key}; such a sum is not a rational combination, write its Hermitian parts as separate operators`)
+  if (placements.some((p) => ((p.phase % 2) + 2) % 2 !== parity))
+    throw new EngineInputError(
+      'readOperator',
+      `"${op.text}" adds terms with and without a factor i in the class ${cls.key}; such a sum is not a rational combination, write its Hermitian parts as separate operators`,
+    )
   const groups = model.su.filter((g) => cls.legs.some((l) => l.suKind[g.name] !== 'singlet')).map((g) => g.name)
   return {
     placements,
@@ -115,7 +131,8 @@ function termPhase(sk: Skeleton, species: Species[]): number {
     e += f.derivs.length
     if (f.item.tilde && (species[i]!.lorentz === 'FL' || species[i]!.lorentz === 'FR')) e += species[i]!.lorentz === 'FL' ? 3 : 1
   })
-  for (const o of sk.objects) if ((o.kind === 'matrix' && o.item.which === 'sigma') || (o.kind === 'tensor' && (o.item.which === 'f' || (o.item.which === 'epsilon' && o.slots[0]!.type.startsWith('adj'))))) e += 1
+  for (const o of sk.objects)
+    if ((o.kind === 'matrix' && o.item.which === 'sigma') || (o.kind === 'tensor' && (o.item.which === 'f' || (o.item.which === 'epsilon' && o.slots[0]!.type.startsWith('adj'))))) e += 1
   return e
 }
 
@@ -143,10 +160,13 @@ function evaluatePlacement(F: PrimeField, model: TheoryModel, p: Placement, pt: 
   return contractAll(F, tensors)
 }
 
-function half(F: PrimeField, twice: number): number { return F.div(F.from(twice), F.from(2)) }
+function half(F: PrimeField, twice: number): number {
+  return F.div(F.from(twice), F.from(2))
+}
 
 function fieldTensors(F: PrimeField, model: TheoryModel, f: FieldObject, s: Species, leg: number, pt: SamplePoint, groups: string[], lab: (s: { label: string }) => string): Tensor[] {
-  const lam = pt.kin.lam[leg]!; const lamt = pt.kin.lamt[leg]!
+  const lam = pt.kin.lam[leg]!
+  const lamt = pt.kin.lamt[leg]!
   const out: Tensor[] = []
   if (f.dirac) out.push(build([lab(f.dirac)], [4], ([d]) => diracWave(F, s.lorentz === 'L' ? lam : lamt, s.lorentz === 'L', f.item.conj && !f.item.transpose)[d!]!))
   if (s.lorentz === 'FL') out.push(build(f.vecs.map(lab), [4, 4], ([v, w]) => F.mul(F.mul(lam[v! >> 1]!, lam[w! >> 1]!), F.from(EPS[v! & 1]![w! & 1]!))))
@@ -154,7 +174,7 @@ function fieldTensors(F: PrimeField, model: TheoryModel, f: FieldObject, s: Spec
   for (const d of f.derivs) out.push(build([lab(d)], [4], ([v]) => F.mul(lam[v! >> 1]!, lamt[v! & 1]!)))
   for (const [g, slot] of Object.entries(f.gauge)) {
     const gi = groups.indexOf(g)
-    const wave = gi >= 0 ? pt.waves[gi]![leg] ?? null : null
+    const wave = gi >= 0 ? (pt.waves[gi]![leg] ?? null) : null
     out.push(...gaugeTensors(F, model, g, wave, lab(slot), f.item.tilde && s.lorentz === 'S'))
   }
   return out
@@ -163,7 +183,11 @@ function fieldTensors(F: PrimeField, model: TheoryModel, f: FieldObject, s: Spec
 function gaugeTensors(F: PrimeField, model: TheoryModel, g: string, wave: SuWave, label: string, tilde: boolean): Tensor[] {
   const n = model.su.find((x) => x.name === g)!.n
   if (wave === null) throw new EngineConsistencyError('lowerOperator', `no ${g} wave-function for a charged leg`)
-  if (!Array.isArray(wave)) throw new EngineInputError('readOperator', `A field of ${g} in a representation other than the fundamental, its conjugate or the adjoint cannot be typed in printed notation yet; type it in the bracket syntax (legs, brackets and {g:K} contractions)`)
+  if (!Array.isArray(wave))
+    throw new EngineInputError(
+      'readOperator',
+      `A field of ${g} in a representation other than the fundamental, its conjugate or the adjoint cannot be typed in printed notation yet; type it in the bracket syntax (legs, brackets and {g:K} contractions)`,
+    )
   if (Array.isArray(wave[0])) return [build([label], [n * n], ([a]) => (wave as number[][])[Math.floor(a! / n)]![a! % n]!)]
   if (!tilde) return [build([label], [n], ([a]) => (wave as number[])[a!]!)]
   const inner = `${label}~t`
@@ -180,7 +204,8 @@ function objectTensor(F: PrimeField, model: TheoryModel, o: Exclude<SkeletonObje
       return build(labels, dims, ([a, b, c]) => structureEntry(F, 'f', n, a!, b!, c!))
     }
     if (o.item.which === 'epsilon') {
-      if (o.slots.length !== n || o.slots[0]!.type.startsWith('adj')) throw new EngineInputError('readOperator', `At position ${o.item.pos + 1}: ε of ${o.group} = SU(${n}) needs ${n} fundamental indices`)
+      if (o.slots.length !== n || o.slots[0]!.type.startsWith('adj'))
+        throw new EngineInputError('readOperator', `At position ${o.item.pos + 1}: ε of ${o.group} = SU(${n}) needs ${n} fundamental indices`)
       return build(labels, dims, (ix) => F.from(leviEntry(ix)))
     }
     if (o.item.which === 'delta') return build(labels, dims, ([a, b]) => (a === b ? 1 : 0))
@@ -190,7 +215,7 @@ function objectTensor(F: PrimeField, model: TheoryModel, o: Exclude<SkeletonObje
   if (w === 'gamma') return build(labels, dims, ([v, d, e]) => F.from(gammaEntry(v!, d!, e!)))
   if (w === 'sigma') return build(labels, dims, ([v, x, d, e]) => half(F, 2 * sigmaEntry(v!, x!, d!, e!)))
   if (w === 'gamma5') return build(labels, dims, ([d, e]) => F.from(gamma5Entry(d!, e!)))
-  if (w === 'PL' || w === 'PR') return build(labels, dims, ([d, e]) => (d === e && (d! < 2) === (w === 'PL') ? 1 : 0))
+  if (w === 'PL' || w === 'PR') return build(labels, dims, ([d, e]) => (d === e && d! < 2 === (w === 'PL') ? 1 : 0))
   if (w === 'C') return build(labels, dims, ([d, e]) => F.from(chargeEntry(d!, e!)))
   const n = model.su.find((g) => g.name === o.group)!.n
   const scale = o.item.symbol === 'T' ? 1 : 2

@@ -21,7 +21,6 @@ import type { TheoryModel } from '../theory/model'
 import type { FieldItem, Index, Item, MatrixItem, ParsedOperator, Term } from './ast'
 import { conjugateItems } from './conjugate'
 
-
 export interface ParseOptions {
   /** Field names of the theory. */
   fields: string[]
@@ -35,7 +34,10 @@ class Parser {
   /** Sign picked up inside the current term (a conjugated bracket with γ_5). */
   private sign = 1
   private pendingDerivs: { idx: Index }[] = []
-  constructor(readonly text: string, readonly opts: ParseOptions) {
+  constructor(
+    readonly text: string,
+    readonly opts: ParseOptions,
+  ) {
     this.opts = { ...opts, aliases: normaliseAliases(opts.aliases) }
     this.toks = splitWords(tokenize(text), (w) => this.resolve(w) !== null)
   }
@@ -44,11 +46,24 @@ class Parser {
     const near = this.text.slice(t.pos, t.pos + 12) || 'the end'
     throw new EngineInputError('readOperator', `At position ${t.pos + 1} of "${this.text}" (near "${near}"): ${why}`)
   }
-  peek(o = 0): Token { return this.toks[Math.min(this.at + o, this.toks.length - 1)]! }
-  next(): Token { return this.toks[this.at++]! }
-  isSym(s: string, o = 0): boolean { const t = this.peek(o); return t.kind === 'sym' && t.text === s }
-  isWord(s: string, o = 0): boolean { const t = this.peek(o); return t.kind === 'word' && t.text === s }
-  expectSym(s: string, why: string): Token { if (!this.isSym(s)) this.fail(this.peek(), why); return this.next() }
+  peek(o = 0): Token {
+    return this.toks[Math.min(this.at + o, this.toks.length - 1)]!
+  }
+  next(): Token {
+    return this.toks[this.at++]!
+  }
+  isSym(s: string, o = 0): boolean {
+    const t = this.peek(o)
+    return t.kind === 'sym' && t.text === s
+  }
+  isWord(s: string, o = 0): boolean {
+    const t = this.peek(o)
+    return t.kind === 'word' && t.text === s
+  }
+  expectSym(s: string, why: string): Token {
+    if (!this.isSym(s)) this.fail(this.peek(), why)
+    return this.next()
+  }
 
   resolve(word: string): string | null {
     const { fields, aliases } = this.opts
@@ -65,9 +80,11 @@ class Parser {
     if (this.isSym('+') || this.isSym('-')) sign = this.next().text === '-' ? -1 : 1
     for (;;) {
       if (this.isWord('h') && this.isSym('.', 1)) {
-        this.next(); this.next()
+        this.next()
+        this.next()
         if (!this.isWord('c')) this.fail(this.peek(), 'write the Hermitian conjugate as "h.c."')
-        this.next(); if (this.isSym('.')) this.next()
+        this.next()
+        if (this.isSym('.')) this.next()
         if (terms.length === 0) this.fail(this.peek(), '"h.c." needs the operator before it')
         for (const t of terms.slice()) {
           const c = conjugateItems(t.items)
@@ -89,9 +106,16 @@ class Parser {
     let coeff: Rational = rat(1)
     if (this.peek().kind === 'number') {
       coeff = rat(BigInt(this.next().text))
-      if (this.isSym('/')) { this.next(); const d = this.next(); if (d.kind !== 'number' || d.text === '0') this.fail(d, 'a fraction needs a non-zero whole denominator, e.g. 1/2'); coeff = rat(coeff.num, BigInt(d.text)) }
+      if (this.isSym('/')) {
+        this.next()
+        const d = this.next()
+        if (d.kind !== 'number' || d.text === '0') this.fail(d, 'a fraction needs a non-zero whole denominator, e.g. 1/2')
+        coeff = rat(coeff.num, BigInt(d.text))
+      }
     } else if (this.isWord('frac')) {
-      this.next(); const a = this.braced('number'); const b = this.braced('number')
+      this.next()
+      const a = this.braced('number')
+      const b = this.braced('number')
       if (b === 0n) this.fail(start, 'a fraction needs a non-zero denominator')
       coeff = rat(a, b)
     }
@@ -105,7 +129,8 @@ class Parser {
 
   braced(kind: 'number'): bigint {
     this.expectSym('{', 'expected "{" after \\frac')
-    const t = this.next(); if (t.kind !== kind) this.fail(t, 'expected a whole number inside \\frac{…}{…}')
+    const t = this.next()
+    if (t.kind !== kind) this.fail(t, 'expected a whole number inside \\frac{…}{…}')
     this.expectSym('}', 'expected "}"')
     return BigInt(t.text)
   }
@@ -120,7 +145,11 @@ class Parser {
     for (;;) {
       const t = this.peek()
       if (t.kind === 'end' || (t.kind === 'sym' && stops.includes(t.text)) || this.isWord('rangle') || (this.isWord('h') && this.isSym('.', 1))) return items
-      if (this.isWord('i') && this.resolve('i') === null) { this.next(); state.iPower++; continue }
+      if (this.isWord('i') && this.resolve('i') === null) {
+        this.next()
+        state.iPower++
+        continue
+      }
       const got = this.parsePrimary(state)
       if (got === null) continue
       const power = this.parsePower()
@@ -144,11 +173,18 @@ class Parser {
     const t = this.peek()
     if (t.kind === 'sym' && (t.text === '(' || t.text === '[')) return this.parseGroup(t.text === '(' ? ')' : ']', false, state)
     if (this.isWord('langle')) return this.parseGroup('rangle', true, state)
-    if ((this.isWord('tr') || this.isWord('Tr')) && this.isSym('(', 1)) { this.next(); return this.parseGroup(')', true, state) }
+    if ((this.isWord('tr') || this.isWord('Tr')) && this.isSym('(', 1)) {
+      this.next()
+      return this.parseGroup(')', true, state)
+    }
     if (t.kind !== 'word') this.fail(t, `"${t.raw}" cannot start a factor here`)
     if (t.text === 'bar' || t.text === 'tilde') return this.parseAccent()
-    if (t.text === 'Box' || t.text === 'square') { this.next(); if (!this.isSym('(')) this.fail(t, '□ must be followed by a bracket, e.g. (H^\\dagger H)\\Box(H^\\dagger H), or write D^2 on a field'); return { kind: 'matrix', which: 'Box', indices: [], pos: t.pos } }
-    if (t.text === 'D' && this.resolve('D') === null || t.text === 'partial' || t.text === 'Dboth') return this.parseDerivative()
+    if (t.text === 'Box' || t.text === 'square') {
+      this.next()
+      if (!this.isSym('(')) this.fail(t, '□ must be followed by a bracket, e.g. (H^\\dagger H)\\Box(H^\\dagger H), or write D^2 on a field')
+      return { kind: 'matrix', which: 'Box', indices: [], pos: t.pos }
+    }
+    if ((t.text === 'D' && this.resolve('D') === null) || t.text === 'partial' || t.text === 'Dboth') return this.parseDerivative()
     const m = this.parseMatrixOrTensor()
     if (m) return m
     return this.parseField()
@@ -156,16 +192,29 @@ class Parser {
 
   parseGroup(close: string, trace: boolean, state: { iPower: number }): Item {
     const open = this.next()
-    const saved = this.pendingDerivs; this.pendingDerivs = []
+    const saved = this.pendingDerivs
+    this.pendingDerivs = []
     const items = this.parseItems(close === 'rangle' ? [] : [close], state)
     if (this.isSym('+') || this.isSym('-')) this.fail(this.peek(), 'expand sums inside brackets into separate terms')
     this.flushDerivs(this.peek())
-    if (close === 'rangle') { if (!this.isWord('rangle')) this.fail(this.peek(), 'expected "⟩" to close the trace'); this.next() } else this.expectSym(close, `expected "${close}" to close the bracket opened at position ${open.pos + 1}`)
+    if (close === 'rangle') {
+      if (!this.isWord('rangle')) this.fail(this.peek(), 'expected "⟩" to close the trace')
+      this.next()
+    } else this.expectSym(close, `expected "${close}" to close the bracket opened at position ${open.pos + 1}`)
     this.pendingDerivs = saved
     let conj = false
-    if (this.isSym('^') && this.isWord('T', 1)) { this.next(); this.next(); markTransposed(items) }
-    while (this.isSym('^') && (this.isWord('dagger', 1) || this.isSym('*', 1) || this.isSym('{', 1) && (this.isWord('dagger', 2) || this.isSym('*', 2)))) {
-      this.next(); const b = this.isSym('{'); if (b) this.next(); this.next(); if (b) this.expectSym('}', 'expected "}"'); conj = !conj
+    if (this.isSym('^') && this.isWord('T', 1)) {
+      this.next()
+      this.next()
+      markTransposed(items)
+    }
+    while (this.isSym('^') && (this.isWord('dagger', 1) || this.isSym('*', 1) || (this.isSym('{', 1) && (this.isWord('dagger', 2) || this.isSym('*', 2))))) {
+      this.next()
+      const b = this.isSym('{')
+      if (b) this.next()
+      this.next()
+      if (b) this.expectSym('}', 'expected "}"')
+      conj = !conj
     }
     if (this.pendingDerivs.length > 0 && items.length > 0) this.fail(open, 'a derivative in front of a bracket is not read; put it on one field, e.g. (D_\\mu H)^\\dagger H')
     if (!conj) return { kind: 'group', items, trace, conj: false, pos: open.pos }
@@ -189,9 +238,14 @@ class Parser {
   parseDerivative(): Item | null {
     const t = this.next()
     const both = t.text === 'Dboth'
-    if (both && this.isSym('{')) { this.next(); if (this.isWord('D')) this.next(); this.expectSym('}', 'expected "}" after \\overleftrightarrow{D') }
+    if (both && this.isSym('{')) {
+      this.next()
+      if (this.isWord('D')) this.next()
+      this.expectSym('}', 'expected "}" after \\overleftrightarrow{D')
+    }
     if (!both && this.isSym('^') && this.peek(1).kind === 'number' && this.peek(1).text === '2') {
-      this.next(); this.next()
+      this.next()
+      this.next()
       const name = `\u0001sq${t.pos}`
       this.pendingDerivs.push({ idx: { name, pos: t.pos } }, { idx: { name, pos: t.pos } })
       return null
@@ -217,10 +271,19 @@ class Parser {
       do {
         const t = this.next()
         if (t.kind === 'end') this.fail(t, 'an index list is not closed')
-        if (sup && flags && (t.text === 'dagger' || t.text === '*' || t.text === '+')) { flags.dagger = !flags.dagger; continue }
-        if (sup && flags && t.text === 'T' && braced === false) { flags.transpose = true; continue }
-        if (t.kind === 'sym' && (t.text === ',' || t.text === '\'')) continue
-        if (t.kind === 'number') { out.push({ name: t.text, pos: t.pos }); continue }
+        if (sup && flags && (t.text === 'dagger' || t.text === '*' || t.text === '+')) {
+          flags.dagger = !flags.dagger
+          continue
+        }
+        if (sup && flags && t.text === 'T' && braced === false) {
+          flags.transpose = true
+          continue
+        }
+        if (t.kind === 'sym' && (t.text === ',' || t.text === "'")) continue
+        if (t.kind === 'number') {
+          out.push({ name: t.text, pos: t.pos })
+          continue
+        }
         if (t.kind !== 'word') this.fail(t, `"${t.raw}" is not an index; use letters such as \\mu, I, A, j`)
         for (const name of splitIndexWord(t.text)) out.push({ name, pos: t.pos })
       } while (braced && !this.isSym('}'))
@@ -236,7 +299,8 @@ class Parser {
       if (!((w === 'f' || w === 'd') && this.isUpperTriple())) return null
     }
     const matrix = (which: MatrixItem['which'], symbol?: MatrixItem['symbol']): Item => {
-      this.next(); const indices = this.indexLists()
+      this.next()
+      const indices = this.indexLists()
       if (which === 'gen' && (indices.length !== 1 || !/^[A-Z]$/.test(indices[0]!.name))) this.fail(t, `the generator ${t.raw} needs one adjoint index, a capital letter, e.g. ${t.raw}^A`)
       if (which === 'gamma' && indices.length === 1 && indices[0]!.name === '5') return { kind: 'matrix', which: 'gamma5', indices: [], pos: t.pos }
       if (which === 'gamma' && indices.length !== 1) this.fail(t, 'γ needs one Lorentz index (γ^\\mu) or 5 (γ_5)')
@@ -249,15 +313,23 @@ class Parser {
     if (w === 'tau') return matrix('gen', 'tau')
     if (w === 'lambda' && this.isUpperNext()) return matrix('gen', 'lambda')
     if (w === 'T' && this.isUpperNext()) return matrix('gen', 'T')
-    if (w === 'PL' || w === 'PR') { this.next(); return { kind: 'matrix', which: w, indices: [], pos: t.pos } }
+    if (w === 'PL' || w === 'PR') {
+      this.next()
+      return { kind: 'matrix', which: w, indices: [], pos: t.pos }
+    }
     if (w === 'P' && this.isSym('_', 1)) {
-      this.next(); const idx = this.indexLists()
+      this.next()
+      const idx = this.indexLists()
       if (idx.length !== 1 || !['L', 'R'].includes(idx[0]!.name)) this.fail(t, 'write the chiral projectors as P_L and P_R')
       return { kind: 'matrix', which: idx[0]!.name === 'L' ? 'PL' : 'PR', indices: [], pos: t.pos }
     }
-    if (w === 'C' && this.resolve('C') === null) { this.next(); return { kind: 'matrix', which: 'C', indices: [], pos: t.pos } }
+    if (w === 'C' && this.resolve('C') === null) {
+      this.next()
+      return { kind: 'matrix', which: 'C', indices: [], pos: t.pos }
+    }
     if (w === 'epsilon' || w === 'delta' || ((w === 'f' || w === 'd') && this.isUpperTriple())) {
-      this.next(); const indices = this.indexLists()
+      this.next()
+      const indices = this.indexLists()
       if (indices.length < 2) this.fail(t, `${t.raw} needs its indices, e.g. \\varepsilon_{jk}`)
       return { kind: 'tensor', which: w as 'epsilon' | 'delta' | 'f' | 'd', indices, pos: t.pos }
     }
@@ -287,10 +359,27 @@ class Parser {
 
   parsePostfix(item: FieldItem): void {
     for (;;) {
-      if (this.isWord('post-bar') || this.isWord('bar')) { if (this.isWord('bar') && this.isSym('{', 1)) return; this.next(); item.conj = !item.conj; continue }
-      if (this.isWord('post-tilde')) { this.next(); item.tilde = true; continue }
-      if (this.isWord('dagger')) { this.next(); item.conj = !item.conj; continue }
-      if (this.isSym('*') && !(this.peek(1).kind === 'number')) { this.next(); item.conj = !item.conj; continue }
+      if (this.isWord('post-bar') || this.isWord('bar')) {
+        if (this.isWord('bar') && this.isSym('{', 1)) return
+        this.next()
+        item.conj = !item.conj
+        continue
+      }
+      if (this.isWord('post-tilde')) {
+        this.next()
+        item.tilde = true
+        continue
+      }
+      if (this.isWord('dagger')) {
+        this.next()
+        item.conj = !item.conj
+        continue
+      }
+      if (this.isSym('*') && !(this.peek(1).kind === 'number')) {
+        this.next()
+        item.conj = !item.conj
+        continue
+      }
       if (this.isSym('^') || this.isSym('_')) {
         const flags = { dagger: false, transpose: false }
         const before = this.at
@@ -327,4 +416,3 @@ export function parseNotation(text: string, opts: ParseOptions): ParsedOperator 
   if (text.trim() === '') throw new EngineInputError('readOperator', 'The operator is empty; type it as printed, e.g. (H^\\dagger H)^3')
   return new Parser(text, opts).run()
 }
-

@@ -14,14 +14,39 @@ import type { FieldItem, Index, Item, MatrixItem, Term, TensorItem } from './ast
 
 export type SlotType = 'vec' | 'dirac' | `adj:${string}` | `fund:${string}`
 
-export interface Slot { label: string; type: SlotType; pos: number }
+export interface Slot {
+  label: string
+  type: SlotType
+  pos: number
+}
 
-export interface FieldObject { kind: 'field'; item: FieldItem; dirac: Slot | null; vecs: Slot[]; derivs: Slot[]; gauge: Record<string, Slot> }
-export interface MatrixObject { kind: 'matrix'; item: MatrixItem; group: string | null; slots: Slot[] }
-export interface TensorObject { kind: 'tensor'; item: TensorItem; group: string | null; slots: Slot[] }
+export interface FieldObject {
+  kind: 'field'
+  item: FieldItem
+  dirac: Slot | null
+  vecs: Slot[]
+  derivs: Slot[]
+  gauge: Record<string, Slot>
+}
+export interface MatrixObject {
+  kind: 'matrix'
+  item: MatrixItem
+  group: string | null
+  slots: Slot[]
+}
+export interface TensorObject {
+  kind: 'tensor'
+  item: TensorItem
+  group: string | null
+  slots: Slot[]
+}
 export type SkeletonObject = FieldObject | MatrixObject | TensorObject
 
-export interface Skeleton { objects: SkeletonObject[]; fields: FieldObject[]; pairs: { type: SlotType; a: Slot; b: Slot }[] }
+export interface Skeleton {
+  objects: SkeletonObject[]
+  fields: FieldObject[]
+  pairs: { type: SlotType; a: Slot; b: Slot }[]
+}
 
 const VECTOR = new Set(['mu', 'nu', 'rho', 'sigma', 'lambda', 'kappa', 'eta', 'xi', 'omega', 'zeta', 'theta'])
 const SU3 = new Set(['alpha', 'beta', 'gamma', 'delta', 'a', 'b', 'c'])
@@ -31,18 +56,25 @@ const FLAVOUR = new Set(['p', 'r', 's', 't', 'w'])
 class Builder {
   private n = 0
   readonly objects: SkeletonObject[] = []
-  constructor(readonly model: TheoryModel, readonly text: string) {}
+  constructor(
+    readonly model: TheoryModel,
+    readonly text: string,
+  ) {}
 
   fail(pos: number, why: string): never {
     throw new EngineInputError('readOperator', `At position ${pos + 1} of "${this.text}": ${why}`)
   }
-  fresh(): string { return `~${this.n++}` }
+  fresh(): string {
+    return `~${this.n++}`
+  }
   groupOfN(n: number, pos: number, what: string): string {
     const gs = this.model.su.filter((g) => g.n === n)
     if (gs.length !== 1) this.fail(pos, `${what} needs exactly one SU(${n}) group in the theory, which has ${gs.length}`)
     return gs[0]!.name
   }
-  slot(ix: Index | null, type: SlotType, pos: number): Slot { return { label: ix ? ix.name : this.fresh(), type, pos: ix?.pos ?? pos } }
+  slot(ix: Index | null, type: SlotType, pos: number): Slot {
+    return { label: ix ? ix.name : this.fresh(), type, pos: ix?.pos ?? pos }
+  }
 
   field(it: FieldItem): FieldObject {
     const f = this.model.species.find((s) => s.field === it.name)!
@@ -51,8 +83,16 @@ class Builder {
     const strength = f.lorentz === 'FL' || f.lorentz === 'FR'
     for (const ix of it.indices) {
       if (FLAVOUR.has(ix.name)) continue
-      if (VECTOR.has(ix.name)) { if (!strength) this.fail(ix.pos, `${it.name} has no Lorentz index ${ix.name}; only field strengths and derivatives carry one`); obj.vecs.push(this.slot(ix, 'vec', it.pos)); continue }
-      const g = this.indexGroup(ix, charged.map((c) => c.name), it)
+      if (VECTOR.has(ix.name)) {
+        if (!strength) this.fail(ix.pos, `${it.name} has no Lorentz index ${ix.name}; only field strengths and derivatives carry one`)
+        obj.vecs.push(this.slot(ix, 'vec', it.pos))
+        continue
+      }
+      const g = this.indexGroup(
+        ix,
+        charged.map((c) => c.name),
+        it,
+      )
       const kind = f.suKind[g]
       obj.gauge[g] = this.slot(ix, kind === 'adj' ? `adj:${g}` : `fund:${g}`, it.pos)
     }
@@ -99,16 +139,33 @@ function chain(b: Builder, items: Item[], objs: Map<Item, SkeletonObject>, flows
     let start: string | null = null
     const visit = (list: Item[]): void => {
       for (const it of list) {
-        if (it.kind === 'group') { if (it.trace) chain(b, it.items, objs, flows, true); else visit(it.items); continue }
+        if (it.kind === 'group') {
+          if (it.trace) chain(b, it.items, objs, flows, true)
+          else visit(it.items)
+          continue
+        }
         const o = objs.get(it)!
         if (o.kind === 'field') {
-          const s = flow === 'dirac' ? o.dirac : o.gauge[flow.slice(5)] ?? null
+          const s = flow === 'dirac' ? o.dirac : (o.gauge[flow.slice(5)] ?? null)
           if (!s || !s.label.startsWith('?')) continue
-          if (open === null) { s.label = b.fresh(); open = s.label } else { s.label = open; open = null }
+          if (open === null) {
+            s.label = b.fresh()
+            open = s.label
+          } else {
+            s.label = open
+            open = null
+          }
         } else if (o.kind === 'matrix' && matrixFlow(o) === flow) {
-          if (open === null) { if (!trace) b.fail(o.item.pos, 'this matrix has nothing to act on at its left; write the barred field (or H^\\dagger) first'); open = b.fresh(); start = open }
+          if (open === null) {
+            if (!trace) b.fail(o.item.pos, 'this matrix has nothing to act on at its left; write the barred field (or H^\\dagger) first')
+            open = b.fresh()
+            start = open
+          }
           const right = b.fresh()
-          o.slots.push({ label: open, type: flow === 'dirac' ? 'dirac' : `fund:${flow.slice(5)}`, pos: o.item.pos }, { label: right, type: flow === 'dirac' ? 'dirac' : `fund:${flow.slice(5)}`, pos: o.item.pos })
+          o.slots.push(
+            { label: open, type: flow === 'dirac' ? 'dirac' : `fund:${flow.slice(5)}`, pos: o.item.pos },
+            { label: right, type: flow === 'dirac' ? 'dirac' : `fund:${flow.slice(5)}`, pos: o.item.pos },
+          )
           open = right
         }
       }
@@ -117,7 +174,12 @@ function chain(b: Builder, items: Item[], objs: Map<Item, SkeletonObject>, flows
     if (open !== null && trace && start !== null) renameLabel([...objs.values()], open, start)
     else if (open !== null) {
       const where = [...objs.values()].find((o) => o.kind === 'field' && (o.dirac?.label === open || Object.values(o.gauge).some((s) => s.label === open)))
-      b.fail(where?.kind === 'field' ? where.item.pos : 0, flow === 'dirac' ? 'a fermion has no partner in its bilinear; write (\\bar\\psi … \\chi) with one barred and one unbarred fermion' : `an implicit ${flow.slice(5)} index has no partner; write the index explicitly (e.g. H^j \\varepsilon_{jk} H^k)`)
+      b.fail(
+        where?.kind === 'field' ? where.item.pos : 0,
+        flow === 'dirac'
+          ? 'a fermion has no partner in its bilinear; write (\\bar\\psi … \\chi) with one barred and one unbarred fermion'
+          : `an implicit ${flow.slice(5)} index has no partner; write the index explicitly (e.g. H^j \\varepsilon_{jk} H^k)`,
+      )
     }
   }
 }
@@ -146,7 +208,10 @@ export function buildSkeleton(model: TheoryModel, text: string, term: Term): Ske
   const objs = new Map<Item, SkeletonObject>()
   const walk = (list: Item[]): void => {
     for (const it of list) {
-      if (it.kind === 'group') { walk(it.items); continue }
+      if (it.kind === 'group') {
+        walk(it.items)
+        continue
+      }
       if (it.kind === 'matrix' && it.which === 'gen' && it.indices.length !== 1) b.fail(it.pos, 'a generator needs one adjoint index')
       const o = it.kind === 'field' ? b.field(it) : it.kind === 'matrix' ? b.matrix(it) : b.tensor(it)
       objs.set(it, o)
@@ -170,8 +235,14 @@ export function buildSkeleton(model: TheoryModel, text: string, term: Term): Ske
 /** The common type of two contracted slots (ε, δ, f, d take theirs from the partner). */
 function unify(b: Builder, x: Slot, y: Slot): SlotType {
   const open = (t: SlotType): boolean => t.endsWith(':?')
-  if (open(x.type) && !open(y.type)) { x.type = y.type; return y.type }
-  if (open(y.type) && !open(x.type)) { y.type = x.type; return x.type }
+  if (open(x.type) && !open(y.type)) {
+    x.type = y.type
+    return y.type
+  }
+  if (open(y.type) && !open(x.type)) {
+    y.type = x.type
+    return x.type
+  }
   if (x.type !== y.type) b.fail(y.pos, `the index ${x.label} joins a ${describe(x.type)} and a ${describe(y.type)} index`)
   if (open(x.type)) b.fail(y.pos, `the index ${x.label} only joins two ε/δ/f tensors; contract it with a field`)
   return x.type

@@ -6,14 +6,20 @@
  */
 import { add, div, isZero, mul, neg, ZERO, ONE, type Rational } from '../exact/rational'
 
-interface EchelonRow { values: Rational[]; pivot: number; combo: Map<number, Rational> }
+interface EchelonRow {
+  values: Rational[]
+  pivot: number
+  combo: Map<number, Rational>
+}
 
 export class RationalSpan {
   private rows: EchelonRow[] = []
   private added = 0
   constructor(readonly width: number) {}
 
-  get rank(): number { return this.rows.length }
+  get rank(): number {
+    return this.rows.length
+  }
 
   /** Reduce v by the span; the remainder and how much of each added row was taken away. */
   private reduce(v: Rational[]): { rest: Rational[]; combo: Map<number, Rational> } {

@@ -14,7 +14,10 @@
 import type { PrimeField } from '../finite/primeField'
 
 /** ε with ε^{12} = +1 (the same array serves for upper and lower indices). */
-export const EPS = [[0, 1], [-1, 0]]
+export const EPS = [
+  [0, 1],
+  [-1, 0],
+]
 
 /** Metric G_{vw} on bispinor components (v = 2a + ȧ). */
 export function vectorMetric(v: number, w: number): number {
@@ -23,7 +26,8 @@ export function vectorMetric(v: number, w: number): number {
 
 /** V̸ at the basis vector with component v = 1 (others 0): entry [d][e]. */
 function slashBasis(v: number, d: number, e: number): number {
-  const a = v >> 1; const ad = v & 1
+  const a = v >> 1
+  const ad = v & 1
   if (d < 2 && e >= 2) return d === a && e - 2 === ad ? 1 : 0
   if (d >= 2 && e < 2) return EPS[d - 2]![ad]! * EPS[e]![a]!
   return 0
@@ -50,11 +54,13 @@ export function sigmaEntry(v: number, w: number, d: number, e: number): number {
 }
 
 /** γ_5 = diag(−1, −1, 1, 1), so that P_L = (1 − γ_5)/2 keeps the undotted ψ_α. */
-export function gamma5Entry(d: number, e: number): number { return d !== e ? 0 : d < 2 ? -1 : 1 }
+export function gamma5Entry(d: number, e: number): number {
+  return d !== e ? 0 : d < 2 ? -1 : 1
+}
 
 /** C = diag(ε, ε): ψ^T C χ = ψ_α ε^{αβ} χ_β for two left-handed spinors. */
 export function chargeEntry(d: number, e: number): number {
-  if ((d < 2) !== (e < 2)) return 0
+  if (d < 2 !== e < 2) return 0
   return EPS[d & 1]![e & 1]!
 }
 
@@ -77,7 +83,8 @@ export function diracWave(F: PrimeField, spinor: [number, number], angleSpinor: 
 
 /** Generator T^A with an adjoint slot (k,l) as a matrix [r][s]: ½(δ_{rl} δ_{ks} − δ_{kl} δ_{rs}/N). */
 export function generatorEntry(F: PrimeField, n: number, a: number, r: number, s: number): number {
-  const k = Math.floor(a / n); const l = a % n
+  const k = Math.floor(a / n)
+  const l = a % n
   let v = (r === l && k === s ? 1 : 0) * n - (k === l && r === s ? 1 : 0)
   v = ((v % F.p) + F.p) % F.p
   return F.div(v, F.from(2 * n))

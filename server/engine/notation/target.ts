@@ -8,8 +8,9 @@ import { lowerOperator } from './lower'
 import type { ParsedOperator } from './ast'
 
 /** A typed operator ready for the rewrite: its amplitude, and whether it is i times that. */
-export interface NotationTarget extends AmplitudeTarget { timesI: boolean }
-
+export interface NotationTarget extends AmplitudeTarget {
+  timesI: boolean
+}
 
 /**
  * Parse and lower a printed operator onto one class.

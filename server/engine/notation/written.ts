@@ -23,14 +23,16 @@ export { looksPrinted } from '../basis/printedText'
  */
 export function notationValues(theory: Theory, b: ClassBasis, text: string, aliases?: Record<string, string>): { values: number[][]; timesI: boolean } {
   const target: NotationTarget = notationTarget(theory, b.class, text, aliases)
-  const values = b.primes.map(({ F, points }) => points.map((pt) => {
-    let total = 0
-    for (const perm of b.perms) {
-      const v = target.evaluate(F, pt, perm.map)
-      total = perm.sign === 1 ? F.add(total, v) : F.sub(total, v)
-    }
-    return total
-  }))
+  const values = b.primes.map(({ F, points }) =>
+    points.map((pt) => {
+      let total = 0
+      for (const perm of b.perms) {
+        const v = target.evaluate(F, pt, perm.map)
+        total = perm.sign === 1 ? F.add(total, v) : F.sub(total, v)
+      }
+      return total
+    }),
+  )
   return { values, timesI: target.timesI }
 }
 

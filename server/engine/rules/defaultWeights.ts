@@ -12,8 +12,7 @@ export type RuleSpecies = Pick<Species, 'label' | 'field' | 'kind' | 'dim2'>
 
 /** The context a rule is applied in: the species of a relativistic theory or a heavy-particle frame. */
 export type RuleContext =
-  | { frame: 'relativistic'; species: ReadonlyArray<RuleSpecies> }
-  | { frame: 'heavy'; particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }
+  { frame: 'relativistic'; species: ReadonlyArray<RuleSpecies> } | { frame: 'heavy'; particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }
 
 /** A rule with every weight resolved to an exact rational. */
 export interface ResolvedRule {
@@ -31,12 +30,22 @@ export interface ResolvedRule {
  * Hornbostel, Phys. Rev. D 46 (1992) 4052; Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125.
  */
 export const HEAVY_VELOCITY_WEIGHTS: Readonly<Record<string, string>> = {
-  psi: '3/2', D: '1', D_t: '2', E: '3', B: '4', sigma: '0',
+  psi: '3/2',
+  D: '1',
+  D_t: '2',
+  E: '3',
+  B: '4',
+  sigma: '0',
 }
 
 /** Mass dimensions of the heavy-frame blocks (order in 1/m = dimension − 4). */
 export const HEAVY_MASS_WEIGHTS: Readonly<Record<string, string>> = {
-  psi: '3/2', D: '1', D_t: '1', E: '2', B: '2', sigma: '0',
+  psi: '3/2',
+  D: '1',
+  D_t: '1',
+  E: '2',
+  B: '2',
+  sigma: '0',
 }
 
 function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle?: string; light?: ReadonlyArray<{ name: string; dim: string }> }): Map<string, Rational> {
@@ -45,12 +54,19 @@ function heavyDefaults(rule: CountingRule, ctx: { particle: string; antiparticle
   for (const [k, v] of Object.entries(table)) {
     if (k === 'psi') {
       for (const f of [ctx.particle, ctx.antiparticle]) {
-        if (f) { out.set(f, parseRational(v)); out.set(`${f}*`, parseRational(v)) }
+        if (f) {
+          out.set(f, parseRational(v))
+          out.set(`${f}*`, parseRational(v))
+        }
       }
     } else out.set(k, parseRational(v))
   }
   // Light fields of heavy–light operators: their mass dimension under the 1/m rule.
-  if (rule.kind === 'massRatio') for (const f of ctx.light ?? []) { out.set(f.name, parseRational(f.dim)); out.set(`${f.name}*`, parseRational(f.dim)) }
+  if (rule.kind === 'massRatio')
+    for (const f of ctx.light ?? []) {
+      out.set(f.name, parseRational(f.dim))
+      out.set(`${f.name}*`, parseRational(f.dim))
+    }
   return out
 }
 

@@ -20,12 +20,7 @@ export interface OrderChange {
  *   // [{ id: 'kinetic', from: 1, to: 0 }]  (Darwin stays at 2)
  * Method: orderOfOperator under both rules. Reference: common practice.
  */
-export function reshuffle(
-  operators: readonly RuleOperator[],
-  ruleA: CountingRule | ResolvedRule,
-  ruleB: CountingRule | ResolvedRule,
-  ctx?: RuleContext,
-): OrderChange[] {
+export function reshuffle(operators: readonly RuleOperator[], ruleA: CountingRule | ResolvedRule, ruleB: CountingRule | ResolvedRule, ctx?: RuleContext): OrderChange[] {
   const a = asResolved(ruleA, ctx)
   const b = asResolved(ruleB, ctx)
   const out: OrderChange[] = []
@@ -42,11 +37,7 @@ export function reshuffle(
  * @example groupByOrder([kinetic, sigmaB], velocityRule, heavyCtx) // [{order:'0',ids:['kinetic']},{order:'2',ids:['sigmaB']}]
  * Method: orderOfOperator then sort. Reference: common practice.
  */
-export function groupByOrder(
-  operators: readonly RuleOperator[],
-  rule: CountingRule | ResolvedRule,
-  ctx?: RuleContext,
-): Array<{ order: string; value: Rational; ids: string[] }> {
+export function groupByOrder(operators: readonly RuleOperator[], rule: CountingRule | ResolvedRule, ctx?: RuleContext): Array<{ order: string; value: Rational; ids: string[] }> {
   const r = asResolved(rule, ctx)
   const groups = new Map<string, { order: string; value: Rational; ids: string[] }>()
   for (const op of operators) {

@@ -37,10 +37,10 @@ export interface AlphaQedAtZInput {
 }
 export interface AlphaQedAtZResult {
   deltaAlphaLeptonic: number
-  onShell: { alphaInverse: number, deltaAlpha: number }
-  msbar: { alphaInverse: number, deltaAlphaHat: number, conversion: number }
+  onShell: { alphaInverse: number; deltaAlpha: number }
+  msbar: { alphaInverse: number; deltaAlphaHat: number; conversion: number }
   computed: string[]
-  inputs: Record<string, { value: number, source: string }>
+  inputs: Record<string, { value: number; source: string }>
   caution: string
 }
 

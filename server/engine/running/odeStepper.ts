@@ -4,7 +4,9 @@
  */
 import { EngineCancelledError, EngineConsistencyError } from '../errors'
 
-export interface CancelSignal { readonly aborted: boolean }
+export interface CancelSignal {
+  readonly aborted: boolean
+}
 
 export interface OdeOptions {
   /** Absolute tolerance per step on y (default 1e-13). */
@@ -20,7 +22,10 @@ export interface OdeOptions {
 
 /** The solution left (0, yMax) at t: the caller says what that means for its equation. */
 export class OdeRangeError extends EngineConsistencyError {
-  constructor(readonly t: number, readonly y: number) {
+  constructor(
+    readonly t: number,
+    readonly y: number,
+  ) {
     super('integrateOde', `solution left its range (y = ${y} at t = ${t})`)
   }
 }
@@ -54,7 +59,10 @@ export function integrateOde(f: (y: number) => number, y0: number, t0: number, t
     const full = rk4Step(f, y, h)
     const half = rk4Step(f, rk4Step(f, y, h / 2), h / 2)
     const err = Math.abs(half - full)
-    if (err > tol && Math.abs(h) > 1e-9) { h /= 2; continue }
+    if (err > tol && Math.abs(h) > 1e-9) {
+      h /= 2
+      continue
+    }
     y = half + (half - full) / 15
     t += h
     if (!Number.isFinite(y) || (opts.yMax !== undefined && (y <= 0 || y >= opts.yMax))) {

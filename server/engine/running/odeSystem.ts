@@ -29,10 +29,15 @@ export interface OdeSystemResult {
   t: number
   y: Float64Array
   /** Set when a margin stopped the integration: its index and the t where it crossed zero. */
-  stopped?: { index: number, t: number }
+  stopped?: { index: number; t: number }
 }
 
-interface Stepper { f: OdeSystem, n: number, k: Float64Array[], tmp: Float64Array }
+interface Stepper {
+  f: OdeSystem
+  n: number
+  k: Float64Array[]
+  tmp: Float64Array
+}
 
 function rk4(s: Stepper, y: Float64Array, h: number, out: Float64Array): void {
   const [k1, k2, k3, k4] = s.k as [Float64Array, Float64Array, Float64Array, Float64Array]
@@ -106,7 +111,10 @@ export function integrateOdeSystem(f: OdeSystem, y0: Float64Array, t0: number, t
     let err = 0
     for (let i = 0; i < n; i++) err = Math.max(err, Math.abs(half[i]! - full[i]!) / Math.max(1, Math.abs(half[i]!)))
     const finite = Number.isFinite(err)
-    if ((!finite || err > tol) && Math.abs(h) > 1e-9) { h /= 2; continue }
+    if ((!finite || err > tol) && Math.abs(h) > 1e-9) {
+      h /= 2
+      continue
+    }
     const next = new Float64Array(n)
     for (let i = 0; i < n; i++) next[i] = half[i]! + (half[i]! - full[i]!) / 15
     const failed = finite ? failing(opts.margins, next) : 0

@@ -31,7 +31,7 @@ function assertFlavours(fn: string, nf: number): void {
  */
 export function qcdBetaExact(nf: number): ZetaRational[] {
   assertFlavours('qcdBetaExact', nf)
-  return BETA_NF_POLYNOMIALS.map(p => zrPolynomial(p, rat(nf)))
+  return BETA_NF_POLYNOMIALS.map((p) => zrPolynomial(p, rat(nf)))
 }
 
 /**

@@ -77,5 +77,8 @@ export function alphaSAboveThreshold(alphaLow: number, logMu2OverM2: number, kin
     x = next
   }
   // Only a large α_s keeps the iteration from contracting: a property of the input, not a bug.
-  throw new EngineInputError('alphaSAboveThreshold', `α_s = ${alphaLow} at a heavy-quark threshold is too large to match across it (the matching is perturbative); choose a smaller α_s or start above the threshold`)
+  throw new EngineInputError(
+    'alphaSAboveThreshold',
+    `α_s = ${alphaLow} at a heavy-quark threshold is too large to match across it (the matching is perturbative); choose a smaller α_s or start above the threshold`,
+  )
 }

@@ -4,10 +4,7 @@
  */
 import { parseRational, type Rational } from '../exact/rational'
 import { ELECTRON_MASS_MEV, MUON_MASS_MEV, TAU_MASS_MEV } from '../scales/codata2018'
-import {
-  BOTTOM_MSBAR_MASS_GEV, CHARM_MSBAR_MASS_GEV, DOWN_MASS_2GEV_GEV, STRANGE_MASS_2GEV_GEV,
-  TOP_POLE_MASS_GEV, UP_MASS_2GEV_GEV,
-} from '../scales/pdg2024'
+import { BOTTOM_MSBAR_MASS_GEV, CHARM_MSBAR_MASS_GEV, DOWN_MASS_2GEV_GEV, STRANGE_MASS_2GEV_GEV, TOP_POLE_MASS_GEV, UP_MASS_2GEV_GEV } from '../scales/pdg2024'
 
 export interface QedFermion {
   name: string

@@ -19,7 +19,12 @@ export interface RunAlphaQEDInput {
   /** Plot points per segment between thresholds (default 8). */
   pointsPerSegment?: number
 }
-export interface AlphaQEDTracePoint { mu: number, alpha: number, alphaInverse: number, activeFermions: number }
+export interface AlphaQEDTracePoint {
+  mu: number
+  alpha: number
+  alphaInverse: number
+  activeFermions: number
+}
 export interface RunAlphaQEDResult {
   alpha: number
   alphaInverse: number
@@ -57,8 +62,8 @@ export function runAlphaQED(input: RunAlphaQEDInput): RunAlphaQEDResult {
   if (!Number.isFinite(inv0) || inv0 <= 0) throw new EngineInputError('runAlphaQED', `α(0)⁻¹ must be positive, but it is ${inv0}`)
   checkFermions(fermions)
   const inverseAt = (mu: number) => fermions.reduce((s, f) => (f.mass < mu ? s - (2 / (3 * Math.PI)) * rationalToNumber(chargeWeight(f)) * Math.log(mu / f.mass) : s), inv0)
-  const active = (mu: number) => fermions.filter(f => f.mass < mu).length
-  const edges = [...fermions.map(f => f.mass).filter(m => m < input.muTo), input.muTo]
+  const active = (mu: number) => fermions.filter((f) => f.mass < mu).length
+  const edges = [...fermions.map((f) => f.mass).filter((m) => m < input.muTo), input.muTo]
   const n = input.pointsPerSegment ?? 8
   const trace: AlphaQEDTracePoint[] = []
   for (let i = 0; i < edges.length; i++) {
@@ -72,9 +77,12 @@ export function runAlphaQED(input: RunAlphaQEDInput): RunAlphaQEDResult {
   const alphaInverse = inverseAt(input.muTo)
   if (!(alphaInverse > 0)) throw new EngineInputError('runAlphaQED', `α⁻¹ turns negative on the way to μ = ${input.muTo} GeV (Landau pole); choose a lower scale`)
   return {
-    alpha: 1 / alphaInverse, alphaInverse, muTo: input.muTo, trace,
+    alpha: 1 / alphaInverse,
+    alphaInverse,
+    muTo: input.muTo,
+    trace,
     computed: ['one-loop leading-logarithm running of α with step-function thresholds'],
-    inputs: { alphaInverse0: inv0, fermions: fermions.map(f => `${f.name} ${f.mass} GeV (${f.source})`).join('; ') },
+    inputs: { alphaInverse0: inv0, fermions: fermions.map((f) => `${f.name} ${f.mass} GeV (${f.source})`).join('; ') },
     caution: `${RUNNING_CAUTION}. Light-quark thresholds are not perturbative: use alphaQedAtZ with a measured Δα_had for hadrons.`,
   }
 }

@@ -11,8 +11,20 @@ import { validateRunAlphaS, type QcdThreshold, type RunAlphaSInput } from './run
 
 export type { QcdThreshold, RunAlphaSInput }
 
-export interface AlphaSTracePoint { mu: number, alphaS: number, nf: number }
-export interface ThresholdCrossing { name: string, mass: number, kind: HeavyMassKind, direction: 'down' | 'up', nfAbove: number, alphaAbove: number, alphaBelow: number }
+export interface AlphaSTracePoint {
+  mu: number
+  alphaS: number
+  nf: number
+}
+export interface ThresholdCrossing {
+  name: string
+  mass: number
+  kind: HeavyMassKind
+  direction: 'down' | 'up'
+  nfAbove: number
+  alphaAbove: number
+  alphaBelow: number
+}
 export interface RunAlphaSResult {
   alphaS: number
   muTo: number
@@ -92,10 +104,16 @@ export function runAlphaS(input: RunAlphaSInput): RunAlphaSResult {
   alpha = runSegment(alpha, mu, input.muTo, nf, input.loops, trace, input.signal)
   input.onProgress?.(1, `μ = ${input.muTo} GeV`)
   return {
-    alphaS: alpha, muTo: input.muTo, nfFrom: v.nfFrom, nfTo: nf, loops: input.loops,
-    decouplingLoops: v.decouplingLoops, crossings, trace,
+    alphaS: alpha,
+    muTo: input.muTo,
+    nfFrom: v.nfFrom,
+    nfTo: nf,
+    loops: input.loops,
+    decouplingLoops: v.decouplingLoops,
+    crossings,
+    trace,
     computed: ['α_s(muTo) by numerical integration of the truncated β function', 'the jumps of α_s at the crossed thresholds'],
-    inputs: { alphaS: input.alphaS, muFrom: input.muFrom, muTo: input.muTo, thresholds: v.crossed.map(t => `${t.name} ${t.mass} GeV (${t.kind})`).join(', ') || 'none crossed' },
+    inputs: { alphaS: input.alphaS, muFrom: input.muFrom, muTo: input.muTo, thresholds: v.crossed.map((t) => `${t.name} ${t.mass} GeV (${t.kind})`).join(', ') || 'none crossed' },
     caution: RUNNING_CAUTION,
   }
 }

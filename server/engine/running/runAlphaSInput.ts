@@ -6,7 +6,11 @@ import { EngineInputError } from '../errors'
 import type { DecouplingLoops, HeavyMassKind } from './qcdDecoupling'
 import type { CancelSignal } from './odeStepper'
 
-export interface QcdThreshold { name: string, mass: number, kind: HeavyMassKind }
+export interface QcdThreshold {
+  name: string
+  mass: number
+  kind: HeavyMassKind
+}
 export interface RunAlphaSInput {
   alphaS: number
   muFrom: number
@@ -23,9 +27,16 @@ export interface RunAlphaSInput {
   signal?: CancelSignal
 }
 
-export interface ValidatedRun { nfFrom: number, down: boolean, crossed: QcdThreshold[], decouplingLoops: DecouplingLoops }
+export interface ValidatedRun {
+  nfFrom: number
+  down: boolean
+  crossed: QcdThreshold[]
+  decouplingLoops: DecouplingLoops
+}
 
-const fail = (msg: string): never => { throw new EngineInputError('runAlphaS', msg) }
+const fail = (msg: string): never => {
+  throw new EngineInputError('runAlphaS', msg)
+}
 
 function positive(name: string, x: unknown): void {
   if (typeof x !== 'number' || !Number.isFinite(x) || x <= 0) fail(`${name} must be a positive number, but it is ${x}`)
@@ -43,8 +54,8 @@ function checkThresholds(ths: QcdThreshold[], light: number): void {
 }
 
 function startFlavours(input: RunAlphaSInput, ths: QcdThreshold[], light: number): number {
-  const nfStrict = light + ths.filter(t => t.mass < input.muFrom).length
-  const onThreshold = ths.some(t => t.mass === input.muFrom)
+  const nfStrict = light + ths.filter((t) => t.mass < input.muFrom).length
+  const onThreshold = ths.some((t) => t.mass === input.muFrom)
   if (input.nfFrom === undefined) return nfStrict
   if (input.nfFrom === nfStrict || (onThreshold && input.nfFrom === nfStrict + 1)) return input.nfFrom
   return fail(`${input.nfFrom} active flavours at μ₀ = ${input.muFrom} GeV do not match the heavy quarks listed (they give ${nfStrict}); correct the number of flavours or the quark masses`)
@@ -73,7 +84,7 @@ export function validateRunAlphaS(input: RunAlphaSInput): ValidatedRun {
   const nfFrom = startFlavours(input, sorted, light)
   const activeAtStart = (t: QcdThreshold) => sorted.indexOf(t) < nfFrom - light
   const activeAtEnd = (t: QcdThreshold) => t.mass < input.muTo
-  const crossed = sorted.filter(t => activeAtStart(t) !== activeAtEnd(t))
+  const crossed = sorted.filter((t) => activeAtStart(t) !== activeAtEnd(t))
   const down = input.muTo < input.muFrom || (input.muTo === input.muFrom && crossed.length > 0 && activeAtStart(crossed[0]!))
   return { nfFrom, down, crossed: down ? crossed.reverse() : crossed, decouplingLoops: decouplingLoops as DecouplingLoops }
 }

@@ -8,9 +8,23 @@ import { parseDecimal, rationalToNumber } from './decimal'
 import type { DerivedScaleInput } from '../../../shared/schemas/scaleLadder'
 import { fromMeV, isLengthUnit, UNIT_POWER_OF_TEN } from './units'
 
-export interface ResolvedScale { kind: 'energy' | 'length', valueMeV: number, native?: Rational }
-export interface ParameterValue { value: number, exact?: Rational }
-export interface DerivedScale { name: string, from: string, value: number, unit: string, valueMeV: number, exactMeV?: string }
+export interface ResolvedScale {
+  kind: 'energy' | 'length'
+  valueMeV: number
+  native?: Rational
+}
+export interface ParameterValue {
+  value: number
+  exact?: Rational
+}
+export interface DerivedScale {
+  name: string
+  from: string
+  value: number
+  unit: string
+  valueMeV: number
+  exactMeV?: string
+}
 
 /** r^k for an integer k (negative powers invert). */
 export function powRational(r: Rational, k: number): Rational {

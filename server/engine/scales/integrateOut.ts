@@ -11,19 +11,28 @@ import { toMeV } from './units'
 import { checkMassPartners } from './massPartners'
 import { anomalyConditions } from '../theory/anomalies'
 
-export interface ThresholdScale { name?: string, value: number, unit: string }
+export interface ThresholdScale {
+  name?: string
+  value: number
+  unit: string
+}
 /** betaShift: the field's exact contribution to the one-loop b of the group (see fieldBetaContribution). */
-export interface ThresholdTag { group: string, field: string, text: string, betaShift: string }
+export interface ThresholdTag {
+  group: string
+  field: string
+  text: string
+  betaShift: string
+}
 export interface IntegrateOutResult {
   child: Theory
-  thresholdScale: { name?: string, value: number, unit: string, valueMeV: number }
+  thresholdScale: { name?: string; value: number; unit: string; valueMeV: number }
   thresholdTags: ThresholdTag[]
   generatedClasses: GeneratedClassHint[]
 }
 
 function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[] {
   if (names.length === 0) throw new EngineInputError('integrateOut', 'Choose at least one heavy field to integrate out')
-  const byName = new Map(theory.fields.map(f => [f.name, f]))
+  const byName = new Map(theory.fields.map((f) => [f.name, f]))
   return names.map((n) => {
     const f = byName.get(n)
     if (!f) throw new EngineInputError('integrateOut', `Theory "${theory.name}" has no field "${n}"; choose fields of its roster`)
@@ -35,24 +44,25 @@ function removedFieldsOf(theory: Theory, names: readonly string[]): TheoryField[
 /** The theory below the threshold: the removed fields, their couplings and counting-rule blocks gone. */
 export function childTheory(theory: Theory, removed: Set<string>, scaleText: string): Theory {
   const dropBlock = (k: string) => removed.has(k.replace(/\*$/, ''))
-  const rules = theory.countingRules?.map(r => (r.weights
-    ? { ...r, weights: Object.fromEntries(Object.entries(r.weights).filter(([k]) => !dropBlock(k))) }
-    : r))
+  const rules = theory.countingRules?.map((r) => (r.weights ? { ...r, weights: Object.fromEntries(Object.entries(r.weights).filter(([k]) => !dropBlock(k))) } : r))
   const name = `${theory.name} below ${scaleText}`.slice(0, 80)
   const note = `Obtained from "${theory.name}" by integrating out ${[...removed].join(', ')} at ${scaleText}.`
   return {
     ...theory,
     name,
     description: theory.description ? `${theory.description}\n${note}`.slice(0, 2000) : note,
-    fields: theory.fields.filter(f => !removed.has(f.name)),
+    fields: theory.fields.filter((f) => !removed.has(f.name)),
     ...(rules ? { countingRules: rules } : {}),
-    ...(theory.couplings ? { couplings: theory.couplings.filter(c => !mentionsRemoved(c.class, removed)) } : {}),
+    ...(theory.couplings ? { couplings: theory.couplings.filter((c) => !mentionsRemoved(c.class, removed)) } : {}),
   }
 }
 
 /** A coupling's class names a removed field ("S", "S*", "S^2"): the operator is gone below the threshold. */
 function mentionsRemoved(classText: string, removed: Set<string>): boolean {
-  return classText.trim().split(/\s+/).some(t => removed.has(t.replace(/\^\d+$/, '').replace(/\*$/, '')))
+  return classText
+    .trim()
+    .split(/\s+/)
+    .some((t) => removed.has(t.replace(/\^\d+$/, '').replace(/\*$/, '')))
 }
 
 /**
@@ -66,10 +76,10 @@ function checkIntegrity(theory: Theory, child: Theory, names: readonly string[])
     const offer = partners.length ? ` Integrate out ${[...names, ...partners].join(', ')} together.` : ''
     throw new EngineInputError('integrateOut', `These fields cannot be integrated out as chosen. ${problems.join(' ')}${offer}`)
   }
-  const before = new Map(anomalyConditions(theory).map(c => [c.name, c.ok]))
-  const broken = anomalyConditions(child).filter(c => !c.ok && before.get(c.name) !== false)
+  const before = new Map(anomalyConditions(theory).map((c) => [c.name, c.ok]))
+  const broken = anomalyConditions(child).filter((c) => !c.ok && before.get(c.name) !== false)
   if (broken.length) {
-    const list = broken.map(c => `${c.name} (sum ${c.sum})`).join(', ')
+    const list = broken.map((c) => `${c.name} (sum ${c.sum})`).join(', ')
     // A vector-like set carries no anomaly, so this is a bug in the partner check, never hidden.
     throw new EngineConsistencyError('integrateOut', `Removing ${names.join(', ')} leaves a theory with gauge anomalies the original does not have: ${list}`)
   }
@@ -89,21 +99,25 @@ export function integrateOut(theory: Theory, fieldNames: readonly string[], thre
   }
   const removed = removedFieldsOf(theory, fieldNames)
   const valueMeV = toMeV(thresholdScale.value, thresholdScale.unit)
-  const names = new Set(removed.map(f => f.name))
+  const names = new Set(removed.map((f) => f.name))
   if (names.size !== removed.length) throw new EngineInputError('integrateOut', `A field is named more than once (${fieldNames.join(', ')}); name each heavy field once`)
   const scaleText = `${thresholdScale.name ? `${thresholdScale.name} = ` : ''}${thresholdScale.value} ${thresholdScale.unit}`
-  const byName = new Map(removed.map(f => [f.name, f]))
-  const groupOf = new Map(theory.groups.map(g => [g.name, g]))
-  const thresholdTags = thresholdShifts(removed, theory.groups).flatMap(s => s.fields.map(field => ({
-    group: s.group, field, text: `coefficient shifts when ${field} is integrated out`,
-    betaShift: ratText(fieldBetaContribution(byName.get(field)!, groupOf.get(s.group)!, theory.groups)),
-  })))
+  const byName = new Map(removed.map((f) => [f.name, f]))
+  const groupOf = new Map(theory.groups.map((g) => [g.name, g]))
+  const thresholdTags = thresholdShifts(removed, theory.groups).flatMap((s) =>
+    s.fields.map((field) => ({
+      group: s.group,
+      field,
+      text: `coefficient shifts when ${field} is integrated out`,
+      betaShift: ratText(fieldBetaContribution(byName.get(field)!, groupOf.get(s.group)!, theory.groups)),
+    })),
+  )
   const child = childTheory(theory, names, scaleText)
   checkIntegrity(theory, child, [...names])
   return {
     child,
     thresholdScale: { ...thresholdScale, valueMeV },
     thresholdTags,
-    generatedClasses: removed.flatMap(f => generatedClassHints(f, theory.groups)),
+    generatedClasses: removed.flatMap((f) => generatedClassHints(f, theory.groups)),
   }
 }

@@ -16,7 +16,13 @@ import { type Rational, neg, parseRational, toString as ratText } from '../exact
 
 export type Reality = 'real' | 'pseudoreal' | 'complex'
 
-interface WeylForm { field: TheoryField, key: string, conjugateKey: string, reality: Reality, copies: number }
+interface WeylForm {
+  field: TheoryField
+  key: string
+  conjugateKey: string
+  reality: Reality
+  copies: number
+}
 
 export const isFermion = (f: TheoryField): boolean => f.lorentz === 'left-weyl' || f.lorentz === 'right-weyl'
 
@@ -53,10 +59,10 @@ function realityOf(f: TheoryField, groups: readonly TheoryGroup[]): Reality {
 }
 
 /** A field's representation under every group (as written, or conjugated), and its reality. */
-export function representationOf(f: TheoryField, groups: readonly TheoryGroup[], conjugate = false): { key: string, conjugateKey: string, reality: Reality } {
+export function representationOf(f: TheoryField, groups: readonly TheoryGroup[], conjugate = false): { key: string; conjugateKey: string; reality: Reality } {
   return {
-    key: groups.map(g => keyOf(g, f, conjugate)).join(' '),
-    conjugateKey: groups.map(g => keyOf(g, f, !conjugate)).join(' '),
+    key: groups.map((g) => keyOf(g, f, conjugate)).join(' '),
+    conjugateKey: groups.map((g) => keyOf(g, f, !conjugate)).join(' '),
     reality: realityOf(f, groups),
   }
 }
@@ -74,14 +80,18 @@ export interface MassPartnerCheck {
 }
 
 const sum = (forms: WeylForm[]) => forms.reduce((s, w) => s + w.copies, 0)
-const names = (forms: WeylForm[]) => forms.map(w => w.field.name).join(', ')
+const names = (forms: WeylForm[]) => forms.map((w) => w.field.name).join(', ')
 const copies = (n: number) => `${n} Weyl ${n === 1 ? 'copy' : 'copies'}`
 
 function describeGroups(groups: readonly TheoryGroup[]): string {
-  return groups.length ? groups.map(g => g.name).join(', ') : 'the Lorentz group alone'
+  return groups.length ? groups.map((g) => g.name).join(', ') : 'the Lorentz group alone'
 }
 
-interface Problem { text: string, candidates: WeylForm[], deficit: number }
+interface Problem {
+  text: string
+  candidates: WeylForm[]
+  deficit: number
+}
 
 /** What completes a set short of `deficit` copies: one field that fits exactly, or a choice. */
 function fixText(candidates: WeylForm[], deficit: number, none: string): string {
@@ -95,7 +105,7 @@ function complexProblem(inR: WeylForm[], inConj: WeylForm[], others: WeylForm[],
   const [a, b] = [sum(inR), sum(inConj)]
   if (a === b) return null
   const [more, fewer] = a > b ? [inR, inConj] : [inConj, inR]
-  const candidates = others.filter(w => w.key === (more[0]!.conjugateKey))
+  const candidates = others.filter((w) => w.key === more[0]!.conjugateKey)
   const head = fewer.length
     ? `${names(more)} (${copies(Math.max(a, b))}) cannot be heavy with ${names(fewer)} (${copies(Math.min(a, b))})`
     : `${names(more)} cannot be integrated out without a partner`
@@ -110,9 +120,13 @@ function complexProblem(inR: WeylForm[], inConj: WeylForm[], others: WeylForm[],
 /** The problem of one pseudo-real representation: an odd number of copies cannot all be massive. */
 function pseudorealProblem(inR: WeylForm[], others: WeylForm[]): Problem | null {
   if (sum(inR) % 2 === 0) return null
-  const candidates = others.filter(w => w.key === inR[0]!.key)
+  const candidates = others.filter((w) => w.key === inR[0]!.key)
   const fix = fixText(candidates, 1, 'choose an even number of copies')
-  return { text: `${names(inR)} (${copies(sum(inR))}) sit in a pseudo-real representation, where a mass term pairs the copies two by two (antisymmetric in flavour): an odd number cannot all be heavy; ${fix}.`, candidates, deficit: 1 }
+  return {
+    text: `${names(inR)} (${copies(sum(inR))}) sit in a pseudo-real representation, where a mass term pairs the copies two by two (antisymmetric in flavour): an odd number cannot all be heavy; ${fix}.`,
+    candidates,
+    deficit: 1,
+  }
 }
 
 /**
@@ -122,19 +136,25 @@ function pseudorealProblem(inR: WeylForm[], others: WeylForm[]): Problem | null 
  */
 export function checkMassPartners(theory: Theory, removed: readonly string[]): MassPartnerCheck {
   const chosen = new Set(removed)
-  const forms = theory.fields.filter(isFermion).map(f => weylForm(f, theory.groups))
-  const inSet = forms.filter(w => chosen.has(w.field.name))
-  const others = forms.filter(w => !chosen.has(w.field.name))
+  const forms = theory.fields.filter(isFermion).map((f) => weylForm(f, theory.groups))
+  const inSet = forms.filter((w) => chosen.has(w.field.name))
+  const others = forms.filter((w) => !chosen.has(w.field.name))
   const problems: string[] = []
   const partners: string[] = []
   const seen = new Set<string>()
   for (const w of inSet) {
     if (seen.has(w.key) || w.reality === 'real') continue
     seen.add(w.key).add(w.conjugateKey)
-    const inR = inSet.filter(x => x.key === w.key)
-    const problem = w.reality === 'pseudoreal'
-      ? pseudorealProblem(inR, others)
-      : complexProblem(inR, inSet.filter(x => x.key === w.conjugateKey), others, theory.groups)
+    const inR = inSet.filter((x) => x.key === w.key)
+    const problem =
+      w.reality === 'pseudoreal'
+        ? pseudorealProblem(inR, others)
+        : complexProblem(
+            inR,
+            inSet.filter((x) => x.key === w.conjugateKey),
+            others,
+            theory.groups,
+          )
     if (!problem) continue
     problems.push(problem.text)
     const [only] = problem.candidates
@@ -148,12 +168,12 @@ export function checkMassPartners(theory: Theory, removed: readonly string[]): M
  * representation; for a pseudo-real one, the same): the form ticks them along with it.
  */
 export function partnerMap(theory: Theory): Record<string, string[]> {
-  const forms = theory.fields.filter(isFermion).map(f => weylForm(f, theory.groups))
+  const forms = theory.fields.filter(isFermion).map((f) => weylForm(f, theory.groups))
   const out: Record<string, string[]> = {}
   for (const w of forms) {
     if (w.reality === 'real') continue
     const target = w.reality === 'pseudoreal' ? w.key : w.conjugateKey
-    const found = forms.filter(o => o !== w && o.key === target).map(o => o.field.name)
+    const found = forms.filter((o) => o !== w && o.key === target).map((o) => o.field.name)
     if (found.length) out[w.field.name] = found
   }
   return out

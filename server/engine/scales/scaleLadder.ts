@@ -6,10 +6,7 @@ import { EngineInputError } from '../errors'
 import { describeIssue, describeZodError } from '../../../shared/schemas/describeZodError'
 import { div, mul, ONE, parseRational, rat, toString as ratText, type Rational } from '../exact/rational'
 import { parseDecimal, rationalToNumber } from './decimal'
-import {
-  OrderListSchema, ScaleLadderInputSchema,
-  type ExpansionParameterInput, type OrderSpec, type ScaleInput, type ScaleLadderInput,
-} from '../../../shared/schemas/scaleLadder'
+import { OrderListSchema, ScaleLadderInputSchema, type ExpansionParameterInput, type OrderSpec, type ScaleInput, type ScaleLadderInput } from '../../../shared/schemas/scaleLadder'
 import { isLengthUnit, toMeV, UNIT_POWER_OF_TEN } from './units'
 import { ladderOverBudget, overBudgetMessage } from '../../../shared/schemas/ladderBudget'
 import { derivedScale, powRational, type DerivedScale, type ResolvedScale } from './derivedScales'
@@ -22,8 +19,17 @@ export interface LadderScale {
   /** Exact value in MeV (energy units given as text), as "p/q"; absent for lengths and floats. */
   exactMeV?: string
 }
-export interface LadderParameter { name: string, value: number, exact?: string }
-export interface LadderOrder { order: number | string, estimate: number, exactEstimate?: string, belowTarget: boolean }
+export interface LadderParameter {
+  name: string
+  value: number
+  exact?: string
+}
+export interface LadderOrder {
+  order: number | string
+  estimate: number
+  exactEstimate?: string
+  belowTarget: boolean
+}
 export interface ScaleLadder {
   scales: LadderScale[]
   derived: DerivedScale[]
@@ -36,7 +42,7 @@ export interface ScaleLadder {
 }
 
 /** Exact rational of a literal given as text; numbers stay numeric (undefined). */
-function literal(v: number | string): { value: number, exact?: Rational } {
+function literal(v: number | string): { value: number; exact?: Rational } {
   if (typeof v === 'number') return { value: v }
   const exact = v.includes('/') ? parseRational(v) : parseDecimal(v)
   return { value: rationalToNumber(exact), exact }
@@ -60,7 +66,7 @@ function side(p: ExpansionParameterInput, v: number | string, scales: Map<string
   return { lit: literal(v) }
 }
 
-function resolveParameter(p: ExpansionParameterInput, scales: Map<string, ResolvedScale>): { value: number, exact?: Rational } {
+function resolveParameter(p: ExpansionParameterInput, scales: Map<string, ResolvedScale>): { value: number; exact?: Rational } {
   const a = side(p, p.numerator, scales)
   const b = side(p, p.denominator, scales)
   if (a.lit && b.lit) {
@@ -68,7 +74,10 @@ function resolveParameter(p: ExpansionParameterInput, scales: Map<string, Resolv
     return { value: a.lit.value / b.lit.value, exact: a.lit.exact && b.lit.exact ? div(a.lit.exact, b.lit.exact) : undefined }
   }
   if (!a.scale || !b.scale) {
-    throw new EngineInputError('buildScaleLadder', `Expansion parameter "${p.name}" mixes a scale with a plain number (${p.numerator} / ${p.denominator}); a ratio must be dimensionless, so divide a scale by a scale or a number by a number`)
+    throw new EngineInputError(
+      'buildScaleLadder',
+      `Expansion parameter "${p.name}" mixes a scale with a plain number (${p.numerator} / ${p.denominator}); a ratio must be dimensionless, so divide a scale by a scale or a number by a number`,
+    )
   }
   const value = a.scale.valueMeV / b.scale.valueMeV
   if (!a.scale.native || !b.scale.native || a.scale.kind !== b.scale.kind) return { value }
@@ -77,13 +86,17 @@ function resolveParameter(p: ExpansionParameterInput, scales: Map<string, Resolv
   return { value, exact }
 }
 
-function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exact?: Rational }>, counting: string | undefined, leading: number, target?: number): LadderOrder {
+function estimateOrder(spec: OrderSpec, params: Map<string, { value: number; exact?: Rational }>, counting: string | undefined, leading: number, target?: number): LadderOrder {
   const powers = typeof spec === 'number' ? countingPowers(spec, counting, leading) : spec.powers
   let estimate = 1
   let exact: Rational | undefined = ONE
   for (const [name, k] of Object.entries(powers)) {
     const p = params.get(name)
-    if (!p) throw new EngineInputError('buildScaleLadder', `Order ${typeof spec === 'number' ? spec : spec.order} uses the expansion parameter "${name}", which the ladder does not declare; add it or correct the name`)
+    if (!p)
+      throw new EngineInputError(
+        'buildScaleLadder',
+        `Order ${typeof spec === 'number' ? spec : spec.order} uses the expansion parameter "${name}", which the ladder does not declare; add it or correct the name`,
+      )
     estimate *= p.value ** k
     exact = exact && p.exact ? mul(exact, powRational(p.exact, k)) : undefined
   }
@@ -95,12 +108,18 @@ function estimateOrder(spec: OrderSpec, params: Map<string, { value: number, exa
 function countingPowers(n: number, counting: string | undefined, leading: number): Record<string, number> {
   if (n === leading) return {}
   if (!counting) throw new EngineInputError('buildScaleLadder', `Order ${n} needs an expansion parameter to be estimated, but the ladder has none; add one (e.g. E/M)`)
-  if (n < leading) throw new EngineInputError('buildScaleLadder', `Order ${n} lies below the leading order ${leading} of this theory's power counting (a Goldstone-frame theory starts at p²); list orders from ${leading} up`)
+  if (n < leading)
+    throw new EngineInputError(
+      'buildScaleLadder',
+      `Order ${n} lies below the leading order ${leading} of this theory's power counting (a Goldstone-frame theory starts at p²); list orders from ${leading} up`,
+    )
   return { [counting]: n - leading }
 }
 
 /** How plain orders are estimated: order n is ε^(n − leadingOrder) (0 in general; 2 in the Goldstone frame, see shared/physics/leadingOrder.ts). */
-export interface LadderCounting { leadingOrder?: number }
+export interface LadderCounting {
+  leadingOrder?: number
+}
 
 /**
  * The scale ladder: scales sorted from highest to lowest energy, expansion parameters, and per
@@ -126,7 +145,7 @@ export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[], r
     if (scales.has(s.name)) throw new EngineInputError('buildScaleLadder', `Two scales are named "${s.name}"; give each scale its own name`)
     scales.set(s.name, resolveScale(s))
   }
-  const params = new Map<string, { value: number, exact?: Rational }>()
+  const params = new Map<string, { value: number; exact?: Rational }>()
   for (const p of inp.parameters) {
     if (params.has(p.name) || scales.has(p.name)) throw new EngineInputError('buildScaleLadder', `The name "${p.name}" is used twice among the scales and expansion parameters; give each its own name`)
     params.set(p.name, resolveParameter(p, scales))
@@ -136,20 +155,21 @@ export function buildScaleLadder(input: ScaleLadderInput, orders: OrderSpec[], r
     throw new EngineInputError('buildScaleLadder', `The counting parameter "${inp.countingParameter}" is not one of the ladder's expansion parameters; choose one of them`)
   }
   return {
-    scales: inp.scales.map(s => ladderScale(s, scales.get(s.name)!)).sort((a, b) => b.valueMeV - a.valueMeV),
+    scales: inp.scales.map((s) => ladderScale(s, scales.get(s.name)!)).sort((a, b) => b.valueMeV - a.valueMeV),
     derived: derivedScales(inp, scales, params),
     parameters: [...params].map(([name, p]) => (p.exact ? { name, value: p.value, exact: ratText(p.exact) } : { name, value: p.value })),
-    orders: ords.data.map(o => estimateOrder(o, params, counting, rule.leadingOrder ?? 0, inp.precisionTarget)),
+    orders: ords.data.map((o) => estimateOrder(o, params, counting, rule.leadingOrder ?? 0, inp.precisionTarget)),
     ...(inp.precisionTarget !== undefined ? { precisionTarget: inp.precisionTarget } : {}),
     ...(counting ? { countingParameter: counting } : {}),
     ...(rule.leadingOrder ? { leadingOrder: rule.leadingOrder } : {}),
   }
 }
 
-function derivedScales(inp: ScaleLadderInput, scales: Map<string, ResolvedScale>, params: Map<string, { value: number, exact?: Rational }>): DerivedScale[] {
+function derivedScales(inp: ScaleLadderInput, scales: Map<string, ResolvedScale>, params: Map<string, { value: number; exact?: Rational }>): DerivedScale[] {
   const seen = new Set<string>()
   return (inp.derived ?? []).map((d) => {
-    if (seen.has(d.name) || scales.has(d.name) || params.has(d.name)) throw new EngineInputError('buildScaleLadder', `The name "${d.name}" is used twice among the scales, expansion parameters and derived scales; give each its own name`)
+    if (seen.has(d.name) || scales.has(d.name) || params.has(d.name))
+      throw new EngineInputError('buildScaleLadder', `The name "${d.name}" is used twice among the scales, expansion parameters and derived scales; give each its own name`)
     seen.add(d.name)
     return derivedScale(d, scales, params)
   })

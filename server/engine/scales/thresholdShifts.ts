@@ -84,10 +84,10 @@ export function thresholdShifts(removedFields: readonly TheoryField[], groups: r
   const out: ThresholdShift[] = []
   for (const g of groups) {
     if (!g.gauge || g.type === 'Z' || FINITE_KINDS.includes(g.type as FiniteKind)) continue
-    const charged = removedFields.filter(f => isChargedUnder(f, g))
+    const charged = removedFields.filter((f) => isChargedUnder(f, g))
     if (charged.length === 0) continue
     const shift = charged.reduce((s, f) => add(s, fieldBetaContribution(f, g, groups)), ZERO)
-    out.push({ group: g.name, type: g.type, fields: charged.map(f => f.name), betaShift: ratText(shift) })
+    out.push({ group: g.name, type: g.type, fields: charged.map((f) => f.name), betaShift: ratText(shift) })
   }
   return out
 }

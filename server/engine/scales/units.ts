@@ -8,10 +8,7 @@ import { HBAR_C_MEV_FM } from './codata2018'
 import { SCALE_UNITS, UNIT_POWER_OF_TEN, isLengthUnit, type ScaleUnit } from '../../../shared/physics/scaleUnits'
 
 // The unit tables live in shared/ (the schemas need them on the client too).
-export {
-  ENERGY_UNITS, LENGTH_UNITS, SCALE_UNITS, UNIT_POWER_OF_TEN, isLengthUnit,
-  type EnergyUnit, type LengthUnit, type ScaleUnit,
-} from '../../../shared/physics/scaleUnits'
+export { ENERGY_UNITS, LENGTH_UNITS, SCALE_UNITS, UNIT_POWER_OF_TEN, isLengthUnit, type EnergyUnit, type LengthUnit, type ScaleUnit } from '../../../shared/physics/scaleUnits'
 
 export function assertScaleUnit(fn: string, unit: string): asserts unit is ScaleUnit {
   if (!(SCALE_UNITS as readonly string[]).includes(unit)) {

@@ -53,15 +53,27 @@ export function anomalyConditions(theory: Theory): AnomalyCondition[] {
   const out: AnomalyCondition[] = []
   const push = (name: string, sum: Rational, ok = isZero(sum)) => out.push({ name, sum: toString(sum), ok })
   const total = (term: (f: Weyl) => Rational) => fermions.reduce((s, f) => add(s, mul(rat(f.weight), term(f))), ZERO)
-  const others = (f: Weyl, skip: string) => nonAbelian.reduce((d, g) => {
-    const rep = f.reps.get(g.name)
-    return g.name === skip || rep === undefined ? d : d * repDimension(g.type, g.n, rep)
-  }, 1)
+  const others = (f: Weyl, skip: string) =>
+    nonAbelian.reduce((d, g) => {
+      const rep = f.reps.get(g.name)
+      return g.name === skip || rep === undefined ? d : d * repDimension(g.type, g.n, rep)
+    }, 1)
   for (const g of gauged) {
-    const index = (f: Weyl): Rational => { const rep = f.reps.get(g.name); return rep === undefined ? ZERO : repIndex(g.type, g.n, rep) }
+    const index = (f: Weyl): Rational => {
+      const rep = f.reps.get(g.name)
+      return rep === undefined ? ZERO : repIndex(g.type, g.n, rep)
+    }
     const cubic = cubicAnomaly(g.type, g.n)
-    if (cubic) push(`${g.name}^3`, total((f) => mul(rat(others(f, g.name)), cubic(f.reps.get(g.name)))))
-    for (const y of u1) push(`${g.name}^2 ${y}`, total((f) => mul(rat(others(f, g.name)), mul(index(f), charge(f, y)))))
+    if (cubic)
+      push(
+        `${g.name}^3`,
+        total((f) => mul(rat(others(f, g.name)), cubic(f.reps.get(g.name)))),
+      )
+    for (const y of u1)
+      push(
+        `${g.name}^2 ${y}`,
+        total((f) => mul(rat(others(f, g.name)), mul(index(f), charge(f, y)))),
+      )
     if ((g.type === 'SU' && g.n === 2) || g.type === 'Sp' || (g.type === 'SO' && g.n === 5)) {
       const s = total((f) => mul(rat(2 * others(f, g.name)), index(f)))
       push(`${g.name} Witten`, s, s.den === 1n && s.num % 2n === 0n)
@@ -69,11 +81,21 @@ export function anomalyConditions(theory: Theory): AnomalyCondition[] {
   }
   for (const a of u1) {
     const dim = (f: Weyl) => rat(others(f, ''))
-    push(`${a}^3`, total((f) => mul(dim(f), cube(charge(f, a)))))
+    push(
+      `${a}^3`,
+      total((f) => mul(dim(f), cube(charge(f, a)))),
+    )
     for (const b of u1) {
-      if (a !== b) push(`${a} ${b}^2`, total((f) => mul(dim(f), mul(charge(f, a), mul(charge(f, b), charge(f, b))))))
+      if (a !== b)
+        push(
+          `${a} ${b}^2`,
+          total((f) => mul(dim(f), mul(charge(f, a), mul(charge(f, b), charge(f, b))))),
+        )
     }
-    push(`gravity^2 ${a}`, total((f) => mul(dim(f), charge(f, a))))
+    push(
+      `gravity^2 ${a}`,
+      total((f) => mul(dim(f), charge(f, a))),
+    )
   }
   return out
 }
@@ -82,7 +104,11 @@ export function anomalyConditions(theory: Theory): AnomalyCondition[] {
 function cubicAnomaly(kind: string, n: number | undefined): ((rep: RepValue | undefined) => Rational) | null {
   const labels = (rep: RepValue | undefined, k: number): number[] => (rep === undefined || typeof rep === 'string' ? new Array<number>(k).fill(0) : rep.slice())
   if (kind === 'SU' && n! >= 3) return (rep) => suCubicAnomaly(n!, labels(rep, n! - 1))
-  if (kind === 'SO' && n === 6) return (rep) => { const a = labels(rep, 3); return suCubicAnomaly(4, [a[1]!, a[0]!, a[2]!]) }
+  if (kind === 'SO' && n === 6)
+    return (rep) => {
+      const a = labels(rep, 3)
+      return suCubicAnomaly(4, [a[1]!, a[0]!, a[2]!])
+    }
   return null
 }
 
@@ -97,11 +123,13 @@ export function checkAnomalies(theory: Theory): AnomalyCondition[] {
 /** The (1/2,0) species of the model: left-weyl fields and the conjugates of right-weyl ones. */
 function leftHanded(theory: Theory): Weyl[] {
   const model = buildTheoryModel(theory)
-  return model.species.filter((s) => s.lorentz === 'L').map((s) => {
-    const reps = new Map<string, RepValue>([...Object.entries(s.reps), ...Object.entries(s.lie)])
-    for (const g of model.finite) reps.set(g.name, g.table.irreps[s.finite[g.name]!]!.name)
-    return { name: s.label, reps, charges: new Map(Object.entries(s.u1)), weight: s.flavors }
-  })
+  return model.species
+    .filter((s) => s.lorentz === 'L')
+    .map((s) => {
+      const reps = new Map<string, RepValue>([...Object.entries(s.reps), ...Object.entries(s.lie)])
+      for (const g of model.finite) reps.set(g.name, g.table.irreps[s.finite[g.name]!]!.name)
+      return { name: s.label, reps, charges: new Map(Object.entries(s.u1)), weight: s.flavors }
+    })
 }
 
 function charge(f: Weyl, group: string): Rational {
@@ -111,4 +139,3 @@ function charge(f: Weyl, group: string): Rational {
 function cube(q: Rational): Rational {
   return mul(q, mul(q, q))
 }
-

@@ -35,7 +35,10 @@ export function readClassKey(key: string): ClassKeyParts {
     const m = TOKEN.exec(token)
     if (!m) throw new EngineInputError('readClassKey', `Cannot read "${token}" in the class "${key}"; write a class as fields with powers, e.g. "D^2 H^2 H*^2"`)
     const power = m[2] === undefined ? 1 : Number(m[2])
-    if (m[1] === 'D') { derivatives += power; continue }
+    if (m[1] === 'D') {
+      derivatives += power
+      continue
+    }
     const seen = blocks.find((b) => b.label === m[1])
     if (seen) seen.power += power
     else blocks.push({ label: m[1]!, power })
@@ -61,7 +64,10 @@ export function formatClassKey(derivatives: number, blocks: readonly KeyBlock[])
  * @example classKeyOfCounts(smeftModel, countsOfClassKey(smeftModel, 'H^2 H*^2').counts, 2) // "D^2 H^2 H*^2"
  */
 export function classKeyOfCounts(model: TheoryModel, counts: readonly number[], derivatives: number): string {
-  return formatClassKey(derivatives, model.species.map((s, i) => ({ label: s.label, power: counts[i] ?? 0 })))
+  return formatClassKey(
+    derivatives,
+    model.species.map((s, i) => ({ label: s.label, power: counts[i] ?? 0 })),
+  )
 }
 
 /**
@@ -89,15 +95,18 @@ export function countsOfClassKey(model: TheoryModel, key: string): { counts: num
  * @example classKeyTex('D^2 H^2 H*^2') // "D^{2}\\,H^{2}\\,H^{*2}"
  */
 export function classKeyTex(key: string, fieldTex: Readonly<Record<string, string>> = {}): string {
-  return key.split(' ').map((part) => {
-    const m = /^([A-Za-z][A-Za-z0-9_]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
-    if (!m) return part.replace(/([&%$#_{}])/g, '\\$1')
-    const [, name, chiral, star, power] = m
-    const sub = chiral ? `_{${chiral.slice(1)}}` : ''
-    const sup = [star ? '*' : '', power ?? ''].join('')
-    const whole = chiral ? fieldTex[name! + chiral] : undefined // a field named "chi_L", not a field strength's half
-    const symbol = whole ?? fieldTex[name!] ?? (name!.length > 1 ? `\\mathrm{${name!.replace(/_/g, '\\_')}}` : name!)
-    const atom = /^([A-Za-z]|\\mathrm\{[^{}]*\}|\{.*\})$/.test(symbol) ? symbol : `{${symbol}}`
-    return `${atom}${whole ? '' : sub}${sup ? `^{${sup}}` : ''}`
-  }).join('\\,')
+  return key
+    .split(' ')
+    .map((part) => {
+      const m = /^([A-Za-z][A-Za-z0-9_]*?)(_[LR])?(\*)?(?:\^(\d+))?$/.exec(part)
+      if (!m) return part.replace(/([&%$#_{}])/g, '\\$1')
+      const [, name, chiral, star, power] = m
+      const sub = chiral ? `_{${chiral.slice(1)}}` : ''
+      const sup = [star ? '*' : '', power ?? ''].join('')
+      const whole = chiral ? fieldTex[name! + chiral] : undefined // a field named "chi_L", not a field strength's half
+      const symbol = whole ?? fieldTex[name!] ?? (name!.length > 1 ? `\\mathrm{${name!.replace(/_/g, '\\_')}}` : name!)
+      const atom = /^([A-Za-z]|\\mathrm\{[^{}]*\}|\{.*\})$/.test(symbol) ? symbol : `{${symbol}}`
+      return `${atom}${whole ? '' : sub}${sup ? `^{${sup}}` : ''}`
+    })
+    .join('\\,')
 }

@@ -97,7 +97,7 @@ const IRREP: Record<LorentzType, { angles: number; squares: number; dim2: number
 }
 const CONJUGATE_TYPE: Record<LorentzType, LorentzType> = { S: 'S', L: 'R', R: 'L', FL: 'FR', FR: 'FL' }
 const CONJUGATE_KIND: Record<SuKind, SuKind> = { fund: 'anti', anti: 'fund', adj: 'adj', singlet: 'singlet', other: 'other' }
-const MATTER_TYPE: Record<Exclude<LorentzKind, 'field-strength'>, LorentzType> = { 'scalar': 'S', 'left-weyl': 'L', 'right-weyl': 'R' }
+const MATTER_TYPE: Record<Exclude<LorentzKind, 'field-strength'>, LorentzType> = { scalar: 'S', 'left-weyl': 'L', 'right-weyl': 'R' }
 
 /**
  * Resolve a validated theory into species (any frame: the roster of a heavy-frame theory too;
@@ -122,8 +122,10 @@ export function buildTheoryModel(theory: Theory, opts: { nf?: number } = {}): Th
     const i = model.species.length
     const selfConjugate = f.lorentz === 'scalar' && f.real === true
     const first: SpeciesParts = {
-      label: strength ? `${f.name}_L` : f.name, conj: false,
-      lorentz: strength ? 'FL' : MATTER_TYPE[f.lorentz as Exclude<LorentzKind, 'field-strength'>], ...fieldCharges(model, f),
+      label: strength ? `${f.name}_L` : f.name,
+      conj: false,
+      lorentz: strength ? 'FL' : MATTER_TYPE[f.lorentz as Exclude<LorentzKind, 'field-strength'>],
+      ...fieldCharges(model, f),
     }
     const second: SpeciesParts = { label: strength ? `${f.name}_R` : `${f.name}*`, conj: true, lorentz: CONJUGATE_TYPE[first.lorentz], ...conjugateCharges(model, first) }
     const flavors = f.flavors === undefined ? 1 : (opts.nf ?? f.flavors)
@@ -170,9 +172,28 @@ function conjugateCharges(model: TheoryModel, s: SpeciesParts): Charges {
 function makeSpecies(f: TheoryField, fieldIndex: number, flavors: number, s: SpeciesParts, partner: { label: string; index: number }): Species {
   const { angles, squares, dim2 } = IRREP[s.lorentz]
   return {
-    label: s.label, field: f.name, tex: fieldTex(f.name, f.display), fieldIndex, conj: s.conj, conjugate: partner.label, partner: partner.index,
-    kind: f.lorentz, lorentz: s.lorentz, angles, squares, helicity2: squares - angles, fermion: s.lorentz === 'L' || s.lorentz === 'R', dim2,
-    reps: s.reps, suKind: s.suKind, lie: s.lie, finite: s.finite, u1: s.u1, zn: s.zn, flavors, flavored: f.flavors !== undefined,
+    label: s.label,
+    field: f.name,
+    tex: fieldTex(f.name, f.display),
+    fieldIndex,
+    conj: s.conj,
+    conjugate: partner.label,
+    partner: partner.index,
+    kind: f.lorentz,
+    lorentz: s.lorentz,
+    angles,
+    squares,
+    helicity2: squares - angles,
+    fermion: s.lorentz === 'L' || s.lorentz === 'R',
+    dim2,
+    reps: s.reps,
+    suKind: s.suKind,
+    lie: s.lie,
+    finite: s.finite,
+    u1: s.u1,
+    zn: s.zn,
+    flavors,
+    flavored: f.flavors !== undefined,
   }
 }
 

@@ -18,17 +18,23 @@ export async function requestReset(email: string) {
     if (!(await takeMailQuota(trx, email, 'reset'))) return
     const { token, hash } = newToken()
     if (!(await storeResetLink(trx, email, hash))) {
-      return sendMail({
-        to: email,
-        subject: 'Scalewright password reset: no account uses this address',
-        text: `Someone asked to reset the Scalewright password of this address, but no account uses it.\n\nIf you have an account, it is under another address. To make one: ${appUrl('/signup')}\n\nIf it was not you, ignore this message.`,
-      }, { db: trx })
+      return sendMail(
+        {
+          to: email,
+          subject: 'Scalewright password reset: no account uses this address',
+          text: `Someone asked to reset the Scalewright password of this address, but no account uses it.\n\nIf you have an account, it is under another address. To make one: ${appUrl('/signup')}\n\nIf it was not you, ignore this message.`,
+        },
+        { db: trx },
+      )
     }
-    await sendMail({
-      to: email,
-      subject: 'Reset your Scalewright password',
-      text: `Someone asked to reset the password of this Scalewright account.\n\nChoose a new password here (valid for ${RESET_MINUTES} minutes, once):\n${appUrl(`/reset/${token}`)}\n\nIf it was not you, ignore this message.`,
-    }, { db: trx })
+    await sendMail(
+      {
+        to: email,
+        subject: 'Reset your Scalewright password',
+        text: `Someone asked to reset the password of this Scalewright account.\n\nChoose a new password here (valid for ${RESET_MINUTES} minutes, once):\n${appUrl(`/reset/${token}`)}\n\nIf it was not you, ignore this message.`,
+      },
+      { db: trx },
+    )
   })
 }
 

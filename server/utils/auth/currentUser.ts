@@ -7,7 +7,12 @@ import type { GroupRole, SiteRole } from '../../../shared/types/roles'
 import { roleAtLeast } from '../../../shared/types/roles'
 import { liveTheories } from '../db/live'
 
-export interface CurrentUser { id: number, email: string, displayName: string, siteRole: SiteRole }
+export interface CurrentUser {
+  id: number
+  email: string
+  displayName: string
+  siteRole: SiteRole
+}
 
 /**
  * The signed-in user, re-read from the database on every request together with the session's
@@ -16,8 +21,7 @@ export interface CurrentUser { id: number, email: string, displayName: string, s
  */
 export async function requireUser(event: H3Event): Promise<CurrentUser> {
   const session = await sessionFacts(event)
-  const row = await useDb()('users as u').leftJoin('sessions as cs', sessionJoin(session))
-    .where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id')
+  const row = await useDb()('users as u').leftJoin('sessions as cs', sessionJoin(session)).where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id')
   return toUser(event, session, row)
 }
 
@@ -26,7 +30,12 @@ function sessionJoin(session: SessionFacts) {
   return (j: Knex.JoinClause) => j.on('cs.user_id', 'u.id').andOnVal('cs.id', session.sessionId)
 }
 
-interface AccountRow { email: string, display_name: string, site_role: SiteRole, session_id: string | null }
+interface AccountRow {
+  email: string
+  display_name: string
+  site_role: SiteRole
+  session_id: string | null
+}
 
 async function toUser(event: H3Event, session: SessionFacts, row: AccountRow | undefined): Promise<CurrentUser> {
   if (!row) {
@@ -58,9 +67,11 @@ function checkRole(role: GroupRole | null, needed: GroupRole): GroupRole {
  */
 export async function requireGroupRole(event: H3Event, groupId: number, needed: GroupRole) {
   const session = await sessionFacts(event)
-  const row = await useDb()('users as u').leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOnVal('m.group_id', groupId))
+  const row = await useDb()('users as u')
+    .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOnVal('m.group_id', groupId))
     .leftJoin('sessions as cs', sessionJoin(session))
-    .where('u.id', session.userId).first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id', 'm.role')
+    .where('u.id', session.userId)
+    .first('u.email', 'u.display_name', 'u.site_role', 'cs.id as session_id', 'm.role')
   const user = await toUser(event, session, row)
   return { user, role: checkRole((row!.role ?? null) as GroupRole | null, needed) }
 }
@@ -71,7 +82,8 @@ export async function requireGroupRole(event: H3Event, groupId: number, needed: 
  */
 export function withCaller(q: Knex.QueryBuilder, userId: number, groupColumn: string): Knex.QueryBuilder {
   const db = useDb()
-  return q.crossJoin(db.raw('users as u'))
+  return q
+    .crossJoin(db.raw('users as u'))
     .leftJoin('memberships as m', (j) => j.on('m.user_id', 'u.id').andOn('m.group_id', groupColumn))
     .andWhere('u.id', userId)
     .select('u.email as u_email', 'u.display_name as u_name', 'u.site_role as u_site_role', 'm.role as u_role')
@@ -95,8 +107,17 @@ export async function requireRoleWith(event: H3Event, needed: GroupRole, query: 
 /** A basis or theory row with the caller's role in the group that owns it (see requireRoleWith). */
 export function requireRoleOn(event: H3Event, kind: 'bases' | 'theories', id: number, needed: GroupRole) {
   const db = useDb()
-  return requireRoleWith(event, needed, (userId) => kind === 'bases'
-    // The board needs only the version (its cache key); classes/coverage are large JSON.
-    ? withCaller(liveTheories(db('bases as x').join('theories as t', 't.id', 'x.theory_id')).select('x.id', 'x.version', 't.group_id').where('x.id', id).whereNull('x.deleted_at'), userId, 't.group_id')
-    : withCaller(liveTheories(db('theories as x').select('x.*').where('x.id', id), 'x'), userId, 'x.group_id'))
+  return requireRoleWith(event, needed, (userId) =>
+    kind === 'bases'
+      ? // The board needs only the version (its cache key); classes/coverage are large JSON.
+        withCaller(
+          liveTheories(db('bases as x').join('theories as t', 't.id', 'x.theory_id'))
+            .select('x.id', 'x.version', 't.group_id')
+            .where('x.id', id)
+            .whereNull('x.deleted_at'),
+          userId,
+          't.group_id',
+        )
+      : withCaller(liveTheories(db('theories as x').select('x.*').where('x.id', id), 'x'), userId, 'x.group_id'),
+  )
 }

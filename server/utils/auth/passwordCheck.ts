@@ -11,6 +11,6 @@ let dummy: Promise<string> | undefined
  */
 export async function passwordMatches(hash: string | undefined, password: string): Promise<boolean> {
   dummy ??= hashPassword(randomBytes(24).toString('base64url'))
-  const matches = await verifyPassword(hash ?? await dummy, password)
+  const matches = await verifyPassword(hash ?? (await dummy), password)
   return hash !== undefined && matches
 }

@@ -5,7 +5,10 @@ import { useDb } from '../db/connection'
 import { fail } from '../http/apiHandler'
 
 /** What a session cookie says: whose it is and which sign-in (a row of `sessions`) it belongs to. */
-export interface SessionFacts { userId: number, sessionId: string }
+export interface SessionFacts {
+  userId: number
+  sessionId: string
+}
 
 export const SESSION_ENDED = 'This session has ended (signed out, the password was changed, or all other sessions were signed out); sign in again'
 
@@ -23,7 +26,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/
 
 // The shared config (useRuntimeConfig(event) would copy the whole config on every request).
 function sessionConfig() {
-  return useRuntimeConfig().session as { name: string, maxAge?: number }
+  return useRuntimeConfig().session as { name: string; maxAge?: number }
 }
 
 /**
@@ -31,12 +34,14 @@ function sessionConfig() {
  * browser's previous session (if it had one) ends, and rows older than the cookie's lifetime
  * are deleted on the way (of every account), so the table holds live sessions only.
  */
-export async function startSession(event: H3Event, user: { id: number, email: string, displayName: string, siteRole: string }, db: Knex = useDb()) {
+export async function startSession(event: H3Event, user: { id: number; email: string; displayName: string; siteRole: string }, db: Knex = useDb()) {
   const sessionId = randomUUID()
   const maxAge = sessionConfig().maxAge ?? 30 * 86_400
   if (getCookie(event, sessionConfig().name)) await deleteSessionRow(await getUserSession(event))
   await db('sessions').insert({ id: sessionId, user_id: user.id })
-  await db('sessions').where('created_at', '<', new Date(Date.now() - maxAge * 1000)).delete()
+  await db('sessions')
+    .where('created_at', '<', new Date(Date.now() - maxAge * 1000))
+    .delete()
   await replaceUserSession(event, { user, sessionId })
 }
 

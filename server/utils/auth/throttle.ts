@@ -33,8 +33,7 @@ export async function takeSignInAttempt(event: H3Event, email: string) {
   const key = signInKey(event, email)
   await useDb().transaction(async (trx) => {
     await lockKey(trx, `sign-in|${key}`)
-    const rows = await trx('sign_in_failures').where({ key }).andWhere('created_at', '>', windowStart())
-      .orderBy('created_at').select('created_at')
+    const rows = await trx('sign_in_failures').where({ key }).andWhere('created_at', '>', windowStart()).orderBy('created_at').select('created_at')
     if (rows.length >= SIGN_IN_LIMIT) refuse(new Date(rows[rows.length - SIGN_IN_LIMIT]!.created_at))
     await trx('sign_in_failures').insert({ key })
   })
@@ -50,5 +49,7 @@ function refuse(oldestCounted: Date): never {
 }
 
 export async function clearFailedSignIns(event: H3Event, email: string) {
-  await useDb()('sign_in_failures').where({ key: signInKey(event, email) }).delete()
+  await useDb()('sign_in_failures')
+    .where({ key: signInKey(event, email) })
+    .delete()
 }

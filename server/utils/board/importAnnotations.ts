@@ -3,10 +3,30 @@ import { describeOperator, type FileEntry } from './importPlan'
 
 // The tags and notes an imported file brings, decided before anything is written: which can be
 // taken over (and by whom they count as written), and what is left out and why. Pure.
-export interface Author { id: number | null, name: string | null }
-export interface PlannedTag { operatorId: number, kind: string, label: string, author: Author, createdAt: Date | undefined, what: string }
-export interface PlannedNote { operatorId: number, body: string, author: Author, createdAt: Date, what: string }
-export interface LeftOut { operator: string, item: string, reason: string }
+export interface Author {
+  id: number | null
+  name: string | null
+}
+export interface PlannedTag {
+  operatorId: number
+  kind: string
+  label: string
+  author: Author
+  createdAt: Date | undefined
+  what: string
+}
+export interface PlannedNote {
+  operatorId: number
+  body: string
+  author: Author
+  createdAt: Date
+  what: string
+}
+export interface LeftOut {
+  operator: string
+  item: string
+  reason: string
+}
 
 const MAX_LABEL = 120
 const MAX_NOTE = 10_000

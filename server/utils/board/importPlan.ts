@@ -4,9 +4,22 @@ import type { ImportChoice, ImportedOperator } from '../../../shared/schemas/imp
 // the file gives them, matched by order, class and text. Pure: no database. Operators of the
 // basis that the file does not list keep their column and follow the file's ones in it.
 type Column = 'kept' | 'set_aside'
-export interface StoredOperator { id: number, order: number, class_key: string, text: string, column: Column, position: number }
-export interface Placement { column: Column, position: number }
-export interface FileEntry { row: StoredOperator, op: ImportedOperator }
+export interface StoredOperator {
+  id: number
+  order: number
+  class_key: string
+  text: string
+  column: Column
+  position: number
+}
+export interface Placement {
+  column: Column
+  position: number
+}
+export interface FileEntry {
+  row: StoredOperator
+  op: ImportedOperator
+}
 export interface ImportPlan {
   entries: FileEntry[]
   /** Every operator of the basis, with its column and place after the import. */
@@ -17,7 +30,7 @@ export interface ImportPlan {
 }
 
 /** How a user sees an operator: its order, class and text. */
-export function describeOperator(o: { order: number, class_key: string, text: string }): string {
+export function describeOperator(o: { order: number; class_key: string; text: string }): string {
   return `order ${o.order}, class ${o.class_key}: "${o.text}"`
 }
 
@@ -45,14 +58,15 @@ function matchFile(rows: StoredOperator[], file: ImportChoice): FileEntry[] | { 
     }
   }
   if (missing.length) return { refused: `${missing.length} operator(s) of the file are not in this basis (was the file exported from another basis?): ${listed(missing)}. Nothing was changed.` }
-  if (repeated.length) return { refused: `The file lists ${repeated.length === 1 ? 'an operator' : 'operators'} more than once: ${listed(repeated)}. Each operator may appear once; nothing was changed.` }
+  if (repeated.length)
+    return { refused: `The file lists ${repeated.length === 1 ? 'an operator' : 'operators'} more than once: ${listed(repeated)}. Each operator may appear once; nothing was changed.` }
   return entries
 }
 
 /** Places per (order, column): the file's operators by their position (else file order), then the rest as stored. */
 function placements(rows: StoredOperator[], entries: FileEntry[]): Map<number, Placement> {
   const fromFile = new Map(entries.map((e, i) => [e.row.id, { column: e.op.column, rank: e.op.position ?? Number.MAX_SAFE_INTEGER, index: i }]))
-  const slots = new Map<string, { id: number, inFile: boolean, rank: number, index: number }[]>()
+  const slots = new Map<string, { id: number; inFile: boolean; rank: number; index: number }[]>()
   for (const r of rows) {
     const f = fromFile.get(r.id)
     const slot = `${r.order}|${f?.column ?? r.column}`

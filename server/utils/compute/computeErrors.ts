@@ -3,7 +3,10 @@ import { EngineInputError } from '../../engine/errors'
 
 /** Too much work waiting (for this user or for everyone): 429 with Retry-After. */
 export class ComputeBusyError extends Error {
-  constructor(message: string, readonly retryAfterSeconds: number) {
+  constructor(
+    message: string,
+    readonly retryAfterSeconds: number,
+  ) {
     super(message)
     this.name = 'ComputeBusyError'
   }

@@ -16,8 +16,24 @@ export interface LaneLimits {
   /** A thread idle this long ends (its memory is returned); the lane's first thread stays. */
   idleMs: number
 }
-interface Job { id: number, kind: string, input: unknown, user: string, group?: string, budgetMs: number, what: string, resolve: (v: unknown) => void, reject: (e: Error) => void }
-interface Slot { worker: Worker, ready: boolean, job?: Job, timer?: NodeJS.Timeout, idle?: NodeJS.Timeout }
+interface Job {
+  id: number
+  kind: string
+  input: unknown
+  user: string
+  group?: string
+  budgetMs: number
+  what: string
+  resolve: (v: unknown) => void
+  reject: (e: Error) => void
+}
+interface Slot {
+  worker: Worker
+  ready: boolean
+  job?: Job
+  timer?: NodeJS.Timeout
+  idle?: NodeJS.Timeout
+}
 
 /**
  * A small bounded pool of engine threads with a wait queue: the event loop only sends inputs
@@ -33,21 +49,26 @@ export class ComputeLane {
   private lastTurn = new Map<string, number>()
   private turns = 0
   private nextId = 1
-  constructor(readonly name: string, readonly limits: LaneLimits) {}
+  constructor(
+    readonly name: string,
+    readonly limits: LaneLimits,
+  ) {}
 
   /** Start the first thread now: booting one (tsx and the engine) takes seconds of CPU. */
   warm() {
     if (!this.slots.length) this.finish(this.spawn())
   }
 
-  get stats() { return { threads: this.slots.length, busy: this.slots.filter((s) => s.job).length, waiting: this.waiting.length } }
+  get stats() {
+    return { threads: this.slots.length, busy: this.slots.filter((s) => s.job).length, waiting: this.waiting.length }
+  }
 
-  run(kind: string, input: unknown, opts: { user: string, group?: string, budgetMs: number, what: string }): Promise<unknown> {
+  run(kind: string, input: unknown, opts: { user: string; group?: string; budgetMs: number; what: string }): Promise<unknown> {
     const mine = this.perUser.get(opts.user) ?? 0
     if (mine >= this.limits.perUser) {
       throw new ComputeBusyError(`You already have ${mine} ${this.name} in progress (the limit is ${this.limits.perUser} at a time); wait for them to finish, then try again`, 2)
     }
-    const ours = opts.group === undefined ? 0 : this.perGroup.get(opts.group) ?? 0
+    const ours = opts.group === undefined ? 0 : (this.perGroup.get(opts.group) ?? 0)
     if (ours >= this.limits.perGroup) {
       throw new ComputeBusyError(`Your group already has ${ours} ${this.name} in progress (the limit is ${this.limits.perGroup} per group at a time); wait for them to finish, then try again`, 2)
     }
@@ -59,7 +80,9 @@ export class ComputeLane {
     return new Promise((resolve, reject) => {
       this.waiting.push({ id: this.nextId++, kind, input, ...opts, resolve, reject })
       this.pump()
-    }).finally(() => { for (const release of keys) release() })
+    }).finally(() => {
+      for (const release of keys) release()
+    })
   }
 
   private pump() {
@@ -104,14 +127,18 @@ export class ComputeLane {
   private startBudget(slot: Slot, job: Job) {
     slot.timer = setTimeout(() => {
       this.retire(slot)
-      job.reject(new ComputeBudgetError(`${job.what} takes longer than its budget of ${job.budgetMs / 1000} s, so the server stopped it. Ask for less (fewer orders, smaller powers or shorter numbers), or start a background run where there is one`))
+      job.reject(
+        new ComputeBudgetError(
+          `${job.what} takes longer than its budget of ${job.budgetMs / 1000} s, so the server stopped it. Ask for less (fewer orders, smaller powers or shorter numbers), or start a background run where there is one`,
+        ),
+      )
     }, job.budgetMs)
   }
 
   private spawn(): Slot {
     const slot: Slot = { worker: new Worker(computeThreadEntry()), ready: false }
     slot.worker.unref()
-    slot.worker.on('message', (msg: { id: number, ok: boolean, ready?: boolean, result?: unknown, error?: ThreadErrorMessage }) => {
+    slot.worker.on('message', (msg: { id: number; ok: boolean; ready?: boolean; result?: unknown; error?: ThreadErrorMessage }) => {
       const job = slot.job
       if (msg.ready) {
         slot.ready = true
@@ -123,8 +150,16 @@ export class ComputeLane {
       if (msg.ok) job.resolve(msg.result)
       else job.reject(fromThreadError(msg.error!))
     })
-    slot.worker.on('error', (error) => { const job = slot.job; this.retire(slot); job?.reject(error as Error) })
-    slot.worker.on('exit', (code) => { const job = slot.job; this.retire(slot); job?.reject(new EngineError(`engine thread exited with code ${code}`)) })
+    slot.worker.on('error', (error) => {
+      const job = slot.job
+      this.retire(slot)
+      job?.reject(error as Error)
+    })
+    slot.worker.on('exit', (code) => {
+      const job = slot.job
+      this.retire(slot)
+      job?.reject(new EngineError(`engine thread exited with code ${code}`))
+    })
     this.slots.push(slot)
     return slot
   }
@@ -132,7 +167,9 @@ export class ComputeLane {
   private finish(slot: Slot) {
     clearTimeout(slot.timer)
     slot.job = undefined
-    slot.idle = setTimeout(() => { if (this.slots[0] !== slot) this.retire(slot) }, this.limits.idleMs)
+    slot.idle = setTimeout(() => {
+      if (this.slots[0] !== slot) this.retire(slot)
+    }, this.limits.idleMs)
     slot.idle.unref()
     this.pump()
   }

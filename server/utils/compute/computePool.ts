@@ -23,7 +23,7 @@ export const COMPUTE_LANES = {
  * Lane, time budget and the words for a message, per task. `cache: false` for tasks whose input
  * is a board's state at one moment (it rarely repeats, and hashing it would cost the event loop).
  */
-const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES, budgetMs: number, what: string, cache?: false }> = {
+const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES; budgetMs: number; what: string; cache?: false }> = {
   ladder: { lane: 'light', budgetMs: 5_000, what: 'This scale ladder' },
   ordersBelowTarget: { lane: 'light', budgetMs: 5_000, what: 'The estimate of these orders' },
   qcdRunning: { lane: 'light', budgetMs: 5_000, what: 'This α_s running' },
@@ -31,7 +31,7 @@ const TASKS: Record<ComputeKind, { lane: keyof typeof COMPUTE_LANES, budgetMs: n
   anomalies: { lane: 'light', budgetMs: 5_000, what: 'The anomaly check of this theory' },
   couplings: { lane: 'count', budgetMs: 20_000, what: 'Checking the couplings against the order-0 basis' },
   integrateOut: { lane: 'light', budgetMs: 5_000, what: 'Integrating out these fields' },
-  massPartners: { lane: 'light', budgetMs: 5_000, what: 'Finding the fermions\' mass partners' },
+  massPartners: { lane: 'light', budgetMs: 5_000, what: "Finding the fermions' mass partners" },
   towerHints: { lane: 'light', budgetMs: 5_000, what: 'The matching results along this tower' },
   gaugeInputs: { lane: 'light', budgetMs: 5_000, what: 'Reading the gauge content of this tower' },
   gaugeRunning: { lane: 'running', budgetMs: 20_000, what: 'This running (choose a smaller range of scales)' },
@@ -69,17 +69,26 @@ function replay(settled: Settled): unknown {
 export async function compute<K extends ComputeKind>(kind: K, input: ComputeInput<K>, user: string | number, group?: number): Promise<Awaited<ComputeOutput<K>>> {
   const task = TASKS[kind]
   const caller = { user: String(user), group: group === undefined ? undefined : String(group), budgetMs: task.budgetMs, what: task.what }
-  if (task.cache === false) return await COMPUTE_LANES[task.lane].run(kind, input, caller) as Awaited<ComputeOutput<K>>
+  if (task.cache === false) return (await COMPUTE_LANES[task.lane].run(kind, input, caller)) as Awaited<ComputeOutput<K>>
   const key = inputKey(kind, input)
   const hit = cache.get(key)
   if (hit) return replay(hit) as Awaited<ComputeOutput<K>>
   let pending = inFlight.get(key)
   if (!pending) {
-    pending = COMPUTE_LANES[task.lane].run(kind, input, caller)
-      .then((value) => { cache.set(key, { ok: true, value }); return value },
-        (error: Error) => { if (cacheable(error)) cache.set(key, { ok: false, error }); throw error })
+    pending = COMPUTE_LANES[task.lane]
+      .run(kind, input, caller)
+      .then(
+        (value) => {
+          cache.set(key, { ok: true, value })
+          return value
+        },
+        (error: Error) => {
+          if (cacheable(error)) cache.set(key, { ok: false, error })
+          throw error
+        },
+      )
       .finally(() => inFlight.delete(key))
     inFlight.set(key, pending)
   }
-  return await pending as Awaited<ComputeOutput<K>>
+  return (await pending) as Awaited<ComputeOutput<K>>
 }

@@ -15,7 +15,9 @@ export async function basisOr404(id: number, opts: { deleted?: boolean } = {}) {
 
 export async function operatorOr404(id: number) {
   const row = await liveTheories(useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id').join('theories as t', 't.id', 'b.theory_id'))
-    .where('o.id', id).whereNull('b.deleted_at').first('o.*', 't.group_id', 'b.theory_id')
+    .where('o.id', id)
+    .whereNull('b.deleted_at')
+    .first('o.*', 't.group_id', 'b.theory_id')
   if (!row) fail(404, `No operator with id ${id}`)
   return row
 }
@@ -25,12 +27,25 @@ export async function boardData(basisId: number) {
   const db = useDb()
   const basis = await basisOr404(basisId)
   // Only the parts of `structure` the board shows (it also holds spinor and gauge index data).
-  const operators = await db('operators').where({ basis_id: basisId }).orderBy(['order', 'column', 'position'])
-    .select('id', 'order', 'class_key as classKey', 'column', 'position', 'latex', 'latex_dirac as latexDirac', 'hermitian',
-      'real_parameters as realParameters', 'text', 'version',
+  const operators = await db('operators')
+    .where({ basis_id: basisId })
+    .orderBy(['order', 'column', 'position'])
+    .select(
+      'id',
+      'order',
+      'class_key as classKey',
+      'column',
+      'position',
+      'latex',
+      'latex_dirac as latexDirac',
+      'hermitian',
+      'real_parameters as realParameters',
+      'text',
+      'version',
       db.raw(`jsonb_build_object('fields', structure->'fields', 'flavorComponents', structure->'flavorComponents', 'cp', structure->'cp', 'parity', structure->'parity',
         'relations', structure->'relations', 'publishedRewrite', structure->'publishedRewrite', 'gaugeEomNote', structure->'gaugeEomNote',
-        'source', structure->'source', 'antiHermitian', structure->'antiHermitian') as structure`))
+        'source', structure->'source', 'antiHermitian', structure->'antiHermitian') as structure`),
+    )
   const ids = operators.map((o) => o.id)
   const tags = ids.length ? await tagsOfOperators(ids) : []
   const notes = await annotationsOfTheory(basis.theory_id)
@@ -38,14 +53,31 @@ export async function boardData(basisId: number) {
   const frozen = await theoryOfBasis(basisId)
   return {
     basis: {
-      id: basis.id, theoryId: basis.theory_id, theoryName: basis.theory_name, theoryVersion: basis.theory_version,
-      countingRule: basis.counting_rule as string, maxOrder: basis.max_order, classes: basis.classes, note: basis.note as string, createdAt: basis.created_at,
+      id: basis.id,
+      theoryId: basis.theory_id,
+      theoryName: basis.theory_name,
+      theoryVersion: basis.theory_version,
+      countingRule: basis.counting_rule as string,
+      maxOrder: basis.max_order,
+      classes: basis.classes,
+      note: basis.note as string,
+      createdAt: basis.created_at,
       // The fields as the basis's theory file wrote them (name and display form), so labels print them as papers do.
-      fields: ((frozen?.fields ?? []) as { name: string, display?: string }[]).map((f) => ({ name: f.name, display: f.display })),
+      fields: ((frozen?.fields ?? []) as { name: string; display?: string }[]).map((f) => ({ name: f.name, display: f.display })),
     },
     operators: operators.map(({ structure, ...o }) => ({
-      ...o, fields: structure?.fields ?? [], flavorComponents: structure?.flavorComponents ?? 1,
-      details: { antiHermitian: !!structure?.antiHermitian, cp: structure?.cp ?? null, parity: structure?.parity ?? null, relations: structure?.relations ?? [], publishedRewrite: structure?.publishedRewrite ?? null, gaugeEomNote: structure?.gaugeEomNote ?? null, source: structure?.source ?? null },
+      ...o,
+      fields: structure?.fields ?? [],
+      flavorComponents: structure?.flavorComponents ?? 1,
+      details: {
+        antiHermitian: !!structure?.antiHermitian,
+        cp: structure?.cp ?? null,
+        parity: structure?.parity ?? null,
+        relations: structure?.relations ?? [],
+        publishedRewrite: structure?.publishedRewrite ?? null,
+        gaugeEomNote: structure?.gaugeEomNote ?? null,
+        source: structure?.source ?? null,
+      },
     })),
     tags,
     notes,
@@ -61,7 +93,6 @@ export function latestBasisOf(theoryId: number) {
 
 /** The frozen theory file a basis was computed from (the theory may have been edited since). */
 export async function theoryOfBasis(basisId: number): Promise<Record<string, any>> {
-  const row = await useDb()('bases as b').leftJoin('runs as r', 'r.id', 'b.run_id').join('theories as t', 't.id', 'b.theory_id')
-    .where('b.id', basisId).first('r.params', 't.definition')
+  const row = await useDb()('bases as b').leftJoin('runs as r', 'r.id', 'b.run_id').join('theories as t', 't.id', 'b.theory_id').where('b.id', basisId).first('r.params', 't.definition')
   return row?.params?.theory ?? row?.definition
 }

@@ -6,9 +6,12 @@ import { useDb } from './connection'
 // was a third of the server's time under load). Every change that the board shows (moves,
 // imports, tags, notes) bumps bases.version, so a cached entry is valid exactly while the
 // stored version matches; each server process keeps its own copy.
-export interface BoardBytes { plain: Buffer, gzip: Buffer }
+export interface BoardBytes {
+  plain: Buffer
+  gzip: Buffer
+}
 
-const cache = new Map<number, { version: number, json: string, bytes: Map<string, BoardBytes> }>()
+const cache = new Map<number, { version: number; json: string; bytes: Map<string, BoardBytes> }>()
 const LIMIT = 64
 
 /** The cached response for this reader's role, or undefined when the basis changed. */
@@ -31,7 +34,9 @@ export function storeBoard(basisId: number, version: number, json: string) {
 
 /** Mark the boards that show an operator (tags) or a theory's notes as changed. */
 export async function touchBasesOfOperator(operatorId: number) {
-  await useDb()('bases').whereIn('id', useDb()('operators').where({ id: operatorId }).select('basis_id')).increment('version', 1)
+  await useDb()('bases')
+    .whereIn('id', useDb()('operators').where({ id: operatorId }).select('basis_id'))
+    .increment('version', 1)
 }
 export async function touchBasesOfTheory(theoryId: number) {
   await useDb()('bases').where({ theory_id: theoryId }).increment('version', 1)

@@ -28,13 +28,16 @@ export async function withBoardLock<T>(basisId: number, orders: number[], work: 
   const keys = [...new Set(orders.map((o) => lockKey(basisId, o)))].sort((a, b) => a - b)
   try {
     return await useDb().transaction(async (trx) => {
-      await trx.raw('select set_config(\'lock_timeout\', ?, true)', [LOCK_WAIT])
+      await trx.raw("select set_config('lock_timeout', ?, true)", [LOCK_WAIT])
       for (const key of keys) await trx.raw('select pg_advisory_xact_lock(?, ?)', [BOARD_LOCK, key])
       return work(trx)
     })
   } catch (error) {
     if (GAVE_UP.has((error as { code?: string }).code ?? '')) {
-      fail(409, `Many edits of ${orders.length === 1 ? `order ${orders[0]}` : 'this basis'} are being saved at once, and this one waited too long for its turn. Nothing was changed; try again in a moment.`)
+      fail(
+        409,
+        `Many edits of ${orders.length === 1 ? `order ${orders[0]}` : 'this basis'} are being saved at once, and this one waited too long for its turn. Nothing was changed; try again in a moment.`,
+      )
     }
     throw error
   }

@@ -7,8 +7,16 @@ import type { CoverageMap } from '../../worker/boardTasks'
 
 export type { Rewrite, CoverageMap }
 /** Who asks for board math (counted against their limits in the compute pool); a share link asks as `share:<theory id>`. */
-export interface BoardCaller { user: string | number, group: number }
-export interface BoardOperatorRow extends ClassOperator { class_key: string, order: number, position: number, version: number }
+export interface BoardCaller {
+  user: string | number
+  group: number
+}
+export interface BoardOperatorRow extends ClassOperator {
+  class_key: string
+  order: number
+  position: number
+  version: number
+}
 
 const COLUMNS = ['id', 'latex', 'text', 'column', 'fingerprint', 'class_key', 'order', 'position', 'version']
 
@@ -24,7 +32,7 @@ export function basisOperators(db: Knex, basisId: number): Promise<BoardOperator
 
 /** The number of independent operators a class needs (its rank in the stored basis). */
 export async function requiredRank(db: Knex, basisId: number, classKey: string): Promise<number> {
-  const { rows } = await db.raw('select (c->>\'rank\')::int as rank from bases b, jsonb_array_elements(b.classes) c where b.id = ? and c->>\'key\' = ?', [basisId, classKey])
+  const { rows } = await db.raw("select (c->>'rank')::int as rank from bases b, jsonb_array_elements(b.classes) c where b.id = ? and c->>'key' = ?", [basisId, classKey])
   return rows[0]?.rank ?? 0
 }
 
@@ -36,7 +44,12 @@ export async function rewriteOntoKept(basisId: number, classKey: string, operato
 
 /** A class as bases.classes stores it (the parts the board's math reads). */
 /** A class as stored with its basis: every class carries its order (migration 021 added it to old ones). */
-export interface StoredClass { key: string, rank: number, order: number, dimension?: number | null }
+export interface StoredClass {
+  key: string
+  rank: number
+  order: number
+  dimension?: number | null
+}
 
 /** Coverage of every class of a basis, keyed by class key: stored, or computed (compute pool) and stored. */
 export async function coverageOfClasses(basisId: number, classes: StoredClass[], caller: BoardCaller): Promise<CoverageMap> {
@@ -55,7 +68,7 @@ export function ordersOfClasses(classes: StoredClass[]): number[] {
  * Recompute (compute pool) and store the coverage of the given classes, inside the caller's
  * transaction under the board lock: the math runs before the write, off the event loop.
  */
-export async function recomputeCoverage(db: Knex, basisId: number, classes: { key: string, rank: number }[], caller: BoardCaller): Promise<CoverageMap> {
+export async function recomputeCoverage(db: Knex, basisId: number, classes: { key: string; rank: number }[], caller: BoardCaller): Promise<CoverageMap> {
   const out = await compute('coverage', { ops: await basisOperators(db, basisId), classes }, caller.user, caller.group)
   await storeCoverage(db, basisId, out)
   return out
@@ -66,5 +79,7 @@ export async function recomputeCoverage(db: Knex, basisId: number, classes: { ke
  * before this change must not survive it). Call it last in a transaction: it locks the basis row.
  */
 export async function storeCoverage(db: Knex, basisId: number, part: CoverageMap) {
-  await db('bases').where({ id: basisId }).update({ coverage: db.raw('coverage || ?::jsonb', [JSON.stringify(part)]), version: db.raw('version + 1') })
+  await db('bases')
+    .where({ id: basisId })
+    .update({ coverage: db.raw('coverage || ?::jsonb', [JSON.stringify(part)]), version: db.raw('version + 1') })
 }

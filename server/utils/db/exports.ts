@@ -10,19 +10,22 @@ const TYPES = { latex: ['application/x-tex', 'tex'], csv: ['text/csv; charset=ut
 type Format = keyof typeof TYPES
 
 /** What an export of a basis is made from, read from the database (the file itself is assembled in the compute pool). */
-export async function exportInputOf(basisId: number): Promise<{ data: ExportInput, groupId: number }> {
+export async function exportInputOf(basisId: number): Promise<{ data: ExportInput; groupId: number }> {
   const d = await boardData(basisId)
   const theory = await theoryOr404(d.basis.theoryId)
-  return { groupId: theory.group_id, data: {
-    theory: { name: d.basis.theoryName, definition: theory.definition },
-    countingRule: d.basis.countingRule,
-    note: d.basis.note || 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes',
-    exportedAt: new Date().toISOString(),
-    classes: d.basis.classes as never,
-    operators: d.operators as never,
-    tags: d.tags,
-    notes: d.notes,
-  } }
+  return {
+    groupId: theory.group_id,
+    data: {
+      theory: { name: d.basis.theoryName, definition: theory.definition },
+      countingRule: d.basis.countingRule,
+      note: d.basis.note || 'modulo equations of motion and integration by parts; terms proportional to the equations of motion move into other classes',
+      exportedAt: new Date().toISOString(),
+      classes: d.basis.classes as never,
+      operators: d.operators as never,
+      tags: d.tags,
+      notes: d.notes,
+    },
+  }
 }
 
 /**

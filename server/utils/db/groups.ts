@@ -2,7 +2,14 @@ import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
 import type { GroupRole } from '../../../shared/types/roles'
 
-export interface GroupRow { id: number, slug: string, name: string, description: string, created_at: Date, deleted_at?: Date | null }
+export interface GroupRow {
+  id: number
+  slug: string
+  name: string
+  description: string
+  created_at: Date
+  deleted_at?: Date | null
+}
 
 /** A group that is not deleted; a deleted one only with `deleted` (for undo). */
 export async function groupBySlugOr404(slug: string, opts: { deleted?: boolean } = {}): Promise<GroupRow> {
@@ -22,22 +29,20 @@ export function groupsOfUser(userId: number) {
     .select('g.id', 'g.slug', 'g.name', 'g.description', 'm.role')
 }
 
-export async function createGroupWithOwner(input: { slug: string, name: string, description?: string }, ownerId: number): Promise<GroupRow> {
+export async function createGroupWithOwner(input: { slug: string; name: string; description?: string }, ownerId: number): Promise<GroupRow> {
   return useDb().transaction(async (trx) => {
     const clash = await trx('groups').where({ slug: input.slug }).first('id', 'deleted_at')
     if (clash) fail(409, `The short name "${input.slug}" is taken${clash.deleted_at ? ' by a deleted group (its owners can still restore it)' : ''}; choose another`)
-    const [group] = await trx('groups').insert({ slug: input.slug, name: input.name, description: input.description ?? '' }).returning('*')
+    const [group] = await trx('groups')
+      .insert({ slug: input.slug, name: input.name, description: input.description ?? '' })
+      .returning('*')
     await trx('memberships').insert({ group_id: group.id, user_id: ownerId, role: 'owner' })
     return group
   })
 }
 
 export function membersOf(groupId: number) {
-  return useDb()('memberships as m')
-    .join('users as u', 'u.id', 'm.user_id')
-    .where('m.group_id', groupId)
-    .orderBy('u.display_name')
-    .select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
+  return useDb()('memberships as m').join('users as u', 'u.id', 'm.user_id').where('m.group_id', groupId).orderBy('u.display_name').select('u.id', 'u.email', 'u.display_name as displayName', 'm.role')
 }
 
 /**
@@ -50,7 +55,7 @@ export function membersOf(groupId: number) {
 export async function changeMembership(groupId: number, callerId: number, targetId: number, newRole: GroupRole | null) {
   await useDb().transaction(async (trx) => {
     await trx('groups').where({ id: groupId }).forNoKeyUpdate().first('id')
-    const members: { user_id: number, role: GroupRole }[] = await trx('memberships').where({ group_id: groupId }).select('user_id', 'role')
+    const members: { user_id: number; role: GroupRole }[] = await trx('memberships').where({ group_id: groupId }).select('user_id', 'role')
     const callerRole = members.find((m) => m.user_id === callerId)?.role
     const target = members.find((m) => m.user_id === targetId)
     if (!callerRole) fail(403, 'You are not a member of this group')
@@ -72,12 +77,18 @@ export async function changeMembership(groupId: number, callerId: number, target
  */
 export function groupPageQuery(slug: string) {
   const db = useDb()
-  return db('groups as g').where('g.slug', String(slug).toLowerCase()).whereNull('g.deleted_at').select(
-    'g.id', 'g.slug', 'g.name', 'g.description',
-    db.raw(`(select coalesce(json_agg(json_build_object('id', mu.id, 'email', mu.email, 'displayName', mu.display_name, 'role', mm.role) order by mu.display_name), '[]'::json)
+  return db('groups as g')
+    .where('g.slug', String(slug).toLowerCase())
+    .whereNull('g.deleted_at')
+    .select(
+      'g.id',
+      'g.slug',
+      'g.name',
+      'g.description',
+      db.raw(`(select coalesce(json_agg(json_build_object('id', mu.id, 'email', mu.email, 'displayName', mu.display_name, 'role', mm.role) order by mu.display_name), '[]'::json)
       from memberships mm join users mu on mu.id = mm.user_id where mm.group_id = g.id) as members`),
-    db.raw(`(select coalesce(json_agg(json_build_object('id', t.id, 'name', t.name, 'version', t.version, 'parentId', t.parent_id,
+      db.raw(`(select coalesce(json_agg(json_build_object('id', t.id, 'name', t.name, 'version', t.version, 'parentId', t.parent_id,
         'updatedAt', to_char(t.updated_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) order by t.name), '[]'::json)
       from theories t where t.group_id = g.id and t.deleted_at is null) as theories`),
-  )
+    )
 }

@@ -8,7 +8,12 @@ import { planImport, type Placement, type FileEntry } from '../board/importPlan'
 import { planAnnotations, type PlannedNote } from '../board/importAnnotations'
 import type { ImportChoice } from '../../../shared/schemas/importChoice'
 
-interface BasisRef { id: number, theory_id: number, group_id: number, classes: unknown }
+interface BasisRef {
+  id: number
+  theory_id: number
+  group_id: number
+  classes: unknown
+}
 
 /**
  * Apply a JSON export to a basis, all or nothing, under the board locks of all its orders:
@@ -37,16 +42,19 @@ export function importChoice(basis: BasisRef, file: ImportChoice, userId: number
 async function writePlacements(trx: Knex.Transaction, rows: BoardOperatorRow[], final: Map<number, Placement>, userId: number) {
   const changed = rows.filter((r) => final.get(r.id)!.column !== r.column || final.get(r.id)!.position !== r.position)
   if (!changed.length) return
-  await trx.raw(`update operators o set "column" = x.col::operator_column, position = x.pos,
+  await trx.raw(
+    `update operators o set "column" = x.col::operator_column, position = x.pos,
       version = o.version + 1, moved_by = ?, moved_at = now()
     from unnest(?::int[], ?::text[], ?::int[]) as x(id, col, pos) where o.id = x.id`,
-  [userId, changed.map((r) => r.id), changed.map((r) => final.get(r.id)!.column), changed.map((r) => final.get(r.id)!.position)])
+    [userId, changed.map((r) => r.id), changed.map((r) => final.get(r.id)!.column), changed.map((r) => final.get(r.id)!.position)],
+  )
 }
 
 /** Insert the file's tags and notes that can be taken over; the rest is reported, not written. */
 async function writeAnnotations(trx: Knex.Transaction, basis: BasisRef, entries: FileEntry[]) {
-  const members = new Map<number, string>((await trx('memberships as m').join('users as u', 'u.id', 'm.user_id')
-    .where('m.group_id', basis.group_id).select('u.id', 'u.display_name')).map((m) => [m.id, m.display_name]))
+  const members = new Map<number, string>(
+    (await trx('memberships as m').join('users as u', 'u.id', 'm.user_id').where('m.group_id', basis.group_id).select('u.id', 'u.display_name')).map((m) => [m.id, m.display_name]),
+  )
   const plan = planAnnotations(entries, members)
   let tagsAdded = 0
   for (const t of plan.tags) {
@@ -54,9 +62,17 @@ async function writeAnnotations(trx: Knex.Transaction, basis: BasisRef, entries:
   }
   const fresh = await notesNotThere(trx, basis.theory_id, plan.notes)
   if (fresh.length) {
-    await trx('annotations').insert(fresh.map((n) => ({
-      theory_id: basis.theory_id, operator_id: n.operatorId, author_id: n.author.id, author_name: n.author.name, body: n.body, created_at: n.createdAt, updated_at: n.createdAt,
-    })))
+    await trx('annotations').insert(
+      fresh.map((n) => ({
+        theory_id: basis.theory_id,
+        operator_id: n.operatorId,
+        author_id: n.author.id,
+        author_name: n.author.name,
+        body: n.body,
+        created_at: n.createdAt,
+        updated_at: n.createdAt,
+      })),
+    )
   }
   const asText = [...plan.tags.map((t) => t.author), ...fresh.map((n) => n.author)].filter((a) => a.id === null && a.name).map((a) => a.name!)
   return {
@@ -70,7 +86,10 @@ async function writeAnnotations(trx: Knex.Transaction, basis: BasisRef, entries:
 /** The planned notes that the operators do not carry yet (same text and time: already there). */
 async function notesNotThere(trx: Knex.Transaction, theoryId: number, notes: PlannedNote[]) {
   if (!notes.length) return []
-  const existing = await trx('annotations').where({ theory_id: theoryId }).whereNull('deleted_at').whereIn('operator_id', [...new Set(notes.map((n) => n.operatorId))])
+  const existing = await trx('annotations')
+    .where({ theory_id: theoryId })
+    .whereNull('deleted_at')
+    .whereIn('operator_id', [...new Set(notes.map((n) => n.operatorId))])
     .select('operator_id', 'body', trx.raw('floor(extract(epoch from created_at) * 1000)::bigint as ms'))
   const seen = new Set(existing.map((e) => `${e.operator_id}|${Number(e.ms)}|${e.body}`))
   return notes.filter((n) => {

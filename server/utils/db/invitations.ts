@@ -2,11 +2,21 @@ import type { Knex } from 'knex'
 import { fail } from '../http/apiHandler'
 import { hashToken } from '../tokens'
 
-export interface InvitationRow { id: number, group_id: number, email: string, role: string, expires_at: Date, accepted_at: Date | null }
+export interface InvitationRow {
+  id: number
+  group_id: number
+  email: string
+  role: string
+  expires_at: Date
+  accepted_at: Date | null
+}
 
 /** The live invitation a token opens, locked for this transaction; 400 when dead, 403 for another address. */
 export async function openInvitation(trx: Knex.Transaction, token: string, email: string): Promise<InvitationRow> {
-  const inv = await trx('invitations').where({ token_hash: hashToken(token) }).forUpdate().first()
+  const inv = await trx('invitations')
+    .where({ token_hash: hashToken(token) })
+    .forUpdate()
+    .first()
   if (!inv || inv.accepted_at || new Date(inv.expires_at) < new Date()) fail(400, 'This invitation is invalid, used or expired; ask the group owner for a new one')
   if (inv.email !== email.toLowerCase()) fail(403, `This invitation was sent to ${inv.email}; sign in with that address to accept it`)
   return inv

@@ -5,8 +5,18 @@ import { classOperators, requiredRank, storeCoverage, type BoardCaller } from '.
 import { compute } from '../compute/computePool'
 
 type Column = 'kept' | 'set_aside'
-interface MoveRequest { column: Column, position: number, version: number }
-interface OperatorRef { id: number, basis_id: number, order: number, class_key: string, group_id: number }
+interface MoveRequest {
+  column: Column
+  position: number
+  version: number
+}
+interface OperatorRef {
+  id: number
+  basis_id: number
+  order: number
+  class_key: string
+  group_id: number
+}
 
 /**
  * Move an operator within its order, under the order's board lock (boardLock.ts): the version
@@ -42,18 +52,17 @@ export function moveOperator(op: OperatorRef, body: MoveRequest, userId: number)
  * (one statement for the others); bumps its version. Returns the moved operator.
  */
 async function placeOperator(trx: Knex.Transaction, op: OperatorRef, from: Column, body: MoveRequest, userId: number) {
-  const rows = await trx('operators').where({ basis_id: op.basis_id, order: op.order }).whereIn('column', [from, body.column])
-    .orderBy(['position', 'id']).select('id', 'column', 'position')
+  const rows = await trx('operators').where({ basis_id: op.basis_id, order: op.order }).whereIn('column', [from, body.column]).orderBy(['position', 'id']).select('id', 'column', 'position')
   const target = rows.filter((r) => r.column === body.column && r.id !== op.id).map((r) => r.id as number)
   target.splice(Math.min(body.position, target.length), 0, op.id)
   const source = from === body.column ? [] : rows.filter((r) => r.column === from && r.id !== op.id).map((r) => r.id as number)
   const wanted = new Map([...target.entries(), ...source.entries()].map(([i, id]) => [id, i]))
   const changed = rows.filter((r) => r.id !== op.id && wanted.get(r.id) !== r.position)
   if (changed.length) {
-    await trx.raw('update operators o set position = x.pos from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id',
-      [changed.map((r) => r.id), changed.map((r) => wanted.get(r.id)!)])
+    await trx.raw('update operators o set position = x.pos from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id', [changed.map((r) => r.id), changed.map((r) => wanted.get(r.id)!)])
   }
-  const [moved] = await trx('operators').where({ id: op.id })
+  const [moved] = await trx('operators')
+    .where({ id: op.id })
     .update({ column: body.column, position: wanted.get(op.id)!, version: trx.raw('version + 1'), moved_by: userId, moved_at: trx.fn.now() })
     .returning(['id', 'column', 'position', 'version', 'class_key as classKey', 'order'])
   return moved

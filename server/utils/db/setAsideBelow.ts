@@ -18,16 +18,18 @@ export async function setAsideOrders(basisId: number, orders: number[], userId: 
   return withBoardLock(basisId, orders, async (trx) => {
     const kept = orders.length ? await trx('operators').where({ basis_id: basisId, column: 'kept' }).whereIn('order', orders).orderBy(['order', 'position']).select('id', 'order') : []
     if (kept.length) {
-      const ends = await trx('operators').where({ basis_id: basisId, column: 'set_aside' }).whereIn('order', orders)
-        .groupBy('order').select('order').max('position as last')
+      const ends = await trx('operators').where({ basis_id: basisId, column: 'set_aside' }).whereIn('order', orders).groupBy('order').select('order').max('position as last')
       const next = new Map<number, number>(ends.map((e) => [e.order, Number(e.last) + 1]))
       const positions = kept.map((op) => {
         const position = next.get(op.order) ?? 0
         next.set(op.order, position + 1)
         return position
       })
-      await trx.raw(`update operators o set "column" = 'set_aside', position = x.pos, version = o.version + 1, moved_by = ?, moved_at = now()
-        from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id`, [userId, kept.map((k) => k.id), positions])
+      await trx.raw(
+        `update operators o set "column" = 'set_aside', position = x.pos, version = o.version + 1, moved_by = ?, moved_at = now()
+        from unnest(?::int[], ?::int[]) as x(id, pos) where o.id = x.id`,
+        [userId, kept.map((k) => k.id), positions],
+      )
       await storeCoverage(trx, basisId, emptyCoverage(classes.filter((c) => orders.includes(c.order))))
     }
     const basis = await trx('bases').where({ id: basisId }).first('version')

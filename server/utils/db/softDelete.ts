@@ -13,8 +13,11 @@ export async function markDeleted(table: Deletable, id: number, userId: number) 
 
 /** Undo a deletion. A theory whose name another theory of the group took meanwhile stays deleted (409). */
 export async function restoreDeleted(table: Deletable, id: number) {
-  await useDb()(table).where({ id }).update({ deleted_at: null, deleted_by: null }).catch((e: { code?: string }) => {
-    if (e.code === '23505') fail(409, 'Another theory of the group now has this theory\'s name; rename that one first, then restore this one')
-    throw e
-  })
+  await useDb()(table)
+    .where({ id })
+    .update({ deleted_at: null, deleted_by: null })
+    .catch((e: { code?: string }) => {
+      if (e.code === '23505') fail(409, "Another theory of the group now has this theory's name; rename that one first, then restore this one")
+      throw e
+    })
 }

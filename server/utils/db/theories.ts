@@ -2,13 +2,21 @@ import { useDb } from './connection'
 import { fail } from '../http/apiHandler'
 
 export interface TheoryRow {
-  id: number, group_id: number, name: string, definition: unknown, version: number,
-  parent_id: number | null, threshold: unknown, created_by: number | null, created_at: Date, updated_at: Date, deleted_at?: Date | null
+  id: number
+  group_id: number
+  name: string
+  definition: unknown
+  version: number
+  parent_id: number | null
+  threshold: unknown
+  created_by: number | null
+  created_at: Date
+  updated_at: Date
+  deleted_at?: Date | null
 }
 
 export function theoriesOfGroup(groupId: number) {
-  return useDb()('theories').where({ group_id: groupId }).whereNull('deleted_at').orderBy('name')
-    .select('id', 'name', 'version', 'parent_id as parentId', 'updated_at as updatedAt')
+  return useDb()('theories').where({ group_id: groupId }).whereNull('deleted_at').orderBy('name').select('id', 'name', 'version', 'parent_id as parentId', 'updated_at as updatedAt')
 }
 
 /** A theory of a group that is not deleted; the theory itself may be deleted only with `deleted` (for undo). */
@@ -22,7 +30,13 @@ export async function theoryOr404(id: number, opts: { deleted?: boolean } = {}):
 
 export function publicTheory(row: TheoryRow) {
   return {
-    id: row.id, groupId: row.group_id, name: row.name, definition: row.definition, version: row.version,
-    parentId: row.parent_id, threshold: row.threshold, updatedAt: row.updated_at,
+    id: row.id,
+    groupId: row.group_id,
+    name: row.name,
+    definition: row.definition,
+    version: row.version,
+    parentId: row.parent_id,
+    threshold: row.threshold,
+    updatedAt: row.updated_at,
   }
 }

@@ -3,7 +3,13 @@ import { fail } from '../http/apiHandler'
 import type { TheoryRow } from './theories'
 import type { IntegrateOutResult } from '../../engine/scales/integrateOut'
 
-export interface ThresholdRecord { name?: string, scale: number, unit: string, valueMeV: number, removedFields: string[] }
+export interface ThresholdRecord {
+  name?: string
+  scale: number
+  unit: string
+  valueMeV: number
+  removedFields: string[]
+}
 
 /**
  * Store the child theory of an integrate-out step in the parent's group, linked to its parent,
@@ -12,17 +18,29 @@ export interface ThresholdRecord { name?: string, scale: number, unit: string, v
 export async function createChildTheory(parent: TheoryRow, step: IntegrateOutResult, removedFields: string[], userId: number) {
   const threshold: ThresholdRecord = {
     ...(step.thresholdScale.name ? { name: step.thresholdScale.name } : {}),
-    scale: step.thresholdScale.value, unit: step.thresholdScale.unit, valueMeV: step.thresholdScale.valueMeV, removedFields,
+    scale: step.thresholdScale.value,
+    unit: step.thresholdScale.unit,
+    valueMeV: step.thresholdScale.valueMeV,
+    removedFields,
   }
   return useDb().transaction(async (trx) => {
     const clash = await trx('theories').where({ group_id: parent.group_id, name: step.child.name }).whereNull('deleted_at').first('id')
     if (clash) fail(409, `The group already has a theory named "${step.child.name}" (theory ${clash.id}); rename or delete it first`)
-    const [child] = await trx('theories').insert({
-      group_id: parent.group_id, name: step.child.name, definition: JSON.stringify(step.child),
-      parent_id: parent.id, threshold: JSON.stringify(threshold), created_by: userId,
-    }).returning('*')
+    const [child] = await trx('theories')
+      .insert({
+        group_id: parent.group_id,
+        name: step.child.name,
+        definition: JSON.stringify(step.child),
+        parent_id: parent.id,
+        threshold: JSON.stringify(threshold),
+        created_by: userId,
+      })
+      .returning('*')
     const rows = step.thresholdTags.map((t) => ({
-      theory_id: child.id, term: `kinetic term of ${t.group}`.slice(0, 120), field: t.field, text: t.text,
+      theory_id: child.id,
+      term: `kinetic term of ${t.group}`.slice(0, 120),
+      field: t.field,
+      text: t.text,
       details: JSON.stringify({ group: t.group, betaShift: t.betaShift, loop: 'one-loop', scale: threshold.scale, unit: threshold.unit, valueMeV: threshold.valueMeV, parentTheoryId: parent.id }),
     }))
     const tags = rows.length ? await trx('threshold_tags').insert(rows).returning(['id', 'term', 'field', 'text', 'details']) : []
@@ -31,7 +49,12 @@ export async function createChildTheory(parent: TheoryRow, step: IntegrateOutRes
 }
 
 export interface TowerNode {
-  id: number, name: string, parentId: number | null, threshold: ThresholdRecord | null, depth: number, definition: unknown
+  id: number
+  name: string
+  parentId: number | null
+  threshold: ThresholdRecord | null
+  depth: number
+  definition: unknown
 }
 
 /** The whole tower through a theory: up to its root (same group), then every descendant, depth-first. */
@@ -56,11 +79,19 @@ export async function towerOf(theory: TheoryRow): Promise<TowerNode[]> {
 
 /** Threshold tags of the given theories, by theory id. */
 /** What a threshold tag stores beside its text (written by the integrate-out step above). */
-export interface ThresholdTagDetails { group: string, betaShift: string, loop: string, scale: number, unit: string, valueMeV: number, parentTheoryId: number }
+export interface ThresholdTagDetails {
+  group: string
+  betaShift: string
+  loop: string
+  scale: number
+  unit: string
+  valueMeV: number
+  parentTheoryId: number
+}
 
 export async function thresholdTagsOf(theoryIds: number[]) {
   const rows = theoryIds.length ? await useDb()('threshold_tags').whereIn('theory_id', theoryIds).orderBy('id').select('id', 'theory_id', 'term', 'field', 'text', 'details') : []
-  const out: Record<number, { id: number, term: string, field: string, text: string, details: ThresholdTagDetails | null }[]> = {}
+  const out: Record<number, { id: number; term: string; field: string; text: string; details: ThresholdTagDetails | null }[]> = {}
   for (const r of rows) (out[r.theory_id] ??= []).push({ id: r.id, term: r.term, field: r.field, text: r.text, details: r.details })
   return out
 }

@@ -6,7 +6,10 @@ export function acceptsGzip(event: H3Event): boolean {
   if (!header) return false
   let star = false
   for (const part of header.toLowerCase().split(',')) {
-    const [coding, ...params] = part.trim().split(';').map((s) => s.trim())
+    const [coding, ...params] = part
+      .trim()
+      .split(';')
+      .map((s) => s.trim())
     const q = params.find((p) => p.startsWith('q='))
     const refused = q !== undefined && Number(q.slice(2)) === 0
     if (coding === 'gzip' || coding === 'x-gzip') return !refused

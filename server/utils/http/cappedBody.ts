@@ -29,9 +29,19 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
       chunks.length = 0
       reject(new Error('over the cap'))
     }
-    const onEnd = () => { cleanup(); resolve() }
-    const onError = (error: Error) => { cleanup(); reject(error) }
-    const cleanup = () => { req.off('data', onData); req.off('end', onEnd); req.off('error', onError) }
+    const onEnd = () => {
+      cleanup()
+      resolve()
+    }
+    const onError = (error: Error) => {
+      cleanup()
+      reject(error)
+    }
+    const cleanup = () => {
+      req.off('data', onData)
+      req.off('end', onEnd)
+      req.off('error', onError)
+    }
     req.on('data', onData).on('end', onEnd).on('error', onError)
   }).catch(() => tooLarge(event, maxBytes))
   return Buffer.concat(chunks).toString('utf8')
@@ -39,7 +49,7 @@ export async function readCappedText(event: H3Event, maxBytes: number): Promise<
 
 /** True when h3 would find the body already in memory (see readRawBody) rather than on a socket. */
 function bodyInMemory(event: H3Event): boolean {
-  const req = event.node.req as unknown as { body?: unknown, rawBody?: unknown }
+  const req = event.node.req as unknown as { body?: unknown; rawBody?: unknown }
   return Boolean((event as unknown as { _requestBody?: unknown })._requestBody || event.web?.request?.body || req.rawBody || req.body)
 }
 

@@ -5,7 +5,10 @@ import { describeIssue } from '../../../shared/schemas/describeZodError'
 // a query.
 
 /** Where the first U+0000 of a parsed JSON value is: the path to the text, or to the object whose key holds it. */
-export interface NulPlace { path: PropertyKey[], inKey: boolean }
+export interface NulPlace {
+  path: PropertyKey[]
+  inKey: boolean
+}
 
 /**
  * The place of the first string (or key) holding U+0000, or null when there is none.

@@ -20,16 +20,16 @@ export function inlineScripts(html: string): string[] {
 export function pageCsp(html: string): string {
   const hashes = inlineScripts(html).map((s) => `'sha256-${createHash('sha256').update(s, 'utf8').digest('base64')}'`)
   return [
-    'default-src \'self\'',
+    "default-src 'self'",
     `script-src 'self' ${[...new Set(hashes)].join(' ')}`.trim(),
-    'style-src \'self\' \'unsafe-inline\'',
-    'img-src \'self\' data:',
-    'font-src \'self\' data:',
-    'connect-src \'self\'',
-    'object-src \'none\'',
-    'base-uri \'self\'',
-    'form-action \'self\'',
-    'frame-ancestors \'none\'',
+    "style-src 'self' 'unsafe-inline'",
+    "img-src 'self' data:",
+    "font-src 'self' data:",
+    "connect-src 'self'",
+    "object-src 'none'",
+    "base-uri 'self'",
+    "form-action 'self'",
+    "frame-ancestors 'none'",
   ].join('; ')
 }
 
@@ -39,4 +39,4 @@ export const COMMON_HEADERS = {
   'referrer-policy': 'same-origin',
   'x-frame-options': 'DENY',
 } as const
-export const API_CSP = 'default-src \'none\'; frame-ancestors \'none\''
+export const API_CSP = "default-src 'none'; frame-ancestors 'none'"

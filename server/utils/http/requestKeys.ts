@@ -28,7 +28,9 @@ export function requestKey(event: H3Event): string | null {
 export async function once<T>(event: H3Event, userId: number, body: unknown, work: () => Promise<T>): Promise<T> {
   const key = requestKey(event)
   if (!key) return work()
-  const hash = createHash('sha256').update(`${event.method} ${event.path}\n${JSON.stringify(body ?? null)}`).digest('hex')
+  const hash = createHash('sha256')
+    .update(`${event.method} ${event.path}\n${JSON.stringify(body ?? null)}`)
+    .digest('hex')
   const earlier = await claimOrWait(userId, key, hash)
   if (earlier) {
     setResponseStatus(event, earlier.status)
@@ -41,22 +43,30 @@ export async function once<T>(event: H3Event, userId: number, body: unknown, wor
     await row.clone().update({ status: getResponseStatus(event), response: JSON.stringify(out ?? null) })
     return out
   } catch (error) {
-    await row.clone().delete().catch(() => {})
+    await row
+      .clone()
+      .delete()
+      .catch(() => {})
     throw error
   }
 }
 
 /** Claim the key (null), or the stored answer of the request that claimed it first. */
-async function claimOrWait(userId: number, key: string, hash: string): Promise<{ status: number, response: unknown } | null> {
+async function claimOrWait(userId: number, key: string, hash: string): Promise<{ status: number; response: unknown } | null> {
   const db = useDb()
   const until = Date.now() + WAIT_MS
   for (;;) {
     // A key older than a day is forgotten: its row is taken over as if it were new.
-    const claimed = await db.raw(`insert into request_keys (user_id, key, request_hash) values (?, ?, ?)
+    const claimed = await db.raw(
+      `insert into request_keys (user_id, key, request_hash) values (?, ?, ?)
       on conflict (user_id, key) do update set request_hash = excluded.request_hash, status = null, response = null, created_at = now()
-      where request_keys.created_at < now() - interval '${KEEP}' returning key`, [userId, key, hash])
+      where request_keys.created_at < now() - interval '${KEEP}' returning key`,
+      [userId, key, hash],
+    )
     if (claimed.rows.length) {
-      await db('request_keys').where('created_at', '<', db.raw(`now() - interval '${KEEP}'`)).delete()
+      await db('request_keys')
+        .where('created_at', '<', db.raw(`now() - interval '${KEEP}'`))
+        .delete()
       return null
     }
     const row = await db('request_keys').where({ user_id: userId, key }).first('request_hash', 'status', 'response')

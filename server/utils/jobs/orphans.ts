@@ -26,10 +26,12 @@ export type SendRun = (runId: number) => Promise<string | null>
 const lastSign = 'coalesce(heartbeat_at, started_at, created_at)'
 const staleFor = (seconds: number) => `${lastSign} < now() - make_interval(secs => ${Number(seconds)})`
 
-function stoppedMessage(row: { progress: number, current_label: string }) {
+function stoppedMessage(row: { progress: number; current_label: string }) {
   const at = `${Math.round(100 * (row.progress ?? 0))} %${row.current_label ? `, "${row.current_label}"` : ''}`
-  return `The worker stopped while computing this run (at ${at}) and stopped again on the retry, so the run was not finished and nothing of it was saved. `
-    + 'Start it again; if it keeps stopping, it may need more memory than the worker has (the worker\'s log says why it stopped).'
+  return (
+    `The worker stopped while computing this run (at ${at}) and stopped again on the retry, so the run was not finished and nothing of it was saved. ` +
+    "Start it again; if it keeps stopping, it may need more memory than the worker has (the worker's log says why it stopped)."
+  )
 }
 
 /** Orphans (limited to `runId` when given) whose cancel was asked for: cancelled. */
@@ -47,7 +49,9 @@ async function failOrphans(db: Knex, runId?: number): Promise<number[]> {
   const rows = await q.select('id', 'progress', 'current_label')
   const failed: number[] = []
   for (const row of rows) {
-    const n = await db('runs').where({ id: row.id, status: 'running' }).whereRaw(staleFor(RUN_LEASE.staleSeconds))
+    const n = await db('runs')
+      .where({ id: row.id, status: 'running' })
+      .whereRaw(staleFor(RUN_LEASE.staleSeconds))
       .update({ status: 'failed', error: stoppedMessage(row), finished_at: db.fn.now() })
     if (n) failed.push(row.id)
   }
@@ -74,7 +78,7 @@ async function sendJob(db: Knex, send: SendRun, runId: number) {
  * harmless: only one worker can claim a queued run.
  */
 async function resendStranded(db: Knex, send: SendRun, runId?: number): Promise<number[]> {
-  const q = db('runs').where({ status: 'queued', cancel_requested: false }).whereNull('job_id').whereRaw('created_at < now() - interval \'10 seconds\'')
+  const q = db('runs').where({ status: 'queued', cancel_requested: false }).whereNull('job_id').whereRaw("created_at < now() - interval '10 seconds'")
   if (runId) q.andWhere({ id: runId })
   const rows = await q.limit(50).select('id')
   for (const { id } of rows) await sendJob(db, send, id)
@@ -95,9 +99,11 @@ export async function settleRuns(db: Knex, send: SendRun, runId?: number) {
  * a live worker: the flag is set, the worker stops the engine within a second and records it.
  */
 export async function cancelRun(db: Knex, runId: number) {
-  const now = await db('runs').where({ id: runId })
+  const now = await db('runs')
+    .where({ id: runId })
     .andWhere((w) => w.where({ status: 'queued' }).orWhere((r) => r.where({ status: 'running' }).whereRaw(staleFor(RUN_LEASE.cancelStaleSeconds))))
-    .update({ cancel_requested: true, status: 'cancelled', current_label: 'cancelled', finished_at: db.fn.now() }).returning('*')
+    .update({ cancel_requested: true, status: 'cancelled', current_label: 'cancelled', finished_at: db.fn.now() })
+    .returning('*')
   if (now.length) return now[0]
   const [flagged] = await db('runs').where({ id: runId }).whereIn('status', ['queued', 'running']).update({ cancel_requested: true }).returning('*')
   return flagged

@@ -26,16 +26,20 @@ export async function admitRun(trx: Knex.Transaction, groupId: number, userId: n
   if (Number(mine) >= RUN_LIMITS.perUser) {
     throw new ComputeBusyError(`You already have ${mine} runs waiting or computing (the limit is ${RUN_LIMITS.perUser} per person); wait for one to finish or cancel one, then start this run`, 60)
   }
-  const [{ n: group, queued }] = await active(trx.queryBuilder()).where('t.group_id', groupId)
-    .select(trx.raw('count(*) as n'), trx.raw("count(*) filter (where r.status = 'queued') as queued"))
+  const [{ n: group, queued }] = await active(trx.queryBuilder()).where('t.group_id', groupId).select(trx.raw('count(*) as n'), trx.raw("count(*) filter (where r.status = 'queued') as queued"))
   if (Number(group) >= RUN_LIMITS.perGroup) {
-    throw new ComputeBusyError(`This group already has ${group} runs waiting or computing (the limit is ${RUN_LIMITS.perGroup} per group); wait for one to finish or cancel one, then start this run`, 60)
+    throw new ComputeBusyError(
+      `This group already has ${group} runs waiting or computing (the limit is ${RUN_LIMITS.perGroup} per group); wait for one to finish or cancel one, then start this run`,
+      60,
+    )
   }
   return -Number(queued)
 }
 
 /** The message of a run stopped at its time limit. */
 export function overtimeMessage(kind: string, minutes: number): string {
-  return `This ${kind} run took longer than its limit of ${minutes} minutes and was stopped; nothing of it was saved. `
-    + 'Ask for less (a lower dimension or order, fewer flavors), or split it into smaller runs'
+  return (
+    `This ${kind} run took longer than its limit of ${minutes} minutes and was stopped; nothing of it was saved. ` +
+    'Ask for less (a lower dimension or order, fewer flavors), or split it into smaller runs'
+  )
 }

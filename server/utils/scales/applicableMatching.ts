@@ -4,9 +4,17 @@ import type { Theory, TheoryField, TheoryGroup } from '../../../shared/schemas/t
 import { isTrivialRep } from '../../engine/group/representation'
 
 export interface AppliedMatching {
-  id: string, title: string, source: string, loops: number, dimension: number
-  group: string, fields: [string, string], charge: string, mass: string, note: string
-  forms: { name: string, note?: string, terms: { latex: string, text: string, coefficient: string }[] }[]
+  id: string
+  title: string
+  source: string
+  loops: number
+  dimension: number
+  group: string
+  fields: [string, string]
+  charge: string
+  mass: string
+  note: string
+  forms: { name: string; note?: string; terms: { latex: string; text: string; coefficient: string }[] }[]
 }
 
 const charge = (f: TheoryField, g: TheoryGroup) => parseRational(String(f.charges?.[g.name] ?? '0'))
@@ -41,8 +49,15 @@ export function applicableMatching(parent: Theory, removed: string[], scaleText:
       const flavors = a.flavors ?? 1
       for (const entry of MATCHING_LIBRARY) {
         out.push({
-          id: entry.id, title: entry.title, source: entry.source, loops: entry.loops, dimension: entry.dimension,
-          group: gauge.name, fields: [a.name, b.name], charge: q, mass: scaleText,
+          id: entry.id,
+          title: entry.title,
+          source: entry.source,
+          loops: entry.loops,
+          dimension: entry.dimension,
+          group: gauge.name,
+          fields: [a.name, b.name],
+          charge: q,
+          mass: scaleText,
           note: `${a.name} and ${b.name} form a Dirac fermion of charge Q = ${q} under ${gauge.name}; m is its mass (the threshold ${scaleText})${flavors > 1 ? `; ${flavors} flavors add ${flavors} equal contributions` : ''}.`,
           forms: entry.forms.map((form) => ({ name: form.name, note: form.note, terms: form.terms.map((t) => ({ latex: t.latex, text: t.text, coefficient: coefficientText(t.coefficient) })) })),
         })

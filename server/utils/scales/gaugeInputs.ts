@@ -20,8 +20,7 @@ function standardModelGroups(c: GaugeContent): [string, string, string] | null {
   const [colour, weak, hyper] = [by('SU3'), by('SU2'), by('U1')]
   if (c.groups.length !== 3 || colour.length !== 1 || weak.length !== 1 || hyper.length !== 1) return null
   const [C, W, Y] = [colour[0]!.name, weak[0]!.name, hyper[0]!.name]
-  const higgs = c.multiplets.some((m) => m.kind === 'complex-scalar' && !m.reps[C]?.some((a) => a > 0)
-    && m.reps[W]?.[0] === 1 && ['1/2', '-1/2'].includes(m.charges[Y] ? ratText(m.charges[Y]) : ''))
+  const higgs = c.multiplets.some((m) => m.kind === 'complex-scalar' && !m.reps[C]?.some((a) => a > 0) && m.reps[W]?.[0] === 1 && ['1/2', '-1/2'].includes(m.charges[Y] ? ratText(m.charges[Y]) : ''))
   return higgs ? [C, W, Y] : null
 }
 
@@ -37,7 +36,14 @@ function defaultInputs(c: GaugeContent) {
     return { loops: 2 as const, muFromGeV: Z_MASS_GEV, alpha, plotFromGeV, plotToGeV, source }
   }
   const alpha = Object.fromEntries(c.groups.map((g) => [g.name, g.abelian ? 0.01 : 0.1]))
-  return { loops: 2 as const, muFromGeV: Z_MASS_GEV, alpha, plotFromGeV, plotToGeV, source: 'Placeholder inputs (α = 0.1 for SU(N), 0.01 for U(1) at M_Z): replace them with the values of your model.' }
+  return {
+    loops: 2 as const,
+    muFromGeV: Z_MASS_GEV,
+    alpha,
+    plotFromGeV,
+    plotToGeV,
+    source: 'Placeholder inputs (α = 0.1 for SU(N), 0.01 for U(1) at M_Z): replace them with the values of your model.',
+  }
 }
 
 /**

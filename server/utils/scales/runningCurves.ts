@@ -28,10 +28,13 @@ export function qcdRunning(req: RunningQcdRequest) {
   const up = runAlphaS({ ...base, muTo: hi })
   const curve: AlphaSTracePoint[] = [...down.trace.slice(1).reverse(), ...up.trace]
   const marks = [...req.thresholds.map((t) => ({ label: `m_${t.name}`, mu: t.mass })), { label: 'm_τ', mu: TAU_MASS_GEV }, { label: 'M_Z', mu: Z_MASS_GEV }, { label: 'μ (chosen)', mu: muTo }]
-  const table = marks.filter((m) => m.mu >= lo && m.mu <= hi).sort((a, b) => a.mu - b.mu).map((m) => {
-    const r = runAlphaS({ ...base, muTo: m.mu })
-    return { label: m.label, mu: m.mu, alphaS: r.alphaS, nf: r.nfTo }
-  })
+  const table = marks
+    .filter((m) => m.mu >= lo && m.mu <= hi)
+    .sort((a, b) => a.mu - b.mu)
+    .map((m) => {
+      const r = runAlphaS({ ...base, muTo: m.mu })
+      return { label: m.label, mu: m.mu, alphaS: r.alphaS, nf: r.nfTo }
+    })
   return { result, curve: thin(curve, 400), crossings: [...down.crossings, ...up.crossings], table, plotRange: [lo, hi], caution: RUNNING_CAUTION }
 }
 

@@ -41,48 +41,80 @@ const W = OMEGA
 const W2 = OMEGA2
 
 const S3: FiniteGroupTable = {
-  kind: 'S3', label: 'S3', order: 6,
+  kind: 'S3',
+  label: 'S3',
+  order: 6,
   // e, (12), (123)
-  classes: [{ size: 1, order: 1, powers: [0] }, { size: 3, order: 2, powers: [0, 1] }, { size: 2, order: 3, powers: [0, 2, 2] }],
-  irreps: [{ name: '1', chi: row(1, 1, 1) }, { name: "1'", chi: row(1, -1, 1) }, { name: '2', chi: row(2, 0, -1) }],
+  classes: [
+    { size: 1, order: 1, powers: [0] },
+    { size: 3, order: 2, powers: [0, 1] },
+    { size: 2, order: 3, powers: [0, 2, 2] },
+  ],
+  irreps: [
+    { name: '1', chi: row(1, 1, 1) },
+    { name: "1'", chi: row(1, -1, 1) },
+    { name: '2', chi: row(2, 0, -1) },
+  ],
 }
 
 const A4: FiniteGroupTable = {
-  kind: 'A4', label: 'A4', order: 12,
+  kind: 'A4',
+  label: 'A4',
+  order: 12,
   // e, (12)(34), (123), (132)
   classes: [
-    { size: 1, order: 1, powers: [0] }, { size: 3, order: 2, powers: [0, 1] },
-    { size: 4, order: 3, powers: [0, 2, 3] }, { size: 4, order: 3, powers: [0, 3, 2] },
+    { size: 1, order: 1, powers: [0] },
+    { size: 3, order: 2, powers: [0, 1] },
+    { size: 4, order: 3, powers: [0, 2, 3] },
+    { size: 4, order: 3, powers: [0, 3, 2] },
   ],
   irreps: [
-    { name: '1', chi: row(1, 1, 1, 1) }, { name: "1'", chi: row(1, 1, W, W2) }, { name: "1''", chi: row(1, 1, W2, W) },
+    { name: '1', chi: row(1, 1, 1, 1) },
+    { name: "1'", chi: row(1, 1, W, W2) },
+    { name: "1''", chi: row(1, 1, W2, W) },
     { name: '3', chi: row(3, -1, 0, 0) },
   ],
 }
 
 const S4: FiniteGroupTable = {
-  kind: 'S4', label: 'S4', order: 24,
+  kind: 'S4',
+  label: 'S4',
+  order: 24,
   // e, (12), (12)(34), (123), (1234)
   classes: [
-    { size: 1, order: 1, powers: [0] }, { size: 6, order: 2, powers: [0, 1] }, { size: 3, order: 2, powers: [0, 2] },
-    { size: 8, order: 3, powers: [0, 3, 3] }, { size: 6, order: 4, powers: [0, 4, 2, 4] },
+    { size: 1, order: 1, powers: [0] },
+    { size: 6, order: 2, powers: [0, 1] },
+    { size: 3, order: 2, powers: [0, 2] },
+    { size: 8, order: 3, powers: [0, 3, 3] },
+    { size: 6, order: 4, powers: [0, 4, 2, 4] },
   ],
   irreps: [
-    { name: '1', chi: row(1, 1, 1, 1, 1) }, { name: "1'", chi: row(1, -1, 1, 1, -1) }, { name: '2', chi: row(2, 0, 2, -1, 0) },
-    { name: '3', chi: row(3, 1, -1, 0, -1) }, { name: "3'", chi: row(3, -1, -1, 0, 1) },
+    { name: '1', chi: row(1, 1, 1, 1, 1) },
+    { name: "1'", chi: row(1, -1, 1, 1, -1) },
+    { name: '2', chi: row(2, 0, 2, -1, 0) },
+    { name: '3', chi: row(3, 1, -1, 0, -1) },
+    { name: "3'", chi: row(3, -1, -1, 0, 1) },
   ],
 }
 
 const Q8: FiniteGroupTable = {
-  kind: 'Q8', label: 'Q8', order: 8,
+  kind: 'Q8',
+  label: 'Q8',
+  order: 8,
   // 1, −1, ±i, ±j, ±k
   classes: [
-    { size: 1, order: 1, powers: [0] }, { size: 1, order: 2, powers: [0, 1] },
-    { size: 2, order: 4, powers: [0, 2, 1, 2] }, { size: 2, order: 4, powers: [0, 3, 1, 3] }, { size: 2, order: 4, powers: [0, 4, 1, 4] },
+    { size: 1, order: 1, powers: [0] },
+    { size: 1, order: 2, powers: [0, 1] },
+    { size: 2, order: 4, powers: [0, 2, 1, 2] },
+    { size: 2, order: 4, powers: [0, 3, 1, 3] },
+    { size: 2, order: 4, powers: [0, 4, 1, 4] },
   ],
   irreps: [
-    { name: '1++', chi: row(1, 1, 1, 1, 1) }, { name: '1+-', chi: row(1, 1, 1, -1, -1) },
-    { name: '1-+', chi: row(1, 1, -1, 1, -1) }, { name: '1--', chi: row(1, 1, -1, -1, 1) }, { name: '2', chi: row(2, -2, 0, 0, 0) },
+    { name: '1++', chi: row(1, 1, 1, 1, 1) },
+    { name: '1+-', chi: row(1, 1, 1, -1, -1) },
+    { name: '1-+', chi: row(1, 1, -1, 1, -1) },
+    { name: '1--', chi: row(1, 1, -1, -1, 1) },
+    { name: '2', chi: row(2, -2, 0, 0, 0) },
   ],
 }
 
@@ -90,16 +122,26 @@ const Q8: FiniteGroupTable = {
 const tDoublet = row(2, -2, 0, -1, -1, 1, 1)
 const tOneP = row(1, 1, 1, W, W2, W, W2)
 const Tprime: FiniteGroupTable = {
-  kind: 'Tprime', label: 'T′', order: 24,
+  kind: 'Tprime',
+  label: 'T′',
+  order: 24,
   classes: [
-    { size: 1, order: 1, powers: [0] }, { size: 1, order: 2, powers: [0, 1] }, { size: 6, order: 4, powers: [0, 2, 1, 2] },
-    { size: 4, order: 3, powers: [0, 3, 4] }, { size: 4, order: 3, powers: [0, 4, 3] },
-    { size: 4, order: 6, powers: [0, 5, 4, 1, 3, 6] }, { size: 4, order: 6, powers: [0, 6, 3, 1, 4, 5] },
+    { size: 1, order: 1, powers: [0] },
+    { size: 1, order: 2, powers: [0, 1] },
+    { size: 6, order: 4, powers: [0, 2, 1, 2] },
+    { size: 4, order: 3, powers: [0, 3, 4] },
+    { size: 4, order: 3, powers: [0, 4, 3] },
+    { size: 4, order: 6, powers: [0, 5, 4, 1, 3, 6] },
+    { size: 4, order: 6, powers: [0, 6, 3, 1, 4, 5] },
   ],
   irreps: [
-    { name: '1', chi: row(1, 1, 1, 1, 1, 1, 1) }, { name: "1'", chi: tOneP }, { name: "1''", chi: tOneP.map(eConj) },
-    { name: '2', chi: tDoublet }, { name: "2'", chi: tDoublet.map((x, i) => eMul(x, tOneP[i]!)) },
-    { name: "2''", chi: tDoublet.map((x, i) => eMul(x, eConj(tOneP[i]!))) }, { name: '3', chi: row(3, 3, -1, 0, 0, 0, 0) },
+    { name: '1', chi: row(1, 1, 1, 1, 1, 1, 1) },
+    { name: "1'", chi: tOneP },
+    { name: "1''", chi: tOneP.map(eConj) },
+    { name: '2', chi: tDoublet },
+    { name: "2'", chi: tDoublet.map((x, i) => eMul(x, tOneP[i]!)) },
+    { name: "2''", chi: tDoublet.map((x, i) => eMul(x, eConj(tOneP[i]!))) },
+    { name: '3', chi: row(3, 3, -1, 0, 0, 0, 0) },
   ],
 }
 
@@ -109,7 +151,9 @@ function delta27(): FiniteGroupTable {
   for (let a = 0; a < 3; a++) for (let b = 0; b < 3; b++) if (a || b) images.push([a, b])
   const imageClass = (a: number, b: number): number => 3 + images.findIndex(([x, y]) => x === a % 3 && y === b % 3)
   const classes: FiniteClass[] = [
-    { size: 1, order: 1, powers: [0] }, { size: 1, order: 3, powers: [0, 1, 2] }, { size: 1, order: 3, powers: [0, 2, 1] },
+    { size: 1, order: 1, powers: [0] },
+    { size: 1, order: 3, powers: [0, 1, 2] },
+    { size: 1, order: 3, powers: [0, 2, 1] },
     ...images.map(([a, b]) => ({ size: 3, order: 3, powers: [0, imageClass(a, b), imageClass(2 * a, 2 * b)] })),
   ]
   const wPow = (k: number): Eis => [n(1), W, W2][((k % 3) + 3) % 3]!

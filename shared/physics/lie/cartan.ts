@@ -12,7 +12,13 @@ export type LieType = 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | 'G'
 
 /** Smallest and largest rank per series accepted by the engine. */
 export const RANK_LIMITS: Record<LieType, readonly [number, number]> = {
-  A: [1, 8], B: [2, 9], C: [2, 8], D: [3, 9], E: [6, 8], F: [4, 4], G: [2, 2],
+  A: [1, 8],
+  B: [2, 9],
+  C: [2, 8],
+  D: [3, 9],
+  E: [6, 8],
+  F: [4, 4],
+  G: [2, 2],
 }
 
 function checkRank(type: LieType, rank: number): void {

@@ -27,7 +27,10 @@ export class RootSystem {
   readonly gram: number[][]
   readonly scale: number
 
-  private constructor(readonly type: LieType, readonly rank: number) {
+  private constructor(
+    readonly type: LieType,
+    readonly rank: number,
+  ) {
     this.cartan = cartanMatrix(type, rank)
     this.half = rootHalfLengths(type, rank)
     const { inverse, det } = integerInverse(this.cartan)
@@ -146,7 +149,9 @@ export class RootSystem {
       const i = v.findIndex((x) => x < 0)
       if (i < 0) return v
       const c = v[i]!
-      this.cartan[i]!.forEach((a, j) => { v[j]! -= c * a })
+      this.cartan[i]!.forEach((a, j) => {
+        v[j]! -= c * a
+      })
     }
   }
 
@@ -157,7 +162,9 @@ export class RootSystem {
       const i = v.findIndex((x) => x > 0)
       if (i < 0) return v
       const c = v[i]!
-      this.cartan[i]!.forEach((a, j) => { v[j]! -= c * a })
+      this.cartan[i]!.forEach((a, j) => {
+        v[j]! -= c * a
+      })
     }
   }
 
@@ -175,7 +182,9 @@ export class RootSystem {
         const c = v[i]!
         if (c <= 0) continue
         const w = v.slice()
-        this.cartan[i]!.forEach((a, j) => { w[j]! -= c * a })
+        this.cartan[i]!.forEach((a, j) => {
+          w[j]! -= c * a
+        })
         const key = w.join(',')
         if (seen.has(key)) continue
         seen.add(key)
@@ -191,7 +200,11 @@ function integerInverse(a: number[][]): { inverse: number[][]; det: number } {
   const n = a.length
   type Q = [bigint, bigint]
   const g = (x: bigint, y: bigint): bigint => (y === 0n ? (x < 0n ? -x : x) : g(y, x % y))
-  const norm = ([p, q]: Q): Q => { const d = g(p, q) || 1n; const s = q < 0n ? -1n : 1n; return [(s * p) / d, (s * q) / d] }
+  const norm = ([p, q]: Q): Q => {
+    const d = g(p, q) || 1n
+    const s = q < 0n ? -1n : 1n
+    return [(s * p) / d, (s * q) / d]
+  }
   const sub = (x: Q, y: Q): Q => norm([x[0] * y[1] - y[0] * x[1], x[1] * y[1]])
   const mul = (x: Q, y: Q): Q => norm([x[0] * y[0], x[1] * y[1]])
   const div = (x: Q, y: Q): Q => norm([x[0] * y[1], x[1] * y[0]])

@@ -35,7 +35,7 @@ describe('what the tester did, refused', () => {
     expect(await rowCounts()).toEqual(before)
   })
 
-  it('an owner\'s cookie used from a page of another origin cannot make anyone an owner', async () => {
+  it("an owner's cookie used from a page of another origin cannot make anyone an owner", async () => {
     const target = await addMember(world, 'viewer')
     const before = await rowCounts()
     const res = await asForeignPage(world.owner.client, 'PATCH', `/api/groups/${world.slug}/members/${target.id}`, { role: 'owner' })
@@ -64,10 +64,16 @@ describe('what the tester did, refused', () => {
   })
 })
 
-describe('the app\'s own requests still pass', () => {
+describe("the app's own requests still pass", () => {
   it('JSON from the same origin, as a browser sends it (Origin and Sec-Fetch-Site), is accepted', async () => {
     const origin = world.owner.client.baseUrl
-    const res = await rawRequest('POST', notes(), { cookie: world.byRole.commenter.client.cookie, origin, fetchSite: 'same-origin', body: '{"body":"fine"}', contentType: 'application/json; charset=utf-8' })
+    const res = await rawRequest('POST', notes(), {
+      cookie: world.byRole.commenter.client.cookie,
+      origin,
+      fetchSite: 'same-origin',
+      body: '{"body":"fine"}',
+      contentType: 'application/json; charset=utf-8',
+    })
     expect(res.status, JSON.stringify(res.body)).toBe(201)
   })
 

@@ -30,7 +30,7 @@ async function knownAccounts(n: number): Promise<string[]> {
 }
 const knownFor = (use: number, i: number) => known[use * TRIES + i]!
 
-function expectSameTime(what: string, m: { a: number, b: number }) {
+function expectSameTime(what: string, m: { a: number; b: number }) {
   console.info(`[timing] ${what}: known ${m.a.toFixed(1)} ms, unknown ${m.b.toFixed(1)} ms (medians of ${TRIES})`)
   expect(Math.abs(m.a - m.b), `${what}: known ${m.a} ms vs unknown ${m.b} ms`).toBeLessThan(Math.max(3, 0.25 * Math.max(m.a, m.b)))
 }
@@ -38,9 +38,11 @@ const bodies = (replies: Reply[]) => new Set(replies.map((r) => `${r.status} ${J
 
 describe('sign-in', () => {
   it('answers a wrong password and an unknown address alike, in the same time', async () => {
-    const m = await pairedMedians(TRIES,
+    const m = await pairedMedians(
+      TRIES,
       (i) => new ApiClient().post('/api/auth/signin', { email: knownFor(0, i), password: 'not the password' }),
-      () => new ApiClient().post('/api/auth/signin', { email: uniqueEmail('ghost'), password: 'not the password' }))
+      () => new ApiClient().post('/api/auth/signin', { email: uniqueEmail('ghost'), password: 'not the password' }),
+    )
     expect(bodies(m.answers.a).size).toBe(1)
     expect(messageOf(m.answers.a[0]!)).toBe('E-mail or password is wrong')
     expect(bodies(m.answers.a)).toEqual(bodies(m.answers.b))
@@ -51,16 +53,20 @@ describe('sign-in', () => {
 describe('sign-up', () => {
   it('answers a known address exactly as a new one, in the same time, and mails the owner instead', async () => {
     const fresh: string[] = []
-    const m = await pairedMedians(TRIES,
+    const m = await pairedMedians(
+      TRIES,
       (i) => new ApiClient().post('/api/auth/signup', { email: knownFor(1, i), password: TEST_PASSWORD, displayName: 'Someone' }),
       () => {
         fresh.push(uniqueEmail('newcomer'))
         return new ApiClient().post('/api/auth/signup', { email: fresh.at(-1), password: TEST_PASSWORD, displayName: 'Someone' })
-      })
+      },
+    )
     expect(bodies(m.answers.a)).toEqual(bodies(m.answers.b))
     expect(m.answers.a[0]!.status).toBe(202)
     expectSameTime('sign-up', m)
-    const toOwner = await testDb()('outbox').where({ to_address: knownFor(1, 0) }).first('subject', 'text_body')
+    const toOwner = await testDb()('outbox')
+      .where({ to_address: knownFor(1, 0) })
+      .first('subject', 'text_body')
     expect(toOwner.subject).toBe('Someone tried to create a Scalewright account with your address')
     expect(toOwner.text_body).not.toMatch(/\/welcome\//)
     const toNew = await testDb()('outbox').where({ to_address: fresh[0] }).first('subject', 'text_body')
@@ -74,16 +80,20 @@ describe('sign-up', () => {
     expect((await client.post('/api/auth/signup', { email, password: TEST_PASSWORD, displayName: 'Pending' })).status).toBe(202)
     expect(client.cookie).toBe('')
     expect(await testDb()('users').where({ email }).first()).toBeUndefined()
-    const owner = await testDb()('users').where({ email: knownFor(1, 0) }).first('password_hash', 'display_name')
+    const owner = await testDb()('users')
+      .where({ email: knownFor(1, 0) })
+      .first('password_hash', 'display_name')
     expect(owner).toEqual({ password_hash: sharedHash, display_name: 'Known 30' })
   })
 })
 
 describe('password reset', () => {
   it('answers alike and in the same time for a known and an unknown address', async () => {
-    const m = await pairedMedians(TRIES,
+    const m = await pairedMedians(
+      TRIES,
       (i) => new ApiClient().post('/api/auth/reset-request', { email: knownFor(2, i) }),
-      () => new ApiClient().post('/api/auth/reset-request', { email: uniqueEmail('nobody') }))
+      () => new ApiClient().post('/api/auth/reset-request', { email: uniqueEmail('nobody') }),
+    )
     expect(bodies(m.answers.a)).toEqual(bodies(m.answers.b))
     expectSameTime('reset request', m)
   })
@@ -92,13 +102,18 @@ describe('password reset', () => {
 describe('adding a member', () => {
   it('sends an invitation whether or not the address has an account: same answer, same time, nobody joins without accepting', async () => {
     const strangers: string[] = []
-    const m = await pairedMedians(TRIES,
+    const m = await pairedMedians(
+      TRIES,
       (i) => world.owner.client.post(`/api/groups/${world.slug}/members`, { email: knownFor(3, i), role: 'editor' }),
       () => {
         strangers.push(uniqueEmail('outsider'))
         return world.owner.client.post(`/api/groups/${world.slug}/members`, { email: strangers.at(-1), role: 'editor' })
-      })
-    const shape = (r: Reply) => `${r.status} ${Object.keys(r.body.invitation ?? {}).sort().join(',')} ${r.body.message}`
+      },
+    )
+    const shape = (r: Reply) =>
+      `${r.status} ${Object.keys(r.body.invitation ?? {})
+        .sort()
+        .join(',')} ${r.body.message}`
     expect(new Set(m.answers.a.map(shape))).toEqual(new Set(m.answers.b.map(shape)))
     expect(m.answers.a[0]!.status).toBe(201)
     expectSameTime('add member', m)

@@ -16,10 +16,7 @@ describe('the last site admin', () => {
     const b = await signedUpClient('admin-b')
     for (let round = 0; round < ROUNDS; round++) {
       await testDb()('users').whereIn('id', [a.id, b.id]).update({ site_role: 'admin' })
-      const replies = await Promise.all([
-        a.client.patch(`/api/admin/users/${b.id}`, { siteRole: 'member' }),
-        b.client.patch(`/api/admin/users/${a.id}`, { siteRole: 'member' }),
-      ])
+      const replies = await Promise.all([a.client.patch(`/api/admin/users/${b.id}`, { siteRole: 'member' }), b.client.patch(`/api/admin/users/${a.id}`, { siteRole: 'member' })])
       expect(replies.every(allowed), JSON.stringify(replies)).toBe(true)
       expect(replies.filter((r) => r.status === 200)).toHaveLength(1)
       expect(await testDb()('users').where({ site_role: 'admin' }).count('id as n').first()).toEqual({ n: '1' })
@@ -57,11 +54,15 @@ describe('the last owner of a group', () => {
     const other = await addMember(world, 'owner')
     const a = world.owner
     for (let round = 0; round < ROUNDS; round++) {
-      await testDb()('memberships').insert([a.id, other.id].map((id) => ({ group_id: world.groupId, user_id: id, role: 'owner' })))
-        .onConflict(['group_id', 'user_id']).merge()
-      const replies = await Promise.all(round % 2
-        ? [a.client.delete(`/api/groups/${world.slug}/members/${other.id}`), other.client.patch(`/api/groups/${world.slug}/members/${a.id}`, { role: 'viewer' })]
-        : [a.client.delete(`/api/groups/${world.slug}/members/${a.id}`), other.client.delete(`/api/groups/${world.slug}/members/${other.id}`)])
+      await testDb()('memberships')
+        .insert([a.id, other.id].map((id) => ({ group_id: world.groupId, user_id: id, role: 'owner' })))
+        .onConflict(['group_id', 'user_id'])
+        .merge()
+      const replies = await Promise.all(
+        round % 2
+          ? [a.client.delete(`/api/groups/${world.slug}/members/${other.id}`), other.client.patch(`/api/groups/${world.slug}/members/${a.id}`, { role: 'viewer' })]
+          : [a.client.delete(`/api/groups/${world.slug}/members/${a.id}`), other.client.delete(`/api/groups/${world.slug}/members/${other.id}`)],
+      )
       expect(replies.every(allowed), JSON.stringify(replies)).toBe(true)
       expect(await owners(world.groupId)).toBe(1)
     }

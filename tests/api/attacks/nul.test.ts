@@ -27,11 +27,10 @@ function poisoned(value: unknown): unknown {
   if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, poisoned(v)]))
   return value
 }
-const hasText = (value: unknown): boolean => typeof value === 'string'
-  || (typeof value === 'object' && value !== null && Object.values(value).some(hasText))
+const hasText = (value: unknown): boolean => typeof value === 'string' || (typeof value === 'object' && value !== null && Object.values(value).some(hasText))
 
 describe.each(mutatingRoutes().filter((r) => ROUTE_CASES[r]?.body))('%s', (route) => {
-  it('a NUL in the body\'s text (or, with no text, in a key) → 400 naming the field, nothing written', async () => {
+  it("a NUL in the body's text (or, with no text, in a key) → 400 naming the field, nothing written", async () => {
     const actor = actorFor(route)
     const req = await ROUTE_CASES[route]!.prepare(world, actor)
     const body = hasText(req.body) ? poisoned(req.body) : { ...(req.body as object), 'extra\u0000': 1 }

@@ -42,7 +42,10 @@ async function readsStayFast(name: string, burst: () => Promise<Reply[]>) {
     expect([200, 429], `${name}: ${r.status} ${messageOf(r)}`).toContain(r.status)
     if (r.status === 429) expect(messageOf(r)).toMatch(/the limit is \d+/)
   }
-  expect(replies.some((r) => r.status === 200), name).toBe(true)
+  expect(
+    replies.some((r) => r.status === 200),
+    name,
+  ).toBe(true)
   return replies
 }
 
@@ -106,7 +109,7 @@ describe('board writes whose math runs in the compute pool (under the board lock
     expect(back.body.coverage).toMatchObject({ rank: 1, required: 1, complete: true })
   })
 
-  it('an import of the basis\'s own export beside 20 board reads', async () => {
+  it("an import of the basis's own export beside 20 board reads", async () => {
     const file = (await world.byRole.viewer.client.get(`/api/bases/${basisId}/export?format=json`)).body
     const [res] = await readsStayFast('import', async () => [await world.byRole.editor.client.post(`/api/bases/${basisId}/import`, file)])
     expect(res!.body.columnChanges).toBe(0)

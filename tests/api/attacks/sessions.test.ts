@@ -73,7 +73,7 @@ describe('signing out ends the session on the server', () => {
     expect(await testDb()('sessions').where({ user_id: id }).count('id as n').first()).toEqual({ n: '1' })
   })
 
-  it('the page\'s session read reflects the account as it is now', async () => {
+  it("the page's session read reflects the account as it is now", async () => {
     const { client, id } = await signedUpClient('renamed')
     await testDb()('users').where({ id }).update({ display_name: 'Renamed Since' })
     const res = await client.get('/api/_auth/session')
@@ -102,7 +102,7 @@ describe('reset links die when the password changes', () => {
     expect((await new ApiClient().post('/api/auth/signin', { email, password: 'the owner new password' })).status).toBe(200)
   })
 
-  it('a reset ends every session of the account, this browser\'s included', async () => {
+  it("a reset ends every session of the account, this browser's included", async () => {
     const { client, email } = await signedUpClient('resetall')
     const token = await resetToken(email)
     expect((await copyOf(client).post('/api/auth/reset', { token, password: 'a fresh long password' })).status).toBe(200)

@@ -29,7 +29,7 @@ describe('signed-out requests get 401 before any 404', () => {
 })
 
 describe('tags belong to their authors, as notes do', () => {
-  it('a commenter cannot delete another member\'s tag; the author and an owner can', async () => {
+  it("a commenter cannot delete another member's tag; the author and an owner can", async () => {
     const byEditor = await world.byRole.editor.client.post(`/api/operators/${ops.photon}/tags`, { kind: 'custom', label: 'editor tag' })
     const before = await rowCounts()
     const refused = await world.byRole.commenter.client.delete(`/api/tags/${byEditor.body.tag.id}`)
@@ -43,8 +43,7 @@ describe('tags belong to their authors, as notes do', () => {
 })
 
 describe('notes are limited', () => {
-  const post = (operatorId: number | undefined, client = world.byRole.commenter.client) =>
-    client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'one more', operatorId })
+  const post = (operatorId: number | undefined, client = world.byRole.commenter.client) => client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'one more', operatorId })
 
   it('a note longer than 10000 characters is refused with the limit named', async () => {
     const res = await world.byRole.commenter.client.post(`/api/theories/${world.theoryId}/annotations`, { body: 'x'.repeat(10_001) })
@@ -83,7 +82,9 @@ async function insertNotes(n: number, authorId: number, target: (i: number) => n
 describe('invitation mails with long names', () => {
   it('a 120-character group name and an 80-character display name: the invitation and its mail are both stored', async () => {
     const owner = await signedUpClient('long')
-    await testDb()('users').where({ id: owner.id }).update({ display_name: 'D'.repeat(80) })
+    await testDb()('users')
+      .where({ id: owner.id })
+      .update({ display_name: 'D'.repeat(80) })
     const slug = `long-${Date.now().toString(36)}`
     expect((await owner.client.post('/api/groups', { slug, name: 'G'.repeat(120) })).status).toBe(201)
     const email = `invitee-${Date.now().toString(36)}@example.test`
@@ -112,7 +113,10 @@ describe('invitation mails with long names', () => {
   })
 
   it('an address longer than 254 characters is refused before anything is written', async () => {
-    const res = await world.owner.client.post(`/api/groups/${world.slug}/invitations`, { email: `${'a'.repeat(60)}@${'b'.repeat(60)}.${'c'.repeat(60)}.${'d'.repeat(60)}.example.test`, role: 'viewer' })
+    const res = await world.owner.client.post(`/api/groups/${world.slug}/invitations`, {
+      email: `${'a'.repeat(60)}@${'b'.repeat(60)}.${'c'.repeat(60)}.${'d'.repeat(60)}.example.test`,
+      role: 'viewer',
+    })
     expect(res.status).toBe(400)
     expect(messageOf(res)).toBe('E-mail address is too long (254 characters at most)')
   })
@@ -123,8 +127,8 @@ describe('security headers', () => {
     const res = await fetch(`${world.anonymous.baseUrl}/signin`)
     const html = await res.text()
     const csp = res.headers.get('content-security-policy')!
-    expect(csp).toContain('frame-ancestors \'none\'')
-    expect(csp).toContain('object-src \'none\'')
+    expect(csp).toContain("frame-ancestors 'none'")
+    expect(csp).toContain("object-src 'none'")
     const scriptSrc = /script-src ([^;]+)/.exec(csp)![1]!
     expect(scriptSrc).not.toContain('unsafe-inline')
     expect(scriptSrc).not.toContain('unsafe-eval')
@@ -139,7 +143,7 @@ describe('security headers', () => {
   it('API answers and exports cannot be framed or sniffed either', async () => {
     const res = await fetch(`${world.anonymous.baseUrl}/api/health`)
     expect(res.headers.get('x-content-type-options')).toBe('nosniff')
-    expect(res.headers.get('content-security-policy')).toBe('default-src \'none\'; frame-ancestors \'none\'')
+    expect(res.headers.get('content-security-policy')).toBe("default-src 'none'; frame-ancestors 'none'")
   })
 
   it('a share page (a token in its address) does not leak the address to other sites', async () => {

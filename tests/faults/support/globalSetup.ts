@@ -4,5 +4,7 @@ import { faultsCluster } from './stack'
 export default async function setup() {
   const cluster = faultsCluster()
   await cluster.ensure([])
-  return async () => { cluster.stop() }
+  return async () => {
+    cluster.stop()
+  }
 }

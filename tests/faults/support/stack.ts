@@ -43,15 +43,29 @@ export async function startStack(name: string): Promise<Stack> {
   const baseUrl = `http://127.0.0.1:${port}`
   let output = ''
   const app = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.mjs'], {
-    cwd: root, detached: true, stdio: ['ignore', 'pipe', 'pipe'],
+    cwd: root,
+    detached: true,
+    stdio: ['ignore', 'pipe', 'pipe'],
     env: { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', SCALEWRIGHT_DEMO: '0', SMTP_URL: '', NUXT_PUBLIC_APP_URL: baseUrl },
   })
-  app.stdout!.on('data', (b) => { output += b })
-  app.stderr!.on('data', (b) => { output += b })
-  await waitUntil(async () => (await fetch(`${baseUrl}/api/health`).catch(() => null))?.ok === true, 120_000, () => `npm start did not serve: ${output.slice(-2000)}`)
+  app.stdout!.on('data', (b) => {
+    output += b
+  })
+  app.stderr!.on('data', (b) => {
+    output += b
+  })
+  await waitUntil(
+    async () => (await fetch(`${baseUrl}/api/health`).catch(() => null))?.ok === true,
+    120_000,
+    () => `npm start did not serve: ${output.slice(-2000)}`,
+  )
   const db = knexFactory({ client: 'pg', connection: databaseUrl, pool: { min: 0, max: 2 } })
   return {
-    cluster, db, baseUrl, databaseUrl, app,
+    cluster,
+    db,
+    baseUrl,
+    databaseUrl,
+    app,
     log: () => output,
     async stop() {
       // What npm start printed, for reading after a failure.

@@ -15,14 +15,19 @@ describe('CP of explicit operators', () => {
   it('SMEFT, D L L* H^2 H*^2 at dimension 8 (one flavour): three CP-even and one CP-odd Hermitian operator, as the twisted count (Murphy, JHEP 10 (2020) 174, class ψ^2 H^4 D; split computed)', () => {
     const smeft = preset('smeft')
     const b = classBasis(smeft, 'D L L* H^2 H*^2')
-    const labels = describeOperators(b).map((o) => o.cp).sort()
+    const labels = describeOperators(b)
+      .map((o) => o.cp)
+      .sort()
     expect(labels).toEqual(['even', 'even', 'even', 'odd'])
     const count = countOperators(smeft, { maxDim: 8, minDim: 8, nf: 1 }).byDimension[0]!
     expect(count.cp!['D L L* H^2 H*^2']).toEqual({ even: 3, odd: 1 })
   })
 
   it('QED to dimension 8 and QCD-like to dimension 7: every operator labelled, every class agrees with the twisted count', () => {
-    for (const [id, maxDim] of [['qed', 8], ['qcd-like', 7]] as const) {
+    for (const [id, maxDim] of [
+      ['qed', 8],
+      ['qcd-like', 7],
+    ] as const) {
       const r = buildBasis(preset(id), { maxDim })
       for (const d of r.byDimension) {
         expect(d.tallyOk, `${id} ${d.dimension}: ${d.message}`).toBe(true)

@@ -3,7 +3,9 @@ import { classBasis, rewriteOperator } from '../../../server/engine/basis/index'
 import { rat } from '../../../server/engine/exact/rational'
 
 const weyl = {
-  name: 'four Weyl fermions', frame: 'relativistic' as const, groups: [],
+  name: 'four Weyl fermions',
+  frame: 'relativistic' as const,
+  groups: [],
   fields: ['a', 'b', 'c', 'd'].map((name) => ({ name, lorentz: 'left-weyl' as const })),
 }
 const oneWeyl = { name: 'one Weyl fermion', frame: 'relativistic' as const, groups: [], fields: [{ name: 'psi', lorentz: 'left-weyl' as const }] }

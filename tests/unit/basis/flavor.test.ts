@@ -20,9 +20,21 @@ describe('Young symmetrizers and GL(N) dimensions', () => {
     expect(standardTableaux([3, 2, 1])).toBe(16)
   })
   it('Y_[2] = e + (12), Y_[1,1] = e − (12); Fermi twist flips the sign (Fulton & Harris §4.1)', () => {
-    expect(youngSymmetrizer([2], [0, 1], 2, false).map((t) => t.sign).sort()).toEqual([1, 1])
-    expect(youngSymmetrizer([1, 1], [0, 1], 2, false).map((t) => t.sign).sort()).toEqual([-1, 1])
-    expect(youngSymmetrizer([2], [0, 1], 2, true).map((t) => t.sign).sort()).toEqual([-1, 1])
+    expect(
+      youngSymmetrizer([2], [0, 1], 2, false)
+        .map((t) => t.sign)
+        .sort(),
+    ).toEqual([1, 1])
+    expect(
+      youngSymmetrizer([1, 1], [0, 1], 2, false)
+        .map((t) => t.sign)
+        .sort(),
+    ).toEqual([-1, 1])
+    expect(
+      youngSymmetrizer([2], [0, 1], 2, true)
+        .map((t) => t.sign)
+        .sort(),
+    ).toEqual([-1, 1])
     expect(youngSymmetrizer([2, 1], [0, 1, 2], 3, false)).toHaveLength(4)
   })
 })
@@ -50,7 +62,14 @@ function youngImageRank(lambda: number[], N: number): number {
 describe('the flavour components of one Young symmetrizer (the stated convention)', () => {
   // Fulton & Harris, Representation Theory, §6.1: Y_T V^{⊗m} is the GL(N) irrep of shape λ,
   // so one listed operator has dim_GL(N)(λ) components, not f^λ times as many.
-  const cases: [number[], number][] = [[[2, 1], 3], [[2, 1], 2], [[2, 2], 3], [[3, 1], 2], [[1, 1, 1], 3], [[2], 3]]
+  const cases: [number[], number][] = [
+    [[2, 1], 3],
+    [[2, 1], 2],
+    [[2, 2], 3],
+    [[3, 1], 2],
+    [[1, 1, 1], 3],
+    [[2], 3],
+  ]
   it.each(cases)('Y_T for λ = %j on (C^%i)^⊗m has rank dim_GL(N)(λ)', (lambda, N) => {
     expect(youngImageRank(lambda, N)).toBe(glDimension(lambda, N))
   })
@@ -77,10 +96,11 @@ describe('flavor counts of the SMEFT', () => {
     const r = buildBasis(smeft3, { maxDim: 6, nf: 3 })
     const d6 = r.byDimension.find((d) => d.dimension === 6)!
     expect(d6.operators).toBe(3045)
-    const baryon = (key: string) => key.split(' ').reduce((s, tok) => {
-      const m = /^([A-Za-z_]+)(\*?)(?:\^(\d+))?$/.exec(tok)!
-      return s + (['Q', 'u', 'd'].includes(m[1]!) ? (m[2] ? -1 : 1) * Number(m[3] ?? 1) : 0)
-    }, 0)
+    const baryon = (key: string) =>
+      key.split(' ').reduce((s, tok) => {
+        const m = /^([A-Za-z_]+)(\*?)(?:\^(\d+))?$/.exec(tok)!
+        return s + (['Q', 'u', 'd'].includes(m[1]!) ? (m[2] ? -1 : 1) * Number(m[3] ?? 1) : 0)
+      }, 0)
     const bViolating = d6.classes.filter((c) => baryon(c.key) !== 0).reduce((s, c) => s + c.flavor!.realParameters, 0)
     expect(bViolating).toBe(546)
     expect(d6.operators - bViolating).toBe(2499)

@@ -14,12 +14,7 @@ export type Tensor = number[][]
 export function toMinkowski(F: PrimeField, b: number[][]): Vec {
   const i = F.sqrtMinusOne()
   const half = F.inv(2)
-  return [
-    F.mul(half, F.add(b[0]![0]!, b[1]![1]!)),
-    F.mul(half, F.add(b[0]![1]!, b[1]![0]!)),
-    F.div(F.mul(half, F.sub(b[1]![0]!, b[0]![1]!)), i),
-    F.mul(half, F.sub(b[0]![0]!, b[1]![1]!)),
-  ]
+  return [F.mul(half, F.add(b[0]![0]!, b[1]![1]!)), F.mul(half, F.add(b[0]![1]!, b[1]![0]!)), F.div(F.mul(half, F.sub(b[1]![0]!, b[0]![1]!)), i), F.mul(half, F.sub(b[0]![0]!, b[1]![1]!))]
 }
 
 const outer = (F: PrimeField, a: number[], b: number[]): number[][] => a.map((x) => b.map((y) => F.mul(x, y)))
@@ -29,9 +24,10 @@ export function fieldStrength(F: PrimeField, k: KinematicPoint, leg: number, hel
   const lam = k.lam[leg]!
   const lamt = k.lamt[leg]!
   const p = toMinkowski(F, outer(F, lam, lamt))
-  const eps = helicity < 0
-    ? toMinkowski(F, outer(F, lam, ref)).map((x) => F.div(x, F.sub(F.mul(lamt[0], ref[1]), F.mul(lamt[1], ref[0]))))
-    : toMinkowski(F, outer(F, ref, lamt)).map((x) => F.div(x, F.sub(F.mul(ref[0], lam[1]), F.mul(ref[1], lam[0]))))
+  const eps =
+    helicity < 0
+      ? toMinkowski(F, outer(F, lam, ref)).map((x) => F.div(x, F.sub(F.mul(lamt[0], ref[1]), F.mul(lamt[1], ref[0]))))
+      : toMinkowski(F, outer(F, ref, lamt)).map((x) => F.div(x, F.sub(F.mul(ref[0], lam[1]), F.mul(ref[1], lam[0]))))
   return p.map((pm, m) => eps.map((en, n) => F.sub(F.mul(pm, en), F.mul(eps[m]!, p[n]!))))
 }
 
@@ -52,7 +48,11 @@ export function contract(F: PrimeField, a: Tensor, b: Tensor): number {
 
 function levi(idx: number[]): number {
   let s = 1
-  for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) { if (idx[i] === idx[j]) return 0; if (idx[i]! > idx[j]!) s = -s }
+  for (let i = 0; i < 4; i++)
+    for (let j = i + 1; j < 4; j++) {
+      if (idx[i] === idx[j]) return 0
+      if (idx[i]! > idx[j]!) s = -s
+    }
   return s
 }
 
@@ -60,14 +60,17 @@ function levi(idx: number[]): number {
 export function dual(F: PrimeField, t: Tensor): Tensor {
   const tl = lower(F, t)
   const half = F.inv(2)
-  return [0, 1, 2, 3].map((m) => [0, 1, 2, 3].map((n) => {
-    let s = 0
-    for (let r = 0; r < 4; r++) for (let q = 0; q < 4; q++) {
-      const e = levi([m, n, r, q])
-      if (e !== 0) s = e > 0 ? F.add(s, tl[r]![q]!) : F.sub(s, tl[r]![q]!)
-    }
-    return F.mul(half, s)
-  }))
+  return [0, 1, 2, 3].map((m) =>
+    [0, 1, 2, 3].map((n) => {
+      let s = 0
+      for (let r = 0; r < 4; r++)
+        for (let q = 0; q < 4; q++) {
+          const e = levi([m, n, r, q])
+          if (e !== 0) s = e > 0 ? F.add(s, tl[r]![q]!) : F.sub(s, tl[r]![q]!)
+        }
+      return F.mul(half, s)
+    }),
+  )
 }
 
 /** F_a^{μ}{}_{ν} F_b^{ν}{}_{ρ} F_c^{ρ}{}_{σ} F_d^{σ}{}_{μ} (trace of mixed-index matrices). */
@@ -81,7 +84,10 @@ export function chain(F: PrimeField, ts: Tensor[]): number {
 export function permutations4(): number[][] {
   const out: number[][] = []
   const rec = (cur: number[]): void => {
-    if (cur.length === 4) { out.push(cur); return }
+    if (cur.length === 4) {
+      out.push(cur)
+      return
+    }
     for (let i = 0; i < 4; i++) if (!cur.includes(i)) rec([...cur, i])
   }
   rec([])

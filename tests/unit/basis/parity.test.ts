@@ -117,8 +117,17 @@ describe('QED with one Dirac fermion (preset qed; Dirac bilinears under ψ → �
     expect(b.parity.pEven! + b.parity.pOdd!).toBe(b.rank)
   })
   it('η = 1 convention: ψᵀCγ^μγ5ψ ∂_μa b (neutral Dirac pair, fermion number violated) is P-even — a polar vector (common practice, derived from γ^{μT} = −Cγ^μC⁻¹)', () => {
-    const nd: Theory = { name: 'neutral Dirac', frame: 'relativistic', groups: [], fields: [
-      { name: 'NL', lorentz: 'left-weyl' }, { name: 'NR', lorentz: 'right-weyl' }, { name: 'a', lorentz: 'scalar', real: true }, { name: 'b', lorentz: 'scalar', real: true }] }
+    const nd: Theory = {
+      name: 'neutral Dirac',
+      frame: 'relativistic',
+      groups: [],
+      fields: [
+        { name: 'NL', lorentz: 'left-weyl' },
+        { name: 'NR', lorentz: 'right-weyl' },
+        { name: 'a', lorentz: 'scalar', real: true },
+        { name: 'b', lorentz: 'scalar', real: true },
+      ],
+    }
     const b = classBasis(nd, 'D NL NR a b')
     expect(b.rank).toBe(1)
     expect(describeOperators(b).map((o) => o.parity)).toEqual(['even'])
@@ -127,9 +136,24 @@ describe('QED with one Dirac fermion (preset qed; Dirac bilinears under ψ → �
 })
 
 describe('P-eigen columns against the direct computation (common practice: the ±1 eigenspaces of an involution)', () => {
-  const nd: Theory = { name: 'neutral Dirac', frame: 'relativistic', groups: [], fields: [
-    { name: 'NL', lorentz: 'left-weyl' }, { name: 'NR', lorentz: 'right-weyl' }, { name: 'a', lorentz: 'scalar', real: true }, { name: 'b', lorentz: 'scalar', real: true }] }
-  const cases: [Theory, string][] = [[photons, 'A_L^2 A_R^2'], [scalars(['a', 'b', 'c', 'd', 'e']), 'D^4 a b c d e'], [qed, 'eL eL* eR eR*'], [qed, 'D^4 eL eL* eR eR*'], [nd, 'D NL NR a b']]
+  const nd: Theory = {
+    name: 'neutral Dirac',
+    frame: 'relativistic',
+    groups: [],
+    fields: [
+      { name: 'NL', lorentz: 'left-weyl' },
+      { name: 'NR', lorentz: 'right-weyl' },
+      { name: 'a', lorentz: 'scalar', real: true },
+      { name: 'b', lorentz: 'scalar', real: true },
+    ],
+  }
+  const cases: [Theory, string][] = [
+    [photons, 'A_L^2 A_R^2'],
+    [scalars(['a', 'b', 'c', 'd', 'e']), 'D^4 a b c d e'],
+    [qed, 'eL eL* eR eR*'],
+    [qed, 'D^4 eL eL* eR eR*'],
+    [nd, 'D NL NR a b'],
+  ]
   it.each(cases)('%s %s: same P-even/P-odd counts with and without the P-eigen choice', (t, key) => {
     const direct = classBasis(t, key, { priorities: { preferParity: false } })
     const eigen = classBasis(t, key)
@@ -157,7 +181,11 @@ describe('SMEFT (Grzadkowski, Iskrzyński, Misiak & Rosiek, JHEP 10 (2010) 085)'
     expect(fermionic.length).toBeGreaterThan(0)
     for (const c of fermionic) {
       expect([c.pEven, c.pOdd, c.parityImageKey]).toEqual([null, null, null])
-      expect(c.parityReason).toMatch(new RegExp(`^P is not defined on class ${c.key.replace(/[*^]/g, '\\$&')}: (Q|u|d|L|e)\\*? has no parity partner \\(no field of opposite chirality with identical gauge and discrete charges\\)$`))
+      expect(c.parityReason).toMatch(
+        new RegExp(
+          `^P is not defined on class ${c.key.replace(/[*^]/g, '\\$&')}: (Q|u|d|L|e)\\*? has no parity partner \\(no field of opposite chirality with identical gauge and discrete charges\\)$`,
+        ),
+      )
       expect(c.operators.every((o) => o.parity === null)).toBe(true)
     }
   })

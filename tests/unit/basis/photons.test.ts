@@ -8,7 +8,8 @@ import { solve } from '../../../server/engine/finite/matrix'
 import { reconstructRational } from '../../../server/engine/finite/rationalReconstruction'
 
 const photons = {
-  name: 'photons', frame: 'relativistic' as const,
+  name: 'photons',
+  frame: 'relativistic' as const,
   groups: [{ name: 'QED', type: 'U1' as const, gauge: true }],
   fields: [{ name: 'F', lorentz: 'field-strength' as const, gaugeOf: 'QED' }],
 }
@@ -22,7 +23,17 @@ function target(helicities: (-1 | 1)[], op: Op, label: string): AmplitudeTarget 
       if (map.some((m, i) => m !== i)) return 0 // already fully symmetrised below; count once
       const ref: [number, number] = [3, 7]
       const fs = helicities.map((h, leg) => fieldStrength(F, pt.kin, leg, h, ref))
-      return permutations4().reduce((s, p) => F.add(s, op(F, p.map((i) => fs[i]!))), 0)
+      return permutations4().reduce(
+        (s, p) =>
+          F.add(
+            s,
+            op(
+              F,
+              p.map((i) => fs[i]!),
+            ),
+          ),
+        0,
+      )
     },
   }
 }
@@ -54,7 +65,10 @@ describe('photons only (Euler & Heisenberg, Z. Phys. 98 (1936) 714)', () => {
   it('F^{μν}F_{νρ}F^{ρσ}F_{σμ} = ½(FF)² + ¼(FF̃)² on shell (common practice), via exact rewrite', () => {
     // In each helicity class the chain, (FF)² and (FF̃)² are multiples of the one kept
     // operator; solve chain = a (FF)² + b (FF̃)² from the two independent classes.
-    const rows = [['F_L^4', [-1, -1, -1, -1]], ['F_L^2 F_R^2', [-1, -1, 1, 1]]] as const
+    const rows = [
+      ['F_L^4', [-1, -1, -1, -1]],
+      ['F_L^2 F_R^2', [-1, -1, 1, 1]],
+    ] as const
     const [c1, c2] = rows.map(([key, hel]) => ({
       chain: coefficient(key, [...hel], CHAIN, 'chain'),
       ff: coefficient(key, [...hel], FF2, '(FF)^2'),
@@ -95,7 +109,9 @@ describe('photons only (Euler & Heisenberg, Z. Phys. 98 (1936) 714)', () => {
   })
   it('rewriting an amplitude with a factor i fails loudly, naming the class', () => {
     const mixed: Op = (F, t) => F.mul(contract(F, t[0]!, t[1]!), contract(F, t[2]!, dual(F, t[3]!)))
-    expect(() => rewriteOperator(classBasis(photons, 'F_L^4'), target([-1, -1, -1, -1], mixed, 'mixed'))).toThrow(/^In the class F_L\^4, a coefficient of the rewrite is not a fraction with numerator and denominator up to \d+ \(product up to \d+\); an operator with a factor i/)
+    expect(() => rewriteOperator(classBasis(photons, 'F_L^4'), target([-1, -1, -1, -1], mixed, 'mixed'))).toThrow(
+      /^In the class F_L\^4, a coefficient of the rewrite is not a fraction with numerator and denominator up to \d+ \(product up to \d+\); an operator with a factor i/,
+    )
   })
 })
 

@@ -69,9 +69,11 @@ describe('SMEFT one flavor (Grzadkowski, Iskrzynski, Misiak, Rosiek, JHEP 10 (20
     const h6 = d6.classes.find((c) => c.key === 'H^3 H*^3')!
     expect(h6.operators[0]!.latex).toBe('H^{i}\\,H^{j}\\,H^{k}\\,{H^{\\dagger}}_{i}\\,{H^{\\dagger}}_{j}\\,{H^{\\dagger}}_{k}')
     expect(h6.operators[0]!.hermitian).toBe(true)
-    for (const d of [d5, d6]) for (const c of d.classes) for (const o of c.operators) {
-      expect(() => katex.renderToString(o.latex, { throwOnError: true })).not.toThrow()
-    }
+    for (const d of [d5, d6])
+      for (const c of d.classes)
+        for (const o of c.operators) {
+          expect(() => katex.renderToString(o.latex, { throwOnError: true })).not.toThrow()
+        }
     expect(report.note).toContain('terms proportional to the equations of motion move into other classes')
   })
 })
@@ -89,7 +91,12 @@ describe('four-component forms (Dirac bilinears as in Grzadkowski et al., Tables
   })
   it('vector currents (Q_ee, Q_Hl(1)), dipole tensors (Q_eB) and scalar bilinears (Q_eH)', () => {
     expect(op('e^2 e*^2')[0]!.latex4).toBe('({\\bar{e}}\\gamma^{\\mu}{e})\\,({\\bar{e}}\\gamma_{\\mu}{e})')
-    expect(op('D L L* H H*').map((o) => o.latex4!.slice(0, 40))).toEqual(Array(2).fill('({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{i})\\,(D_{\\mu}H)').map((s, i) => (i === 0 ? s : '({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{j})\\,(D_{\\mu}H)')).map((s) => s.slice(0, 40)))
+    expect(op('D L L* H H*').map((o) => o.latex4!.slice(0, 40))).toEqual(
+      Array(2)
+        .fill('({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{i})\\,(D_{\\mu}H)')
+        .map((s, i) => (i === 0 ? s : '({\\bar{L}}_{i}\\gamma^{\\mu}{L}^{j})\\,(D_{\\mu}H)'))
+        .map((s) => s.slice(0, 40)),
+    )
     expect(op('B_L L e* H*')[0]!.latex4).toBe('({\\bar{e}}\\sigma^{\\mu\\nu}{L}^{i})\\,{B}_{\\mu\\nu}\\,{H^{\\dagger}}_{i}')
     expect(op('L* e H^2 H*')[0]!.latex4).toBe('({\\bar{L}}_{i}{e})\\,H^{i}\\,H^{j}\\,{H^{\\dagger}}_{j}')
   })

@@ -17,11 +17,12 @@ describe('spinor kinematics (Elvang & Huang, Scattering Amplitudes, CUP 2015, ch
     const rng = new SeededRandom(3)
     for (const n of [4, 5, 7]) {
       const k = randomKinematics(F, rng, n)
-      for (const a of [0, 1]) for (const b of [0, 1]) {
-        let s = 0
-        for (let i = 0; i < n; i++) s = F.add(s, F.mul(k.lam[i]![a]!, k.lamt[i]![b]!))
-        expect(s).toBe(0)
-      }
+      for (const a of [0, 1])
+        for (const b of [0, 1]) {
+          let s = 0
+          for (let i = 0; i < n; i++) s = F.add(s, F.mul(k.lam[i]![a]!, k.lamt[i]![b]!))
+          expect(s).toBe(0)
+        }
       // Σ_j ⟨1j⟩[j2] = 0 (momentum conservation sandwiched)
       let t = 0
       for (let j = 0; j < n; j++) t = F.add(t, F.mul(k.angle[0]![j]!, k.square[j]![1]!))
@@ -54,12 +55,31 @@ describe('structures (common practice)', () => {
     expect(suStructures('c', 3, ['fund', 'anti'])).toHaveLength(1)
     expect(suStructures('c', 3, ['fund', 'fund'])).toHaveLength(0)
     const [d] = suStructures('c', 3, ['fund', 'anti'])
-    expect(evaluateSu(F, d!, [[1, 2, 3], [4, 5, 6]])).toBe(32) // δ^i_j u^i v_j = 4+10+18
+    expect(
+      evaluateSu(F, d!, [
+        [1, 2, 3],
+        [4, 5, 6],
+      ]),
+    ).toBe(32) // δ^i_j u^i v_j = 4+10+18
     const [e] = suStructures('c', 3, ['fund', 'fund', 'fund'])
-    expect(evaluateSu(F, e!, [[1, 0, 0], [0, 1, 0], [0, 0, 1]])).toBe(1) // ε_123 = 1
+    expect(
+      evaluateSu(F, e!, [
+        [1, 0, 0],
+        [0, 1, 0],
+        [0, 0, 1],
+      ]),
+    ).toBe(1) // ε_123 = 1
   })
   it('identical-leg permutations carry Fermi signs', () => {
-    const ps = basisSpecies({ name: 'x', frame: 'relativistic', groups: [], fields: [{ name: 'psi', lorentz: 'left-weyl' }, { name: 'phi', lorentz: 'scalar', real: true }] })
+    const ps = basisSpecies({
+      name: 'x',
+      frame: 'relativistic',
+      groups: [],
+      fields: [
+        { name: 'psi', lorentz: 'left-weyl' },
+        { name: 'phi', lorentz: 'scalar', real: true },
+      ],
+    })
     const c = parseClassKey(ps, 'psi^2 phi^2')
     const perms = identicalLegPermutations(c.legs)
     expect(perms).toHaveLength(4)
@@ -83,7 +103,11 @@ describe('fast δ-chain evaluation agrees with explicit index sums (common pract
     const { evaluateSuBrute, randomSuWave } = await import('../../../server/engine/basis/gaugeStructures')
     const rng = new SeededRandom(11)
     const draw = () => rng.below(F.p)
-    for (const kinds of [['adj', 'adj', 'adj', 'adj'], ['fund', 'adj', 'anti', 'adj', 'fund', 'anti'], ['fund', 'fund', 'anti', 'anti']] as const) {
+    for (const kinds of [
+      ['adj', 'adj', 'adj', 'adj'],
+      ['fund', 'adj', 'anti', 'adj', 'fund', 'anti'],
+      ['fund', 'fund', 'anti', 'anti'],
+    ] as const) {
       const ss = suStructures('c', 3, [...kinds])
       expect(ss.length).toBeGreaterThan(1)
       for (const s of ss) {

@@ -14,7 +14,12 @@ import { PrimeField, workingPrimes } from '../../../server/engine/finite/primeFi
 // same points, every pair. Fermi signs, ε orderings and bracket swaps all enter the plan.
 const F = new PrimeField(workingPrimes(1)[0]!)
 const smeft = findPreset('smeft')!.theory as Theory
-const triplet = parseTheory({ name: 'triplet', frame: 'relativistic', groups: [{ name: 'weak', type: 'SU', n: 2, gauge: true }], fields: [{ name: 'Xi', lorentz: 'scalar', real: true, reps: { weak: [2] } }] })
+const triplet = parseTheory({
+  name: 'triplet',
+  frame: 'relativistic',
+  groups: [{ name: 'weak', type: 'SU', n: 2, gauge: true }],
+  fields: [{ name: 'Xi', lorentz: 'scalar', real: true, reps: { weak: [2] } }],
+})
 const sextet = parseTheory({ name: 'sextet', frame: 'relativistic', groups: [{ name: 'c', type: 'SU', n: 3, gauge: true }], fields: [{ name: 'S', lorentz: 'scalar', reps: { c: [2, 0] } }] })
 
 function pairsOf(t: Theory, key: string) {
@@ -33,8 +38,16 @@ function rowsBothWays(t: Theory, key: string) {
 describe('symmetrisation over identical legs, planned once per class', () => {
   // SMEFT classes with identical fermions (Fermi signs), ε of SU(2) and SU(3), adjoints and derivatives.
   const cases: [Theory, string][] = [
-    [smeft, 'L^2 H^2'], [smeft, 'Q^3 L'], [smeft, 'W_L^3'], [smeft, 'D^2 H^2 H*^2'], [smeft, 'e^2 e*^2'],
-    [smeft, 'W_L^2 H H*'], [triplet, 'Xi^4'], [triplet, 'D^2 Xi^4'], [triplet, 'Xi^5'], [sextet, 'S^2 S*^2'],
+    [smeft, 'L^2 H^2'],
+    [smeft, 'Q^3 L'],
+    [smeft, 'W_L^3'],
+    [smeft, 'D^2 H^2 H*^2'],
+    [smeft, 'e^2 e*^2'],
+    [smeft, 'W_L^2 H H*'],
+    [triplet, 'Xi^4'],
+    [triplet, 'D^2 Xi^4'],
+    [triplet, 'Xi^5'],
+    [sextet, 'S^2 S*^2'],
   ]
   it.each(cases.map(([t, k]) => [t.name, k, t] as const))('%s, class %s: the same values as the direct sum', (_n, key, t) => {
     const { planned, direct, plan } = rowsBothWays(t, key)

@@ -8,7 +8,11 @@ vi.mock('../../../server/engine/counting/countOperators', async (orig) => {
     ...real,
     countOperators: (t: Parameters<typeof real.countOperators>[0], o: Parameters<typeof real.countOperators>[1]) => {
       const r = real.countOperators(t, o)
-      for (const d of r.byDimension) if (d.classes['phi^6'] !== undefined) { d.classes['phi^6'] = 2; d.operators += 1 }
+      for (const d of r.byDimension)
+        if (d.classes['phi^6'] !== undefined) {
+          d.classes['phi^6'] = 2
+          d.operators += 1
+        }
       return r
     },
   }

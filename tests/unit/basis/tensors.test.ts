@@ -20,7 +20,16 @@ describe('SU(N) irreps written as traceless tensors [α; β] (Fulton & Harris, R
     expect(irrepShape(3, [1, 1])).toEqual({ upper: [1], lower: [1] }) // octet
   })
   // Dimensions by the Weyl dimension formula, e.g. Slansky, Phys. Rep. 79 (1981) 1, tables.
-  const cases: [number, number[], number][] = [[5, [0, 1, 0, 0], 10], [3, [2, 0], 6], [2, [3], 4], [2, [4], 5], [3, [2, 1], 15], [3, [3, 0], 10], [4, [0, 2, 0], 20], [4, [1, 0, 1], 15]]
+  const cases: [number, number[], number][] = [
+    [5, [0, 1, 0, 0], 10],
+    [3, [2, 0], 6],
+    [2, [3], 4],
+    [2, [4], 5],
+    [3, [2, 1], 15],
+    [3, [3, 0], 10],
+    [4, [0, 2, 0], 20],
+    [4, [1, 0, 1], 15],
+  ]
   it.each(cases)('random tensors of SU(%i) %j span exactly the irrep (dimension %i)', (n, dynkin, dim) => {
     const rng = new SeededRandom(7)
     const rows = Array.from({ length: dim + 6 }, () => randomTensorWave(F, n, irrepShape(n, dynkin), () => rng.below(F.p)).data)
@@ -31,9 +40,16 @@ describe('SU(N) irreps written as traceless tensors [α; β] (Fulton & Harris, R
 describe('explicit bases with higher SU(N) representations agree with the Hilbert series (tally)', () => {
   // Invariant counts by tensor-product decomposition, checked against the counting engine,
   // whose products and plethysms are checked against LiE (tests/unit/group).
-  const su5 = { name: 'su5', frame: 'relativistic' as const, groups: [SU('G', 5)], fields: [
-    { name: 'T', lorentz: 'left-weyl' as const, reps: { G: [0, 1, 0, 0] } }, { name: 'F', lorentz: 'left-weyl' as const, reps: { G: [0, 0, 0, 1] } },
-    { name: 'H', lorentz: 'scalar' as const, reps: { G: [1, 0, 0, 0] } }] }
+  const su5 = {
+    name: 'su5',
+    frame: 'relativistic' as const,
+    groups: [SU('G', 5)],
+    fields: [
+      { name: 'T', lorentz: 'left-weyl' as const, reps: { G: [0, 1, 0, 0] } },
+      { name: 'F', lorentz: 'left-weyl' as const, reps: { G: [0, 0, 0, 1] } },
+      { name: 'H', lorentz: 'scalar' as const, reps: { G: [1, 0, 0, 0] } },
+    ],
+  }
   it('SU(5) Yukawas: ε_{ijklm} T^{ij} T^{kl} H^m and T^{ij} F_i H*_j, one each (10⊗10⊗5 ∋ 1 once, 10⊗5̄⊗5̄ ∋ 1 once)', () => {
     const tth = classBasis(su5, 'T^2 H')
     expect(tth.rank).toBe(1)
@@ -53,7 +69,9 @@ describe('explicit bases with higher SU(N) representations agree with the Hilber
     expect(classBasis(quartet, 'Q^2 Q*^2').rank).toBe(2)
   })
   it('classes beyond the evaluation budget are refused with the numbers (their count stays with the Hilbert series)', () => {
-    expect(() => classBasis(quartet, 'Q^4')).toThrow('class Q^4: writing it out needs about 3.3e+7 index-loop terms (147 candidate operators, 24 permutations of identical fields, 64 terms per contraction)')
+    expect(() => classBasis(quartet, 'Q^4')).toThrow(
+      'class Q^4: writing it out needs about 3.3e+7 index-loop terms (147 candidate operators, 24 permutations of identical fields, 64 terms per contraction)',
+    )
     expect(() => classBasis(sextet, 'S^4 S*')).toThrow('beyond the budget of 1e+7 for fields in higher representations')
   })
   it('a real field needs equal upper and lower shapes: a real bidoublet is counted, not written out', () => {

@@ -16,7 +16,10 @@ describe('conjugate classes in one entry', () => {
   })
 
   it('a real scalar is its own conjugate (real scalar: φ^6 alone)', () => {
-    expect(pairConjugateClasses({ 'phi^6': 1, 'D^2 phi^4': 1 })).toEqual([{ key: 'phi^6', conjugate: null, count: 1 }, { key: 'D^2 phi^4', conjugate: null, count: 1 }])
+    expect(pairConjugateClasses({ 'phi^6': 1, 'D^2 phi^4': 1 })).toEqual([
+      { key: 'phi^6', conjugate: null, count: 1 },
+      { key: 'D^2 phi^4', conjugate: null, count: 1 },
+    ])
   })
 
   it('SMEFT dimension 6, N_f = 1: the counts page shows as many classes as the board, and the same real parameters (84, Henning, Lu, Melia & Murayama, JHEP 08 (2017) 016)', () => {

@@ -1,12 +1,10 @@
 import { describe, expect, it } from 'vitest'
-import {
-  FINGERPRINT_VERSION, UNRECORDED_FINGERPRINT_VERSION, reproducesStoredPoints, storedFingerprintVersion, typedRewritePlan,
-} from '../../../server/engine/board/fingerprintVersion'
+import { FINGERPRINT_VERSION, UNRECORDED_FINGERPRINT_VERSION, reproducesStoredPoints, storedFingerprintVersion, typedRewritePlan } from '../../../server/engine/board/fingerprintVersion'
 import { typedFingerprint, typedFingerprints } from '../../../server/engine/board/typedOperator'
 import { buildBasis } from '../../../server/engine/basis/buildBasis'
 import { findPreset } from '../../../shared/presets/index'
 
-describe('which code a stored basis\'s fingerprints came from', () => {
+describe("which code a stored basis's fingerprints came from", () => {
   it('reads an unrecorded (null) version as version 1, which the current code reproduces', () => {
     expect(FINGERPRINT_VERSION).toBe(1)
     expect(UNRECORDED_FINGERPRINT_VERSION).toBe(1)
@@ -33,7 +31,10 @@ describe('version 1 sample points (change these only together with FINGERPRINT_V
     // Pinned from this commit's code (common practice: a golden value guarding a stored format).
     expect(f.primes).toEqual([67108837, 67108777])
     expect(f.values.map((v) => v.length)).toEqual([20, 20])
-    expect(f.values.map((v) => v.slice(0, 4))).toEqual([[5768553, 53492818, 47619844, 59648719], [12233849, 61331506, 32386887, 24519004]])
+    expect(f.values.map((v) => v.slice(0, 4))).toEqual([
+      [5768553, 53492818, 47619844, 59648719],
+      [12233849, 61331506, 32386887, 24519004],
+    ])
   })
 
   it('every kept and set-aside operator of a real basis is fingerprinted again from its stored text exactly (the recompute path)', () => {
@@ -42,7 +43,11 @@ describe('version 1 sample points (change these only together with FINGERPRINT_V
     let compared = 0
     for (const c of classes) {
       const ops = [...c.operators, ...(c.alternatives ?? [])]
-      const again = typedFingerprints(smeft, c.key, ops.map((o) => o.text))
+      const again = typedFingerprints(
+        smeft,
+        c.key,
+        ops.map((o) => o.text),
+      )
       ops.forEach((o, i) => expect(again[i], `${c.key}: ${o.text}`).toEqual(o.fingerprint))
       compared += ops.length
     }

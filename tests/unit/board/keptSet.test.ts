@@ -28,7 +28,18 @@ const op = (fingerprint: Fingerprint | null, column: ClassOperator['column'] = '
 
 describe('the kept set of a class', () => {
   it('finds the first kept operator that is a combination of those before it', () => {
-    const ops = [op(combo([[a, 1, 1]])), op(combo([[b, 1, 1]])), op(combo([[c, 1, 1]])), op(combo([[a, 2, 1], [c, -1, 7]])), op(combo([[b, 1, 1]]))]
+    const ops = [
+      op(combo([[a, 1, 1]])),
+      op(combo([[b, 1, 1]])),
+      op(combo([[c, 1, 1]])),
+      op(
+        combo([
+          [a, 2, 1],
+          [c, -1, 7],
+        ]),
+      ),
+      op(combo([[b, 1, 1]])),
+    ]
     expect(firstRedundant(ops.slice(0, 3), 3)).toBeNull()
     expect(firstRedundant(ops, 3)).toBe(3)
     expect(firstRedundant([ops[0]!, ops[1]!, ops[4]!], 3)).toBe(2)
@@ -47,7 +58,7 @@ describe('the kept set of a class', () => {
     expect(coverageOf('X', ops, 2)).toEqual({ classKey: 'X', rank: 1, required: 2, complete: false })
   })
 
-  it('rewrites exactly, and marks a rewrite whose coefficient is beyond the fingerprints\' reach instead of failing', () => {
+  it("rewrites exactly, and marks a rewrite whose coefficient is beyond the fingerprints' reach instead of failing", () => {
     const kept = op(combo([[a, 1, 1]]))
     const small = op(combo([[a, -7, 45]]), 'set_aside')
     expect(rewriteOnto([kept, small], small.id)).toEqual({ exact: true, vanishes: false, terms: [{ operatorId: kept.id, latex: kept.latex, coefficient: '-7/45' }] })

@@ -6,7 +6,11 @@ describe('orders of board operators under a counting rule', () => {
   it('the mass-ratio rule gives dimension − 4 for relativistic classes (common practice)', () => {
     const smeft = findPreset('smeft')!.theory as never
     const orders = ruleOrders(smeft, DEFAULT_RULE.name, [
-      { id: 1, classKey: 'H^3 H*^3' }, { id: 2, classKey: 'D^2 H^2 H*^2' }, { id: 3, classKey: 'G_L^3' }, { id: 4, classKey: 'L^2 H^2' }, { id: 5, classKey: 'G_L^2 G_R^2' },
+      { id: 1, classKey: 'H^3 H*^3' },
+      { id: 2, classKey: 'D^2 H^2 H*^2' },
+      { id: 3, classKey: 'G_L^3' },
+      { id: 4, classKey: 'L^2 H^2' },
+      { id: 5, classKey: 'G_L^2 G_R^2' },
     ])
     expect(orders).toEqual({ 1: '2', 2: '2', 3: '2', 4: '1', 5: '4' })
   })

@@ -3,7 +3,17 @@ import { ComputeLane } from '../../../server/utils/compute/computeLane'
 import { ComputeBudgetError, ComputeBusyError } from '../../../server/utils/compute/computeErrors'
 import { ResultCache, canonicalJson } from '../../../server/utils/compute/resultCache'
 
-const LADDER = { doc: { scales: [{ name: 'E', value: '10', unit: 'GeV' }, { name: 'M', value: '1', unit: 'TeV' }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }], orders: [1, 2] }, frame: 'relativistic' }
+const LADDER = {
+  doc: {
+    scales: [
+      { name: 'E', value: '10', unit: 'GeV' },
+      { name: 'M', value: '1', unit: 'TeV' },
+    ],
+    parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }],
+    orders: [1, 2],
+  },
+  frame: 'relativistic',
+}
 
 describe('compute lane (real threads)', () => {
   it('computes in a thread; over the time budget the thread is ended and the message says so; the next task still runs', async () => {
@@ -11,7 +21,7 @@ describe('compute lane (real threads)', () => {
     // 1 ms cannot even start the thread: the budget must fire.
     await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(ComputeBudgetError)
     await expect(lane.run('ladder', LADDER, { user: 'u', budgetMs: 1, what: 'This scale ladder' })).rejects.toThrow(/takes longer than its budget of 0.001 s/)
-    const ok = await lane.run('ladder', LADDER, { user: 'u', budgetMs: 30_000, what: 'This scale ladder' }) as { parameters: { exact: string }[] }
+    const ok = (await lane.run('ladder', LADDER, { user: 'u', budgetMs: 30_000, what: 'This scale ladder' })) as { parameters: { exact: string }[] }
     // ε = 10 GeV / 1 TeV = 1/100 exactly (arithmetic).
     expect(ok.parameters[0]!.exact).toBe('1/100')
     expect(lane.stats.threads).toBeLessThanOrEqual(1)

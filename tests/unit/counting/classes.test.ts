@@ -16,9 +16,7 @@ const scalar = buildTheoryModel(parseTheory(findPreset('real-scalar')!.theory))
 
 describe('class keys', () => {
   it('species order: fields in file order, each followed by its conjugate, field strengths as chiral halves', () => {
-    expect(smeft.species.map((s) => s.label)).toEqual([
-      'Q', 'Q*', 'u', 'u*', 'd', 'd*', 'L', 'L*', 'e', 'e*', 'H', 'H*', 'G_L', 'G_R', 'W_L', 'W_R', 'B_L', 'B_R',
-    ])
+    expect(smeft.species.map((s) => s.label)).toEqual(['Q', 'Q*', 'u', 'u*', 'd', 'd*', 'L', 'L*', 'e', 'e*', 'H', 'H*', 'G_L', 'G_R', 'W_L', 'W_R', 'B_L', 'B_R'])
   })
 
   it('D^k first, powers as ^n, single spaces; countsOfClassKey inverts classKeyOfCounts', () => {
@@ -27,9 +25,17 @@ describe('class keys', () => {
     expect(classKey(smeft, counts, 2)).toBe('D^2 H^2 H*^2')
     expect(classKey(smeft, parseClassKey(smeft, 'G_L^3').counts, 0)).toBe('G_L^3')
     expect(classKey(smeft, parseClassKey(smeft, 'H* D L* L H').counts, 1)).toBe('D L L* H H*')
-    expect(() => parseClassKey(smeft, 'D^2 X^2')).toThrow('The class "D^2 X^2" names "X", which is not a field of this theory (its fields are Q, Q*, u, u*, d, d*, L, L*, e, e*, H, H*, G_L, G_R, W_L, W_R, B_L, B_R)')
+    expect(() => parseClassKey(smeft, 'D^2 X^2')).toThrow(
+      'The class "D^2 X^2" names "X", which is not a field of this theory (its fields are Q, Q*, u, u*, d, d*, L, L*, e, e*, H, H*, G_L, G_R, W_L, W_R, B_L, B_R)',
+    )
     expect(() => parseClassKey(smeft, 'D^0 H')).toThrow('Cannot read "D^0" in the class "D^0 H"')
-    expect(readClassKey('H D H* D^2')).toEqual({ derivatives: 3, blocks: [{ label: 'H', power: 1 }, { label: 'H*', power: 1 }] })
+    expect(readClassKey('H D H* D^2')).toEqual({
+      derivatives: 3,
+      blocks: [
+        { label: 'H', power: 1 },
+        { label: 'H*', power: 1 },
+      ],
+    })
   })
 
   it('enumerates dimension-6 SMEFT classes passing the selection rules (hypercharge, triality, Lorentz parity; common practice)', () => {
@@ -46,26 +52,56 @@ describe('class keys', () => {
 
   it('real scalar, dimensions 5..6: the field contents and their allowed derivative numbers (Lorentz parity: k even)', () => {
     const contents = enumerateFieldContents(scalar, 5, 6).map((c) => [c.counts[0], c.derivatives])
-    expect(contents).toEqual([[1, [4]], [2, [4]], [3, [2]], [4, [2]], [5, [0]], [6, [0]]])
+    expect(contents).toEqual([
+      [1, [4]],
+      [2, [4]],
+      [3, [2]],
+      [4, [2]],
+      [5, [0]],
+      [6, [0]],
+    ])
     expect(() => enumerateFieldContents(scalar, 7, 6)).toThrow('The dimensions must be whole numbers with 1 ≤ lowest ≤ highest ≤ 30, not 7 to 6')
   })
 })
 
 describe('Lorentz factor and cycle types', () => {
   it('cycle types of S_3 with class sizes 2, 3, 1 (Sagan, The Symmetric Group, Prop. 1.1.1)', () => {
-    expect(cycleTypes(3).map((t) => [t.parts, t.size, t.sign])).toEqual([[[3], 2, 1], [[2, 1], 3, -1], [[1, 1, 1], 1, 1]])
+    expect(cycleTypes(3).map((t) => [t.parts, t.size, t.sign])).toEqual([
+      [[3], 2, 1],
+      [[2, 1], 3, -1],
+      [[1, 1, 1], 1, 1],
+    ])
     expect(() => cycleTypes(19)).toThrow('Operators with more than 18 copies of one field are beyond the counting engine (here 19)')
   })
 
   it('φ^2 keeps only the mass term: Sym^2 of the scalar module times 1/P gives 1 at D^0 and nothing at D^2, D^4 (common practice: ∂φ∂φ ~ φ□φ = 0)', () => {
-    const a = lorentzSingletSeries([{ type: 'S', cycle: 1 }, { type: 'S', cycle: 1 }], 4)
+    const a = lorentzSingletSeries(
+      [
+        { type: 'S', cycle: 1 },
+        { type: 'S', cycle: 1 },
+      ],
+      4,
+    )
     const b = lorentzSingletSeries([{ type: 'S', cycle: 2 }], 4)
     expect(a.map((x, i) => (x + b[i]!) / 2)).toEqual([1, 0, 0, 0, 0])
   })
 
   it('F_L^3: the Lorentz-symmetric cube has no singlet, the antisymmetric one has one (used with f^abc; common practice)', () => {
-    const one = lorentzSingletSeries([{ type: 'FL', cycle: 1 }, { type: 'FL', cycle: 1 }, { type: 'FL', cycle: 1 }], 0)[0]!
-    const two = lorentzSingletSeries([{ type: 'FL', cycle: 2 }, { type: 'FL', cycle: 1 }], 0)[0]!
+    const one = lorentzSingletSeries(
+      [
+        { type: 'FL', cycle: 1 },
+        { type: 'FL', cycle: 1 },
+        { type: 'FL', cycle: 1 },
+      ],
+      0,
+    )[0]!
+    const two = lorentzSingletSeries(
+      [
+        { type: 'FL', cycle: 2 },
+        { type: 'FL', cycle: 1 },
+      ],
+      0,
+    )[0]!
     const three = lorentzSingletSeries([{ type: 'FL', cycle: 3 }], 0)[0]!
     expect((one + 3 * two + 2 * three) / 6).toBe(0)
     expect((one - 3 * two + 2 * three) / 6).toBe(1)
@@ -76,7 +112,8 @@ describe('Lorentz factor and cycle types', () => {
 describe('field-content enumeration against a brute-force oracle', () => {
   it('charge pruning keeps exactly the contents with vanishing U(1), Z_n and n-ality totals (oracle: plain enumeration with exact rational sums)', () => {
     const theory = parseTheory({
-      name: 'odd charges', frame: 'relativistic',
+      name: 'odd charges',
+      frame: 'relativistic',
       groups: [
         { name: 'SU3', type: 'SU', n: 3, gauge: true },
         { name: 'X', type: 'U1', gauge: true },
@@ -126,7 +163,18 @@ describe('Lorentz integral against the group engine (independent oracle: full ch
   type T = 'S' | 'L' | 'R' | 'FL' | 'FR'
   const base: Record<T, [number, number]> = { S: [0, 0], L: [1, 0], R: [0, 1], FL: [2, 0], FR: [0, 2] }
   const scale = (ch: Map<string, number>, c: number) =>
-    new Map([...ch].map(([k, m]) => [k.split(';').map((x) => `${Number(x) * c}`).join(';'), m] as const))
+    new Map(
+      [...ch].map(
+        ([k, m]) =>
+          [
+            k
+              .split(';')
+              .map((x) => `${Number(x) * c}`)
+              .join(';'),
+            m,
+          ] as const,
+      ),
+    )
   /** Series (per D-degree) of Π χ_type(D^c; x^c, y^c) × 1/P built from full characters. */
   function oracle(factors: { type: T; cycle: number }[], K: number): number[] {
     let acc: Map<string, number>[] = [new Map([['0;0', 1]])]
@@ -159,11 +207,46 @@ describe('Lorentz integral against the group engine (independent oracle: full ch
   }
 
   it.each([
-    [[{ type: 'S', cycle: 1 }, { type: 'S', cycle: 1 }, { type: 'S', cycle: 2 }], 4],
-    [[{ type: 'L', cycle: 1 }, { type: 'R', cycle: 1 }, { type: 'S', cycle: 1 }], 4],
-    [[{ type: 'L', cycle: 2 }, { type: 'L', cycle: 1 }, { type: 'FR', cycle: 1 }], 3],
-    [[{ type: 'FL', cycle: 2 }, { type: 'FR', cycle: 2 }], 4],
-    [[{ type: 'S', cycle: 3 }, { type: 'L', cycle: 1 }, { type: 'L', cycle: 1 }, { type: 'FL', cycle: 1 }], 3],
+    [
+      [
+        { type: 'S', cycle: 1 },
+        { type: 'S', cycle: 1 },
+        { type: 'S', cycle: 2 },
+      ],
+      4,
+    ],
+    [
+      [
+        { type: 'L', cycle: 1 },
+        { type: 'R', cycle: 1 },
+        { type: 'S', cycle: 1 },
+      ],
+      4,
+    ],
+    [
+      [
+        { type: 'L', cycle: 2 },
+        { type: 'L', cycle: 1 },
+        { type: 'FR', cycle: 1 },
+      ],
+      3,
+    ],
+    [
+      [
+        { type: 'FL', cycle: 2 },
+        { type: 'FR', cycle: 2 },
+      ],
+      4,
+    ],
+    [
+      [
+        { type: 'S', cycle: 3 },
+        { type: 'L', cycle: 1 },
+        { type: 'L', cycle: 1 },
+        { type: 'FL', cycle: 1 },
+      ],
+      3,
+    ],
   ] as [{ type: T; cycle: number }[], number][])('factors %j up to D^%i', (factors, K) => {
     expect(lorentzSingletSeries(factors, K)).toEqual(oracle(factors, K))
   })
@@ -178,8 +261,29 @@ describe('SU(n) factor of one cycle type', () => {
 
   it('3 × 3 × 3 ∋ one singlet, 8 × 8 ∋ one singlet, and entry order does not matter (common practice)', () => {
     const g = new GroupIntegrator(suScheme(3))
-    expect(g.integrate([{ rep: '1,0', cycle: 1 }, { rep: '1,0', cycle: 1 }, { rep: '1,0', cycle: 1 }])).toBe(1)
-    expect(g.integrate([{ rep: '1,1', cycle: 1 }, { rep: '1,1', cycle: 1 }])).toBe(1)
-    expect(g.integrate([{ rep: '0,1', cycle: 1 }, { rep: '1,0', cycle: 2 }])).toBe(g.integrate([{ rep: '1,0', cycle: 2 }, { rep: '0,1', cycle: 1 }]))
+    expect(
+      g.integrate([
+        { rep: '1,0', cycle: 1 },
+        { rep: '1,0', cycle: 1 },
+        { rep: '1,0', cycle: 1 },
+      ]),
+    ).toBe(1)
+    expect(
+      g.integrate([
+        { rep: '1,1', cycle: 1 },
+        { rep: '1,1', cycle: 1 },
+      ]),
+    ).toBe(1)
+    expect(
+      g.integrate([
+        { rep: '0,1', cycle: 1 },
+        { rep: '1,0', cycle: 2 },
+      ]),
+    ).toBe(
+      g.integrate([
+        { rep: '1,0', cycle: 2 },
+        { rep: '0,1', cycle: 1 },
+      ]),
+    )
   })
 })

@@ -5,8 +5,7 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 
 const root = join(__dirname, '../../..')
-const run = (...args: string[]) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/count.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
+const run = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'scripts/count.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
 
 describe('count CLI', () => {
   it('prints only JSON for a preset: SMEFT, one flavor, dim 5 → 2, dim 6 → 84 (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016)', () => {
@@ -48,7 +47,10 @@ describe('count CLI', () => {
     const r = run('smeft', '--max-order', '2', '--nf', '1')
     expect(r.status).toBe(0)
     const out = JSON.parse(r.stdout)
-    expect(out.byOrder.map((o: { order: number, dimension: number, operators: number }) => [o.order, o.dimension, o.operators])).toEqual([[1, 5, 2], [2, 6, 84]])
+    expect(out.byOrder.map((o: { order: number; dimension: number; operators: number }) => [o.order, o.dimension, o.operators])).toEqual([
+      [1, 5, 2],
+      [2, 6, 84],
+    ])
     expect(out.byOrder[1].classes).toContainEqual({ key: 'H^3 H*^3', count: 1 })
   })
 
@@ -83,8 +85,11 @@ describe('basis CLI on a heavy-frame theory', () => {
     const order1 = out.byOrder.find((o: { order: number }) => o.order === 1)
     const psi = order1.classes.find((c: { key: string }) => c.key === 'psi* psi (1/m^1)')
     expect(psi.operators.map((o: { text: string }) => o.text)).toEqual(['ψ^† σ^i B^i ψ', 'ψ^† D^i D^i ψ'])
-    expect(psi.operators.every((o: { latex: string, realParameters: number }) => o.latex.startsWith('\\psi^\\dagger') && o.realParameters === 1)).toBe(true)
+    expect(psi.operators.every((o: { latex: string; realParameters: number }) => o.latex.startsWith('\\psi^\\dagger') && o.realParameters === 1)).toBe(true)
     const chi = order1.classes.find((c: { key: string }) => c.key === 'chi* chi (1/m^1)')
-    expect(chi.operators.map((o: { realParameters: number, fixedBy: { factor: number } }) => [o.realParameters, o.fixedBy.factor])).toEqual([[0, -1], [0, -1]])
+    expect(chi.operators.map((o: { realParameters: number; fixedBy: { factor: number } }) => [o.realParameters, o.fixedBy.factor])).toEqual([
+      [0, -1],
+      [0, -1],
+    ])
   })
 })

@@ -90,17 +90,36 @@ describe('bookkeeping', () => {
     expect(r.cpUnavailable).toMatch(/finite flavour group \(A4\)/)
     expect(r.byDimension[1]!.cpEven).toBeUndefined()
     expect(r.byDimension[1]!.operators).toBe(5)
-    const so10 = parseTheory({ name: 'so10', frame: 'relativistic', groups: [{ name: 'G', type: 'SO', n: 10, gauge: true }], fields: [{ name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 0, 0, 0, 1] } }] })
+    const so10 = parseTheory({
+      name: 'so10',
+      frame: 'relativistic',
+      groups: [{ name: 'G', type: 'SO', n: 10, gauge: true }],
+      fields: [{ name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 0, 0, 0, 1] } }],
+    })
     expect(countOperators(so10, { maxDim: 6 }).cpUnavailable).toBe('CP counts are not given for G = SO(10): complex conjugation is an outer automorphism of it')
-    const six = parseTheory({ name: 'six', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', n: 4, gauge: false }], fields: [{ name: 's', lorentz: 'scalar', real: true, reps: { G: [0, 1, 0] } }] })
+    const six = parseTheory({
+      name: 'six',
+      frame: 'relativistic',
+      groups: [{ name: 'G', type: 'SU', n: 4, gauge: false }],
+      fields: [{ name: 's', lorentz: 'scalar', real: true, reps: { G: [0, 1, 0] } }],
+    })
     expect(countOperators(six, { maxDim: 6 }).cpUnavailable).toMatch(/real field s in SU\(4\) \[0,1,0\]/)
   })
 
   it('a real triplet and a real octet keep the index-swap CP: H†ΣH-type and tr(S^3)-type invariants are CP-even (the twining character τ = χ_fund − 1)', () => {
     const t = parseTheory({
-      name: 'real multiplets', frame: 'relativistic',
-      groups: [{ name: 'C', type: 'SU', n: 3, gauge: false }, { name: 'W', type: 'SU', n: 2, gauge: false }, { name: 'Y', type: 'U1', gauge: false }],
-      fields: [{ name: 'S', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }, { name: 'T', lorentz: 'scalar', real: true, reps: { W: [2] } }, { name: 'H', lorentz: 'scalar', reps: { W: [1] }, charges: { Y: '1/2' } }],
+      name: 'real multiplets',
+      frame: 'relativistic',
+      groups: [
+        { name: 'C', type: 'SU', n: 3, gauge: false },
+        { name: 'W', type: 'SU', n: 2, gauge: false },
+        { name: 'Y', type: 'U1', gauge: false },
+      ],
+      fields: [
+        { name: 'S', lorentz: 'scalar', real: true, reps: { C: [1, 1] } },
+        { name: 'T', lorentz: 'scalar', real: true, reps: { W: [2] } },
+        { name: 'H', lorentz: 'scalar', reps: { W: [1] }, charges: { Y: '1/2' } },
+      ],
     })
     const d5 = countOperators(t, { maxDim: 5 }).byDimension[0]!
     // Hermitian monomials without ε^{μνρσ}, all CP-even: (H†TH)(H†H), (T·T)(H†TH), tr(S²)(H†TH),

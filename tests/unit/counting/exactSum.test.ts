@@ -18,11 +18,21 @@ describe('exact accumulation (common practice: bigint arithmetic as the oracle)'
   it('cycle multisets give the same key for the same multiset in any insertion order', () => {
     const a = new CycleMultiset(3)
     const b = new CycleMultiset(3)
-    a.add(2, 1, 1); a.add(0, 3, 1); a.add(2, 1, 1)
-    b.add(0, 3, 1); b.add(2, 1, 2); b.add(1, 4, 1); b.add(1, 4, -1)
+    a.add(2, 1, 1)
+    a.add(0, 3, 1)
+    a.add(2, 1, 1)
+    b.add(0, 3, 1)
+    b.add(2, 1, 2)
+    b.add(1, 4, 1)
+    b.add(1, 4, -1)
     expect(a.key()).toBe(b.key())
-    expect(a.list()).toEqual([[0, 3], [2, 1], [2, 1]])
-    b.add(0, 3, -1); b.add(2, 1, -2)
+    expect(a.list()).toEqual([
+      [0, 3],
+      [2, 1],
+      [2, 1],
+    ])
+    b.add(0, 3, -1)
+    b.add(2, 1, -2)
     expect(b.isEmpty()).toBe(true)
   })
 })

@@ -21,13 +21,40 @@ describe('flavour-symmetric SMEFT, U(3)^5 written as SU(3)^5 × U(1)^5 (13 group
     // chirality-flipping four-fermion operators need spurions and vanish; two δ contractions for
     // identical currents (ll, qq(1), qq(3), uu, dd), one otherwise; ee has one by the Fierz identity.
     expect(d6.classes).toEqual({
-      'W_R^3': 1, 'W_L^3': 1, 'G_R^3': 1, 'G_L^3': 1,
-      'H H* B_R^2': 1, 'H H* B_L^2': 1, 'H H* W_R B_R': 1, 'H H* W_R^2': 1, 'H H* W_L B_L': 1, 'H H* W_L^2': 1, 'H H* G_R^2': 1, 'H H* G_L^2': 1,
-      'D^2 H^2 H*^2': 2, 'H^3 H*^3': 1,
-      'D L L* H H*': 2, 'D e e* H H*': 1, 'D Q Q* H H*': 2, 'D u u* H H*': 1, 'D d d* H H*': 1,
-      'L^2 L*^2': 2, 'Q^2 Q*^2': 4, 'Q Q* L L*': 2,
-      'e^2 e*^2': 1, 'u^2 u*^2': 2, 'd^2 d*^2': 2, 'u u* e e*': 1, 'd d* e e*': 1, 'u u* d d*': 2,
-      'L L* e e*': 1, 'u u* L L*': 1, 'd d* L L*': 1, 'Q Q* e e*': 1, 'Q Q* u u*': 2, 'Q Q* d d*': 2,
+      'W_R^3': 1,
+      'W_L^3': 1,
+      'G_R^3': 1,
+      'G_L^3': 1,
+      'H H* B_R^2': 1,
+      'H H* B_L^2': 1,
+      'H H* W_R B_R': 1,
+      'H H* W_R^2': 1,
+      'H H* W_L B_L': 1,
+      'H H* W_L^2': 1,
+      'H H* G_R^2': 1,
+      'H H* G_L^2': 1,
+      'D^2 H^2 H*^2': 2,
+      'H^3 H*^3': 1,
+      'D L L* H H*': 2,
+      'D e e* H H*': 1,
+      'D Q Q* H H*': 2,
+      'D u u* H H*': 1,
+      'D d d* H H*': 1,
+      'L^2 L*^2': 2,
+      'Q^2 Q*^2': 4,
+      'Q Q* L L*': 2,
+      'e^2 e*^2': 1,
+      'u^2 u*^2': 2,
+      'd^2 d*^2': 2,
+      'u u* e e*': 1,
+      'd d* e e*': 1,
+      'u u* d d*': 2,
+      'L L* e e*': 1,
+      'u u* L L*': 1,
+      'd d* L L*': 1,
+      'Q Q* e e*': 1,
+      'Q Q* u u*': 2,
+      'Q Q* d d*': 2,
     })
   })
 
@@ -55,7 +82,9 @@ describe('flavour-symmetric SMEFT, U(3)^5 written as SU(3)^5 × U(1)^5 (13 group
       caught = e
     }
     expect(caught).toBeInstanceOf(EngineInputError)
-    expect((caught as Error).message).toMatch(/^theory "SMEFT, U\(3\)\^5 flavour symmetry" up to dimension 8 needs an estimated \d\.\d\de\+\d+ cycle-index terms over \d+ field contents, above the budget of 1\.0e\+3; lower the maximum dimension, or declare fewer fields or groups$/)
+    expect((caught as Error).message).toMatch(
+      /^theory "SMEFT, U\(3\)\^5 flavour symmetry" up to dimension 8 needs an estimated \d\.\d\de\+\d+ cycle-index terms over \d+ field contents, above the budget of 1\.0e\+3; lower the maximum dimension, or declare fewer fields or groups$/,
+    )
   })
 
   it('SMEFT with 6 flavours to dimension 16 stays inside the default budget (the referee cases of issue 18 counted)', () => {

@@ -14,23 +14,43 @@ const classesAt = (t: ReturnType<typeof theory>, dim: number) => countOperators(
 
 describe('isomorphic groups count alike (two root systems, two weight engines; Slansky, Phys. Rep. 79 (1981) 1, Table 2: B2 = C2, D3 = A3)', () => {
   it('SO(5) with a real vector, a Weyl spinor and its field strength = Sp(4) with the real 5, the 4 and its field strength, to dimension 8', () => {
-    const so5 = theory([{ name: 'G', type: 'SO', n: 5, gauge: true }], [
-      { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [1, 0] } }, { name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 1] } }, { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
-    ])
-    const sp4 = theory([{ name: 'G', type: 'Sp', n: 4, gauge: true }], [
-      { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [0, 1] } }, { name: 'psi', lorentz: 'left-weyl', reps: { G: [1, 0] } }, { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
-    ])
+    const so5 = theory(
+      [{ name: 'G', type: 'SO', n: 5, gauge: true }],
+      [
+        { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [1, 0] } },
+        { name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 1] } },
+        { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
+      ],
+    )
+    const sp4 = theory(
+      [{ name: 'G', type: 'Sp', n: 4, gauge: true }],
+      [
+        { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [0, 1] } },
+        { name: 'psi', lorentz: 'left-weyl', reps: { G: [1, 0] } },
+        { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
+      ],
+    )
     expect(totals(so5, 8)).toEqual(totals(sp4, 8))
     expect(totals(so5, 8)).toEqual([2, 14, 16, 91])
   })
 
   it('SO(6) with a complex spinor 4 and a real vector 6 = SU(4) with the 4 and the real 6 (Kostka weights against Freudenthal weights)', () => {
-    const so6 = theory([{ name: 'G', type: 'SO', n: 6, gauge: true }], [
-      { name: 'H', lorentz: 'scalar', reps: { G: [0, 0, 1] } }, { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [1, 0, 0] } }, { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
-    ])
-    const su4 = theory([{ name: 'G', type: 'SU', n: 4, gauge: true }], [
-      { name: 'H', lorentz: 'scalar', reps: { G: [1, 0, 0] } }, { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [0, 1, 0] } }, { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
-    ])
+    const so6 = theory(
+      [{ name: 'G', type: 'SO', n: 6, gauge: true }],
+      [
+        { name: 'H', lorentz: 'scalar', reps: { G: [0, 0, 1] } },
+        { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [1, 0, 0] } },
+        { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
+      ],
+    )
+    const su4 = theory(
+      [{ name: 'G', type: 'SU', n: 4, gauge: true }],
+      [
+        { name: 'H', lorentz: 'scalar', reps: { G: [1, 0, 0] } },
+        { name: 'phi', lorentz: 'scalar', real: true, reps: { G: [0, 1, 0] } },
+        { name: 'X', lorentz: 'field-strength', gaugeOf: 'G' },
+      ],
+    )
     expect(totals(so6, 8)).toEqual(totals(su4, 8))
   })
 })

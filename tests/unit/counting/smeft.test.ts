@@ -18,7 +18,12 @@ describe('SMEFT totals', () => {
   it('one flavor, dimensions 5–8: 2, 84, 30, 993 (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016)', () => {
     const r = countOperators(smeft, { maxDim: 8, nf: 1 })
     expect(r.theory).toBe('SMEFT')
-    expect(r.byDimension.map((d) => [d.dimension, d.operators])).toEqual([[5, 2], [6, 84], [7, 30], [8, 993]])
+    expect(r.byDimension.map((d) => [d.dimension, d.operators])).toEqual([
+      [5, 2],
+      [6, 84],
+      [7, 30],
+      [8, 993],
+    ])
   })
 
   it('three flavors: dim 5 → 12, dim 6 → 3045, dim 8 → 44807 (Henning, Lu, Melia, Murayama, JHEP 08 (2017) 016)', () => {

@@ -112,7 +112,8 @@ describe('input errors and run control', () => {
 describe('discrete and global symmetries', () => {
   it('a Z2 (φ → −φ) removes the odd powers of a real scalar: dims 5, 7 empty, φ^6 and φ^8, D^4 φ^4 kept (common practice)', () => {
     const t = parseTheory({
-      name: 'Z2 scalar', frame: 'relativistic',
+      name: 'Z2 scalar',
+      frame: 'relativistic',
       groups: [{ name: 'P', type: 'Z', n: 2, gauge: false }],
       fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { P: 1 } }],
     })
@@ -121,8 +122,12 @@ describe('discrete and global symmetries', () => {
 
   it('a doublet of a global SU(2) × U(1) counts like the Higgs: H^3 H*^3 → 1 (Q_H), D^2 H^2 H*^2 → 2 (Q_H□, Q_HD) (Grzadkowski, Iskrzynski, Misiak, Rosiek, JHEP 10 (2010) 085)', () => {
     const t = parseTheory({
-      name: 'O4', frame: 'relativistic',
-      groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: false }, { name: 'U', type: 'U1', gauge: false }],
+      name: 'O4',
+      frame: 'relativistic',
+      groups: [
+        { name: 'SU2', type: 'SU', n: 2, gauge: false },
+        { name: 'U', type: 'U1', gauge: false },
+      ],
       fields: [{ name: 'H', lorentz: 'scalar', reps: { SU2: [1] }, charges: { U: '1' } }],
     })
     expect(countOperators(t, { maxDim: 6, minDim: 6 }).byDimension[0]!.classes).toEqual({ 'D^2 H^2 H*^2': 2, 'H^3 H*^3': 1 })
@@ -130,8 +135,12 @@ describe('discrete and global symmetries', () => {
 
   it('a real (2,2) bidoublet of SU(2)_L × SU(2)_R counts with custodial symmetry: Φ^6 → 1 and D^2 Φ^4 → 1 (the custodial-violating Q_HD is gone; Sikivie, Susskind, Voloshin, Zakharov, Nucl. Phys. B 173 (1980) 189; Grzadkowski et al., JHEP 10 (2010) 085)', () => {
     const t = parseTheory({
-      name: 'custodial', frame: 'relativistic',
-      groups: [{ name: 'SU2L', type: 'SU', n: 2, gauge: false }, { name: 'SU2R', type: 'SU', n: 2, gauge: false }],
+      name: 'custodial',
+      frame: 'relativistic',
+      groups: [
+        { name: 'SU2L', type: 'SU', n: 2, gauge: false },
+        { name: 'SU2R', type: 'SU', n: 2, gauge: false },
+      ],
       fields: [{ name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1] } }],
     })
     const r = countOperators(t, { maxDim: 8 })
@@ -151,8 +160,12 @@ describe('discrete and global symmetries', () => {
 describe('flavors as copies', () => {
   it('a field with flavors = 2 counts like two copies of it (oracle: the same theory with the copies written out; common practice)', () => {
     const flavored = parseTheory({
-      name: 'flavored', frame: 'relativistic',
-      groups: [{ name: 'SU2', type: 'SU', n: 2, gauge: true }, { name: 'Y', type: 'U1', gauge: true }],
+      name: 'flavored',
+      frame: 'relativistic',
+      groups: [
+        { name: 'SU2', type: 'SU', n: 2, gauge: true },
+        { name: 'Y', type: 'U1', gauge: true },
+      ],
       fields: [
         { name: 'l', lorentz: 'left-weyl', reps: { SU2: [1] }, charges: { Y: '-1/2' }, flavors: 2 },
         { name: 'e', lorentz: 'right-weyl', charges: { Y: '-1' }, flavors: 3 },

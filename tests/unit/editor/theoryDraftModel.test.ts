@@ -22,7 +22,7 @@ describe('theory draft round trip', () => {
     const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
     d.groups[2]!.name = 'Hyper'
     const { theory } = draftToTheory(d)
-    const fields = theory.fields as Array<{ name: string, charges?: Record<string, string>, gaugeOf?: string }>
+    const fields = theory.fields as Array<{ name: string; charges?: Record<string, string>; gaugeOf?: string }>
     expect(fields.find((f) => f.name === 'Q')!.charges).toEqual({ Hyper: '1/6' })
     expect(fields.find((f) => f.name === 'B')!.gaugeOf).toBe('Hyper')
   })
@@ -31,7 +31,7 @@ describe('theory draft round trip', () => {
     const d = theoryToDraft(PRESETS.find((p) => p.id === 'smeft')!.theory)
     d.groups.splice(0, 1) // colour
     const { theory } = draftToTheory(d)
-    const q = (theory.fields as Array<{ name: string, reps?: Record<string, number[]> }>).find((f) => f.name === 'Q')!
+    const q = (theory.fields as Array<{ name: string; reps?: Record<string, number[]> }>).find((f) => f.name === 'Q')!
     expect(q.reps).toEqual({ weak: [1] })
   })
 })
@@ -39,10 +39,14 @@ describe('theory draft round trip', () => {
 describe('the new group kinds in the editor', () => {
   it('SO(n), Sp(n), E6 and finite groups: Dynkin labels and irrep names survive file → draft → file; n only where the kind takes one', () => {
     const file = {
-      name: 'kinds', frame: 'relativistic',
+      name: 'kinds',
+      frame: 'relativistic',
       groups: [
-        { name: 'G', type: 'SO', n: 10, gauge: true }, { name: 'S', type: 'Sp', n: 4, gauge: false }, { name: 'E', type: 'E6', gauge: false },
-        { name: 'F', type: 'A4', gauge: false }, { name: 'T', type: 'Tprime', gauge: false },
+        { name: 'G', type: 'SO', n: 10, gauge: true },
+        { name: 'S', type: 'Sp', n: 4, gauge: false },
+        { name: 'E', type: 'E6', gauge: false },
+        { name: 'F', type: 'A4', gauge: false },
+        { name: 'T', type: 'Tprime', gauge: false },
       ],
       fields: [
         { name: 'psi', lorentz: 'left-weyl', reps: { G: [0, 0, 0, 0, 1], F: '3', T: "2''" }, flavors: 3 },
@@ -136,7 +140,15 @@ describe('the heavy particle in the form', () => {
   })
 
   it('a new block couples "psi" to the first gauge group; typing errors are keyed to their inputs', () => {
-    const d = theoryToDraft({ name: 'h', frame: 'heavy', groups: [{ name: 'G', type: 'U1', gauge: false }, { name: 'C', type: 'SU', n: 3, gauge: true }], fields: [] })
+    const d = theoryToDraft({
+      name: 'h',
+      frame: 'heavy',
+      groups: [
+        { name: 'G', type: 'U1', gauge: false },
+        { name: 'C', type: 'SU', n: 3, gauge: true },
+      ],
+      fields: [],
+    })
     d.heavy = newHeavy(d.groups)
     expect(draftToTheory(d).theory.heavy).toEqual({ particle: { name: 'psi' }, gaugeGroup: 'C', maxOrder: 2 })
     d.heavy.reps[d.groups[1]!.uid] = '1,x'
@@ -151,7 +163,10 @@ describe('the heavy particle in the form', () => {
   })
 
   it('the P and T switches survive the form: written only when switched off (common practice: schema round trip)', () => {
-    const d = theoryToDraft({ ...PRESETS.find((p) => p.id === 'heavy-vexonium')!.theory, heavy: { particle: { name: 'psi', charges: { Xd: '1' } }, gaugeGroup: 'Xd', maxOrder: 2, imposeParity: false } })
+    const d = theoryToDraft({
+      ...PRESETS.find((p) => p.id === 'heavy-vexonium')!.theory,
+      heavy: { particle: { name: 'psi', charges: { Xd: '1' } }, gaugeGroup: 'Xd', maxOrder: 2, imposeParity: false },
+    })
     expect([d.heavy!.parity, d.heavy!.timeReversal]).toEqual([false, true])
     expect(draftToTheory(d).theory.heavy).toMatchObject({ imposeParity: false })
     expect(draftToTheory(d).theory.heavy).not.toHaveProperty('imposeTimeReversal')
@@ -179,7 +194,7 @@ describe('the Goldstone block in the form (common practice: lossless form model)
     expect(draftToTheory(d).theory.goldstone).toEqual({ coset: 'chiral', N: 3, sources: { scalar: true, vector: true }, maxOrder: 4 })
   })
 
-  it('typing errors are keyed to their inputs; the schema\'s range checks too', () => {
+  it("typing errors are keyed to their inputs; the schema's range checks too", () => {
     const d = umbral()
     d.goldstone!.N = 'three'
     d.goldstone!.maxOrder = ''
@@ -198,8 +213,13 @@ describe('the Goldstone block in the form (common practice: lossless form model)
 // (common practice: lossless round trip of the file); an empty mass row writes nothing.
 describe('couplings and masses in the draft', () => {
   const file = {
-    name: 'singlet', frame: 'relativistic', groups: [],
-    fields: [{ name: 'H', lorentz: 'scalar' }, { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M', value: { number: '2', unit: 'TeV' } } }],
+    name: 'singlet',
+    frame: 'relativistic',
+    groups: [],
+    fields: [
+      { name: 'H', lorentz: 'scalar' },
+      { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M', value: { number: '2', unit: 'TeV' } } },
+    ],
     couplings: [
       { class: 'S H H*', symbol: 'kappa', value: { number: '1.5', unit: 'TeV' } },
       { class: 'H H*', operator: 'mass H H*', symbol: 'm2', description: 'the light mass term' },

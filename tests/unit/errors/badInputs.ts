@@ -22,8 +22,18 @@ import { countsOfClassKey } from '../../../server/engine/theory/classKey'
 import { cycleTypes } from '../../../server/engine/counting/cycleTypes'
 import { buildTheoryModel } from '../../../server/engine/theory/model'
 import {
-  characterPower, characterProduct, multiplyIrreps, productCharacter, productSingletCount, schurFunctorCharacter,
-  singletCount, suDimension, suWeights, symmetricCharacter, plethysm, lorentzWeights,
+  characterPower,
+  characterProduct,
+  multiplyIrreps,
+  productCharacter,
+  productSingletCount,
+  schurFunctorCharacter,
+  singletCount,
+  suDimension,
+  suWeights,
+  symmetricCharacter,
+  plethysm,
+  lorentzWeights,
 } from '../../../server/engine/group/index'
 import { div, parseRational, rat, toBigInt, ONE, ZERO } from '../../../server/engine/exact/rational'
 import { solve } from '../../../server/engine/finite/matrix'
@@ -43,22 +53,48 @@ import { orderZero, orderZeroHeavy } from '../../../server/engine/basis/orderZer
 import { resolveCouplings } from '../../../server/engine/basis/orderZeroCouplings'
 import { matchHeavyScalar } from '../../../server/engine/matching/treeScalarExchange'
 
-export interface BadInput { name: string, run: () => unknown, says?: RegExp }
+export interface BadInput {
+  name: string
+  run: () => unknown
+  says?: RegExp
+}
 
 const preset = (id: string) => findPreset(id)!.theory as Theory
 const phi: Theory = { name: 'real scalar', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] }
 const qedLike = { heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 3 }, groups: [{ name: 'X', type: 'U1' as const, gauge: true }] }
-const ladder = { scales: [{ name: 'E', value: '10', unit: 'GeV' as const }, { name: 'M', value: '1', unit: 'TeV' as const }], parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }] }
+const ladder = {
+  scales: [
+    { name: 'E', value: '10', unit: 'GeV' as const },
+    { name: 'M', value: '1', unit: 'TeV' as const },
+  ],
+  parameters: [{ name: 'eps', numerator: 'E', denominator: 'M' }],
+}
 const qcd = { alphaS: 0.118, muFrom: 91.1876, muTo: 10, loops: 2 as const, thresholds: [{ name: 'b', mass: 4.18, kind: 'msbar' as const }] }
 const sm = { frame: 'relativistic' as const, species: buildTheoryModel({ name: 'one scalar', frame: 'relativistic', groups: [], fields: [{ name: 'H', lorentz: 'scalar' }] }).species }
 const twoPrimes = workingPrimes(2)
 const print = (values: (p: number) => number[]): Fingerprint => ({ primes: twoPrimes, values: twoPrimes.map(values) })
-const bidoublet: Theory = parseTheory({ name: 'bidoublet', frame: 'relativistic', groups: [{ name: 'A', type: 'SU', n: 2, gauge: false }, { name: 'B', type: 'SU', n: 2, gauge: false }], fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }] })
+const bidoublet: Theory = parseTheory({
+  name: 'bidoublet',
+  frame: 'relativistic',
+  groups: [
+    { name: 'A', type: 'SU', n: 2, gauge: false },
+    { name: 'B', type: 'SU', n: 2, gauge: false },
+  ],
+  fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }],
+})
 
 const theoryCases: BadInput[] = [
   { name: 'a theory file that is not JSON', run: () => parseTheory('{ "name": '), says: /^The theory file is not valid JSON/ },
-  { name: 'a real scalar with a charge', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3' } }] }), says: /^Field 1 "phi", charge under Y: a real scalar/ },
-  { name: 'an SU group without n, and labels for it', run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', reps: { G: [1] } }] }), says: /^Symmetry 1 "G", n: SU\(n\) needs n from 2 to 8; give n$/ },
+  {
+    name: 'a real scalar with a charge',
+    run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', real: true, charges: { Y: '1/3' } }] }),
+    says: /^Field 1 "phi", charge under Y: a real scalar/,
+  },
+  {
+    name: 'an SU group without n, and labels for it',
+    run: () => parseTheory({ name: 'x', frame: 'relativistic', groups: [{ name: 'G', type: 'SU', gauge: true }], fields: [{ name: 'phi', lorentz: 'scalar', reps: { G: [1] } }] }),
+    says: /^Symmetry 1 "G", n: SU\(n\) needs n from 2 to 8; give n$/,
+  },
   { name: 'an untyped, empty theory', run: () => parseTheory({ name: '', frame: 'x', groups: {}, fields: [{ name: 'a', lorentz: 'Q', reps: { '1bad': [1] } }] }), says: /^Name must not be empty/ },
   { name: 'a count of a heavy-frame theory', run: () => countOperators(preset('heavy-vexonium'), { maxDim: 6 }), says: /Hilbert-series count does not cover/ },
   { name: 'a count below dimension 5', run: () => countOperators(phi, { maxDim: 4 }) },
@@ -66,7 +102,27 @@ const theoryCases: BadInput[] = [
   { name: 'a class naming an unknown field (counting)', run: () => countsOfClassKey(buildTheoryModel(phi), 'D^2 X^2'), says: /not a field of this theory/ },
   { name: 'dimensions in the wrong order', run: () => enumerateFieldContents(buildTheoryModel(phi), 7, 6) },
   { name: 'a dimension of 0', run: () => enumerateClasses(buildTheoryModel(phi), 0) },
-  { name: 'charges with a huge common denominator', run: () => enumerateFieldContents(buildTheoryModel(parseTheory({ name: 'odd', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }], fields: [{ name: 'a', lorentz: 'scalar', charges: { Y: '1/999999937' } }, { name: 'b', lorentz: 'scalar', charges: { Y: '1/999999929' } }, { name: 'c', lorentz: 'scalar', charges: { Y: '1/999999893' } }] })), 6, 6), says: /common denominator/ },
+  {
+    name: 'charges with a huge common denominator',
+    run: () =>
+      enumerateFieldContents(
+        buildTheoryModel(
+          parseTheory({
+            name: 'odd',
+            frame: 'relativistic',
+            groups: [{ name: 'Y', type: 'U1', gauge: true }],
+            fields: [
+              { name: 'a', lorentz: 'scalar', charges: { Y: '1/999999937' } },
+              { name: 'b', lorentz: 'scalar', charges: { Y: '1/999999929' } },
+              { name: 'c', lorentz: 'scalar', charges: { Y: '1/999999893' } },
+            ],
+          }),
+        ),
+        6,
+        6,
+      ),
+    says: /common denominator/,
+  },
   { name: 'nineteen copies of one field', run: () => cycleTypes(19), says: /lower the maximum dimension/ },
   { name: 'more than 40 derivatives', run: () => lorentzSingletSeries([], 41) },
 ]
@@ -94,16 +150,52 @@ const basisCases: BadInput[] = [
   { name: 'h.c. of a class that is not its own conjugate', run: () => typedFingerprint(preset('smeft'), 'L e* H', '(<12>) + h.c.') },
   { name: 'a parity image of a class that parity moves', run: () => parityLegMap(basisSpecies(preset('qed')), basisClassKey(basisSpecies(preset('qed')), 'eL eR* A_L')) },
   // A constant amplitude is no multiple of s² + t² + u², the one operator of D^4 φ^4.
-  { name: 'a rewrite coefficient beyond what stored fingerprints determine', run: () => expressIn([print(() => [1, 0, 0]), print(() => [0, 1, 0])], print((p) => [1, (2 ** 26 + 15) % p, 0])), says: /^The coefficient of kept operator 2 is not a fraction with numerator and denominator up to \d+/ },
-  { name: 'a rewrite outside the span', run: () => rewriteOperator(classBasis(phi, 'D^4 phi^4'), { label: 'one', evaluate: (_F, _pt, map) => (map.every((m, i) => m === i) ? 1 : 0) }), says: /is not a combination of the operators of the class D\^4 phi\^4/ },
+  {
+    name: 'a rewrite coefficient beyond what stored fingerprints determine',
+    run: () =>
+      expressIn(
+        [print(() => [1, 0, 0]), print(() => [0, 1, 0])],
+        print((p) => [1, (2 ** 26 + 15) % p, 0]),
+      ),
+    says: /^The coefficient of kept operator 2 is not a fraction with numerator and denominator up to \d+/,
+  },
+  {
+    name: 'a rewrite outside the span',
+    run: () => rewriteOperator(classBasis(phi, 'D^4 phi^4'), { label: 'one', evaluate: (_F, _pt, map) => (map.every((m, i) => m === i) ? 1 : 0) }),
+    says: /is not a combination of the operators of the class D\^4 phi\^4/,
+  },
 ]
 
 const heavyCases: BadInput[] = [
   { name: 'a heavy particle coupled to a discrete group', run: () => enumerateHeavy({ ...qedLike, groups: [{ name: 'X', type: 'Z', n: 2 }] }) },
   { name: 'a heavy particle coupled to an unknown group', run: () => enumerateHeavy({ ...qedLike, groups: [{ name: 'Y', type: 'U1' }] }) },
   { name: 'a heavy octet', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 1] } }, gaugeGroup: 'C', maxOrder: 3 }, groups: [{ name: 'C', type: 'SU', n: 3 }] }) },
-  { name: 'a heavy particle charged under two SU(N)', run: () => enumerateHeavy({ heavy: { particle: { name: 'psi', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 }, groups: [{ name: 'C', type: 'SU', n: 3 }, { name: 'W', type: 'SU', n: 2 }] }), says: /two non-abelian groups \(C, W\)/ },
-  { name: 'an adjoint light scalar beside a heavy quark', run: () => enumerateHeavyLight({ particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: [{ name: 'S8', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }], groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }], maxOrder: 2, parity: true, timeReversal: true }), says: /^Light field S8 sits in \[1,1\] of C/ },
+  {
+    name: 'a heavy particle charged under two SU(N)',
+    run: () =>
+      enumerateHeavy({
+        heavy: { particle: { name: 'psi', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 },
+        groups: [
+          { name: 'C', type: 'SU', n: 3 },
+          { name: 'W', type: 'SU', n: 2 },
+        ],
+      }),
+    says: /two non-abelian groups \(C, W\)/,
+  },
+  {
+    name: 'an adjoint light scalar beside a heavy quark',
+    run: () =>
+      enumerateHeavyLight({
+        particle: 'Q',
+        heavy: { reps: { C: [1, 0] }, charges: {} },
+        fields: [{ name: 'S8', lorentz: 'scalar', real: true, reps: { C: [1, 1] } }],
+        groups: [{ name: 'C', type: 'SU', n: 3, gauge: true }],
+        maxOrder: 2,
+        parity: true,
+        timeReversal: true,
+      }),
+    says: /^Light field S8 sits in \[1,1\] of C/,
+  },
   { name: 'heavy–heavy operators at order 3', run: () => enumerateHeavyHeavy(3, 1, 'psi', true) },
   { name: 'heavy operators of a relativistic theory', run: () => enumerateHeavyTheory({ frame: 'relativistic', groups: [] }) },
   { name: 'a heavy frame without its particle', run: () => enumerateHeavyTheory({ frame: 'heavy', groups: [] }) },
@@ -137,7 +229,7 @@ const scaleCases: BadInput[] = [
   { name: 'a ladder scale in kilograms', run: () => buildScaleLadder({ ...ladder, scales: [{ name: 'E', value: '1', unit: 'kg' as never }] }, []), says: /^Scale 1 "E", unit must be one of/ },
   { name: 'an order list that is not a list of orders', run: () => buildScaleLadder(ladder, [-1]), says: /^Order 1 must be at least 0$/ },
   { name: 'two scales of one name', run: () => buildScaleLadder({ scales: [...ladder.scales, ...ladder.scales], parameters: [] }, []) },
-  { name: 'an order below a Goldstone theory\'s leading p²', run: () => buildScaleLadder(ladder, [0, 2, 4], { leadingOrder: 2 }), says: /below the leading order 2/ },
+  { name: "an order below a Goldstone theory's leading p²", run: () => buildScaleLadder(ladder, [0, 2, 4], { leadingOrder: 2 }), says: /below the leading order 2/ },
   { name: 'a parameter named like a scale', run: () => buildScaleLadder({ ...ladder, parameters: [{ name: 'E', numerator: 'E', denominator: 'M' }] }, []) },
   { name: 'an unknown counting parameter', run: () => buildScaleLadder({ ...ladder, countingParameter: 'zz' }, []) },
   { name: 'a derived scale named like a scale', run: () => buildScaleLadder({ ...ladder, derived: [{ name: 'E', from: 'M', powers: {} }] }, []) },
@@ -150,7 +242,11 @@ const scaleCases: BadInput[] = [
   { name: 'integrating out a field twice', run: () => integrateOut(preset('smeft'), ['H', 'H'], { value: 1, unit: 'TeV' }) },
   { name: 'integrating out of a heavy-frame theory', run: () => integrateOut(preset('heavy-vexonium'), ['psi'], { value: 1, unit: 'TeV' }) },
   { name: 'threshold shifts of a field strength', run: () => thresholdShifts([{ name: 'G', lorentz: 'field-strength', gaugeOf: 'C' }], []) },
-  { name: 'integrating out half of a Dirac fermion', run: () => integrateOut(preset('qed'), ['eL'], { value: 1, unit: 'TeV' }), says: /eL cannot be integrated out without a partner.*Integrate out eL, eR together/ },
+  {
+    name: 'integrating out half of a Dirac fermion',
+    run: () => integrateOut(preset('qed'), ['eL'], { value: 1, unit: 'TeV' }),
+    says: /eL cannot be integrated out without a partner.*Integrate out eL, eR together/,
+  },
   { name: 'order 0 of a heavy-frame theory as if relativistic', run: () => orderZero(preset('heavy-vexonium')), says: /uses the heavy frame/ },
   { name: 'heavy order 0 of a theory without a heavy particle', run: () => orderZeroHeavy(preset('qed')), says: /has no heavy particle/ },
   { name: 'a coupling on a class order 0 does not have', run: () => resolveCouplings({ ...phi, couplings: [{ class: 'phi^5', symbol: 'c5' }] }), says: /has no class "phi\^5"/ },
@@ -159,13 +255,37 @@ const scaleCases: BadInput[] = [
 ]
 
 const runningCases: BadInput[] = [
-  { name: 'α_s run into the Landau pole', run: () => runAlphaS({ alphaS: 0.5, muFrom: 1, muTo: 0.1, loops: 1, lightFlavours: 3 }), says: /^α_s grows beyond the perturbative range below μ = [\d.]+ GeV .*; choose a higher scale/ },
+  {
+    name: 'α_s run into the Landau pole',
+    run: () => runAlphaS({ alphaS: 0.5, muFrom: 1, muTo: 0.1, loops: 1, lightFlavours: 3 }),
+    says: /^α_s grows beyond the perturbative range below μ = [\d.]+ GeV .*; choose a higher scale/,
+  },
   { name: 'α_s without quarks or light flavours', run: () => runAlphaS({ alphaS: 0.118, muFrom: 91.1876, muTo: 2, loops: 4 }) },
   { name: 'α_s with five loops', run: () => runAlphaS({ ...qcd, loops: 5 as never }) },
   { name: 'α_s at a negative scale', run: () => runAlphaS({ ...qcd, muTo: -1 }) },
   { name: 'a heavy quark of a kinetic mass', run: () => runAlphaS({ ...qcd, thresholds: [{ name: 'b', mass: 4, kind: 'kinetic' as never }] }) },
-  { name: 'two heavy quarks of one name', run: () => runAlphaS({ ...qcd, thresholds: [{ name: 'b', mass: 4, kind: 'msbar' }, { name: 'b', mass: 5, kind: 'msbar' }] }) },
-  { name: 'two heavy quarks of one mass', run: () => runAlphaS({ ...qcd, thresholds: [{ name: 'b', mass: 4, kind: 'msbar' }, { name: 'c', mass: 4, kind: 'msbar' }] }) },
+  {
+    name: 'two heavy quarks of one name',
+    run: () =>
+      runAlphaS({
+        ...qcd,
+        thresholds: [
+          { name: 'b', mass: 4, kind: 'msbar' },
+          { name: 'b', mass: 5, kind: 'msbar' },
+        ],
+      }),
+  },
+  {
+    name: 'two heavy quarks of one mass',
+    run: () =>
+      runAlphaS({
+        ...qcd,
+        thresholds: [
+          { name: 'b', mass: 4, kind: 'msbar' },
+          { name: 'c', mass: 4, kind: 'msbar' },
+        ],
+      }),
+  },
   { name: 'too many flavours', run: () => runAlphaS({ ...qcd, lightFlavours: 6 }) },
   { name: 'flavours at μ₀ that do not match the quarks', run: () => runAlphaS({ ...qcd, nfFrom: 3 }) },
   { name: 'α_s above 4π', run: () => runAlphaS({ ...qcd, alphaS: 13 }) },
@@ -201,22 +321,61 @@ const libraryCases: BadInput[] = [
   { name: 'division by zero', run: () => div(ONE, ZERO) },
   { name: 'a fraction taken as a whole number', run: () => toBigInt(parseRational('1/2')) },
   { name: 'a residue with no small fraction', run: () => reconstructRational(3n, 7n) },
-  { name: 'an inconsistent linear system', run: () => solve(new PrimeField(7), [[1, 1], [2, 2]], [1, 3]) },
+  {
+    name: 'an inconsistent linear system',
+    run: () =>
+      solve(
+        new PrimeField(7),
+        [
+          [1, 1],
+          [2, 2],
+        ],
+        [1, 3],
+      ),
+  },
 ]
 
-const darkU1 = (n: number): Theory => ({ name: 'dark', frame: 'relativistic', groups: Array.from({ length: n }, (_, i) => ({ name: `D${i}`, type: 'U1' as const, gauge: true })), fields: [{ name: 'chi', lorentz: 'scalar', charges: { D0: '1' } }] })
+const darkU1 = (n: number): Theory => ({
+  name: 'dark',
+  frame: 'relativistic',
+  groups: Array.from({ length: n }, (_, i) => ({ name: `D${i}`, type: 'U1' as const, gauge: true })),
+  fields: [{ name: 'chi', lorentz: 'scalar', charges: { D0: '1' } }],
+})
 const darkContent = () => gaugeContentOf(darkU1(1))
 const gaugeRun = { content: darkContent(), loops: 1 as const, muFromGeV: 10, muToGeV: 100, alpha: { D0: 0.01 } }
 const gaugeRunningCases: BadInput[] = [
   { name: 'a tower with no theory', run: () => towerGaugeContent([]), says: /no theory/ },
-  { name: 'a tower step without its threshold', run: () => towerGaugeContent([{ theory: darkU1(1), thresholdGeV: null }, { theory: darkU1(1), thresholdGeV: null }]), says: /threshold scale/ },
+  {
+    name: 'a tower step without its threshold',
+    run: () =>
+      towerGaugeContent([
+        { theory: darkU1(1), thresholdGeV: null },
+        { theory: darkU1(1), thresholdGeV: null },
+      ]),
+    says: /threshold scale/,
+  },
   { name: 'more U(1) groups than the mixing follows', run: () => gaugeBetaCoefficients(gaugeContentOf(darkU1(9))), says: /at most 8/ },
   { name: 'a running coupling for a finite group', run: () => simpleGroupFactors({ name: 'Z', type: 'Z', n: 3, gauge: true }), says: /only SU\(N\) and U\(1\)/ },
   { name: 'a gauge running from zero GeV', run: () => runGaugeCouplings({ ...gaugeRun, muFromGeV: 0 }), says: /between/ },
   { name: 'a gauge running with a non-perturbative input', run: () => runGaugeCouplings({ ...gaugeRun, alpha: { D0: 20 } }), says: /not a perturbative coupling/ },
   { name: 'a gauge coupling asked beyond its Landau pole', run: () => gaugeCouplingsAt({ ...gaugeRun, alpha: { D0: 1 }, muToGeV: 1e30 }), says: /cannot be reached/ },
-  { name: 'a gauge running report of a theory without gauge groups', run: () => gaugeRunningReport(gaugeContentOf({ name: 'none', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] }), { loops: 1, muFromGeV: 10, alpha: {}, plotFromGeV: 1, plotToGeV: 100 }), says: /no gauge group/ },
-  { name: 'a gauge running report over a reversed range', run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }), says: /lower to a higher/ },
+  {
+    name: 'a gauge running report of a theory without gauge groups',
+    run: () =>
+      gaugeRunningReport(gaugeContentOf({ name: 'none', frame: 'relativistic', groups: [], fields: [{ name: 'phi', lorentz: 'scalar', real: true }] }), {
+        loops: 1,
+        muFromGeV: 10,
+        alpha: {},
+        plotFromGeV: 1,
+        plotToGeV: 100,
+      }),
+    says: /no gauge group/,
+  },
+  {
+    name: 'a gauge running report over a reversed range',
+    run: () => gaugeRunningReport(darkContent(), { loops: 1, muFromGeV: 10, alpha: { D0: 0.01 }, plotFromGeV: 100, plotToGeV: 1 }),
+    says: /lower to a higher/,
+  },
 ]
 
 // Group data of SO, Sp, the exceptional and the finite groups, called directly (the schema stops these first).
@@ -234,4 +393,16 @@ const groupCases: BadInput[] = [
   { name: 'a real SU(2) irrep with an odd middle label', run: () => mixedTensorShape(2, [1]) },
 ]
 
-export const BAD_INPUTS: BadInput[] = [...theoryCases, ...basisCases, ...heavyCases, ...ruleCases, ...scaleCases, ...runningCases, ...gaugeRunningCases, ...goldstoneCases, ...notationCases, ...libraryCases, ...groupCases]
+export const BAD_INPUTS: BadInput[] = [
+  ...theoryCases,
+  ...basisCases,
+  ...heavyCases,
+  ...ruleCases,
+  ...scaleCases,
+  ...runningCases,
+  ...gaugeRunningCases,
+  ...goldstoneCases,
+  ...notationCases,
+  ...libraryCases,
+  ...groupCases,
+]

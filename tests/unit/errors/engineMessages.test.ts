@@ -29,11 +29,18 @@ function templateText(text: string, open: number): string {
   for (let i = open + 1; i < text.length; i++) {
     const ch = text[i]!
     if (ch === '`') return out
-    if (ch === '\\') { out += text[++i]; continue }
-    if (ch !== '$' || text[i + 1] !== '{') { out += ch; continue }
+    if (ch === '\\') {
+      out += text[++i]
+      continue
+    }
+    if (ch !== '$' || text[i + 1] !== '{') {
+      out += ch
+      continue
+    }
     let depth = 0
     for (i++; i < text.length; i++) {
-      if (text[i] === '`') i = text.indexOf('`', i + 1) // a nested template inside ${…}
+      if (text[i] === '`')
+        i = text.indexOf('`', i + 1) // a nested template inside ${…}
       else if (text[i] === '{') depth++
       else if (text[i] === '}' && --depth === 0) break
     }

@@ -11,7 +11,9 @@ import { forbiddenIn } from '../../support/forbiddenMessages'
 const INTERNAL = /^Internal error \(ref ([0-9A-HJKMNP-TV-Z]{6})\); it has been logged\.$/
 
 describe('toHttpError', () => {
-  afterEach(() => { vi.restoreAllMocks() })
+  afterEach(() => {
+    vi.restoreAllMocks()
+  })
 
   it('an engine input error answers 422 with its message, never its place', () => {
     const r = toHttpError(new EngineInputError('parseOperatorText', 'The operator is empty; type it in the input syntax, e.g. <12>[34]'))
@@ -38,7 +40,7 @@ describe('toHttpError', () => {
     expect(log.mock.calls[0]![1]).toBe(error)
   })
 
-  it('a schema error answers 400 naming the field in the user\'s words, no zod text', () => {
+  it("a schema error answers 400 naming the field in the user's words, no zod text", () => {
     const schema = z.object({ maxDim: z.number().int().min(5) }).strict()
     const r = toHttpError(schema.safeParse({ maxDim: 2, extra: 1 }).error)
     expect(r.statusCode).toBe(400)

@@ -9,13 +9,19 @@ const data = assembleExport({
   countingRule: 'massRatio',
   note: 'modulo equations of motion and integration by parts',
   exportedAt: '2026-12-02T00:00:00.000Z',
-  classes: [{ order: 4, dimension: 8, key: 'F_L^2 F_R^2', rank: 1, hilbert: 1, tallyOk: true }, { order: 4, dimension: 8, key: 'F_L^4', rank: 1, hilbert: 1, tallyOk: true }],
+  classes: [
+    { order: 4, dimension: 8, key: 'F_L^2 F_R^2', rank: 1, hilbert: 1, tallyOk: true },
+    { order: 4, dimension: 8, key: 'F_L^4', rank: 1, hilbert: 1, tallyOk: true },
+  ],
   operators: [
     { id: 1, order: 4, classKey: 'F_L^2 F_R^2', column: 'kept', text: '<12>^2[34]^2', latex: 'F_L^2 F_R^2', hermitian: true, realParameters: 1 },
     { id: 2, order: 4, classKey: 'F_L^4', column: 'kept', text: '<12>^2<34>^2', latex: 'F_L^4', hermitian: false, realParameters: 2 },
-    { id: 3, order: 4, classKey: 'F_L^4', column: 'set_aside', text: '<13>^2<24>^2', latex: 'F_L^4{}\'', hermitian: false, realParameters: 2 },
+    { id: 3, order: 4, classKey: 'F_L^4', column: 'set_aside', text: '<13>^2<24>^2', latex: "F_L^4{}'", hermitian: false, realParameters: 2 },
   ],
-  tags: [{ operatorId: 1, kind: 'threshold', label: 'coefficient shifts when T is integrated out' }, { operatorId: 1, kind: 'loop', label: '' }],
+  tags: [
+    { operatorId: 1, kind: 'threshold', label: 'coefficient shifts when T is integrated out' },
+    { operatorId: 1, kind: 'loop', label: '' },
+  ],
   notes: [{ operatorId: 2, authorName: 'Ilse', body: 'sign, "check"', createdAt: '2026-12-01T10:00:00Z' }],
 })
 

@@ -16,10 +16,21 @@ import { parseCsv } from '../../support/csv'
 function hostileExport(report: BasisReport) {
   let id = 0
   const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({ order: d.order, dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk })))
-  const operators = report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op) => ({
-    id: ++id, order: d.order, classKey: c.key, column: 'kept' as const, text: op.text, latex: op.latex, latexDirac: op.latex4,
-    hermitian: op.hermitian, realParameters: op.realParameters,
-  }))))
+  const operators = report.byDimension.flatMap((d) =>
+    d.classes.flatMap((c) =>
+      c.operators.map((op) => ({
+        id: ++id,
+        order: d.order,
+        classKey: c.key,
+        column: 'kept' as const,
+        text: op.text,
+        latex: op.latex,
+        latexDirac: op.latex4,
+        hermitian: op.hermitian,
+        realParameters: op.realParameters,
+      })),
+    ),
+  )
   return assembleExport({
     theory: { name: HOSTILE_TEXTS[0]!, definition: {} },
     countingRule: HOSTILE_TEXTS[2]!,
@@ -28,12 +39,16 @@ function hostileExport(report: BasisReport) {
     classes,
     operators,
     tags: operators.flatMap((op, i) => [{ operatorId: op.id, kind: 'custom', label: HOSTILE_TEXTS[i % HOSTILE_TEXTS.length]! }]),
-    notes: operators.slice(0, 3).map((op, i) => ({ operatorId: op.id, authorName: '=cmd|\' /C calc\'!A0', body: HOSTILE_TEXTS[i]!, createdAt: '2026-12-01T00:00:00Z' })),
+    notes: operators.slice(0, 3).map((op, i) => ({ operatorId: op.id, authorName: "=cmd|' /C calc'!A0", body: HOSTILE_TEXTS[i]!, createdAt: '2026-12-01T00:00:00Z' })),
   })
 }
 
 describe('the LaTeX export of real bases compiles with pdflatex', () => {
-  it.each([['qed', 8], ['scalar-qed', 8], ['smeft', 6]] as const)('%s up to dimension %i, both notations, hostile text included', (preset, maxDim) => {
+  it.each([
+    ['qed', 8],
+    ['scalar-qed', 8],
+    ['smeft', 6],
+  ] as const)('%s up to dimension %i, both notations, hostile text included', (preset, maxDim) => {
     const data = hostileExport(buildBasis(findPreset(preset)!.theory, { maxDim, nf: 1 }))
     for (const dirac of [false, true]) {
       const tex = toLatex(data, { dirac })
@@ -66,23 +81,34 @@ describe('paper-ready LaTeX (issue 17, item 4)', () => {
   })
 
   it('the real parameters the tables list are those of the basis (84 at dimension 6, 993 at dimension 8)', () => {
-    const sum = (dim: number) => smeft8.orders.find((o) => o.dimension === dim)!.classes.flatMap((c) => c.operators).reduce((s, o) => s + o.realParameters, 0)
+    const sum = (dim: number) =>
+      smeft8.orders
+        .find((o) => o.dimension === dim)!
+        .classes.flatMap((c) => c.operators)
+        .reduce((s, o) => s + o.realParameters, 0)
     expect([sum(6), sum(8)]).toEqual([84, 993])
   })
 
   it('header comments stay one readable line: Unicode kept, nothing TeX could run', () => {
     expect(commentText('χ† creates the antiparticle;\nψ, μ → ∞')).toBe('χ† creates the antiparticle; ψ, μ → ∞')
     expect(commentText('x\r\n\\write18{id}')).toBe('x \\textbackslash{}write18{id}')
-    const tex = toLatex({ ...smeft8, countingRule: '1/m', note: 'χ creates the antiparticle (in the particle\'s representation)\nψ† σ·B ψ' })
-    expect(tex).toContain('% Conventions: χ creates the antiparticle (in the particle\'s representation)')
+    const tex = toLatex({ ...smeft8, countingRule: '1/m', note: "χ creates the antiparticle (in the particle's representation)\nψ† σ·B ψ" })
+    expect(tex).toContain("% Conventions: χ creates the antiparticle (in the particle's representation)")
     expect(tex).toContain('% Conventions: ψ† σ·B ψ')
   })
 })
 
 describe('the CSV export', () => {
   it.each([
-    ['=1+1', '\'=1+1'], ['+1', '\'+1'], ['-2+3', '\'-2+3'], ['@SUM(A1)', '\'@SUM(A1)'], ['\tx', '\'\tx'], ['\rx', '"\'\rx"'],
-    ['plain', 'plain'], ['a=b', 'a=b'], ['=a,b', '"\'=a,b"'],
+    ['=1+1', "'=1+1"],
+    ['+1', "'+1"],
+    ['-2+3', "'-2+3"],
+    ['@SUM(A1)', "'@SUM(A1)"],
+    ['\tx', "'\tx"],
+    ['\rx', '"\'\rx"'],
+    ['plain', 'plain'],
+    ['a=b', 'a=b'],
+    ['=a,b', '"\'=a,b"'],
   ])('neutralises %j as %j', (input, expected) => {
     expect(csvField(input)).toBe(expected)
   })
@@ -96,6 +122,6 @@ describe('the CSV export', () => {
   it('no cell of a real export starts with = + - @, a tab or a carriage return', () => {
     const rows = parseCsv(toCsv(hostileExport(buildBasis(findPreset('qed')!.theory, { maxDim: 6, nf: 1 }))))
     expect(rows.flat().filter((c) => /^[=+\-@\t\r]/.test(c))).toEqual([])
-    expect(rows.some((r) => r.at(-1)!.startsWith('\'=cmd|'))).toBe(true)
+    expect(rows.some((r) => r.at(-1)!.startsWith("'=cmd|"))).toBe(true)
   })
 })

@@ -39,7 +39,11 @@ describe('board fingerprints (synthetic): target 2·A + c·B − C/3', () => {
     primes: [...set.primes],
     values: set.fields.map((F) => Array.from({ length: 20 }, (_, k) => coeffs.reduce((s, q, j) => F.add(s, F.mul(F.fromRational(q), F.from((k + 3) ** (j + 1) + seed * j))), 0))),
   })
-  const [A, B, C] = [[rat(1), rat(0), rat(0)], [rat(0), rat(1), rat(0)], [rat(0), rat(0), rat(1)]].map((v) => print(v))
+  const [A, B, C] = [
+    [rat(1), rat(0), rat(0)],
+    [rat(0), rat(1), rat(0)],
+    [rat(0), rat(0), rat(1)],
+  ].map((v) => print(v))
   for (const c of LIFT_CASES) {
     it(caseName(c), () => {
       expectLift(c, () => expressIn([A!, B!, C!], print([rat(2), c.value, rat(-1, 3)]))!.coefficients, [rat(2), c.value, rat(-1, 3)])
@@ -87,7 +91,14 @@ describe('a real basis: SMEFT dimension 6 (typed operators on the board, rewrite
       // Kept first by priority with the case as its coefficient: y = (1/c)·(c·y).
       const keep = () => classBasis(theory, cls.key, { priorities: { keep: { [cls.key]: [term(c.value, y)] } } })
       if (c.vanishesModuloAPrime) return void expect(keep, caseName(c)).toThrow(EngineConsistencyError)
-      expectLift(c, () => rewriteOperator(keep(), y).coefficients.slice(0, 1).map((k) => k.coefficient), [div(rat(1), c.value)])
+      expectLift(
+        c,
+        () =>
+          rewriteOperator(keep(), y)
+            .coefficients.slice(0, 1)
+            .map((k) => k.coefficient),
+        [div(rat(1), c.value)],
+      )
     })
   }
   it('a kept operator is not a combination of the others', () => {
@@ -128,7 +139,9 @@ describe('heavy frame: quotient space (candidates X and d·Y, target 2X + n·Y f
     })
   }
   it('a not-in-span target is refused', () => {
-    expect(() => new QuotientSpace([X], [], { sectors: [0, 1] }).rewrite(Y)).toThrow(new EngineInputError('QuotientSpace.rewrite', 'This operator is not a combination of the enumerated operators (modulo equations of motion and integration by parts)'))
+    expect(() => new QuotientSpace([X], [], { sectors: [0, 1] }).rewrite(Y)).toThrow(
+      new EngineInputError('QuotientSpace.rewrite', 'This operator is not a combination of the enumerated operators (modulo equations of motion and integration by parts)'),
+    )
   })
 })
 

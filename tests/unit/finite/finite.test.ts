@@ -43,16 +43,44 @@ describe('prime field (Knuth, TAOCP vol. 2, §4.5.2)', () => {
 describe('linear algebra mod p (Golub & Van Loan, Matrix Computations, §3.2)', () => {
   const F = new PrimeField(101)
   it('rank and greedy pivot columns', () => {
-    const m = [[1, 2, 3, 1], [2, 4, 6, 0], [0, 0, 0, 5]]
+    const m = [
+      [1, 2, 3, 1],
+      [2, 4, 6, 0],
+      [0, 0, 0, 5],
+    ]
     const e = rref(F, m)
     expect(e.rank).toBe(2)
     expect(e.pivots).toEqual([0, 3]) // column 1 = 2·col 0, col 2 = 3·col 0
-    expect(rank(F, [[1, 0], [0, 1], [1, 1]])).toBe(2)
+    expect(
+      rank(F, [
+        [1, 0],
+        [0, 1],
+        [1, 1],
+      ]),
+    ).toBe(2)
     expect(rank(F, [])).toBe(0)
   })
   it('solves and reports inconsistency', () => {
-    expect(solve(F, [[2, 0], [0, 3]], [4, 6])).toEqual([2, 2])
-    expect(() => solve(F, [[1, 1], [2, 2]], [1, 3])).toThrow(expect.objectContaining({ where: 'solve', message: expect.stringMatching(/^inconsistent system/) }))
+    expect(
+      solve(
+        F,
+        [
+          [2, 0],
+          [0, 3],
+        ],
+        [4, 6],
+      ),
+    ).toEqual([2, 2])
+    expect(() =>
+      solve(
+        F,
+        [
+          [1, 1],
+          [2, 2],
+        ],
+        [1, 3],
+      ),
+    ).toThrow(expect.objectContaining({ where: 'solve', message: expect.stringMatching(/^inconsistent system/) }))
     expect(() => rref(F, [[1, 2], [3]])).toThrow('ragged matrix: row of length 1, expected 2')
   })
   it('honours cancellation', () => {
@@ -65,7 +93,13 @@ describe('rational reconstruction (Wang, SYMSAC 1981; von zur Gathen & Gerhard �
     expect(reconstructRational(51n, 101n)).toEqual({ num: 1n, den: 2n })
     const p = BigInt(workingPrimes(1)[0]!)
     const F = new PrimeField(Number(p))
-    for (const [n, d] of [[-1, 3], [1, 4], [7, 12], [-255, 256], [0, 1]] as const) {
+    for (const [n, d] of [
+      [-1, 3],
+      [1, 4],
+      [7, 12],
+      [-255, 256],
+      [0, 1],
+    ] as const) {
       expect(reconstructRational(BigInt(F.fromRational(rat(n, d))), p)).toEqual(rat(n, d))
     }
   })

@@ -40,7 +40,7 @@ export const LIFT_CASES: LiftCase[] = [
   { name: 'integer at the two-prime bound: 47453092', value: rat(47453092), twoPrimes: 'exact', threePrimes: 'exact' },
   { name: 'negative unit fraction at the two-prime bound', value: rat(-1, 47453092), twoPrimes: 'exact', threePrimes: 'exact' },
   { name: 'integer just past the two-prime bound: 47453093', value: rat(47453093), twoPrimes: 'refused', threePrimes: 'exact' },
-  { name: 'balanced fraction inside Wang\'s bound but past the safety margin', value: rat(40000001, 39999999), twoPrimes: 'refused', threePrimes: 'exact' },
+  { name: "balanced fraction inside Wang's bound but past the safety margin", value: rat(40000001, 39999999), twoPrimes: 'refused', threePrimes: 'exact' },
   { name: 'integer above 2^26: 67108879', value: rat(2 ** 26 + 15), twoPrimes: 'refused', threePrimes: 'exact' },
   { name: 'the first working prime itself (zero modulo that prime)', value: rat(P1), twoPrimes: 'refused', threePrimes: 'exact', vanishesModuloAPrime: true },
   { name: 'denominator above 2^26: -1/67108879', value: rat(-1, 2 ** 26 + 15), twoPrimes: 'refused', threePrimes: 'exact' },

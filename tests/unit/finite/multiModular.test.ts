@@ -1,7 +1,18 @@
 import { describe, expect, it } from 'vitest'
 import {
-  PrimeField, PrimeSet, SeededRandom, agreedEchelon, agreedRank, agreedValue, liftRational, liftReach, reconstructRationalOrNull,
-  crt, solveOverQ, workingPrimes, type ModSystem,
+  PrimeField,
+  PrimeSet,
+  SeededRandom,
+  agreedEchelon,
+  agreedRank,
+  agreedValue,
+  liftRational,
+  liftReach,
+  reconstructRationalOrNull,
+  crt,
+  solveOverQ,
+  workingPrimes,
+  type ModSystem,
 } from '../../../server/engine/finite/index'
 import { EngineConsistencyError } from '../../../server/engine/errors'
 import { rat, toString as ratString, type Rational } from '../../../server/engine/exact/rational'
@@ -48,7 +59,7 @@ describe('lifting one value from its images (named cases)', () => {
     expect(liftRational([r[0]!, r[1]!, (r[2]! + 1) % three.primes[2]!], three.primes)).toBeNull()
   })
 
-  it('refuses random residues, which Wang\'s bound alone would lift more often than not', () => {
+  it("refuses random residues, which Wang's bound alone would lift more often than not", () => {
     const set = PrimeSet.working(2)
     const rng = new SeededRandom(2026)
     let lifted = 0
@@ -112,8 +123,9 @@ describe('solving over Q (named cases as the middle unknown)', () => {
     // Column (1, p1): independent of (1, 0) over Q and mod p2, equal to it mod p1.
     const p1 = set.primes[0]!
     const systems = set.fields.map((F) => ({ a: [[1], [0]], b: [1, F.from(p1)] }))
-    expect(() => solveOverQ(set.fields, systems, { fn: 'expressIn', about: 'class X' }))
-      .toThrow(new EngineConsistencyError('expressIn', `class X: the primes disagree on the target being in the span (true mod ${p1}, false mod ${set.primes[1]})`))
+    expect(() => solveOverQ(set.fields, systems, { fn: 'expressIn', about: 'class X' })).toThrow(
+      new EngineConsistencyError('expressIn', `class X: the primes disagree on the target being in the span (true mod ${p1}, false mod ${set.primes[1]})`),
+    )
   })
 })
 
@@ -121,16 +133,23 @@ describe('agreement between primes', () => {
   const set = PrimeSet.working(2)
   const [p1, p2] = set.primes as [number, number]
   // [[1, 1], [1, 1 + p1]] has determinant p1: rank 1 mod p1, rank 2 mod p2.
-  const m = (F: PrimeField) => [[1, 1], [1, F.from(1 + p1)]]
+  const m = (F: PrimeField) => [
+    [1, 1],
+    [1, F.from(1 + p1)],
+  ]
 
   it('a rank disagreement is a consistency error naming both primes', () => {
-    expect(() => agreedEchelon(set.fields, set.fields.map(m), { fn: 'classBasis', about: 'class Y' }))
-      .toThrow(new EngineConsistencyError('classBasis', `class Y: the primes disagree on the independent columns (rank 1 mod ${p1}, rank 2 mod ${p2})`))
+    expect(() => agreedEchelon(set.fields, set.fields.map(m), { fn: 'classBasis', about: 'class Y' })).toThrow(
+      new EngineConsistencyError('classBasis', `class Y: the primes disagree on the independent columns (rank 1 mod ${p1}, rank 2 mod ${p2})`),
+    )
     expect(() => agreedRank(set.fields, set.fields.map(m), { fn: 'coverageRank' })).toThrow(`the primes disagree on the rank (1 mod ${p1}, 2 mod ${p2})`)
   })
 
   it('agreeing primes give the common pivots and rank', () => {
-    const same = set.fields.map(() => [[1, 2, 0], [2, 4, 1]])
+    const same = set.fields.map(() => [
+      [1, 2, 0],
+      [2, 4, 1],
+    ])
     expect(agreedEchelon(set.fields, same, { fn: 't' })).toMatchObject({ pivots: [0, 2], rank: 2 })
     expect(agreedRank(set.fields, same, { fn: 't' })).toBe(2)
     expect(agreedValue(set.fields, [3, 3], { fn: 't' }, 'trace')).toBe(3)

@@ -2,8 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { goldstoneBasis, type GoldstoneOrderBasis } from '../../../server/engine/goldstone/explicit/goldstoneBasis'
 
 const p4 = (N: number | 'general') => goldstoneBasis({ N, sources: true, maxOrder: 4, minOrder: 4 }).byOrder[0]!
-const rewriteOf = (o: GoldstoneOrderBasis, text: string) =>
-  Object.fromEntries(o.alternatives.find((a) => a.text === text)!.rewrite!.map((t) => [t.text, t.coefficient]))
+const rewriteOf = (o: GoldstoneOrderBasis, text: string) => Object.fromEntries(o.alternatives.find((a) => a.text === text)!.rewrite!.map((t) => [t.text, t.coefficient]))
 
 describe('explicit p⁴ bases, tally-checked against the Hilbert series (two independent methods)', () => {
   const three = p4(3)
@@ -39,7 +38,7 @@ describe('explicit p⁴ bases, tally-checked against the Hilbert series (two ind
     expect(rewriteOf(three, '⟨χ+ χ+⟩')).toEqual({ '⟨χ χ†⟩': '4', '⟨χ− χ−⟩': '1' })
   })
 
-  it('refuses orders above p⁶ with a message in the user\'s terms', () => {
+  it("refuses orders above p⁶ with a message in the user's terms", () => {
     expect(() => goldstoneBasis({ N: 3, sources: true, maxOrder: 8 })).toThrow('explicit bases are built up to p^6; the highest order asked for is p^8 (the count goes further)')
   })
 

@@ -5,12 +5,14 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 
 const root = join(__dirname, '../../..')
-const run = (script: 'count' | 'basis', ...args: string[]) =>
-  spawnSync(process.execPath, ['--import', 'tsx', `scripts/${script}.ts`, ...args], { cwd: root, encoding: 'utf8', timeout: 120_000 })
+const run = (script: 'count' | 'basis', ...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', `scripts/${script}.ts`, ...args], { cwd: root, encoding: 'utf8', timeout: 120_000 })
 
 function theoryFile(N: number | 'general'): string {
   const file = join(mkdtempSync(join(tmpdir(), 'goldstone-cli-')), 'pions.json')
-  writeFileSync(file, JSON.stringify({ name: 'three light pions', frame: 'goldstone', groups: [], fields: [], goldstone: { coset: 'chiral', N, sources: { scalar: true, vector: true }, maxOrder: 4 } }))
+  writeFileSync(
+    file,
+    JSON.stringify({ name: 'three light pions', frame: 'goldstone', groups: [], fields: [], goldstone: { coset: 'chiral', N, sources: { scalar: true, vector: true }, maxOrder: 4 } }),
+  )
   return file
 }
 
@@ -20,7 +22,12 @@ describe('count and basis CLI on a Goldstone-frame theory', () => {
     expect(r.status).toBe(0)
     const out = JSON.parse(r.stdout)
     expect(out.theory).toBe('three light pions')
-    expect(out.byOrder.map((o: { order: number, operators: number }) => [o.order, o.operators])).toEqual([[2, 2], [4, 12], [6, 117], [8, 1959]])
+    expect(out.byOrder.map((o: { order: number; operators: number }) => [o.order, o.operators])).toEqual([
+      [2, 2],
+      [4, 12],
+      [6, 117],
+      [8, 1959],
+    ])
     expect(out.byOrder[1]).toMatchObject({ byParity: { even: 12, odd: 0 }, contact: 2 })
     expect(out.byOrder[2].byParity.odd).toBe(23)
     expect(out.byOrder[1].classes.length).toBeGreaterThan(0)

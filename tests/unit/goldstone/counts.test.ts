@@ -12,7 +12,13 @@ describe('SU(N)×SU(N)/SU(N) with external sources s, p, l, r', () => {
   const general = orders({ coset: 'chiral', N: 'general', sources: true, maxOrder: 8 })
 
   it('N = 3: 2, 12, 117, 1959, 45171 C- and P-even terms at p², …, p¹⁰ (Graf, Henning, Lu, Melia, Murayama, JHEP 01 (2021) 142, title)', () => {
-    expect(three.map((o) => [o.order, o.operators])).toEqual([[2, 2], [4, 12], [6, 117], [8, 1959], [10, 45171]])
+    expect(three.map((o) => [o.order, o.operators])).toEqual([
+      [2, 2],
+      [4, 12],
+      [6, 117],
+      [8, 1959],
+      [10, 45171],
+    ])
   })
 
   it('N = 3, p⁴: L1 … L10 and the contact terms H1, H2 (Gasser & Leutwyler, Nucl. Phys. B 250 (1985) 465)', () => {
@@ -89,7 +95,7 @@ describe('with the singlet vector source v_μ^(s) (U(1)_V)', () => {
     expect([at(general, 8).byParity.odd, at(three, 8).byParity.odd, at(two, 8).byParity.odd]).toEqual([1210, 892, 211])
   })
 
-  it('p⁴ gains one term, the contact term v_μν v^μν (common practice: the singlet\'s own kinetic-like counterterm); p² is unchanged', () => {
+  it("p⁴ gains one term, the contact term v_μν v^μν (common practice: the singlet's own kinetic-like counterterm); p² is unchanged", () => {
     expect([at(two, 4).operators, at(two, 4).contact, at(three, 4).operators, at(three, 4).contact]).toEqual([11, 4, 13, 3])
     expect(at(three, 2).operators).toBe(2)
   })
@@ -131,7 +137,7 @@ describe('O(N+1)/O(N)', () => {
 })
 
 describe('input', () => {
-  it('refuses orders and N it cannot count, with a message in the user\'s terms', () => {
+  it("refuses orders and N it cannot count, with a message in the user's terms", () => {
     expect(() => countGoldstone({ coset: 'chiral', N: 3, sources: true, maxOrder: 18 })).toThrow('the highest chiral order must be an even power of p from 2 to 14, got 18')
     expect(() => countGoldstone({ coset: 'chiral', N: 1, sources: true, maxOrder: 4 })).toThrow('N must be an integer from 2 to 12 or "general" for SU(N)×SU(N)/SU(N), got 1')
   })

@@ -12,8 +12,22 @@ function permutations(m: number): number[][] {
   return permutations(m - 1).flatMap((p) => Array.from({ length: m }, (_, i) => [...p.slice(0, i), m - 1, ...p.slice(i)]))
 }
 const compose = (a: number[], b: number[]) => a.map((_, i) => a[b[i]!]!)
-const inverse = (a: number[]) => { const r = new Array<number>(a.length); a.forEach((x, i) => { r[x] = i }); return r }
-const withCycleType = (nu: number[]) => { const out: number[] = []; let s = 0; for (const c of nu) { for (let i = 0; i < c; i++) out.push(s + ((i + 1) % c)); s += c } return out }
+const inverse = (a: number[]) => {
+  const r = new Array<number>(a.length)
+  a.forEach((x, i) => {
+    r[x] = i
+  })
+  return r
+}
+const withCycleType = (nu: number[]) => {
+  const out: number[] = []
+  let s = 0
+  for (const c of nu) {
+    for (let i = 0; i < c; i++) out.push(s + ((i + 1) % c))
+    s += c
+  }
+  return out
+}
 
 describe('Schur–Weyl flavor integrals (Macdonald, Symmetric Functions, I.7 and VI.9; Procesi, Adv. Math. 19 (1976) 306)', () => {
   it('for N ≥ m, permutation π acting by conjugation on the m! trace products fixes |centralizer| of them, and C∘π (σ ↦ π σ⁻¹ π⁻¹) fixes #{σ : (πσ⁻¹π⁻¹) = σ} (brute force)', () => {
@@ -41,7 +55,12 @@ describe('Schur–Weyl flavor integrals (Macdonald, Symmetric Functions, I.7 and
     const o3 = new OrthogonalFlavor(3)
     for (let m = 2; m <= 8; m += 2) {
       for (const nu of partitionsOf(m)) {
-        expect(su2.singlets(nu.map((c) => ({ kind: 'sl', cycle: c })), false)).toBe(o3.singlets(nu.map((c) => ({ kind: 'vector', cycle: c }))))
+        expect(
+          su2.singlets(
+            nu.map((c) => ({ kind: 'sl', cycle: c })),
+            false,
+          ),
+        ).toBe(o3.singlets(nu.map((c) => ({ kind: 'vector', cycle: c }))))
       }
     }
   })
@@ -66,9 +85,19 @@ describe('O(N) integrals', () => {
   })
 
   it('O(2) keeps δ_ab but not ε_ab, and a vector has no singlet (common practice)', () => {
-    expect(orthogonalSinglets(2, [{ rep: 'vector', cycle: 1 }, { rep: 'vector', cycle: 1 }])).toBe(1)
+    expect(
+      orthogonalSinglets(2, [
+        { rep: 'vector', cycle: 1 },
+        { rep: 'vector', cycle: 1 },
+      ]),
+    ).toBe(1)
     expect(orthogonalSinglets(3, [{ rep: 'vector', cycle: 1 }])).toBe(0)
-    expect(orthogonalSinglets(3, [{ rep: 'adjoint', cycle: 1 }, { rep: 'adjoint', cycle: 1 }])).toBe(1)
+    expect(
+      orthogonalSinglets(3, [
+        { rep: 'adjoint', cycle: 1 },
+        { rep: 'adjoint', cycle: 1 },
+      ]),
+    ).toBe(1)
   })
 })
 
@@ -80,12 +109,31 @@ describe('Lorentz towers and integrals', () => {
   })
 
   it('the reflection fixes only the divergence ∂^μF_μν of a field strength at p³: trace z + 1/z (common practice)', () => {
-    expect(twistedTowerCharacter('strength', 3)).toEqual([{ d: 3, m: -1, c: 1 }, { d: 3, m: 1, c: 1 }])
+    expect(twistedTowerCharacter('strength', 3)).toEqual([
+      { d: 3, m: -1, c: 1 },
+      { d: 3, m: 1, c: 1 },
+    ])
   })
 
   it('a pair of Goldstone letters gives the scalar u_μ u^μ at p²; one source letter only χ itself, its derivatives being total derivatives (common practice)', () => {
-    expect(lorentzSeries([{ kind: 'goldstone', cycle: 1 }, { kind: 'goldstone', cycle: 1 }], 2)).toEqual([0, 0, 1])
-    expect(twistedLorentzSeries([{ kind: 'goldstone', cycle: 1 }, { kind: 'goldstone', cycle: 1 }], 2)).toEqual([0, 0, 1])
+    expect(
+      lorentzSeries(
+        [
+          { kind: 'goldstone', cycle: 1 },
+          { kind: 'goldstone', cycle: 1 },
+        ],
+        2,
+      ),
+    ).toEqual([0, 0, 1])
+    expect(
+      twistedLorentzSeries(
+        [
+          { kind: 'goldstone', cycle: 1 },
+          { kind: 'goldstone', cycle: 1 },
+        ],
+        2,
+      ),
+    ).toEqual([0, 0, 1])
     expect(lorentzSeries([{ kind: 'source', cycle: 1 }], 6)).toEqual([0, 0, 1, 0, 0, 0, 0])
     expect(twistedLorentzSeries([{ kind: 'source', cycle: 1 }], 6)).toEqual([0, 0, 1, 0, 0, 0, 0])
   })

@@ -4,7 +4,7 @@ import { TheorySchema } from '../../../shared/schemas/theory'
 
 const block = { coset: 'chiral', N: 3, sources: { scalar: true, vector: true }, maxOrder: 6 }
 const theory = (extra: Record<string, unknown>) => ({ name: 'pions', frame: 'goldstone', groups: [], fields: [], goldstone: block, ...extra })
-const messages = (r: { success: boolean, error?: { issues: { message: string }[] } }) => r.error?.issues.map((i) => i.message) ?? []
+const messages = (r: { success: boolean; error?: { issues: { message: string }[] } }) => r.error?.issues.map((i) => i.message) ?? []
 
 describe('GoldstoneFrameSchema (common practice: schema validation)', () => {
   it('accepts SU(N)×SU(N)/SU(N) and O(N+1)/O(N) blocks, N = "general", the θ term and the names', () => {
@@ -24,7 +24,9 @@ describe('GoldstoneFrameSchema (common practice: schema validation)', () => {
   it('takes the singlet vector source on the chiral coset only', () => {
     const singlet = { scalar: true, vector: true, singletVector: true }
     expect(GoldstoneFrameSchema.safeParse({ ...block, sources: singlet }).success).toBe(true)
-    expect(messages(GoldstoneFrameSchema.safeParse({ ...block, coset: 'orthogonal', sources: singlet }))).toEqual(['Goldstone frame: the singlet vector source belongs to the chiral coset SU(N)×SU(N)/SU(N); for O(N+1)/O(N) switch it off'])
+    expect(messages(GoldstoneFrameSchema.safeParse({ ...block, coset: 'orthogonal', sources: singlet }))).toEqual([
+      'Goldstone frame: the singlet vector source belongs to the chiral coset SU(N)×SU(N)/SU(N); for O(N+1)/O(N) switch it off',
+    ])
   })
 })
 

@@ -18,7 +18,7 @@ function rewrite(text: string) {
 }
 
 describe('typed rewrites in the Goldstone frame (N = 3, p⁴)', () => {
-  it('the board\'s texts read back to the same operators', () => {
+  it("the board's texts read back to the same operators", () => {
     for (const op of [...stored.kept, ...stored.alternatives]) expect(operatorText(parseGoldstoneOperator(op.text))).toBe(op.text)
   })
 

@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import {
-  characterAdams, characterDimension, characterPower, characterProduct, characterSum, lorentzWeights, suWeights,
-} from '../../../server/engine/group/index'
+import { characterAdams, characterDimension, characterPower, characterProduct, characterSum, lorentzWeights, suWeights } from '../../../server/engine/group/index'
 
 /** Naive convolution written in the test: χ_{V⊗W} = χ_V χ_W (Fulton & Harris, §2.1). */
 function naiveProduct(a: Map<string, number>, b: Map<string, number>): Record<string, number> {
@@ -25,7 +23,16 @@ describe('characters', () => {
       [suWeights(8, [1, 0, 0, 0, 0, 0, 1]), suWeights(8, [0, 1, 0, 0, 0, 0, 0])],
       [lorentzWeights([2, 1]), lorentzWeights([1, 1])],
       // weights too large for the fixed packing of SU(8) (digits beyond ±63): string path
-      [new Map([['60,0,0,0,0,0,-60', 2], ['-1,0,0,0,0,0,1', 1]]), new Map([['10,0,0,0,0,0,-10', 1], ['0,0,0,0,0,0,0', -1]])],
+      [
+        new Map([
+          ['60,0,0,0,0,0,-60', 2],
+          ['-1,0,0,0,0,0,1', 1],
+        ]),
+        new Map([
+          ['10,0,0,0,0,0,-10', 1],
+          ['0,0,0,0,0,0,0', -1],
+        ]),
+      ],
       [new Map([['3,1', 1]]), new Map()],
     ]
     for (const [a, b] of pairs) expect(Object.fromEntries(characterProduct(a, b))).toEqual(naiveProduct(a, b))
@@ -34,7 +41,11 @@ describe('characters', () => {
 
   it('virtual characters cancel to zero entries, which are dropped (common practice)', () => {
     const d = suWeights(2, [1])
-    const diff = characterSum([[1, characterProduct(d, d)], [-1, suWeights(2, [2])], [-1, suWeights(2, [0])]])
+    const diff = characterSum([
+      [1, characterProduct(d, d)],
+      [-1, suWeights(2, [2])],
+      [-1, suWeights(2, [0])],
+    ])
     expect(diff.size).toBe(0)
   })
 

@@ -67,7 +67,13 @@ describe('suDimension and suWeights', () => {
   it('weights: SU(3) adjoint has six roots and the zero weight twice (common practice)', () => {
     const w = suWeights(3, [1, 1])
     expect(Object.fromEntries(w)).toEqual({
-      '1,1': 1, '2,-1': 1, '-1,2': 1, '1,-2': 1, '-2,1': 1, '-1,-1': 1, '0,0': 2,
+      '1,1': 1,
+      '2,-1': 1,
+      '-1,2': 1,
+      '1,-2': 1,
+      '-2,1': 1,
+      '-1,-1': 1,
+      '0,0': 2,
     })
     expect(Object.fromEntries(suWeights(2, [3]))).toEqual({ '3': 1, '1': 1, '-1': 1, '-3': 1 })
   })

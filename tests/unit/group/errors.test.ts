@@ -1,7 +1,21 @@
 import { describe, expect, it } from 'vitest'
 import {
-  characterPower, characterProduct, decomposeCharacter, multiplyIrreps, schurFunctorCharacter, lorentzIrrep, lorentzWeights, plethysm, productSingletCount,
-  singletCount, suDimension, suIndex, suReality, suWeights, symmetricPower, tensorProduct,
+  characterPower,
+  characterProduct,
+  decomposeCharacter,
+  multiplyIrreps,
+  schurFunctorCharacter,
+  lorentzIrrep,
+  lorentzWeights,
+  plethysm,
+  productSingletCount,
+  singletCount,
+  suDimension,
+  suIndex,
+  suReality,
+  suWeights,
+  symmetricPower,
+  tensorProduct,
 } from '../../../server/engine/group/index'
 import { EngineInputError } from '../../../server/engine/errors'
 import { engineErrorOf } from '../../support/engineErrors'
@@ -32,17 +46,29 @@ describe('bad input throws EngineInputError repeating the value (the function is
     expect(engineErrorOf(() => decomposeCharacter(3, new Map([['1,x', 1]])))).toMatchObject({ where: 'decomposeCharacter', message: '"1,x" is not a weight (whole numbers separated by commas)' })
     expect(engineErrorOf(() => characterPower(3, suWeights(3, [1, 0]), 0))).toMatchObject({ where: 'characterPower', message: 'The Adams power must be a positive whole number, not 0' })
     expect(engineErrorOf(() => characterPower(2, suWeights(3, [1, 0]), 2))).toMatchObject({ where: 'characterPower', message: `The weight "1,0" ${labels(2)}` })
-    expect(engineErrorOf(() => characterProduct(suWeights(2, [1]), lorentzWeights([1, 0])))).toMatchObject({ where: 'characterProduct', message: expect.stringMatching(/^Characters of different groups cannot be multiplied/) })
-    expect(engineErrorOf(() => productSingletCount([2, 2], new Map([['1', 1]])))).toMatchObject({ where: 'productSingletCount', message: 'The weight "1" does not have one part per factor of the 2-factor product group' })
+    expect(engineErrorOf(() => characterProduct(suWeights(2, [1]), lorentzWeights([1, 0])))).toMatchObject({
+      where: 'characterProduct',
+      message: expect.stringMatching(/^Characters of different groups cannot be multiplied/),
+    })
+    expect(engineErrorOf(() => productSingletCount([2, 2], new Map([['1', 1]])))).toMatchObject({
+      where: 'productSingletCount',
+      message: 'The weight "1" does not have one part per factor of the 2-factor product group',
+    })
     expect(engineErrorOf(() => decomposeCharacter(3, new Map([['1;0', 1]])))).toMatchObject({ where: 'decomposeCharacter', message: `The weight "1;0" ${labels(3)}` })
     expect(engineErrorOf(() => schurFunctorCharacter(3, new Map([['1', 1]]), [2]))).toMatchObject({ where: 'schurFunctorCharacter', message: `The weight "1" ${labels(3)}` })
     expect(engineErrorOf(() => multiplyIrreps(3, new Map([['1,0', 1]]), new Map([['1', 1]])))).toMatchObject({ where: 'multiplyIrreps', message: `The weight "1" ${labels(3)}` })
-    expect(engineErrorOf(() => singletCount(2, new Map([['0', 0.5]])))).toMatchObject({ where: 'singletCount', message: expect.stringMatching(/^The number of singlets \(0\.5\) is beyond exact arithmetic/) })
+    expect(engineErrorOf(() => singletCount(2, new Map([['0', 0.5]])))).toMatchObject({
+      where: 'singletCount',
+      message: expect.stringMatching(/^The number of singlets \(0\.5\) is beyond exact arithmetic/),
+    })
   })
 
   it('Lorentz spins', () => {
     expect(engineErrorOf(() => lorentzIrrep('1/3', 0))).toMatchObject({ where: 'lorentzIrrep', message: 'A spin must be a multiple of 1/2 from 0 to 20, but it is 1/3' })
     expect(() => lorentzIrrep(-1, 0)).toThrow('but it is -1')
-    expect(engineErrorOf(() => lorentzWeights([1, -1]))).toMatchObject({ where: 'lorentzWeights', message: 'A Lorentz representation is written [2j_L, 2j_R] with whole numbers from 0 to 40, but it is [1,-1]' })
+    expect(engineErrorOf(() => lorentzWeights([1, -1]))).toMatchObject({
+      where: 'lorentzWeights',
+      message: 'A Lorentz representation is written [2j_L, 2j_R] with whole numbers from 0 to 40, but it is [1,-1]',
+    })
   })
 })

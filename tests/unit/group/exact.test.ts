@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import {
-  ONE, ZERO, add, compare, div, equals, isZero, mul, neg, parseRational, rat, sub, toBigInt, toString,
-} from '../../../server/engine/exact/rational'
+import { ONE, ZERO, add, compare, div, equals, isZero, mul, neg, parseRational, rat, sub, toBigInt, toString } from '../../../server/engine/exact/rational'
 import { EngineInputError } from '../../../server/engine/errors'
 
 describe('exact rationals (common practice: normal form with positive denominator)', () => {

@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { FINITE_GROUPS, FINITE_KINDS } from '../../../shared/physics/finite/tables'
-import {
-  adamsClass, classAverage, classProduct, finiteConjugate, finiteGroup, finiteReality, finiteTensorProduct, irrepMultiplicity,
-} from '../../../server/engine/group/finite/finiteGroup'
+import { adamsClass, classAverage, classProduct, finiteConjugate, finiteGroup, finiteReality, finiteTensorProduct, irrepMultiplicity } from '../../../server/engine/group/finite/finiteGroup'
 import { eConj } from '../../../shared/physics/finite/eisenstein'
 import { EngineInputError } from '../../../server/engine/errors'
 
@@ -13,21 +11,25 @@ describe('character tables of the finite flavour groups (orthogonality checks; J
       expect(t.classes.reduce((s, c) => s + c.size, 0)).toBe(t.order)
       expect(t.irreps.length).toBe(t.classes.length)
       expect(t.irreps.reduce((s, r) => s + r.chi[0]![0] ** 2, 0)).toBe(t.order)
-      t.irreps.forEach((r, i) => t.irreps.forEach((q, j) => {
-        expect(classAverage(t, classProduct(r.chi, q.chi.map(eConj))), `${r.name}·${q.name}`).toBe(i === j ? 1 : 0)
-      }))
+      t.irreps.forEach((r, i) =>
+        t.irreps.forEach((q, j) => {
+          expect(classAverage(t, classProduct(r.chi, q.chi.map(eConj))), `${r.name}·${q.name}`).toBe(i === j ? 1 : 0)
+        }),
+      )
       // column orthogonality: Σ_χ χ(C) conj χ(C') = δ |G|/|C|
-      t.classes.forEach((c, a) => t.classes.forEach((_, b) => {
-        let re = 0
-        let im = 0
-        for (const r of t.irreps) {
-          const [x0, x1] = r.chi[a]!
-          const [y0, y1] = eConj(r.chi[b]!)
-          re += x0 * y0 - x1 * y1
-          im += x0 * y1 + x1 * y0 - x1 * y1
-        }
-        expect([re, im], `classes ${a}, ${b}`).toEqual([a === b ? t.order / c.size : 0, 0])
-      }))
+      t.classes.forEach((c, a) =>
+        t.classes.forEach((_, b) => {
+          let re = 0
+          let im = 0
+          for (const r of t.irreps) {
+            const [x0, x1] = r.chi[a]!
+            const [y0, y1] = eConj(r.chi[b]!)
+            re += x0 * y0 - x1 * y1
+            im += x0 * y1 + x1 * y0 - x1 * y1
+          }
+          expect([re, im], `classes ${a}, ${b}`).toEqual([a === b ? t.order / c.size : 0, 0])
+        }),
+      )
     })
 
     it(`${t.label}: power maps are consistent (ψ^r of every irrep is an integer combination of irreps, ψ^1 = id, ψ^{|G|} = dimension)`, () => {

@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import {
-  alternatingPower, symmetricPower, suCasimir, suConjugate, suCubicAnomaly, suDimension, suIndex, suReality, tensorProduct,
-} from '../../../server/engine/group/index'
+import { alternatingPower, symmetricPower, suCasimir, suConjugate, suCubicAnomaly, suDimension, suIndex, suReality, tensorProduct } from '../../../server/engine/group/index'
 import { type Rational, add, equals, mul, parseRational, rat, toString } from '../../../server/engine/exact/rational'
 
 const q = (s: string): string => toString(parseRational(s))
@@ -26,7 +24,14 @@ describe('conjugate and reality', () => {
   })
 
   it('self-conjugate irreps are exactly those with a singlet in R ⊗ R; real iff in Sym^2 (common practice)', () => {
-    for (const [n, a] of [[2, [1]], [2, [2]], [4, [0, 1, 0]], [3, [1, 1]], [6, [0, 0, 1, 0, 0]], [3, [1, 0]]] as const) {
+    for (const [n, a] of [
+      [2, [1]],
+      [2, [2]],
+      [4, [0, 1, 0]],
+      [3, [1, 1]],
+      [6, [0, 0, 1, 0, 0]],
+      [3, [1, 0]],
+    ] as const) {
       const r = suReality(n, a)
       const inProduct = tensorProduct(n, a, a).get(new Array(n - 1).fill(0).join(',')) ?? 0
       expect(inProduct, `${n}:${a}`).toBe(r === 'complex' ? 0 : 1)
@@ -49,7 +54,13 @@ function casimirFromCartan(n: number, a: number[]): Rational {
 describe('reality against the symmetric square', () => {
   it('self-conjugate R is real iff Sym^2 R holds the singlet, pseudoreal iff Λ^2 R does (Fulton & Harris, §3.5)', () => {
     const cases: Array<[number, number[]]> = [
-      [2, [3]], [2, [4]], [4, [0, 1, 0]], [4, [1, 0, 1]], [6, [0, 0, 1, 0, 0]], [6, [1, 0, 0, 0, 1]], [3, [2, 2]],
+      [2, [3]],
+      [2, [4]],
+      [4, [0, 1, 0]],
+      [4, [1, 0, 1]],
+      [6, [0, 0, 1, 0, 0]],
+      [6, [1, 0, 0, 0, 1]],
+      [3, [2, 2]],
     ]
     for (const [n, a] of cases) {
       const zero = new Array(n - 1).fill(0).join(',')
@@ -62,7 +73,13 @@ describe('reality against the symmetric square', () => {
 
 describe('Casimir, index, cubic anomaly', () => {
   it('C2 equals (λ, λ+2ρ)/2 from the inverse Cartan matrix (Slansky, Phys. Rep. 79 (1981) 1, eq. (4.14))', () => {
-    for (const [n, a] of [[2, [3]], [3, [2, 1]], [4, [1, 2, 0]], [5, [0, 1, 1, 0]], [8, [1, 0, 0, 2, 0, 0, 1]]] as const) {
+    for (const [n, a] of [
+      [2, [3]],
+      [3, [2, 1]],
+      [4, [1, 2, 0]],
+      [5, [0, 1, 1, 0]],
+      [8, [1, 0, 0, 2, 0, 0, 1]],
+    ] as const) {
       expect(equals(suCasimir(n, [...a]), casimirFromCartan(n, [...a])), `${n}:${a}`).toBe(true)
     }
     expect(toString(suCasimir(3, [1, 0]))).toBe('4/3') // C_F = 4/3 (common practice)
@@ -99,7 +116,11 @@ describe('Casimir, index, cubic anomaly', () => {
   })
 
   it('index and anomaly are additive-multiplicative on products: X(R⊗S) = dim R X(S) + dim S X(R) (Banks & Georgi 1976)', () => {
-    const pairs: Array<[number, number[], number[]]> = [[3, [1, 0], [2, 1]], [4, [0, 1, 0], [1, 0, 1]], [5, [1, 0, 0, 0], [0, 0, 1, 1]]]
+    const pairs: Array<[number, number[], number[]]> = [
+      [3, [1, 0], [2, 1]],
+      [4, [0, 1, 0], [1, 0, 1]],
+      [5, [1, 0, 0, 0], [0, 0, 1, 1]],
+    ]
     for (const [n, a, b] of pairs) {
       for (const f of [suIndex, suCubicAnomaly]) {
         let lhs = rat(0)

@@ -8,9 +8,7 @@ import { readFileSync } from 'node:fs'
 import { dirname, join } from 'node:path'
 import { fileURLToPath } from 'node:url'
 import { describe, expect, it } from 'vitest'
-import {
-  alternatingPower, plethysm, suDimension, suWeights, symmetricPower, tensorProduct,
-} from '../../../server/engine/group/index'
+import { alternatingPower, plethysm, suDimension, suWeights, symmetricPower, tensorProduct } from '../../../server/engine/group/index'
 
 // The fixture's shape, from its generator (a type-only import: the script does not run).
 import type { LieCase } from '../../fixtures/lie/generate'
@@ -23,12 +21,18 @@ const doc = JSON.parse(readFileSync(join(here, '../../fixtures/lie/lie-cases.jso
 
 function ours(c: LieCase): Record<string, number> {
   switch (c.op) {
-    case 'tensor': return Object.fromEntries(tensorProduct(c.n, c.a, c.b!))
-    case 'sym_tensor': return Object.fromEntries(symmetricPower(c.n, c.a, c.k!))
-    case 'alt_tensor': return Object.fromEntries(alternatingPower(c.n, c.a, c.k!))
-    case 'plethysm': return Object.fromEntries(plethysm(c.n, c.a, c.partition!))
-    case 'dim': return { dim: suDimension(c.n, c.a) }
-    case 'dom_char': return Object.fromEntries([...suWeights(c.n, c.a)].filter(([k]) => k.split(',').every((x) => Number(x) >= 0)))
+    case 'tensor':
+      return Object.fromEntries(tensorProduct(c.n, c.a, c.b!))
+    case 'sym_tensor':
+      return Object.fromEntries(symmetricPower(c.n, c.a, c.k!))
+    case 'alt_tensor':
+      return Object.fromEntries(alternatingPower(c.n, c.a, c.k!))
+    case 'plethysm':
+      return Object.fromEntries(plethysm(c.n, c.a, c.partition!))
+    case 'dim':
+      return { dim: suDimension(c.n, c.a) }
+    case 'dom_char':
+      return Object.fromEntries([...suWeights(c.n, c.a)].filter(([k]) => k.split(',').every((x) => Number(x) >= 0)))
   }
 }
 

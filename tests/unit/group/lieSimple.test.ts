@@ -10,9 +10,7 @@ import type { LieSimpleCase } from '../../fixtures/lie/generate-simple'
 import { RootSystem } from '../../../shared/physics/lie/rootSystem'
 import type { LieType } from '../../../shared/physics/lie/cartan'
 import { dominantWeights, lieDimension, lieWeights } from '../../../server/engine/group/lie/lieWeights'
-import {
-  lieAlternatingPower, lieConjugate, liePlethysm, lieReality, lieSingletCount, lieSymmetricPower, lieTensorProduct,
-} from '../../../server/engine/group/lie/lieIrrep'
+import { lieAlternatingPower, lieConjugate, liePlethysm, lieReality, lieSingletCount, lieSymmetricPower, lieTensorProduct } from '../../../server/engine/group/lie/lieIrrep'
 import { adjointLabels, rootSystemOf } from '../../../server/engine/group/lie/simpleGroups'
 import { characterProduct } from '../../../server/engine/group/character'
 import { suWeights } from '../../../server/engine/group/weights'
@@ -26,12 +24,18 @@ const rsOf = (g: string): RootSystem => RootSystem.of(g[0] as LieType, Number(g.
 function ours(c: LieSimpleCase): Record<string, number> {
   const rs = rsOf(c.g)
   switch (c.op) {
-    case 'tensor': return Object.fromEntries(lieTensorProduct(rs, c.a, c.b!))
-    case 'sym_tensor': return Object.fromEntries(lieSymmetricPower(rs, c.a, c.k!))
-    case 'alt_tensor': return Object.fromEntries(lieAlternatingPower(rs, c.a, c.k!))
-    case 'plethysm': return Object.fromEntries(liePlethysm(rs, c.a, c.partition!))
-    case 'dim': return { dim: lieDimension(rs, c.a) }
-    case 'dom_char': return Object.fromEntries(dominantWeights(rs, c.a))
+    case 'tensor':
+      return Object.fromEntries(lieTensorProduct(rs, c.a, c.b!))
+    case 'sym_tensor':
+      return Object.fromEntries(lieSymmetricPower(rs, c.a, c.k!))
+    case 'alt_tensor':
+      return Object.fromEntries(lieAlternatingPower(rs, c.a, c.k!))
+    case 'plethysm':
+      return Object.fromEntries(liePlethysm(rs, c.a, c.partition!))
+    case 'dim':
+      return { dim: lieDimension(rs, c.a) }
+    case 'dom_char':
+      return Object.fromEntries(dominantWeights(rs, c.a))
   }
 }
 
@@ -39,7 +43,11 @@ describe('LiE cross-check of B_n, C_n, D_n, G2, F4, E6, E7, E8', () => {
   it('covers every algebra and operation', () => {
     expect(doc.source).toMatch(/LiE \(Debian package lie\)/)
     for (const g of ['B2', 'B3', 'B4', 'C2', 'C3', 'C4', 'D4', 'D5', 'G2', 'F4', 'E6', 'E7', 'E8']) {
-      for (const op of ['tensor', 'sym_tensor', 'dim', 'dom_char']) expect(doc.cases.some((c) => c.g === g && c.op === op), `${g} ${op}`).toBe(true)
+      for (const op of ['tensor', 'sym_tensor', 'dim', 'dom_char'])
+        expect(
+          doc.cases.some((c) => c.g === g && c.op === op),
+          `${g} ${op}`,
+        ).toBe(true)
     }
   })
 
@@ -92,7 +100,12 @@ describe('group data of the simple groups', () => {
   })
 
   it('A_{n−1} through the general engine equals the SU(n) engine (weights of random irreps; two implementations)', () => {
-    for (const [n, labels] of [[3, [2, 1]], [4, [1, 0, 2]], [5, [0, 1, 1, 0]], [2, [5]]] as const) {
+    for (const [n, labels] of [
+      [3, [2, 1]],
+      [4, [1, 0, 2]],
+      [5, [0, 1, 1, 0]],
+      [2, [5]],
+    ] as const) {
       expect(lieWeights(RootSystem.of('A', n - 1), [...labels])).toEqual(suWeights(n, [...labels]))
     }
   })

@@ -1,7 +1,17 @@
 import { describe, expect, it } from 'vitest'
 import {
-  LORENTZ_IRREPS, characterProduct, decomposeProduct, lorentzConjugate, lorentzDecompose, lorentzDimension,
-  lorentzIrrep, lorentzSingletCount, lorentzTensorProduct, lorentzWeights, productCharacter, productSingletCount,
+  LORENTZ_IRREPS,
+  characterProduct,
+  decomposeProduct,
+  lorentzConjugate,
+  lorentzDecompose,
+  lorentzDimension,
+  lorentzIrrep,
+  lorentzSingletCount,
+  lorentzTensorProduct,
+  lorentzWeights,
+  productCharacter,
+  productSingletCount,
   suWeights,
 } from '../../../server/engine/group/index'
 

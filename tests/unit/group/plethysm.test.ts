@@ -1,12 +1,21 @@
 import { describe, expect, it } from 'vitest'
 import {
-  alternatingPower, characterDimension, decomposeCharacter, classSize, kostka, partitionsOf, plethysm, schurFunctorCharacter,
-  suDimension, suWeights, symmetricCharacter, symmetricPower,
+  alternatingPower,
+  characterDimension,
+  decomposeCharacter,
+  classSize,
+  kostka,
+  partitionsOf,
+  plethysm,
+  schurFunctorCharacter,
+  suDimension,
+  suWeights,
+  symmetricCharacter,
+  symmetricPower,
 } from '../../../server/engine/group/index'
 import { EngineCancelledError } from '../../../server/engine/errors'
 
-const dimOf = (n: number, m: Map<string, number>): number =>
-  [...m].reduce((s, [k, v]) => s + v * suDimension(n, k.split(',').map(Number)), 0)
+const dimOf = (n: number, m: Map<string, number>): number => [...m].reduce((s, [k, v]) => s + v * suDimension(n, k.split(',').map(Number)), 0)
 
 function binom(a: number, b: number): number {
   let r = 1
@@ -70,13 +79,23 @@ describe('plethysm, Sym^k, Λ^k', () => {
   })
 
   it('dimensions: Sym^k = C(d+k-1,k), Λ^k = C(d,k), S_λ = hook-content (Stanley EC2, Cor. 7.21.4)', () => {
-    for (const [n, a] of [[2, [2]], [3, [1, 1]], [4, [0, 1, 0]], [5, [1, 0, 0, 0]]] as const) {
+    for (const [n, a] of [
+      [2, [2]],
+      [3, [1, 1]],
+      [4, [0, 1, 0]],
+      [5, [1, 0, 0, 0]],
+    ] as const) {
       const d = suDimension(n, [...a])
       for (let k = 1; k <= 4; k++) {
         expect(dimOf(n, symmetricPower(n, [...a], k))).toBe(binom(d + k - 1, k))
         expect(dimOf(n, alternatingPower(n, [...a], k))).toBe(binom(d, k))
       }
-      for (const l of [[2, 1], [2, 2], [3, 1], [2, 1, 1]]) {
+      for (const l of [
+        [2, 1],
+        [2, 2],
+        [3, 1],
+        [2, 1, 1],
+      ]) {
         expect(dimOf(n, plethysm(n, [...a], l)), `${n}:${a} ${l}`).toBe(hookContent(l, d))
       }
     }
@@ -98,7 +117,11 @@ describe('plethysm, Sym^k, Λ^k', () => {
 
   it('two independent routes agree: weight-level Schur functor + Brauer–Klimyk vs irrep-level Brauer products (Fulton & Harris §25.3)', () => {
     const cases: Array<[number, number[], number[]]> = [
-      [3, [1, 1], [3, 1]], [4, [0, 1, 0], [2, 2]], [5, [1, 0, 0, 1], [2, 1]], [2, [3], [4, 2]], [6, [0, 0, 1, 0, 0], [1, 1, 1]],
+      [3, [1, 1], [3, 1]],
+      [4, [0, 1, 0], [2, 2]],
+      [5, [1, 0, 0, 1], [2, 1]],
+      [2, [3], [4, 2]],
+      [6, [0, 0, 1, 0, 0], [1, 1, 1]],
     ]
     for (const [n, a, l] of cases) {
       const viaWeights = decomposeCharacter(n, schurFunctorCharacter(n, suWeights(n, a), l))
@@ -108,9 +131,14 @@ describe('plethysm, Sym^k, Λ^k', () => {
 
   it('string-key fallback when weights are too large to pack: Sym^2{±50 ω1} of SU(8) (common practice)', () => {
     const w = '50,0,0,0,0,0,0'
-    const ch = new Map([[w, 1], ['-50,0,0,0,0,0,0', 1]])
+    const ch = new Map([
+      [w, 1],
+      ['-50,0,0,0,0,0,0', 1],
+    ])
     expect(Object.fromEntries(schurFunctorCharacter(8, ch, [2]))).toEqual({
-      '100,0,0,0,0,0,0': 1, '0,0,0,0,0,0,0': 1, '-100,0,0,0,0,0,0': 1,
+      '100,0,0,0,0,0,0': 1,
+      '0,0,0,0,0,0,0': 1,
+      '-100,0,0,0,0,0,0': 1,
     })
     expect(Object.fromEntries(schurFunctorCharacter(8, ch, [1, 1]))).toEqual({ '0,0,0,0,0,0,0': 1 })
   })

@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest'
 import {
-  type Character, characterPower, characterProduct, characterSum, decomposeCharacter, dynkinKey,
-  singletCount, suConjugate, suDimension, suWeights, tensorProduct,
+  type Character,
+  characterPower,
+  characterProduct,
+  characterSum,
+  decomposeCharacter,
+  dynkinKey,
+  singletCount,
+  suConjugate,
+  suDimension,
+  suWeights,
+  tensorProduct,
 } from '../../../server/engine/group/index'
 
 /** Seeded generator (mulberry32), common practice. */
@@ -82,7 +91,10 @@ describe('singletCount and decomposeCharacter', () => {
 
   it('virtual characters give signed counts: ψ^2 of SU(2) doublet squared (Sym^2 - Λ^2 of 2⊗2) (Macdonald I.8)', () => {
     const d = suWeights(2, [1])
-    const virt = characterSum([[1, characterProduct(d, d)], [-1, characterPower(2, d, 2)]]) // 2 Λ^2(2)
+    const virt = characterSum([
+      [1, characterProduct(d, d)],
+      [-1, characterPower(2, d, 2)],
+    ]) // 2 Λ^2(2)
     expect(singletCount(2, virt)).toBe(2)
     expect(singletCount(2, characterPower(2, d, 2))).toBe(-1) // ψ^2(2) = Sym^2 - Λ^2 = 3 - 1
   })

@@ -70,12 +70,14 @@ describe('one antiparticle convention, derived from the Dirac Lagrangian (Bodwin
   it('through 1/m³ the factor is (−1)^n for every P- and T-even operator, and the convention is stated once for the board and exports', () => {
     for (const o of res.orders) for (const a of o.antiparticle) expect(a.fixedBy!.factor).toBe((-1) ** o.order)
     expect(res.antiparticleNote).toBe(ANTIPARTICLE_CONVENTION)
-    expect(res.antiparticleNote).toContain('creates the antiparticle and carries the particle\'s own gauge representation')
+    expect(res.antiparticleNote).toContain("creates the antiparticle and carries the particle's own gauge representation")
     expect(res.fourFermionNote).toContain('χ creates the antiparticle and carries the colour of ψ')
   })
   it('the kinetic reduction is the sum of the published kinetic and Fermi terms with c_k = c_F = 1 (Caswell, Lepage, Phys. Lett. B 167 (1986) 437)', () => {
     const psi = reduction(1)[0]!
-    const onBasis = orderSpace(1, true).space.rewrite(psi.element).map((r) => mul(psi.coefficient, r))
+    const onBasis = orderSpace(1, true)
+      .space.rewrite(psi.element)
+      .map((r) => mul(psi.coefficient, r))
     const published = res.orders[0]!.conventional
     // −(s·D)²/2 = D²/2 + σ·B/2: the published rewrites (printed forms on the displayed basis) add up to it
     const total = new Map<string, string>()
@@ -85,16 +87,17 @@ describe('one antiparticle convention, derived from the Dirac Lagrangian (Bodwin
   })
 })
 
-describe('names: the antiparticle class and the published cards speak the theory\'s own field names', () => {
+describe("names: the antiparticle class and the published cards speak the theory's own field names", () => {
   const r = enumerateHeavy({ heavy: { particle: { name: 'N', charges: { X: '1' } }, antiparticle: { name: 'Nbar' }, gaugeGroup: 'X', maxOrder: 2 }, groups: [{ name: 'X', type: 'U1', gauge: true }] })
-  it('χ-copies print the antiparticle field, never the particle\'s (common practice)', () => {
-    for (const o of r.orders) for (const a of o.antiparticle) {
-      expect(a.latex.startsWith('\\bar{N}^\\dagger')).toBe(true)
-      expect(a.latex.endsWith('\\bar{N}')).toBe(true)
-      expect(a.terms[0]).toHaveProperty('Nbar', 1)
-    }
+  it("χ-copies print the antiparticle field, never the particle's (common practice)", () => {
+    for (const o of r.orders)
+      for (const a of o.antiparticle) {
+        expect(a.latex.startsWith('\\bar{N}^\\dagger')).toBe(true)
+        expect(a.latex.endsWith('\\bar{N}')).toBe(true)
+        expect(a.terms[0]).toHaveProperty('Nbar', 1)
+      }
   })
-  it('published cards and the leading operator use the particle\'s name, not ψ', () => {
+  it("published cards and the leading operator use the particle's name, not ψ", () => {
     const cards = r.orders.flatMap((o) => o.conventional)
     expect(cards.length).toBe(4)
     for (const c of [...cards, r.leading]) {

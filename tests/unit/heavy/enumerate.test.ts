@@ -49,7 +49,10 @@ describe('heavy fermion coupled to an abelian gauge field: bilinears ψ†…ψ 
   })
 
   it('reparametrization relations are attached to the operators they constrain (Luke, Manohar, Phys. Lett. B 286 (1992) 348; Manohar 1997; Hill et al. 2013)', () => {
-    const rel = (id: string) => byOrder(CONVENTIONAL_OPERATORS.find((c) => c.id === id)!.order).conventional.find((c) => c.id === id)!.relations.map((r) => r.relation)
+    const rel = (id: string) =>
+      byOrder(CONVENTIONAL_OPERATORS.find((c) => c.id === id)!.order)
+        .conventional.find((c) => c.id === id)!
+        .relations.map((r) => r.relation)
     expect(rel('kinetic')).toEqual(['c_k = 1'])
     expect(rel('spinOrbit')).toEqual(['c_S = 2 c_F − 1'])
     expect(rel('W2')).toEqual(['c_{W2} = c_{W1} − 1']) // with W2 printed as −c_{W2} D^iσ·BD^i/4m³ (thomasBmt.test.ts)
@@ -58,7 +61,10 @@ describe('heavy fermion coupled to an abelian gauge field: bilinears ψ†…ψ 
   })
 
   it('on the enumerated basis, exactly one 1/m² and one 1/m³ operator carry the gauge-EOM note (Darwin, c_M) (Manohar 1997)', () => {
-    const noted = (n: number) => byOrder(n).basis.filter((b) => b.gaugeEomNote).map((b) => b.gaugeEomNote!.split(':')[0])
+    const noted = (n: number) =>
+      byOrder(n)
+        .basis.filter((b) => b.gaugeEomNote)
+        .map((b) => b.gaugeEomNote!.split(':')[0])
     expect(noted(1)).toEqual([])
     expect(noted(2)).toEqual(['involves darwin'])
     expect(noted(3)).toEqual(['involves M'])

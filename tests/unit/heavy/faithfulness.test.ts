@@ -9,7 +9,9 @@ import { parseTheory } from '../../../server/engine/theory/parseTheory'
 
 describe('the gauge-field symbol with 0, 1, 2 insertions is faithful through 1/m³', () => {
   const cands = symmetricCandidates(3).map((c) => c.element)
-  const rels = relationStructures(4).map((s) => expandStructure(s)).filter((e) => e.size > 0)
+  const rels = relationStructures(4)
+    .map((s) => expandStructure(s))
+    .filter((e) => e.size > 0)
   it('dropping the two-insertion sector loses E² and B² (rank 5 < 7); adding a third sector changes nothing (common practice: field strengths first appear at n = their number)', () => {
     expect(new QuotientSpace(cands, rels, { sectors: [0, 1], seed: 5 }).dimension).toBe(5)
     expect(new QuotientSpace(cands, rels, { sectors: [0, 1, 2], seed: 5 }).dimension).toBe(7)

@@ -1,7 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import {
-  enumerateFourFermion, enumerateHeavy, fourFermionSpace, conventionalFour, cOddMixing, fourCombo, expandArrows, parseFour,
-} from '../../../server/engine/heavy'
+import { enumerateFourFermion, enumerateHeavy, fourFermionSpace, conventionalFour, cOddMixing, fourCombo, expandArrows, parseFour } from '../../../server/engine/heavy'
 import { conjugateFourCombo, daggerFourCombo, fourCandidates, type FourCombo } from '../../../server/engine/heavy/fourStructure'
 import { conjugatePoint, evalFourCombo, pointTables, randomFourPoint } from '../../../server/engine/heavy/fourVertex'
 import { PrimeField, SeededRandom, workingPrimes } from '../../../server/engine/finite'
@@ -28,13 +26,38 @@ describe(`four-fermion contact operators at 1/m² (${BBL})`, () => {
   })
   it('Fierz: (ψ†ψ)(χ†χ) = −½[ψ†χ χ†ψ + ψ†σχ·χ†σψ] for Grassmann fields (common practice: Fierz identity δδ = ½(δδ + σ·σ) crossed)', () => {
     const s = fourFermionSpace(2)
-    expect(s.rankOf([fourCombo([[2, ''], [1, 'ex'], [1, 'ex s1_i s2_i']])])).toBe(0)
-    expect(s.rankOf([fourCombo([[2, ''], [-1, 'ex'], [1, 'ex s1_i s2_i']])])).toBe(1)
+    expect(
+      s.rankOf([
+        fourCombo([
+          [2, ''],
+          [1, 'ex'],
+          [1, 'ex s1_i s2_i'],
+        ]),
+      ]),
+    ).toBe(0)
+    expect(
+      s.rankOf([
+        fourCombo([
+          [2, ''],
+          [-1, 'ex'],
+          [1, 'ex s1_i s2_i'],
+        ]),
+      ]),
+    ).toBe(1)
   })
   it('colour Fierz: (ψ†T^Aψ)(χ†T^Aχ) = −½[ψ†χ χ†ψ-type with spin Fierz] − (1/2N)(ψ†ψ)(χ†χ), checked for N = 3 (common practice: T^A_ij T^A_kl = ½(δ_il δ_kj − δ_ij δ_kl/N))', () => {
     const s = fourFermionSpace(2, { colorN: 3 })
     // 12·oct + 2·(ψ†ψχ†χ) = 6·[crossed colour] = −3·[ex + ex σσ] ; crossed colour = singlet exchanged ordering
-    expect(s.rankOf([fourCombo([[12, 'oct'], [2, ''], [3, 'ex'], [3, 'ex s1_i s2_i']])])).toBe(0)
+    expect(
+      s.rankOf([
+        fourCombo([
+          [12, 'oct'],
+          [2, ''],
+          [3, 'ex'],
+          [3, 'ex s1_i s2_i'],
+        ]),
+      ]),
+    ).toBe(0)
   })
 })
 
@@ -46,7 +69,7 @@ describe(`four-fermion contact operators at 1/m⁴ against the dimension-8 list 
     expect(u1.conventionalRank).toBe(7)
     expect(u1.conventionalSpansRestFrame).toBe(true)
   })
-  it('in a general frame: 12 operators (hand derivation, common practice: SO(3) Clebsch–Gordan count in q, q\', P with †, T, C); the published seven lie inside but miss the 5 depending on the pair momentum P', () => {
+  it("in a general frame: 12 operators (hand derivation, common practice: SO(3) Clebsch–Gordan count in q, q', P with †, T, C); the published seven lie inside but miss the 5 depending on the pair momentum P", () => {
     expect(u1.count).toBe(12)
     expect(u1.conventionalInBasis).toBe(true)
     expect(u1.conventionalSpansBasis).toBe(false)

@@ -12,33 +12,40 @@ const u1 = (coupled: boolean) => ({ kind: 'u1' as const, coupled })
 
 describe('several gauge groups at once', () => {
   it('a heavy quark in QCD and QED (SU(3) × U(1)) couples to both; the SU(3) factor comes first', () => {
-    const g = heavyGaugeSetup(
-      { particle: { name: 'Q', reps: { C: [1, 0] }, charges: { QED: '2/3' } }, gaugeGroup: 'C', maxOrder: 2 },
-      [{ name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'QED', type: 'U1', gauge: true }],
-    )
+    const g = heavyGaugeSetup({ particle: { name: 'Q', reps: { C: [1, 0] }, charges: { QED: '2/3' } }, gaugeGroup: 'C', maxOrder: 2 }, [
+      { name: 'C', type: 'SU', n: 3, gauge: true },
+      { name: 'QED', type: 'U1', gauge: true },
+    ])
     expect(g.names).toEqual(['C', 'QED'])
     expect(g.setup.factors).toEqual([{ kind: 'su', coupled: true }, u1(true)])
   })
-  it('SU(3) × U(1): 3, 4, 19 operators at 1/m, 1/m², 1/m³ — each factor\'s σ·B, Darwin and spin–orbit, and at 1/m³ the 11 of SU(3), the 4 linear and 2 quadratic of U(1), and the mixed E_g·E_γ, B_g·B_γ (hand derivation from the single-factor lists of Manohar, Phys. Rev. D 56 (1997) 230)', { timeout: 300_000 }, () => {
-    expect(dims({ setup: { colorN: 3, factors: [{ kind: 'su', coupled: true }, u1(true)] }, parity: true, timeReversal: true }, [1, 2, 3])).toEqual([3, 4, 19])
-  })
+  it(
+    "SU(3) × U(1): 3, 4, 19 operators at 1/m, 1/m², 1/m³ — each factor's σ·B, Darwin and spin–orbit, and at 1/m³ the 11 of SU(3), the 4 linear and 2 quadratic of U(1), and the mixed E_g·E_γ, B_g·B_γ (hand derivation from the single-factor lists of Manohar, Phys. Rev. D 56 (1997) 230)",
+    { timeout: 300_000 },
+    () => {
+      expect(dims({ setup: { colorN: 3, factors: [{ kind: 'su', coupled: true }, u1(true)] }, parity: true, timeReversal: true }, [1, 2, 3])).toEqual([3, 4, 19])
+    },
+  )
   it('U(1) × U(1): 3, 4, 15 (hand derivation: D⁴, four linear terms per field, E₁², E₂², E₁·E₂, B₁², B₂², B₁·B₂)', () => {
     expect(dims({ setup: { colorN: 1, factors: [u1(true), u1(true)] }, parity: true, timeReversal: true }, [1, 2, 3])).toEqual([3, 4, 15])
   })
   it('a neutral particle with a photon in the roster keeps its magnetic moment σ·B and polarizabilities: 2, 2, 7 (common practice: the neutron in NRQED)', () => {
     const r = enumerateHeavy({
       heavy: { particle: { name: 'n', charges: { QED: '0' } }, gaugeGroup: 'QED', maxOrder: 3 },
-      groups: [{ name: 'QED', type: 'U1', gauge: true }], fields: [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' } as never],
+      groups: [{ name: 'QED', type: 'U1', gauge: true }],
+      fields: [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' } as never],
     })
     expect(r.charged).toBe(false)
     expect(r.gaugeGroups).toEqual([{ name: 'QED', kind: 'u1', coupled: false }])
     expect(r.orders.map((o) => o.count)).toEqual([2, 2, 7])
   })
   it('two non-abelian groups are refused with both named', () => {
-    expect(() => heavyGaugeSetup(
-      { particle: { name: 'Q', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 },
-      [{ name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'W', type: 'SU', n: 2, gauge: true }],
-    )).toThrow('The heavy particle is charged under two non-abelian groups (C, W); one SU(N) together with any number of U(1) groups is supported')
+    expect(() =>
+      heavyGaugeSetup({ particle: { name: 'Q', reps: { C: [1, 0], W: [1] } }, gaugeGroup: 'C', maxOrder: 2 }, [
+        { name: 'C', type: 'SU', n: 3, gauge: true },
+        { name: 'W', type: 'SU', n: 2, gauge: true },
+      ]),
+    ).toThrow('The heavy particle is charged under two non-abelian groups (C, W); one SU(N) together with any number of U(1) groups is supported')
   })
 })
 
@@ -74,9 +81,18 @@ function fromWords(N: number): number {
   const els = seeds.flatMap((b) => {
     const sym = simplifyCombo([...b, ...thetaCombo(b)])
     if (!sym.length) return []
-    return [false, true].map((anti) => simplifyCombo([...sym, ...daggerCombo(sym).map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))])).filter((c) => c.length).map((c) => expandCombo(c))
+    return [false, true]
+      .map((anti) => simplifyCombo([...sym, ...daggerCombo(sym).map((t) => ({ coef: anti ? -t.coef : t.coef, s: t.s }))]))
+      .filter((c) => c.length)
+      .map((c) => expandCombo(c))
   })
-  return new QuotientSpace(els, relationStructures(5).map((s) => expandStructure(s)).filter((e) => e.size > 0), { colorN: N }).dimension
+  return new QuotientSpace(
+    els,
+    relationStructures(5)
+      .map((s) => expandStructure(s))
+      .filter((e) => e.size > 0),
+    { colorN: N },
+  ).dimension
 }
 
 describe('SU(N) to 1/m⁴ (compare Gunawardana and Paz, JHEP 07 (2017) 137; Kobach and Pal, Phys. Lett. B 772 (2017) 225)', () => {
@@ -84,8 +100,12 @@ describe('SU(N) to 1/m⁴ (compare Gunawardana and Paz, JHEP 07 (2017) 137; Koba
     expect(orderSpaceFor(4, defaultConfig(2)).space.dimension).toBe(18)
     expect(fromWords(2)).toBe(18)
   })
-  it('SU(3) at 1/m⁴: 25 P- and T-even operators (the D/T-word check gives 25 too, run in the benchmarks); 12 for U(1) (Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017: c_X1 … c_X12, from memory)', { timeout: 300_000 }, () => {
-    expect(orderSpaceFor(4, defaultConfig(3)).space.dimension).toBe(25)
-    expect(orderSpaceFor(4, defaultConfig(1)).space.dimension).toBe(12)
-  })
+  it(
+    'SU(3) at 1/m⁴: 25 P- and T-even operators (the D/T-word check gives 25 too, run in the benchmarks); 12 for U(1) (Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017: c_X1 … c_X12, from memory)',
+    { timeout: 300_000 },
+    () => {
+      expect(orderSpaceFor(4, defaultConfig(3)).space.dimension).toBe(25)
+      expect(orderSpaceFor(4, defaultConfig(1)).space.dimension).toBe(12)
+    },
+  )
 })

@@ -6,9 +6,20 @@ import type { LightCombo } from '../../../server/engine/heavy/lightStructure'
 import { EngineInputError } from '../../../server/engine/errors'
 
 const qed = [{ name: 'QED', type: 'U1', gauge: true }]
-const electron: TheoryFieldLike[] = [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' }, { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } }, { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } }]
+const electron: TheoryFieldLike[] = [
+  { name: 'A', lorentz: 'field-strength', gaugeOf: 'QED' },
+  { name: 'eL', lorentz: 'left-weyl', charges: { QED: '-1' } },
+  { name: 'eR', lorentz: 'right-weyl', charges: { QED: '-1' } },
+]
 const muon = (over: Partial<HeavyLightInput> = {}): HeavyLightInput => ({
-  particle: 'mu', heavy: { reps: {}, charges: { QED: '-1' } }, fields: electron, groups: qed, maxOrder: 2, parity: true, timeReversal: true, ...over,
+  particle: 'mu',
+  heavy: { reps: {}, charges: { QED: '-1' } },
+  fields: electron,
+  groups: qed,
+  maxOrder: 2,
+  parity: true,
+  timeReversal: true,
+  ...over,
 })
 const tauOf = (c: LightCombo | undefined) => c![0]!.s.tau
 
@@ -41,10 +52,19 @@ describe('heavy–light contact operators: a heavy lepton or nucleus with light 
 
 describe('a static heavy source and a light real scalar', () => {
   const scalar = (maxOrder: number, parity = true): HeavyLightInput => ({
-    particle: 'N', heavy: { reps: {}, charges: {} }, fields: [{ name: 'phi', lorentz: 'scalar', real: true }], groups: [], maxOrder, parity, timeReversal: true,
+    particle: 'N',
+    heavy: { reps: {}, charges: {} },
+    fields: [{ name: 'phi', lorentz: 'scalar', real: true }],
+    groups: [],
+    maxOrder,
+    parity,
+    timeReversal: true,
   })
   it('order 0: ψ†ψφ; order 1: ψ†ψφ² (hand derivation, common practice)', () => {
-    expect(enumerateHeavyLight(scalar(1)).classes.map((c) => [c.key, c.count])).toEqual([['N* N phi (1/m^0)', 1], ['N* N phi phi (1/m^1)', 1]])
+    expect(enumerateHeavyLight(scalar(1)).classes.map((c) => [c.key, c.count])).toEqual([
+      ['N* N phi (1/m^0)', 1],
+      ['N* N phi phi (1/m^1)', 1],
+    ])
   })
   it('a true scalar has no P-even σ·∇φ coupling; without P (a pseudoscalar such as the pion) ψ†σ·∇φψ appears at order 1 (common practice: the axial pion–nucleon coupling)', () => {
     const withP = enumerateHeavyLight(scalar(1)).classes.filter((c) => c.order === 1 && c.content === 'phi')
@@ -57,7 +77,10 @@ describe('a static heavy source and a light real scalar', () => {
 
 describe('colour: a heavy quark with a light quark', () => {
   const su3 = [{ name: 'C', type: 'SU', n: 3, gauge: true }]
-  const quark: TheoryFieldLike[] = [{ name: 'qL', lorentz: 'left-weyl', reps: { C: [1, 0] } }, { name: 'qR', lorentz: 'right-weyl', reps: { C: [1, 0] } }]
+  const quark: TheoryFieldLike[] = [
+    { name: 'qL', lorentz: 'left-weyl', reps: { C: [1, 0] } },
+    { name: 'qR', lorentz: 'right-weyl', reps: { C: [1, 0] } },
+  ]
   const input: HeavyLightInput = { particle: 'Q', heavy: { reps: { C: [1, 0] }, charges: {} }, fields: quark, groups: su3, maxOrder: 2, parity: true, timeReversal: true }
   it('two colour structures (1⊗1 and T^a⊗T^a, i.e. δδ and crossed δδ) double the four spin structures: 8 at 1/m² (common practice: 3⊗3̄⊗3⊗3̄ has two singlets)', () => {
     expect(enumerateHeavyLight(input).classes.map((c) => c.count)).toEqual([8])

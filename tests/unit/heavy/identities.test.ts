@@ -15,8 +15,22 @@ describe('identities modulo the heavy-field EOM iD_tψ = 0 and IBP', () => {
   })
   it('{D_i, E_i} vanishes and D_i D_t D_i equals ½[D·E] exactly (Manohar, Phys. Rev. D 56 (1997) 230, use of the EOM)', () => {
     const s = orderSpace(2, true).space
-    expect(s.isNull(el([[1, 'D_i E_i'], [1, 'E_i D_i']]))).toBe(true)
-    expect(s.isNull(el([[1, 'D_i E_i'], [-1, 'E_i D_i']]))).toBe(false)
+    expect(
+      s.isNull(
+        el([
+          [1, 'D_i E_i'],
+          [1, 'E_i D_i'],
+        ]),
+      ),
+    ).toBe(true)
+    expect(
+      s.isNull(
+        el([
+          [1, 'D_i E_i'],
+          [-1, 'E_i D_i'],
+        ]),
+      ),
+    ).toBe(false)
     const r = rewriteHeavy(combo([[1, 'D_i T D_i']]), 2)
     const darwin = rewriteHeavy(CONVENTIONAL_OPERATORS.find((c) => c.id === 'darwin')!.combo, 2)
     // D_iD_tD_i ≡ ½ [D_i, E_i] (hand derivation, common practice)
@@ -24,7 +38,14 @@ describe('identities modulo the heavy-field EOM iD_tψ = 0 and IBP', () => {
   })
   it('σ·(D×E + E×D) = σ·(∇×E) = −σ·∂_tB vanishes by Faraday and IBP+EOM (common practice)', () => {
     const s = orderSpace(2, true).space
-    expect(s.isNull(el([[1, 's_k eps_kij D_i E_j'], [1, 's_k eps_kij E_i D_j']]))).toBe(true)
+    expect(
+      s.isNull(
+        el([
+          [1, 's_k eps_kij D_i E_j'],
+          [1, 's_k eps_kij E_i D_j'],
+        ]),
+      ),
+    ).toBe(true)
   })
   it('E² ≡ −D_iD_tD_tD_i and σ·(E×E) = 0 for an abelian field (common practice)', () => {
     const s = orderSpace(3, true).space
@@ -48,7 +69,10 @@ describe('symmetries of the published operators (Manohar 1997: Hermitian, P- and
     })
   }
   it('a T-odd structure is Θ-odd: σ·(D×E) + σ·(E×D) (common practice)', () => {
-    const o = combo([[1, 's_k eps_kij D_i E_j'], [1, 's_k eps_kij E_i D_j']])
+    const o = combo([
+      [1, 's_k eps_kij D_i E_j'],
+      [1, 's_k eps_kij E_i D_j'],
+    ])
     expect(addScaled(expandCombo(thetaCombo(o)), expandCombo(o)).size).toBe(0)
   })
 })

@@ -7,7 +7,7 @@ const su = (n: number, rep: number[]) => ({
 })
 
 describe('heavy quark in the fundamental of SU(N) (NRQCD-type bilinears)', () => {
-  it('SU(3): 2, 2 and 11 operators at 1/m, 1/m², 1/m³ — c_k, c_F; c_D, c_S; c_4, c_W1, c_W2, c_p\'p, c_M, c_A1–c_A4, c_B1, c_B2 (from memory: Manohar, Phys. Rev. D 56 (1997) 230)', () => {
+  it("SU(3): 2, 2 and 11 operators at 1/m, 1/m², 1/m³ — c_k, c_F; c_D, c_S; c_4, c_W1, c_W2, c_p'p, c_M, c_A1–c_A4, c_B1, c_B2 (from memory: Manohar, Phys. Rev. D 56 (1997) 230)", () => {
     const r = enumerateHeavy(su(3, [1, 0]))
     expect(r.colorN).toBe(3)
     expect(r.orders.map((o) => o.count)).toEqual([2, 2, 11])
@@ -34,9 +34,10 @@ describe('heavy quark in the fundamental of SU(N) (NRQCD-type bilinears)', () =>
     }
     const prop = (rows: ReturnType<typeof pair>) => {
       // b = λ a for some λ: all 2×2 minors vanish
-      for (const [a1, b1] of rows) for (const [a2, b2] of rows) {
-        if (a1.num * b2.num * a2.den * b1.den !== a2.num * b1.num * a1.den * b2.den) return false
-      }
+      for (const [a1, b1] of rows)
+        for (const [a2, b2] of rows) {
+          if (a1.num * b2.num * a2.den * b1.den !== a2.num * b1.num * a1.den * b2.den) return false
+        }
       return true
     }
     expect(prop(pair(2))).toBe(true)
@@ -50,9 +51,13 @@ describe('heavy quark in the fundamental of SU(N) (NRQCD-type bilinears)', () =>
 describe('published forms and relations for SU(N) (Manohar, Phys. Rev. D 56 (1997) 230, NRQCD part)', () => {
   const r3 = enumerateHeavy(su(3, [1, 0]))
   it('SU(3): the published lists span exactly at 1/m, 1/m², 1/m³ (11 at 1/m³: the abelian nine with colour-matrix E, B, plus tr(B² − E²), tr E², σ·(B×B − E×E), σ·(E×E))', () => {
-    expect(r3.orders.map((o) => [o.conventional.length, o.conventionalSpansBasis, o.conventionalRedundant])).toEqual([[2, true, 0], [2, true, 0], [11, true, 0]])
+    expect(r3.orders.map((o) => [o.conventional.length, o.conventionalSpansBasis, o.conventionalRedundant])).toEqual([
+      [2, true, 0],
+      [2, true, 0],
+      [11, true, 0],
+    ])
   })
-  it('the reparametrization relations are those of the abelian case (c_k = 1, c_S = 2c_F − 1, c_4 = 1, c_W2 = c_W1 − 1, c_p\'p = c_F − 1)', () => {
+  it("the reparametrization relations are those of the abelian case (c_k = 1, c_S = 2c_F − 1, c_4 = 1, c_W2 = c_W1 − 1, c_p'p = c_F − 1)", () => {
     const rel = r3.orders.flatMap((o) => o.conventional).flatMap((c) => c.relations.map((x) => x.relation))
     expect(rel).toEqual(['c_k = 1', 'c_S = 2 c_F − 1', 'c_4 = 1', 'c_{W2} = c_{W1} − 1', "c_{p'p} = c_F − 1"])
   })

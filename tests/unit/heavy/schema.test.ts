@@ -21,10 +21,16 @@ describe('HeavyFrameSchema (common practice: schema validation)', () => {
   })
 })
 
-describe('a theory\'s heavy block against its groups and roster (common practice: schema validation)', () => {
+describe("a theory's heavy block against its groups and roster (common practice: schema validation)", () => {
   const theory = (heavy: Record<string, unknown>) => ({
-    name: 'heavy test', frame: 'heavy',
-    groups: [{ name: 'X', type: 'U1', gauge: true }, { name: 'C', type: 'SU', n: 3, gauge: true }, { name: 'Bno', type: 'U1', gauge: false }, { name: 'P', type: 'Z', n: 2, gauge: true }],
+    name: 'heavy test',
+    frame: 'heavy',
+    groups: [
+      { name: 'X', type: 'U1', gauge: true },
+      { name: 'C', type: 'SU', n: 3, gauge: true },
+      { name: 'Bno', type: 'U1', gauge: false },
+      { name: 'P', type: 'Z', n: 2, gauge: true },
+    ],
     fields: [{ name: 'A', lorentz: 'field-strength', gaugeOf: 'X' }],
     heavy: { particle: { name: 'psi', charges: { X: '1' } }, gaugeGroup: 'X', maxOrder: 2, ...heavy },
   })
@@ -43,13 +49,22 @@ describe('a theory\'s heavy block against its groups and roster (common practice
     expect(issues({ gaugeGroup: 'Bno' })).toEqual([{ path: 'heavy.gaugeGroup', message: 'Heavy particle, gauge group: Bno is a global symmetry (not gauged); choose a gauge group' }])
     expect(issues({ gaugeGroup: 'P' })[0]!.message).toBe('Heavy particle, gauge group: P is the discrete group Z_2; choose a U(1) or SU(n) gauge group')
   })
-  it('checks the particle\'s labels and charges like a roster field\'s', () => {
-    expect(issues({ particle: { name: 'psi', charges: { Y: '1' } } })).toEqual([{ path: 'heavy.particle.charges.Y', message: 'Heavy particle, particle field, charge under Y: the theory has no symmetry named "Y"; declare it, or remove this entry' }])
-    expect(issues({ particle: { name: 'psi', reps: { C: [1] } } })[0]).toEqual({ path: 'heavy.particle.reps.C', message: 'Heavy particle, particle field, representation under C: SU(3) takes 2 Dynkin labels, but [1] has 1' })
+  it("checks the particle's labels and charges like a roster field's", () => {
+    expect(issues({ particle: { name: 'psi', charges: { Y: '1' } } })).toEqual([
+      { path: 'heavy.particle.charges.Y', message: 'Heavy particle, particle field, charge under Y: the theory has no symmetry named "Y"; declare it, or remove this entry' },
+    ])
+    expect(issues({ particle: { name: 'psi', reps: { C: [1] } } })[0]).toEqual({
+      path: 'heavy.particle.reps.C',
+      message: 'Heavy particle, particle field, representation under C: SU(3) takes 2 Dynkin labels, but [1] has 1',
+    })
     expect(issues({ particle: { name: 'psi', charges: { C: '1' } } })[0]!.path).toBe('heavy.particle.charges.C')
   })
   it('refuses a Pauli field named like a roster field or like D', () => {
-    expect(issues({ particle: { name: 'A' } })).toEqual([{ path: 'heavy.particle.name', message: 'Heavy particle, particle field, name is already the name of a field of the roster; choose another name than "A"' }])
-    expect(issues({ antiparticle: { name: 'D' } })).toEqual([{ path: 'heavy.antiparticle.name', message: 'Heavy particle, antiparticle field, name cannot be "D", the covariant derivative; choose another name' }])
+    expect(issues({ particle: { name: 'A' } })).toEqual([
+      { path: 'heavy.particle.name', message: 'Heavy particle, particle field, name is already the name of a field of the roster; choose another name than "A"' },
+    ])
+    expect(issues({ antiparticle: { name: 'D' } })).toEqual([
+      { path: 'heavy.antiparticle.name', message: 'Heavy particle, antiparticle field, name cannot be "D", the covariant derivative; choose another name' },
+    ])
   })
 })

@@ -7,7 +7,11 @@ import { add, mul, neg, parseRational, rat, sub, toString, ZERO, type Rational }
 // Constant fields, linear order in B for the spin terms: every D acts as ip (their commutators
 // bring a second field strength). Dictionary of the real algebra (algebra.ts): D → ip,
 // ℰ = igE, ℬ = −igB, s = iσ, couplings absorbed (g = 1), units m = 1.
-interface Fields { p: number[]; E: number[]; B: number[] }
+interface Fields {
+  p: number[]
+  E: number[]
+  B: number[]
+}
 /** Value as (unit part, σ_x, σ_y, σ_z) of an operator's printed form; D_t never appears here. */
 type Value = [Rational, Rational, Rational, Rational]
 
@@ -17,7 +21,10 @@ function structureValue(s: Structure, f: Fields): Value {
   const idx = new Array<number>(slots).fill(1)
   for (let n = 0; n < 3 ** slots; n++) {
     let m = n
-    for (let j = 0; j < slots; j++) { idx[j] = (m % 3) + 1; m = Math.floor(m / 3) }
+    for (let j = 0; j < slots; j++) {
+      idx[j] = (m % 3) + 1
+      m = Math.floor(m / 3)
+    }
     let w = 1
     for (const [a, b] of s.pairs) if (idx[a] !== idx[b]) w = 0
     if (s.eps) w *= levi(idx[s.eps[0]]!, idx[s.eps[1]]!, idx[s.eps[2]]!)
@@ -77,17 +84,22 @@ function bmtMismatch(a: Rational, cW1: Rational, f: Fields, ops: Record<string, 
   })
 }
 
-const FIELDS: Fields[] = [{ p: [2, -1, 3], E: [0, 0, 0], B: [1, 4, -2] }, { p: [-3, 5, 1], E: [0, 0, 0], B: [2, -1, 1] }]
+const FIELDS: Fields[] = [
+  { p: [2, -1, 3], E: [0, 0, 0], B: [1, 4, -2] },
+  { p: [-3, 5, 1], E: [0, 0, 0], B: [2, -1, 1] },
+]
 const MOMENTS = ['0', '1/3', '-2/5', '7']
 const ALL = Object.fromEntries(CONVENTIONAL_OPERATORS.map((c) => [c.id, c]))
 
 describe('Lorentz invariance of the printed spin terms: Thomas–BMT precession in a constant magnetic field (Bargmann, Michel, Telegdi, Phys. Rev. Lett. 2 (1959) 435; expansion of Jackson, Classical Electrodynamics, 3rd ed., eq. (11.170), from memory)', () => {
-  it('with c_F = 1 + a, c_W2 = c_W1 − 1 and c_p\'p = c_F − 1 (Manohar, Phys. Rev. D 56 (1997) 230), the printed terms give exactly the BMT spin Hamiltonian: p²σ·B independent of a', () => {
-    for (const f of FIELDS) for (const a of MOMENTS) for (const cW1 of ['1', '7/5', '-3']) {
-      expect(bmtMismatch(parseRational(a), parseRational(cW1), f, ALL).map(toString)).toEqual(['0', '0', '0'])
-    }
+  it("with c_F = 1 + a, c_W2 = c_W1 − 1 and c_p'p = c_F − 1 (Manohar, Phys. Rev. D 56 (1997) 230), the printed terms give exactly the BMT spin Hamiltonian: p²σ·B independent of a", () => {
+    for (const f of FIELDS)
+      for (const a of MOMENTS)
+        for (const cW1 of ['1', '7/5', '-3']) {
+          expect(bmtMismatch(parseRational(a), parseRational(cW1), f, ALL).map(toString)).toEqual(['0', '0', '0'])
+        }
   })
-  it('the opposite printed sign of D^iσ·BD^i (+c_W2) with the same relation makes the p²σ·B coefficient depend on a (the referee\'s finding)', () => {
+  it("the opposite printed sign of D^iσ·BD^i (+c_W2) with the same relation makes the p²σ·B coefficient depend on a (the referee's finding)", () => {
     const plus = { ...op('W2'), sign: 1 as const }
     const mismatch = bmtMismatch(parseRational('1/3'), parseRational('7/5'), FIELDS[0]!, { ...ALL, W2: plus })
     expect(mismatch.some((x) => toString(x) !== '0')).toBe(true)
@@ -101,10 +113,16 @@ describe('Lorentz invariance of the printed spin terms: Thomas–BMT precession 
 describe('the E² terms (Manohar 1997; Hill, Lee, Paz, Solon, Phys. Rev. D 87 (2013) 053017)', () => {
   const f: Fields = { p: [0, 0, 0], E: [3, -1, 2], B: [1, 2, -2] }
   it('c_A1 multiplies the Lorentz scalar B² − E² = ½F_{μν}F^{μν}, with F_{0i} = E_i, F_{ij} = −ε_ijk B_k and metric (+,−,−,−) (common practice)', () => {
-    const F = [[0, ...f.E], [-f.E[0]!, 0, 0, 0], [-f.E[1]!, 0, 0, 0], [-f.E[2]!, 0, 0, 0]]
-    for (let i = 1; i <= 3; i++) for (let j = 1; j <= 3; j++) {
-      F[i]![j] = -[1, 2, 3].reduce((s, k) => s + levi(i, j, k) * f.B[k - 1]!, 0)
-    }
+    const F = [
+      [0, ...f.E],
+      [-f.E[0]!, 0, 0, 0],
+      [-f.E[1]!, 0, 0, 0],
+      [-f.E[2]!, 0, 0, 0],
+    ]
+    for (let i = 1; i <= 3; i++)
+      for (let j = 1; j <= 3; j++) {
+        F[i]![j] = -[1, 2, 3].reduce((s, k) => s + levi(i, j, k) * f.B[k - 1]!, 0)
+      }
     const eta = [1, -1, -1, -1]
     let ff = 0
     for (let m = 0; m < 4; m++) for (let n = 0; n < 4; n++) ff += F[m]![n]! * F[m]![n]! * eta[m]! * eta[n]!

@@ -65,6 +65,14 @@ describe('velocity rule (Bodwin, Braaten, Lepage, Phys. Rev. D 51 (1995) 1125, T
   })
   it('a velocity rule given without weights uses the literature defaults', () => {
     const bare: CountingRule = { name: 'v', kind: 'velocity' }
-    expect(toString(orderOfOperator(conventional.find((o) => o.id === 'fermi')!, bare, ctx))).toBe('2')
+    expect(
+      toString(
+        orderOfOperator(
+          conventional.find((o) => o.id === 'fermi')!,
+          bare,
+          ctx,
+        ),
+      ),
+    ).toBe('2')
   })
 })

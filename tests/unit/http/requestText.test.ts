@@ -24,9 +24,10 @@ describe('nulPlace and nulMessage', () => {
   })
 })
 
-describe('the pages\' Content-Security-Policy', () => {
-  const html = '<html><head><script type="importmap">{"imports":{}}</script><script type="module" src="/_nuxt/a.js"></script>'
-    + '<script>window.__NUXT__={}</script></head><body><script type="application/json" id="__NUXT_DATA__">[1]</script></body></html>'
+describe("the pages' Content-Security-Policy", () => {
+  const html =
+    '<html><head><script type="importmap">{"imports":{}}</script><script type="module" src="/_nuxt/a.js"></script>' +
+    '<script>window.__NUXT__={}</script></head><body><script type="application/json" id="__NUXT_DATA__">[1]</script></body></html>'
   const sha = (s: string) => `'sha256-${createHash('sha256').update(s).digest('base64')}'`
 
   it('finds the inline scripts that run, not external ones or JSON data', () => {
@@ -37,7 +38,7 @@ describe('the pages\' Content-Security-Policy', () => {
     const csp = pageCsp(html)
     expect(csp).toContain(`script-src 'self' ${sha('{"imports":{}}')} ${sha('window.__NUXT__={}')};`)
     expect(csp).not.toMatch(/script-src[^;]*unsafe/)
-    expect(csp).toContain('frame-ancestors \'none\'')
-    expect(csp).toContain('object-src \'none\'')
+    expect(csp).toContain("frame-ancestors 'none'")
+    expect(csp).toContain("object-src 'none'")
   })
 })

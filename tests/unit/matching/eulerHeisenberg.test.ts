@@ -3,13 +3,16 @@ import { MATCHING_LIBRARY, coefficientText, type MatchingForm } from '../../../s
 import { fieldInvariants, type FieldInvariants, type Vec3 } from '../../../server/engine/matching/fieldInvariants'
 import { add, div, equals, mul, parseRational, rat, sub, toString as ratText, ZERO, type Rational } from '../../../server/engine/exact/rational'
 
-const eh = MATCHING_LIBRARY.find(e => e.id === 'euler-heisenberg')!
+const eh = MATCHING_LIBRARY.find((e) => e.id === 'euler-heisenberg')!
 const q = parseRational
 
 /** Deterministic rational samples (linear congruential generator, fixed seed). */
 function sampler(seed: number) {
   let s = seed
-  const next = () => { s = (s * 1103515245 + 12345) % 2147483648; return s }
+  const next = () => {
+    s = (s * 1103515245 + 12345) % 2147483648
+    return s
+  }
   return (): Rational => rat((next() % 41) - 20, (next() % 7) + 1)
 }
 

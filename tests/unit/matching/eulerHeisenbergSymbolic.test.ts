@@ -15,7 +15,7 @@ describe('Euler–Heisenberg in both forms, symbolically', () => {
     expect(nerdamer(`expand(${coef(0, 0)}*(E2-B2)^2 + ${coef(0, 1)}*EB^2 - (2/45)*((E2-B2)^2 + 7*EB^2))`).toString()).toBe('0')
   })
 
-  it('the library\'s F F form equals its E, B form identically', () => {
+  it("the library's F F form equals its E, B form identically", () => {
     const eb = `${coef(0, 0)}*(E2-B2)^2 + ${coef(0, 1)}*EB^2`
     const ff = `${coef(1, 0)}*(2*(B2-E2))^2 + ${coef(1, 1)}*(-4*EB)^2`
     expect(nerdamer(`expand(${eb} - (${ff}))`).toString()).toBe('0')

@@ -6,19 +6,23 @@ import { describe, expect, it } from 'vitest'
 import nerdamer from 'nerdamer'
 
 const root = join(__dirname, '../../..')
-const run = (...args: string[]) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/match.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
+const run = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'scripts/match.ts', ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 })
 
 // A heavy real singlet S with L ⊃ k·S·H†H: integrating it out shifts the |H|⁴ coupling by
 // +k²/(2M²) (hand derivation in tests/unit/matching/treeScalarExchange.test.ts; common practice).
 const uv = {
-  name: 'singlet', frame: 'relativistic', groups: [{ name: 'Y', type: 'U1', gauge: true }],
+  name: 'singlet',
+  frame: 'relativistic',
+  groups: [{ name: 'Y', type: 'U1', gauge: true }],
   fields: [
     { name: 'H', lorentz: 'scalar', charges: { Y: '1/2' } },
     { name: 'S', lorentz: 'scalar', real: true, mass: { symbol: 'M', value: { number: '3', unit: 'TeV' } } },
     { name: 'B', lorentz: 'field-strength', gaugeOf: 'Y' },
   ],
-  couplings: [{ class: 'S H H*', symbol: 'k' }, { class: 'H^2 H*^2', symbol: 'lambda' }],
+  couplings: [
+    { class: 'S H H*', symbol: 'k' },
+    { class: 'H^2 H*^2', symbol: 'lambda' },
+  ],
 }
 const file = () => {
   const dir = mkdtempSync(join(tmpdir(), 'match-cli-'))
@@ -42,7 +46,12 @@ describe('match CLI', () => {
   })
 
   it('bad arguments: message on stderr, exit code 2, nothing on stdout', () => {
-    for (const args of [[file(), '--max-dim', '6'], [file(), '--heavy', 'S,H', '--max-dim', '6'], [file(), '--heavy', 'H', '--max-dim', '6'], ['nope.json', '--heavy', 'S', '--max-dim', '6']]) {
+    for (const args of [
+      [file(), '--max-dim', '6'],
+      [file(), '--heavy', 'S,H', '--max-dim', '6'],
+      [file(), '--heavy', 'H', '--max-dim', '6'],
+      ['nope.json', '--heavy', 'S', '--max-dim', '6'],
+    ]) {
       const r = run(...args)
       expect(r.status).toBe(2)
       expect(r.stdout).toBe('')

@@ -5,7 +5,11 @@ import { join } from 'node:path'
 import { describe, expect, it } from 'vitest'
 
 const dir = mkdtempSync(join(tmpdir(), 'check-basis-'))
-const ops = (name: string, lines: string[]): string => { const f = join(dir, name); writeFileSync(f, lines.join('\n')); return f }
+const ops = (name: string, lines: string[]): string => {
+  const f = join(dir, name)
+  writeFileSync(f, lines.join('\n'))
+  return f
+}
 const run = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'scripts/checkBasis.ts', 'tests/unit/basis/fixtures/smeft.json', ...args], { encoding: 'utf8', timeout: 120_000 })
 const WEINBERG = '\\varepsilon_{jk}\\varepsilon_{mn}(l^j)^T C l^m \\varphi^k \\varphi^n'
 

@@ -27,14 +27,16 @@ describe('the Feynman-rule building blocks over F_p (Dreiner, Haber, Martin, Phy
     let v2 = 0
     for (let v = 0; v < 4; v++) for (let w = 0; w < 4; w++) v2 = F.add(v2, F.mul(fr(vectorMetric(v, w)), F.mul(V[v]!, V[w]!)))
     expect(v2).toBe(F.from(3 * 5 - 7 * 11)) // det V_{aȧ}
-    for (let d = 0; d < 4; d++) for (let e = 0; e < 4; e++) {
-      let s = 0
-      for (let m = 0; m < 4; m++) s = F.add(s, F.mul(slash(d, m), slash(m, e)))
-      expect(s, `${d}${e}`).toBe(d === e ? v2 : 0)
-    }
+    for (let d = 0; d < 4; d++)
+      for (let e = 0; e < 4; e++) {
+        let s = 0
+        for (let m = 0; m < 4; m++) s = F.add(s, F.mul(slash(d, m), slash(m, e)))
+        expect(s, `${d}${e}`).toBe(d === e ? v2 : 0)
+      }
   })
   it('the four wave-functions solve the massless Dirac equation p̸u = 0, ū p̸ = 0', () => {
-    const lam: [number, number] = [4, 9]; const lamt: [number, number] = [2, 13]
+    const lam: [number, number] = [4, 9]
+    const lamt: [number, number] = [2, 13]
     const p = [0, 1, 2, 3].map((v) => F.mul(lam[v >> 1]!, lamt[v & 1]!))
     const pslash = (d: number, e: number): number => {
       let s = 0
@@ -45,8 +47,12 @@ describe('the Feynman-rule building blocks over F_p (Dreiner, Haber, Martin, Phy
       const col = diracWave(F, angle ? lam : lamt, angle, false)
       const row = diracWave(F, angle ? lam : lamt, angle, true)
       for (let d = 0; d < 4; d++) {
-        let a = 0; let b = 0
-        for (let e = 0; e < 4; e++) { a = F.add(a, F.mul(pslash(d, e), col[e]!)); b = F.add(b, F.mul(row[e]!, pslash(e, d))) }
+        let a = 0
+        let b = 0
+        for (let e = 0; e < 4; e++) {
+          a = F.add(a, F.mul(pslash(d, e), col[e]!))
+          b = F.add(b, F.mul(row[e]!, pslash(e, d)))
+        }
         expect([a, b]).toEqual([0, 0])
       }
     }
@@ -73,7 +79,7 @@ describe('printed operators land on the kept operators of their class', () => {
     expect(() => rewrite('W_L^2 H H*', 'H^\\dagger H W^I_{\\mu\\nu}W^{I\\mu\\rho}')).toThrow(/index (nu|rho) appears once/)
     expect(() => rewrite('W_L^2 H H*', 'H^\\dagger H W^I_{\\mu\\nu}W^{I\\mu\\nu} + H^\\dagger H \\tilde W^I_{\\mu\\nu}W^{I\\mu\\nu}')).toThrow(/with and without a factor i/)
   })
-  it('the board\'s typed fingerprint of a printed operator equals that of its bracket form', () => {
+  it("the board's typed fingerprint of a printed operator equals that of its bracket form", () => {
     const kept = classBasis(smeft, 'H^3 H*^3').kept[0]!.text // (H†H)^3 = 1·kept (rewrite above)
     const [printed, bracket] = typedFingerprints(smeft, 'H^3 H*^3', ['(H^\\dagger H)^3', kept])
     expect(printed!.values).toEqual(bracket!.values)

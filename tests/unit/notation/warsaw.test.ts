@@ -13,7 +13,9 @@ const FIERZ_TRIPLET = '(\\bar l\\tau^I\\gamma_\\mu l)(\\bar l\\tau^I\\gamma^\\mu
 const FIERZ_SWAPPED = '(\\bar l^j\\gamma_\\mu l^k)(\\bar l^k\\gamma^\\mu l^j)'
 
 let data: ListCoordinates
-beforeAll(() => { data = listCoordinates(smeft, 6, [...texts, FIERZ_TRIPLET, FIERZ_SWAPPED], { aliases: WARSAW_ALIASES }) }, 600_000)
+beforeAll(() => {
+  data = listCoordinates(smeft, 6, [...texts, FIERZ_TRIPLET, FIERZ_SWAPPED], { aliases: WARSAW_ALIASES })
+}, 600_000)
 const warsaw = texts.map((_, i) => i)
 
 describe('the Warsaw basis typed as printed (Grzadkowski, Iskrzyński, Misiak, Rosiek, JHEP 10 (2010) 085, arXiv:1008.4884, Table 2 and the B-violating operators of §3), dimension 6, one flavour', () => {
@@ -31,13 +33,17 @@ describe('the Warsaw basis typed as printed (Grzadkowski, Iskrzyński, Misiak, R
     for (const n of ['Q_G', 'Q_Wtilde', 'Q_phi', 'Q_phiD', 'Q_phiWB', 'Q_phil3', 'Q_qq3', 'Q_ud8']) expect(herm[n], n).toBe(true)
     for (const n of ['Q_ephi', 'Q_uG', 'Q_phiud', 'Q_ledq', 'Q_lequ3', 'Q_duq']) expect(herm[n], n).toBe(false)
   })
-  it('removing any one operator leaves it incomplete, and the missing direction lies in that operator\'s classes', () => {
+  it("removing any one operator leaves it incomplete, and the missing direction lies in that operator's classes", () => {
     for (const drop of warsaw) {
-      const r = judgeList(data, warsaw.filter((i) => i !== drop))
+      const r = judgeList(
+        data,
+        warsaw.filter((i) => i !== drop),
+      )
       expect(r.complete, WARSAW[drop]![0]).toBe(false)
       const touched = new Set(data.entries[drop]!.own.map((c, j) => (c.num !== 0n ? data.columns[j]!.cls : '')).filter(Boolean))
       expect(r.missing.length, WARSAW[drop]![0]).toBeGreaterThan(0)
-      for (const m of r.missing) expect(touched.has(m.class) || data.entries[drop]!.conj.some((c, j) => c.num !== 0n && data.columns[j]!.cls === m.class), `${WARSAW[drop]![0]} → ${m.class}`).toBe(true)
+      for (const m of r.missing)
+        expect(touched.has(m.class) || data.entries[drop]!.conj.some((c, j) => c.num !== 0n && data.columns[j]!.cls === m.class), `${WARSAW[drop]![0]} → ${m.class}`).toBe(true)
     }
   })
   it('adding the Fierz partner of Q_ll makes the list redundant with the relation (l̄τ^Iγl)(l̄τ^Iγl) = 1·Q_ll', () => {

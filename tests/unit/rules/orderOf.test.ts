@@ -9,10 +9,16 @@ import type { CountingRule } from '../../../shared/schemas/countingRules'
 const sm: RuleContext = {
   frame: 'relativistic',
   species: buildTheoryModel({
-    name: 'sm', frame: 'relativistic', groups: [],
+    name: 'sm',
+    frame: 'relativistic',
+    groups: [],
     fields: [
-      { name: 'Q', lorentz: 'left-weyl' }, { name: 'u', lorentz: 'right-weyl' }, { name: 'L', lorentz: 'left-weyl' },
-      { name: 'H', lorentz: 'scalar' }, { name: 'G', lorentz: 'field-strength' }, { name: 'B', lorentz: 'field-strength' },
+      { name: 'Q', lorentz: 'left-weyl' },
+      { name: 'u', lorentz: 'right-weyl' },
+      { name: 'L', lorentz: 'left-weyl' },
+      { name: 'H', lorentz: 'scalar' },
+      { name: 'G', lorentz: 'field-strength' },
+      { name: 'B', lorentz: 'field-strength' },
     ],
   }).species,
 }
@@ -82,13 +88,20 @@ describe('bad input names the rule, the building block and the value', () => {
 describe('reshuffle and grouping', () => {
   const a: CountingRule = { name: 'A', kind: 'custom', weights: { x: '1', y: '2' } }
   const b: CountingRule = { name: 'B', kind: 'custom', weights: { x: '1', y: '1' } }
-  const ops = [{ id: 'xx', terms: [{ x: 2 }] }, { id: 'y', terms: [{ y: 1 }] }, { id: 'xy', terms: [{ x: 1, y: 1 }] }]
+  const ops = [
+    { id: 'xx', terms: [{ x: 2 }] },
+    { id: 'y', terms: [{ y: 1 }] },
+    { id: 'xy', terms: [{ x: 1, y: 1 }] },
+  ]
   it('lists exactly the operators whose order changes (common practice)', () => {
     const r = reshuffle(ops, a, b)
     expect(r.map((c) => `${c.id}:${toString(c.from)}->${toString(c.to)}`)).toEqual(['y:2->1', 'xy:3->2'])
   })
   it('groups by ascending order', () => {
-    expect(groupByOrder(ops, b).map((g) => [g.order, g.ids])).toEqual([['1', ['y']], ['2', ['xx', 'xy']]])
+    expect(groupByOrder(ops, b).map((g) => [g.order, g.ids])).toEqual([
+      ['1', ['y']],
+      ['2', ['xx', 'xy']],
+    ])
   })
 })
 

@@ -21,13 +21,15 @@ describe('QCD β coefficients, normalisation da/d ln μ² = −β0 a² − β1 a
       const b = qcdBeta(nf)
       expectClose('β0', nf, b[0]!, 11 - 0.6666667 * nf, 1e-6)
       expectClose('β1', nf, b[1]!, 102 - 12.66667 * nf, 1e-4)
-      expectClose('β2', nf, b[2]!, 1428.50 - 279.611 * nf + 6.01852 * nf * nf, 2e-3)
+      expectClose('β2', nf, b[2]!, 1428.5 - 279.611 * nf + 6.01852 * nf * nf, 2e-3)
       expectClose('β3', nf, b[3]!, 29242.964 - 6946.2896 * nf + 405.08904 * nf * nf + 1.499314 * nf ** 3, 2e-3)
     }
   })
 
   it('β0, β1 agree with the general-group formulas at C_A = 3, C_F = 4/3, T_F = 1/2 (Gross & Wilczek, PRL 30 (1973) 1343; Politzer, PRL 30 (1973) 1346; Caswell, PRL 33 (1974) 244; Jones, Nucl. Phys. B 75 (1974) 531)', () => {
-    const CA = q('3'); const CF = q('4/3'); const TF = q('1/2')
+    const CA = q('3')
+    const CF = q('4/3')
+    const TF = q('1/2')
     for (let nf = 0; nf <= 6; nf++) {
       const n = q(String(nf))
       const b0 = sub(mul(q('11/3'), CA), mul(mul(q('4/3'), TF), n))

@@ -30,14 +30,15 @@ describe('heavy-quark decoupling of α_s (Chetyrkin, Kniehl, Steinhauser, Nucl. 
   })
 
   it('the O(α_s) term is −(1/6) ln(μ²/m²) (CKS 1998)', () => {
-    expectClose('one-loop log', 2, decouplingFactor(0.1, 2, 'msbar', 1), 1 - 0.1 * 2 / 6, 1e-15)
+    expectClose('one-loop log', 2, decouplingFactor(0.1, 2, 'msbar', 1), 1 - (0.1 * 2) / 6, 1e-15)
   })
 
   it('alphaSAboveThreshold inverts alphaSBelowThreshold (both kinds, several logs)', () => {
-    for (const kind of ['msbar', 'pole'] as const) for (const L of [-1, 0, 0.7]) {
-      const a = 0.3
-      expectClose(`${kind} L=${L}`, { a, L }, alphaSAboveThreshold(alphaSBelowThreshold(a, L, kind, 2), L, kind, 2), a, 1e-15)
-    }
+    for (const kind of ['msbar', 'pole'] as const)
+      for (const L of [-1, 0, 0.7]) {
+        const a = 0.3
+        expectClose(`${kind} L=${L}`, { a, L }, alphaSAboveThreshold(alphaSBelowThreshold(a, L, kind, 2), L, kind, 2), a, 1e-15)
+      }
   })
 
   it('rejects bad loop numbers and mass kinds', () => {

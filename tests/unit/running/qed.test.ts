@@ -15,7 +15,7 @@ describe('leptonic shift Δα_lep(M_Z²) at one loop', () => {
     expectClose('Δα_lep one loop', MZ_1998, leptonicShiftOneLoop(MZ_1998), 0.03142, 1e-5)
   })
 
-  it('equals Steinhauser\'s three-loop 0.031498 minus his two-loop ≈ 0.78e-4 (three-loop ≈ 1e-6 neglected) (Steinhauser, Phys. Lett. B 429 (1998) 158)', () => {
+  it("equals Steinhauser's three-loop 0.031498 minus his two-loop ≈ 0.78e-4 (three-loop ≈ 1e-6 neglected) (Steinhauser, Phys. Lett. B 429 (1998) 158)", () => {
     expectClose('Δα_lep vs Steinhauser', MZ_1998, leptonicShiftOneLoop(MZ_1998), 0.031498 - 0.000078, 1.5e-5)
   })
 
@@ -37,7 +37,7 @@ describe('α(M_Z) with the hadronic shift Δα_had^(5) = 0.02766 as an input', (
   })
 
   it('the 100/27 in the MS-bar conversion is the sum of the −5/3 constants: (5/9) Σ N_c Q² over e, μ, τ, u, d, s, c, b = 100/27 (common practice)', () => {
-    const light = QED_FERMIONS.filter(f => f.name !== 't')
+    const light = QED_FERMIONS.filter((f) => f.name !== 't')
     expect(ratText(sum(light.map(chargeWeight)))).toBe('20/3')
   })
 
@@ -66,13 +66,13 @@ describe('runAlphaQED: one loop with step-function thresholds', () => {
   })
 
   it('quarks enter with N_c Q²: u 4/3, d 1/3; five light quarks give R = 11/3 (PDG QCD review, R ratio at leading order)', () => {
-    expect(ratText(chargeWeight(QUARKS.find(q => q.name === 'u')!))).toBe('4/3')
-    expect(ratText(chargeWeight(QUARKS.find(q => q.name === 'b')!))).toBe('1/3')
-    expect(ratText(sum(QUARKS.filter(q => q.name !== 't').map(chargeWeight)))).toBe('11/3')
+    expect(ratText(chargeWeight(QUARKS.find((q) => q.name === 'u')!))).toBe('4/3')
+    expect(ratText(chargeWeight(QUARKS.find((q) => q.name === 'b')!))).toBe('1/3')
+    expect(ratText(sum(QUARKS.filter((q) => q.name !== 't').map(chargeWeight)))).toBe('11/3')
   })
 
   it('a b quark alone shifts α^-1 by (2/3π)(1/3) ln(μ/m_b) above m_b (common practice)', () => {
-    const b = QUARKS.find(q => q.name === 'b')!
+    const b = QUARKS.find((q) => q.name === 'b')!
     const r = runAlphaQED({ muTo: 40, fermions: [b] })
     expectClose('b step', 40, ALPHA_INVERSE - r.alphaInverse, (2 / (3 * Math.PI)) * (1 / 3) * Math.log(40 / b.mass), 1e-12)
   })
@@ -94,7 +94,7 @@ describe('runAlphaQED: one loop with step-function thresholds', () => {
 describe('consistency with the gauge β coefficient of the threshold data', () => {
   it('a Dirac lepton (two Weyl fields of charge −1) gives b = 4/3 and dα^-1/d ln μ = −b/(2π) = −2/(3π) (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83; Peskin & Schroeder §12.3)', () => {
     const qed = { name: 'QED', type: 'U1' as const, gauge: true }
-    const b = (['left-weyl', 'right-weyl'] as const).map(l => fieldBetaContribution({ name: `mu${l === 'left-weyl' ? 'L' : 'R'}`, lorentz: l, charges: { QED: '-1' } }, qed, [qed]))
+    const b = (['left-weyl', 'right-weyl'] as const).map((l) => fieldBetaContribution({ name: `mu${l === 'left-weyl' ? 'L' : 'R'}`, lorentz: l, charges: { QED: '-1' } }, qed, [qed]))
     expect(ratText(sum(b))).toBe('4/3')
     const mu = CHARGED_LEPTONS[1]!
     const r = runAlphaQED({ muTo: mu.mass * Math.E, fermions: [mu] })

@@ -28,7 +28,7 @@ const theory = parseTheory({
 
 describe('thresholdShifts', () => {
   it('a colour-triplet hypercharged fermion shifts the SU(3) and U(1)_Y kinetic terms, not SU(2) or a global U(1) (Weinberg, Phys. Lett. B 91 (1980) 51; Hall, Nucl. Phys. B 178 (1981) 75)', () => {
-    const removed = theory.fields.filter(f => f.name === 'TL' || f.name === 'TR')
+    const removed = theory.fields.filter((f) => f.name === 'TL' || f.name === 'TR')
     expect(thresholdShifts(removed, theory.groups)).toEqual([
       { group: 'colour', type: 'SU', fields: ['TL', 'TR'], betaShift: '2/3' },
       { group: 'Y', type: 'U1', fields: ['TL', 'TR'], betaShift: '16/9' },
@@ -36,22 +36,40 @@ describe('thresholdShifts', () => {
   })
 
   it('a gauge-singlet scalar shifts no gauge coupling (common practice)', () => {
-    expect(thresholdShifts(theory.fields.filter(f => f.name === 'S'), theory.groups)).toEqual([])
+    expect(
+      thresholdShifts(
+        theory.fields.filter((f) => f.name === 'S'),
+        theory.groups,
+      ),
+    ).toEqual([])
   })
 
   it('the Higgs doublet shifts SU(2) and Y (common practice)', () => {
-    expect(thresholdShifts(theory.fields.filter(f => f.name === 'H'), theory.groups).map(s => s.group)).toEqual(['weak', 'Y'])
+    expect(
+      thresholdShifts(
+        theory.fields.filter((f) => f.name === 'H'),
+        theory.groups,
+      ).map((s) => s.group),
+    ).toEqual(['weak', 'Y'])
   })
 
   it('a Dirac quark changes the SU(3) coefficient by 2/3, as in β0 = 11 − (2/3) n_f (Gross & Wilczek, PRL 30 (1973) 1343; Politzer, PRL 30 (1973) 1346)', () => {
-    const s = thresholdShifts(theory.fields.filter(f => f.name === 'TL' || f.name === 'TR'), theory.groups)
+    const s = thresholdShifts(
+      theory.fields.filter((f) => f.name === 'TL' || f.name === 'TR'),
+      theory.groups,
+    )
     expect(s[0]!.betaShift).toBe('2/3')
   })
 
   it('all SM matter gives b_Y = 41/6, b_2 = 22/3 − 19/6 = 25/6, b_3 = 11 − 7 = 4 (Machacek & Vaughn, Nucl. Phys. B 222 (1983) 83: b = (41/6, −19/6, −7))', () => {
     const sm = parseTheory({
-      name: 'SM', frame: 'relativistic',
-      groups: [{ name: 'colour', type: 'SU', n: 3, gauge: true }, { name: 'weak', type: 'SU', n: 2, gauge: true }, { name: 'Y', type: 'U1', gauge: true }],
+      name: 'SM',
+      frame: 'relativistic',
+      groups: [
+        { name: 'colour', type: 'SU', n: 3, gauge: true },
+        { name: 'weak', type: 'SU', n: 2, gauge: true },
+        { name: 'Y', type: 'U1', gauge: true },
+      ],
       fields: [
         { name: 'Q', lorentz: 'left-weyl', reps: { colour: [1, 0], weak: [1] }, charges: { Y: '1/6' }, flavors: 3 },
         { name: 'u', lorentz: 'right-weyl', reps: { colour: [1, 0] }, charges: { Y: '2/3' }, flavors: 3 },
@@ -62,12 +80,20 @@ describe('thresholdShifts', () => {
       ],
     })
     const s = thresholdShifts(sm.fields, sm.groups)
-    expect(s.map(x => [x.group, x.betaShift])).toEqual([['colour', '4'], ['weak', '25/6'], ['Y', '41/6']])
+    expect(s.map((x) => [x.group, x.betaShift])).toEqual([
+      ['colour', '4'],
+      ['weak', '25/6'],
+      ['Y', '41/6'],
+    ])
   })
 
   it('rejects a field strength', () => {
-    expect(() => thresholdShifts(theory.fields.filter(f => f.name === 'G'), theory.groups))
-      .toThrow('Field "G" is a gauge field strength; only matter fields can be integrated out')
+    expect(() =>
+      thresholdShifts(
+        theory.fields.filter((f) => f.name === 'G'),
+        theory.groups,
+      ),
+    ).toThrow('Field "G" is a gauge field strength; only matter fields can be integrated out')
   })
 })
 
@@ -75,7 +101,7 @@ describe('integrateOut', () => {
   const r = integrateOut(theory, ['TL', 'TR', 'S'], { name: 'M_T', value: 1.5, unit: 'TeV' })
 
   it('returns a valid child theory without the removed fields', () => {
-    expect(r.child.fields.map(f => f.name)).toEqual(['Q', 'H', 'G', 'W', 'B'])
+    expect(r.child.fields.map((f) => f.name)).toEqual(['Q', 'H', 'G', 'W', 'B'])
     expect(() => parseTheory(r.child)).not.toThrow()
     expect(r.child.name).toBe('SM plus T and S below M_T = 1.5 TeV')
     expect(r.child.countingRules?.[0]?.weights).toEqual({ H: '1' })
@@ -92,11 +118,11 @@ describe('integrateOut', () => {
   })
 
   it('hints tree-level and one-loop classes (de Blas et al., JHEP 03 (2018) 109; Henning, Lu, Murayama, JHEP 01 (2016) 023)', () => {
-    const s = r.generatedClasses.filter(h => h.field === 'S')
-    expect(s.map(h => h.loop)).toEqual(['tree', 'one-loop'])
-    const t = r.generatedClasses.filter(h => h.field === 'TL')
-    expect(t.filter(h => /kinetic term/.test(h.description)).length).toBe(2)
-    expect(t.some(h => /X\^3 at dimension 6/.test(h.description))).toBe(true)
+    const s = r.generatedClasses.filter((h) => h.field === 'S')
+    expect(s.map((h) => h.loop)).toEqual(['tree', 'one-loop'])
+    const t = r.generatedClasses.filter((h) => h.field === 'TL')
+    expect(t.filter((h) => /kinetic term/.test(h.description)).length).toBe(2)
+    expect(t.some((h) => /X\^3 at dimension 6/.test(h.description))).toBe(true)
   })
 
   it('rejects unknown fields, field strengths, repeats and empty lists', () => {

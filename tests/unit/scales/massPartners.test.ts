@@ -42,7 +42,7 @@ describe('checkMassPartners', () => {
     // a choice, not one partner to add.
     expect(half.problems[0]).toContain('choose from u, TR, Tc so that 1 Weyl copy more join the set')
     expect(half.partners).toEqual([])
-    const pair = parseTheory({ ...theory, fields: theory.fields.filter(f => f.name !== 'u' && f.name !== 'Tc') })
+    const pair = parseTheory({ ...theory, fields: theory.fields.filter((f) => f.name !== 'u' && f.name !== 'Tc') })
     expect(checkMassPartners(pair, ['TR'])).toMatchObject({ partners: ['TL'] })
     expect(checkMassPartners(pair, ['TR']).problems[0]).toContain('the theory has TL for that')
   })
@@ -97,14 +97,18 @@ describe('partnerMap', () => {
 describe('integrateOut refuses an inconsistent child', () => {
   const at = { value: 1, unit: 'TeV' }
   it('half of a Dirac pair: the reason and the partner to add', () => {
-    const pair = parseTheory({ ...theory, fields: theory.fields.filter(f => f.name !== 'u' && f.name !== 'Tc') })
-    expect(() => integrateOut(pair, ['TL'], at)).toThrow(/^These fields cannot be integrated out as chosen\. TL cannot be integrated out without a partner: .*; the theory has TR for that\. Integrate out TL, TR together\./)
+    const pair = parseTheory({ ...theory, fields: theory.fields.filter((f) => f.name !== 'u' && f.name !== 'Tc') })
+    expect(() => integrateOut(pair, ['TL'], at)).toThrow(
+      /^These fields cannot be integrated out as chosen\. TL cannot be integrated out without a partner: .*; the theory has TR for that\. Integrate out TL, TR together\./,
+    )
   })
   it('the whole pair is accepted', () => {
-    expect(integrateOut(theory, ['TL', 'TR'], at).child.fields.map(f => f.name)).not.toContain('TL')
+    expect(integrateOut(theory, ['TL', 'TR'], at).child.fields.map((f) => f.name)).not.toContain('TL')
   })
   it('a chiral field without a partner: refused with the reason', () => {
-    expect(() => integrateOut(theory, ['Q'], at)).toThrow('Q cannot be integrated out without a partner: a Weyl fermion gets a mass invariant under SU3c, SU2L, Y, Lno only together with a fermion in the conjugate representation')
+    expect(() => integrateOut(theory, ['Q'], at)).toThrow(
+      'Q cannot be integrated out without a partner: a Weyl fermion gets a mass invariant under SU3c, SU2L, Y, Lno only together with a fermion in the conjugate representation',
+    )
     expect(() => integrateOut(theory, ['u'], at)).toThrow('choose from TL so that 3 Weyl copies more join the set')
   })
 })

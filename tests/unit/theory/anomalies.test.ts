@@ -37,7 +37,8 @@ describe('gauge anomalies', () => {
 
   it('SU(5) with 5̄ + 10 is anomaly free, 10 alone is not (Georgi & Glashow, Phys. Rev. Lett. 32 (1974) 438)', () => {
     const gut = parseTheory({
-      name: 'SU5', frame: 'relativistic',
+      name: 'SU5',
+      frame: 'relativistic',
       groups: [{ name: 'SU5', type: 'SU', n: 5, gauge: true }],
       fields: [
         { name: 'F', lorentz: 'left-weyl', reps: { SU5: [0, 0, 0, 1] } },
@@ -50,8 +51,13 @@ describe('gauge anomalies', () => {
 
   it('mixed U(1)_a U(1)_b^2 among gauge U(1)s; global U(1)s are not checked (common practice)', () => {
     const t = parseTheory({
-      name: 'two U1', frame: 'relativistic',
-      groups: [{ name: 'A', type: 'U1', gauge: true }, { name: 'B', type: 'U1', gauge: true }, { name: 'C', type: 'U1', gauge: false }],
+      name: 'two U1',
+      frame: 'relativistic',
+      groups: [
+        { name: 'A', type: 'U1', gauge: true },
+        { name: 'B', type: 'U1', gauge: true },
+        { name: 'C', type: 'U1', gauge: false },
+      ],
       fields: [
         { name: 'x', lorentz: 'left-weyl', charges: { A: '1', B: '1', C: '5' } },
         { name: 'y', lorentz: 'right-weyl', charges: { A: '1', B: '-1', C: '7' } },

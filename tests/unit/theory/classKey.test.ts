@@ -33,7 +33,12 @@ describe('class keys', () => {
   it('puts a key written in another order into theory order', () => {
     const { counts, derivatives } = countsOfClassKey(model, 'H* D H D')
     expect(classKeyOfCounts(model, counts, derivatives)).toBe('D^2 H H*')
-    expect(formatClassKey(1, [{ label: 'H', power: 0 }, { label: 'e', power: 3 }])).toBe('D e^3')
+    expect(
+      formatClassKey(1, [
+        { label: 'H', power: 0 },
+        { label: 'e', power: 3 },
+      ]),
+    ).toBe('D e^3')
   })
 
   it('refuses what it cannot read, naming the token or the field', () => {

@@ -12,7 +12,9 @@ import { compileLatex } from '../../support/pdflatex'
 // in math mode as papers print it (issue 17, item 3). Notation is common practice.
 
 const scalar = (display?: string): Theory => ({
-  name: 'one scalar', frame: 'relativistic', groups: [],
+  name: 'one scalar',
+  frame: 'relativistic',
+  groups: [],
   fields: [{ name: 'phi', lorentz: 'scalar', real: true, ...(display === undefined ? {} : { display }) }],
 })
 
@@ -72,7 +74,9 @@ describe('operators print fields as papers do', () => {
 
   it('an export whose fields carry display forms compiles with pdflatex', () => {
     const theory: Theory = {
-      name: 'display forms', frame: 'relativistic', groups: [{ name: 'X', type: 'U1', gauge: true }],
+      name: 'display forms',
+      frame: 'relativistic',
+      groups: [{ name: 'X', type: 'U1', gauge: true }],
       fields: [
         { name: 'chiL', display: 'χ_L', lorentz: 'left-weyl', charges: { X: '1' } },
         { name: 'NR', display: '\\bar{N}', lorentz: 'right-weyl', charges: { X: '1' } },
@@ -84,12 +88,28 @@ describe('operators print fields as papers do', () => {
     const report = buildBasis(theory, { maxDim: 6, nf: 1 })
     let id = 0
     const data = assembleExport({
-      theory: { name: theory.name, definition: theory }, countingRule: 'E/M', note: '', exportedAt: '2026-12-03T00:00:00.000Z',
+      theory: { name: theory.name, definition: theory },
+      countingRule: 'E/M',
+      note: '',
+      exportedAt: '2026-12-03T00:00:00.000Z',
       classes: report.byDimension.flatMap((d) => d.classes.map((c) => ({ order: d.order, dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk }))),
-      operators: report.byDimension.flatMap((d) => d.classes.flatMap((c) => c.operators.map((op) => ({
-        id: ++id, order: d.order, classKey: c.key, column: 'kept' as const, text: op.text, latex: op.latex, latexDirac: op.latex4, hermitian: op.hermitian, realParameters: op.realParameters,
-      })))),
-      tags: [], notes: [],
+      operators: report.byDimension.flatMap((d) =>
+        d.classes.flatMap((c) =>
+          c.operators.map((op) => ({
+            id: ++id,
+            order: d.order,
+            classKey: c.key,
+            column: 'kept' as const,
+            text: op.text,
+            latex: op.latex,
+            latexDirac: op.latex4,
+            hermitian: op.hermitian,
+            realParameters: op.realParameters,
+          })),
+        ),
+      ),
+      tags: [],
+      notes: [],
     })
     const tex = toLatex(data, { dirac: true })
     expect(tex).toContain('\\chi _L')

@@ -20,12 +20,23 @@ const errorOf = (input: unknown): string => {
 
 describe('group kinds in the theory file', () => {
   it('accepts SO(n), Sp(n), the exceptional groups and the finite flavour groups with their representations', () => {
-    const t = parseTheory(file(
-      [{ name: 'G10', type: 'SO', n: 10, gauge: true }, { name: 'S', type: 'Sp', n: 4, gauge: false }, { name: 'E', type: 'E6', gauge: false },
-        { name: 'F', type: 'A4', gauge: false }, { name: 'T', type: 'Tprime', gauge: false }, { name: 'D', type: 'Delta27', gauge: false }],
-      [{ name: 'psi', lorentz: 'left-weyl', reps: { G10: [0, 0, 0, 0, 1], F: '3', D: '3bar' }, flavors: 3 }, { name: 'X', lorentz: 'field-strength', gaugeOf: 'G10' },
-        { name: 'h', lorentz: 'scalar', reps: { S: [1, 0], E: [1, 0, 0, 0, 0, 0], T: "2''" } }],
-    ))
+    const t = parseTheory(
+      file(
+        [
+          { name: 'G10', type: 'SO', n: 10, gauge: true },
+          { name: 'S', type: 'Sp', n: 4, gauge: false },
+          { name: 'E', type: 'E6', gauge: false },
+          { name: 'F', type: 'A4', gauge: false },
+          { name: 'T', type: 'Tprime', gauge: false },
+          { name: 'D', type: 'Delta27', gauge: false },
+        ],
+        [
+          { name: 'psi', lorentz: 'left-weyl', reps: { G10: [0, 0, 0, 0, 1], F: '3', D: '3bar' }, flavors: 3 },
+          { name: 'X', lorentz: 'field-strength', gaugeOf: 'G10' },
+          { name: 'h', lorentz: 'scalar', reps: { S: [1, 0], E: [1, 0, 0, 0, 0, 0], T: "2''" } },
+        ],
+      ),
+    )
     expect(t.groups.map((g) => g.type)).toEqual(['SO', 'Sp', 'E6', 'A4', 'Tprime', 'Delta27'])
   })
 
@@ -35,18 +46,43 @@ describe('group kinds in the theory file', () => {
       [[{ name: 'G', type: 'Sp', n: 5, gauge: true }], [], 'Symmetry 1 "G", n: Sp(n) needs n from 4 to 16 (even: Sp(n) acts on n = 2k dimensions), but n = 5'],
       [[{ name: 'G', type: 'E6', n: 6, gauge: true }], [], 'Symmetry 1 "G", n: E6 takes no n; remove n = 6'],
       [[{ name: 'G', type: 'A4', gauge: true }], [], 'Symmetry 1 "G", gauge: A4 is a finite group; declare it global (not gauged)'],
-      [[{ name: 'G', type: 'SO', n: 10, gauge: true }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0] } }], 'Field 1 "p", representation under G: SO(10) takes 5 Dynkin labels, but [1,0,0] has 3'],
-      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: '4' } }], `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got "4"`],
-      [[{ name: 'G', type: 'A4', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1] } }], `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got [1]`],
+      [
+        [{ name: 'G', type: 'SO', n: 10, gauge: true }],
+        [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0] } }],
+        'Field 1 "p", representation under G: SO(10) takes 5 Dynkin labels, but [1,0,0] has 3',
+      ],
+      [
+        [{ name: 'G', type: 'A4', gauge: false }],
+        [{ name: 'p', lorentz: 'left-weyl', reps: { G: '4' } }],
+        `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got "4"`,
+      ],
+      [
+        [{ name: 'G', type: 'A4', gauge: false }],
+        [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1] } }],
+        `Field 1 "p", representation under G: A4 takes an irrep name (one of 1, 1', 1'', 3), but got [1]`,
+      ],
       [[{ name: 'G', type: 'E6', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', charges: { G: '1' } }], 'Field 1 "p", charge under G: G is E6, which takes Dynkin labels, not a charge'],
-      [[{ name: 'G', type: 'S4', gauge: false }], [{ name: 'X', lorentz: 'field-strength', gaugeOf: 'G' }], 'Field 1 "X", gauge group of the field strength: G is a global symmetry (not gauged) and has no field strength'],
-      [[{ name: 'G', type: 'E8', gauge: false }], [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0, 0, 0, 0, 0, 0] } }], 'Field 1 "p", representation under G: representations are limited to dimension 1000, but [1,0,0,0,0,0,0,0] has dimension 3875'],
+      [
+        [{ name: 'G', type: 'S4', gauge: false }],
+        [{ name: 'X', lorentz: 'field-strength', gaugeOf: 'G' }],
+        'Field 1 "X", gauge group of the field strength: G is a global symmetry (not gauged) and has no field strength',
+      ],
+      [
+        [{ name: 'G', type: 'E8', gauge: false }],
+        [{ name: 'p', lorentz: 'left-weyl', reps: { G: [1, 0, 0, 0, 0, 0, 0, 0] } }],
+        'Field 1 "p", representation under G: representations are limited to dimension 1000, but [1,0,0,0,0,0,0,0] has dimension 3875',
+      ],
     ]
     for (const [groups, fields, message] of cases) expect(errorOf(file(groups, fields))).toContain(message)
   })
 
   it('real scalars: the product of Frobenius–Schur indicators over every kind must be +1 (Slansky, Phys. Rep. 79 (1981) 1, §4; Ishimori et al., Prog. Theor. Phys. Suppl. 183 (2010) 1)', () => {
-    const groups: G[] = [{ name: 'G', type: 'SO', n: 10, gauge: false }, { name: 'S', type: 'Sp', n: 4, gauge: false }, { name: 'T', type: 'Tprime', gauge: false }, { name: 'A', type: 'A4', gauge: false }]
+    const groups: G[] = [
+      { name: 'G', type: 'SO', n: 10, gauge: false },
+      { name: 'S', type: 'Sp', n: 4, gauge: false },
+      { name: 'T', type: 'Tprime', gauge: false },
+      { name: 'A', type: 'A4', gauge: false },
+    ]
     const real = (reps: Record<string, unknown>) => file(groups, [{ name: 's', lorentz: 'scalar', real: true, reps }])
     expect(() => parseTheory(real({ G: [1, 0, 0, 0, 0], A: '3' }))).not.toThrow()
     expect(() => parseTheory(real({ S: [1, 0], T: '2' }))).not.toThrow() // pseudoreal × pseudoreal
@@ -82,7 +118,18 @@ describe('anomalies with the new gauge groups', () => {
   })
 
   it('a fermion in the 3 of a global SU(3) counts three times in the gauge U(1)^3 and gravitational conditions (arithmetic)', () => {
-    const t = parseTheory(file([{ name: 'F', type: 'SU', n: 3, gauge: false }, { name: 'Y', type: 'U1', gauge: true }], [{ name: 'psi', lorentz: 'left-weyl', reps: { F: [1, 0] }, charges: { Y: '1' } }]))
-    expect(checkAnomalies(t)).toEqual([{ name: 'Y^3', sum: '3', ok: false }, { name: 'gravity^2 Y', sum: '3', ok: false }])
+    const t = parseTheory(
+      file(
+        [
+          { name: 'F', type: 'SU', n: 3, gauge: false },
+          { name: 'Y', type: 'U1', gauge: true },
+        ],
+        [{ name: 'psi', lorentz: 'left-weyl', reps: { F: [1, 0] }, charges: { Y: '1' } }],
+      ),
+    )
+    expect(checkAnomalies(t)).toEqual([
+      { name: 'Y^3', sum: '3', ok: false },
+      { name: 'gravity^2 Y', sum: '3', ok: false },
+    ])
   })
 })

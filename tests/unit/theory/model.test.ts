@@ -8,8 +8,14 @@ import type { Theory } from '../../../shared/schemas/theory'
 // Elvang & Huang, Scattering Amplitudes (CUP 2015), §2; Dreiner, Haber & Martin, Phys. Rep. 494
 // (2010) 1. Conjugation reverses Dynkin labels and negates charges (Slansky, Phys. Rep. 79 (1981) 1, §4).
 const theory: Theory = {
-  name: 'resolved', frame: 'relativistic',
-  groups: [{ name: 'weak', type: 'SU', n: 2, gauge: true }, { name: 'colour', type: 'SU', n: 3, gauge: true }, { name: 'Y', type: 'U1', gauge: true }, { name: 'P3', type: 'Z', n: 3, gauge: false }],
+  name: 'resolved',
+  frame: 'relativistic',
+  groups: [
+    { name: 'weak', type: 'SU', n: 2, gauge: true },
+    { name: 'colour', type: 'SU', n: 3, gauge: true },
+    { name: 'Y', type: 'U1', gauge: true },
+    { name: 'P3', type: 'Z', n: 3, gauge: false },
+  ],
   fields: [
     { name: 'q', lorentz: 'left-weyl', reps: { weak: [1], colour: [1, 0] }, charges: { Y: '1/6', P3: 1 }, flavors: 2 },
     { name: 'c', lorentz: 'right-weyl', reps: { colour: [0, 1] }, charges: { Y: '-2/3' } },
@@ -31,7 +37,13 @@ describe('the theory model', () => {
   it('resolves Lorentz irreps, spinors, helicities and mass dimensions', () => {
     expect(m.species.map((s) => s.lorentz)).toEqual(['L', 'R', 'R', 'L', 'S', 'FL', 'FR'])
     expect(m.species.map((s) => [s.angles, s.squares, s.helicity2, s.dim2])).toEqual([
-      [1, 0, -1, 3], [0, 1, 1, 3], [0, 1, 1, 3], [1, 0, -1, 3], [0, 0, 0, 2], [2, 0, -2, 4], [0, 2, 2, 4],
+      [1, 0, -1, 3],
+      [0, 1, 1, 3],
+      [0, 1, 1, 3],
+      [1, 0, -1, 3],
+      [0, 0, 0, 2],
+      [2, 0, -2, 4],
+      [0, 2, 2, 4],
     ])
     expect(m.species.map((s) => s.fermion)).toEqual([true, true, true, true, false, false, false])
   })
@@ -57,7 +69,14 @@ describe('the theory model', () => {
     const sextet: Theory = { ...theory, fields: [{ name: 'S6', lorentz: 'scalar', reps: { colour: [2, 0] } }] }
     expect(buildTheoryModel(sextet).species[0]!.suKind.colour).toBe('other')
     expect(basisSpecies(sextet).map((s) => s.label)).toEqual(['S6', 'S6*'])
-    const bi: Theory = { ...theory, groups: [{ name: 'A', type: 'SU', n: 2, gauge: false }, { name: 'B', type: 'SU', n: 2, gauge: false }], fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }] }
+    const bi: Theory = {
+      ...theory,
+      groups: [
+        { name: 'A', type: 'SU', n: 2, gauge: false },
+        { name: 'B', type: 'SU', n: 2, gauge: false },
+      ],
+      fields: [{ name: 'P', lorentz: 'scalar', real: true, reps: { A: [1], B: [1] } }],
+    }
     expect(() => basisSpecies(bi)).toThrow('field P: a real field in A = SU(2) [1] is not written as a tensor with equal upper and lower index shapes')
   })
 })

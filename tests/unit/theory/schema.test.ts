@@ -68,8 +68,13 @@ describe('theory schema', () => {
 
   it('a real scalar needs the PRODUCT of the reality indicators to be +1 (Slansky, Phys. Rep. 79 (1981) 1, §4: indicators multiply on tensor products)', () => {
     const custodial = {
-      name: 'custodial', frame: 'relativistic',
-      groups: [{ name: 'SU2L', type: 'SU', n: 2, gauge: true }, { name: 'SU2R', type: 'SU', n: 2, gauge: false }, { name: 'SU3c', type: 'SU', n: 3, gauge: true }],
+      name: 'custodial',
+      frame: 'relativistic',
+      groups: [
+        { name: 'SU2L', type: 'SU', n: 2, gauge: true },
+        { name: 'SU2R', type: 'SU', n: 2, gauge: false },
+        { name: 'SU3c', type: 'SU', n: 3, gauge: true },
+      ],
       fields: [{ name: 'Phi', lorentz: 'scalar', real: true, reps: { SU2L: [1], SU2R: [1] } } as Record<string, unknown>],
     }
     // (2,2): pseudoreal × pseudoreal = real, the custodial-symmetric Higgs bidoublet

@@ -8,8 +8,10 @@ import { useDb } from '../../../utils/db/connection'
 export default defineApiHandler(async (event) => {
   const note = await annotationOr404(intParam(event, 'id'))
   await requireGroupRole(event, note.group_id, 'viewer')
-  const revisions = await useDb()('annotation_revisions as r').leftJoin('users as u', 'u.id', 'r.edited_by')
-    .where('r.annotation_id', note.id).orderBy('r.edited_at')
+  const revisions = await useDb()('annotation_revisions as r')
+    .leftJoin('users as u', 'u.id', 'r.edited_by')
+    .where('r.annotation_id', note.id)
+    .orderBy('r.edited_at')
     .select('r.id', 'r.body', 'r.edited_at as editedAt', 'u.display_name as editedBy')
   return { revisions }
 })

@@ -6,10 +6,10 @@ import { theoriesOfGroup } from '../../../utils/db/theories'
 import type { GroupRole } from '../../../../shared/types/roles'
 
 interface GroupPage {
-  group: { id: number, slug: string, name: string, description: string | null }
+  group: { id: number; slug: string; name: string; description: string | null }
   role: GroupRole
-  members: { id: number, email: string, displayName: string, role: GroupRole }[]
-  theories: { id: number, name: string, version: number, parentId: number | null, updatedAt: string }[]
+  members: { id: number; email: string; displayName: string; role: GroupRole }[]
+  theories: { id: number; name: string; version: number; parentId: number | null; updatedAt: string }[]
 }
 
 // The group page: the group, the caller's role, members and theories, read in one query

@@ -17,9 +17,10 @@ export default defineApiHandler(async (event) => {
   return once(event, user.id, body, () => saveTheory(id, body))
 })
 
-async function saveTheory(id: number, body: { definition: { name: string }, version: number }) {
+async function saveTheory(id: number, body: { definition: { name: string }; version: number }) {
   const rows = await useDb()('theories')
-    .where({ id, version: body.version }).whereNull('deleted_at')
+    .where({ id, version: body.version })
+    .whereNull('deleted_at')
     .update({ definition: JSON.stringify(body.definition), name: body.definition.name, version: body.version + 1, updated_at: useDb().fn.now() })
     .returning('*')
     .catch((e: { code?: string }) => {

@@ -29,5 +29,17 @@ export default defineApiHandler(async (event) => {
   }
   // For each fermion, the fields that can give it a mass: the integrate-out form ticks them along.
   const massPartners = await compute('massPartners', theory.definition, user.id, theory.group_id)
-  return { massPartners, theory: { id: theory.id, name: theory.name, parentId: theory.parent_id }, frame, role, ladder: stored?.ladder ?? null, version: stored?.version ?? 0, updatedAt: stored?.updatedAt ?? null, updatedBy: stored?.updatedBy ?? null, computed, problem, units: SCALE_UNITS }
+  return {
+    massPartners,
+    theory: { id: theory.id, name: theory.name, parentId: theory.parent_id },
+    frame,
+    role,
+    ladder: stored?.ladder ?? null,
+    version: stored?.version ?? 0,
+    updatedAt: stored?.updatedAt ?? null,
+    updatedBy: stored?.updatedBy ?? null,
+    computed,
+    problem,
+    units: SCALE_UNITS,
+  }
 })

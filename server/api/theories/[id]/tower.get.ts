@@ -15,10 +15,16 @@ export default defineApiHandler(async (event) => {
   const nodes = await towerOf(theory)
   const tags = await thresholdTagsOf(nodes.map((n) => n.id))
   const byId = new Map(nodes.map((n) => [n.id, n]))
-  const below = nodes.map((n) => ({ n, parent: n.parentId ? byId.get(n.parentId) : undefined }))
+  const below = nodes
+    .map((n) => ({ n, parent: n.parentId ? byId.get(n.parentId) : undefined }))
     .filter(({ n, parent }) => parent && n.threshold)
     .map(({ n, parent }) => ({ id: n.id, parent: parent!.definition, removed: n.threshold!.removedFields, scaleText: scaleText(n.threshold!) }))
-  const hints = await compute('towerHints', below.map(({ id: _id, ...step }) => step), user.id, theory.group_id)
+  const hints = await compute(
+    'towerHints',
+    below.map(({ id: _id, ...step }) => step),
+    user.id,
+    theory.group_id,
+  )
   const hintOf = new Map(below.map((b, i) => [b.id, hints[i]!]))
   return {
     theoryId: theory.id,
@@ -33,6 +39,6 @@ export default defineApiHandler(async (event) => {
   }
 })
 
-function scaleText(t: { name?: string | null, scale: unknown, unit: string }) {
+function scaleText(t: { name?: string | null; scale: unknown; unit: string }) {
   return `${t.name ? `${t.name} = ` : ''}${t.scale} ${t.unit}`
 }

@@ -30,8 +30,8 @@ export interface Candidate {
 }
 
 const COSET_KINDS: readonly LetterKind[] = ['u', 'chi+', 'chi-', 'f+', 'f-']
-const NEEDS: Partial<Record<LetterKind, keyof SourceSwitch>> = { 'chi+': 'scalar', 'chi-': 'scalar', 'f+': 'vector', 'f-': 'vector', 'chi': 'scalar', 'chibar': 'scalar', 'FL': 'vector', 'FR': 'vector' }
-const SYMBOL: Partial<Record<LetterKind, string>> = { 'u': 'u', 'chi-': 'χ−', 'f-': 'f−' }
+const NEEDS: Partial<Record<LetterKind, keyof SourceSwitch>> = { 'chi+': 'scalar', 'chi-': 'scalar', 'f+': 'vector', 'f-': 'vector', chi: 'scalar', chibar: 'scalar', FL: 'vector', FR: 'vector' }
+const SYMBOL: Partial<Record<LetterKind, string>> = { u: 'u', 'chi-': 'χ−', 'f-': 'f−' }
 
 function present(kinds: readonly LetterKind[], s: SourceSwitch): LetterKind[] {
   return kinds.filter((k) => NEEDS[k] === undefined || s[NEEDS[k]!])
@@ -40,12 +40,19 @@ const ODD: ReadonlySet<LetterKind> = new Set(['u', 'chi-', 'f-'])
 const TRACELESS: ReadonlySet<LetterKind> = new Set(['u', 'f+', 'f-', 'FL', 'FR'])
 
 /** Letter contents: counts per kind with lowest order ≤ order, and the leftover derivatives. */
-function contents(kinds: readonly LetterKind[], order: number): { counts: number[], derivs: number }[] {
-  const out: { counts: number[], derivs: number }[] = []
+function contents(kinds: readonly LetterKind[], order: number): { counts: number[]; derivs: number }[] {
+  const out: { counts: number[]; derivs: number }[] = []
   const rec = (i: number, counts: number[], w: number) => {
-    if (i === kinds.length) { if (counts.some((c) => c > 0)) out.push({ counts: counts.slice(), derivs: order - w }); return }
+    if (i === kinds.length) {
+      if (counts.some((c) => c > 0)) out.push({ counts: counts.slice(), derivs: order - w })
+      return
+    }
     const o = LETTER_ORDER[kinds[i]!]
-    for (let n = 0; w + n * o <= order; n++) { counts.push(n); rec(i + 1, counts, w + n * o); counts.pop() }
+    for (let n = 0; w + n * o <= order; n++) {
+      counts.push(n)
+      rec(i + 1, counts, w + n * o)
+      counts.pop()
+    }
   }
   rec(0, [], 0)
   return out
@@ -107,7 +114,7 @@ export function cosetCandidates(order: number, sources: SourceSwitch, ibp = fals
   for (const { counts, derivs } of contents(kinds, order)) {
     const oddCount = kinds.reduce((s, k, i) => s + (ODD.has(k) ? counts[i]! : 0), 0)
     for (const specs of distributions(kinds, counts, derivs, ibp)) {
-      const eps = oddCount % 2 === 1 ? 'one' as const : 'none' as const
+      const eps = oddCount % 2 === 1 ? ('one' as const) : ('none' as const)
       for (const mono of enumerateMonomials(specs, { traceless: TRACELESS, eps })) {
         const [sign, image] = chargeConjugate(mono)
         const codes = [canonicalCode(mono), canonicalCode(image)].sort()
@@ -115,7 +122,13 @@ export function cosetCandidates(order: number, sources: SourceSwitch, ibp = fals
         if (out.has(key)) continue
         const oddH = specs.filter((s) => s.kind === 'chi-' || s.kind === 'f+').length % 2
         // when C(O) has the shape of O, O + C(O) is 2O or 0: decided numerically (selection.ts)
-        const op: Operator = { iPower: oddH as 0 | 1, terms: [{ coef: 1, mono }, { coef: sign, mono: image }] }
+        const op: Operator = {
+          iPower: oddH as 0 | 1,
+          terms: [
+            { coef: 1, mono },
+            { coef: sign, mono: image },
+          ],
+        }
         out.set(key, { op, letters: specs.length, classKey: classKeyOf(specs, kinds), parity: oddCount % 2 ? 'odd' : 'even', contact: false, score: scoreOf(mono), key })
       }
     }
@@ -144,7 +157,10 @@ export function contactCandidates(order: number, N: number | 'general', sources:
     for (const specs of distributions(kinds, counts, derivs, false)) {
       for (const mono of enumerateMonomials(specs, { traceless: TRACELESS, eps: 'any', detSize })) {
         for (const op of symmetrized(mono)) {
-          const key = `${op.iPower}|${op.terms.map((t) => `${t.coef}${canonicalCode(t.mono)}`).sort().join(' + ')}`
+          const key = `${op.iPower}|${op.terms
+            .map((t) => `${t.coef}${canonicalCode(t.mono)}`)
+            .sort()
+            .join(' + ')}`
           if (out.has(key)) continue
           out.set(key, { op, letters: specs.length, classKey: 'contact', parity: mono.eps ? 'odd' : 'even', contact: true, score: scoreOf(mono), key })
         }
@@ -162,12 +178,21 @@ function symmetrized(m: Monomial): Operator[] {
   const images: [number, Monomial][] = [[1, m]]
   const [sc, c] = chargeConjugate(m)
   images.push([sc, c])
-  for (const [s, x] of [[1, m], [sc, c]] as [number, Monomial][]) { const [sp, p] = parityImage(x); images.push([s * sp, p]) }
-  const build = (h: number): { coef: number, mono: Monomial }[] => {
-    const merged = new Map<string, { coef: number, mono: Monomial }>()
+  for (const [s, x] of [
+    [1, m],
+    [sc, c],
+  ] as [number, Monomial][]) {
+    const [sp, p] = parityImage(x)
+    images.push([s * sp, p])
+  }
+  const build = (h: number): { coef: number; mono: Monomial }[] => {
+    const merged = new Map<string, { coef: number; mono: Monomial }>()
     for (const [s, x] of images) {
       const [sh, y] = hermitianConjugate(x)
-      for (const [t, z] of [[s, x], [h * s * sh, y]] as [number, Monomial][]) {
+      for (const [t, z] of [
+        [s, x],
+        [h * s * sh, y],
+      ] as [number, Monomial][]) {
         const k = JSON.stringify(z)
         const prev = merged.get(k)
         if (prev) prev.coef += t

@@ -27,8 +27,15 @@ function orderings(factors: readonly Factor[]): Factor[][] {
   const out: Factor[][] = []
   for (const order of perms(factors.length)) {
     const rec = (i: number, acc: Factor[]) => {
-      if (i === order.length) { out.push(acc.slice()); return }
-      for (const v of variants[order[i]!]!) { acc.push(v); rec(i + 1, acc); acc.pop() }
+      if (i === order.length) {
+        out.push(acc.slice())
+        return
+      }
+      for (const v of variants[order[i]!]!) {
+        acc.push(v)
+        rec(i + 1, acc)
+        acc.pop()
+      }
     }
     rec(0, [])
   }
@@ -48,9 +55,17 @@ function codeFor(factors: readonly Factor[], eps: readonly number[] | undefined,
   const where = new Map<number, [number, string][]>()
   letters.forEach((l, pos) => {
     const groups = groupsOf(l)
-    ;[...l.d, ...l.idx].forEach((x, s) => { const a = where.get(x) ?? []; a.push([pos, groups[s]!]); where.set(x, a) })
+    ;[...l.d, ...l.idx].forEach((x, s) => {
+      const a = where.get(x) ?? []
+      a.push([pos, groups[s]!])
+      where.set(x, a)
+    })
   })
-  for (const x of eps ?? []) { const a = where.get(x) ?? []; a.push([-1, 'E']); where.set(x, a) }
+  for (const x of eps ?? []) {
+    const a = where.get(x) ?? []
+    a.push([-1, 'E'])
+    where.set(x, a)
+  }
   const partner = (x: number, pos: number, group: string): string => {
     const [a, b] = where.get(x) as [[number, string], [number, string]]
     // (a contraction of two slots of the same group of one letter points at itself)

@@ -7,7 +7,11 @@
  */
 import type { LegKind } from './kinematics'
 
-export interface ClassContent { odd: number, chiPlus: number, fPlus: number }
+export interface ClassContent {
+  odd: number
+  chiPlus: number
+  fPlus: number
+}
 
 /** Parse a class key of the count ("{u,χ−,f−}^2 χ+ f+^3"). */
 export function classContent(key: string): ClassContent {

@@ -16,7 +16,11 @@ export interface Step {
   nextOpen: number[]
 }
 
-export interface TracePlan { steps: Step[], external: number[], maxLabel: number }
+export interface TracePlan {
+  steps: Step[]
+  external: number[]
+  maxLabel: number
+}
 
 export function distinctLabels(letters: readonly Letter[]): number[] {
   const out: number[] = []
@@ -56,7 +60,10 @@ export function bestRotation(letters: readonly Letter[], external: ReadonlySet<n
   for (let r = 0; r < letters.length; r++) {
     const rot = [...letters.slice(r), ...letters.slice(0, r)]
     const cost = compileTrace(rot, external, fixed).steps.reduce((s, st) => s + 4 ** (st.prevOpen.length + st.fresh.length), 0)
-    if (cost < bestCost) { bestCost = cost; best = rot }
+    if (cost < bestCost) {
+      bestCost = cost
+      best = rot
+    }
   }
   return best
 }

@@ -8,9 +8,14 @@ import type { PrimeField } from '../../finite/primeField'
 export class IncrementalEchelon {
   private readonly rows: number[][] = []
   private readonly pivots: number[] = []
-  constructor(readonly F: PrimeField, readonly width: number) {}
+  constructor(
+    readonly F: PrimeField,
+    readonly width: number,
+  ) {}
 
-  get rank(): number { return this.rows.length }
+  get rank(): number {
+    return this.rows.length
+  }
 
   /** Reduce and keep the row if independent; returns true when the rank grew. */
   add(row: readonly number[]): boolean {

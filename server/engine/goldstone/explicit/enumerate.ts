@@ -10,7 +10,10 @@
 import { canonicalCode, slotGroups } from './canonical'
 import { OWN_SLOTS, SOURCE_SIDES, type Factor, type Letter, type LetterKind, type Monomial } from './monomial'
 
-export interface LetterSpec { kind: LetterKind, derivs: number }
+export interface LetterSpec {
+  kind: LetterKind
+  derivs: number
+}
 
 export interface EnumerationRules {
   /** Kinds that are traceless N × N matrices (⟨X⟩ = 0). */
@@ -21,7 +24,11 @@ export interface EnumerationRules {
   detSize?: number
 }
 
-interface Slot { letter: number, label: number, group: string }
+interface Slot {
+  letter: number
+  label: number
+  group: string
+}
 
 function permutations(n: number): number[][] {
   if (n === 0) return [[]]
@@ -46,9 +53,9 @@ function chained(letters: readonly LetterKind[]): boolean {
 }
 
 /** All arrangements of letters 0..m−1 into factors (list of index lists with their type). */
-function arrangements(specs: readonly LetterSpec[], rules: EnumerationRules): { type: Factor['type'], members: number[] }[][] {
+function arrangements(specs: readonly LetterSpec[], rules: EnumerationRules): { type: Factor['type']; members: number[] }[][] {
   const m = specs.length
-  const out: { type: Factor['type'], members: number[] }[][] = []
+  const out: { type: Factor['type']; members: number[] }[][] = []
   const shapes = new Set<string>()
   const dets: number[][] = [[]]
   if (rules.detSize) {
@@ -65,7 +72,10 @@ function arrangements(specs: readonly LetterSpec[], rules: EnumerationRules): { 
       for (let s = 0; s < rest.length; s++) {
         if (seen[s]) continue
         const cycle: number[] = []
-        for (let t = s; !seen[t]; t = p[t]!) { seen[t] = true; cycle.push(rest[t]!) }
+        for (let t = s; !seen[t]; t = p[t]!) {
+          seen[t] = true
+          cycle.push(rest[t]!)
+        }
         traces.push(cycle)
       }
       const ok = traces.every((c) => !(c.length === 1 && rules.traceless.has(specs[c[0]!]!.kind)) && chained(c.map((i) => specs[i]!.kind)))
@@ -132,7 +142,11 @@ function contractions(specs: readonly LetterSpec[], rules: EnumerationRules): [n
   if (rules.eps !== 'none' && all.length >= 4 && all.length % 2 === 0) {
     for (const e of combinations(all, 4)) {
       if (e.some((a, i) => e.some((b, j) => j > i && clash(slots[a]!, slots[b]!, true)))) continue
-      for (const m of matchings(all.filter((x) => !e.includes(x)), slots)) out.push([e, m])
+      for (const m of matchings(
+        all.filter((x) => !e.includes(x)),
+        slots,
+      ))
+        out.push([e, m])
     }
   }
   return out
@@ -149,8 +163,13 @@ export function enumerateMonomials(specs: readonly LetterSpec[], rules: Enumerat
   for (const arrangement of arrangements(specs, rules)) {
     for (const [eps, pairs] of contr) {
       const labelOf = new Array<number>(slots.length)
-      pairs.forEach(([a, b], k) => { labelOf[a] = k; labelOf[b] = k })
-      eps?.forEach((a, k) => { labelOf[a] = pairs.length + k })
+      pairs.forEach(([a, b], k) => {
+        labelOf[a] = k
+        labelOf[b] = k
+      })
+      eps?.forEach((a, k) => {
+        labelOf[a] = pairs.length + k
+      })
       const letters: Letter[] = specs.map((s, i) => {
         const mine = slots.map((sl, j) => (sl.letter === i ? labelOf[j]! : -1)).filter((x) => x >= 0)
         return { kind: s.kind, d: mine.slice(0, s.derivs), idx: mine.slice(s.derivs) }

@@ -26,7 +26,7 @@ function permutations(n: number): [number[], number][] {
   return out
 }
 
-const planCache = new WeakMap<Monomial, { plans: TracePlan[], external: number[] }>()
+const planCache = new WeakMap<Monomial, { plans: TracePlan[]; external: number[] }>()
 
 /** Evaluates letters and monomials on one classical solution; letter components are cached. */
 export class ExactEvaluator {
@@ -44,15 +44,24 @@ export class ExactEvaluator {
       return a < b ? arr[pairIndex(a, b)]! : s.space.scale(s.F.neg(1), arr[pairIndex(b, a)]!)
     }
     switch (l.kind) {
-      case 'u': return s.uMu[idx[0]!]!
-      case 'chi+': return s.chiPlus
-      case 'chi-': return s.chiMinus
-      case 'f+': return antisym(s.fPlus)
-      case 'f-': return antisym(s.fMinus)
-      case 'chi': return s.chi
-      case 'chibar': return s.chiBar
-      case 'FL': return antisym(s.strengthL)
-      case 'FR': return antisym(s.strengthR)
+      case 'u':
+        return s.uMu[idx[0]!]!
+      case 'chi+':
+        return s.chiPlus
+      case 'chi-':
+        return s.chiMinus
+      case 'f+':
+        return antisym(s.fPlus)
+      case 'f-':
+        return antisym(s.fMinus)
+      case 'chi':
+        return s.chi
+      case 'chibar':
+        return s.chiBar
+      case 'FL':
+        return antisym(s.strengthL)
+      case 'FR':
+        return antisym(s.strengthR)
     }
   }
 
@@ -87,13 +96,21 @@ export class ExactEvaluator {
     let flat = 0
     for (let i = 0; i < own.length; i++) flat += values[i]! * 4 ** i
     let slot = this.components.get(l)
-    if (!slot) { slot = new Array(4 ** own.length); this.components.set(l, slot) }
+    if (!slot) {
+      slot = new Array(4 ** own.length)
+      this.components.set(l, slot)
+    }
     const hit = slot[flat]
     if (hit) return hit
     const labels = [...l.d, ...l.idx]
     const internal = labels.filter((x, i) => labels.indexOf(x) !== i)
     const value = new Map<number, number>(own.map((x, i) => [x, values[i]!]))
-    const at = () => this.letter(l, l.d.map((x) => value.get(x)!), l.idx.map((x) => value.get(x)!))
+    const at = () =>
+      this.letter(
+        l,
+        l.d.map((x) => value.get(x)!),
+        l.idx.map((x) => value.get(x)!),
+      )
     let out: GMat
     if (internal.length === 0) out = at()
     else {
@@ -101,7 +118,11 @@ export class ExactEvaluator {
       out = sp.zero()
       for (let a = 0; a < 4 ** internal.length; a++) {
         let w = 1
-        internal.forEach((x, i) => { const v = Math.floor(a / 4 ** i) % 4; value.set(x, v); w *= METRIC[v]! })
+        internal.forEach((x, i) => {
+          const v = Math.floor(a / 4 ** i) % 4
+          value.set(x, v)
+          w *= METRIC[v]!
+        })
         out = w === 1 ? sp.add(out, at()) : sp.sub(out, at())
       }
     }
@@ -135,7 +156,9 @@ export class ExactEvaluator {
     let total = 0
     for (const [perm, sign] of PERMUTATIONS_4) {
       const vals = new Int8Array(Math.max(...m.eps, ...plans.map((p) => p.maxLabel)) + 1)
-      m.eps.forEach((x, i) => { vals[x] = perm[i]! })
+      m.eps.forEach((x, i) => {
+        vals[x] = perm[i]!
+      })
       const v = single ? this.traceAtFull(plans[0]!, vals) : this.combine(m, plans, external, vals)
       total = sign === 1 ? F.add(total, v) : F.sub(total, v)
     }
@@ -190,7 +213,14 @@ export class ExactEvaluator {
       for (let i = 0; i < last.prevOpen.length; i++) vals[last.prevOpen[i]!] = Math.floor(a / 4 ** i) % 4
       let w = 1
       for (const x of last.closing) w *= METRIC[vals[x]!]!
-      const v = sp.traceProductAtFull(M, this.letterAt(last.letter, last.own, Int8Array.from(last.own, (x) => vals[x]!)))
+      const v = sp.traceProductAtFull(
+        M,
+        this.letterAt(
+          last.letter,
+          last.own,
+          Int8Array.from(last.own, (x) => vals[x]!),
+        ),
+      )
       total = F.add(total, w === 1 ? v : F.neg(v))
     }
     return total
@@ -210,13 +240,22 @@ export class ExactEvaluator {
     let out = 0
     for (let a = 0; a < 4 ** shared.length; a++) {
       let w = 1
-      shared.forEach((x, i) => { const v = Math.floor(a / 4 ** i) % 4; vals[x] = v; w *= METRIC[v]! })
+      shared.forEach((x, i) => {
+        const v = Math.floor(a / 4 ** i) % 4
+        vals[x] = v
+        w *= METRIC[v]!
+      })
       let prod: GScalar | null = null
       for (const t of tensors) {
         let c = 0
-        t.labels.forEach((x, i) => { c += vals[x]! * 4 ** i })
+        t.labels.forEach((x, i) => {
+          c += vals[x]! * 4 ** i
+        })
         const g = t.values[c]
-        if (!g) { prod = null; break }
+        if (!g) {
+          prod = null
+          break
+        }
         prod = prod === null ? g : sp.mulScalar(prod, g)
       }
       if (prod) out = F.add(out, w === 1 ? prod[full]! : F.neg(prod[full]!))
@@ -246,19 +285,32 @@ export class ExactEvaluator {
     for (let k = 2; k <= N; k++) fact *= k
     const inv = F.inv(fact)
     for (let a = 0; a < out.length; a++) {
-      ext.forEach((x, i) => { vals[x] = Math.floor(a / 4 ** i) % 4 })
+      ext.forEach((x, i) => {
+        vals[x] = Math.floor(a / 4 ** i) % 4
+      })
       const sum = sp.zeroScalar()
       for (let b = 0; b < 4 ** internal.length; b++) {
         let w = 1
-        internal.forEach((x, i) => { const v = Math.floor(b / 4 ** i) % 4; vals[x] = v; w *= METRIC[v]! })
-        const mats = f.letters.map((l) => this.letter(l, l.d.map((x) => vals[x]!), l.idx.map((x) => vals[x]!)))
+        internal.forEach((x, i) => {
+          const v = Math.floor(b / 4 ** i) % 4
+          vals[x] = v
+          w *= METRIC[v]!
+        })
+        const mats = f.letters.map((l) =>
+          this.letter(
+            l,
+            l.d.map((x) => vals[x]!),
+            l.idx.map((x) => vals[x]!),
+          ),
+        )
         const entry = (X: GMat, i: number, j: number): GScalar => Float64Array.from({ length: sp.size }, (_, S) => X[S * sp.nn + i * N + j]!)
-        for (const [s, ss] of perms) for (const [t, ts] of perms) {
-          let prod = entry(mats[0]!, s[0]!, t[0]!)
-          for (let k = 1; k < N; k++) prod = sp.mulScalar(prod, entry(mats[k]!, s[k]!, t[k]!))
-          const sign = ss * ts * w
-          for (let S = 0; S < sp.size; S++) sum[S] = sign === 1 ? F.add(sum[S]!, prod[S]!) : F.sub(sum[S]!, prod[S]!)
-        }
+        for (const [s, ss] of perms)
+          for (const [t, ts] of perms) {
+            let prod = entry(mats[0]!, s[0]!, t[0]!)
+            for (let k = 1; k < N; k++) prod = sp.mulScalar(prod, entry(mats[k]!, s[k]!, t[k]!))
+            const sign = ss * ts * w
+            for (let S = 0; S < sp.size; S++) sum[S] = sign === 1 ? F.add(sum[S]!, prod[S]!) : F.sub(sum[S]!, prod[S]!)
+          }
       }
       out[a] = sum.map((x) => F.mul(x, inv)) as GScalar
     }

@@ -15,14 +15,29 @@ import { dot, type Config, type Leg, type LegKind } from './kinematics'
 import type { Letter, LetterKind, Monomial, Operator } from './monomial'
 
 /** One flavor matrix with its Lorentz tensor: Σ_t c_t ⊗_slots vector(ids_t). */
-interface Group { M: Float64Array, terms: { c: number, vecs: number[] }[] }
+interface Group {
+  M: Float64Array
+  terms: { c: number; vecs: number[] }[]
+}
 
-interface Compiled { letters: Letter[], pairs: [number, number, number, number][], eps: [number, number][] | null, factorSizes: { type: 'trace' | 'det', size: number }[] }
+interface Compiled {
+  letters: Letter[]
+  pairs: [number, number, number, number][]
+  eps: [number, number][] | null
+  factorSizes: { type: 'trace' | 'det'; size: number }[]
+}
 
 /** Leg kinds a linear letter lives on (intrinsic parity: odd letters on pion, p, a legs). */
 export const ACCEPTS: Record<LetterKind, readonly LegKind[]> = {
-  'u': ['pion', 'p', 'a'], 'chi+': ['s'], 'chi-': ['p'], 'f+': ['v'], 'f-': ['a'],
-  'chi': ['s', 'p'], 'chibar': ['s', 'p'], 'FL': ['v', 'a'], 'FR': ['v', 'a'],
+  u: ['pion', 'p', 'a'],
+  'chi+': ['s'],
+  'chi-': ['p'],
+  'f+': ['v'],
+  'f-': ['a'],
+  chi: ['s', 'p'],
+  chibar: ['s', 'p'],
+  FL: ['v', 'a'],
+  FR: ['v', 'a'],
 }
 
 const compiledCache = new WeakMap<Monomial, Compiled>()
@@ -49,7 +64,10 @@ export class FreeEvaluator {
   private readonly dots: number[][]
   private readonly groupCache = new Map<string, Group[]>()
   private readonly phi: Float64Array[]
-  constructor(readonly F: PrimeField, readonly config: Config) {
+  constructor(
+    readonly F: PrimeField,
+    readonly config: Config,
+  ) {
     this.i = F.sqrtMinusOne()
     this.N = config.N
     this.vectors = config.legs.flatMap((l) => [l.k, l.el ?? [0, 0, 0, 0], l.er ?? [0, 0, 0, 0]])
@@ -89,7 +107,13 @@ export class FreeEvaluator {
     const i = this.i
     const m = (a: readonly number[], c = 1) => Float64Array.from(a, (x) => F.mul(F.from(c), x))
     // F_μν of a leg with l or r = M e: i(k_μ e_ν − k_ν e_μ) M
-    const strength = (M: readonly number[], s: number): Group => ({ M: m(M), terms: [{ c: F.mul(F.from(s), i), vecs: [k, e] }, { c: F.mul(F.from(-s), i), vecs: [e, k] }] })
+    const strength = (M: readonly number[], s: number): Group => ({
+      M: m(M),
+      terms: [
+        { c: F.mul(F.from(s), i), vecs: [k, e] },
+        { c: F.mul(F.from(-s), i), vecs: [e, k] },
+      ],
+    })
     const r = leg.tr
     let base: Group[] = []
     if (l.kind === 'u') {
@@ -131,12 +155,17 @@ export class FreeEvaluator {
     const used = new Array<boolean>(legs.length).fill(false)
     const legOf: number[] = []
     const rec = (i: number) => {
-      if (i === c.letters.length) { total = F.add(total, this.assigned(c, legOf)); return }
+      if (i === c.letters.length) {
+        total = F.add(total, this.assigned(c, legOf))
+        return
+      }
       for (let j = 0; j < legs.length; j++) {
         if (used[j] || !ACCEPTS[c.letters[i]!.kind].includes(legs[j]!.kind)) continue
-        used[j] = true; legOf.push(j)
+        used[j] = true
+        legOf.push(j)
         rec(i + 1)
-        used[j] = false; legOf.pop()
+        used[j] = false
+        legOf.pop()
       }
     }
     rec(0)
@@ -160,7 +189,11 @@ export class FreeEvaluator {
         if (tensor !== 0) total = F.add(total, F.mul(tensor, this.flavor(c, chosen)))
         return
       }
-      for (const g of groupLists[i]!) { chosen.push(g); rec(i + 1); chosen.pop() }
+      for (const g of groupLists[i]!) {
+        chosen.push(g)
+        rec(i + 1)
+        chosen.pop()
+      }
     }
     rec(0)
     return total
@@ -170,7 +203,7 @@ export class FreeEvaluator {
   private contraction(c: Compiled, chosen: Group[]): number {
     const F = this.F
     const p = F.p
-    const picks: { c: number, vecs: number[] }[] = []
+    const picks: { c: number; vecs: number[] }[] = []
     let total = 0
     const rec = (i: number, coef: number) => {
       if (i === chosen.length) {
@@ -183,7 +216,11 @@ export class FreeEvaluator {
         total = (total + v) % p
         return
       }
-      for (const t of chosen[i]!.terms) { picks.push(t); rec(i + 1, (coef * t.c) % p); picks.pop() }
+      for (const t of chosen[i]!.terms) {
+        picks.push(t)
+        rec(i + 1, (coef * t.c) % p)
+        picks.pop()
+      }
     }
     rec(0, 1)
     return total
@@ -209,7 +246,14 @@ export class FreeEvaluator {
     let k = 0
     let v = 1
     for (const f of c.factorSizes) {
-      const x = f.type === 'trace' ? this.traceOfProduct(chosen, k, f.size) : mixedDet(F, this.N, chosen.slice(k, k + f.size).map((g) => g.M))
+      const x =
+        f.type === 'trace'
+          ? this.traceOfProduct(chosen, k, f.size)
+          : mixedDet(
+              F,
+              this.N,
+              chosen.slice(k, k + f.size).map((g) => g.M),
+            )
       k += f.size
       v = F.mul(v, x)
       if (v === 0) return 0
@@ -227,11 +271,12 @@ export class FreeEvaluator {
     for (let m = 1; m < size; m++) {
       const b = chosen[from + m]!.M
       out.fill(0, 0, N * N)
-      for (let i = 0; i < N; i++) for (let k = 0; k < N; k++) {
-        const x = acc[i * N + k]!
-        if (x === 0) continue
-        for (let j = 0; j < N; j++) out[i * N + j] = (out[i * N + j]! + x * b[k * N + j]!) % p
-      }
+      for (let i = 0; i < N; i++)
+        for (let k = 0; k < N; k++) {
+          const x = acc[i * N + k]!
+          if (x === 0) continue
+          for (let j = 0; j < N; j++) out[i * N + j] = (out[i * N + j]! + x * b[k * N + j]!) % p
+        }
       acc = out
       ;[out, spare] = [spare, out]
     }
@@ -265,11 +310,12 @@ function permutations(n: number): [number[], number][] {
 function mixedDet(F: PrimeField, N: number, mats: Float64Array[]): number {
   const perms = permutations(N)
   let s = 0
-  for (const [a, sa] of perms) for (const [b, sb] of perms) {
-    let prod = sa * sb === 1 ? 1 : F.p - 1
-    for (let k = 0; k < N; k++) prod = F.mul(prod, mats[k]![a[k]! * N + b[k]!]!)
-    s = F.add(s, prod)
-  }
+  for (const [a, sa] of perms)
+    for (const [b, sb] of perms) {
+      let prod = sa * sb === 1 ? 1 : F.p - 1
+      for (let k = 0; k < N; k++) prod = F.mul(prod, mats[k]![a[k]! * N + b[k]!]!)
+      s = F.add(s, prod)
+    }
   let fact = 1
   for (let k = 2; k <= N; k++) fact *= k
   return F.div(s, fact)

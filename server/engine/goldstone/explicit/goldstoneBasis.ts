@@ -45,7 +45,10 @@ export interface GoldstoneBasisOptions {
   signal?: { aborted: boolean }
 }
 
-export interface GoldstoneRewriteTerm { text: string, coefficient: string }
+export interface GoldstoneRewriteTerm {
+  text: string
+  coefficient: string
+}
 
 export interface GoldstoneOperator {
   text: string
@@ -60,7 +63,12 @@ export interface GoldstoneOperator {
   rewrite?: GoldstoneRewriteTerm[]
 }
 
-export interface GoldstoneClassTally { key: string, hilbert: number, rank: number, tallyOk: boolean }
+export interface GoldstoneClassTally {
+  key: string
+  hilbert: number
+  rank: number
+  tallyOk: boolean
+}
 
 export interface GoldstoneOrderBasis {
   order: number
@@ -69,18 +77,24 @@ export interface GoldstoneOrderBasis {
   hilbert: number
   rank: number
   tallyOk: boolean
-  contact: { hilbert: number, rank: number, kept: number }
+  contact: { hilbert: number; rank: number; kept: number }
   classes: GoldstoneClassTally[]
   kept: GoldstoneOperator[]
   alternatives: GoldstoneOperator[]
   message?: string
 }
 
-export interface GoldstoneBasisResult { coset: string, evaluatedAtN: number, note: string, byOrder: GoldstoneOrderBasis[] }
+export interface GoldstoneBasisResult {
+  coset: string
+  evaluatedAtN: number
+  note: string
+  byOrder: GoldstoneOrderBasis[]
+}
 
 export const MAX_EXPLICIT_ORDER = 6
 
-export const GOLDSTONE_NOTE = 'modulo equations of motion, integration by parts, Bianchi and Maurer–Cartan identities and the trace relations of N; each operator C- and P-even and Hermitian with a real coefficient'
+export const GOLDSTONE_NOTE =
+  'modulo equations of motion, integration by parts, Bianchi and Maurer–Cartan identities and the trace relations of N; each operator C- and P-even and Hermitian with a real coefficient'
 
 /**
  * Build the explicit bases of orders minOrder..maxOrder (even).
@@ -103,7 +117,10 @@ function prioritized(cands: Candidate[], keep: string[] | undefined): Candidate[
     const k = keep?.indexOf(operatorText(c.op)) ?? -1
     return k >= 0 ? k : (keep?.length ?? 0) + (c.contact ? 0 : 1000)
   }
-  return cands.map((c, i) => ({ c, i })).sort((a, b) => rank(a.c) - rank(b.c) || compareScores(a.c.score, b.c.score) || a.i - b.i).map((x) => x.c)
+  return cands
+    .map((c, i) => ({ c, i }))
+    .sort((a, b) => rank(a.c) - rank(b.c) || compareScores(a.c.score, b.c.score) || a.i - b.i)
+    .map((x) => x.c)
 }
 
 function compareScores(a: number[], b: number[]): number {
@@ -144,11 +161,26 @@ export function selectOrder(order: number, N: number, o: GoldstoneBasisOptions, 
   const oddKinds: LegKind[] = ['pion', ...(sources.scalar ? ['p' as const] : []), ...(sources.vector ? ['a' as const] : [])]
   const anySource = sources.scalar || sources.vector
   for (const m of degrees) {
-    progress(0.3 * blocks.length / degrees.length, `leading values, ${m} letters`)
+    progress((0.3 * blocks.length) / degrees.length, `leading values, ${m} letters`)
     const classes = count.classes.filter((c) => lettersOfClass(c.key) === m).map((c) => ({ key: c.key, count: c.operators }))
     const target = classes.reduce((s, c) => s + c.count, 0)
-    if (order === 2 && !anySource) blocks.push(wholeBlock(cands.filter((c) => c.letters === m), m, target))
-    else blocks.push(selectBlock(cands.filter((c) => c.letters === m), m, classes, { F, rng, N, oddKinds, signal: o.signal }))
+    if (order === 2 && !anySource)
+      blocks.push(
+        wholeBlock(
+          cands.filter((c) => c.letters === m),
+          m,
+          target,
+        ),
+      )
+    else
+      blocks.push(
+        selectBlock(
+          cands.filter((c) => c.letters === m),
+          m,
+          classes,
+          { F, rng, N, oddKinds, signal: o.signal },
+        ),
+      )
   }
   const tidy = tidier(F, blocks)
   if (o.keep?.[key]?.length) reprioritize(F, blocks, o.keep[key]!, tidy)
@@ -168,12 +200,28 @@ function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress
   const alternatives = altRaw.map(tidy)
   const contactAll = live.filter((c) => c.contact && !altRaw.includes(c))
   const everything = [...kept, ...alternatives, ...contactAll]
-  const prints = exactFingerprints(everything.map((c) => c.op), fields, configs, patterns, N, order, o.signal, (f) => progress(0.3 + 0.7 * f, 'exact values'), everything)
+  const prints = exactFingerprints(
+    everything.map((c) => c.op),
+    fields,
+    configs,
+    patterns,
+    N,
+    order,
+    o.signal,
+    (f) => progress(0.3 + 0.7 * f, 'exact values'),
+    everything,
+  )
   const keptPrints = kept.map((c) => prints.get(c)!)
   const exactRank = rankOf(keptPrints)
   const contactPrints = [...kept, ...contactAll].filter((c) => c.contact).map((c) => prints.get(c)!)
   const describe = (c: Candidate): GoldstoneOperator => ({
-    text: operatorText(c.op), latex: operatorText(c.op, true), classKey: c.classKey, letters: c.letters, parity: c.parity, contact: c.contact, fingerprint: prints.get(c)!,
+    text: operatorText(c.op),
+    latex: operatorText(c.op, true),
+    classKey: c.classKey,
+    letters: c.letters,
+    parity: c.parity,
+    contact: c.contact,
+    fingerprint: prints.get(c)!,
   })
   const keptOps = kept.map(describe)
   const altOps = alternatives.map((c) => {
@@ -185,7 +233,16 @@ function buildOrder(order: number, N: number, o: GoldstoneBasisOptions, progress
   return tally(order, key, count, blocks, keptOps, altOps, exactRank, rankOf(contactPrints))
 }
 
-function tally(order: number, key: string, count: ReturnType<typeof countGoldstone>['byOrder'][number], blocks: BlockResult[], kept: GoldstoneOperator[], alternatives: GoldstoneOperator[], exactRank: number, contactRank: number): GoldstoneOrderBasis {
+function tally(
+  order: number,
+  key: string,
+  count: ReturnType<typeof countGoldstone>['byOrder'][number],
+  blocks: BlockResult[],
+  kept: GoldstoneOperator[],
+  alternatives: GoldstoneOperator[],
+  exactRank: number,
+  contactRank: number,
+): GoldstoneOrderBasis {
   const classes = count.classes.map((c) => {
     const rank = blocks.find((b) => b.m === lettersOfClass(c.key))?.classRanks.get(c.key) ?? 0
     return { key: c.key, hilbert: c.operators, rank, tallyOk: rank === c.operators }
@@ -217,7 +274,10 @@ function reprioritize(F: PrimeField, blocks: BlockResult[], keep: string[], tidy
   for (const b of blocks) {
     if (b.columns.size === 0) continue
     const order = b.candidates.map((c, i) => ({ c, k: wanted.get(operatorText(tidy(c).op)) ?? keep.length + i })).sort((x, y) => x.k - y.k)
-    const e = rref(F, b.configs.map((_, r) => order.map(({ c }) => b.columns.get(c)![r]!)))
+    const e = rref(
+      F,
+      b.configs.map((_, r) => order.map(({ c }) => b.columns.get(c)![r]!)),
+    )
     b.candidates = order.map(({ c }) => c)
     b.kept = e.pivots.map((col) => order[col]!.c)
   }
@@ -236,8 +296,17 @@ function lowOrderConfigs(F: PrimeField, rng: SeededRandom, N: number): Config[] 
  * Exact values of the operators at the configurations (prime 1) and at fresh ones of the same
  * patterns (prime 2); `letters` is each operator's number of letters (its filtration degree).
  */
-export function exactFingerprints<T>(ops: readonly Operator[], fields: readonly PrimeField[], configs: readonly Config[], patterns: readonly LegKind[][], N: number, order: number,
-  signal: { aborted: boolean } | undefined, progress: (f: number) => void, keys: readonly T[]): Map<T, Fingerprint> {
+export function exactFingerprints<T>(
+  ops: readonly Operator[],
+  fields: readonly PrimeField[],
+  configs: readonly Config[],
+  patterns: readonly LegKind[][],
+  N: number,
+  order: number,
+  signal: { aborted: boolean } | undefined,
+  progress: (f: number) => void,
+  keys: readonly T[],
+): Map<T, Fingerprint> {
   const letters = ops.map((op) => Math.min(...op.terms.map((t) => letterCount(t.mono))))
   const values = ops.map(() => fields.map(() => [] as number[]))
   fields.forEach((F, fi) => {
@@ -259,7 +328,12 @@ export function exactFingerprints<T>(ops: readonly Operator[], fields: readonly 
 
 function rankOf(prints: Fingerprint[]): number {
   if (prints.length === 0) return 0
-  const ranks = prints[0]!.primes.map((p, i) => matrixRank(new PrimeField(p), prints[0]!.values[i]!.map((_, k) => prints.map((fp) => fp.values[i]![k]!))))
+  const ranks = prints[0]!.primes.map((p, i) =>
+    matrixRank(
+      new PrimeField(p),
+      prints[0]!.values[i]!.map((_, k) => prints.map((fp) => fp.values[i]![k]!)),
+    ),
+  )
   if (new Set(ranks).size !== 1) throw new EngineConsistencyError('goldstoneBasis', `the two primes disagree on a rank (${ranks.join(' vs ')})`)
   return ranks[0]!
 }

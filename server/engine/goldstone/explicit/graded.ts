@@ -35,7 +35,11 @@ export class GradedSpace {
   /** Masks in order of increasing number of legs. */
   readonly masksBySize: number[][]
   readonly popcount: Uint8Array
-  constructor(readonly F: PrimeField, readonly n: number, readonly N: number) {
+  constructor(
+    readonly F: PrimeField,
+    readonly n: number,
+    readonly N: number,
+  ) {
     if (n < 1 || n > 9) throw new EngineInputError('GradedSpace', `between 1 and 9 legs are supported, got ${n}`)
     if (F.p >= EXPLICIT_PRIME_LIMIT) throw new EngineInputError('GradedSpace', `the explicit engine works mod primes below 2^21, got ${F.p}`)
     if (2 ** n * N * (F.p - 1) ** 2 >= 2 ** 53) throw new EngineInputError('GradedSpace', `${n} legs with ${N} × ${N} matrices would overflow the exact sums mod ${F.p}`)
@@ -51,8 +55,12 @@ export class GradedSpace {
     }
   }
 
-  zero(): GMat { return new Float64Array(this.size * this.nn) }
-  zeroScalar(): GScalar { return new Float64Array(this.size) }
+  zero(): GMat {
+    return new Float64Array(this.size * this.nn)
+  }
+  zeroScalar(): GScalar {
+    return new Float64Array(this.size)
+  }
 
   /** The constant identity matrix (only the empty subset). */
   identity(): GMat {
@@ -77,14 +85,20 @@ export class GradedSpace {
   add(X: GMat, Y: GMat): GMat {
     const p = this.F.p
     const out = new Float64Array(X.length)
-    for (let k = 0; k < X.length; k++) { const s = X[k]! + Y[k]!; out[k] = s >= p ? s - p : s }
+    for (let k = 0; k < X.length; k++) {
+      const s = X[k]! + Y[k]!
+      out[k] = s >= p ? s - p : s
+    }
     return out
   }
 
   sub(X: GMat, Y: GMat): GMat {
     const p = this.F.p
     const out = new Float64Array(X.length)
-    for (let k = 0; k < X.length; k++) { const s = X[k]! - Y[k]!; out[k] = s < 0 ? s + p : s }
+    for (let k = 0; k < X.length; k++) {
+      const s = X[k]! - Y[k]!
+      out[k] = s < 0 ? s + p : s
+    }
     return out
   }
 
@@ -212,7 +226,10 @@ export class GradedSpace {
       let s = 0
       for (let T = S; ; T = (T - 1) & S) {
         const x = a[T]!
-        if (x !== 0) { const y = b[S & ~T]!; if (y !== 0) s = (s + x * y) % p }
+        if (x !== 0) {
+          const y = b[S & ~T]!
+          if (y !== 0) s = (s + x * y) % p
+        }
         if (T === 0) break
       }
       out[S] = s

@@ -38,7 +38,10 @@ export interface Leg {
   er?: Vec4
 }
 
-export interface Config { legs: Leg[], N: number }
+export interface Config {
+  legs: Leg[]
+  N: number
+}
 
 /** η^{μμ}: +1 for μ = 0, −1 otherwise. */
 export const METRIC: readonly number[] = [1, -1, -1, -1]
@@ -85,12 +88,23 @@ function momenta(F: PrimeField, rng: SeededRandom, kinds: readonly LegKind[]): V
   const n = kinds.length
   const ks: Vec4[] = kinds.map((kind) => (kind === 'pion' ? nullVector(F, rng) : randomVector(F, rng)))
   let last = -1
-  kinds.forEach((k, i) => { if (isSourceLeg(k)) last = i })
+  kinds.forEach((k, i) => {
+    if (isSourceLeg(k)) last = i
+  })
   if (last >= 0) {
-    ks[last] = negate(F, sumVectors(F, ks.filter((_, i) => i !== last)))
+    ks[last] = negate(
+      F,
+      sumVectors(
+        F,
+        ks.filter((_, i) => i !== last),
+      ),
+    )
     return ks
   }
-  if (n === 2) { ks[1] = negate(F, ks[0]!); return ks }
+  if (n === 2) {
+    ks[1] = negate(F, ks[0]!)
+    return ks
+  }
   // all light-like: K = −Σ_{i<n−2} k_i split into two light-like vectors
   const K = negate(F, sumVectors(F, ks.slice(0, n - 2)))
   const m = nullVector(F, rng)
@@ -110,7 +124,10 @@ function propagatorsDefined(F: PrimeField, legs: readonly Leg[]): boolean {
   const isPion = (T: number) => (T & (T - 1)) === 0 && legs[Math.log2(T)]!.kind === 'pion'
   for (let S = 1; S < full; S++) {
     if (isPion(S) || isPion(full & ~S)) continue
-    const k = sumVectors(F, legs.filter((_, i) => S & (1 << i)).map((l) => l.k))
+    const k = sumVectors(
+      F,
+      legs.filter((_, i) => S & (1 << i)).map((l) => l.k),
+    )
     if (dot(F, k, k) === 0) return false
   }
   return true
@@ -127,8 +144,14 @@ export function randomConfig(F: PrimeField, rng: SeededRandom, N: number, kinds:
     const legs: Leg[] = kinds.map((kind, j) => {
       const k = ks[j]!
       if (kind === 'pion') return { kind, k, T: randomMatrix(F, rng, N, true) }
-      if (kind === 's') { const S = randomMatrix(F, rng, N, false); return { kind, k, chi: S, chiBar: S } }
-      if (kind === 'p') { const P = randomMatrix(F, rng, N, false); return { kind, k, chi: P.map((x) => F.mul(i, x)), chiBar: P.map((x) => F.mul(F.neg(i), x)) } }
+      if (kind === 's') {
+        const S = randomMatrix(F, rng, N, false)
+        return { kind, k, chi: S, chiBar: S }
+      }
+      if (kind === 'p') {
+        const P = randomMatrix(F, rng, N, false)
+        return { kind, k, chi: P.map((x) => F.mul(i, x)), chiBar: P.map((x) => F.mul(F.neg(i), x)) }
+      }
       const M = randomMatrix(F, rng, N, true)
       const e = randomVector(F, rng)
       return { kind, k, tl: kind === 'v' ? M : M.map((x) => F.neg(x)), tr: M, el: e, er: e }

@@ -18,26 +18,38 @@ export interface Letter {
   idx: number[]
 }
 
-export interface Factor { type: 'trace' | 'det', letters: Letter[] }
+export interface Factor {
+  type: 'trace' | 'det'
+  letters: Letter[]
+}
 
-export interface Monomial { factors: Factor[], eps?: [number, number, number, number] }
+export interface Monomial {
+  factors: Factor[]
+  eps?: [number, number, number, number]
+}
 
 /** Σ coef·monomial, times i^iPower (i makes a C-even combination Hermitian where needed). */
-export interface Operator { iPower: 0 | 1, terms: { coef: number, mono: Monomial }[] }
+export interface Operator {
+  iPower: 0 | 1
+  terms: { coef: number; mono: Monomial }[]
+}
 
-export const OWN_SLOTS: Record<LetterKind, number> = { 'u': 1, 'chi+': 0, 'chi-': 0, 'f+': 2, 'f-': 2, 'chi': 0, 'chibar': 0, 'FL': 2, 'FR': 2 }
+export const OWN_SLOTS: Record<LetterKind, number> = { u: 1, 'chi+': 0, 'chi-': 0, 'f+': 2, 'f-': 2, chi: 0, chibar: 0, FL: 2, FR: 2 }
 
 /** Chiral order of a letter without its derivatives. */
-export const LETTER_ORDER: Record<LetterKind, number> = { 'u': 1, 'chi+': 2, 'chi-': 2, 'f+': 2, 'f-': 2, 'chi': 2, 'chibar': 2, 'FL': 2, 'FR': 2 }
+export const LETTER_ORDER: Record<LetterKind, number> = { u: 1, 'chi+': 2, 'chi-': 2, 'f+': 2, 'f-': 2, chi: 2, chibar: 2, FL: 2, FR: 2 }
 
 /** Source letters (contact terms) and the groups their flavor indices belong to: [left, right]. */
 export const SOURCE_SIDES: Partial<Record<LetterKind, ['L' | 'R', 'L' | 'R']>> = {
-  chi: ['R', 'L'], chibar: ['L', 'R'], FL: ['L', 'L'], FR: ['R', 'R'],
+  chi: ['R', 'L'],
+  chibar: ['L', 'R'],
+  FL: ['L', 'L'],
+  FR: ['R', 'R'],
 }
 
 /** Sign under C (which also reverses products) and under Hermitian conjugation. */
-const C_SIGN: Record<LetterKind, number> = { 'u': 1, 'chi+': 1, 'chi-': 1, 'f+': -1, 'f-': 1, 'chi': 1, 'chibar': 1, 'FL': -1, 'FR': -1 }
-const H_SIGN: Record<LetterKind, number> = { 'u': 1, 'chi+': 1, 'chi-': -1, 'f+': 1, 'f-': 1, 'chi': 1, 'chibar': 1, 'FL': 1, 'FR': 1 }
+const C_SIGN: Record<LetterKind, number> = { u: 1, 'chi+': 1, 'chi-': 1, 'f+': -1, 'f-': 1, chi: 1, chibar: 1, FL: -1, FR: -1 }
+const H_SIGN: Record<LetterKind, number> = { u: 1, 'chi+': 1, 'chi-': -1, 'f+': 1, 'f-': 1, chi: 1, chibar: 1, FL: 1, FR: 1 }
 /** C maps a source letter to another kind (χ → χ^T keeps the kind; F_L → −F_R^T). */
 const C_KIND: Partial<Record<LetterKind, LetterKind>> = { FL: 'FR', FR: 'FL' }
 /** Hermitian conjugation maps χ ↔ χ†. */
@@ -85,7 +97,11 @@ export function hermitianConjugate(m: Monomial): [number, Monomial] {
 export function checkLabels(m: Monomial): void {
   const count = new Map<number, number>()
   const bump = (x: number) => count.set(x, (count.get(x) ?? 0) + 1)
-  for (const f of m.factors) for (const l of f.letters) { l.d.forEach(bump); l.idx.forEach(bump) }
+  for (const f of m.factors)
+    for (const l of f.letters) {
+      l.d.forEach(bump)
+      l.idx.forEach(bump)
+    }
   m.eps?.forEach(bump)
   for (const [label, c] of count) {
     if (c !== 2) throw new EngineInputError('checkLabels', `Lorentz index ${label} appears ${c} times; every index must be contracted once`)
@@ -95,14 +111,20 @@ export function checkLabels(m: Monomial): void {
 const GREEK = ['μ', 'ν', 'ρ', 'σ', 'α', 'β', 'γ', 'δ', 'κ', 'λ', 'τ', 'ω']
 const TEX_GREEK = ['\\mu', '\\nu', '\\rho', '\\sigma', '\\alpha', '\\beta', '\\gamma', '\\delta', '\\kappa', '\\lambda', '\\tau', '\\omega']
 
-const TEXT_KIND: Record<LetterKind, string> = { 'u': 'u', 'chi+': 'χ+', 'chi-': 'χ−', 'f+': 'f+', 'f-': 'f−', 'chi': 'χ', 'chibar': 'χ†', 'FL': 'F_L', 'FR': 'F_R' }
-const TEX_KIND: Record<LetterKind, string> = { 'u': 'u', 'chi+': '\\chi_+', 'chi-': '\\chi_-', 'f+': 'f_+', 'f-': 'f_-', 'chi': '\\chi', 'chibar': '\\chi^\\dagger', 'FL': 'F_L', 'FR': 'F_R' }
+const TEXT_KIND: Record<LetterKind, string> = { u: 'u', 'chi+': 'χ+', 'chi-': 'χ−', 'f+': 'f+', 'f-': 'f−', chi: 'χ', chibar: 'χ†', FL: 'F_L', FR: 'F_R' }
+const TEX_KIND: Record<LetterKind, string> = { u: 'u', 'chi+': '\\chi_+', 'chi-': '\\chi_-', 'f+': 'f_+', 'f-': 'f_-', chi: '\\chi', chibar: '\\chi^\\dagger', FL: 'F_L', FR: 'F_R' }
 
 /** Label names in order of first appearance. */
 function labelNames(m: Monomial, names: string[]): Map<number, string> {
   const out = new Map<number, string>()
-  const see = (x: number) => { if (!out.has(x)) out.set(x, names[out.size % names.length]!) }
-  for (const f of m.factors) for (const l of f.letters) { l.d.forEach(see); l.idx.forEach(see) }
+  const see = (x: number) => {
+    if (!out.has(x)) out.set(x, names[out.size % names.length]!)
+  }
+  for (const f of m.factors)
+    for (const l of f.letters) {
+      l.d.forEach(see)
+      l.idx.forEach(see)
+    }
   m.eps?.forEach(see)
   return out
 }
@@ -115,10 +137,19 @@ function isSource(l: Letter): boolean {
 export function monomialText(m: Monomial): string {
   const names = labelNames(m, GREEK)
   const seen = new Set<number>()
-  const name = (x: number) => { const up = seen.has(x); seen.add(x); return { n: names.get(x)!, up } }
+  const name = (x: number) => {
+    const up = seen.has(x)
+    seen.add(x)
+    return { n: names.get(x)!, up }
+  }
   const eps = m.eps ? `ε^{${m.eps.map((x) => name(x).n).join('')}} ` : ''
   const letter = (l: Letter) => {
-    const d = l.d.map((x) => { const { n, up } = name(x); return `${isSource(l) ? 'D' : '∇'}${up ? '^' : '_'}${n} ` }).join('')
+    const d = l.d
+      .map((x) => {
+        const { n, up } = name(x)
+        return `${isSource(l) ? 'D' : '∇'}${up ? '^' : '_'}${n} `
+      })
+      .join('')
     const idx = l.idx.map((x) => name(x))
     const sub = idx.length === 0 ? '' : `${idx[0]!.up ? '^' : '_'}${idx.map((i) => i.n).join('')}`
     return `${d}${TEXT_KIND[l.kind]}${sub}`
@@ -131,10 +162,19 @@ export function monomialText(m: Monomial): string {
 export function monomialLatex(m: Monomial): string {
   const names = labelNames(m, TEX_GREEK)
   const seen = new Set<number>()
-  const name = (x: number) => { const up = seen.has(x); seen.add(x); return { n: names.get(x)!, up } }
+  const name = (x: number) => {
+    const up = seen.has(x)
+    seen.add(x)
+    return { n: names.get(x)!, up }
+  }
   const eps = m.eps ? `\\varepsilon^{${m.eps.map((x) => name(x).n).join('')}}` : ''
   const letter = (l: Letter) => {
-    const d = l.d.map((x) => { const { n, up } = name(x); return `${isSource(l) ? 'D' : '\\nabla'}${up ? '^' : '_'}{${n}}` }).join('')
+    const d = l.d
+      .map((x) => {
+        const { n, up } = name(x)
+        return `${isSource(l) ? 'D' : '\\nabla'}${up ? '^' : '_'}{${n}}`
+      })
+      .join('')
     const idx = l.idx.map((x) => name(x))
     const kind = TEX_KIND[l.kind]
     if (idx.length === 0) return `${d}${kind}`

@@ -9,9 +9,17 @@ import { EngineInputError } from '../../errors'
 import { type Factor, type Letter, type LetterKind, type Monomial, type Operator } from './monomial'
 
 const KINDS: readonly [string, LetterKind][] = [
-  ['F_L', 'FL'], ['F_R', 'FR'], ['χ†', 'chibar'], ['χ+', 'chi+'], ['χ−', 'chi-'], ['χ', 'chi'], ['f+', 'f+'], ['f−', 'f-'], ['u', 'u'],
+  ['F_L', 'FL'],
+  ['F_R', 'FR'],
+  ['χ†', 'chibar'],
+  ['χ+', 'chi+'],
+  ['χ−', 'chi-'],
+  ['χ', 'chi'],
+  ['f+', 'f+'],
+  ['f−', 'f-'],
+  ['u', 'u'],
 ]
-const OWN: Record<LetterKind, number> = { 'u': 1, 'chi+': 0, 'chi-': 0, 'f+': 2, 'f-': 2, 'chi': 0, 'chibar': 0, 'FL': 2, 'FR': 2 }
+const OWN: Record<LetterKind, number> = { u: 1, 'chi+': 0, 'chi-': 0, 'f+': 2, 'f-': 2, chi: 0, chibar: 0, FL: 2, FR: 2 }
 const GREEK = /^[α-ωΑ-Ω]/u
 
 function fail(text: string, why: string): never {
@@ -20,24 +28,43 @@ function fail(text: string, why: string): never {
 
 /** Same text with the typing aids replaced by the board's symbols. */
 function normalize(text: string): string {
-  return text.replace(/</g, '⟨').replace(/>/g, '⟩').replace(/chi/g, 'χ').replace(/χ\^?dagger|χ\^†/g, 'χ†').replace(/-/g, '−').replace(/\s+/g, ' ').trim()
+  return text
+    .replace(/</g, '⟨')
+    .replace(/>/g, '⟩')
+    .replace(/chi/g, 'χ')
+    .replace(/χ\^?dagger|χ\^†/g, 'χ†')
+    .replace(/-/g, '−')
+    .replace(/\s+/g, ' ')
+    .trim()
 }
 
 class Reader {
   pos = 0
   readonly labels = new Map<string, number>()
   readonly uses = new Map<string, number>()
-  constructor(readonly s: string, readonly original: string) {}
-  peek(n = 1): string { return this.s.slice(this.pos, this.pos + n) }
-  spaces(): void { while (this.s[this.pos] === ' ') this.pos++ }
-  done(): boolean { this.spaces(); return this.pos >= this.s.length }
+  constructor(
+    readonly s: string,
+    readonly original: string,
+  ) {}
+  peek(n = 1): string {
+    return this.s.slice(this.pos, this.pos + n)
+  }
+  spaces(): void {
+    while (this.s[this.pos] === ' ') this.pos++
+  }
+  done(): boolean {
+    this.spaces()
+    return this.pos >= this.s.length
+  }
   take(token: string): boolean {
     this.spaces()
     if (!this.s.startsWith(token, this.pos)) return false
     this.pos += token.length
     return true
   }
-  expect(token: string, what: string): void { if (!this.take(token)) fail(this.original, `${what} expected at "${this.s.slice(this.pos, this.pos + 12) || 'the end'}"`) }
+  expect(token: string, what: string): void {
+    if (!this.take(token)) fail(this.original, `${what} expected at "${this.s.slice(this.pos, this.pos + 12) || 'the end'}"`)
+  }
   label(): number {
     const ch = this.s.slice(this.pos).match(GREEK)?.[0]
     if (!ch) fail(this.original, `a Greek index expected at "${this.s.slice(this.pos, this.pos + 12) || 'the end'}"`)
@@ -72,7 +99,10 @@ function readLetter(r: Reader): Letter {
 function readFactor(r: Reader): Factor {
   if (r.take('⟨')) {
     const letters: Letter[] = []
-    while (!r.take('⟩')) { if (r.done()) fail(r.original, 'a trace ⟨… is not closed'); letters.push(readLetter(r)) }
+    while (!r.take('⟩')) {
+      if (r.done()) fail(r.original, 'a trace ⟨… is not closed')
+      letters.push(readLetter(r))
+    }
     if (letters.length === 0) fail(r.original, 'an empty trace ⟨⟩')
     return { type: 'trace', letters }
   }
@@ -91,13 +121,16 @@ function readMonomial(r: Reader): Monomial {
   }
   const factors: Factor[] = []
   r.spaces()
-  while (r.peek() === '⟨' || r.s.startsWith('det(', r.pos)) { factors.push(readFactor(r)); r.spaces() }
+  while (r.peek() === '⟨' || r.s.startsWith('det(', r.pos)) {
+    factors.push(readFactor(r))
+    r.spaces()
+  }
   if (factors.length === 0) fail(r.original, 'a trace ⟨…⟩ expected')
   return { factors, ...(eps ? { eps } : {}) }
 }
 
-function readSum(r: Reader, close: string | null): { coef: number, mono: Monomial }[] {
-  const terms: { coef: number, mono: Monomial }[] = []
+function readSum(r: Reader, close: string | null): { coef: number; mono: Monomial }[] {
+  const terms: { coef: number; mono: Monomial }[] = []
   let sign = r.take('−') ? -1 : (r.take('+'), 1)
   for (;;) {
     r.spaces()

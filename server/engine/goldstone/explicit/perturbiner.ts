@@ -24,7 +24,14 @@ import { GradedSpace, type GMat, type GScalar } from './graded'
 import { dot, METRIC, type Config } from './kinematics'
 
 /** The antisymmetric index pairs (μ < ν) in order; pairIndex[μ][ν] = position (or −1 − position for μ > ν). */
-export const PAIRS: readonly (readonly [number, number])[] = [[0, 1], [0, 2], [0, 3], [1, 2], [1, 3], [2, 3]]
+export const PAIRS: readonly (readonly [number, number])[] = [
+  [0, 1],
+  [0, 2],
+  [0, 3],
+  [1, 2],
+  [1, 3],
+  [2, 3],
+]
 
 export class ClassicalSolution {
   readonly space: GradedSpace
@@ -51,14 +58,20 @@ export class ClassicalSolution {
   private readonly kSquared: number[]
 
   /** With `givenField`, the blocks are built on that φ instead of the solution (for tests of the EOM). */
-  constructor(readonly F: PrimeField, readonly config: Config, givenField?: GMat) {
+  constructor(
+    readonly F: PrimeField,
+    readonly config: Config,
+    givenField?: GMat,
+  ) {
     const n = config.legs.length
     this.space = new GradedSpace(F, n, config.N)
     this.i = F.sqrtMinusOne()
     const sp = this.space
     const moms = Array.from({ length: sp.size }, (_, S) => {
       const k = [0, 0, 0, 0]
-      config.legs.forEach((leg, j) => { if (S & (1 << j)) for (let m = 0; m < 4; m++) k[m] = F.add(k[m]!, leg.k[m]!) })
+      config.legs.forEach((leg, j) => {
+        if (S & (1 << j)) for (let m = 0; m < 4; m++) k[m] = F.add(k[m]!, leg.k[m]!)
+      })
       return k
     })
     this.kSquared = moms.map((k) => dot(F, k, k))
@@ -69,11 +82,20 @@ export class ClassicalSolution {
     this.r = [0, 1, 2, 3].map(() => sp.zero())
     config.legs.forEach((leg, j) => {
       const o = (1 << j) * sp.nn
-      if (leg.chi) { this.chi.set(leg.chi, o); this.chiBar.set(leg.chiBar!, o) }
+      if (leg.chi) {
+        this.chi.set(leg.chi, o)
+        this.chiBar.set(leg.chiBar!, o)
+      }
       if (leg.tl) {
         for (let m = 0; m < 4; m++) {
-          this.l[m]!.set(leg.tl!.map((x) => F.mul(x, leg.el![m]!)), o)
-          this.r[m]!.set(leg.tr!.map((x) => F.mul(x, leg.er![m]!)), o)
+          this.l[m]!.set(
+            leg.tl!.map((x) => F.mul(x, leg.el![m]!)),
+            o,
+          )
+          this.r[m]!.set(
+            leg.tr!.map((x) => F.mul(x, leg.er![m]!)),
+            o,
+          )
         }
       }
     })
@@ -139,7 +161,10 @@ export class ClassicalSolution {
       for (const S of sp.masksBySize[level]!) {
         const o = S * sp.nn
         const leg = level === 1 ? config.legs[Math.log2(S)]! : undefined
-        if (leg?.kind === 'pion') { this.phi.set(leg.T!, o); continue }
+        if (leg?.kind === 'pion') {
+          this.phi.set(leg.T!, o)
+          continue
+        }
         const missing = sp.size - 1 - S
         if (level === n - 1 && config.legs[Math.log2(missing)]!.kind === 'pion') continue
         const k2 = this.kSquared[S]!

@@ -55,7 +55,7 @@ const MARGIN = 3
  * Then vanishing candidates are dropped and the kept ones picked greedily in priority order.
  * @example selectBlock(candidates, 4, [{ key: '{u,χ−,f−}^4', count: 3 }], opts).kept.length // 3 for N = 3 without sources
  */
-export function selectBlock(cands: readonly Candidate[], m: number, classes: readonly { key: string, count: number }[], o: BlockOptions): BlockResult {
+export function selectBlock(cands: readonly Candidate[], m: number, classes: readonly { key: string; count: number }[], o: BlockOptions): BlockResult {
   const configs: Config[] = []
   const used: LegKind[][] = []
   const rows: number[][] = []
@@ -101,10 +101,13 @@ export function selectBlock(cands: readonly Candidate[], m: number, classes: rea
  * operator reproduces the column.
  */
 export function simplify(F: PrimeField, c: Candidate, column: number[], evaluators: FreeEvaluator[]): Candidate {
-  const groups = new Map<string, { coef: number, mono: Monomial }[]>()
-  for (const t of c.op.terms) { const k = exactCode(t.mono); groups.set(k, [...(groups.get(k) ?? []), t]) }
+  const groups = new Map<string, { coef: number; mono: Monomial }[]>()
+  for (const t of c.op.terms) {
+    const k = exactCode(t.mono)
+    groups.set(k, [...(groups.get(k) ?? []), t])
+  }
   if (groups.size === c.op.terms.length || evaluators.length === 0) return normalized(c)
-  const terms: { coef: number, mono: Monomial }[] = []
+  const terms: { coef: number; mono: Monomial }[] = []
   for (const group of groups.values()) {
     const first = group[0]!.mono
     const base = evaluators.map((ev) => ev.monomial(first))

@@ -32,7 +32,8 @@ function parsedAt(texts: readonly string[], order: number): Operator[] {
   return texts.map((text) => {
     const op = parseGoldstoneOperator(text)
     const wrong = op.terms.map((t) => monomialOrder(t.mono)).find((k) => k !== order)
-    if (wrong !== undefined) throw new EngineInputError('goldstoneTypedFingerprints', `"${text}" has a term of chiral order p^${wrong}, but this class is p^${order}; a derivative and u count p¹, χ± and f± count p²`)
+    if (wrong !== undefined)
+      throw new EngineInputError('goldstoneTypedFingerprints', `"${text}" has a term of chiral order p^${wrong}, but this class is p^${order}; a derivative and u count p¹, χ± and f± count p²`)
     return op
   })
 }
@@ -45,12 +46,25 @@ function parsedAt(texts: readonly string[], order: number): Operator[] {
  */
 export function goldstoneTypedFingerprints(o: GoldstoneTypedInput, texts: readonly string[]): Fingerprint[] {
   if (o.order > MAX_TYPED_ORDER) {
-    throw new EngineInputError('goldstoneTypedFingerprints', `typed operators are rewritten up to p^${MAX_TYPED_ORDER} in the Goldstone frame; for p^${o.order}, the set-aside operators carry their rewrites`)
+    throw new EngineInputError(
+      'goldstoneTypedFingerprints',
+      `typed operators are rewritten up to p^${MAX_TYPED_ORDER} in the Goldstone frame; for p^${o.order}, the set-aside operators carry their rewrites`,
+    )
   }
   const ops = parsedAt(texts, o.order)
   const sel = selectOrder(o.order, o.evaluatedAtN, { N: o.N, sources: o.sources, maxOrder: o.order, signal: o.signal }, () => {})
   const pieces = ops.flatMap((op, i) => op.terms.map((t) => ({ i, op: { iPower: op.iPower, terms: [t] } as Operator })))
-  const prints = exactFingerprints(pieces.map((p) => p.op), sel.fields, sel.configs, sel.patterns, o.evaluatedAtN, o.order, o.signal, () => {}, pieces)
+  const prints = exactFingerprints(
+    pieces.map((p) => p.op),
+    sel.fields,
+    sel.configs,
+    sel.patterns,
+    o.evaluatedAtN,
+    o.order,
+    o.signal,
+    () => {},
+    pieces,
+  )
   return ops.map((_, i) => {
     const mine = pieces.filter((p) => p.i === i).map((p) => prints.get(p)!)
     return {

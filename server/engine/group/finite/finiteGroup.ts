@@ -50,7 +50,9 @@ export function adamsClass(t: FiniteGroupTable, f: ClassFunction, r: number): Cl
  */
 export function classAverage(t: FiniteGroupTable, f: ClassFunction): number {
   let s: Eis = E0
-  t.classes.forEach((cl, c) => { s = eAdd(s, eScale(cl.size, f[c]!)) })
+  t.classes.forEach((cl, c) => {
+    s = eAdd(s, eScale(cl.size, f[c]!))
+  })
   if (s[1] !== 0 || s[0] % t.order !== 0) throw new EngineConsistencyError('classAverage', `${t.label}: class sum ${eText(s)} is not a multiple of the order ${t.order}`)
   return s[0] / t.order
 }

@@ -60,7 +60,8 @@ export function liePlethysm(rs: RootSystem, a: readonly number[], partition: rea
   checkLabels('liePlethysm', rs, a)
   const ok = partition.length > 0 && partition.every((p, i) => Number.isSafeInteger(p) && p >= 1 && (i === 0 || p <= partition[i - 1]!))
   const k = partition.reduce((s, p) => s + p, 0)
-  if (!ok || k > MAX_PLETHYSM_DEGREE) throw new EngineInputError('liePlethysm', `partition must be non-increasing positive integers of size at most ${MAX_PLETHYSM_DEGREE}, got ${JSON.stringify(partition)}`)
+  if (!ok || k > MAX_PLETHYSM_DEGREE)
+    throw new EngineInputError('liePlethysm', `partition must be non-increasing positive integers of size at most ${MAX_PLETHYSM_DEGREE}, got ${JSON.stringify(partition)}`)
   return schurFunctorIrrepsIn(lieChamber(rs), lieWeights(rs, a), partition, k, opts)
 }
 
@@ -121,7 +122,10 @@ export function lieIndex(rs: RootSystem, labels: readonly number[]): Rational {
   checkLabels('lieIndex', rs, labels)
   const long = Math.max(...rs.half)
   const twoRho = new Array<number>(rs.rank).fill(2)
-  const casimirTimes = rs.inner(labels, labels.map((x, i) => x + twoRho[i]!)) // (λ, λ+2ρ)·scale
+  const casimirTimes = rs.inner(
+    labels,
+    labels.map((x, i) => x + twoRho[i]!),
+  ) // (λ, λ+2ρ)·scale
   const adj = rs.positive[rs.positive.length - 1]!.labels
   const dimG = lieDimension(rs, adj)
   // C2 = (λ, λ+2ρ)/2 with (·,·) divided by `long` (long roots of length² 2) and by the scale.

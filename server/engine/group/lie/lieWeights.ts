@@ -85,7 +85,11 @@ function dominantList(rs: RootSystem, labels: readonly number[]): number[][] {
   }
   // depth = height of λ − μ in simple roots; (λ − μ, ρ^∨-like) order: use the scaled inner product with ρ.
   const rho = new Array<number>(rs.rank).fill(1)
-  const level = (v: number[]): number => rs.inner(labels.map((x, i) => x - v[i]!), rho)
+  const level = (v: number[]): number =>
+    rs.inner(
+      labels.map((x, i) => x - v[i]!),
+      rho,
+    )
   return out.sort((a, b) => level(a) - level(b))
 }
 

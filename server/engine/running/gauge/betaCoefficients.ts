@@ -20,7 +20,10 @@ import type { GaugeContent } from './gaugeContent'
 import { contentFactors, LOOP_WEIGHTS, type ContentFactors, type FieldFactors } from './fieldFactors'
 
 /** A simple group ([name]) or a pair of U(1)s ([k, l], k = l on the diagonal). */
-export interface CouplingSlot { groups: [string] | [string, string], abelian: boolean }
+export interface CouplingSlot {
+  groups: [string] | [string, string]
+  abelian: boolean
+}
 
 export interface GaugeBetaCoefficients {
   /** Diagonal slots first, in theory order (simple groups and U(1)s), then the pairs k < l. */
@@ -34,18 +37,26 @@ export interface GaugeBetaCoefficients {
 /** Most U(1) gauge groups whose mixing we follow (the slot count grows as n²). */
 export const MAX_ABELIAN_GROUPS = 8
 
-interface SlotPlan { slot: CouplingSlot, simple?: number, pair?: [number, number] }
+interface SlotPlan {
+  slot: CouplingSlot
+  simple?: number
+  pair?: [number, number]
+}
 
 function plan(content: GaugeContent, f: ContentFactors): SlotPlan[] {
   const simpleAt = new Map(f.simple.map((g, i) => [g.name, i]))
   const abelianAt = new Map(f.abelian.map((g, i) => [g.name, i]))
-  const diagonal: SlotPlan[] = content.groups.map((g) => (g.abelian
-    ? { slot: { groups: [g.name, g.name], abelian: true }, pair: [abelianAt.get(g.name)!, abelianAt.get(g.name)!] }
-    : { slot: { groups: [g.name], abelian: false }, simple: simpleAt.get(g.name)! }))
+  const diagonal: SlotPlan[] = content.groups.map((g) =>
+    g.abelian
+      ? { slot: { groups: [g.name, g.name], abelian: true }, pair: [abelianAt.get(g.name)!, abelianAt.get(g.name)!] }
+      : { slot: { groups: [g.name], abelian: false }, simple: simpleAt.get(g.name)! },
+  )
   const off: SlotPlan[] = []
-  f.abelian.forEach((k, i) => f.abelian.forEach((l, j) => {
-    if (i < j) off.push({ slot: { groups: [k.name, l.name], abelian: true }, pair: [i, j] })
-  }))
+  f.abelian.forEach((k, i) =>
+    f.abelian.forEach((l, j) => {
+      if (i < j) off.push({ slot: { groups: [k.name, l.name], abelian: true }, pair: [i, j] })
+    }),
+  )
   return [...diagonal, ...off]
 }
 
@@ -77,7 +88,13 @@ function twoLoop(t: SlotPlan, c: SlotPlan, fields: readonly FieldFactors[], f: C
   let v = fieldSum(fields, 'w2', (x) => mul(slotWeight(t, x), slotCasimir(c, x)))
   if (t.simple !== undefined && t.simple === c.simple) {
     const ca = f.simple[t.simple]!.factors.adjointCasimir
-    v = add(v, mul(ca, fieldSum(fields, 'w3', (x) => slotWeight(t, x))))
+    v = add(
+      v,
+      mul(
+        ca,
+        fieldSum(fields, 'w3', (x) => slotWeight(t, x)),
+      ),
+    )
     v = add(v, mul(rat(-34, 3), mul(ca, ca)))
   }
   return v

@@ -26,14 +26,14 @@ export interface FieldFactors {
  * fermions and real scalars; a complex scalar counts twice): one loop w1 S; two loops
  * S (w2 C + w3 C2(G)).
  */
-export const LOOP_WEIGHTS: Record<MatterKind, { w1: Rational, w2: Rational, w3: Rational }> = {
-  'weyl': { w1: rat(2, 3), w2: rat(2), w3: rat(10, 3) },
+export const LOOP_WEIGHTS: Record<MatterKind, { w1: Rational; w2: Rational; w3: Rational }> = {
+  weyl: { w1: rat(2, 3), w2: rat(2), w3: rat(10, 3) },
   'complex-scalar': { w1: rat(1, 3), w2: rat(4), w3: rat(2, 3) },
   'real-scalar': { w1: rat(1, 6), w2: rat(2), w3: rat(1, 3) },
 }
 
 export interface ContentFactors {
-  simple: { name: string, factors: SimpleGroupFactors }[]
+  simple: { name: string; factors: SimpleGroupFactors }[]
   abelian: { name: string }[]
   fields: FieldFactors[]
 }

@@ -39,13 +39,18 @@ export interface GaugeContent {
   groups: GaugeGroupInfo[]
   multiplets: GaugeMultiplet[]
   /** Theories of the tower, top first, with the scale each was obtained at (null for the top). */
-  chain: { name: string, thresholdGeV: number | null }[]
+  chain: { name: string; thresholdGeV: number | null }[]
 }
 
 /** One theory of a tower and the scale (GeV) at which it was obtained from the one above it. */
-export interface TowerStep { theory: Theory, thresholdGeV: number | null }
+export interface TowerStep {
+  theory: Theory
+  thresholdGeV: number | null
+}
 
-const fail = (message: string): never => { throw new EngineInputError('gaugeContent', message) }
+const fail = (message: string): never => {
+  throw new EngineInputError('gaugeContent', message)
+}
 
 function matterKind(f: TheoryField): MatterKind | null {
   if (f.lorentz === 'field-strength') return null
@@ -77,7 +82,10 @@ function checkStep(above: TowerStep, below: TowerStep): void {
   }
   const aboveNames = new Set(above.theory.fields.map((f) => f.name))
   for (const f of below.theory.fields) {
-    if (!aboveNames.has(f.name)) fail(`The field ${f.name} appears in “${below.theory.name}” but not in the theory above it, “${above.theory.name}”: a tower only removes fields going down. Add ${f.name} above or remove it below.`)
+    if (!aboveNames.has(f.name))
+      fail(
+        `The field ${f.name} appears in “${below.theory.name}” but not in the theory above it, “${above.theory.name}”: a tower only removes fields going down. Add ${f.name} above or remove it below.`,
+      )
   }
   if (above.thresholdGeV !== null && t! >= above.thresholdGeV) {
     fail(`“${below.theory.name}” is obtained at ${t} GeV, not below the threshold of “${above.theory.name}” (${above.thresholdGeV} GeV): the thresholds of a tower must fall going down.`)

@@ -88,7 +88,9 @@ export function slotAlphas(layout: SlotLayout, y: Float64Array): Float64Array | 
   const n = layout.abelian.length
   const a = n > 0 ? inverseSpd(abelianBlock(layout, y), n) : new Float64Array(0)
   if (!a) return null
-  layout.abelianAt.forEach((k, i) => { if (k < 0) alpha[i] = 1 / y[i]! })
+  layout.abelianAt.forEach((k, i) => {
+    if (k < 0) alpha[i] = 1 / y[i]!
+  })
   for (let k = 0; k < n; k++) for (let l = k; l < n; l++) alpha[layout.pairSlot[k]![l]!] = a[k * n + l]!
   return alpha
 }

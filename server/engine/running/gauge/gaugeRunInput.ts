@@ -11,7 +11,10 @@ import type { GaugeCouplingValues } from '../../../../shared/types/gaugeRunning'
 
 export type { GaugeCouplingValues }
 
-export interface KineticMixingInput { groups: [string, string], epsilon: number }
+export interface KineticMixingInput {
+  groups: [string, string]
+  epsilon: number
+}
 
 export interface GaugeRunInput {
   content: GaugeContent
@@ -29,7 +32,9 @@ export interface GaugeRunInput {
   onProgress?: (fraction: number, label: string) => void
 }
 
-const fail = (message: string): never => { throw new EngineInputError('runGaugeCouplings', message) }
+const fail = (message: string): never => {
+  throw new EngineInputError('runGaugeCouplings', message)
+}
 
 /** Lowest and highest scale (GeV) the running accepts. */
 export const MU_RANGE_GEV: readonly [number, number] = [1e-9, 1e30]

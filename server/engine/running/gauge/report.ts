@@ -54,8 +54,16 @@ function tableRows(content: GaugeContent, legs: GaugeRunPoint[], chosen: GaugeRu
     const row = rows.get(p.mu)
     rows.set(p.mu, row ? { ...row, label: row.label.includes(label) ? row.label : `${row.label}, ${label}` } : { ...p, label })
   }
-  mark(legs.find((p) => p.mu === req.muFromGeV), 'input scale')
-  for (const m of content.multiplets) if (m.massGeV > 0) mark(legs.find((p) => p.mu === m.massGeV), `threshold of ${m.name}`)
+  mark(
+    legs.find((p) => p.mu === req.muFromGeV),
+    'input scale',
+  )
+  for (const m of content.multiplets)
+    if (m.massGeV > 0)
+      mark(
+        legs.find((p) => p.mu === m.massGeV),
+        `threshold of ${m.name}`,
+      )
   if (chosen) mark(chosen, 'chosen scale')
   return [...rows.values()].sort((a, b) => a.mu - b.mu)
 }
@@ -76,7 +84,8 @@ function distinctStops(stops: (GaugeRunStop | undefined)[]): GaugeRunStop[] {
  */
 export function gaugeRunningReport(content: GaugeContent, req: GaugeReportRequest, signal?: GaugeRunInput['signal']): GaugeReport {
   if (content.groups.length === 0) throw new EngineInputError('gaugeRunningReport', 'This theory has no gauge group whose coupling runs (SU(N) or U(1) with gauge true).')
-  if (!(req.plotFromGeV < req.plotToGeV)) throw new EngineInputError('gaugeRunningReport', `The plotted range must go from a lower to a higher scale, not from ${req.plotFromGeV} to ${req.plotToGeV} GeV.`)
+  if (!(req.plotFromGeV < req.plotToGeV))
+    throw new EngineInputError('gaugeRunningReport', `The plotted range must go from a lower to a higher scale, not from ${req.plotFromGeV} to ${req.plotToGeV} GeV.`)
   const marks = req.muToGeV === undefined ? [] : [req.muToGeV]
   const base = { content, loops: req.loops, muFromGeV: req.muFromGeV, alpha: req.alpha, mixing: req.mixing, marks, signal }
   const up = runGaugeCouplings({ ...base, muToGeV: Math.max(req.plotToGeV, req.muFromGeV) })

@@ -32,7 +32,10 @@ export function formatGeV(mu: number): string {
   if (mu >= 1e-3 && mu < 1e5) return `${Number(mu.toPrecision(3))} GeV`
   const e = Math.floor(Math.log10(mu))
   const m = Number((mu / 10 ** e).toPrecision(3))
-  return `${m === 1 ? '' : `${m}·`}10${String(e).split('').map((c) => SUP[c]).join('')} GeV`
+  return `${m === 1 ? '' : `${m}·`}10${String(e)
+    .split('')
+    .map((c) => SUP[c])
+    .join('')} GeV`
 }
 
 function stopMessage(layout: SlotLayout, index: number, mu: number, up: boolean, mixing: boolean): GaugeRunStop {
@@ -65,7 +68,11 @@ export function runGaugeCouplings(input: GaugeRunInput): GaugeRunResult {
   let y = startState(input, layout)
   const up = input.muToGeV >= input.muFromGeV
   const pairs: [string, string][] = []
-  layout.abelian.forEach((k, i) => layout.abelian.forEach((l, j) => { if (i < j) pairs.push([k, l]) }))
+  layout.abelian.forEach((k, i) =>
+    layout.abelian.forEach((l, j) => {
+      if (i < j) pairs.push([k, l])
+    }),
+  )
   const mixing = segments.some((s) => s.coefficients.mixes) || (input.mixing ?? []).some((m) => m.epsilon !== 0)
   const point = (mu: number, state: Float64Array, segment: number): GaugeRunPoint => ({ mu, segment, ...readCouplings(layout, state) })
   const points: GaugeRunPoint[] = [point(input.muFromGeV, y, segmentIndexAt(segments, input.muFromGeV, up))]
@@ -90,7 +97,9 @@ export function runGaugeCouplings(input: GaugeRunInput): GaugeRunResult {
 }
 
 /** Couplings at one scale, also by group name (α = g²/4π). */
-export interface GaugeCouplingsAt extends GaugeCouplingValues { alpha: Record<string, number> }
+export interface GaugeCouplingsAt extends GaugeCouplingValues {
+  alpha: Record<string, number>
+}
 
 /**
  * The couplings at one scale, for callers that need a value (matching, tables): throws the
@@ -99,7 +108,8 @@ export interface GaugeCouplingsAt extends GaugeCouplingValues { alpha: Record<st
  */
 export function gaugeCouplingsAt(input: Omit<GaugeRunInput, 'onProgress'>): GaugeCouplingsAt {
   const r = runGaugeCouplings(input)
-  if (r.stop) throw new EngineInputError('gaugeCouplingsAt', `${r.stop.message.replace(/, so the running stops\.$/, '')}; ${formatGeV(input.muToGeV)} cannot be reached from ${formatGeV(input.muFromGeV)}.`)
+  if (r.stop)
+    throw new EngineInputError('gaugeCouplingsAt', `${r.stop.message.replace(/, so the running stops\.$/, '')}; ${formatGeV(input.muToGeV)} cannot be reached from ${formatGeV(input.muFromGeV)}.`)
   const alpha = Object.fromEntries(r.groups.map((g, i) => [g, 1 / r.end.alphaInverse[i]!]))
   return { alphaInverse: r.end.alphaInverse, epsilon: r.end.epsilon, alpha }
 }

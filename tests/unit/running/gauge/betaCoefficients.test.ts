@@ -8,12 +8,14 @@ const text = (c: GaugeBetaCoefficients) => ({ b: c.oneLoop.map(toString), B: c.t
 const q = parseRational
 
 /** U(1) coefficients in another normalisation g' = k g: b → b/k², B_11 → B_11/k⁴, B_1j, B_j1 → /k². */
-function renormaliseU1(c: GaugeBetaCoefficients, i: number, k2: Rational): { b: string[], B: string[][] } {
+function renormaliseU1(c: GaugeBetaCoefficients, i: number, k2: Rational): { b: string[]; B: string[][] } {
   const b = c.oneLoop.map((v, j) => (j === i ? div(v, k2) : v))
-  const B = c.twoLoop.map((row, r) => row.map((v, s) => {
-    const powers = (r === i ? 1 : 0) + (s === i ? 1 : 0)
-    return powers === 0 ? v : div(v, powers === 2 ? mul(k2, k2) : k2)
-  }))
+  const B = c.twoLoop.map((row, r) =>
+    row.map((v, s) => {
+      const powers = (r === i ? 1 : 0) + (s === i ? 1 : 0)
+      return powers === 0 ? v : div(v, powers === 2 ? mul(k2, k2) : k2)
+    }),
+  )
   return { b: b.map(toString), B: B.map((r) => r.map(toString)) }
 }
 
@@ -38,7 +40,11 @@ describe('Standard Model gauge β coefficients', () => {
   })
 
   it('hypercharge normalisation of the same matrix: B_YY = 199/18, B_Y2 = 9/2, B_Y3 = 44/3, B_2Y = 3/2, B_3Y = 11/6 (derived from the GUT values above)', () => {
-    expect(text(sm).B).toEqual([['-26', '9/2', '11/6'], ['12', '35/6', '3/2'], ['44/3', '9/2', '199/18']])
+    expect(text(sm).B).toEqual([
+      ['-26', '9/2', '11/6'],
+      ['12', '35/6', '3/2'],
+      ['44/3', '9/2', '199/18'],
+    ])
   })
 })
 
@@ -86,7 +92,7 @@ describe('theories worked by hand', () => {
 
 describe('several U(1)s: kinetic mixing', () => {
   it('B−L beside hypercharge with three right-handed neutrinos and a scalar of charge 2: b_BL = 12, b_Y,BL = 16/3 (by hand; the usual B−L values, from memory)', () => {
-    const bl = (f: string) => ({ Q: '1/3', u: '1/3', d: '1/3', L: '-1', e: '-1', nu: '-1' } as Record<string, string>)[f]
+    const bl = (f: string) => (({ Q: '1/3', u: '1/3', d: '1/3', L: '-1', e: '-1', nu: '-1' }) as Record<string, string>)[f]
     const fields = SM.fields.map((f) => (bl(f.name) ? { ...f, charges: { ...f.charges, BL: bl(f.name)! } } : f))
     const t = theory('SM with B−L', [...SM.groups, u1('BL')], [...fields, weylR('nu', { charges: { BL: '-1' }, flavors: 3 }), complexScalar('Phi', { charges: { BL: '2' } }), strength('Z', 'BL')])
     const c = gaugeBetaCoefficients(gaugeContentOf(t))
@@ -119,7 +125,11 @@ describe('several U(1)s: kinetic mixing', () => {
 
 describe('what does not run', () => {
   it('field strengths, global groups and Z_n groups add nothing; a pure SU(N) gauge theory has b = −11N/3, B = −34N²/3 (Gross & Wilczek 1973; Caswell 1974)', () => {
-    const t = theory('pure SU(4)', [su('G4', 4), { name: 'F', type: 'SU', n: 2, gauge: false }, { name: 'Z3', type: 'Z', n: 3, gauge: true }], [strength('Gmu', 'G4'), weyl('spectator', { reps: { F: [1] }, charges: { Z3: 1 } })])
+    const t = theory(
+      'pure SU(4)',
+      [su('G4', 4), { name: 'F', type: 'SU', n: 2, gauge: false }, { name: 'Z3', type: 'Z', n: 3, gauge: true }],
+      [strength('Gmu', 'G4'), weyl('spectator', { reps: { F: [1] }, charges: { Z3: 1 } })],
+    )
     const c = gaugeBetaCoefficients(gaugeContentOf(t))
     expect(c.slots.map((s) => s.groups[0])).toEqual(['G4'])
     expect(text(c)).toEqual({ b: ['-44/3'], B: [['-544/3']] })

@@ -15,7 +15,7 @@ function labels(n: number, max: number): number[][] {
  * w·H = (e1 − e2)/2 in ε-coordinates, e1 − e2 = a_1 (the first Dynkin label of the weight);
  * then C2(R) = T(R) dim G / dim R. The weights are those checked against LiE in tests/unit/group/lie.test.ts.
  */
-function oracle(n: number, a: number[]): { index: Rational, casimir: Rational, dim: number } {
+function oracle(n: number, a: number[]): { index: Rational; casimir: Rational; dim: number } {
   let index: Rational = ZERO
   let dim = 0
   for (const [key, m] of suWeights(n, a)) {
@@ -29,7 +29,15 @@ function oracle(n: number, a: number[]): { index: Rational, casimir: Rational, d
 describe('SU(N) invariants through the group plug-in (simpleGroupFactors)', () => {
   it('T(R) and C2(R) equal the weight-sum oracle for every irrep of SU(2)..SU(5) with labels ≤ 2 (and SU(6..8) with labels ≤ 1) (Slansky, Phys. Rep. 79 (1981) 1, eq. (4.14))', () => {
     let checked = 0
-    for (const [n, max] of [[2, 6], [3, 2], [4, 2], [5, 2], [6, 1], [7, 1], [8, 1]] as const) {
+    for (const [n, max] of [
+      [2, 6],
+      [3, 2],
+      [4, 2],
+      [5, 2],
+      [6, 1],
+      [7, 1],
+      [8, 1],
+    ] as const) {
       const g = simpleGroupFactors({ name: 'G', type: 'SU', n, gauge: true })
       for (const a of labels(n, max)) {
         if (n >= 7 && a.filter((x) => x > 0).length > 2) continue // keep the weight enumeration small

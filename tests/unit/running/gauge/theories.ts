@@ -27,9 +27,5 @@ export function qcd(quarks: readonly string[], name = `QCD with ${quarks.length}
 
 /** A dark U(1) X with one complex scalar of charge qs and one Dirac fermion of charge qf. */
 export function darkU1(qs: string, qf: string): Theory {
-  return theory('Dark U(1)', [u1('X')], [
-    complexScalar('S', { charges: { X: qs } }),
-    weyl('chi', { charges: { X: qf } }), weylR('chiR', { charges: { X: qf } }),
-    strength('Ad', 'X'),
-  ])
+  return theory('Dark U(1)', [u1('X')], [complexScalar('S', { charges: { X: qs } }), weyl('chi', { charges: { X: qf } }), weylR('chiR', { charges: { X: qf } }), strength('Ad', 'X')])
 }

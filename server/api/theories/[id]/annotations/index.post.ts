@@ -15,8 +15,7 @@ export default defineApiHandler(async (event) => {
   const { user } = await requireGroupRole(event, theory.group_id, 'commenter')
   const body = await readJson(event, AnnotationCreateSchema)
   if (body.operatorId) {
-    const op = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id')
-      .where({ 'o.id': body.operatorId, 'b.theory_id': theory.id }).whereNull('b.deleted_at').first('o.id')
+    const op = await useDb()('operators as o').join('bases as b', 'b.id', 'o.basis_id').where({ 'o.id': body.operatorId, 'b.theory_id': theory.id }).whereNull('b.deleted_at').first('o.id')
     if (!op) fail(404, `This theory has no operator ${body.operatorId}; the note was not saved`)
   }
   return once(event, user.id, body, async () => {

@@ -21,7 +21,9 @@ export default defineApiHandler(async (event) => {
   return once(event, user.id, body, async () => {
     const { run, priority } = await useDb().transaction(async (trx) => {
       const priority = await admitRun(trx, theory.group_id, user.id)
-      const [run] = await trx('runs').insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id }).returning('*')
+      const [run] = await trx('runs')
+        .insert({ theory_id: theory.id, kind: body.kind, params: JSON.stringify(params), created_by: user.id })
+        .returning('*')
       return { run, priority }
     })
     const boss = await useQueue()

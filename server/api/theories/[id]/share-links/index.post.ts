@@ -20,7 +20,9 @@ export default defineApiHandler(async (event) => {
   const token = key ? derivedToken(`share-link:${user.id}:${key}`) : newToken().token
   const stored = await once(event, user.id, body, async () => {
     const expires = body.expiresInDays ? new Date(Date.now() + body.expiresInDays * 86_400_000) : null
-    const [row] = await useDb()('share_links').insert({ theory_id: theory.id, token_hash: hashToken(token), created_by: user.id, expires_at: expires }).returning('*')
+    const [row] = await useDb()('share_links')
+      .insert({ theory_id: theory.id, token_hash: hashToken(token), created_by: user.id, expires_at: expires })
+      .returning('*')
     created(event)
     return { link: publicShareLink(row) }
   })
