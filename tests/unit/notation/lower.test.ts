@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { PrimeField } from '../../../server/engine/finite/primeField'
 import { classBasis, rewriteOperator } from '../../../server/engine/basis/index'
 import { notationTarget } from '../../../server/engine/notation/index'
+import { notationColumnTerms } from '../../../server/engine/notation/written'
 import { typedFingerprints } from '../../../server/engine/board/typedOperator'
 import { diracWave, gammaEntry, vectorMetric } from '../../../server/engine/notation/spinors'
 import smeftJson from '../basis/fixtures/smeft.json'
@@ -86,7 +87,7 @@ describe('printed operators land on the kept operators of their class', () => {
   })
   it('a printed operator can be kept first: the class keeps it by its printed text', () => {
     const keep = '(H^\\dagger H)\\Box(H^\\dagger H)'
-    const b = classBasis(smeft, 'D^2 H^2 H*^2', { priorities: { keep: { 'D^2 H^2 H*^2': [keep] } } })
+    const b = classBasis(smeft, 'D^2 H^2 H*^2', { priorities: { keep: { 'D^2 H^2 H*^2': [keep] } }, printed: notationColumnTerms })
     expect(b.rank).toBe(2)
     expect(b.kept[0]!.text).toBe(keep)
   })
