@@ -146,8 +146,8 @@ function checkRange(a: Float64Array): void {
   }
 }
 
-/** Terms of 1/P = Π (1 − D x^{±1} y^{±1}): [degree, m_l, m_r, sign]. */
-const MOMENTUM_TERMS: ReadonlyArray<readonly [number, number, number, number]> = (() => {
+/** Terms of 1/P = Π (1 − D x^{±1} y^{±1}): [degree, m_l, m_r, sign] (also used by goldstone/lorentzIntegral.ts). */
+export const MOMENTUM_TERMS: ReadonlyArray<readonly [number, number, number, number]> = (() => {
   const vecs = [
     [1, 1],
     [1, -1],

@@ -15,6 +15,8 @@
  */
 import { EngineConsistencyError, EngineInputError } from '../errors'
 import { TOWER_ORDER, towerCharacter, twistedTowerCharacter, type TowerKind } from './towers'
+// 1/P, the momentum factor of the Lorentz integral: the same expansion as the relativistic counting's.
+import { MOMENTUM_TERMS } from '../counting/lorentz'
 
 /** One factor of the integrand: a tower raised as a cycle of length `cycle`. */
 export interface TowerCycle {
@@ -54,30 +56,6 @@ function checkRange(fn: string, data: Float64Array): void {
     if (v > LIMIT || v < -LIMIT) throw new EngineConsistencyError(fn, `multiplicity ${v} beyond 2^52: exactness lost`)
   }
 }
-
-/** 1/P = Π (1 − q x^{±1} y^{±1}): terms [degree, ml, mr, sign]. */
-const MOMENTUM_TERMS: readonly (readonly [number, number, number, number])[] = (() => {
-  const vecs = [
-    [1, 1],
-    [1, -1],
-    [-1, 1],
-    [-1, -1],
-  ] as const
-  const out: [number, number, number, number][] = []
-  for (let mask = 0; mask < 16; mask++) {
-    let d = 0,
-      ml = 0,
-      mr = 0
-    for (let i = 0; i < 4; i++)
-      if (mask & (1 << i)) {
-        d++
-        ml += vecs[i]![0]
-        mr += vecs[i]![1]
-      }
-    out.push([d, ml, mr, d % 2 === 0 ? 1 : -1])
-  }
-  return out
-})()
 
 /**
  * Untwisted SO(4) integral with 1/P, coefficients of q^0..q^K.
