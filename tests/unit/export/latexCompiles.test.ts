@@ -7,6 +7,7 @@ import { findPreset } from '../../../shared/presets/index'
 import { compileLatex, HOSTILE_TEXTS } from '../../support/pdflatex'
 import { commentText } from '../../../server/engine/export/commentText'
 import { parseCsv } from '../../support/csv'
+import { storedRows } from '../../support/basisExport'
 
 // The LaTeX export of real bases, with hostile user text in every place a user writes one
 // (theory name, tags, the basis note, notes' authors), compiles with Debian's pdflatex in both
@@ -14,23 +15,7 @@ import { parseCsv } from '../../support/csv'
 
 /** The export of an engine-built basis, as the app assembles it, with hostile text everywhere. */
 function hostileExport(report: BasisReport) {
-  let id = 0
-  const classes = report.byDimension.flatMap((d) => d.classes.map((c) => ({ order: d.order, dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk })))
-  const operators = report.byDimension.flatMap((d) =>
-    d.classes.flatMap((c) =>
-      c.operators.map((op) => ({
-        id: ++id,
-        order: d.order,
-        classKey: c.key,
-        column: 'kept' as const,
-        text: op.text,
-        latex: op.latex,
-        latexDirac: op.latex4,
-        hermitian: op.hermitian,
-        realParameters: op.realParameters,
-      })),
-    ),
-  )
+  const { classes, operators } = storedRows(report)
   return assembleExport({
     theory: { name: HOSTILE_TEXTS[0]!, definition: {} },
     countingRule: HOSTILE_TEXTS[2]!,

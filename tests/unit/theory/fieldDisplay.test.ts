@@ -7,6 +7,7 @@ import { buildBasis } from '../../../server/engine/basis/buildBasis'
 import { assembleExport } from '../../../server/engine/export/boardExport'
 import { toLatex } from '../../../server/engine/export/toLatex'
 import { compileLatex } from '../../support/pdflatex'
+import { storedRows } from '../../support/basisExport'
 
 // A field keeps its plain name (files, keys, typed input) and may carry a display form, set
 // in math mode as papers print it (issue 17, item 3). Notation is common practice.
@@ -86,28 +87,12 @@ describe('operators print fields as papers do', () => {
     }
     expect(theory.fields.map((f) => f.name)).toEqual(['chiL', 'NR', 'S']) // ℱ is not a letter a display form may hold
     const report = buildBasis(theory, { maxDim: 6, nf: 1 })
-    let id = 0
     const data = assembleExport({
       theory: { name: theory.name, definition: theory },
       countingRule: 'E/M',
       note: '',
       exportedAt: '2026-12-03T00:00:00.000Z',
-      classes: report.byDimension.flatMap((d) => d.classes.map((c) => ({ order: d.order, dimension: d.dimension, key: c.key, rank: c.rank, hilbert: c.hilbert, tallyOk: c.tallyOk }))),
-      operators: report.byDimension.flatMap((d) =>
-        d.classes.flatMap((c) =>
-          c.operators.map((op) => ({
-            id: ++id,
-            order: d.order,
-            classKey: c.key,
-            column: 'kept' as const,
-            text: op.text,
-            latex: op.latex,
-            latexDirac: op.latex4,
-            hermitian: op.hermitian,
-            realParameters: op.realParameters,
-          })),
-        ),
-      ),
+      ...storedRows(report),
       tags: [],
       notes: [],
     })
